@@ -1,0 +1,27 @@
+package calc
+
+import "math"
+
+// CustomLiquid builds a Fluid from properties the user supplies: density
+// rho (kg/m³), dynamic viscosity mu (Pa·s) and vapour pressure pv (Pa,
+// absolute). rho and mu must be positive and finite, pv finite and not
+// negative (0 for a liquid whose vapour pressure is negligible). Bad values
+// are a *FieldError naming "rho", "mu" or "pv". Temperature is left 0
+// (unknown).
+func CustomLiquid(rho, mu, pv float64) (Fluid, error) {
+	if !(rho > 0) || math.IsInf(rho, 0) {
+		return Fluid{}, fieldErrorf("rho", "density must be a positive finite number in kg/m³; got %g", rho)
+	}
+	if !(mu > 0) || math.IsInf(mu, 0) {
+		return Fluid{}, fieldErrorf("mu", "dynamic viscosity must be a positive finite number in Pa·s; got %g", mu)
+	}
+	if !(pv >= 0) || math.IsInf(pv, 0) {
+		return Fluid{}, fieldErrorf("pv", "vapour pressure must be zero or a positive finite number in Pa (absolute); got %g", pv)
+	}
+	return Fluid{
+		Name:           "custom liquid",
+		Density:        rho,
+		Viscosity:      mu,
+		VapourPressure: pv,
+	}, nil
+}

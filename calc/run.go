@@ -1,0 +1,254 @@
+package calc
+
+import (
+	"fmt"
+	"math"
+)
+
+// Usual mean-velocity range of liquid lines (common practice). Outside it
+// Run.Evaluate adds a warning.
+const (
+	RunVelocityLow  = 0.3 // m/s
+	RunVelocityHigh = 3.0 // m/s
+)
+
+// Kinematic viscosity range, m²/s, in which Run.Evaluate accepts the
+// Hazen–Williams method: water from about 0 °C to about 50 °C.
+const (
+	hazenNuMin = 0.5e-6
+	hazenNuMax = 1.8e-6
+	hazenDMin  = 0.05 // m; smaller pipes draw a warning
+)
+
+// FittingCount is a number of identical fittings in a run, by key of
+// FittingTable.
+type FittingCount struct {
+	Key   string
+	Count int
+}
+
+// Run is one straight pipe run of constant inside diameter with its
+// fittings. Lengths in metres. Method selects the turbulent friction
+// factor; laminar flow always uses 64/Re. HazenC is used only by
+// MethodHazenWilliams, Roughness by the other methods.
+type Run struct {
+	Length    float64 // m, ≥ 0
+	Diameter  float64 // inside diameter, m, > 0
+	Roughness float64 // absolute roughness ε, m, ≥ 0 (ε/D ≤ 0.05)
+	Fittings  []FittingCount
+	ExtraK    float64 // further loss coefficients, added to ΣK
+	Method    FrictionMethod
+	HazenC    float64 // Hazen–Williams C, for MethodHazenWilliams
+}
+
+// RunResult is a Run evaluated at one flow. Losses are heads in metres of
+// the flowing liquid.
+type RunResult struct {
+	Velocity float64 // mean velocity, m/s
+	Reynolds float64
+	Regime   Regime
+	Alpha    float64 // kinetic-energy factor of the design bound: 2 laminar, 1 turbulent
+	// Friction is the Darcy factor used for MajorLoss. In transitional flow
+	// it is the bound giving the larger loss (normally the turbulent one).
+	// For Hazen–Williams it is the equivalent Darcy factor. 0 at zero flow.
+	Friction                  float64
+	FrictionLow, FrictionHigh float64 // bounds in transitional flow; equal to Friction otherwise
+	MajorLoss                 float64 // pipe friction, f·(L/D)·V²/(2g)
+	MinorLoss                 float64 // fittings, ΣK·V²/(2g)
+	TotalLoss                 float64 // MajorLoss + MinorLoss (the larger bound in transitional flow)
+	TotalLossLow              float64 // transitional flow: total with the smaller friction bound
+	TotalLossHigh             float64 // transitional flow: total with the larger bound (= TotalLoss)
+	SumK                      float64 // ΣK of the fittings plus ExtraK
+	Warnings                  []string
+}
+
+// frCheckPositive reports whether v is finite and > 0.
+func frCheckPositive(v float64) bool { return v > 0 && !math.IsInf(v, 0) }
+
+// frCheckNonNeg reports whether v is finite and ≥ 0.
+func frCheckNonNeg(v float64) bool { return v >= 0 && !math.IsInf(v, 0) }
+
+// SumK returns ΣK of the run's fittings plus ExtraK. Errors name field
+// "fit" (unknown key or negative count) or "k" (bad ExtraK).
+func (r Run) SumK() (float64, error) {
+	if !frCheckNonNeg(r.ExtraK) {
+		return 0, fieldErrorf("k", "extra loss coefficient must be zero or positive, got %g", r.ExtraK)
+	}
+	sum := r.ExtraK
+	for _, fc := range r.Fittings {
+		f, err := LookupFitting(fc.Key)
+		if err != nil {
+			return 0, err
+		}
+		if fc.Count < 0 {
+			return 0, fieldErrorf("fit", "number of %q fittings must not be negative, got %d", fc.Key, fc.Count)
+		}
+		sum += float64(fc.Count) * f.K
+	}
+	return sum, nil
+}
+
+// validate checks the run and the liquid.
+func (r Run) validate(fl Fluid) error {
+	if !frCheckPositive(fl.Density) {
+		return fieldErrorf("rho", "liquid density must be positive, got %g", fl.Density)
+	}
+	if !frCheckPositive(fl.Viscosity) {
+		return fieldErrorf("mu", "liquid viscosity must be positive, got %g", fl.Viscosity)
+	}
+	if !frCheckNonNeg(r.Length) {
+		return fieldErrorf("length", "pipe length must be zero or positive, got %g", r.Length)
+	}
+	if !frCheckPositive(r.Diameter) {
+		return fieldErrorf("d", "inside diameter must be positive, got %g", r.Diameter)
+	}
+	switch r.Method {
+	case MethodColebrook, MethodSwameeJain, MethodHaaland:
+		if !frCheckNonNeg(r.Roughness) {
+			return fieldErrorf("eps", "roughness must be zero or positive, got %g", r.Roughness)
+		}
+		if rr := r.Roughness / r.Diameter; rr > FrictionRelRoughMax {
+			return fieldErrorf("eps", "relative roughness ε/D = %.3g is above %g, the edge of the Moody chart", rr, FrictionRelRoughMax)
+		}
+	case MethodHazenWilliams:
+		if r.HazenC == 0 {
+			return fieldErrorf("chw", "give the Hazen–Williams C factor (for example from the pipe material)")
+		}
+		if math.IsNaN(r.HazenC) || r.HazenC < HazenCMin || r.HazenC > HazenCMax {
+			return fieldErrorf("chw", "Hazen–Williams C must be between %g and %g, got %g", HazenCMin, HazenCMax, r.HazenC)
+		}
+		if nu := fl.KinematicViscosity(); nu < hazenNuMin || nu > hazenNuMax {
+			return fieldErrorf("method", "Hazen–Williams holds for water near ordinary temperatures (kinematic viscosity %g–%g mm²/s); this liquid has %.3g mm²/s: use Colebrook", hazenNuMin*1e6, hazenNuMax*1e6, nu*1e6)
+		}
+	default:
+		return fieldErrorf("method", "unknown friction method %d", int(r.Method))
+	}
+	return nil
+}
+
+// turbulentFriction returns the Darcy f of the run's method at Reynolds
+// number re and velocity v, with any range warning.
+func (r Run) turbulentFriction(re, v, q float64) (float64, string, error) {
+	rr := r.Roughness / r.Diameter
+	var f float64
+	var err error
+	warn := ""
+	switch r.Method {
+	case MethodColebrook:
+		f, err = Colebrook(re, rr)
+	case MethodSwameeJain:
+		f, err = SwameeJain(re, rr)
+		if err == nil && (re < swameeJainReMin || rr < swameeJainRRMin || rr > swameeJainRRMax) {
+			warn = fmt.Sprintf("Swamee–Jain is used outside its fitted range (Re 5000–1e8, ε/D 1e-6–0.01; here Re %.3g, ε/D %.3g): prefer Colebrook", re, rr)
+		}
+	case MethodHaaland:
+		f, err = Haaland(re, rr)
+	case MethodHazenWilliams:
+		// Equivalent Darcy factor: h/L from Hazen–Williams, f = (h/L)·D·2g/V².
+		var hl float64
+		hl, err = HazenWilliamsHeadLoss(q, r.Diameter, 1, r.HazenC)
+		f = hl * r.Diameter * 2 * StandardGravity / (v * v)
+		if err == nil && re > FrictionReMax {
+			err = fieldErrorf("re", "Reynolds number %.3g is above %g", re, FrictionReMax)
+		}
+	}
+	if err != nil {
+		return 0, "", fieldErrorf("q", "at this flow the Reynolds number is %.3g, outside the friction formula's range (%v)", re, err)
+	}
+	return f, warn, nil
+}
+
+// Evaluate computes velocity, Reynolds number, regime, α, the Darcy
+// friction factor and the major (pipe), minor (fittings) and total head
+// losses of the run carrying flow q (m³/s, ≥ 0) of liquid fl.
+//
+// Laminar flow (Re < 2300) uses f = 64/Re and α = 2. Turbulent flow
+// (Re > 4000) uses the run's Method and α = 1. Transitional flow
+// (2300 ≤ Re ≤ 4000, common practice) is computed with both 64/Re and the
+// turbulent formula; the design figures (Friction, MajorLoss, TotalLoss,
+// Alpha) are those of the larger loss, the bounds are in FrictionLow/High
+// and TotalLossLow/High, and a warning says so. q = 0 gives zero losses.
+//
+// Warnings also flag velocities outside 0.3–3 m/s (common practice for
+// liquid lines), fitting K values applied to laminar flow, and explicit
+// formulas used outside their fitted range. Bad inputs give a *FieldError
+// naming "rho", "mu", "length", "d", "eps", "fit", "k", "method", "chw" or
+// "q".
+func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
+	if err := r.validate(fl); err != nil {
+		return RunResult{}, err
+	}
+	sumK, err := r.SumK()
+	if err != nil {
+		return RunResult{}, err
+	}
+	if math.IsNaN(q) || math.IsInf(q, 0) || q < 0 {
+		return RunResult{}, fieldErrorf("q", "flow must be zero or positive, got %g", q)
+	}
+	res := RunResult{SumK: sumK}
+	area := math.Pi * r.Diameter * r.Diameter / 4
+	v := q / area
+	re := Reynolds(fl.Density, v, r.Diameter, fl.Viscosity)
+	res.Velocity, res.Reynolds, res.Regime = v, re, RegimeOf(re)
+	if q == 0 {
+		res.Alpha = AlphaLaminar()
+		res.Warnings = append(res.Warnings, "no flow: all losses are zero")
+		return res, nil
+	}
+	hv := v * v / (2 * StandardGravity)
+	ld := r.Length / r.Diameter
+	res.MinorLoss = sumK * hv
+
+	switch res.Regime {
+	case Laminar:
+		f := 64 / re
+		res.Alpha = AlphaLaminar()
+		res.Friction, res.FrictionLow, res.FrictionHigh = f, f, f
+		if r.Method == MethodHazenWilliams {
+			res.Warnings = append(res.Warnings, "laminar flow: friction from 64/Re; Hazen–Williams does not apply")
+		}
+		if sumK > 0 {
+			res.Warnings = append(res.Warnings, "laminar flow: the fitting K values are turbulent-flow figures; real fitting losses are higher")
+		}
+	case Transitional:
+		fLam := 64 / re
+		fTurb, w, err := r.turbulentFriction(re, v, q)
+		if err != nil {
+			return RunResult{}, err
+		}
+		if w != "" {
+			res.Warnings = append(res.Warnings, w)
+		}
+		res.FrictionLow, res.FrictionHigh = math.Min(fLam, fTurb), math.Max(fLam, fTurb)
+		res.Friction = res.FrictionHigh
+		res.Alpha = AlphaTurbulent()
+		if fLam > fTurb {
+			res.Alpha = AlphaLaminar()
+		}
+		res.Warnings = append(res.Warnings, fmt.Sprintf("transitional flow (Re %.0f, between 2300 and 4000): the loss lies between the laminar (64/Re) and turbulent bounds; the larger is used", re))
+	default:
+		f, w, err := r.turbulentFriction(re, v, q)
+		if err != nil {
+			return RunResult{}, err
+		}
+		if w != "" {
+			res.Warnings = append(res.Warnings, w)
+		}
+		res.Alpha = AlphaTurbulent()
+		res.Friction, res.FrictionLow, res.FrictionHigh = f, f, f
+	}
+	if r.Method == MethodHazenWilliams && r.Diameter < hazenDMin && res.Regime != Laminar {
+		res.Warnings = append(res.Warnings, "Hazen–Williams is meant for pipes of about 50 mm and larger: prefer Colebrook")
+	}
+	res.MajorLoss = res.Friction * ld * hv
+	res.TotalLoss = res.MajorLoss + res.MinorLoss
+	res.TotalLossLow = res.FrictionLow*ld*hv + res.MinorLoss
+	res.TotalLossHigh = res.FrictionHigh*ld*hv + res.MinorLoss
+	switch {
+	case v < RunVelocityLow:
+		res.Warnings = append(res.Warnings, fmt.Sprintf("velocity %.2f m/s is low for a liquid line (usual range 0.3–3 m/s)", v))
+	case v > RunVelocityHigh:
+		res.Warnings = append(res.Warnings, fmt.Sprintf("velocity %.2f m/s is high for a liquid line (usual range 0.3–3 m/s)", v))
+	}
+	return res, nil
+}

@@ -1,0 +1,358 @@
+package scenario
+
+import (
+	"bufio"
+	"fmt"
+	"math"
+	"os"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"testing"
+
+	"fieldhead/calc"
+)
+
+// The case files in testdata/cases are the project's main checks: each case
+// is a share-link query, the source of its expected values, and the values.
+// The format is described in testdata/cases/README.md.
+
+type expectation struct {
+	line     int
+	key      string
+	op       string // "=" numeric, "is" text equal, "~" text contains
+	want     float64
+	text     string
+	tol      float64
+	relative bool
+}
+
+type testCase struct {
+	file, name, source, query string
+	line                      int
+	expects                   []expectation
+}
+
+// observable returns the SI value (or text) a case key names.
+func observable(r Result, key string) (float64, string, error) {
+	if strings.HasPrefix(key, "error.") {
+		p := strings.TrimPrefix(key, "error.")
+		m, ok := r.Errors[p]
+		if !ok {
+			return 0, "", fmt.Errorf("no error on %s (errors: %v)", p, r.Errors)
+		}
+		return 0, m, nil
+	}
+	if strings.HasPrefix(key, "warning.") {
+		p := strings.TrimPrefix(key, "warning.")
+		var all []string
+		for _, w := range r.Warnings {
+			if w.Param == p {
+				all = append(all, w.Text)
+			}
+		}
+		if r.Balance != nil {
+			for _, w := range r.Balance.Warnings {
+				if w.Field == p {
+					all = append(all, w.Text)
+				}
+			}
+		}
+		if len(all) == 0 {
+			return 0, "", fmt.Errorf("no warning on %s", p)
+		}
+		return 0, strings.Join(all, " | "), nil
+	}
+	part, name, _ := strings.Cut(key, ".")
+	miss := func() (float64, string, error) {
+		return 0, "", fmt.Errorf("%s was not computed (errors: %v)", part, r.Errors)
+	}
+	switch part {
+	case "fluid":
+		if r.Fluid == nil {
+			return miss()
+		}
+		switch name {
+		case "rho":
+			return r.Fluid.Density, "", nil
+		case "mu":
+			return r.Fluid.Viscosity, "", nil
+		case "pv":
+			return r.Fluid.VapourPressure, "", nil
+		}
+	case "site":
+		if name == "p" && r.SitePressure > 0 {
+			return r.SitePressure, "", nil
+		}
+	case "run":
+		if r.Run == nil {
+			return miss()
+		}
+		rr := r.Run
+		switch name {
+		case "v":
+			return rr.Velocity, "", nil
+		case "re":
+			return rr.Reynolds, "", nil
+		case "f":
+			return rr.Friction, "", nil
+		case "alpha":
+			return rr.Alpha, "", nil
+		case "major":
+			return rr.MajorLoss, "", nil
+		case "minor":
+			return rr.MinorLoss, "", nil
+		case "loss":
+			return rr.TotalLoss, "", nil
+		case "sumk":
+			return rr.SumK, "", nil
+		case "d":
+			return rr.Diameter, "", nil
+		case "regime":
+			return 0, rr.Regime.String(), nil
+		}
+	case "balance":
+		b := r.Balance
+		if b == nil {
+			return miss()
+		}
+		switch name {
+		case "value":
+			return b.Value, "", nil
+		case "low":
+			return b.ValueLow, "", nil
+		case "high":
+			return b.ValueHigh, "", nil
+		case "hp":
+			return b.PumpHead, "", nil
+		case "ht":
+			return b.TurbineHead, "", nil
+		case "hf":
+			return b.FrictionHead, "", nil
+		case "q":
+			return b.Q, "", nil
+		case "pumppower":
+			return b.PumpPower, "", nil
+		case "turbinepower":
+			return b.TurbinePower, "", nil
+		case "v1":
+			return b.In.Velocity, "", nil
+		case "v2":
+			return b.Out.Velocity, "", nil
+		case "alpha1":
+			return b.In.Alpha, "", nil
+		case "alpha2":
+			return b.Out.Alpha, "", nil
+		}
+	case "convert":
+		c := r.Convert
+		if c == nil {
+			return miss()
+		}
+		switch name {
+		case "gauge":
+			return c.Gauge, "", nil
+		case "abs":
+			return c.Absolute, "", nil
+		case "head":
+			return c.Head, "", nil
+		}
+	}
+	return 0, "", fmt.Errorf("unknown observable %q", key)
+}
+
+func loadCases(t *testing.T) []testCase {
+	t.Helper()
+	files, err := filepath.Glob(filepath.Join("..", "..", "testdata", "cases", "*.case"))
+	if err != nil || len(files) == 0 {
+		t.Fatalf("no case files found: %v", err)
+	}
+	var out []testCase
+	for _, f := range files {
+		out = append(out, parseCaseFile(t, f)...)
+	}
+	return out
+}
+
+func parseCaseFile(t *testing.T, path string) []testCase {
+	t.Helper()
+	fh, err := os.Open(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer fh.Close()
+	var cases []testCase
+	var fileSource string
+	var cur *testCase
+	sc := bufio.NewScanner(fh)
+	n := 0
+	for sc.Scan() {
+		n++
+		line := strings.TrimSpace(sc.Text())
+		if line == "" || strings.HasPrefix(line, "#") {
+			continue
+		}
+		key, val, ok := strings.Cut(line, ":")
+		if !ok {
+			t.Fatalf("%s:%d: expected 'key: value'", path, n)
+		}
+		val = strings.TrimSpace(val)
+		switch strings.TrimSpace(key) {
+		case "source":
+			if cur == nil {
+				fileSource = val
+			} else {
+				cur.source = val
+			}
+		case "case":
+			cases = append(cases, testCase{file: filepath.Base(path), name: val, source: fileSource, line: n})
+			cur = &cases[len(cases)-1]
+		case "query":
+			if cur == nil {
+				t.Fatalf("%s:%d: query before case", path, n)
+			}
+			cur.query = val
+		case "expect":
+			if cur == nil {
+				t.Fatalf("%s:%d: expect before case", path, n)
+			}
+			cur.expects = append(cur.expects, parseExpect(t, path, n, val))
+		default:
+			t.Fatalf("%s:%d: unknown key %q", path, n, key)
+		}
+	}
+	if err := sc.Err(); err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range cases {
+		if c.source == "" || c.query == "" || len(c.expects) == 0 {
+			t.Fatalf("%s:%d: case %q needs a source, a query and at least one expect", path, c.line, c.name)
+		}
+	}
+	return cases
+}
+
+// parseExpect reads "key = value [unit] ± tol[%| rel| unit]", "key is text"
+// or "key ~ text".
+func parseExpect(t *testing.T, path string, n int, s string) expectation {
+	t.Helper()
+	e := expectation{line: n}
+	fields := strings.Fields(s)
+	if len(fields) < 3 {
+		t.Fatalf("%s:%d: expect needs 'key op value'", path, n)
+	}
+	e.key, e.op = fields[0], fields[1]
+	rest := strings.TrimSpace(strings.SplitN(s, e.op, 2)[1])
+	switch e.op {
+	case "is", "~":
+		e.text = rest
+		return e
+	case "=":
+	default:
+		t.Fatalf("%s:%d: unknown operator %q", path, n, e.op)
+	}
+	val, tol, ok := strings.Cut(rest, "±")
+	if !ok {
+		t.Fatalf("%s:%d: a numeric expect needs a tolerance after ±", path, n)
+	}
+	// A value with a unit is converted to SI by that unit; a bare number is
+	// taken as it is (dimensionless, or already SI).
+	parse := func(text string) float64 {
+		num, u := Split(text)
+		if u == "" {
+			v, err := strconv.ParseFloat(num, 64)
+			if err != nil {
+				t.Fatalf("%s:%d: %v", path, n, err)
+			}
+			return v
+		}
+		unit, err := calc.LookupUnit(u)
+		if err != nil {
+			t.Fatalf("%s:%d: %v", path, n, err)
+		}
+		v, err := calc.Parse(e.key, text, unit.Dim, "")
+		if err != nil {
+			t.Fatalf("%s:%d: %v", path, n, err)
+		}
+		return v
+	}
+	e.want = parse(val)
+	tol = strings.TrimSpace(tol)
+	switch {
+	case strings.HasSuffix(tol, "%"):
+		v, err := strconv.ParseFloat(strings.TrimSuffix(tol, "%"), 64)
+		if err != nil {
+			t.Fatalf("%s:%d: %v", path, n, err)
+		}
+		e.tol, e.relative = v/100, true
+	case strings.HasSuffix(tol, "rel"):
+		v, err := strconv.ParseFloat(strings.TrimSpace(strings.TrimSuffix(tol, "rel")), 64)
+		if err != nil {
+			t.Fatalf("%s:%d: %v", path, n, err)
+		}
+		e.tol, e.relative = v, true
+	default:
+		if _, u := Split(tol); u == "°C" || u == "°F" || u == "C" || u == "F" {
+			t.Fatalf("%s:%d: give temperature tolerances as rel or %%", path, n)
+		}
+		e.tol = parse(tol)
+	}
+	return e
+}
+
+func TestCases(t *testing.T) {
+	cases := loadCases(t)
+	for _, c := range cases {
+		t.Run(c.file+"/"+c.name, func(t *testing.T) {
+			s, err := Parse(c.query)
+			if err != nil {
+				t.Fatalf("%s:%d: the case's link does not parse: %v", c.file, c.line, err)
+			}
+			r := Evaluate(s)
+			for _, e := range c.expects {
+				got, text, err := observable(r, e.key)
+				if err != nil {
+					t.Errorf("%s:%d: %s: %v (source: %s)", c.file, e.line, e.key, err, c.source)
+					continue
+				}
+				switch e.op {
+				case "is":
+					if text != e.text {
+						t.Errorf("%s:%d: %s is %q, want %q (source: %s)", c.file, e.line, e.key, text, e.text, c.source)
+					}
+				case "~":
+					if !strings.Contains(text, e.text) {
+						t.Errorf("%s:%d: %s = %q, want it to contain %q (source: %s)", c.file, e.line, e.key, text, e.text, c.source)
+					}
+				case "=":
+					diff := math.Abs(got - e.want)
+					lim := e.tol
+					if e.relative {
+						lim = e.tol * math.Abs(e.want)
+					}
+					if !(diff <= lim) {
+						t.Errorf("%s:%d: %s = %.10g, want %.10g ± %.3g (off by %.3g) (source: %s)", c.file, e.line, e.key, got, e.want, lim, diff, c.source)
+					}
+				}
+			}
+		})
+	}
+	// The bar the project set itself: at least 40 cases from at least 6 sources.
+	if len(cases) < 40 || len(distinctSources(cases)) < 6 {
+		t.Errorf("%d cases from %d distinct sources; want at least 40 from 6", len(cases), len(distinctSources(cases)))
+	}
+}
+
+// distinctSources groups sources by the text before the first comma or
+// semicolon, so "IAPWS-IF97 (2007), Table 5" and "…, Table 35" count once.
+func distinctSources(cases []testCase) map[string]bool {
+	m := map[string]bool{}
+	for _, c := range cases {
+		s := c.source
+		if i := strings.IndexAny(s, ",;"); i >= 0 {
+			s = s[:i]
+		}
+		m[strings.TrimSpace(s)] = true
+	}
+	return m
+}

@@ -1,0 +1,81 @@
+package scenario
+
+import (
+	"errors"
+
+	"fieldhead/calc"
+)
+
+// convert reads cv as a pressure (any unit, water columns included) or as a
+// head of the liquid (a length), and shows it every way.
+func (e *eval) convert() {
+	text := e.s.Get("cv")
+	var gauge, abs, head float64
+	p, ref, err := calc.ParsePressure("cv", text, DefaultUnit("cv", e.us))
+	isHead := false
+	if err != nil {
+		h, herr := calc.Parse("cv", text, calc.Length, "")
+		if herr != nil {
+			var fe *calc.FieldError
+			if errors.As(err, &fe) {
+				fe.Msg += " — or a head of the liquid in m or ft"
+			}
+			e.failErr("cv", err)
+			return
+		}
+		isHead = true
+		head = h
+	}
+	fl := e.res.Fluid
+	if fl == nil {
+		if isHead {
+			return // a head needs the liquid: t's own message says why
+		}
+	}
+	site := e.res.SitePressure
+	rhog := 0.0
+	if fl != nil {
+		rhog = fl.Density * calc.StandardGravity
+	}
+	if isHead {
+		gauge = head * rhog
+		abs = gauge + site
+		if e.s.Get("cvref") == "a" {
+			abs, gauge = gauge, gauge-site
+		}
+	} else {
+		isAbs, ok := e.absolute("cvref", ref)
+		if !ok {
+			return
+		}
+		if isAbs {
+			abs, gauge = p, p-site
+		} else {
+			gauge, abs = p, p+site
+		}
+		if rhog > 0 {
+			head = gauge / rhog
+		}
+	}
+	cr := &ConvertResult{Gauge: gauge, Absolute: abs, Head: head}
+	row := func(label, unit string, v float64) {
+		cr.Rows = append(cr.Rows, ConvertRow{Label: label, Text: calc.FormatValue(v, unit, 5)})
+	}
+	row("gauge pressure", "kPa", gauge)
+	row("gauge pressure", "bar", gauge)
+	row("gauge pressure", "psi", gauge)
+	row("absolute pressure", "kPa", abs)
+	row("absolute pressure", "psi", abs)
+	if fl != nil {
+		row("head of this liquid (gauge)", "m", head)
+		row("head of this liquid (gauge)", "ft", head)
+		row("head of this liquid (absolute)", "m", abs/rhog)
+	}
+	row("conventional water column", "mH2O", gauge)
+	row("conventional water column", "ftH2O", gauge)
+	row("conventional water column", "inH2O", gauge)
+	e.res.Convert = cr
+	if abs <= 0 {
+		e.warn("cv", "convert", "this is at or below absolute zero pressure, which no liquid can sustain: check the value and whether it is gauge or absolute")
+	}
+}

@@ -1,0 +1,73 @@
+// Package scenario is Fieldhead's one vocabulary: a URL query string that
+// holds a whole calculation. The share link, the state kept in the browser's
+// localStorage and the test cases in testdata/cases are all such a string.
+//
+// Values carry their unit in the text, as a person would write them
+// (z2=38.5m, q=240gpm, p1=-18kPa). A value typed without a unit takes the
+// default unit of the chosen unit system (units=si or units=us); the default
+// is shown beside the field in the app, so it is never a hidden guess.
+// Parse keeps exactly what was typed in Scenario.Raw, so a bad value is
+// reported and kept, never dropped.
+//
+// # Parameters
+//
+// General:
+//
+//	view    balance | convert | regime        the view the link opens on
+//	units   si | us                          default and display units (default si)
+//	name    free text                        a title for the sheet (shown as text, never markup)
+//
+// Liquid and site:
+//
+//	liq     water | seawater | custom        the liquid (default water)
+//	t       temperature, e.g. 18C, 64F       required for water and seawater
+//	rho     density, e.g. 998kg/m3           custom liquid only
+//	mu      dynamic viscosity, e.g. 1.0mPa.s custom liquid only
+//	pv      vapour pressure (absolute)       custom liquid only
+//	alt     site altitude, e.g. 210m         site pressure from the ISO 2533 standard atmosphere
+//	baro    barometer reading (absolute)     used instead of alt when given
+//
+// When neither alt nor baro is given the standard sea-level pressure
+// 101.325 kPa is used and a warning says so.
+//
+// The two points of the energy balance (n = 1 in, 2 out):
+//
+//	pn      pressure, e.g. -18kPa, 430kPa, 14.7psia
+//	pnref   g | a                            gauge (default) or absolute; psig/psia, barg/bara override
+//	zn      elevation of the point, e.g. 212m
+//	vn      mean velocity at the point (0 for a large tank surface), or
+//	dn      inside diameter at the point: the velocity is q/(πd²/4)
+//
+// Flow, heads and the unknown:
+//
+//	q       volumetric flow, e.g. 45L/s, 240gpm
+//	hp      head added by a pump (m or ft of the liquid)
+//	ht      head taken by a turbine
+//	hf      friction head between the points, when not computed from a pipe run
+//	solve   p1 | p2 | z1 | z2 | q | hp | ht | hf     the one unknown (default hp)
+//	alpha   auto | 1 | pl                    kinetic-energy factor: from the regime
+//	                                          (2 laminar, 1 turbulent), 1 always, or
+//	                                          a power-law profile estimate
+//
+// The value of the unknown's own parameter, if present, is kept but not used.
+//
+// A pipe run (used for hf in the balance when l is given, and by the Regime view):
+//
+//	l       length of the run, e.g. 640m
+//	d       inside diameter, or
+//	nps,sch nominal size and schedule from the pipe tables, e.g. nps=8&sch=40
+//	mat     material key (roughness and Hazen–Williams C), or
+//	eps     absolute roughness, e.g. 0.045mm
+//	fit     fittings as key:count, comma separated, e.g. gate:2,elbow90lr:6,exit:1
+//	k       extra loss coefficient ΣK added to the fittings
+//	fm      colebrook | swamee-jain | haaland | hazen-williams   (default colebrook)
+//	chw     Hazen–Williams C (default from mat)
+//
+// The Convert view:
+//
+//	cv      a pressure, water-column or head value to convert, e.g. 430kPa, 12mH2O, 40ft
+//	cvref   g | a                            whether cv is gauge (default) or absolute
+//
+// Every parameter is optional in the link; a computation that needs a
+// missing one reports it by name ("t: enter the liquid temperature").
+package scenario

@@ -1,0 +1,391 @@
+package scenario
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"strconv"
+	"strings"
+
+	"fieldhead/calc"
+)
+
+// seaLevel is the ISO 2533 standard sea-level pressure, Pa.
+const seaLevel = 101325.0
+
+// eval carries one evaluation: the scenario, its unit system and the
+// result being filled.
+type eval struct {
+	s       Scenario
+	us      bool
+	res     *Result
+	runSpec calc.Run // the pipe run as read, when run() returned non-nil
+}
+
+// Evaluate computes every part of the scenario whose inputs are present.
+// It never fails as a whole: a bad or missing input is reported under its
+// parameter in Result.Errors and only the parts that need it are left nil.
+func Evaluate(s Scenario) Result {
+	res := Result{Errors: map[string]string{}}
+	e := &eval{s: s, res: &res}
+	switch u := strings.TrimSpace(s.Get("units")); u {
+	case "", "si":
+	case "us":
+		e.us = true
+	default:
+		e.fail("units", fmt.Sprintf("%q is not a unit system; use si or us", u))
+	}
+	res.US = e.us
+	if n := s.Get("name"); n != "" && (!printable(n) || len(n) > 200) {
+		e.fail("name", "the title must be plain text of at most 200 characters")
+	}
+	if v := s.Get("view"); v != "" && !oneOf(v, Choices("view")) {
+		e.fail("view", fmt.Sprintf("%q is not a view; use balance, convert or regime", v))
+	}
+
+	e.site()
+	e.liquid()
+	run := e.run()
+	if e.wantsBalance() {
+		e.balance(run)
+	}
+	if res.Run == nil && run != nil && res.Fluid != nil && s.Has("q") {
+		q, ok := e.quantity("q")
+		if ok {
+			e.evalRun(run, q)
+		}
+	}
+	if s.Has("cv") {
+		e.convert()
+	}
+	return res
+}
+
+func oneOf(v string, cs []Choice) bool {
+	for _, c := range cs {
+		if c.Value == v {
+			return true
+		}
+	}
+	return false
+}
+
+// fail records the first message for a parameter.
+func (e *eval) fail(param, msg string) {
+	if _, ok := e.res.Errors[param]; !ok {
+		e.res.Errors[param] = msg
+	}
+}
+
+// failErr records an error, under the field it names when it is a *calc.FieldError.
+func (e *eval) failErr(param string, err error) {
+	var fe *calc.FieldError
+	if errors.As(err, &fe) && fe.Field != "" {
+		if _, ok := known[fe.Field]; ok {
+			e.fail(fe.Field, err.Error())
+			return
+		}
+		// A field calc names internally ("re", "method"): report it under
+		// the parameter the user typed.
+		e.fail(param, param+": "+fe.Msg)
+		return
+	}
+	e.fail(param, err.Error())
+}
+
+func (e *eval) warn(param, topic, text string) {
+	e.res.Warnings = append(e.res.Warnings, Warning{Param: param, Topic: topic, Text: text})
+}
+
+// quantity parses a dimensioned parameter into SI. A missing value is an
+// error that asks for it.
+func (e *eval) quantity(param string) (float64, bool) {
+	f := fields[param]
+	text := e.s.Get(param)
+	if strings.TrimSpace(text) == "" {
+		e.fail(param, param+": "+missing[param])
+		return 0, false
+	}
+	v, err := calc.Parse(param, text, f.dim, DefaultUnit(param, e.us))
+	if err != nil {
+		e.failErr(param, err)
+		return 0, false
+	}
+	return v, true
+}
+
+// missing says what to enter when a needed parameter is absent.
+var missing = map[string]string{
+	"t":    "enter the liquid temperature",
+	"rho":  "enter the liquid's density",
+	"mu":   "enter the liquid's dynamic viscosity",
+	"pv":   "enter the liquid's vapour pressure (absolute; 0 if negligible)",
+	"p1":   "enter the pressure at point 1 (0 for a surface open to the air)",
+	"p2":   "enter the pressure at point 2 (0 for a surface open to the air)",
+	"z1":   "enter the elevation of point 1",
+	"z2":   "enter the elevation of point 2",
+	"v1":   "enter the velocity at point 1 (0 for a large tank surface), or its diameter d1",
+	"v2":   "enter the velocity at point 2 (0 for a large tank surface), or its diameter d2",
+	"q":    "enter the flow",
+	"hp":   "enter the pump head (0 if there is no pump)",
+	"ht":   "enter the turbine head (0 if there is no turbine)",
+	"hf":   "enter the friction head, or describe the pipe run (length l) to compute it",
+	"l":    "enter the length of the pipe run",
+	"d":    "enter the inside diameter, or pick a nominal size and schedule",
+	"eps":  "enter the roughness, or pick a material",
+	"cv":   "enter a value to convert",
+	"alt":  "enter the site altitude",
+	"baro": "enter the barometer reading",
+}
+
+// site finds the site's barometric pressure: typed, from altitude, or the
+// standard sea level with a warning.
+func (e *eval) site() {
+	switch {
+	case e.s.Has("baro"):
+		if p, ok := e.quantity("baro"); ok {
+			if !(p > 0) {
+				e.fail("baro", "baro: a barometer reading is an absolute pressure and must be above zero")
+				return
+			}
+			e.res.SitePressure, e.res.SiteNote = p, "barometer reading"
+		}
+	case e.s.Has("alt"):
+		if z, ok := e.quantity("alt"); ok {
+			p, err := calc.StandardAtmosphere(z)
+			if err != nil {
+				e.failErr("alt", err)
+				return
+			}
+			e.res.SitePressure, e.res.SiteNote = p, "ISO 2533 standard atmosphere at the site altitude"
+		}
+	default:
+		e.res.SitePressure, e.res.SiteNote = seaLevel, "standard sea-level pressure (no altitude or barometer given)"
+		e.warn("alt", "site", "no site altitude or barometer reading: the standard sea-level pressure 101.325 kPa is used for gauge ↔ absolute and the vapour-pressure check")
+	}
+}
+
+// liquid builds the fluid at its temperature.
+func (e *eval) liquid() {
+	switch liq := strings.TrimSpace(e.s.Get("liq")); liq {
+	case "", "water":
+		t, ok := e.quantity("t")
+		if !ok {
+			return
+		}
+		p := e.res.SitePressure
+		if p == 0 {
+			p = seaLevel
+		}
+		psat, err := calc.SaturationPressure(t)
+		if err != nil {
+			e.failErr("t", err)
+			return
+		}
+		if p < psat {
+			e.warn("t", "liquid", "the water is at or above its boiling point at the site pressure; its properties are taken at the saturation pressure")
+			p = psat
+		}
+		fl, err := calc.Water(t, p)
+		if err != nil {
+			e.failErr("t", err)
+			return
+		}
+		e.res.Fluid = &fl
+	case "custom":
+		rho, ok1 := e.quantity("rho")
+		mu, ok2 := e.quantity("mu")
+		pv, ok3 := e.quantity("pv")
+		if !ok1 || !ok2 || !ok3 {
+			return
+		}
+		fl, err := calc.CustomLiquid(rho, mu, pv)
+		if err != nil {
+			e.failErr("rho", err)
+			return
+		}
+		e.res.Fluid = &fl
+	default:
+		e.fail("liq", fmt.Sprintf("liq: %q is not a liquid Fieldhead knows; use water or custom", liq))
+	}
+}
+
+// pipeParams are the parameters that describe a pipe run.
+var pipeParams = []string{"l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw"}
+
+// run reads the pipe run, or returns nil when no run is described. The run
+// is described when its length l is given.
+func (e *eval) run() *RunResult {
+	if !e.s.Has("l") {
+		return nil
+	}
+	r := &RunResult{}
+	ok := true
+	if l, good := e.quantity("l"); good {
+		if !(l > 0) {
+			e.fail("l", "l: the length of the run must be above zero")
+			ok = false
+		}
+		r.Length = l
+	} else {
+		ok = false
+	}
+	// Diameter: typed, or from the tables.
+	switch {
+	case e.s.Has("d"):
+		if d, good := e.quantity("d"); good {
+			if !(d > 0) {
+				e.fail("d", "d: the inside diameter must be above zero")
+				ok = false
+			}
+			r.Diameter = d
+		} else {
+			ok = false
+		}
+	case e.s.Has("nps") || e.s.Has("sch"):
+		ps, err := calc.LookupPipe(strings.TrimSpace(e.s.Get("nps")), strings.TrimSpace(e.s.Get("sch")))
+		if err != nil {
+			e.failErr("nps", err)
+			ok = false
+		} else {
+			r.Pipe = &ps
+			r.Diameter = ps.ID
+		}
+	default:
+		e.fail("d", "d: "+missing["d"])
+		ok = false
+	}
+	// Roughness and Hazen–Williams C: typed, or from the material.
+	var mat *calc.Material
+	if e.s.Has("mat") {
+		m, err := calc.LookupMaterial(strings.TrimSpace(e.s.Get("mat")))
+		if err != nil {
+			e.failErr("mat", err)
+			ok = false
+		} else {
+			mat = &m
+			r.Material = mat
+		}
+	}
+	method := calc.MethodColebrook
+	if e.s.Has("fm") {
+		m, err := calc.ParseFrictionMethod(strings.TrimSpace(e.s.Get("fm")))
+		if err != nil {
+			e.failErr("fm", err)
+			ok = false
+		}
+		method = m
+	}
+	switch {
+	case e.s.Has("eps"):
+		if eps, good := e.quantity("eps"); good {
+			if eps < 0 {
+				e.fail("eps", "eps: the roughness must not be negative")
+				ok = false
+			}
+			r.Roughness = eps
+		} else {
+			ok = false
+		}
+	case mat != nil:
+		r.Roughness = mat.Roughness
+	case method != calc.MethodHazenWilliams:
+		e.fail("eps", "eps: "+missing["eps"])
+		ok = false
+	}
+	hc := 0.0
+	switch {
+	case e.s.Has("chw"):
+		c, err := number("chw", e.s.Get("chw"))
+		if err != nil || !(c > 0) {
+			e.fail("chw", "chw: the Hazen–Williams C must be a number above zero, e.g. 130")
+			ok = false
+		}
+		hc = c
+	case mat != nil:
+		hc = mat.HazenC
+	}
+	if method == calc.MethodHazenWilliams && !(hc > 0) {
+		e.fail("chw", "chw: enter a Hazen–Williams C, or pick a material that has one")
+		ok = false
+	}
+	fits, err := ParseFittings(e.s.Get("fit"))
+	if err != nil {
+		e.failErr("fit", err)
+		ok = false
+	}
+	extra := 0.0
+	if e.s.Has("k") {
+		k, err := number("k", e.s.Get("k"))
+		if err != nil || k < 0 {
+			e.fail("k", "k: the extra loss coefficient must be a number, zero or more")
+			ok = false
+		}
+		extra = k
+	}
+	if !ok {
+		return nil
+	}
+	r.RunResult = calc.RunResult{}
+	e.runSpec = calc.Run{Length: r.Length, Diameter: r.Diameter, Roughness: r.Roughness,
+		Fittings: fits, ExtraK: extra, Method: method, HazenC: hc}
+	return r
+}
+
+// evalRun evaluates the pipe run at flow q for the Regime view.
+func (e *eval) evalRun(r *RunResult, q float64) {
+	rr, err := e.runSpec.Evaluate(*e.res.Fluid, q)
+	if err != nil {
+		e.failErr("q", err)
+		return
+	}
+	r.RunResult, r.Flow = rr, q
+	e.res.Run = r
+	for _, w := range rr.Warnings {
+		e.warn("l", "run", w)
+	}
+}
+
+// number reads a plain number (no unit), comma or point decimal.
+func number(param, text string) (float64, error) {
+	t := strings.ReplaceAll(strings.TrimSpace(text), ",", ".")
+	v, err := strconv.ParseFloat(t, 64)
+	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
+		return 0, fmt.Errorf("%s: expected a plain number, got %q", param, text)
+	}
+	return v, nil
+}
+
+// ParseFittings reads a fitting list "gate:2,elbow90lr:6,exit" (a count of
+// 1 may be left out).
+func ParseFittings(text string) ([]calc.FittingCount, error) {
+	var out []calc.FittingCount
+	seen := map[string]bool{}
+	for _, item := range strings.Split(text, ",") {
+		item = strings.TrimSpace(item)
+		if item == "" {
+			continue
+		}
+		key, cnt, hasCount := strings.Cut(item, ":")
+		key = strings.TrimSpace(key)
+		if _, err := calc.LookupFitting(key); err != nil {
+			return nil, err
+		}
+		if seen[key] {
+			return nil, &calc.FieldError{Field: "fit", Msg: fmt.Sprintf("%q is listed twice; give one count", key)}
+		}
+		seen[key] = true
+		n := 1
+		if hasCount {
+			c, err := strconv.Atoi(strings.TrimSpace(cnt))
+			if err != nil || c < 0 || c > 1000 {
+				return nil, &calc.FieldError{Field: "fit", Msg: fmt.Sprintf("the count of %q must be a whole number from 0 to 1000", key)}
+			}
+			n = c
+		}
+		if n > 0 {
+			out = append(out, calc.FittingCount{Key: key, Count: n})
+		}
+	}
+	return out, nil
+}

@@ -1,0 +1,56 @@
+package scenario
+
+import "fieldhead/calc"
+
+// Result is everything the views show for one scenario. Each part is nil
+// when its inputs are missing or bad; the reasons are in Errors, keyed by
+// parameter, so the app can put each message beside its own field while the
+// other parts still render.
+type Result struct {
+	Errors   map[string]string // parameter → message naming it
+	Warnings []Warning         // cautions about the results, next to what they concern
+
+	US bool // the scenario asks for US customary units
+
+	Fluid        *calc.Fluid // the liquid at its temperature
+	SitePressure float64     // Pa absolute
+	SiteNote     string      // how the site pressure was found
+
+	Run     *RunResult          // the pipe run (Regime view; friction in the balance)
+	Balance *calc.BalanceResult // the two-point energy balance
+	Convert *ConvertResult      // the Convert view
+}
+
+// Warning is a caution about a result. Param names the input it concerns,
+// or is empty for the scenario as a whole; Topic groups it for display
+// ("balance", "run", "convert", "liquid", "site").
+type Warning struct {
+	Param string
+	Topic string
+	Text  string
+}
+
+// RunResult is the pipe run as evaluated, with the dimensions actually used.
+type RunResult struct {
+	calc.RunResult
+	Length    float64        // m
+	Diameter  float64        // inside diameter used, m
+	Roughness float64        // m
+	Pipe      *calc.PipeSize // when picked from the tables
+	Material  *calc.Material // when picked by key
+	Flow      float64        // m³/s
+}
+
+// ConvertResult holds one value seen in every way a field engineer may need.
+type ConvertResult struct {
+	Gauge    float64 // Pa, relative to the site pressure
+	Absolute float64 // Pa
+	Head     float64 // m of the liquid at its temperature (gauge)
+	Rows     []ConvertRow
+}
+
+// ConvertRow is one line of the conversion table.
+type ConvertRow struct {
+	Label string // e.g. "gauge pressure", "head of this liquid"
+	Text  string // formatted value with its unit
+}

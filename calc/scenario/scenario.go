@@ -1,0 +1,176 @@
+package scenario
+
+import (
+	"fmt"
+	"net/url"
+	"sort"
+	"strings"
+	"unicode/utf8"
+)
+
+// MaxQueryBytes is the longest query string Parse accepts. A real scenario is
+// well under 1 KB; the limit keeps a damaged or hostile link from costing
+// the page anything.
+const MaxQueryBytes = 8 << 10
+
+// Params lists every parameter of the vocabulary in the order Encode writes
+// them. It is the single list the app, the case files and the docs share.
+var Params = []string{
+	"view", "units", "name",
+	"liq", "t", "rho", "mu", "pv", "alt", "baro",
+	"p1", "p1ref", "z1", "v1", "d1",
+	"p2", "p2ref", "z2", "v2", "d2",
+	"q", "hp", "ht", "hf", "solve", "alpha",
+	"l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw",
+	"cv", "cvref",
+}
+
+var known = func() map[string]int {
+	m := make(map[string]int, len(Params))
+	for i, p := range Params {
+		m[p] = i
+	}
+	return m
+}()
+
+// Scenario is a parsed share link: for each parameter, exactly the text the
+// user typed. Values are interpreted by Evaluate, so a bad value is kept and
+// reported rather than lost.
+type Scenario struct {
+	raw map[string]string
+}
+
+// Parse reads a query string (with or without a leading '?'). It fails only
+// for a link that cannot be read as a whole: too long, not valid
+// percent-encoding or UTF-8, or an unknown or repeated parameter. Each such
+// error names the parameter where there is one.
+func Parse(query string) (Scenario, error) {
+	s := Scenario{raw: map[string]string{}}
+	query = strings.TrimPrefix(query, "?")
+	if len(query) > MaxQueryBytes {
+		return s, fmt.Errorf("link: the scenario is %d bytes, longer than the %d accepted", len(query), MaxQueryBytes)
+	}
+	if query == "" {
+		return s, nil
+	}
+	var errs []string
+	for _, part := range strings.Split(query, "&") {
+		if part == "" {
+			continue
+		}
+		k, v, _ := strings.Cut(part, "=")
+		key, err := url.QueryUnescape(k)
+		if err != nil {
+			errs = append(errs, fmt.Sprintf("link: a parameter name is not valid percent-encoding (%q)", truncate(k)))
+			continue
+		}
+		val, err := url.QueryUnescape(v)
+		if err != nil {
+			errs = append(errs, fmt.Sprintf("%s: the value is not valid percent-encoding", safeName(key)))
+			continue
+		}
+		if !utf8.ValidString(key) || !utf8.ValidString(val) {
+			errs = append(errs, fmt.Sprintf("%s: the value is not valid UTF-8 text", safeName(key)))
+			continue
+		}
+		if _, ok := known[key]; !ok {
+			errs = append(errs, fmt.Sprintf("%s: not a Fieldhead parameter", safeName(key)))
+			continue
+		}
+		if _, dup := s.raw[key]; dup {
+			errs = append(errs, fmt.Sprintf("%s: given twice; keep one", key))
+			continue
+		}
+		s.raw[key] = val
+	}
+	if len(errs) > 0 {
+		return s, fmt.Errorf("%s", strings.Join(errs, "; "))
+	}
+	return s, nil
+}
+
+// Get returns the text of a parameter, "" when absent.
+func (s Scenario) Get(param string) string { return s.raw[param] }
+
+// Has reports whether the parameter is present with a non-blank value.
+func (s Scenario) Has(param string) bool { return strings.TrimSpace(s.raw[param]) != "" }
+
+// Set stores the text of a parameter; an empty text removes it. Set panics on
+// nothing: an unknown parameter is kept out and reported by the returned error.
+func (s *Scenario) Set(param, text string) error {
+	if _, ok := known[param]; !ok {
+		return fmt.Errorf("%s: not a Fieldhead parameter", safeName(param))
+	}
+	if s.raw == nil {
+		s.raw = map[string]string{}
+	}
+	if text == "" {
+		delete(s.raw, param)
+		return nil
+	}
+	s.raw[param] = text
+	return nil
+}
+
+// Clone returns an independent copy.
+func (s Scenario) Clone() Scenario {
+	c := Scenario{raw: make(map[string]string, len(s.raw))}
+	for k, v := range s.raw {
+		c.raw[k] = v
+	}
+	return c
+}
+
+// Encode writes the canonical query string: parameters in the order of
+// Params, escaped only where a URL needs it so that units stay readable
+// (q=45L/s, fit=gate:2,exit:1).
+func (s Scenario) Encode() string {
+	keys := make([]string, 0, len(s.raw))
+	for k := range s.raw {
+		keys = append(keys, k)
+	}
+	sort.Slice(keys, func(i, j int) bool { return known[keys[i]] < known[keys[j]] })
+	var b strings.Builder
+	for _, k := range keys {
+		if b.Len() > 0 {
+			b.WriteByte('&')
+		}
+		b.WriteString(k)
+		b.WriteByte('=')
+		b.WriteString(escape(s.raw[k]))
+	}
+	return b.String()
+}
+
+// escape percent-encodes what a query value cannot hold literally, and
+// leaves the characters of units and lists (/ : , . - * °) readable.
+func escape(v string) string {
+	var b strings.Builder
+	for i := 0; i < len(v); i++ {
+		c := v[i]
+		switch {
+		case 'a' <= c && c <= 'z', 'A' <= c && c <= 'Z', '0' <= c && c <= '9':
+			b.WriteByte(c)
+		case strings.IndexByte("-._~/:,*!()@$;'", c) >= 0:
+			b.WriteByte(c)
+		default:
+			fmt.Fprintf(&b, "%%%02X", c)
+		}
+	}
+	return b.String()
+}
+
+func truncate(s string) string {
+	if len(s) > 24 {
+		return s[:24] + "…"
+	}
+	return s
+}
+
+// safeName keeps error messages short and printable when a name is junk.
+func safeName(k string) string {
+	if !utf8.ValidString(k) {
+		return "link"
+	}
+	return fmt.Sprintf("%q", truncate(k))
+}

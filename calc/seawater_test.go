@@ -1,0 +1,96 @@
+package calc
+
+import (
+	"math"
+	"testing"
+)
+
+func TestSeawaterAgainstIAPWS08(t *testing.T) {
+	// Source: python3-iapws (Debian), iapws.iapws08.SeaWater (IAPWS-08
+	// seawater formulation) at S = 0.035 kg/kg, 0–40 °C, 0.1–1 MPa, committed
+	// in testdata/refs/water_seawater.tsv by testdata/refs/gen/gen_water.py.
+	// Density: Sharqawy et al. (2010) state ±0.1 % for their eq. (8) (stated
+	// accuracy from memory). Vapour pressure: ours is pure water's, so it
+	// must lie at or above IAPWS-08's a_w·psat and by no more than 2.5 %.
+	rows := wtReadTSV(t, "../testdata/refs/water_seawater.tsv")
+	if len(rows) < 27 {
+		t.Fatalf("water_seawater.tsv: %d rows; table looks truncated", len(rows))
+	}
+	worstRho, worstPv := 0.0, 0.0
+	for _, r := range rows {
+		tK, pPa := wtNum(t, r["t_K"]), wtNum(t, r["p_Pa"])
+		rho, aw := wtNum(t, r["rho_kg_m3"]), wtNum(t, r["a_w"])
+		fl, err := Seawater(tK, pPa)
+		if err != nil {
+			t.Errorf("Seawater(%g, %g): %v", tK, pPa, err)
+			continue
+		}
+		e := wtRelErr(fl.Density, rho)
+		worstRho = math.Max(worstRho, e)
+		if e > 1e-3 {
+			t.Errorf("Seawater(%g K, %g Pa) ρ = %.6f, IAPWS-08 %.6f (rel %.3g > 0.1 %%)", tK, pPa, fl.Density, rho, e)
+		}
+		pvSea := aw * if97SaturationPressureCore(tK)
+		over := fl.VapourPressure/pvSea - 1
+		worstPv = math.Max(worstPv, over)
+		if over < 0 || over > 0.025 {
+			t.Errorf("Seawater(%g K) pv = %.6g Pa, IAPWS-08 seawater %.6g Pa (%.3g above)", tK, fl.VapourPressure, pvSea, over)
+		}
+	}
+	t.Logf("Seawater vs IAPWS-08 (python3-iapws): max rel. density deviation %.3g; pv overstated by at most %.3g", worstRho, worstPv)
+}
+
+func TestSeawaterViscosity(t *testing.T) {
+	// Source: ITTC Recommended Procedure 7.5-02-01-03 (2011), fresh water and
+	// seawater properties, seawater at 15 °C: ν = 1.18831e-6 m²/s,
+	// ρ = 1026.021 kg/m³ — from memory. Tolerance: ±1.5 %, the accuracy
+	// Sharqawy et al. (2010) state for their eq. (22) (from memory).
+	want := 1.18831e-6 * 1026.021
+	fl, err := Seawater(288.15, 101325)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if e := wtRelErr(fl.Viscosity, want); e > 0.015 {
+		t.Errorf("Seawater(15 °C) μ = %.6g Pa·s, ITTC %.6g (rel %.3g)", fl.Viscosity, want, e)
+	} else {
+		t.Logf("Seawater(15 °C) μ = %.6g Pa·s vs ITTC (from memory) %.6g: rel %.3g", fl.Viscosity, want, e)
+	}
+	// Source: Sharqawy et al. (2010) eq. (22) is a ratio to pure water;
+	// salt raises the viscosity, so μsw/μw > 1 everywhere in range.
+	for tK := 273.15; tK <= 313.15; tK += 5 {
+		sw, err1 := Seawater(tK, 2e5)
+		w, err2 := Water(tK, 2e5)
+		if err1 != nil || err2 != nil {
+			t.Fatal(err1, err2)
+		}
+		if !(sw.Viscosity > w.Viscosity) {
+			t.Errorf("T=%g K: seawater μ %g not above pure water %g", tK, sw.Viscosity, w.Viscosity)
+		}
+	}
+}
+
+func TestSeawaterErrors(t *testing.T) {
+	// Source: the range Seawater documents (0–40 °C, pv–1 MPa).
+	nan := math.NaN()
+	tests := []struct {
+		name    string
+		tK, pPa float64
+		field   string
+	}{
+		{"below 0 °C", 272.15, 101325, "t"},
+		{"above 40 °C", 313.16, 101325, "t"},
+		{"NaN T", nan, 101325, "t"},
+		{"Inf T", math.Inf(1), 101325, "t"},
+		{"below pv", 293.15, 2000, "p"},
+		{"zero p", 293.15, 0, "p"},
+		{"above 1 MPa", 293.15, 1e6 + 1, "p"},
+		{"NaN p", 293.15, nan, "p"},
+		{"Inf p", 293.15, math.Inf(1), "p"},
+	}
+	for _, tc := range tests {
+		fl, err := Seawater(tc.tK, tc.pPa)
+		if f := wtFieldOf(err); f != tc.field {
+			t.Errorf("Seawater %s: got %+v, %v; want *FieldError on %q", tc.name, fl, err, tc.field)
+		}
+	}
+}
