@@ -18,11 +18,10 @@ const (
 // Published fitting ranges of the explicit formulas. Outside them the
 // functions still answer inside the shared domain, but Run.Evaluate warns.
 const (
-	swameeJainReMin    = 5e3  // Swamee & Jain (1976)
-	swameeJainRRMin    = 1e-6 // Swamee & Jain (1976)
-	swameeJainRRMax    = 1e-2 // Swamee & Jain (1976)
-	laminarReLimit     = ReTurbulentMin
-	frictionRelRoughHi = FrictionRelRoughMax
+	swameeJainReMin = 5e3  // Swamee & Jain (1976)
+	swameeJainRRMin = 1e-6 // Swamee & Jain (1976)
+	swameeJainRRMax = 1e-2 // Swamee & Jain (1976)
+	laminarReLimit  = ReTurbulentMin
 )
 
 // FrictionMethod selects how the turbulent friction loss of a pipe run is

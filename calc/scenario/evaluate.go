@@ -72,6 +72,9 @@ func oneOf(v string, cs []Choice) bool {
 
 // fail records the first message for a parameter.
 func (e *eval) fail(param, msg string) {
+	if !strings.HasPrefix(msg, param+":") {
+		msg = param + ": " + msg
+	}
 	if _, ok := e.res.Errors[param]; !ok {
 		e.res.Errors[param] = msg
 	}

@@ -1,0 +1,56 @@
+// Package calc is Fieldhead's calculation core: liquid properties, units,
+// flow regime, friction and fitting losses, and the steady-flow energy
+// balance between two points of a liquid line. It has no user-interface
+// code and no mutable package state; it builds for native targets and for
+// GOOS=js GOARCH=wasm.
+//
+// # Units
+//
+// Every value inside the package is SI: metres, pascals, kilograms per cubic
+// metre, pascal seconds, cubic metres per second, kelvin, watts. Pressures
+// of points are absolute; gauge values are converted at the edge with the
+// site's barometric pressure. Heads are metres of the flowing liquid at its
+// own density, never "conventional" water columns (those are pressure
+// units, see the units table). Text with units is read by Parse and
+// ParsePressure and written by FormatValue; conversion factors follow NIST
+// SP 811 (2008), Appendix B.
+//
+// # The energy balance and its sign convention
+//
+// Point 1 is where the liquid comes from, point 2 where it goes. In metres
+// of the liquid,
+//
+//	p1/(ρg) + α1·V1²/(2g) + z1 + h_pump = p2/(ρg) + α2·V2²/(2g) + z2 + h_turbine + h_friction
+//
+// h_pump is head added by a pump, h_turbine head taken by a turbine,
+// h_friction the losses between the points (pipe friction plus fittings);
+// all three are positive in normal service, and a negative result is
+// reported with a warning, not hidden. g is the standard 9.806 65 m/s².
+// α is the kinetic-energy correction factor: 2 for laminar flow (parabolic
+// profile), 1 for turbulent flow unless a power-law profile estimate is
+// asked for. Re = ρVD/μ; laminar below 2300, transitional from 2300 to
+// 4000, turbulent above (common practice). Transitional flow is flagged and
+// computed at both bounds.
+//
+// # Friction
+//
+// Losses follow Darcy–Weisbach, h = f·(L/D)·V²/(2g), plus ΣK·V²/(2g) for
+// fittings. The Darcy friction factor is 64/Re in laminar flow and, in
+// turbulent flow, the Colebrook–White equation solved to machine precision,
+// with the explicit Swamee–Jain and Haaland formulas as alternatives;
+// Hazen–Williams is offered for water.
+//
+// # Liquids
+//
+// Water from 0 °C to 100 °C, compressed liquid up to 10 MPa: density from
+// IAPWS-IF97 region 1, viscosity from the IAPWS 2008 release, vapour
+// pressure from the IF97 saturation line. Outside a formulation's range the
+// functions return an error; they never extrapolate. A custom liquid takes
+// typed properties.
+//
+// # Errors
+//
+// Functions return errors rather than panicking. An error about an input is
+// a *FieldError whose Field is the share-link parameter (or quantity) at
+// fault, so the app can show it beside the field.
+package calc

@@ -1,0 +1,275 @@
+package calc
+
+import (
+	"errors"
+	"math"
+	"strings"
+	"testing"
+)
+
+// frHasWarning reports whether any warning contains sub.
+func frHasWarning(ws []string, sub string) bool {
+	for _, w := range ws {
+		if strings.Contains(w, sub) {
+			return true
+		}
+	}
+	return false
+}
+
+// frFinite reports whether every number of the result is finite.
+func frFinite(r RunResult) bool {
+	for _, v := range []float64{r.Velocity, r.Reynolds, r.Alpha, r.Friction, r.FrictionLow, r.FrictionHigh,
+		r.MajorLoss, r.MinorLoss, r.TotalLoss, r.TotalLossLow, r.TotalLossHigh, r.SumK} {
+		if math.IsNaN(v) || math.IsInf(v, 0) {
+			return false
+		}
+	}
+	return true
+}
+
+func TestRunLaminar(t *testing.T) {
+	// Liquid properties are inputs only (an oil-like liquid).
+	fl := Fluid{Density: 880, Viscosity: 0.088}
+	r := Run{Length: 100, Diameter: 0.05, Roughness: 0.045e-3, Fittings: []FittingCount{{"elbow90", 2}}}
+	q := 1e-3
+	res, err := r.Evaluate(fl, q)
+	if err != nil {
+		t.Fatal(err)
+	}
+	v := q / (math.Pi * 0.05 * 0.05 / 4)
+	// Hagen–Poiseuille law: h = 32·μ·L·V/(ρ·g·D²), the same as 64/Re in
+	// Darcy–Weisbach.
+	want := 32 * fl.Viscosity * r.Length * v / (fl.Density * StandardGravity * r.Diameter * r.Diameter)
+	if res.Regime != Laminar || math.Abs(res.MajorLoss/want-1) > 1e-12 {
+		t.Errorf("laminar run: %+v; want major loss %.15g", res, want)
+	}
+	// α = 2 laminar (common practice); f = 64/Re.
+	if res.Alpha != 2 || math.Abs(res.Friction*res.Reynolds-64) > 1e-12 {
+		t.Errorf("laminar run: α %g, f·Re %g", res.Alpha, res.Friction*res.Reynolds)
+	}
+	if !frHasWarning(res.Warnings, "turbulent-flow figures") {
+		t.Errorf("missing laminar fitting warning: %q", res.Warnings)
+	}
+}
+
+func TestRunTurbulentReference(t *testing.T) {
+	// Re = ρVD/μ = 1e5 exactly (V = 1 m/s, D = 0.1 m), ε/D = 1e-4: the
+	// Darcy–Weisbach loss with f from the mpmath Colebrook table
+	// (colebrook.tsv row 1e5, 1e-4: 0.0185138660774716426720453489416).
+	const fRef = 0.0185138660774716426720453489416
+	fl := Fluid{Density: 1000, Viscosity: 1e-3}
+	fits := []FittingCount{{"gate", 2}, {"elbow90lr", 6}, {"check_swing", 1}, {"exit", 1}}
+	r := Run{Length: 250, Diameter: 0.1, Roughness: 1e-5, Fittings: fits, ExtraK: 0.3}
+	q := math.Pi * 0.1 * 0.1 / 4 // V = 1 m/s
+	res, err := r.Evaluate(fl, q)
+	if err != nil {
+		t.Fatal(err)
+	}
+	hv := 1 / (2 * StandardGravity)
+	if res.Regime != Turbulent || res.Alpha != 1 || math.Abs(res.Reynolds/1e5-1) > 1e-14 {
+		t.Errorf("regime %v α %g Re %.17g", res.Regime, res.Alpha, res.Reynolds)
+	}
+	if math.Abs(res.Friction/fRef-1) > 1e-12 || math.Abs(res.MajorLoss/(fRef*2500*hv)-1) > 1e-12 {
+		t.Errorf("f %.17g (want %.17g), major %.15g m", res.Friction, fRef, res.MajorLoss)
+	}
+	// ΣK from the fitting table plus ExtraK; minor loss ΣK·V²/(2g).
+	sum := 0.3
+	for _, fc := range fits {
+		f, _ := LookupFitting(fc.Key)
+		sum += float64(fc.Count) * f.K
+	}
+	if math.Abs(res.SumK-sum) > 1e-12 || math.Abs(res.MinorLoss-sum*hv) > 1e-12 {
+		t.Errorf("ΣK %g (want %g), minor %g", res.SumK, sum, res.MinorLoss)
+	}
+	if res.TotalLoss != res.MajorLoss+res.MinorLoss || res.TotalLossLow != res.TotalLoss || res.TotalLossHigh != res.TotalLoss {
+		t.Errorf("totals inconsistent: %+v", res)
+	}
+	if len(res.Warnings) != 0 {
+		t.Errorf("unexpected warnings %q", res.Warnings)
+	}
+}
+
+func TestRunMethods(t *testing.T) {
+	fl := Fluid{Density: 1000, Viscosity: 1e-3}
+	q := 0.02
+	base := Run{Length: 100, Diameter: 0.15, Roughness: 0.15e-3}
+	re := Reynolds(1000, q/(math.Pi*0.15*0.15/4), 0.15, 1e-3)
+	for _, c := range []struct {
+		m  FrictionMethod
+		fn func(re, rr float64) (float64, error)
+	}{{MethodColebrook, Colebrook}, {MethodSwameeJain, SwameeJain}, {MethodHaaland, Haaland}} {
+		r := base
+		r.Method = c.m
+		res, err := r.Evaluate(fl, q)
+		want, _ := c.fn(re, 1e-3)
+		// Each method's f is the function of the same name (the run adds
+		// nothing of its own).
+		if err != nil || math.Abs(res.Friction/want-1) > 1e-13 {
+			t.Errorf("%v: f %.15g, want %.15g, %v", c.m, res.Friction, want, err)
+		}
+	}
+}
+
+func TestRunTransitional(t *testing.T) {
+	// Re = 3000 (V = 0.03 m/s, D = 0.1 m): transitional (common practice),
+	// bounds 64/Re and Colebrook; the design value is the larger loss.
+	fl := Fluid{Density: 1000, Viscosity: 1e-3}
+	r := Run{Length: 50, Diameter: 0.1, Roughness: 1e-5, ExtraK: 1}
+	q := 0.03 * math.Pi * 0.1 * 0.1 / 4
+	res, err := r.Evaluate(fl, q)
+	if err != nil {
+		t.Fatal(err)
+	}
+	fc, _ := Colebrook(res.Reynolds, 1e-4)
+	if res.Regime != Transitional || math.Abs(res.FrictionLow*res.Reynolds-64) > 1e-9 || res.FrictionHigh != fc {
+		t.Errorf("transitional: %+v (Colebrook %g)", res, fc)
+	}
+	if res.Friction != res.FrictionHigh || res.TotalLoss != res.TotalLossHigh || !(res.TotalLossLow < res.TotalLossHigh) || res.Alpha != 1 {
+		t.Errorf("transitional design values: %+v", res)
+	}
+	if !frHasWarning(res.Warnings, "transitional") || !frHasWarning(res.Warnings, "low for a liquid line") {
+		t.Errorf("warnings %q", res.Warnings)
+	}
+}
+
+func TestRunZeroFlow(t *testing.T) {
+	// q = 0: no flow, no loss, and no NaN (house rule).
+	fl := Fluid{Density: 1000, Viscosity: 1e-3}
+	for _, m := range []FrictionMethod{MethodColebrook, MethodSwameeJain, MethodHaaland, MethodHazenWilliams} {
+		r := Run{Length: 100, Diameter: 0.1, Roughness: 1e-5, Fittings: []FittingCount{{"globe", 1}}, Method: m, HazenC: 130}
+		res, err := r.Evaluate(fl, 0)
+		if err != nil {
+			t.Fatalf("%v: %v", m, err)
+		}
+		if !frFinite(res) || res.TotalLoss != 0 || res.MajorLoss != 0 || res.MinorLoss != 0 || res.TotalLossHigh != 0 || res.Velocity != 0 {
+			t.Errorf("%v at zero flow: %+v", m, res)
+		}
+		if !frHasWarning(res.Warnings, "no flow") {
+			t.Errorf("%v: warnings %q", m, res.Warnings)
+		}
+	}
+}
+
+func TestRunVelocityWarnings(t *testing.T) {
+	// Usual liquid-line velocities 0.3–3 m/s (common practice).
+	fl := Fluid{Density: 1000, Viscosity: 1e-3}
+	r := Run{Length: 10, Diameter: 0.1, Roughness: 1e-5}
+	a := math.Pi * 0.1 * 0.1 / 4
+	for _, c := range []struct {
+		v    float64
+		warn string
+	}{{0.2, "low"}, {1, ""}, {4, "high"}} {
+		res, err := r.Evaluate(fl, c.v*a)
+		if err != nil {
+			t.Fatal(err)
+		}
+		got := frHasWarning(res.Warnings, "velocity")
+		if (c.warn == "") == got || (c.warn != "" && !frHasWarning(res.Warnings, c.warn)) {
+			t.Errorf("V = %g m/s: warnings %q", c.v, res.Warnings)
+		}
+	}
+}
+
+func TestRunHazenWilliams(t *testing.T) {
+	fl := Fluid{Density: 998, Viscosity: 1.0e-3}
+	r := Run{Length: 640, Diameter: 0.2027, Method: MethodHazenWilliams, HazenC: 120, Fittings: []FittingCount{{"exit", 1}}}
+	q := 0.045
+	res, err := r.Evaluate(fl, q)
+	if err != nil {
+		t.Fatal(err)
+	}
+	// The run's major loss is the Hazen–Williams formula itself, and the
+	// reported Darcy f reproduces it through Darcy–Weisbach.
+	want, _ := HazenWilliamsHeadLoss(q, r.Diameter, r.Length, r.HazenC)
+	hv := res.Velocity * res.Velocity / (2 * StandardGravity)
+	if math.Abs(res.MajorLoss/want-1) > 1e-12 || math.Abs(res.Friction*r.Length/r.Diameter*hv/want-1) > 1e-12 {
+		t.Errorf("HW run: major %.15g, formula %.15g, f %g", res.MajorLoss, want, res.Friction)
+	}
+	// Equivalent Darcy f of clean steel pipe at this Re lies in the Moody
+	// chart's turbulent band 0.008–0.08 (Moody 1944, from memory).
+	if !(res.Friction > 0.008 && res.Friction < 0.08) {
+		t.Errorf("equivalent f %g", res.Friction)
+	}
+	var fe *FieldError
+	oil := Fluid{Density: 880, Viscosity: 0.02}
+	if _, err := r.Evaluate(oil, q); !errors.As(err, &fe) || fe.Field != "method" {
+		t.Errorf("HW with oil: %v, want *FieldError for \"method\"", err)
+	}
+	r.HazenC = 0
+	if _, err := r.Evaluate(fl, q); !errors.As(err, &fe) || fe.Field != "chw" {
+		t.Errorf("HW without C: %v, want *FieldError for \"chw\"", err)
+	}
+}
+
+func TestRunSwameeJainRangeWarning(t *testing.T) {
+	// Swamee & Jain (1976) fitted ε/D ≤ 0.01; at ε/D = 0.02 the run warns.
+	fl := Fluid{Density: 1000, Viscosity: 1e-3}
+	r := Run{Length: 10, Diameter: 0.1, Roughness: 2e-3, Method: MethodSwameeJain}
+	res, err := r.Evaluate(fl, 0.01)
+	if err != nil || !frHasWarning(res.Warnings, "Swamee–Jain") {
+		t.Errorf("warnings %q, %v", res.Warnings, err)
+	}
+}
+
+func TestRunFrictionMethodNames(t *testing.T) {
+	for _, m := range []FrictionMethod{MethodColebrook, MethodSwameeJain, MethodHaaland, MethodHazenWilliams} {
+		got, err := ParseFrictionMethod(strings.ToUpper(m.String()))
+		if err != nil || got != m {
+			t.Errorf("ParseFrictionMethod(%q) = %v, %v", m.String(), got, err)
+		}
+	}
+	for s, m := range map[string]FrictionMethod{"cw": MethodColebrook, "sj": MethodSwameeJain, "hw": MethodHazenWilliams} {
+		if got, err := ParseFrictionMethod(s); err != nil || got != m {
+			t.Errorf("ParseFrictionMethod(%q) = %v, %v", s, got, err)
+		}
+	}
+	var fe *FieldError
+	if _, err := ParseFrictionMethod("moody"); !errors.As(err, &fe) || fe.Field != "method" {
+		t.Errorf("ParseFrictionMethod(\"moody\"): %v", err)
+	}
+	if FrictionMethod(42).String() != "unknown" {
+		t.Error("String of an unknown method")
+	}
+}
+
+func TestRunValidation(t *testing.T) {
+	nan := math.NaN()
+	good := Run{Length: 100, Diameter: 0.1, Roughness: 1e-5}
+	water := Fluid{Density: 1000, Viscosity: 1e-3}
+	cases := []struct {
+		name  string
+		edit  func(r *Run, fl *Fluid, q *float64)
+		field string
+	}{
+		{"density 0", func(r *Run, fl *Fluid, q *float64) { fl.Density = 0 }, "rho"},
+		{"viscosity NaN", func(r *Run, fl *Fluid, q *float64) { fl.Viscosity = nan }, "mu"},
+		{"length negative", func(r *Run, fl *Fluid, q *float64) { r.Length = -1 }, "length"},
+		{"length Inf", func(r *Run, fl *Fluid, q *float64) { r.Length = math.Inf(1) }, "length"},
+		{"diameter 0", func(r *Run, fl *Fluid, q *float64) { r.Diameter = 0 }, "d"},
+		{"diameter NaN", func(r *Run, fl *Fluid, q *float64) { r.Diameter = nan }, "d"},
+		{"roughness negative", func(r *Run, fl *Fluid, q *float64) { r.Roughness = -1e-6 }, "eps"},
+		{"roughness NaN", func(r *Run, fl *Fluid, q *float64) { r.Roughness = nan }, "eps"},
+		{"ε/D above 0.05", func(r *Run, fl *Fluid, q *float64) { r.Roughness = 0.006 }, "eps"},
+		{"unknown fitting", func(r *Run, fl *Fluid, q *float64) { r.Fittings = []FittingCount{{"widget", 1}} }, "fit"},
+		{"negative count", func(r *Run, fl *Fluid, q *float64) { r.Fittings = []FittingCount{{"gate", -1}} }, "fit"},
+		{"ExtraK negative", func(r *Run, fl *Fluid, q *float64) { r.ExtraK = -0.5 }, "k"},
+		{"ExtraK NaN", func(r *Run, fl *Fluid, q *float64) { r.ExtraK = nan }, "k"},
+		{"method unknown", func(r *Run, fl *Fluid, q *float64) { r.Method = 7 }, "method"},
+		{"C out of range", func(r *Run, fl *Fluid, q *float64) { r.Method, r.HazenC = MethodHazenWilliams, 200 }, "chw"},
+		{"flow negative", func(r *Run, fl *Fluid, q *float64) { *q = -0.01 }, "q"},
+		{"flow NaN", func(r *Run, fl *Fluid, q *float64) { *q = nan }, "q"},
+		{"Re above 1e8", func(r *Run, fl *Fluid, q *float64) { fl.Viscosity = 1e-9 }, "q"},
+	}
+	for _, c := range cases {
+		r, fl, q := good, water, 0.01
+		c.edit(&r, &fl, &q)
+		var fe *FieldError
+		if res, err := r.Evaluate(fl, q); !errors.As(err, &fe) || fe.Field != c.field {
+			t.Errorf("%s: %+v, %v; want *FieldError for %q", c.name, res, err, c.field)
+		}
+	}
+	if _, err := good.Evaluate(water, 0.01); err != nil {
+		t.Errorf("good run: %v", err)
+	}
+}

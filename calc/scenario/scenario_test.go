@@ -1,0 +1,250 @@
+package scenario
+
+import (
+	"fmt"
+	"math"
+	"strings"
+	"testing"
+
+	"fieldhead/calc"
+)
+
+func TestParseEncodeRoundTrip(t *testing.T) {
+	q := Demo().Encode()
+	s, err := Parse("?" + q)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := s.Encode(); got != q {
+		t.Errorf("round trip changed the link:\n got %s\nwant %s", got, q)
+	}
+	// Units and lists stay readable in the link.
+	for _, want := range []string{"q=45L/s", "fit=entry_sharp:1,gate:2", "z2=251m"} {
+		if !strings.Contains(q, want) {
+			t.Errorf("link %q lacks %q", q, want)
+		}
+	}
+}
+
+func TestParseLinkErrors(t *testing.T) {
+	tests := []struct {
+		query string
+		want  string // in the error
+		kept  string // a parameter that must survive
+	}{
+		{"z1=3m&zz=4", `"zz": not a Fieldhead parameter`, "z1"},
+		{"z1=3m&z1=4m", "z1: given twice", "z1"},
+		{"z1=3m&p1=%zz", "p1", "z1"},
+		{"z1=3m&" + strings.Repeat("a", MaxQueryBytes), "longer than", ""},
+		{"z1=3m&name=%ff%fe", "not valid UTF-8", "z1"},
+	}
+	for _, tc := range tests {
+		s, err := Parse(tc.query)
+		if err == nil || !strings.Contains(err.Error(), tc.want) {
+			t.Errorf("Parse(%.40q): error %v, want it to contain %q", tc.query, err, tc.want)
+		}
+		if tc.kept != "" && !s.Has(tc.kept) {
+			t.Errorf("Parse(%.40q) dropped %s", tc.query, tc.kept)
+		}
+	}
+}
+
+func TestDemo(t *testing.T) {
+	r := Evaluate(Demo())
+	if len(r.Errors) > 0 {
+		t.Fatalf("the demo has errors: %v", r.Errors)
+	}
+	if r.Balance == nil || r.Run == nil || r.Convert == nil {
+		t.Fatalf("the demo must fill the balance, the run and the conversion: %+v", r)
+	}
+	// Sanity, not a reference: the static lift is 39 m, so the pump head
+	// must exceed it by the (positive) losses.
+	if !(r.Balance.Value > 39 && r.Balance.FrictionHead > 0) {
+		t.Errorf("pump head %.3g m with losses %.3g m", r.Balance.Value, r.Balance.FrictionHead)
+	}
+}
+
+// TestBadInputs is the catalogue of bad inputs: each names the parameter
+// whose message must appear, with a piece of that message, and a parameter
+// whose result must still be computed (nothing else is lost).
+func TestBadInputs(t *testing.T) {
+	base := "liq=water&t=18C&alt=210m&p1=0kPa&z1=212m&v1=0&p2=0kPa&z2=251m&v2=0&q=45L/s&solve=hp" +
+		"&l=640m&d=202.7mm&mat=steel&cv=430kPa"
+	set := func(kv string) string {
+		k, v, _ := strings.Cut(kv, "=")
+		s, _ := Parse(base)
+		s.Set(k, v)
+		return s.Encode()
+	}
+	tests := []struct {
+		query, param, msg string
+		stillConvert      bool // the Convert part must survive
+	}{
+		{set("z1=") + "&z1=", "z1", "enter the elevation", true},
+		{set("z1=high"), "z1", "expected a length", true},
+		{set("z1=1e999m"), "z1", "", true},
+		{set("z1=NaN"), "z1", "", true},
+		{set("z1=Inf m"), "z1", "", true},
+		{set("z2=12kPa"), "z2", "length", true},
+		{set("d=0mm"), "d", "above zero", true},
+		{set("d=-5mm"), "d", "above zero", true},
+		{set("d=abc"), "d", "length", true},
+		{set("l=0m"), "l", "above zero", true},
+		{set("l=-3m"), "l", "above zero", true},
+		{set("q=12"), "", "", true}, // a bare number takes L/s: not an error
+		{set("q=12kg"), "q", "flow", true},
+		{set("q=-5L/s"), "q", "negative", true},
+		{set("t=150C"), "t", "", false},
+		{set("t=-10C"), "t", "", false},
+		{set("t=warm"), "t", "temperature", false},
+		{set("t=18kPa"), "t", "temperature", false},
+		{set("p1=4m"), "p1", "pressure", true},
+		{set("p1ref=x"), "p1ref", "gauge", true},
+		{set("mat=unobtainium"), "mat", "", true},
+		{set("fit=teleporter:2"), "fit", "", true},
+		{set("fit=gate:many"), "fit", "whole number", true},
+		{set("fit=gate:2,gate:1"), "fit", "twice", true},
+		{set("k=-1"), "k", "zero or more", true},
+		{set("fm=guess"), "fm", "", true},
+		{set("solve=everything"), "solve", "solved for", true},
+		{set("alpha=3"), "alpha", "auto", true},
+		{set("liq=mercury"), "liq", "water or custom", false},
+		{set("units=imperial"), "units", "si or us", true},
+		{set("alt=99999m"), "alt", "", false},
+		{set("baro=-3kPa"), "baro", "above zero", false},
+		{set("view=map"), "view", "not a view", true},
+		{set("eps=-1mm"), "eps", "negative", true},
+		{set("chw=0"), "chw", "above zero", true},
+		{set("name=<script>alert(1)</script>"), "", "", true}, // text, kept as text
+		{set("cv=loud"), "cv", "pressure", false},
+		{set("cv=3kg"), "cv", "pressure", false},
+	}
+	for _, tc := range tests {
+		s, err := Parse(tc.query)
+		if err != nil {
+			t.Errorf("%s: the link itself failed: %v", tc.query, err)
+			continue
+		}
+		r := Evaluate(s)
+		if tc.param != "" {
+			m, ok := r.Errors[tc.param]
+			if !ok {
+				t.Errorf("%s: no message on %s (errors %v)", tc.query, tc.param, r.Errors)
+				continue
+			}
+			if !strings.HasPrefix(m, tc.param+":") {
+				t.Errorf("%s: message %q does not start with the field's name", tc.query, m)
+			}
+			if !strings.Contains(m, tc.msg) {
+				t.Errorf("%s: message %q lacks %q", tc.query, m, tc.msg)
+			}
+		} else if len(r.Errors) > 0 {
+			t.Errorf("%s: unexpected errors %v", tc.query, r.Errors)
+		}
+		if tc.stillConvert && r.Convert == nil {
+			t.Errorf("%s: the conversion was lost", tc.query)
+		}
+		// Whatever was typed is still in the scenario.
+		for _, p := range Params {
+			if strings.Contains(tc.query, p+"=") && !s.Has(p) && p != "z1" {
+				t.Errorf("%s: %s was dropped", tc.query, p)
+			}
+		}
+		checkFinite(t, tc.query, r)
+	}
+}
+
+// checkFinite fails on a NaN or Inf in a result reported as computed.
+func checkFinite(t *testing.T, what string, r Result) {
+	t.Helper()
+	bad := func(name string, v float64) {
+		if math.IsNaN(v) || math.IsInf(v, 0) {
+			t.Errorf("%s: %s is %v in a result reported as valid", what, name, v)
+		}
+	}
+	if r.Fluid != nil {
+		bad("density", r.Fluid.Density)
+		bad("viscosity", r.Fluid.Viscosity)
+	}
+	bad("site pressure", r.SitePressure)
+	if r.Run != nil {
+		bad("run velocity", r.Run.Velocity)
+		bad("run loss", r.Run.TotalLoss)
+		bad("run f", r.Run.Friction)
+	}
+	if b := r.Balance; b != nil {
+		bad("balance value", b.Value)
+		bad("pump power", b.PumpPower)
+		for _, it := range b.Budget {
+			bad("budget "+it.Key, it.Head)
+		}
+	}
+	if c := r.Convert; c != nil {
+		bad("convert gauge", c.Gauge)
+		bad("convert head", c.Head)
+	}
+}
+
+func TestSplit(t *testing.T) {
+	tests := []struct{ in, num, unit string }{
+		{"45 L/s", "45", "L/s"}, {"-18kPa", "-18", "kPa"}, {"1e-3 m", "1e-3", "m"},
+		{"12,5psi", "12,5", "psi"}, {"3", "3", ""}, {"  ", "", ""}, {"2.5e3Pa", "2.5e3", "Pa"},
+		{"5 ft", "5", "ft"}, {"7e", "7", "e"},
+	}
+	for _, tc := range tests {
+		n, u := Split(tc.in)
+		if n != tc.num || u != tc.unit {
+			t.Errorf("Split(%q) = %q, %q; want %q, %q", tc.in, n, u, tc.num, tc.unit)
+		}
+	}
+}
+
+func TestChoicesAndUnits(t *testing.T) {
+	for _, p := range []string{"view", "units", "liq", "solve", "alpha", "fm", "mat", "nps", "sch", "fit", "p1ref"} {
+		if len(Choices(p)) == 0 {
+			t.Errorf("Choices(%s) is empty", p)
+		}
+	}
+	for p := range fields {
+		for _, us := range []bool{false, true} {
+			us := UnitChoices(p, us)
+			if len(us) < 2 {
+				t.Errorf("UnitChoices(%s) = %v", p, us)
+			}
+		}
+	}
+}
+
+func FuzzScenario(f *testing.F) {
+	f.Add(Demo().Encode())
+	f.Add("z1=3m&z1=4m")
+	f.Add("solve=q&l=1m&d=1mm&eps=0&q=0&p1=0&p2=0&z1=0&z2=0&v1=0&v2=0&liq=water&t=20C")
+	f.Add("liq=custom&rho=1e-300kg/m3&mu=1e300Pa.s&pv=0&cv=1e308kPa")
+	f.Add("%zz&name=%3Cb%3E")
+	f.Fuzz(func(t *testing.T, q string) {
+		s, _ := Parse(q)
+		r := Evaluate(s)
+		checkFinite(t, fmt.Sprintf("%.60q", q), r)
+		for p, m := range r.Errors {
+			if !strings.HasPrefix(m, p+":") {
+				t.Errorf("%q: message %q on %s does not name its field", q, m, p)
+			}
+		}
+		// The link survives a round trip.
+		s2, err := Parse(s.Encode())
+		if err != nil || s2.Encode() != s.Encode() {
+			t.Errorf("%q: round trip failed: %v", q, err)
+		}
+	})
+}
+
+func ExampleEvaluate() {
+	s, _ := Parse("liq=water&t=20C&alt=0m&p1=0kPa&z1=10m&v1=0&p2=150kPa&z2=18m&d2=50mm" +
+		"&q=4L/s&solve=hp&l=60m&d=50mm&mat=pvc&fit=elbow90:3,gate:1")
+	r := Evaluate(s)
+	fmt.Println("pump head", ShowParam("hp", r.Balance.Value, false))
+	fmt.Println("regime", r.Run.Regime, "at Re", calc.FormatNumber(r.Run.Reynolds, 4))
+	// Output:
+	// pump head 28.64 m
+	// regime turbulent at Re 101500
+}
