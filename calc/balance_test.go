@@ -50,8 +50,8 @@ func TestBrent(t *testing.T) {
 // no losses: V = √(2gh) (Torricelli's law).
 func TestBalanceTorricelli(t *testing.T) {
 	b := Balance{Fluid: testLiquid, SitePressure: 101325,
-		In:  Point{P: 101325, Z: 5},
-		Out: Point{P: 101325, Z: 0, D: 0.02},
+		In:      Point{P: 101325, Z: 5},
+		Out:     Point{P: 101325, Z: 0, D: 0.02},
 		Unknown: SolveFlow}
 	r, err := b.Solve()
 	if err != nil {
