@@ -164,7 +164,7 @@ func parseDecimal(num string) (float64, string) {
 		k := strings.IndexByte(mant, ',')
 		whole, frac := strings.TrimPrefix(mant[:k], "-"), mant[k+1:]
 		if len(frac) == 3 && len(whole) >= 1 && len(whole) <= 3 && whole[0] != '0' {
-			return 0, "%s is ambiguous (thousands or decimals?); write it without grouping, or with a point"
+			return 0, "%s is ambiguous; write " + mant[:k] + frac + " (no grouping) or " + mant[:k] + "." + frac + " (decimal point)"
 		}
 		mant = mant[:k] + "." + frac
 	}
