@@ -13,7 +13,7 @@
 //
 // General:
 //
-//	view    balance | convert | regime        the view the link opens on
+//	view    balance | convert | regime | line | pump | report   the view the link opens on
 //	units   si | us                          default and display units (default si)
 //	name    free text                        a title for the sheet (shown as text, never markup)
 //
@@ -67,6 +67,44 @@
 //
 //	cv      a pressure, water-column or head value to convert, e.g. 430kPa, 12mH2O, 40ft
 //	cvref   g | a                            whether cv is gauge (default) or absolute
+//
+// A line of several segments (the Line view), numbered from point 1, N from
+// 1 to 20; each takes the single-run parameters under the prefix sN.:
+//
+//	sN.l sN.d sN.nps sN.sch sN.mat sN.eps sN.fit sN.k   as for the single run
+//	sN.z    elevation of the segment's end, e.g. s1.z=214.5m
+//
+// When segments are given they are the friction path of the balance (and a
+// single run l must not be given as well). Losses where the diameter
+// changes between segments are added automatically.
+//
+// The pump (the Pump view). Lists carry one unit, written after the last
+// value; every list has one value per data-sheet point:
+//
+//	pq      data-sheet flows, e.g. 0,20,40,55,70L/s
+//	ph      data-sheet heads, e.g. 62,59,52,44,33m
+//	peff    data-sheet efficiencies (optional), e.g. 0,55,72,76,70%
+//	pnpsh   data-sheet NPSH required (optional), e.g. 2,2.2,2.8,3.6,4.9m
+//	spd     speed as a share of the data sheet's, e.g. 95% (affinity laws)
+//	pumps   1 | 2p | 2s | 3p | 3s            identical pumps, in parallel (p) or series (s)
+//	zp      pump centreline elevation (for NPSH), e.g. 214.5m
+//	pafter  the pump sits after segment N (default 1 with segments, else at point 1)
+//	npshr   NPSH required, typed (instead of the pnpsh list)
+//
+// With a pump curve and solve=hp, the operating point is where the pump
+// curve meets the system curve; q is then only the duty asked for.
+//
+// The field check of a running pump, from gauge readings:
+//
+//	ps, pd  suction and discharge gauge readings (gauge pressure)
+//	zs, zd  the gauges' heights (any common datum), e.g. zs=0m&zd=0.8m
+//	ds, dd  inside diameters of the pipe at the gauges
+//	qm      measured flow
+//	pin     measured electrical input to the motor, e.g. 31kW
+//
+// The turbine side (with solve=ht):
+//
+//	etat    turbine-and-generator efficiency, e.g. 82%
 //
 // Every parameter is optional in the link; a computation that needs a
 // missing one reports it by name ("t: enter the liquid temperature").

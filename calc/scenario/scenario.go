@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"net/url"
 	"sort"
+	"strconv"
 	"strings"
 	"unicode/utf8"
 )
@@ -23,12 +24,32 @@ var Params = []string{
 	"q", "hp", "ht", "hf", "solve", "alpha",
 	"l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw",
 	"cv", "cvref",
+	"pq", "ph", "peff", "pnpsh", "spd", "pumps", "zp", "pafter", "npshr",
+	"ps", "pd", "zs", "zd", "ds", "dd", "qm", "pin", "etat",
 }
 
+// MaxSegments is the most pipe segments a line may have.
+const MaxSegments = 20
+
+// SegmentFields are the per-segment parameters: segment N's are written
+// sN.l, sN.d, … (N from 1 to MaxSegments). They mean what the single-run
+// parameters of the same name mean; sN.z is the elevation of the
+// segment's end.
+var SegmentFields = []string{"l", "d", "nps", "sch", "mat", "eps", "fit", "k", "z"}
+
+// SegmentParam returns the name of field f of segment n (1-based).
+func SegmentParam(n int, f string) string { return "s" + strconv.Itoa(n) + "." + f }
+
+// known maps every parameter name to its place in the canonical order.
 var known = func() map[string]int {
-	m := make(map[string]int, len(Params))
+	m := make(map[string]int, len(Params)+MaxSegments*len(SegmentFields))
 	for i, p := range Params {
 		m[p] = i
+	}
+	for n := 1; n <= MaxSegments; n++ {
+		for j, f := range SegmentFields {
+			m[SegmentParam(n, f)] = len(Params) + (n-1)*len(SegmentFields) + j
+		}
 	}
 	return m
 }()

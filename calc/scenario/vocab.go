@@ -38,18 +38,51 @@ var fields = map[string]field{
 	"d":    {calc.Length, "mm", "in"},
 	"eps":  {calc.Length, "mm", "in"},
 	"cv":   {calc.Pressure, "kPa", "psi"},
+	// The pump: data-sheet lists (one unit for the whole list, written at
+	// its end: pq=0,20,40L/s) and the speed.
+	"pq":    {calc.Flow, "L/s", "gpm"},
+	"ph":    {calc.Length, "m", "ft"},
+	"peff":  {calc.Dimensionless, "%", "%"},
+	"pnpsh": {calc.Length, "m", "ft"},
+	"spd":   {calc.Dimensionless, "%", "%"},
+	"zp":    {calc.Length, "m", "ft"},
+	"npshr": {calc.Length, "m", "ft"},
+	// The field check's readings.
+	"ps":   {calc.Pressure, "kPa", "psi"},
+	"pd":   {calc.Pressure, "kPa", "psi"},
+	"zs":   {calc.Length, "m", "ft"},
+	"zd":   {calc.Length, "m", "ft"},
+	"ds":   {calc.Length, "mm", "in"},
+	"dd":   {calc.Length, "mm", "in"},
+	"qm":   {calc.Flow, "L/s", "gpm"},
+	"pin":  {calc.Power, "kW", "hp"},
+	"etat": {calc.Dimensionless, "%", "%"},
+}
+
+// baseParam maps a segment parameter to the single-run parameter it
+// mirrors ("s3.d" → "d"); a segment's end elevation reads like z1.
+func baseParam(param string) string {
+	if len(param) > 2 && param[0] == 's' {
+		if _, f, ok := strings.Cut(param, "."); ok {
+			if f == "z" {
+				return "z1"
+			}
+			return f
+		}
+	}
+	return param
 }
 
 // DimensionOf reports the kind of quantity a parameter holds; ok is false
 // for parameters that hold a choice, a count or free text.
 func DimensionOf(param string) (calc.Dimension, bool) {
-	f, ok := fields[param]
+	f, ok := fields[baseParam(param)]
 	return f.dim, ok
 }
 
 // DefaultUnit is the unit a value of param takes when typed without one.
 func DefaultUnit(param string, us bool) string {
-	f, ok := fields[param]
+	f, ok := fields[baseParam(param)]
 	if !ok {
 		return ""
 	}
@@ -62,7 +95,7 @@ func DefaultUnit(param string, us bool) string {
 // UnitChoices lists unit symbols for a picker beside param, the default
 // first. Convert's value (cv) also offers heads of the liquid (m, ft).
 func UnitChoices(param string, us bool) []string {
-	f, ok := fields[param]
+	f, ok := fields[baseParam(param)]
 	if !ok {
 		return nil
 	}
@@ -119,9 +152,10 @@ type Choice struct {
 // Choices lists the options of an enumerated parameter (view, units, liq,
 // solve, alpha, fm, mat, nps, sch, p1ref, p2ref, cvref, fit), or nil.
 func Choices(param string) []Choice {
-	switch param {
+	switch baseParam(param) {
 	case "view":
-		return []Choice{{"balance", "Balance"}, {"convert", "Convert"}, {"regime", "Regime"}}
+		return []Choice{{"balance", "Balance"}, {"convert", "Convert"}, {"regime", "Regime"},
+			{"line", "Line"}, {"pump", "Pump"}, {"report", "Report"}}
 	case "units":
 		return []Choice{{"si", "SI"}, {"us", "US"}}
 	case "liq":
@@ -141,6 +175,9 @@ func Choices(param string) []Choice {
 			{calc.MethodHaaland.String(), "Haaland (explicit)"},
 			{calc.MethodHazenWilliams.String(), "Hazen–Williams (water)"},
 		}
+	case "pumps":
+		return []Choice{{"1", "one pump"}, {"2p", "two in parallel"}, {"2s", "two in series"},
+			{"3p", "three in parallel"}, {"3s", "three in series"}}
 	case "p1ref", "p2ref", "cvref":
 		return []Choice{{"g", "gauge"}, {"a", "absolute"}}
 	case "mat":

@@ -1,0 +1,73 @@
+# Fieldhead — build, serve, test and package the static site.
+#
+#   make run     build everything and serve it on http://localhost:8000/
+#   make test    every check CI runs (installs missing Debian packages)
+#   make dist    a static folder for any web host: make dist PREFIX=/tools/fieldhead
+#   make refs    regenerate the reference tables in testdata/refs from Debian's libraries
+
+SHELL  := /bin/bash
+GO     ?= go
+BUILD  := build
+SITE   := $(BUILD)/site
+WASM   := $(BUILD)/app.wasm
+DIST   ?= dist
+PREFIX ?=
+ADDR   ?= :8000
+
+# Debian packages the checks need: the browser for the page test, the
+# reference libraries for make refs and the reference checks.
+APT_PKGS := chromium python3-iapws python3-mpmath units
+
+.PHONY: all run site wasm dist test deps fmt vet unit browser refs clean
+
+all: site
+
+wasm:
+	@mkdir -p $(BUILD)
+	GOOS=js GOARCH=wasm $(GO) build -trimpath -ldflags="-s -w" -o $(WASM) ./app
+
+site: wasm
+	$(GO) run ./app -out $(SITE) -wasm $(WASM) -prefix "$(PREFIX)"
+
+run: wasm
+	@echo "Fieldhead: open http://localhost$(ADDR)/ once the site is written"
+	$(GO) run ./app -out $(SITE) -wasm $(WASM) -serve $(ADDR)
+
+dist: wasm
+	$(GO) run ./app -out $(DIST) -wasm $(WASM) -prefix "$(PREFIX)"
+	@echo "Fieldhead: copy the contents of $(DIST)/ to the folder your web server serves at $(if $(PREFIX),$(PREFIX)/,/)"
+
+deps:
+	@missing=""; \
+	for p in $(APT_PKGS); do dpkg -s $$p >/dev/null 2>&1 || missing="$$missing $$p"; done; \
+	if [ -n "$$missing" ]; then \
+		echo "Installing Debian packages:$$missing"; \
+		sudo=""; [ "$$(id -u)" -eq 0 ] || sudo=sudo; \
+		$$sudo apt-get update && DEBIAN_FRONTEND=noninteractive $$sudo apt-get install -y$$missing; \
+	fi
+
+fmt:
+	@bad="$$(gofmt -l app calc)"; if [ -n "$$bad" ]; then echo "gofmt needed:"; echo "$$bad"; exit 1; fi
+
+vet:
+	$(GO) vet ./...
+	GOOS=js GOARCH=wasm $(GO) vet ./...
+
+unit:
+	$(GO) test $$($(GO) list ./... | grep -v '^fieldhead/app$$')
+
+browser: site
+	FIELDHEAD_BROWSER=1 FIELDHEAD_SITE="$(abspath $(SITE))" $(GO) test -count=1 -v ./app
+
+test: deps fmt vet unit browser
+
+refs: deps
+	@set -e; for f in testdata/refs/gen/*; do \
+		case "$$f" in \
+		*.py) echo "== $$f"; /usr/bin/python3 "$$f" ;; \
+		*.sh) echo "== $$f"; bash "$$f" ;; \
+		esac; \
+	done
+
+clean:
+	rm -rf $(BUILD) $(DIST)

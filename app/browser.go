@@ -1,0 +1,133 @@
+package main
+
+import (
+	"fieldhead/calc/scenario"
+
+	"github.com/maxence-charriere/go-app/v10/pkg/app"
+)
+
+// storageGet reads a localStorage entry; "" when absent or when storage is
+// not available (private mode, blocked).
+func storageGet(key string) (v string) {
+	defer func() {
+		if recover() != nil {
+			v = ""
+		}
+	}()
+	ls := app.Window().Get("localStorage")
+	if !ls.Truthy() {
+		return ""
+	}
+	item := ls.Call("getItem", key)
+	if !item.Truthy() {
+		return ""
+	}
+	return item.String()
+}
+
+// storageSet writes a localStorage entry, ignoring a full or blocked store
+// (the link still holds the scenario).
+func storageSet(key, value string) {
+	defer func() { _ = recover() }()
+	ls := app.Window().Get("localStorage")
+	if ls.Truthy() {
+		ls.Call("setItem", key, value)
+	}
+}
+
+// replaceQuery puts the scenario in the address bar without a new history
+// entry, keeping the path (and so a deployment sub-path).
+func replaceQuery(q string) {
+	defer func() { _ = recover() }()
+	path := app.Window().Get("location").Get("pathname").String()
+	if q != "" {
+		path += "?" + q
+	}
+	app.Window().Get("history").Call("replaceState", nil, "", path)
+}
+
+// nowText is the local date and time for the printed sheet.
+func nowText() string {
+	if !app.IsClient {
+		return ""
+	}
+	return app.Window().Get("Date").New().Call("toLocaleString").String()
+}
+
+// onCopy copies the share link: the asynchronous clipboard where the
+// browser allows it, else the link appears selected for a manual copy.
+func (s *sheet) onCopy(ctx app.Context, e app.Event) {
+	link := s.link()
+	clip := app.Window().Get("navigator").Get("clipboard")
+	if !clip.Truthy() {
+		s.fallbackCopy(ctx)
+		return
+	}
+	var ok, fail app.Func
+	release := func() {
+		ok.Release()
+		fail.Release()
+	}
+	ok = app.FuncOf(func(this app.Value, args []app.Value) any {
+		ctx.Dispatch(func(ctx app.Context) {
+			s.copyNote = "Link copied. Paste it into a message or a note."
+			s.showLink = true
+		})
+		release()
+		return nil
+	})
+	fail = app.FuncOf(func(this app.Value, args []app.Value) any {
+		ctx.Dispatch(func(ctx app.Context) { s.fallbackCopy(ctx) })
+		release()
+		return nil
+	})
+	clip.Call("writeText", link).Call("then", ok, fail)
+}
+
+// fallbackCopy shows the link in a read-only box, selects it and tries the
+// old copy command.
+func (s *sheet) fallbackCopy(ctx app.Context) {
+	s.showLink = true
+	s.copyNote = "Select the link below and copy it."
+	ctx.Defer(func(ctx app.Context) {
+		defer func() { _ = recover() }()
+		el := app.Window().GetElementByID("share-url")
+		if !el.Truthy() {
+			return
+		}
+		el.Call("focus")
+		el.Call("select")
+		if app.Window().Get("document").Call("execCommand", "copy").Bool() {
+			ctx.Dispatch(func(ctx app.Context) { s.copyNote = "Link copied (it is also shown below)." })
+		}
+	})
+}
+
+// onPrint opens the browser's print dialog; the print stylesheet turns the
+// page into a sheet.
+func (s *sheet) onPrint(ctx app.Context, e app.Event) {
+	app.Window().Call("print")
+}
+
+// onDemo loads the demo scenario, after asking when the sheet has content.
+func (s *sheet) onDemo(ctx app.Context, e app.Event) {
+	if s.query != "" && s.query != scenario.Demo().Encode() &&
+		!app.Window().Call("confirm", "Replace this sheet with the demo? Copy its link first if you need it.").Bool() {
+		return
+	}
+	s.adopt(scenario.Demo(), "")
+	s.copyNote, s.showLink = "", false
+}
+
+// onBlank starts an empty sheet on the same view and unit system.
+func (s *sheet) onBlank(ctx app.Context, e app.Event) {
+	if s.query != "" && !app.Window().Call("confirm", "Start a new, empty sheet? Copy this sheet's link first if you need it.").Bool() {
+		return
+	}
+	var sc scenario.Scenario
+	for _, p := range []string{"view", "units"} {
+		_ = sc.Set(p, s.scen.Get(p))
+	}
+	s.adopt(sc, "")
+	s.copyNote, s.showLink = "", false
+}

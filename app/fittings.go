@@ -1,0 +1,120 @@
+package main
+
+import (
+	"strconv"
+	"strings"
+
+	"fieldhead/calc/scenario"
+
+	"github.com/maxence-charriere/go-app/v10/pkg/app"
+)
+
+// fitEntry is one line of the fitting list as the editor shows it.
+type fitEntry struct {
+	key   string
+	count int
+}
+
+// fitEntries reads the fit text for the editor; ok is false when the text
+// is not a list the editor can show (the raw box then stays the way in).
+func fitEntries(text string) ([]fitEntry, bool) {
+	fc, err := scenario.ParseFittings(text)
+	if err != nil {
+		return nil, false
+	}
+	out := make([]fitEntry, 0, len(fc))
+	for _, f := range fc {
+		out = append(out, fitEntry{f.Key, f.Count})
+	}
+	return out, true
+}
+
+// fitText writes the editor's list back in the link's form.
+func fitText(list []fitEntry) string {
+	parts := make([]string, 0, len(list))
+	for _, f := range list {
+		if f.count > 0 {
+			parts = append(parts, f.key+":"+strconv.Itoa(f.count))
+		}
+	}
+	return strings.Join(parts, ",")
+}
+
+// fitLabel is the name of a fitting key.
+func fitLabel(key string) string {
+	for _, c := range scenario.Choices("fit") {
+		if c.Value == key {
+			return c.Label
+		}
+	}
+	return key
+}
+
+// setFittings stores a new list from the editor.
+func (s *sheet) setFittings(list []fitEntry) {
+	s.setParam("fit", fitText(list))
+	s.changed()
+}
+
+// fittings draws the fitting editor: one line per kind with − and +, a
+// picker to add a kind, and the list as text for those who prefer typing.
+func (s *sheet) fittings() app.UI {
+	s.shown["fit"] = true
+	list, ok := fitEntries(s.scen.Get("fit"))
+	var rows []app.UI
+	if ok {
+		for i, f := range list {
+			i, f := i, f
+			rows = append(rows, app.Li().Class("fit").Body(
+				app.Span().Class("fit-name").Text(fitLabel(f.key)),
+				app.Div().Class("stepper").Body(
+					app.Button().Type("button").Class("step").Aria("label", "one fewer "+fitLabel(f.key)).Text("−").
+						OnClick(func(ctx app.Context, e app.Event) {
+							list[i].count--
+							s.setFittings(list)
+						}),
+					app.Span().Class("count").Text(strconv.Itoa(f.count)),
+					app.Button().Type("button").Class("step").Aria("label", "one more "+fitLabel(f.key)).Text("+").
+						OnClick(func(ctx app.Context, e app.Event) {
+							list[i].count++
+							s.setFittings(list)
+						}),
+				),
+			))
+		}
+	}
+	var add []app.UI
+	add = append(add, app.Option().Value("").Selected(true).Text("Add a fitting…"))
+	for _, c := range scenario.Choices("fit") {
+		add = append(add, app.Option().Value(c.Value).Text(c.Label))
+	}
+	body := []app.UI{
+		app.Div().Class("lbl").Text("Fittings"),
+	}
+	if len(rows) > 0 {
+		body = append(body, app.Ul().Class("fits").Body(rows...))
+	}
+	if ok {
+		body = append(body, app.Select().ID("add-fit").Class("pick").Aria("label", "add a fitting").
+			OnChange(func(ctx app.Context, e app.Event) {
+				key := ctx.JSSrc().Get("value").String()
+				if key == "" {
+					return
+				}
+				for i := range list {
+					if list[i].key == key {
+						list[i].count++
+						s.setFittings(list)
+						return
+					}
+				}
+				s.setFittings(append(list, fitEntry{key, 1}))
+			}).Body(add...))
+	}
+	body = append(body,
+		app.Details().Class("astext").Open(!ok || s.res.Errors["fit"] != "").Body(
+			app.Summary().Text("Fittings as text"),
+			s.plain("fit", "key:count, comma separated", "", false),
+		))
+	return app.Div().Class("field fittings").Body(body...)
+}

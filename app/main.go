@@ -1,0 +1,32 @@
+// Command app is Fieldhead: in the browser (GOOS=js GOARCH=wasm) it runs the
+// calculator page; natively it writes the static site and can serve it.
+//
+// Everything the page computes comes from fieldhead/calc/scenario; this
+// package only renders inputs and results and keeps the share link, the
+// saved state and the page chrome.
+package main
+
+import (
+	"sync"
+
+	"github.com/maxence-charriere/go-app/v10/pkg/app"
+)
+
+func main() {
+	registerRoutes()
+	app.RunWhenOnBrowser()
+	native() // not reached in the browser: RunWhenOnBrowser blocks there
+}
+
+var routesOnce sync.Once
+
+// registerRoutes tells go-app which component each path shows. The site
+// writer needs the routes too: an unrouted path pre-renders as "not found".
+func registerRoutes() {
+	routesOnce.Do(func() {
+		app.Route("/", newSheet)
+		// Any other path under the site (index.html, a bookmark with a
+		// stray path) opens the same sheet: the query carries the scenario.
+		app.RouteWithRegexp("^/.*", newSheet)
+	})
+}

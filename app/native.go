@@ -1,0 +1,205 @@
+//go:build !wasm
+
+package main
+
+import (
+	"crypto/sha256"
+	"encoding/hex"
+	"errors"
+	"flag"
+	"fmt"
+	"io/fs"
+	"log"
+	"net"
+	"net/http"
+	"os"
+	"path/filepath"
+	"strconv"
+	"strings"
+
+	"github.com/maxence-charriere/go-app/v10/pkg/app"
+)
+
+// native is the command-line role: write the static site, and serve it
+// when asked.
+func native() {
+	out := flag.String("out", "build/site", "folder to write the static site into")
+	wasm := flag.String("wasm", "build/app.wasm", "the compiled app.wasm to put in the site")
+	assets := flag.String("web", "web", "folder of our static assets (stylesheet, icon)")
+	prefix := flag.String("prefix", "", "URL path the site is deployed under, e.g. /tools/fieldhead")
+	serve := flag.String("serve", "", "after writing, serve the site on this address, e.g. :8000")
+	flag.Parse()
+
+	p, err := cleanPrefix(*prefix)
+	if err != nil {
+		log.Fatal(err)
+	}
+	if err := writeSite(*out, *wasm, *assets, p); err != nil {
+		log.Fatal(err)
+	}
+	fmt.Printf("Fieldhead: static site written to %s\n", *out)
+	if *serve == "" {
+		return
+	}
+	ln, err := net.Listen("tcp", *serve)
+	if err != nil {
+		log.Fatal(err)
+	}
+	fmt.Printf("Fieldhead is served at %s (Ctrl-C stops it)\n", siteURL(ln.Addr(), *serve, p))
+	log.Fatal(http.Serve(ln, siteHandler(*out, p)))
+}
+
+// cleanPrefix normalises a deployment sub-path to "" or "/a/b".
+func cleanPrefix(p string) (string, error) {
+	p = strings.Trim(strings.TrimSpace(p), "/")
+	if p == "" {
+		return "", nil
+	}
+	if strings.ContainsAny(p, "?#\\ ") || strings.Contains(p, "..") {
+		return "", fmt.Errorf("prefix %q: use a plain URL path such as /tools/fieldhead", p)
+	}
+	return "/" + p, nil
+}
+
+// siteURL is the address to print for a person to open.
+func siteURL(addr net.Addr, asked, prefix string) string {
+	host := "localhost"
+	if h, _, err := net.SplitHostPort(asked); err == nil && h != "" && h != "0.0.0.0" && h != "::" {
+		host = h
+	}
+	port := "80"
+	if ta, ok := addr.(*net.TCPAddr); ok {
+		port = strconv.Itoa(ta.Port)
+	}
+	return "http://" + net.JoinHostPort(host, port) + prefix + "/"
+}
+
+// siteHandler serves a written site folder, under prefix when given, with
+// the content types a PWA needs.
+func siteHandler(dir, prefix string) http.Handler {
+	files := http.FileServer(http.Dir(dir))
+	h := http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
+		switch {
+		case strings.HasSuffix(r.URL.Path, ".wasm"):
+			w.Header().Set("Content-Type", "application/wasm")
+		case strings.HasSuffix(r.URL.Path, ".webmanifest"):
+			w.Header().Set("Content-Type", "application/manifest+json")
+		}
+		files.ServeHTTP(w, r)
+	})
+	if prefix == "" {
+		return h
+	}
+	mux := http.NewServeMux()
+	mux.Handle(prefix+"/", http.StripPrefix(prefix, h))
+	mux.Handle("/", http.RedirectHandler(prefix+"/", http.StatusFound))
+	return mux
+}
+
+// newHandler describes the page for go-app. version changes whenever the
+// wasm or an asset changes, so an installed copy updates itself.
+func newHandler(prefix, version string, wasmSize int64) *app.Handler {
+	h := &app.Handler{
+		Name:            "Fieldhead",
+		ShortName:       "Fieldhead",
+		Title:           "Fieldhead — liquid line and pump sheet",
+		Description:     "Offline calculator for liquid piping and pumps: energy balance between two points, head and pressure conversion, flow regime and friction.",
+		Lang:            "en",
+		Author:          "Fieldhead contributors",
+		BackgroundColor: colourPaper,
+		ThemeColor:      colourAccent,
+		LoadingLabel:    "Fieldhead is starting… {progress}%",
+		Icon: app.Icon{
+			Default:  "/web/icon-192.png",
+			Large:    "/web/icon-512.png",
+			Maskable: "/web/icon-512.png",
+			SVG:      "/web/icon.svg",
+		},
+		Styles:             []string{"/web/fieldhead.css"},
+		CacheableResources: []string{"/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
+		RawHeaders: []string{
+			`<meta name="color-scheme" content="light">`,
+			`<meta name="format-detection" content="telephone=no">`,
+		},
+		StartURL:              "/index.html",
+		Version:               version,
+		ServiceWorkerTemplate: workerJS,
+	}
+	if wasmSize > 0 {
+		h.WasmContentLength = strconv.FormatInt(wasmSize, 10)
+	}
+	if prefix != "" {
+		h.Resources = app.PrefixedLocation(prefix)
+	}
+	return h
+}
+
+// writeSite generates the static site into out: go-app's pages, manifest
+// and service worker, then our assets, icons and the wasm.
+func writeSite(out, wasmPath, assets, prefix string) error {
+	registerRoutes()
+	wasm, err := os.ReadFile(wasmPath)
+	if err != nil {
+		return fmt.Errorf("reading the wasm (build it first with GOOS=js GOARCH=wasm): %w", err)
+	}
+	sum := sha256.New()
+	sum.Write(wasm)
+	type file struct {
+		name string
+		data []byte
+	}
+	var files []file
+	err = filepath.WalkDir(assets, func(path string, d fs.DirEntry, err error) error {
+		if err != nil || d.IsDir() {
+			return err
+		}
+		rel, err := filepath.Rel(assets, path)
+		if err != nil {
+			return err
+		}
+		data, err := os.ReadFile(path)
+		if err != nil {
+			return err
+		}
+		files = append(files, file{rel, data})
+		sum.Write([]byte(rel))
+		sum.Write(data)
+		return nil
+	})
+	if err != nil {
+		return fmt.Errorf("reading assets: %w", err)
+	}
+	for _, size := range []int{192, 512} {
+		png, err := iconPNG(size)
+		if err != nil {
+			return err
+		}
+		files = append(files, file{fmt.Sprintf("icon-%d.png", size), png})
+	}
+	sum.Write([]byte(prefix))
+	version := hex.EncodeToString(sum.Sum(nil))[:12]
+
+	if err := os.RemoveAll(out); err != nil {
+		return err
+	}
+	if err := os.MkdirAll(filepath.Join(out, "web"), 0o755); err != nil {
+		return err
+	}
+	if err := app.GenerateStaticWebsite(out, newHandler(prefix, version, int64(len(wasm)))); err != nil {
+		return fmt.Errorf("generating the site: %w", err)
+	}
+	files = append(files, file{"app.wasm", wasm})
+	for _, f := range files {
+		dst := filepath.Join(out, "web", f.name)
+		if err := os.MkdirAll(filepath.Dir(dst), 0o755); err != nil {
+			return err
+		}
+		if err := os.WriteFile(dst, f.data, 0o644); err != nil {
+			return err
+		}
+	}
+	if _, err := os.Stat(filepath.Join(out, "index.html")); err != nil {
+		return errors.New("the generated site has no index.html")
+	}
+	return nil
+}

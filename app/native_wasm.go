@@ -1,0 +1,6 @@
+//go:build wasm
+
+package main
+
+// native does nothing in the browser build.
+func native() {}

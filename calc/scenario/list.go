@@ -1,0 +1,52 @@
+package scenario
+
+import (
+	"fmt"
+	"strings"
+
+	"fieldhead/calc"
+)
+
+// list parses a list parameter such as pq=0,20,40,55,70L/s: values
+// separated by commas (or by semicolons, when decimals are written with a
+// comma), one unit after the last value for the whole list, or a unit on
+// each value. It returns nil and records the error when the list is bad.
+func (e *eval) list(param string) ([]float64, bool) {
+	text := strings.TrimSpace(e.s.Get(param))
+	if text == "" {
+		e.fail(param, param+": "+missingList[param])
+		return nil, false
+	}
+	sep := ","
+	if strings.Contains(text, ";") {
+		sep = ";"
+	}
+	items := strings.Split(text, sep)
+	_, unit := Split(items[len(items)-1])
+	f := fields[param]
+	out := make([]float64, 0, len(items))
+	for i, it := range items {
+		it = strings.TrimSpace(it)
+		if it == "" {
+			e.fail(param, fmt.Sprintf("%s: value %d of the list is empty", param, i+1))
+			return nil, false
+		}
+		if _, u := Split(it); u == "" {
+			it += unit
+		}
+		v, err := calc.Parse(param, it, f.dim, DefaultUnit(param, e.us))
+		if err != nil {
+			e.failErr(param, fmt.Errorf("%w (value %d of the list)", err, i+1))
+			return nil, false
+		}
+		out = append(out, v)
+	}
+	return out, true
+}
+
+var missingList = map[string]string{
+	"pq":    "enter the data-sheet flows, e.g. 0,20,40,55,70L/s",
+	"ph":    "enter the data-sheet heads, one per flow, e.g. 62,59,52,44,33m",
+	"peff":  "enter the data-sheet efficiencies, one per flow",
+	"pnpsh": "enter the data-sheet NPSH required, one per flow",
+}
