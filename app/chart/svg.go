@@ -1,0 +1,192 @@
+package chart
+
+import "strings"
+
+func (r *renderer) noData(b []byte, h float64) []byte {
+	c := r.c
+	r.h = h
+	b = r.header(b)
+	top := pad
+	if c.Title != "" {
+		b = r.text(b, pad, pad+18, c.Title, "start", fontTitle, true, Ink)
+		top += 34
+	}
+	b = append(b, `<rect x="`...)
+	b = appendNum(b, pad)
+	b = append(b, `" y="`...)
+	b = appendNum(b, top)
+	b = append(b, `" width="`...)
+	b = appendNum(b, r.w-2*pad)
+	b = append(b, `" height="`...)
+	b = appendNum(b, h-top-pad)
+	b = append(b, `" fill="none" stroke="`+gridColour+`" stroke-width="2" stroke-dasharray="8 6"/>`...)
+	note := c.NoData
+	if note == "" {
+		note = "no data to plot"
+	}
+	b = r.text(b, r.w/2, (top+h-pad)/2+6, note, "middle", 16, false, ink2)
+	return append(b, "</svg>"...)
+}
+
+func (r *renderer) header(b []byte) []byte {
+	c := r.c
+	b = append(b, `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 `...)
+	b = appendNum(b, r.w)
+	b = append(b, ' ')
+	b = appendNum(b, r.h)
+	b = append(b, `" width="100%" preserveAspectRatio="xMidYMid meet" role="img" style="display:block;height:auto" font-family="`...)
+	b = appendText(b, r.font)
+	b = append(b, `" font-size="15"`...)
+	title := c.Title
+	if title == "" {
+		title = "chart"
+	}
+	b = append(b, ` aria-label="`...)
+	b = appendText(b, title)
+	b = append(b, `"><title>`...)
+	b = appendText(b, title)
+	b = append(b, `</title><desc>`...)
+	b = appendText(b, r.desc())
+	b = append(b, `</desc><rect width="100%" height="100%" fill="`+paper+`"/>`...)
+	return b
+}
+
+// desc composes the accessible description.
+func (r *renderer) desc() string {
+	c := r.c
+	if c.Desc != "" {
+		return c.Desc
+	}
+	var sb strings.Builder
+	sb.WriteString("Line chart")
+	if c.YLabel != "" && c.XLabel != "" {
+		sb.WriteString(" of " + c.YLabel + " against " + c.XLabel)
+	}
+	var names, marks []string
+	for _, p := range []*Chart{c, c.Lower} {
+		if p == nil {
+			continue
+		}
+		for _, s := range p.Series {
+			if s.Name != "" {
+				names = append(names, s.Name)
+			}
+		}
+		for _, m := range p.Markers {
+			if m.Label != "" {
+				marks = append(marks, strings.ReplaceAll(m.Label, "\n", " "))
+			}
+		}
+	}
+	if len(names) > 0 {
+		sb.WriteString(". Lines: " + strings.Join(names, "; "))
+	}
+	if len(marks) > 0 {
+		sb.WriteString(". Marked: " + strings.Join(marks, "; "))
+	}
+	sb.WriteString(".")
+	return sb.String()
+}
+
+// text appends one <text> element.
+func (r *renderer) text(b []byte, x, y float64, s, anchor string, size float64, bold bool, fill string) []byte {
+	b = append(b, `<text x="`...)
+	b = appendNum(b, x)
+	b = append(b, `" y="`...)
+	b = appendNum(b, y)
+	b = append(b, '"')
+	if anchor != "start" {
+		b = append(b, ` text-anchor="`...)
+		b = append(b, anchor...)
+		b = append(b, '"')
+	}
+	if size != fontText {
+		b = append(b, ` font-size="`...)
+		b = appendNum(b, size)
+		b = append(b, '"')
+	}
+	if bold {
+		b = append(b, ` font-weight="700"`...)
+	}
+	b = append(b, ` fill="`...)
+	b = append(b, fill...)
+	b = append(b, `">`...)
+	b = appendText(b, s)
+	return append(b, "</text>"...)
+}
+
+// haloText is text with a white outline so it stays legible over lines.
+func (r *renderer) haloText(b []byte, x, y float64, lines []string, anchor string, size float64, bold bool, fill string) []byte {
+	b = append(b, `<text x="`...)
+	b = appendNum(b, x)
+	b = append(b, `" y="`...)
+	b = appendNum(b, y)
+	b = append(b, `" text-anchor="`...)
+	b = append(b, anchor...)
+	b = append(b, `" font-size="`...)
+	b = appendNum(b, size)
+	b = append(b, '"')
+	if bold {
+		b = append(b, ` font-weight="700"`...)
+	}
+	b = append(b, ` fill="`...)
+	b = append(b, fill...)
+	b = append(b, `" stroke="`+paper+`" stroke-width="5" stroke-linejoin="round" paint-order="stroke">`...)
+	for i, l := range lines {
+		if i == 0 {
+			b = appendText(b, l)
+			continue
+		}
+		b = append(b, `<tspan x="`...)
+		b = appendNum(b, x)
+		b = append(b, `" dy="`...)
+		b = appendNum(b, size*1.2)
+		b = append(b, `">`...)
+		b = appendText(b, l)
+		b = append(b, "</tspan>"...)
+	}
+	return append(b, "</text>"...)
+}
+
+// bare appends a text element that takes fill and size from its group.
+func (r *renderer) bare(b []byte, x, y float64, s, anchor string) []byte {
+	b = append(b, `<text x="`...)
+	b = appendNum(b, x)
+	b = append(b, `" y="`...)
+	b = appendNum(b, y)
+	b = append(b, `" text-anchor="`...)
+	b = append(b, anchor...)
+	b = append(b, `">`...)
+	b = appendText(b, s)
+	return append(b, "</text>"...)
+}
+
+func (r *renderer) colour(accent bool) string {
+	if accent {
+		return r.accent
+	}
+	return Ink
+}
+
+func (r *renderer) draw(b []byte) []byte {
+	b = r.header(b)
+	c := r.c
+	if c.Title != "" {
+		b = r.text(b, pad, r.panels[0].titleY, c.Title, "start", fontTitle, true, Ink)
+	}
+	var labels []pendingLabel
+	for _, p := range r.panels {
+		b = r.drawBands(b, p)
+		b = r.drawAreas(b, p)
+		b = r.drawGrid(b, p)
+		b = r.drawSeries(b, p)
+		b, labels = r.drawMarkers(b, p, labels)
+		b = r.drawAxes(b, p)
+		b = r.drawLegend(b, p)
+	}
+	b = append(b, r.late...)
+	for _, l := range labels {
+		b = r.placeLabel(b, l)
+	}
+	return append(b, "</svg>"...)
+}
