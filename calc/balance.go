@@ -73,7 +73,8 @@ type Point struct {
 //
 // Exactly one quantity, named by Unknown, is unknown; its input field is
 // ignored. When Run is non-nil the friction head is that run's total loss
-// at the flow, and FrictionHead is ignored.
+// at the flow, and FrictionHead is ignored; likewise when Line is non-nil
+// (give Run or Line, not both).
 type Balance struct {
 	Fluid        Fluid
 	SitePressure float64 // Pa absolute, for gauge heads in the budget and vapour checks
@@ -83,8 +84,19 @@ type Balance struct {
 	TurbineHead  float64 // m
 	FrictionHead float64 // m
 	Run          *Run
-	Alpha        AlphaMode
-	Unknown      Unknown
+	// Line, when non-nil, is the pipe path between the points as a list of
+	// segments: the friction head is the line's TotalLoss at the flow (its
+	// bounds in transitional flow), and the result carries the line and
+	// its EGL/HGL profile.
+	Line *Line
+	// PumpAfter places the pump on the line, for the profile: it sits
+	// after segment PumpAfter (1-based; 0 means at point 1). Used only
+	// with Line. A change of diameter at the pump is still charged as a
+	// sudden expansion or contraction, a little on the safe side, since a
+	// pump's data-sheet head is measured between its own flanges.
+	PumpAfter int
+	Alpha     AlphaMode
+	Unknown   Unknown
 	// MaxFlow bounds the flow search when Unknown is SolveFlow, m³/s. Zero
 	// means the flow at 30 m/s in the narrowest diameter given.
 	MaxFlow float64
@@ -137,6 +149,10 @@ type BalanceResult struct {
 	Q, PumpHead, TurbineHead, FrictionHead float64
 	In, Out                                PointState
 	Run                                    *RunResult
+	// Line is the line evaluated at the solution's flow, when the balance
+	// has one; Profile is then its EGL/HGL profile (see ProfileNode).
+	Line    *LineResult
+	Profile []ProfileNode
 
 	Budget       []BudgetItem
 	PumpPower    float64 // hydraulic power ρ·g·Q·h_pump, W
@@ -157,6 +173,7 @@ type state struct {
 	in, out PointState
 	hf      float64
 	run     *RunResult
+	line    *LineResult
 	trans   bool
 	warn    []Warning
 }
@@ -237,13 +254,27 @@ func (b Balance) check() error {
 	if b.Unknown != SolveFlow && b.Q < 0 {
 		return fieldErrorf("q", "the flow must not be negative; number the points so that the liquid flows from 1 to 2")
 	}
-	if (b.In.D > 0 || b.Out.D > 0 || b.Run != nil) && !(fl.Viscosity > 0) {
+	if b.Run != nil && b.Line != nil {
+		return fieldErrorf("l", "give either a single pipe run or a line of segments, not both")
+	}
+	if b.Line != nil {
+		if err := b.Line.check(); err != nil {
+			return err
+		}
+		if b.PumpAfter < 0 || b.PumpAfter > len(b.Line.Segments) {
+			return fieldErrorf("pafter", "the pump sits after segment 0 (at point 1) to %d (the last), got %d", len(b.Line.Segments), b.PumpAfter)
+		}
+		if b.Unknown == SolveFrictionHead {
+			return fieldErrorf("solve", "the friction head is computed from the line's segments; solve for another quantity, or remove the segments to solve for hf")
+		}
+	}
+	if (b.In.D > 0 || b.Out.D > 0 || b.Run != nil || b.Line != nil) && !(fl.Viscosity > 0) {
 		return fieldErrorf("mu", "the liquid viscosity must be positive to find the regime")
 	}
 	if b.Run != nil && b.Unknown == SolveFrictionHead {
 		return fieldErrorf("solve", "the friction head is computed from the pipe run; solve for another quantity, or remove the run's length to solve for hf")
 	}
-	if b.Unknown == SolveFlow && b.Run == nil && b.In.D == 0 && b.Out.D == 0 {
+	if b.Unknown == SolveFlow && b.Run == nil && b.Line == nil && b.In.D == 0 && b.Out.D == 0 {
 		return fieldErrorf("q", "the balance does not depend on the flow: give a pipe run, or diameters d1/d2, to solve for the flow")
 	}
 	return nil
@@ -309,6 +340,22 @@ func (b Balance) at(q float64, bd bound) (state, error) {
 			}
 		}
 	}
+	if b.Line != nil {
+		lr, err := b.Line.Evaluate(b.Fluid, q)
+		if err != nil {
+			return st, err
+		}
+		st.line = &lr
+		st.hf = lr.TotalLoss
+		if lr.Transitional {
+			st.trans = true
+			if bd == boundLaminar {
+				st.hf = lr.TotalLossLow
+			} else {
+				st.hf = lr.TotalLossHigh
+			}
+		}
+	}
 	return st, nil
 }
 
@@ -362,6 +409,9 @@ func (b Balance) solveFlow(bd bound) (float64, state, error) {
 		if b.Run != nil && b.Run.Diameter > 0 {
 			dmin = math.Min(dmin, b.Run.Diameter)
 		}
+		if b.Line != nil {
+			dmin = math.Min(dmin, b.Line.minDiameter())
+		}
 		qmax = 30 * math.Pi * dmin * dmin / 4
 	}
 	var evalErr error
@@ -405,7 +455,7 @@ func (b Balance) result(v float64, st state) BalanceResult {
 	g := StandardGravity
 	rho := b.Fluid.Density
 	r := BalanceResult{Solve: b.Unknown, Value: v, Q: b.Q, PumpHead: b.PumpHead,
-		TurbineHead: b.TurbineHead, FrictionHead: st.hf, Run: st.run}
+		TurbineHead: b.TurbineHead, FrictionHead: st.hf, Run: st.run, Line: st.line}
 	switch b.Unknown {
 	case SolvePumpHead:
 		r.PumpHead = v
@@ -440,6 +490,9 @@ func (b Balance) result(v float64, st state) BalanceResult {
 			r.Warnings = append(r.Warnings, Warning{Field: "l", Text: w})
 		}
 	}
+	if st.line != nil {
+		r.Warnings = append(r.Warnings, lineWarnings(st.line, r.Q)...)
+	}
 
 	add := func(key, label string, side int, h float64) {
 		r.Budget = append(r.Budget, BudgetItem{Key: key, Label: label, Side: side, Head: h, Pressure: rho * g * h})
@@ -463,8 +516,21 @@ func (b Balance) result(v float64, st state) BalanceResult {
 		}
 		add("major", "pipe friction", -1, major)
 		add("minor", "fittings", -1, minor)
+	} else if st.line != nil {
+		major, minor := st.line.MajorLoss, st.line.MinorLoss+st.line.TransitionLoss
+		if st.line.Transitional && st.line.TotalLoss > 0 {
+			scale := r.FrictionHead / st.line.TotalLoss
+			major, minor = major*scale, minor*scale
+		}
+		add("major", "pipe friction", -1, major)
+		add("minor", "fittings and changes of diameter", -1, minor)
 	} else {
 		add("hf", "friction and other losses", -1, r.FrictionHead)
+	}
+	if st.line != nil {
+		var w []Warning
+		r.Profile, w = b.profile(&r, st.line)
+		r.Warnings = append(r.Warnings, w...)
 	}
 
 	r.PumpPower = rho * g * r.Q * r.PumpHead

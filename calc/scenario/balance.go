@@ -1,6 +1,8 @@
 package scenario
 
 import (
+	"fmt"
+	"math"
 	"strings"
 
 	"fieldhead/calc"
@@ -36,6 +38,10 @@ func (e *eval) balance(run *RunResult) {
 	if e.s.Has("l") && run == nil {
 		return // the run's errors say why
 	}
+	line := e.line()
+	if e.segmentCount() > 0 && line == nil {
+		return // the segments' errors say why
+	}
 	b := calc.Balance{Fluid: *e.res.Fluid, SitePressure: e.res.SitePressure, Unknown: solve}
 	switch e.s.Get("alpha") {
 	case "", "auto":
@@ -66,25 +72,48 @@ func (e *eval) balance(run *RunResult) {
 	e.point("2", &b.Out, &ok)
 	b.PumpHead = e.optionalHead("hp", calc.SolvePumpHead, solve, &ok)
 	b.TurbineHead = e.optionalHead("ht", calc.SolveTurbineHead, solve, &ok)
-	if run != nil {
+	switch {
+	case line != nil:
+		if solve == calc.SolveFrictionHead {
+			e.fail("solve", "solve: the friction head is computed from the line's segments; solve for another quantity, or remove the segments to solve for hf")
+			return
+		}
+		b.Line = line
+		b.PumpAfter = 0
+		if len(line.Segments) > 1 {
+			b.PumpAfter = 1
+		}
+		if e.s.Has("pafter") {
+			n, err := number("pafter", e.s.Get("pafter"))
+			if err != nil || n != math.Trunc(n) || n < 0 || int(n) > len(line.Segments) {
+				e.fail("pafter", fmt.Sprintf("pafter: the number of the segment the pump follows, 0 (at point 1) to %d", len(line.Segments)))
+				return
+			}
+			b.PumpAfter = int(n)
+		}
+	case run != nil:
 		if solve == calc.SolveFrictionHead {
 			e.fail("solve", "solve: the friction head is computed from the pipe run; solve for another quantity, or remove the run's length l to solve for hf")
 			return
 		}
 		spec := e.runSpec
 		b.Run = &spec
-	} else {
+	default:
 		b.FrictionHead = need("hf", calc.SolveFrictionHead)
 	}
 	if !ok {
 		return
 	}
+	e.bal = &b
 	br, err := b.Solve()
 	if err != nil {
 		e.failErr(solve.String(), err)
 		return
 	}
 	e.res.Balance = &br
+	for _, w := range br.Warnings {
+		e.warn(w.Field, "balance", w.Text)
+	}
 	if run != nil && br.Run != nil {
 		run.RunResult = *br.Run
 		run.Flow = br.Q

@@ -19,7 +19,8 @@ type eval struct {
 	s       Scenario
 	us      bool
 	res     *Result
-	runSpec calc.Run // the pipe run as read, when run() returned non-nil
+	runSpec calc.Run      // the pipe run as read, when run() returned non-nil
+	bal     *calc.Balance // the balance as read, before solving
 }
 
 // Evaluate computes every part of the scenario whose inputs are present.
@@ -55,6 +56,10 @@ func Evaluate(s Scenario) Result {
 			e.evalRun(run, q)
 		}
 	}
+	e.pump()
+	e.npsh()
+	e.field()
+	e.turbine()
 	if s.Has("cv") {
 		e.convert()
 	}
@@ -103,10 +108,10 @@ func (e *eval) warn(param, topic, text string) {
 // quantity parses a dimensioned parameter into SI. A missing value is an
 // error that asks for it.
 func (e *eval) quantity(param string) (float64, bool) {
-	f := fields[param]
+	f := fields[baseParam(param)]
 	text := e.s.Get(param)
 	if strings.TrimSpace(text) == "" {
-		e.fail(param, param+": "+missing[param])
+		e.fail(param, param+": "+missing[baseParam(param)])
 		return 0, false
 	}
 	v, err := calc.Parse(param, text, f.dim, DefaultUnit(param, e.us))
@@ -211,128 +216,6 @@ func (e *eval) liquid() {
 	default:
 		e.fail("liq", fmt.Sprintf("liq: %q is not a liquid Fieldhead knows; use water or custom", liq))
 	}
-}
-
-// pipeParams are the parameters that describe a pipe run.
-var pipeParams = []string{"l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw"}
-
-// run reads the pipe run, or returns nil when no run is described. The run
-// is described when its length l is given.
-func (e *eval) run() *RunResult {
-	if !e.s.Has("l") {
-		return nil
-	}
-	r := &RunResult{}
-	ok := true
-	if l, good := e.quantity("l"); good {
-		if !(l > 0) {
-			e.fail("l", "l: the length of the run must be above zero")
-			ok = false
-		}
-		r.Length = l
-	} else {
-		ok = false
-	}
-	// Diameter: typed, or from the tables.
-	switch {
-	case e.s.Has("d"):
-		if d, good := e.quantity("d"); good {
-			if !(d > 0) {
-				e.fail("d", "d: the inside diameter must be above zero")
-				ok = false
-			}
-			r.Diameter = d
-		} else {
-			ok = false
-		}
-	case e.s.Has("nps") || e.s.Has("sch"):
-		ps, err := calc.LookupPipe(strings.TrimSpace(e.s.Get("nps")), strings.TrimSpace(e.s.Get("sch")))
-		if err != nil {
-			e.failErr("nps", err)
-			ok = false
-		} else {
-			r.Pipe = &ps
-			r.Diameter = ps.ID
-		}
-	default:
-		e.fail("d", "d: "+missing["d"])
-		ok = false
-	}
-	// Roughness and Hazen–Williams C: typed, or from the material.
-	var mat *calc.Material
-	if e.s.Has("mat") {
-		m, err := calc.LookupMaterial(strings.TrimSpace(e.s.Get("mat")))
-		if err != nil {
-			e.failErr("mat", err)
-			ok = false
-		} else {
-			mat = &m
-			r.Material = mat
-		}
-	}
-	method := calc.MethodColebrook
-	if e.s.Has("fm") {
-		m, err := calc.ParseFrictionMethod(strings.TrimSpace(e.s.Get("fm")))
-		if err != nil {
-			e.failErr("fm", err)
-			ok = false
-		}
-		method = m
-	}
-	switch {
-	case e.s.Has("eps"):
-		if eps, good := e.quantity("eps"); good {
-			if eps < 0 {
-				e.fail("eps", "eps: the roughness must not be negative")
-				ok = false
-			}
-			r.Roughness = eps
-		} else {
-			ok = false
-		}
-	case mat != nil:
-		r.Roughness = mat.Roughness
-	case method != calc.MethodHazenWilliams:
-		e.fail("eps", "eps: "+missing["eps"])
-		ok = false
-	}
-	hc := 0.0
-	switch {
-	case e.s.Has("chw"):
-		c, err := number("chw", e.s.Get("chw"))
-		if err != nil || !(c > 0) {
-			e.fail("chw", "chw: the Hazen–Williams C must be a number above zero, e.g. 130")
-			ok = false
-		}
-		hc = c
-	case mat != nil:
-		hc = mat.HazenC
-	}
-	if method == calc.MethodHazenWilliams && !(hc > 0) {
-		e.fail("chw", "chw: enter a Hazen–Williams C, or pick a material that has one")
-		ok = false
-	}
-	fits, err := ParseFittings(e.s.Get("fit"))
-	if err != nil {
-		e.failErr("fit", err)
-		ok = false
-	}
-	extra := 0.0
-	if e.s.Has("k") {
-		k, err := number("k", e.s.Get("k"))
-		if err != nil || k < 0 {
-			e.fail("k", "k: the extra loss coefficient must be a number, zero or more")
-			ok = false
-		}
-		extra = k
-	}
-	if !ok {
-		return nil
-	}
-	r.RunResult = calc.RunResult{}
-	e.runSpec = calc.Run{Length: r.Length, Diameter: r.Diameter, Roughness: r.Roughness,
-		Fittings: fits, ExtraK: extra, Method: method, HazenC: hc}
-	return r
 }
 
 // evalRun evaluates the pipe run at flow q for the Regime view.

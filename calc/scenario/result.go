@@ -19,6 +19,13 @@ type Result struct {
 	Run     *RunResult          // the pipe run (Regime view; friction in the balance)
 	Balance *calc.BalanceResult // the two-point energy balance
 	Convert *ConvertResult      // the Convert view
+
+	Pump        *PumpResult         // the pump curve, system curve and operating point
+	NPSH        *calc.NPSHResult    // NPSH at the pump
+	NPSHFlow    float64             // the flow NPSH was worked out at, m³/s
+	Field       *calc.FieldCheck    // the pump's performance from gauge readings
+	Turbine     *calc.TurbineResult // the turbine's output at the flow
+	BestTurbine *calc.TurbineResult // at the flow that gives the most output
 }
 
 // Warning is a caution about a result. Param names the input it concerns,

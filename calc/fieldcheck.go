@@ -1,0 +1,132 @@
+package calc
+
+import (
+	"fmt"
+	"math"
+)
+
+// Thresholds of CheckPump's warnings on the measured wire-to-water
+// efficiency.
+const (
+	// FieldEfficiencyLow: below this wire-to-water efficiency the pump,
+	// motor or readings deserve a look (common practice for pump sets of
+	// some kilowatts and up, which usually reach 0.5–0.8).
+	FieldEfficiencyLow = 0.3
+)
+
+// fieldVacuum is the lowest gauge reading accepted, Pa: full vacuum at
+// standard sea-level pressure (ISO 2533, 101.325 kPa). Higher sites have
+// less to lose, so this only rejects readings that are impossible
+// anywhere.
+const fieldVacuum = -101325.0
+
+// FieldReadings are readings taken on a running pump. Pressures are gauge
+// readings; the heights are those of the gauges (any common datum); the
+// diameters are the pipe's inside diameters where the gauges are.
+type FieldReadings struct {
+	Ps, Pd  float64 // suction and discharge gauge pressures, Pa (gauge)
+	Zs, Zd  float64 // heights of the suction and discharge gauges, m
+	Ds, Dd  float64 // inside diameters at the gauges, m
+	Q       float64 // measured flow, m³/s
+	PowerIn float64 // measured electrical input to the motor, W; 0 = not measured
+}
+
+// FieldCheck is a running pump's performance worked out from readings.
+type FieldCheck struct {
+	Head          float64 // pump total head, m
+	PressureHead  float64 // (pd − ps)/(ρg), m
+	ElevationHead float64 // zd − zs, m
+	VelocityHead  float64 // (Vd² − Vs²)/(2g), m
+	Vs, Vd        float64 // mean velocities at the gauges, m/s
+	// HydraulicPower is ρ·g·Q·H, W.
+	HydraulicPower float64
+	// Efficiency is the wire-to-water efficiency, hydraulic power over
+	// the measured electrical input (motor, drive and pump together);
+	// 0 when the input was not measured.
+	Efficiency float64
+	// HasCurve is true when a curve was given and covers Q; CurveHead is
+	// then the data-sheet head at Q, Deviation = Head − CurveHead (m) and
+	// DeviationPct that as a percentage of CurveHead.
+	HasCurve                           bool
+	CurveHead, Deviation, DeviationPct float64
+	// CurveEfficiency is the data-sheet pump efficiency at Q (pump alone,
+	// without the motor), 0 when not available.
+	CurveEfficiency float64
+	Warnings        []Warning
+}
+
+// CheckPump works out the head and efficiency a running pump delivers from
+// field readings r on liquid fl:
+//
+//	H = (pd − ps)/(ρg) + (zd − zs) + (Vd² − Vs²)/(2g)
+//
+// the total head between the gauge points (the energy equation with α = 1
+// at both, the usual convention for pump head, taking the flow at the
+// gauges as turbulent), hydraulic power ρ·g·Q·H, and the wire-to-water
+// efficiency hydraulic power / PowerIn. With a curve c (nil for none) the
+// head is compared with the data sheet at Q; beyond the sheet's flows a
+// warning says there is nothing to compare with.
+//
+// Warnings flag an efficiency above 1 (the readings cannot all be right),
+// one below 0.3, and a head at or below zero. Errors name the fields "ps",
+// "pd", "zs", "zd", "ds", "dd", "qm", "pin" and "rho".
+func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
+	finite := func(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+	switch {
+	case !finite(fl.Density) || !(fl.Density > 0):
+		return FieldCheck{}, fieldErrorf("rho", "the liquid density must be a positive number")
+	case !finite(r.Ps) || r.Ps < fieldVacuum:
+		return FieldCheck{}, fieldErrorf("ps", "the suction gauge reading must be a finite gauge pressure not below full vacuum (about −101 kPa), got %g Pa", r.Ps)
+	case !finite(r.Pd) || r.Pd < fieldVacuum:
+		return FieldCheck{}, fieldErrorf("pd", "the discharge gauge reading must be a finite gauge pressure not below full vacuum (about −101 kPa), got %g Pa", r.Pd)
+	case !finite(r.Zs):
+		return FieldCheck{}, fieldErrorf("zs", "the suction gauge's height must be a finite number")
+	case !finite(r.Zd):
+		return FieldCheck{}, fieldErrorf("zd", "the discharge gauge's height must be a finite number")
+	case !finite(r.Ds) || !(r.Ds > 0):
+		return FieldCheck{}, fieldErrorf("ds", "give the inside diameter of the pipe at the suction gauge")
+	case !finite(r.Dd) || !(r.Dd > 0):
+		return FieldCheck{}, fieldErrorf("dd", "give the inside diameter of the pipe at the discharge gauge")
+	case !finite(r.Q) || !(r.Q > 0):
+		return FieldCheck{}, fieldErrorf("qm", "give the measured flow (above zero)")
+	case !finite(r.PowerIn) || r.PowerIn < 0:
+		return FieldCheck{}, fieldErrorf("pin", "the measured electrical input must be zero (not measured) or positive, got %g W", r.PowerIn)
+	}
+	g := StandardGravity
+	rhog := fl.Density * g
+	var fc FieldCheck
+	fc.Vs = r.Q / (math.Pi * r.Ds * r.Ds / 4)
+	fc.Vd = r.Q / (math.Pi * r.Dd * r.Dd / 4)
+	fc.PressureHead = (r.Pd - r.Ps) / rhog
+	fc.ElevationHead = r.Zd - r.Zs
+	fc.VelocityHead = (fc.Vd*fc.Vd - fc.Vs*fc.Vs) / (2 * g)
+	fc.Head = fc.PressureHead + fc.ElevationHead + fc.VelocityHead
+	fc.HydraulicPower = rhog * r.Q * fc.Head
+	if fc.Head <= 0 {
+		fc.Warnings = append(fc.Warnings, Warning{Field: "pd", Text: fmt.Sprintf("the readings give a pump head of %.3g m, which a running pump does not: check that the gauges are the right way round and read in the same units", fc.Head)})
+	}
+	if r.PowerIn > 0 {
+		fc.Efficiency = fc.HydraulicPower / r.PowerIn
+		switch {
+		case fc.Efficiency > 1:
+			fc.Warnings = append(fc.Warnings, Warning{Field: "pin", Text: fmt.Sprintf("the wire-to-water efficiency comes out at %.0f %%, above 100 %%: the readings are inconsistent (check the flow, the gauges and the power reading)", fc.Efficiency*100)})
+		case fc.Efficiency < FieldEfficiencyLow && fc.Head > 0:
+			fc.Warnings = append(fc.Warnings, Warning{Field: "pin", Text: fmt.Sprintf("the wire-to-water efficiency is only %.0f %% (below %.0f %%): look for wear, a throttled or recirculating pump, a motor problem, or a reading error", fc.Efficiency*100, FieldEfficiencyLow*100)})
+		}
+	}
+	if c != nil {
+		if h, ok := c.Head(r.Q); ok {
+			fc.HasCurve, fc.CurveHead = true, h
+			fc.Deviation = fc.Head - h
+			if h > 0 {
+				fc.DeviationPct = 100 * fc.Deviation / h
+			}
+			if e, ok := c.Efficiency(r.Q); ok {
+				fc.CurveEfficiency = e
+			}
+		} else {
+			fc.Warnings = append(fc.Warnings, Warning{Field: "qm", Text: fmt.Sprintf("the measured flow (%.4g m³/s) lies outside the data sheet's flows (%.4g to %.4g m³/s): no curve head to compare with", r.Q, c.MinFlow(), c.MaxFlow())})
+		}
+	}
+	return fc, nil
+}

@@ -1,0 +1,230 @@
+package calc
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"strconv"
+)
+
+// MaxSegments is the largest number of segments a Line may have.
+const MaxSegments = 20
+
+// Segment is one piece of a Line: a pipe run of constant inside diameter
+// with its fittings (see Run), and the elevation of its end. The segment
+// starts where the previous one ends (the first at point 1).
+type Segment struct {
+	Run
+	EndZ float64 // elevation of the segment's end above the datum, m
+}
+
+// Line is an ordered list of segments from point 1 to point 2.
+type Line struct {
+	Segments []Segment
+}
+
+// SegmentResult is one segment of a line evaluated at a flow.
+type SegmentResult struct {
+	RunResult
+	// TransitionLoss is the head lost at the segment's start where its
+	// diameter differs from the previous segment's (Borda–Carnot sudden
+	// expansion or sudden contraction), m. Zero for the first segment.
+	TransitionLoss float64
+}
+
+// LineResult is a Line evaluated at one flow. Losses are heads in metres of
+// the flowing liquid.
+type LineResult struct {
+	Segments []SegmentResult
+	// TotalLoss is the sum of the segments' design losses (TotalLoss of
+	// each run, the larger bound in transitional flow) and the transition
+	// losses. TotalLossLow and TotalLossHigh sum the segments' bounds; they
+	// equal TotalLoss unless some segment is transitional.
+	TotalLoss, TotalLossLow, TotalLossHigh float64
+	// Transitional is true when any segment is in transitional flow.
+	Transitional bool
+	// MajorLoss, MinorLoss and TransitionLoss split the design TotalLoss
+	// into pipe friction, fittings and changes of diameter.
+	MajorLoss, MinorLoss, TransitionLoss float64
+}
+
+// segmentField maps a field named by Run.Evaluate to the share-link
+// parameter of segment i (0-based): "length" becomes "s1.l", "d" "s1.d",
+// "method" "s1.fm", and so on. Liquid and flow fields are not per segment
+// and come back empty.
+func segmentField(i int, field string) string {
+	switch field {
+	case "length":
+		field = "l"
+	case "method":
+		field = "fm"
+	case "d", "eps", "fit", "k", "chw", "z":
+	default:
+		return ""
+	}
+	return "s" + strconv.Itoa(i+1) + "." + field
+}
+
+// wrapSegmentError renames the field of a segment's *FieldError after the
+// segment, and says which segment a liquid or flow error came from.
+func wrapSegmentError(i int, err error) error {
+	var fe *FieldError
+	if !errors.As(err, &fe) {
+		return fmt.Errorf("segment %d: %w", i+1, err)
+	}
+	if f := segmentField(i, fe.Field); f != "" {
+		return &FieldError{Field: f, Msg: fe.Msg}
+	}
+	return &FieldError{Field: fe.Field, Msg: fmt.Sprintf("segment %d: %s", i+1, fe.Msg)}
+}
+
+// transitionLoss is the head lost where the diameter changes from d1 (mean
+// velocity v1) to d2 (velocity v2): a Borda–Carnot sudden expansion, K on
+// the upstream velocity head, or a sudden contraction, K on the downstream
+// velocity head.
+func transitionLoss(d1, v1, d2, v2 float64) (float64, error) {
+	g2 := 2 * StandardGravity
+	switch {
+	case d2 > d1:
+		k, err := SuddenExpansionK(d1, d2)
+		return k * v1 * v1 / g2, err
+	case d2 < d1:
+		k, err := SuddenContractionK(d1, d2)
+		return k * v2 * v2 / g2, err
+	}
+	return 0, nil
+}
+
+// check validates the number of segments and the elevations.
+func (l Line) check() error {
+	n := len(l.Segments)
+	if n == 0 {
+		return fieldErrorf("line", "give at least one pipe segment")
+	}
+	if n > MaxSegments {
+		return fieldErrorf("line", "a line has at most %d segments, got %d", MaxSegments, n)
+	}
+	for i, s := range l.Segments {
+		if math.IsNaN(s.EndZ) || math.IsInf(s.EndZ, 0) {
+			return fieldErrorf(segmentField(i, "z"), "the elevation of the segment's end must be a finite number")
+		}
+	}
+	return nil
+}
+
+// Evaluate computes every segment of the line carrying flow q (m³/s, ≥ 0)
+// of liquid fl. Each segment's friction and fittings are taken at that
+// segment's own velocity and Reynolds number (Run.Evaluate). Where the
+// inside diameter changes from one segment to the next a loss is added
+// automatically at the junction, charged to the downstream segment as
+// TransitionLoss: the Borda–Carnot sudden-expansion loss (SuddenExpansionK,
+// on the upstream velocity head) where the pipe widens, the
+// sudden-contraction loss (SuddenContractionK, on the downstream velocity
+// head) where it narrows. These are losses of abrupt changes; a gradual
+// reducer loses less, so the figure is on the safe side.
+//
+// Errors are *FieldError values naming the segment's share-link field,
+// "sN.l", "sN.d", "sN.eps", "sN.fit", "sN.k", "sN.fm", "sN.chw" or "sN.z"
+// (N is the 1-based segment number), "line" for no segments or more than
+// MaxSegments, and "rho", "mu" or "q" (with the segment named in the
+// message) for the liquid and the flow.
+func (l Line) Evaluate(fl Fluid, q float64) (LineResult, error) {
+	if err := l.check(); err != nil {
+		return LineResult{}, err
+	}
+	res := LineResult{Segments: make([]SegmentResult, len(l.Segments))}
+	for i := range l.Segments {
+		s := &l.Segments[i]
+		rr, err := s.Run.Evaluate(fl, q)
+		if err != nil {
+			return LineResult{}, wrapSegmentError(i, err)
+		}
+		sr := &res.Segments[i]
+		sr.RunResult = rr
+		if i > 0 {
+			prev := &res.Segments[i-1]
+			tl, err := transitionLoss(l.Segments[i-1].Diameter, prev.Velocity, s.Diameter, rr.Velocity)
+			if err != nil {
+				return LineResult{}, wrapSegmentError(i, err)
+			}
+			sr.TransitionLoss = tl
+		}
+		res.TotalLoss += rr.TotalLoss + sr.TransitionLoss
+		res.TotalLossLow += rr.TotalLossLow + sr.TransitionLoss
+		res.TotalLossHigh += rr.TotalLossHigh + sr.TransitionLoss
+		res.MajorLoss += rr.MajorLoss
+		res.MinorLoss += rr.MinorLoss
+		res.TransitionLoss += sr.TransitionLoss
+		if rr.Regime == Transitional && q > 0 {
+			res.Transitional = true
+		}
+	}
+	return res, nil
+}
+
+// LossThrough returns the design head lost in segments 1 to k (1-based,
+// inclusive): their friction and fittings and the transitions at their
+// starts, but not the transition into segment k+1. k ≤ 0 gives 0; k beyond
+// the last segment gives the whole TotalLoss.
+func (r LineResult) LossThrough(k int) float64 {
+	var h float64
+	for i := 0; i < k && i < len(r.Segments); i++ {
+		h += r.Segments[i].TotalLoss + r.Segments[i].TransitionLoss
+	}
+	return h
+}
+
+// Length returns the total length of the line, m.
+func (l Line) Length() float64 {
+	var s float64
+	for _, seg := range l.Segments {
+		s += seg.Length
+	}
+	return s
+}
+
+// minDiameter returns the smallest positive segment diameter, or +Inf.
+func (l Line) minDiameter() float64 {
+	d := math.Inf(1)
+	for _, s := range l.Segments {
+		if s.Diameter > 0 {
+			d = math.Min(d, s.Diameter)
+		}
+	}
+	return d
+}
+
+// lineWarnings turns the segments' warnings into balance warnings, each
+// naming its segment; at zero flow one warning stands for all.
+func lineWarnings(lr *LineResult, q float64) []Warning {
+	if q == 0 {
+		return []Warning{{Field: "q", Text: "no flow: all losses in the line are zero"}}
+	}
+	var out []Warning
+	for i, s := range lr.Segments {
+		for _, w := range s.Warnings {
+			out = append(out, Warning{Field: segmentField(i, "d"), Text: "segment " + strconv.Itoa(i+1) + ": " + w})
+		}
+	}
+	return out
+}
+
+// lumped returns a copy of the line with each segment's fittings folded
+// into its ExtraK: the same ΣK to the last bit (Run.SumK adds the fittings
+// to ExtraK in the same order), so the same results, without the fitting
+// table look-ups on every evaluation. A segment whose ΣK cannot be formed
+// is left as it is, for Evaluate to report.
+func (l Line) lumped() Line {
+	out := Line{Segments: make([]Segment, len(l.Segments))}
+	copy(out.Segments, l.Segments)
+	for i := range out.Segments {
+		r := &out.Segments[i].Run
+		if len(r.Fittings) == 0 {
+			continue
+		}
+		if k, err := r.SumK(); err == nil {
+			r.ExtraK, r.Fittings = k, nil
+		}
+	}
+	return out
+}

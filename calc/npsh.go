@@ -1,0 +1,154 @@
+package calc
+
+import (
+	"fmt"
+	"math"
+)
+
+// NPSH margin thresholds used by NPSH.
+const (
+	// NPSHMarginRatio is the lowest ratio NPSHa/NPSHr taken as adequate
+	// without further thought: 1.1, the low end of the range of NPSH
+	// margin ratios (about 1.1 to 2.0, by application and suction
+	// energy) in ANSI/HI 9.6.1 — recalled from memory, not checked against
+	// the document.
+	NPSHMarginRatio = 1.1
+	// NPSHMarginMin is the smallest margin NPSHa − NPSHr taken as
+	// adequate, m: about 0.6 m (2 ft) is a common rule of thumb in
+	// practice (common practice, from memory), since the data sheet's
+	// NPSHr is the point where the head has already dropped by 3 %.
+	NPSHMarginMin = 0.6
+)
+
+// NPSHLevel grades the NPSH margin.
+type NPSHLevel int
+
+// NPSH margin levels.
+const (
+	NPSHOK      NPSHLevel = iota // margin adequate by NPSHMarginRatio and NPSHMarginMin
+	NPSHCaution                  // NPSHa above NPSHr, but by less than those margins
+	NPSHDanger                   // NPSHa below NPSHr (or not above zero): the pump will cavitate
+	NPSHUnrated                  // no NPSHr given: only NPSHa is known
+)
+
+// String returns "ok", "caution", "danger" or "no NPSHr".
+func (l NPSHLevel) String() string {
+	switch l {
+	case NPSHOK:
+		return "ok"
+	case NPSHCaution:
+		return "caution"
+	case NPSHDanger:
+		return "danger"
+	case NPSHUnrated:
+		return "no NPSHr"
+	}
+	return "unknown"
+}
+
+// NPSHInput are the conditions at the pump's suction.
+type NPSHInput struct {
+	SurfacePressure float64 // absolute pressure on the source liquid's surface, Pa
+	SurfaceZ        float64 // elevation of the source liquid's surface, m
+	PumpZ           float64 // elevation of the pump's reference (impeller eye / centreline), m
+	SuctionLoss     float64 // head lost between the source and the pump inlet at the flow, m
+	NPSHr           float64 // NPSH the pump requires at the flow, m; 0 = not given
+}
+
+// NPSHResult is the NPSH available at the pump against the NPSH it
+// requires.
+type NPSHResult struct {
+	Available float64 // NPSHa, m
+	Required  float64 // NPSHr, m (0 when not given)
+	Margin    float64 // NPSHa − NPSHr, m
+	Ratio     float64 // NPSHa / NPSHr (0 when NPSHr is not given)
+	Level     NPSHLevel
+	Note      string // the verdict and the guidance it rests on, in words
+}
+
+// NPSH computes the net positive suction head available at the pump,
+//
+//	NPSHa = (p_surface − p_v)/(ρg) + (z_surface − z_pump) − h_loss
+//
+// with p_v the liquid's vapour pressure, and compares it with the NPSHr:
+// NPSHDanger when NPSHa is below NPSHr or not above zero; NPSHCaution when
+// the ratio NPSHa/NPSHr is below 1.1 or the margin below 0.6 m (the ratio
+// from the low end of ANSI/HI 9.6.1's margin-ratio range of about 1.1 to
+// 2.0, recalled from memory; the 0.6 m from common practice, from memory);
+// otherwise NPSHOK. Higher margins are advised for large or high-energy
+// pumps and for hot or dissolved-gas-laden liquids; the Note says so.
+// Errors name "p1" (surface pressure), "z1", "zp", "hs" (suction loss),
+// "npshr", "rho" and "pv".
+func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
+	finite := func(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+	switch {
+	case !finite(fl.Density) || !(fl.Density > 0):
+		return NPSHResult{}, fieldErrorf("rho", "the liquid density must be a positive number")
+	case !finite(fl.VapourPressure) || fl.VapourPressure < 0:
+		return NPSHResult{}, fieldErrorf("pv", "the liquid's vapour pressure must be zero or positive (absolute)")
+	case !finite(in.SurfacePressure) || !(in.SurfacePressure > 0):
+		return NPSHResult{}, fieldErrorf("p1", "the pressure on the source surface must be a positive absolute pressure, got %g Pa", in.SurfacePressure)
+	case !finite(in.SurfaceZ):
+		return NPSHResult{}, fieldErrorf("z1", "the source surface's elevation must be a finite number")
+	case !finite(in.PumpZ):
+		return NPSHResult{}, fieldErrorf("zp", "the pump's elevation must be a finite number")
+	case !finite(in.SuctionLoss) || in.SuctionLoss < 0:
+		return NPSHResult{}, fieldErrorf("hs", "the suction-line loss must be zero or positive, got %g m", in.SuctionLoss)
+	case !finite(in.NPSHr) || in.NPSHr < 0:
+		return NPSHResult{}, fieldErrorf("npshr", "the NPSH required must be zero (not given) or positive, got %g m", in.NPSHr)
+	}
+	r := NPSHResult{Required: in.NPSHr}
+	r.Available = (in.SurfacePressure-fl.VapourPressure)/(fl.Density*StandardGravity) + in.SurfaceZ - in.PumpZ - in.SuctionLoss
+	const guidance = "margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least 0.6 m (common practice, from memory); large, high-energy or hot-liquid pumps need more"
+	if in.NPSHr == 0 {
+		r.Level = NPSHUnrated
+		r.Margin = r.Available
+		if r.Available <= 0 {
+			r.Level = NPSHDanger
+			r.Note = fmt.Sprintf("NPSH available is %.3g m, not above zero: the liquid boils at the pump inlet whatever the pump", r.Available)
+			return r, nil
+		}
+		r.Note = fmt.Sprintf("NPSH available is %.3g m; give the pump's NPSH required at this flow to judge the margin (%s)", r.Available, guidance)
+		return r, nil
+	}
+	r.Margin = r.Available - r.Required
+	r.Ratio = r.Available / r.Required
+	switch {
+	case r.Available <= 0 || r.Available < r.Required:
+		r.Level = NPSHDanger
+		r.Note = fmt.Sprintf("NPSH available %.3g m is below the %.3g m required: the pump will cavitate (lost head, noise, damage); raise the source, lower the pump, cut the suction losses or cool the liquid", r.Available, r.Required)
+	case r.Ratio < NPSHMarginRatio || r.Margin < NPSHMarginMin:
+		r.Level = NPSHCaution
+		r.Note = fmt.Sprintf("NPSH available %.3g m exceeds the %.3g m required by only %.2g m (ratio %.2f): expect some cavitation; %s", r.Available, r.Required, r.Margin, r.Ratio, guidance)
+	default:
+		r.Level = NPSHOK
+		r.Note = fmt.Sprintf("NPSH available %.3g m against %.3g m required: margin %.2g m, ratio %.2f; %s", r.Available, r.Required, r.Margin, r.Ratio, guidance)
+	}
+	return r, nil
+}
+
+// SuctionLoss returns the head lost between point 1 and the pump of
+// balance b at flow q (m³/s): the losses of segments 1 to b.PumpAfter of
+// b.Line (friction, fittings and the diameter changes within them, on the
+// design bound), for NPSHInput.SuctionLoss. A pump at point 1 (PumpAfter
+// 0) has none. Without a line the error names "pafter".
+func SuctionLoss(b Balance, q float64) (float64, error) {
+	if b.Line == nil {
+		return 0, fieldErrorf("pafter", "the suction losses come from a line of segments with the pump after one of them; give the segments, or type the suction loss")
+	}
+	if err := b.Line.check(); err != nil {
+		return 0, err
+	}
+	if b.PumpAfter < 0 || b.PumpAfter > len(b.Line.Segments) {
+		return 0, fieldErrorf("pafter", "the pump sits after segment 0 (at point 1) to %d (the last), got %d", len(b.Line.Segments), b.PumpAfter)
+	}
+	if b.PumpAfter == 0 {
+		return 0, nil
+	}
+	suction := Line{Segments: b.Line.Segments[:b.PumpAfter]}
+	lr, err := suction.Evaluate(b.Fluid, q)
+	if err != nil {
+		return 0, err
+	}
+	return lr.LossThrough(b.PumpAfter), nil
+}

@@ -1,0 +1,74 @@
+package scenario
+
+import (
+	"fmt"
+	"math"
+
+	"fieldhead/calc"
+)
+
+// segmentCount returns the number of segments described (the highest N
+// with any sN. parameter), 0 when none.
+func (e *eval) segmentCount() int {
+	n := 0
+	for k := range e.s.raw {
+		var i int
+		var f string
+		if _, err := fmt.Sscanf(k, "s%d.%s", &i, &f); err == nil && i > n && e.s.Has(k) {
+			n = i
+		}
+	}
+	return n
+}
+
+// line reads the segments s1…sN into a calc.Line, or returns nil when there
+// are none or one is bad (its errors are recorded). z2 is the elevation of
+// point 2, where the last segment ends unless its sN.z says otherwise.
+func (e *eval) line() *calc.Line {
+	n := e.segmentCount()
+	if n == 0 {
+		return nil
+	}
+	if e.s.Has("l") {
+		e.fail("l", "l: give either a single pipe run (l, d…) or a line of segments (s1.l, s2.l…), not both")
+		return nil
+	}
+	ln := &calc.Line{}
+	ok := true
+	for i := 1; i <= n; i++ {
+		pre := fmt.Sprintf("s%d.", i)
+		if !e.s.Has(pre + "l") {
+			e.fail(pre+"l", fmt.Sprintf("%sl: segment %d needs its length (segments are numbered from point 1 without gaps)", pre, i))
+			ok = false
+			continue
+		}
+		spec, _, good := e.readRun(pre)
+		seg := calc.Segment{Run: spec}
+		zp := pre + "z"
+		switch {
+		case e.s.Has(zp):
+			z, g := e.quantity(zp)
+			good = good && g
+			seg.EndZ = z
+		case i == n && e.s.Has("z2"):
+			z, g := e.quantity("z2")
+			good = good && g
+			seg.EndZ = z
+		default:
+			e.fail(zp, fmt.Sprintf("%s: enter the elevation of the end of segment %d", zp, i))
+			good = false
+		}
+		ok = ok && good
+		ln.Segments = append(ln.Segments, seg)
+	}
+	if !ok {
+		return nil
+	}
+	if e.s.Has("z2") && e.s.Has(fmt.Sprintf("s%d.z", n)) {
+		if z2, good := e.quantity("z2"); good && math.Abs(z2-ln.Segments[n-1].EndZ) > 0.01 {
+			e.warn(fmt.Sprintf("s%d.z", n), "line", fmt.Sprintf("the last segment ends at %s but point 2 is at %s: the profile follows the segments",
+				ShowParam("z2", ln.Segments[n-1].EndZ, e.us), ShowParam("z2", z2, e.us)))
+		}
+	}
+	return ln
+}

@@ -1,0 +1,279 @@
+package scenario
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"fieldhead/calc"
+)
+
+// PumpResult is the pump of a scenario on its line.
+type PumpResult struct {
+	Base     calc.PumpCurve // the data sheet as typed
+	Single   calc.PumpCurve // one pump at the scenario's speed
+	Curve    calc.PumpCurve // at speed and in the arrangement (the curve that meets the line)
+	Speed    float64        // share of the data sheet's speed
+	Count    int            // identical pumps
+	Parallel bool           // in parallel (else in series, when Count > 1)
+
+	// System is the system curve over the flows of the chart; NPSHa the
+	// NPSH available over the same flows when the pump's elevation is known.
+	System []calc.CurvePoint
+	NPSHa  []calc.CurvePoint
+	// Operating is where Curve meets the system curve, nil when they do
+	// not meet (Result.Errors says why) or the line is not described.
+	Operating *calc.OperatingResult
+}
+
+// pump reads the data sheet, speed and arrangement, then finds the
+// operating point on the balance's line.
+func (e *eval) pump() {
+	if !e.s.Has("pq") && !e.s.Has("ph") {
+		return
+	}
+	pr := &PumpResult{Speed: 1, Count: 1}
+	qs, ok1 := e.list("pq")
+	hs, ok2 := e.list("ph")
+	if !ok1 || !ok2 {
+		return
+	}
+	if len(qs) != len(hs) {
+		e.fail("ph", fmt.Sprintf("ph: %d heads for %d flows; give one head per data-sheet flow", len(hs), len(qs)))
+		return
+	}
+	pts := make([]calc.PumpPoint, len(qs))
+	for i := range qs {
+		pts[i] = calc.PumpPoint{Q: qs[i], H: hs[i]}
+	}
+	for _, opt := range []string{"peff", "pnpsh"} {
+		if !e.s.Has(opt) {
+			continue
+		}
+		vs, ok := e.list(opt)
+		if !ok {
+			return
+		}
+		if len(vs) != len(qs) {
+			e.fail(opt, fmt.Sprintf("%s: %d values for %d flows; give one per data-sheet flow", opt, len(vs), len(qs)))
+			return
+		}
+		for i, v := range vs {
+			if opt == "peff" {
+				pts[i].Eff = v
+			} else {
+				pts[i].NPSHr = v
+			}
+		}
+	}
+	base, err := calc.FitPump(pts)
+	if err != nil {
+		e.failErr("pq", err)
+		return
+	}
+	pr.Base = base
+	if e.s.Has("spd") {
+		v, ok := e.quantity("spd")
+		if !ok {
+			return
+		}
+		pr.Speed = v
+	}
+	single, err := base.AtSpeed(pr.Speed)
+	if err != nil {
+		e.failErr("spd", err)
+		return
+	}
+	pr.Single, pr.Curve = single, single
+	switch a := strings.TrimSpace(e.s.Get("pumps")); a {
+	case "", "1":
+	default:
+		if len(a) != 2 || a[0] < '2' || a[0] > '8' || (a[1] != 'p' && a[1] != 's') {
+			e.fail("pumps", "pumps: use 1, or a count and p or s, e.g. 2p for two in parallel, 2s for two in series")
+			return
+		}
+		pr.Count, pr.Parallel = int(a[0]-'0'), a[1] == 'p'
+		c, err := single.Combine(pr.Count, pr.Parallel)
+		if err != nil {
+			e.failErr("pumps", err)
+			return
+		}
+		pr.Curve = c
+	}
+	e.res.Pump = pr
+	b := e.bal
+	if b == nil {
+		return // the balance's own errors say what is missing
+	}
+	if b.Unknown != calc.SolvePumpHead {
+		e.warn("solve", "pump", "the operating point needs the balance solved for the pump head (solve=hp)")
+		return
+	}
+	qmax := math.Max(pr.Curve.MaxFlow(), b.Q)
+	sys, err := calc.SystemCurve(*b, calc.Flows(qmax, 41))
+	if err != nil {
+		e.failErr("q", err)
+		return
+	}
+	pr.System = sys
+	op, err := calc.OperatingPoint(pr.Curve, *b)
+	if err != nil {
+		e.failErr("pq", err)
+		return
+	}
+	pr.Operating = &op
+}
+
+// npsh works out the NPSH available at the pump, at the operating point
+// when there is one, else at the duty flow, and NPSHa over the chart's
+// flows.
+func (e *eval) npsh() {
+	if !e.s.Has("zp") || e.bal == nil || e.res.Fluid == nil {
+		return
+	}
+	zp, ok := e.quantity("zp")
+	if !ok {
+		return
+	}
+	b := *e.bal
+	q := b.Q
+	required := 0.0
+	pr := e.res.Pump
+	if pr != nil && pr.Operating != nil {
+		q, required = pr.Operating.Q, pr.Operating.NPSHr
+	}
+	if e.s.Has("npshr") {
+		v, ok := e.quantity("npshr")
+		if !ok {
+			return
+		}
+		required = v
+	}
+	in := func(q float64) (calc.NPSHInput, error) {
+		loss := 0.0
+		if b.Line != nil {
+			l, err := calc.SuctionLoss(b, q)
+			if err != nil {
+				return calc.NPSHInput{}, err
+			}
+			loss = l
+		}
+		return calc.NPSHInput{SurfacePressure: b.In.P, SurfaceZ: b.In.Z, PumpZ: zp, SuctionLoss: loss}, nil
+	}
+	x, err := in(q)
+	if err != nil {
+		e.failErr("pafter", err)
+		return
+	}
+	x.NPSHr = required
+	r, err := calc.NPSH(*e.res.Fluid, x)
+	if err != nil {
+		e.failErr("zp", err)
+		return
+	}
+	e.res.NPSH = &r
+	e.res.NPSHFlow = q
+	if b.Line == nil {
+		e.warn("zp", "npsh", "no line of segments: the suction losses are taken as zero; describe the suction pipe as segment 1 to include them")
+	}
+	if pr != nil {
+		for _, p := range pr.System {
+			x, err := in(p.Q)
+			if err != nil {
+				return
+			}
+			a, err := calc.NPSH(*e.res.Fluid, x)
+			if err != nil {
+				return
+			}
+			pr.NPSHa = append(pr.NPSHa, calc.CurvePoint{Q: p.Q, H: a.Available})
+		}
+	}
+}
+
+// field works out the pump's performance from gauge readings.
+func (e *eval) field() {
+	if !e.s.Has("qm") && !e.s.Has("ps") && !e.s.Has("pd") {
+		return
+	}
+	if e.res.Fluid == nil {
+		return
+	}
+	ok := true
+	gauge := func(param string) float64 {
+		text := e.s.Get(param)
+		if strings.TrimSpace(text) == "" {
+			e.fail(param, param+": enter the gauge reading")
+			ok = false
+			return 0
+		}
+		p, ref, err := calc.ParsePressure(param, text, DefaultUnit(param, e.us))
+		if err != nil {
+			e.failErr(param, err)
+			ok = false
+			return 0
+		}
+		if ref == calc.Absolute {
+			p -= e.res.SitePressure
+		}
+		return p
+	}
+	get := func(param string) float64 {
+		v, good := e.quantity(param)
+		ok = ok && good
+		return v
+	}
+	r := calc.FieldReadings{Ps: gauge("ps"), Pd: gauge("pd"), Zs: get("zs"), Zd: get("zd"),
+		Ds: get("ds"), Dd: get("dd"), Q: get("qm")}
+	if e.s.Has("pin") {
+		r.PowerIn = get("pin")
+	}
+	if !ok {
+		return
+	}
+	var curve *calc.PumpCurve
+	if e.res.Pump != nil {
+		curve = &e.res.Pump.Single
+	}
+	fc, err := calc.CheckPump(*e.res.Fluid, r, curve)
+	if err != nil {
+		e.failErr("qm", err)
+		return
+	}
+	e.res.Field = &fc
+	for _, w := range fc.Warnings {
+		e.warn(w.Field, "field", w.Text)
+	}
+}
+
+// turbine works out the turbine's output at the flow and the flow that
+// gives the most output, when the balance solves for the turbine head and
+// an efficiency is given.
+func (e *eval) turbine() {
+	if !e.s.Has("etat") || e.bal == nil {
+		return
+	}
+	eff, ok := e.quantity("etat")
+	if !ok {
+		return
+	}
+	if e.bal.Unknown != calc.SolveTurbineHead {
+		e.warn("etat", "turbine", "the turbine's output needs the balance solved for the turbine head (solve=ht)")
+		return
+	}
+	t, err := calc.Turbine(*e.bal, eff)
+	if err != nil {
+		e.failErr("etat", err)
+		return
+	}
+	e.res.Turbine = &t
+	best, err := calc.BestTurbineFlow(*e.bal, eff, 0)
+	if err != nil {
+		e.failErr("etat", err)
+		return
+	}
+	e.res.BestTurbine = &best
+	for _, w := range t.Warnings {
+		e.warn(w.Field, "turbine", w.Text)
+	}
+}
