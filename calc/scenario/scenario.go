@@ -40,15 +40,21 @@ var SegmentFields = []string{"l", "d", "nps", "sch", "mat", "eps", "fit", "k", "
 // SegmentParam returns the name of field f of segment n (1-based).
 func SegmentParam(n int, f string) string { return "s" + strconv.Itoa(n) + "." + f }
 
-// known maps every parameter name to its place in the canonical order.
+// known maps every parameter name to its place in the canonical order:
+// the segments' parameters come right after the single run's.
 var known = func() map[string]int {
-	m := make(map[string]int, len(Params)+MaxSegments*len(SegmentFields))
+	nseg := MaxSegments * len(SegmentFields)
+	m := make(map[string]int, len(Params)+nseg)
+	after := 0
 	for i, p := range Params {
-		m[p] = i
-	}
-	for n := 1; n <= MaxSegments; n++ {
-		for j, f := range SegmentFields {
-			m[SegmentParam(n, f)] = len(Params) + (n-1)*len(SegmentFields) + j
+		m[p] = i + after
+		if p == "chw" {
+			after = nseg
+			for n := 1; n <= MaxSegments; n++ {
+				for j, f := range SegmentFields {
+					m[SegmentParam(n, f)] = i + 1 + (n-1)*len(SegmentFields) + j
+				}
+			}
 		}
 	}
 	return m

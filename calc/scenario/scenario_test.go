@@ -19,7 +19,7 @@ func TestParseEncodeRoundTrip(t *testing.T) {
 		t.Errorf("round trip changed the link:\n got %s\nwant %s", got, q)
 	}
 	// Units and lists stay readable in the link.
-	for _, want := range []string{"q=45L/s", "fit=entry_sharp:1,gate:2", "z2=251m"} {
+	for _, want := range []string{"q=45L/s", "s1.fit=entry_sharp:1,elbow90lr:1,gate:1&s1.z=214.5m", "z2=251m", "pq=0,20,40,55,70L/s"} {
 		if !strings.Contains(q, want) {
 			t.Errorf("link %q lacks %q", q, want)
 		}
@@ -54,8 +54,12 @@ func TestDemo(t *testing.T) {
 	if len(r.Errors) > 0 {
 		t.Fatalf("the demo has errors: %v", r.Errors)
 	}
-	if r.Balance == nil || r.Run == nil || r.Convert == nil {
-		t.Fatalf("the demo must fill the balance, the run and the conversion: %+v", r)
+	if r.Balance == nil || r.Balance.Line == nil || len(r.Balance.Profile) == 0 || r.Convert == nil ||
+		r.Pump == nil || r.Pump.Operating == nil || len(r.Pump.System) == 0 || r.NPSH == nil || r.Field == nil {
+		t.Fatalf("the demo must fill the balance, line, profile, conversion, pump, NPSH and field check: %+v", r)
+	}
+	if t2 := Evaluate(TurbineDemo()); len(t2.Errors) > 0 || t2.Turbine == nil || t2.BestTurbine == nil {
+		t.Errorf("the turbine demo: errors %v, turbine %v", t2.Errors, t2.Turbine)
 	}
 	// Sanity, not a reference: the static lift is 39 m, so the pump head
 	// must exceed it by the (positive) losses.
