@@ -16,7 +16,7 @@ ADDR   ?= :8000
 
 # Debian packages the checks need: the browser for the page test, the
 # reference libraries for make refs and the reference checks.
-APT_PKGS := chromium python3-iapws python3-mpmath units
+APT_PKGS := chromium python3-iapws python3-mpmath python3-scipy units
 
 .PHONY: all run site wasm dist test deps fmt vet unit browser refs clean
 
