@@ -111,6 +111,12 @@ func (e *eval) balance(run *RunResult) {
 		return
 	}
 	e.res.Balance = &br
+	if fl := e.res.Fluid; len(br.Profile) > 0 {
+		shift := (fl.VapourPressure - e.res.SitePressure) / (fl.Density * calc.StandardGravity)
+		for _, n := range br.Profile {
+			e.res.VapourLine = append(e.res.VapourLine, n.Z+shift)
+		}
+	}
 	for _, w := range br.Warnings {
 		e.warn(w.Field, "balance", w.Text)
 	}

@@ -20,6 +20,13 @@ type Result struct {
 	Balance *calc.BalanceResult // the two-point energy balance
 	Convert *ConvertResult      // the Convert view
 
+	// VapourLine holds, for each node of Balance.Profile, the level the
+	// hydraulic grade line would have where the absolute pressure in the
+	// pipe equals the liquid's vapour pressure: Z + (p_v − p_site)/(ρg),
+	// on the profile's gauge basis. An HGL at or below it means cavitation
+	// or a broken column.
+	VapourLine []float64
+
 	Pump        *PumpResult         // the pump curve, system curve and operating point
 	NPSH        *calc.NPSHResult    // NPSH at the pump
 	NPSHFlow    float64             // the flow NPSH was worked out at, m³/s

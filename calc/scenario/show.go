@@ -17,3 +17,34 @@ func ShowParam(param string, si float64, us bool) string {
 	}
 	return calc.FormatValue(si, u, 4)
 }
+
+// ShowSolved formats the solved unknown of a balance for display: main is
+// the answer as the scenario asks for it (a pressure gauge or absolute as
+// its pNref says), alt is the other form of a pressure ("" otherwise).
+func ShowSolved(s Scenario, r Result) (main, alt string) {
+	if r.Balance == nil {
+		return "", ""
+	}
+	return ShowSolvedValue(s, r, r.Balance.Value)
+}
+
+// ShowSolvedValue is ShowSolved for another value of the unknown, such as
+// a bound of a transitional range (ValueLow, ValueHigh).
+func ShowSolvedValue(s Scenario, r Result, v float64) (main, alt string) {
+	b := r.Balance
+	if b == nil {
+		return "", ""
+	}
+	p := b.Solve.String()
+	us := r.US
+	switch p {
+	case "p1", "p2":
+		abs := ShowParam(p, v, us) + " absolute"
+		gauge := ShowParam(p, v-r.SitePressure, us) + " gauge"
+		if s.Get(p+"ref") == "a" {
+			return abs, gauge
+		}
+		return gauge, abs
+	}
+	return ShowParam(p, v, us), ""
+}
