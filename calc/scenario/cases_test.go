@@ -51,13 +51,6 @@ func observable(r Result, key string) (float64, string, error) {
 				all = append(all, w.Text)
 			}
 		}
-		if r.Balance != nil {
-			for _, w := range r.Balance.Warnings {
-				if w.Field == p {
-					all = append(all, w.Text)
-				}
-			}
-		}
 		if len(all) == 0 {
 			return 0, "", fmt.Errorf("no warning on %s", p)
 		}
@@ -143,6 +136,76 @@ func observable(r Result, key string) (float64, string, error) {
 			return b.In.Alpha, "", nil
 		case "alpha2":
 			return b.Out.Alpha, "", nil
+		}
+	case "pump":
+		if r.Pump == nil || r.Pump.Operating == nil {
+			return miss()
+		}
+		o := r.Pump.Operating
+		switch name {
+		case "q":
+			return o.Q, "", nil
+		case "h":
+			return o.H, "", nil
+		case "eff":
+			return o.Eff, "", nil
+		case "shaft":
+			return o.ShaftPower, "", nil
+		case "npshr":
+			return o.NPSHr, "", nil
+		}
+	case "npsh":
+		n := r.NPSH
+		if n == nil {
+			return miss()
+		}
+		switch name {
+		case "a":
+			return n.Available, "", nil
+		case "r":
+			return n.Required, "", nil
+		case "margin":
+			return n.Margin, "", nil
+		case "ratio":
+			return n.Ratio, "", nil
+		case "level":
+			return 0, n.Level.String(), nil
+		}
+	case "field":
+		f := r.Field
+		if f == nil {
+			return miss()
+		}
+		switch name {
+		case "head":
+			return f.Head, "", nil
+		case "power":
+			return f.HydraulicPower, "", nil
+		case "eff":
+			return f.Efficiency, "", nil
+		case "dev":
+			return f.Deviation, "", nil
+		}
+	case "turbine", "best":
+		t := r.Turbine
+		if part == "best" {
+			t = r.BestTurbine
+		}
+		if t == nil {
+			return miss()
+		}
+		switch name {
+		case "q":
+			return t.Q, "", nil
+		case "gross":
+			return t.GrossHead, "", nil
+		case "net":
+			return t.NetHead, "", nil
+		case "power":
+			return t.Power, "", nil
+		case "lossfrac":
+			// Share of the gross head lost in the line and at the exit.
+			return (t.Losses + t.ExitVelocityHead) / t.GrossHead, "", nil
 		}
 	case "convert":
 		c := r.Convert

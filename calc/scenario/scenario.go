@@ -86,6 +86,7 @@ func Parse(query string) (Scenario, error) {
 			continue
 		}
 		k, v, _ := strings.Cut(part, "=")
+		k, v = lenientPercent(k), lenientPercent(v)
 		key, err := url.QueryUnescape(k)
 		if err != nil {
 			errs = append(errs, fmt.Sprintf("link: a parameter name is not valid percent-encoding (%q)", truncate(k)))
@@ -185,6 +186,27 @@ func escape(v string) string {
 		}
 	}
 	return b.String()
+}
+
+// lenientPercent escapes a '%' that does not start a %XX escape, so a
+// link typed by hand (spd=90%) reads as meant rather than failing.
+func lenientPercent(s string) string {
+	if !strings.Contains(s, "%") {
+		return s
+	}
+	var b strings.Builder
+	for i := 0; i < len(s); i++ {
+		if s[i] == '%' && !(i+2 < len(s) && isHex(s[i+1]) && isHex(s[i+2])) {
+			b.WriteString("%25")
+			continue
+		}
+		b.WriteByte(s[i])
+	}
+	return b.String()
+}
+
+func isHex(c byte) bool {
+	return '0' <= c && c <= '9' || 'a' <= c && c <= 'f' || 'A' <= c && c <= 'F'
 }
 
 func truncate(s string) string {

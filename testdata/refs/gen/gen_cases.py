@@ -238,8 +238,181 @@ def balance_cases():
     w.close()
 
 
+def iso2533(z):
+    """ISO 2533 troposphere pressure at geopotential altitude z (m)."""
+    z = mp.mpf(z)
+    t0, l, r, p0 = mp.mpf("288.15"), mp.mpf("0.0065"), mp.mpf("287.05287"), mp.mpf(101325)
+    return p0 * (1 - l * z / t0) ** (G / (r * l))
+
+
+def darcy_loss(rho, mu, q, d, length, eps, k):
+    """Friction and fittings loss of one pipe at q, and its velocity."""
+    v = q / (PI * d * d / 4)
+    re = rho * v * d / mu
+    f = 64 / re if re < 2300 else colebrook(re, eps / d)
+    return (f * length / d + k) * v * v / (2 * G), v
+
+
+def series_cases():
+    w = Writer("ref-series-pipes.case",
+               "lines of pipes in series: friction per segment plus the loss at each change of diameter",
+               "python3-mpmath (series pipes: Darcy-Weisbach with Colebrook-White per segment, "
+               "Borda-Carnot expansion, contraction K = 0.5(1 - (d2/d1)^2) on the downstream velocity)")
+    rho, mu = mp.mpf(1000), mp.mpf("0.001")
+    base = "liq=custom&rho=1000kg/m3&mu=1mPa.s&pv=2kPa&baro=101.325kPa&p1=0kPa&v1=0m/s&p2=0kPa&v2=0m/s"
+    lines = [
+        ("three sizes, contraction then expansion", "20L/s",
+         [("300", "150", "0.05", "0.5"), ("200", "100", "0.05", "0"), ("400", "200", "0.05", "1")]),
+        ("two sizes, expansion", "8L/s",
+         [("120", "80", "0.0015", "0.5"), ("250", "125", "0.0015", "1")]),
+        ("four equal segments behave as one pipe", "12L/s",
+         [("100", "100", "0.1", "0.5"), ("100", "100", "0.1", "0"), ("100", "100", "0.1", "0"), ("100", "100", "0.1", "1")]),
+    ]
+    for name, qtext, segs in lines:
+        q = mp.mpf(qtext[:-3]) / 1000
+        query = base + "&z1=50m&z2=60m&q=%s&solve=hp" % qtext
+        total = mp.mpf(0)
+        prev_d, prev_v = None, None
+        for i, (l, d, eps, k) in enumerate(segs, 1):
+            dd = mp.mpf(d) / 1000
+            hf, v = darcy_loss(rho, mu, q, dd, mp.mpf(l), mp.mpf(eps) / 1000, mp.mpf(k))
+            total += hf
+            if prev_d is not None and prev_d != dd:
+                if dd > prev_d:
+                    total += (1 - (prev_d / dd) ** 2) ** 2 * prev_v ** 2 / (2 * G)
+                else:
+                    total += mp.mpf("0.5") * (1 - (dd / prev_d) ** 2) * v ** 2 / (2 * G)
+            prev_d, prev_v = dd, v
+            z = "60m" if i == len(segs) else "%dm" % (50 + i)
+            query += "&s%d.l=%sm&s%d.d=%smm&s%d.eps=%smm&s%d.k=%s&s%d.z=%s" % (i, l, i, d, i, eps, i, k, i, z)
+        w.case(name, query, [
+            "balance.hf = %s m ± 1e-9 rel" % sig(total),
+            "balance.value = %s m ± 1e-9 rel" % sig(10 + total),
+        ])
+    w.close()
+
+
+def pump_cases():
+    from scipy.interpolate import PchipInterpolator
+    from scipy.optimize import brentq
+    w = Writer("ref-pump-operating.case",
+               "pump operating points: a data-sheet curve against a line's system curve",
+               "python3-scipy (PchipInterpolator, the Fritsch-Carlson monotone cubic, and brentq) "
+               "with python3-mpmath Colebrook-White for the system curve")
+    qs = [0.0, 0.010, 0.020, 0.030, 0.040]
+    hs = [48.0, 46.5, 42.0, 35.0, 25.0]
+    effs = [0.0, 0.45, 0.66, 0.72, 0.65]
+    base = ("liq=custom&rho=1000kg/m3&mu=1mPa.s&pv=2kPa&baro=101.325kPa&p1=0kPa&z1=10m&v1=0m/s"
+            "&p2=0kPa&z2=30m&v2=0m/s&q=25L/s&solve=hp&l=500m&d=125mm&eps=0.05mm&k=4"
+            "&pq=0,10,20,30,40L/s&ph=48,46.5,42,35,25m&peff=0,45,66,72,65%")
+    rho, mu = mp.mpf(1000), mp.mpf("0.001")
+
+    def system(q):
+        if q <= 0:
+            return 20.0
+        hf, _ = darcy_loss(rho, mu, mp.mpf(q), mp.mpf("0.125"), mp.mpf(500), mp.mpf("0.05e-3"), mp.mpf(4))
+        return float(20 + hf)
+
+    for name, extra, speed, n, parallel in [
+            ("one pump at full speed", "", 1.0, 1, False),
+            ("one pump at 90 % speed (affinity laws)", "&spd=90%", 0.9, 1, False),
+            ("two in parallel", "&pumps=2p", 1.0, 2, True),
+            ("two in series", "&pumps=2s", 1.0, 2, False)]:
+        x = [q * speed * (n if parallel else 1) for q in qs]
+        y = [h * speed * speed * (1 if parallel else n) for h in hs]
+        pump = PchipInterpolator(x, y)
+        eff = PchipInterpolator(x, effs)
+        q = brentq(lambda qq: float(pump(qq)) - system(qq), 1e-9, x[-1], xtol=1e-15, rtol=1e-15)
+        h = float(pump(q))
+        e = float(eff(q))
+        w.case(name, base + extra, [
+            "pump.q = %s m3/s ± 1e-8 rel" % sig(q),
+            "pump.h = %s m ± 1e-8 rel" % sig(h),
+            "pump.eff = %s ± 1e-8 rel" % sig(e),
+            "pump.shaft = %s W ± 1e-8 rel" % sig(1000 * 9.80665 * q * h / e),
+        ])
+    w.close()
+
+
+def npsh_cases():
+    w = Writer("ref-npsh.case", "NPSH available at the pump inlet: source surface, vapour pressure, static height, suction losses",
+               "python3-iapws and python3-mpmath (NPSHa = (p_surface - p_v)/(rho g) + z_surface - z_pump - suction loss; "
+               "ISO 2533 for the site pressure)")
+    for name, tc, alt, z1, zp, q, npshr in [
+            ("suction lift of 3 m, cold water, sea level", "10", "0", "100", "103", "15", "2.5"),
+            ("flooded suction, warm water, 1200 m altitude", "60", "1200", "105", "101", "30", "4"),
+            ("suction lift near the limit, 80 C water", "80", "500", "100", "102", "20", "3")]:
+        t = mp.mpf(tc) + mp.mpf("273.15")
+        patm = iso2533(alt)
+        rho, mu, psat = water(t, max(patm, mp.mpf(_PSat_T(float(t)) * 1e6)))
+        qq = mp.mpf(q) / 1000
+        hf, _ = darcy_loss(rho, mu, qq, mp.mpf("0.15"), mp.mpf(12), mp.mpf("0.045e-3"), mp.mpf("1.5"))
+        a = (patm - psat) / (rho * G) + mp.mpf(z1) - mp.mpf(zp) - hf
+        r = mp.mpf(npshr)
+        query = ("liq=water&t=%sC&alt=%sm&p1=0kPa&z1=%sm&v1=0m/s&p2=200kPa&z2=120m&d2=150mm&q=%sL/s&solve=hp"
+                 "&s1.l=12m&s1.d=150mm&s1.eps=0.045mm&s1.k=1.5&s1.z=%sm"
+                 "&s2.l=300m&s2.d=150mm&s2.eps=0.045mm&s2.k=2&s2.z=120m&pafter=1&zp=%sm&npshr=%sm"
+                 % (tc, alt, z1, q, zp, zp, npshr))
+        level = "danger" if a < r else ("caution" if a / r < mp.mpf("1.1") or a - r < mp.mpf("0.6") else "ok")
+        w.case(name, query, [
+            "npsh.a = %s m ± 1e-8 rel" % sig(a),
+            "npsh.margin = %s m ± 1e-8 rel" % sig(a - r),
+            "npsh.ratio = %s ± 1e-8 rel" % sig(a / r),
+            "npsh.level is %s" % level,
+        ])
+    w.close()
+
+
+def field_cases():
+    w = Writer("ref-field-check.case", "a running pump's head and wire-to-water efficiency from gauge readings",
+               "python3-iapws and python3-mpmath (H = (pd - ps)/(rho g) + zd - zs + (Vd^2 - Vs^2)/(2 g); "
+               "efficiency = rho g Q H / electrical input)")
+    for name, tc, ps, pd, zs, zd, ds, dd, q, pin in [
+            ("end-suction pump, gauges at different heights", "15", "-25", "380", "0", "0.6", "150", "100", "30", "17.5"),
+            ("booster with positive suction pressure", "25", "150", "520", "1.2", "1.2", "100", "80", "12", "6.8")]:
+        t = mp.mpf(tc) + mp.mpf("273.15")
+        rho, _, _ = water(t, mp.mpf(101325))
+        qq = mp.mpf(q) / 1000
+        vs = qq / (PI * (mp.mpf(ds) / 1000) ** 2 / 4)
+        vd = qq / (PI * (mp.mpf(dd) / 1000) ** 2 / 4)
+        h = (mp.mpf(pd) - mp.mpf(ps)) * 1000 / (rho * G) + mp.mpf(zd) - mp.mpf(zs) + (vd ** 2 - vs ** 2) / (2 * G)
+        p = rho * G * qq * h
+        query = ("liq=water&t=%sC&baro=101.325kPa&ps=%skPa&pd=%skPa&zs=%sm&zd=%sm&ds=%smm&dd=%smm&qm=%sL/s&pin=%skW"
+                 % (tc, ps, pd, zs, zd, ds, dd, q, pin))
+        w.case(name, query, [
+            "field.head = %s m ± 1e-9 rel" % sig(h),
+            "field.power = %s W ± 1e-9 rel" % sig(p),
+            "field.eff = %s ± 1e-9 rel" % sig(p / (mp.mpf(pin) * 1000)),
+        ])
+    w.close()
+
+
+def turbine_cases():
+    w = Writer("ref-turbine.case", "turbine output from a gravity line",
+               "python3-iapws and python3-mpmath (net head = gross head - line losses - exit velocity head; "
+               "output = rho g Q H_net eta)")
+    t, alt = mp.mpf("279.15"), "800"
+    patm = iso2533(alt)
+    rho, mu, _ = water(t, patm)
+    q, d = mp.mpf("0.018"), mp.mpf("0.125")
+    hf, v = darcy_loss(rho, mu, q, d, mp.mpf(1100), mp.mpf("0.007e-3"), mp.mpf("0.5"))
+    net = 95 - hf - v * v / (2 * G)
+    w.case("run-of-river turbine, 95 m gross",
+           "liq=water&t=6C&alt=800m&p1=0kPa&z1=895m&v1=0m/s&p2=0kPa&z2=800m&d2=125mm&q=18L/s&solve=ht&etat=78%"
+           "&s1.l=1100m&s1.d=125mm&s1.eps=0.007mm&s1.k=0.5&s1.z=800m", [
+               "turbine.net = %s m ± 1e-9 rel" % sig(net),
+               "turbine.power = %s W ± 1e-9 rel" % sig(rho * G * q * net * mp.mpf("0.78")),
+           ])
+    w.close()
+
+
 if __name__ == "__main__":
     water_cases()
     colebrook_cases()
     units_cases()
     balance_cases()
+    series_cases()
+    pump_cases()
+    npsh_cases()
+    field_cases()
+    turbine_cases()
