@@ -40,6 +40,27 @@
 // with the explicit Swamee–Jain and Haaland formulas as alternatives;
 // Hazen–Williams is offered for water.
 //
+// # Lines, pumps and turbines
+//
+// A Line is an ordered list of segments from point 1 to point 2, each a Run
+// with the elevation of its end; each segment's friction uses its own
+// velocity and Reynolds number, and changes of diameter add a Borda–Carnot
+// expansion or a contraction loss. A balance with a line carries its
+// energy and hydraulic grade lines (EGL, HGL) node by node; the pump sits
+// after segment PumpAfter.
+//
+// SystemCurve gives the head the line needs at each flow, each solved in
+// full (Colebrook–White at every flow, no k·Q² fit). A PumpCurve is fitted
+// through 3 to 8 data-sheet points by the monotone piecewise cubic of
+// Fritsch and Carlson (1980) and is not extrapolated beyond the last
+// point; AtSpeed applies the affinity laws and Combine puts identical
+// pumps in parallel or in series. OperatingPoint intersects the two
+// curves by Brent's method. CheckPump turns gauge readings into pump head,
+// hydraulic power and wire-to-water efficiency. NPSH compares the NPSH
+// available at the pump inlet with the NPSH required. Turbine and
+// BestTurbineFlow give a turbine's net head and output, and the flow that
+// maximises it.
+//
 // # Liquids
 //
 // Water from 0 °C to 100 °C, compressed liquid up to 10 MPa: density from
