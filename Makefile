@@ -18,7 +18,7 @@ ADDR   ?= :8000
 # reference libraries for make refs and the reference checks.
 APT_PKGS := chromium python3-iapws python3-mpmath python3-scipy units
 
-.PHONY: all run site wasm dist test deps fmt vet unit browser refs clean
+.PHONY: all run site wasm dist test deps fmt vet unit browser refs refs-check clean
 
 all: site
 
@@ -59,7 +59,12 @@ unit:
 browser: site
 	FIELDHEAD_BROWSER=1 FIELDHEAD_SITE="$(abspath $(SITE))" $(GO) test -count=1 -v ./app
 
-test: deps fmt vet unit browser
+# The committed reference tables must be exactly what the reference
+# libraries produce.
+refs-check: refs
+	git diff --exit-code -- testdata
+
+test: deps fmt vet unit refs-check browser
 
 refs: deps
 	@set -e; for f in testdata/refs/gen/*; do \
