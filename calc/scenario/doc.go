@@ -19,7 +19,7 @@
 //
 // Liquid and site:
 //
-//	liq     water | seawater | custom        the liquid (default water)
+//	liq     water | seawater | custom        the liquid (default water; seawater is 35 g/kg, 0–40 °C)
 //	t       temperature, e.g. 18C, 64F       required for water and seawater
 //	rho     density, e.g. 998kg/m3           custom liquid only
 //	mu      dynamic viscosity, e.g. 1.0mPa.s custom liquid only

@@ -176,7 +176,7 @@ func (e *eval) site() {
 // liquid builds the fluid at its temperature.
 func (e *eval) liquid() {
 	switch liq := strings.TrimSpace(e.s.Get("liq")); liq {
-	case "", "water":
+	case "", "water", "seawater":
 		t, ok := e.quantity("t")
 		if !ok {
 			return
@@ -194,7 +194,11 @@ func (e *eval) liquid() {
 			e.warn("t", "liquid", "the water is at or above its boiling point at the site pressure; its properties are taken at the saturation pressure")
 			p = psat
 		}
-		fl, err := calc.Water(t, p)
+		props := calc.Water
+		if liq == "seawater" {
+			props = calc.Seawater
+		}
+		fl, err := props(t, p)
 		if err != nil {
 			e.failErr("t", err)
 			return
@@ -214,7 +218,7 @@ func (e *eval) liquid() {
 		}
 		e.res.Fluid = &fl
 	default:
-		e.fail("liq", fmt.Sprintf("liq: %q is not a liquid Fieldhead knows; use water or custom", liq))
+		e.fail("liq", fmt.Sprintf("liq: %q is not a liquid Fieldhead knows; use water, seawater or custom", liq))
 	}
 }
 

@@ -159,7 +159,7 @@ func Choices(param string) []Choice {
 	case "units":
 		return []Choice{{"si", "SI"}, {"us", "US"}}
 	case "liq":
-		return []Choice{{"water", "Water"}, {"custom", "Other liquid (typed properties)"}}
+		return []Choice{{"water", "Water"}, {"seawater", "Seawater, 35 g/kg (0–40 °C)"}, {"custom", "Other liquid (typed properties)"}}
 	case "solve":
 		return []Choice{
 			{"hp", "pump head"}, {"ht", "turbine head"}, {"hf", "friction head"},
