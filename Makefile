@@ -4,6 +4,8 @@
 #   make test    every check CI runs (installs missing Debian packages)
 #   make dist    a static folder for any web host: make dist PREFIX=/tools/fieldhead
 #   make refs    regenerate the reference tables in testdata/refs from Debian's libraries
+#   make bench   measure the budgets of the product brief (table, then one JSON line)
+#   make fuzz    run each fuzz target for FUZZTIME (part of make test)
 
 SHELL  := /bin/bash
 GO     ?= go
@@ -18,7 +20,7 @@ ADDR   ?= :8000
 # reference libraries for make refs and the reference checks.
 APT_PKGS := chromium python3-iapws python3-mpmath python3-scipy units
 
-.PHONY: all run site wasm dist test deps fmt vet unit browser refs refs-check clean
+.PHONY: all run site wasm dist test deps fmt vet unit fuzz browser bench refs refs-check clean
 
 all: site
 
@@ -59,12 +61,30 @@ unit:
 browser: site
 	FIELDHEAD_BROWSER=1 FIELDHEAD_SITE="$(abspath $(SITE))" $(GO) test -count=1 -v ./app
 
+# Each fuzz target for a bounded time. A failing input is written under the
+# package's testdata/fuzz/<target>/, where a plain go test replays it.
+FUZZTIME ?= 10s
+FUZZ     := ./calc:FuzzParse ./calc:FuzzBalance ./calc/scenario:FuzzScenario
+
+fuzz:
+	@failed=""; for t in $(FUZZ); do \
+		pkg=$${t%%:*}; name=$${t##*:}; \
+		echo "== $$name in $$pkg for $(FUZZTIME)"; \
+		$(GO) test -run '^$$' -fuzz "^$$name\$$" -fuzztime $(FUZZTIME) "$$pkg" || failed="$$failed $$name"; \
+	done; \
+	if [ -n "$$failed" ]; then echo "fuzz targets failed:$$failed"; exit 1; fi
+
+# The budgets of the product brief, measured in headless Chromium (4× CPU
+# throttle) and by the calc benchmarks; the last line is the JSON summary.
+bench: site
+	$(GO) run ./app/internal/bench -site "$(SITE)"
+
 # The committed reference tables must be exactly what the reference
 # libraries produce.
 refs-check: refs
 	git diff --exit-code -- testdata
 
-test: deps fmt vet unit refs-check browser
+test: deps fmt vet unit refs-check fuzz browser
 
 refs: deps
 	@set -e; for f in testdata/refs/gen/*; do \

@@ -70,17 +70,21 @@ func (s *sheet) betweenCard() app.UI {
 			s.quantity("hp", "Pump head", "(added; blank if none)"),
 			s.quantity("ht", "Turbine head", "(taken; blank if none)"),
 		),
-		s.toggle("fric", "Friction head between the points"),
 	}
-	if s.current("fric") == "hf" {
-		body = append(body, s.quantity("hf", "Friction head", "(all losses, 1 to 2)"))
+	if n := s.segmentCount(); n > 0 {
+		body = append(body, s.lineSummary(n))
 	} else {
-		body = append(body, s.runInputs(false)...)
-		if r := s.res.Run; r != nil {
-			body = append(body, app.P().Class("computed").ID("run-line").Text(fmt.Sprintf(
-				"pipe friction %s + fittings %s = %s · Re %s (%s)",
-				scenario.Show(r.MajorLoss, calc.Length, s.us()), scenario.Show(r.MinorLoss, calc.Length, s.us()),
-				scenario.Show(r.TotalLoss, calc.Length, s.us()), plainNumber(r.Reynolds), r.Regime)))
+		body = append(body, s.toggle("fric", "Friction head between the points"))
+		if s.current("fric") == "hf" {
+			body = append(body, s.quantity("hf", "Friction head", "(all losses, 1 to 2)"))
+		} else {
+			body = append(body, s.runInputs(false)...)
+			if r := s.res.Run; r != nil {
+				body = append(body, app.P().Class("computed").ID("run-line").Text(fmt.Sprintf(
+					"pipe friction %s + fittings %s = %s · Re %s (%s)",
+					scenario.Show(r.MajorLoss, calc.Length, s.us()), scenario.Show(r.MinorLoss, calc.Length, s.us()),
+					scenario.Show(r.TotalLoss, calc.Length, s.us()), plainNumber(r.Reynolds), r.Regime)))
+			}
 		}
 	}
 	body = append(body, s.choice("alpha", "Kinetic-energy factor α", ""))
@@ -170,6 +174,10 @@ func (s *sheet) answerLines() []string {
 		out = append(out, "hydraulic power to the turbine "+scenario.Show(b.TurbinePower, calc.Power, us)+" (before machine losses)")
 	}
 	out = append(out, "at a flow of "+scenario.ShowParam("q", b.Q, us)+", friction and fittings "+scenario.Show(b.FrictionHead, calc.Length, us))
+	if pr := s.res.Pump; pr != nil && pr.Operating != nil {
+		out = append(out, "the data-sheet pump runs at "+scenario.ShowParam("q", pr.Operating.Q, us)+" and "+
+			scenario.Show(pr.Operating.H, calc.Length, us)+" (Pump view)")
+	}
 	return out
 }
 
@@ -212,7 +220,7 @@ func (s *sheet) budgetCard() app.UI {
 			}
 			rows = append(rows, app.Li().Class(classIf("brow", isUnknown, "is-unknown")).Body(
 				app.Div().Class("blabel").Text(it.Label),
-				app.Div().Class("btrack").Body(app.Div().Class(cls).Style("width", fmt.Sprintf("%.1f%%", w))),
+				app.Div().Class("btrack").Body(app.Div().Class(cls).DataSet("w", int(math.Round(w)))),
 				app.Div().Class("bval").Body(
 					app.Strong().Text(scenario.Show(it.Head, calc.Length, us)),
 					app.Span().Class("bpa").Text(scenario.Show(it.Pressure, calc.Pressure, us)),

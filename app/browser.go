@@ -57,6 +57,7 @@ func nowText() string {
 // onCopy copies the share link: the asynchronous clipboard where the
 // browser allows it, else the link appears selected for a manual copy.
 func (s *sheet) onCopy(ctx app.Context, e app.Event) {
+	defer s.contain("copying the link")
 	link := s.link()
 	clip := app.Window().Get("navigator").Get("clipboard")
 	if !clip.Truthy() {
@@ -106,11 +107,13 @@ func (s *sheet) fallbackCopy(ctx app.Context) {
 // onPrint opens the browser's print dialog; the print stylesheet turns the
 // page into a sheet.
 func (s *sheet) onPrint(ctx app.Context, e app.Event) {
+	defer s.contain("opening the print dialog")
 	app.Window().Call("print")
 }
 
 // onDemo loads the demo scenario, after asking when the sheet has content.
 func (s *sheet) onDemo(ctx app.Context, e app.Event) {
+	defer s.contain("loading the demo")
 	if s.query != "" && s.query != scenario.Demo().Encode() &&
 		!app.Window().Call("confirm", "Replace this sheet with the demo? Copy its link first if you need it.").Bool() {
 		return
@@ -121,6 +124,7 @@ func (s *sheet) onDemo(ctx app.Context, e app.Event) {
 
 // onBlank starts an empty sheet on the same view and unit system.
 func (s *sheet) onBlank(ctx app.Context, e app.Event) {
+	defer s.contain("starting a new sheet")
 	if s.query != "" && !app.Window().Call("confirm", "Start a new, empty sheet? Copy this sheet's link first if you need it.").Bool() {
 		return
 	}

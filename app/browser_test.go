@@ -195,11 +195,13 @@ func TestBrowser(t *testing.T) {
 	// What the core says for the demo (the page must show the same).
 	demo := scenario.Demo()
 	want := scenario.Evaluate(demo)
-	if want.Balance == nil || want.Run == nil {
+	if want.Balance == nil || want.Balance.Line == nil {
 		t.Fatalf("the demo does not evaluate: %v", want.Errors)
 	}
 	wantHead := scenario.Show(want.Balance.Value, calc.Length, want.US)
-	wantRun := scenario.Show(want.Run.TotalLoss, calc.Length, want.US)
+	// The demo's friction comes from its line of segments.
+	wantLine := scenario.Show(want.Balance.Line.TotalLoss, calc.Length, want.US)
+	wantSegments := fmt.Sprintf("line of %d segments", len(want.Balance.Line.Segments))
 
 	// 1. A share link of the demo opens on its answer.
 	link := srv.URL + "/?" + demo.Encode()
@@ -236,8 +238,8 @@ func TestBrowser(t *testing.T) {
 	if msg := text("#err-z2"); msg == "" {
 		t.Error("the bad field's message is empty")
 	}
-	if got := text("#run-line"); !strings.Contains(got, wantRun) {
-		t.Errorf("the pipe run's friction should stay %q while z2 is bad, shows %q", wantRun, got)
+	if got := text("#line-total"); !strings.Contains(got, wantSegments) {
+		t.Errorf("the friction should still say it comes from the %s while z2 is bad, shows %q", wantSegments, got)
 	}
 	if got := text("#fluid"); got == "" {
 		t.Error("the liquid's properties vanished while z2 is bad")
@@ -277,6 +279,9 @@ func TestBrowser(t *testing.T) {
 	typeInto("#in-z2", "251")
 	if got := waitText("#answer-value", wantHead); got != wantHead {
 		t.Errorf("after correcting z2 the answer is %q, want %q", got, wantHead)
+	}
+	if got := text("#line-total"); !strings.Contains(got, wantSegments) || !strings.Contains(got, "= "+wantLine) {
+		t.Errorf("after correcting z2 the friction should be the %s, %s; shows %q", wantSegments, wantLine, got)
 	}
 
 	// The US switch shows the same answer in US units.
@@ -337,12 +342,45 @@ func TestBrowser(t *testing.T) {
 		}
 		shot(v + "-1024x768")
 	}
-	if got := waitText("#answer-value", plainNumber(want.Run.Reynolds)); got != plainNumber(want.Run.Reynolds) {
-		t.Errorf("Regime shows Re %q, core gives %q", got, plainNumber(want.Run.Reynolds))
+	// A link with a single pipe run instead of segments: the Regime view
+	// and the balance's "from the pipe run" friction still work.
+	single := demo.Clone()
+	for n := 1; n <= 2; n++ {
+		for _, f := range scenario.SegmentFields {
+			_ = single.Set(scenario.SegmentParam(n, f), "")
+		}
 	}
-	if err := chromedp.Do(ctx, chromedp.Click(chromedp.CSS("#view-balance"))); err != nil {
+	for _, kv := range [][2]string{{"view", "regime"}, {"l", "640m"}, {"nps", "8"}, {"sch", "40"}, {"mat", "steel"},
+		{"fit", "entry_sharp:1,gate:2,elbow90lr:6,check_swing:1,exit:1"}} {
+		if err := single.Set(kv[0], kv[1]); err != nil {
+			t.Fatal(err)
+		}
+	}
+	wantSingle := scenario.Evaluate(single)
+	if wantSingle.Run == nil || wantSingle.Balance == nil {
+		t.Fatalf("the single-run link does not evaluate: %v", wantSingle.Errors)
+	}
+	if err := chromedp.Do(ctx, chromedp.Navigate(srv.URL+"/?"+single.Encode())); err != nil {
 		t.Fatal(err)
 	}
+	waitResult()
+	if got := waitText("#answer-value", plainNumber(wantSingle.Run.Reynolds)); got != plainNumber(wantSingle.Run.Reynolds) {
+		t.Errorf("Regime shows Re %q, core gives %q", got, plainNumber(wantSingle.Run.Reynolds))
+	}
+	if err := chromedp.Do(ctx, chromedp.Click(chromedp.CSS("#view-balance")), chromedp.WaitVisible(chromedp.CSS("#run-line"))); err != nil {
+		t.Fatalf("the balance of a single-run link shows no pipe-run friction: %v", err)
+	}
+	if got, w := text("#run-line"), scenario.Show(wantSingle.Run.TotalLoss, calc.Length, wantSingle.US); !strings.Contains(got, w) {
+		t.Errorf("the pipe run's friction shows %q, core gives %q", got, w)
+	}
+	if got, w := text("#answer-value"), scenario.Show(wantSingle.Balance.Value, calc.Length, wantSingle.US); got != w {
+		t.Errorf("the single-run answer is %q, core gives %q", got, w)
+	}
+	// Back to the demo for the sizes and the printed sheet.
+	if err := chromedp.Do(ctx, chromedp.Navigate(link)); err != nil {
+		t.Fatal(err)
+	}
+	waitResult()
 	for _, size := range []struct {
 		name string
 		w, h int64

@@ -14,6 +14,9 @@ var viewHints = map[string]string{
 	"balance": "two-point energy balance",
 	"convert": "head ↔ pressure",
 	"regime":  "Re and friction",
+	"line":    "segments, EGL/HGL",
+	"pump":    "duty, NPSH, readings",
+	"report":  "the printed sheet",
 }
 
 // paramLabels name the parameters in words, for lists of fields to check.
@@ -27,6 +30,12 @@ var paramLabels = map[string]string{
 	"l": "length of the run", "d": "inside diameter", "nps": "nominal size", "sch": "schedule", "mat": "material",
 	"eps": "roughness", "fit": "fittings", "k": "extra ΣK", "fm": "friction method", "chw": "Hazen–Williams C",
 	"cv": "value to convert", "cvref": "gauge/absolute",
+	"pq": "data-sheet flows", "ph": "data-sheet heads", "peff": "data-sheet efficiencies", "pnpsh": "data-sheet NPSH required",
+	"spd": "speed", "pumps": "pumps working together", "zp": "pump centreline elevation", "pafter": "pump position on the line",
+	"npshr": "NPSH required (typed)", "ps": "suction gauge reading", "pd": "discharge gauge reading",
+	"zs": "suction gauge height", "zd": "discharge gauge height", "ds": "pipe diameter at the suction gauge",
+	"dd": "pipe diameter at the discharge gauge", "qm": "measured flow", "pin": "motor electrical input",
+	"etat": "turbine-and-generator efficiency",
 }
 
 // toCheck lists, in words, the fields with errors among params.
@@ -34,11 +43,7 @@ func (s *sheet) toCheck(params ...string) string {
 	var names []string
 	for _, p := range params {
 		if s.res.Errors[p] != "" {
-			n := paramLabels[p]
-			if n == "" {
-				n = p
-			}
-			names = append(names, n)
+			names = append(names, labelOf(p))
 		}
 	}
 	if len(names) == 0 {
@@ -63,7 +68,8 @@ func set(keys ...string) map[string]bool {
 }
 
 // Render draws the page.
-func (s *sheet) Render() app.UI {
+func (s *sheet) Render() (ui app.UI) {
+	defer s.containRender(&ui)
 	s.shown = map[string]bool{}
 	s.warned = map[string]bool{}
 	if !s.loaded {
@@ -73,12 +79,19 @@ func (s *sheet) Render() app.UI {
 			cautions(),
 		)
 	}
+	s.testPanic("render")
 	var view app.UI
 	switch s.view() {
 	case "convert":
 		view = s.convertView()
 	case "regime":
 		view = s.regimeView()
+	case "line":
+		view = s.lineView()
+	case "pump":
+		view = s.pumpView()
+	case "report":
+		view = s.reportView()
 	default:
 		view = s.balanceView()
 	}
@@ -86,9 +99,10 @@ func (s *sheet) Render() app.UI {
 	return app.Div().ID("sheet").Class("sheet view-"+s.view()).Body(
 		s.printHead(),
 		s.header(),
+		app.Div().Class("notices").Body(s.faultBanner(), s.updateBanner()), // always there: a notice must not move the inputs
 		app.Div().Class("titlerow").Body(title, s.shareRow()),
 		s.linkProblem(),
-		app.Main().Body(s.orphans(), view),
+		app.Main().Body(app.Div().Class("notices").Body(s.orphans()), view), // a stable slot: the list appearing must not re-create the inputs (and lose the focus)
 		cautions(),
 		s.printFoot(),
 	)

@@ -22,7 +22,7 @@ func (s *sheet) message(p string) string {
 func (s *sheet) fieldNotes(p string) []app.UI {
 	var out []app.UI
 	if m := s.message(p); m != "" {
-		out = append(out, app.P().ID("err-"+p).Class("msg err").Attr("role", "alert").Body(
+		out = append(out, app.P().ID("err-"+domID(p)).Class("msg err").Attr("role", "alert").Body(
 			app.Span().Class("tag").Text("Check"), app.Text(" "+m)))
 	}
 	for _, w := range s.warnings() {
@@ -44,7 +44,7 @@ func (s *sheet) quantity(p, label, hint string) app.UI {
 		return s.unknownField(p, label)
 	}
 	bad := s.res.Errors[p] != ""
-	id := "in-" + p
+	id := "in-" + domID(p)
 	picker := s.unitPicker(p)
 	body := []app.UI{
 		app.Label().For(id).Class("lbl").Body(app.Text(label), hintUI(hint)),
@@ -59,19 +59,19 @@ func (s *sheet) quantity(p, label, hint string) app.UI {
 		),
 	}
 	body = append(body, s.fieldNotes(p)...)
-	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + p).Body(body...)
+	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + domID(p)).Body(body...)
 }
 
 // unitPicker draws the unit select of p. When the box holds a unit of its
 // own the picker says so instead of pretending to apply.
 func (s *sheet) unitPicker(p string) app.UI {
-	id := "unit-" + p
+	id := "unit-" + domID(p)
 	num, typed := scenario.Split(s.box[p])
 	if num == "" {
 		typed = "" // not a number at all: the picker still says what a number would mean
 	}
 	cur := s.unitFor(p)
-	choices := scenario.UnitChoices(p, s.us())
+	choices := unitChoicesOf(p, s.us())
 	found := false
 	for _, u := range choices {
 		if u == cur {
@@ -81,15 +81,17 @@ func (s *sheet) unitPicker(p string) app.UI {
 	if !found && cur != "" {
 		choices = append([]string{cur}, choices...)
 	}
-	opts := make([]app.UI, 0, len(choices)+1)
+	opts := make([]selOpt, 0, len(choices)+1)
 	if typed != "" {
-		opts = append(opts, app.Option().Value("").Selected(true).Text("as typed"))
+		opts = append(opts, selOpt{"", "as typed", true})
 	}
 	for _, u := range choices {
-		opts = append(opts, app.Option().Value(u).Selected(typed == "" && u == cur).Text(u))
+		if u == "" {
+			continue // a plain number: not a unit to pick
+		}
+		opts = append(opts, selOpt{u, u, typed == "" && u == cur})
 	}
-	return app.Select().ID(id).Class("unit").Aria("label", "unit").
-		OnChange(s.onPick(p)).Body(opts...)
+	return &selectBox{ID: id, Class: "unit", Label: "unit", Options: opts, Param: p, Unit: true, S: s}
 }
 
 // placeholder is the greyed example in an empty box.
@@ -127,16 +129,16 @@ func (s *sheet) unknownField(p, label string) app.UI {
 		),
 	}
 	body = append(body, s.fieldNotes(p)...)
-	return app.Div().Class("field is-unknown").ID("f-" + p).Body(body...)
+	return app.Div().Class("field is-unknown").ID("f-" + domID(p)).Body(body...)
 }
 
 // choice draws a select for an enumerated parameter.
 func (s *sheet) choice(p, label string, blank string) app.UI {
 	s.shown[p] = true
-	id := "in-" + p
+	id := "in-" + domID(p)
 	cur := s.scen.Get(p)
-	choices := scenario.Choices(p)
-	opts := make([]app.UI, 0, len(choices)+1)
+	choices := choicesOf(p)
+	opts := make([]selOpt, 0, len(choices)+1)
 	known := false
 	for _, c := range choices {
 		if c.Value == cur {
@@ -144,27 +146,27 @@ func (s *sheet) choice(p, label string, blank string) app.UI {
 		}
 	}
 	if blank != "" {
-		opts = append(opts, app.Option().Value("").Selected(cur == "").Text(blank))
+		opts = append(opts, selOpt{"", blank, cur == ""})
 	}
 	if !known && cur != "" {
-		opts = append(opts, app.Option().Value(cur).Selected(true).Text(cur+" (not recognised)"))
+		opts = append(opts, selOpt{cur, cur + " (not recognised)", true})
 	}
 	for _, c := range choices {
-		opts = append(opts, app.Option().Value(c.Value).Selected(c.Value == cur).Text(c.Label))
+		opts = append(opts, selOpt{c.Value, c.Label, c.Value == cur})
 	}
 	bad := s.res.Errors[p] != ""
 	body := []app.UI{
 		app.Label().For(id).Class("lbl").Text(label),
-		app.Select().ID(id).Class(classIf("pick", bad, "bad")).OnChange(s.onChoice(p)).Body(opts...),
+		&selectBox{ID: id, Class: classIf("pick", bad, "bad"), Options: opts, Param: p, S: s},
 	}
 	body = append(body, s.fieldNotes(p)...)
-	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + p).Body(body...)
+	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + domID(p)).Body(body...)
 }
 
 // plain draws a text input without a unit (counts, coefficients, the title).
 func (s *sheet) plain(p, label, hint string, numeric bool) app.UI {
 	s.shown[p] = true
-	id := "in-" + p
+	id := "in-" + domID(p)
 	bad := s.res.Errors[p] != ""
 	in := app.Input().Type("text").ID(id).Class(classIf("box wide", bad, "bad")).
 		Attr("autocomplete", "off").Attr("spellcheck", "false").Aria("invalid", bad).
@@ -174,7 +176,7 @@ func (s *sheet) plain(p, label, hint string, numeric bool) app.UI {
 	}
 	body := []app.UI{app.Label().For(id).Class("lbl").Body(app.Text(label), hintUI(hint)), in}
 	body = append(body, s.fieldNotes(p)...)
-	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + p).Body(body...)
+	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + domID(p)).Body(body...)
 }
 
 // ref draws the gauge/absolute choice of a pressure as two buttons.

@@ -50,17 +50,21 @@ func fitLabel(key string) string {
 	return key
 }
 
-// setFittings stores a new list from the editor.
-func (s *sheet) setFittings(list []fitEntry) {
-	s.setParam("fit", fitText(list))
+// setFittings stores a new list from the editor into p ("fit", "s2.fit").
+func (s *sheet) setFittings(p string, list []fitEntry) {
+	s.setParam(p, fitText(list))
 	s.changed()
 }
 
-// fittings draws the fitting editor: one line per kind with − and +, a
-// picker to add a kind, and the list as text for those who prefer typing.
-func (s *sheet) fittings() app.UI {
-	s.shown["fit"] = true
-	list, ok := fitEntries(s.scen.Get("fit"))
+// fittings draws the fitting editor of the single run.
+func (s *sheet) fittings() app.UI { return s.fittingsFor("fit") }
+
+// fittingsFor draws the fitting editor of p ("fit", or a segment's "s2.fit"):
+// one line per kind with − and +, a picker to add a kind, and the list as
+// text for those who prefer typing.
+func (s *sheet) fittingsFor(p string) app.UI {
+	s.shown[p] = true
+	list, ok := fitEntries(s.scen.Get(p))
 	var rows []app.UI
 	if ok {
 		for i, f := range list {
@@ -70,14 +74,16 @@ func (s *sheet) fittings() app.UI {
 				app.Div().Class("stepper").Body(
 					app.Button().Type("button").Class("step").Aria("label", "one fewer "+fitLabel(f.key)).Text("−").
 						OnClick(func(ctx app.Context, e app.Event) {
+							defer s.contain("changing the fittings")
 							list[i].count--
-							s.setFittings(list)
+							s.setFittings(p, list)
 						}),
 					app.Span().Class("count").Text(strconv.Itoa(f.count)),
 					app.Button().Type("button").Class("step").Aria("label", "one more "+fitLabel(f.key)).Text("+").
 						OnClick(func(ctx app.Context, e app.Event) {
+							defer s.contain("changing the fittings")
 							list[i].count++
-							s.setFittings(list)
+							s.setFittings(p, list)
 						}),
 				),
 			))
@@ -95,8 +101,13 @@ func (s *sheet) fittings() app.UI {
 		body = append(body, app.Ul().Class("fits").Body(rows...))
 	}
 	if ok {
-		body = append(body, app.Select().ID("add-fit").Class("pick").Aria("label", "add a fitting").
+		addID := "add-fit"
+		if p != "fit" {
+			addID = "add-" + domID(p)
+		}
+		body = append(body, app.Select().ID(addID).Class("pick add-fit").Aria("label", "add a fitting").
 			OnChange(func(ctx app.Context, e app.Event) {
+				defer s.contain("adding a fitting")
 				key := ctx.JSSrc().Get("value").String()
 				if key == "" {
 					return
@@ -104,17 +115,17 @@ func (s *sheet) fittings() app.UI {
 				for i := range list {
 					if list[i].key == key {
 						list[i].count++
-						s.setFittings(list)
+						s.setFittings(p, list)
 						return
 					}
 				}
-				s.setFittings(append(list, fitEntry{key, 1}))
+				s.setFittings(p, append(list, fitEntry{key, 1}))
 			}).Body(add...))
 	}
 	body = append(body,
-		app.Details().Class("astext").Open(!ok || s.res.Errors["fit"] != "").Body(
+		app.Details().Class("astext").Open(!ok || s.res.Errors[p] != "").Body(
 			app.Summary().Text("Fittings as text"),
-			s.plain("fit", "key:count, comma separated", "", false),
+			s.plain(p, "key:count, comma separated", "", false),
 		))
 	return app.Div().Class("field fittings").Body(body...)
 }

@@ -1,6 +1,10 @@
 package main
 
-import "github.com/maxence-charriere/go-app/v10/pkg/app"
+import (
+	"strings"
+
+	"github.com/maxence-charriere/go-app/v10/pkg/app"
+)
 
 // option is one side of an either/or group of inputs: the parameters it
 // uses and the label of its switch.
@@ -20,12 +24,31 @@ var groups = map[string][]option{
 	"pipe":  {{"nps", "nominal size", []string{"nps", "sch"}}, {"d", "inside diameter", []string{"d"}}},
 	"rough": {{"mat", "material", []string{"mat"}}, {"eps", "roughness", []string{"eps"}}},
 	"site":  {{"alt", "altitude", []string{"alt"}}, {"baro", "barometer", []string{"baro"}}},
+	"npsh":  {{"sheet", "from the data sheet", []string{"pnpsh"}}, {"typed", "typed in", []string{"npshr"}}},
+}
+
+// groupOptions returns the options of a group. A segment's group ("s2.pipe")
+// is the single run's group ("pipe") with the segment's parameters.
+func groupOptions(group string) []option {
+	pre, base, ok := strings.Cut(group, ".")
+	if !ok {
+		return groups[group]
+	}
+	opts := groups[base]
+	out := make([]option, len(opts))
+	for i, o := range opts {
+		out[i] = option{key: o.key, label: o.label}
+		for _, p := range o.params {
+			out[i].params = append(out[i].params, pre+"."+p)
+		}
+	}
+	return out
 }
 
 // current is the side of a group in use: the one whose parameters are in
 // the scenario, else the last one switched to, else the default.
 func (s *sheet) current(group string) string {
-	opts := groups[group]
+	opts := groupOptions(group)
 	for _, o := range opts {
 		for _, p := range o.params {
 			if s.scen.Has(p) {
@@ -43,8 +66,9 @@ func (s *sheet) current(group string) string {
 // scenario (their boxes keep the text, so switching back restores it).
 func (s *sheet) switchTo(group, key string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
+		defer s.contain("switching how an input is given")
 		s.mode[group] = key
-		for _, o := range groups[group] {
+		for _, o := range groupOptions(group) {
 			for _, p := range o.params {
 				if o.key == key {
 					s.store(p)
@@ -60,12 +84,12 @@ func (s *sheet) switchTo(group, key string) app.EventHandler {
 // toggle draws a group's switch.
 func (s *sheet) toggle(group, label string) app.UI {
 	cur := s.current(group)
-	opts := groups[group]
+	opts := groupOptions(group)
 	buttons := make([]app.UI, 0, len(opts))
 	for _, o := range opts {
 		buttons = append(buttons, app.Button().
 			Type("button").
-			ID("sw-"+group+"-"+o.key).
+			ID("sw-"+domID(group)+"-"+o.key).
 			Class(classIf("seg", o.key == cur, "on")).
 			Aria("pressed", o.key == cur).
 			Text(o.label).
@@ -76,6 +100,11 @@ func (s *sheet) toggle(group, label string) app.UI {
 		app.Div().Class("segs").Aria("label", label).Body(buttons...),
 	)
 }
+
+// domID makes a parameter or group name fit for an element id that CSS
+// selectors can name without escaping: segment parameters carry a dot
+// ("s2.l" → "s2-l").
+func domID(name string) string { return strings.ReplaceAll(name, ".", "-") }
 
 // classIf returns base, plus extra when cond holds.
 func classIf(base string, cond bool, extra string) string {

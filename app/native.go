@@ -28,6 +28,7 @@ func native() {
 	assets := flag.String("web", "web", "folder of our static assets (stylesheet, icon)")
 	prefix := flag.String("prefix", "", "URL path the site is deployed under, e.g. /tools/fieldhead")
 	serve := flag.String("serve", "", "after writing, serve the site on this address, e.g. :8000")
+	flag.StringVar(&buildStamp, "stamp", "", "extra text mixed into the version, to make open pages offer an update without a code change")
 	flag.Parse()
 
 	p, err := cleanPrefix(*prefix)
@@ -177,6 +178,7 @@ func writeSite(out, wasmPath, assets, prefix string) error {
 		files = append(files, file{fmt.Sprintf("icon-%d.png", size), png})
 	}
 	sum.Write([]byte(prefix))
+	sum.Write([]byte(buildStamp))
 	version := hex.EncodeToString(sum.Sum(nil))[:12]
 
 	if err := os.RemoveAll(out); err != nil {
@@ -187,6 +189,9 @@ func writeSite(out, wasmPath, assets, prefix string) error {
 	}
 	if err := app.GenerateStaticWebsite(out, newHandler(prefix, version, int64(len(wasm)))); err != nil {
 		return fmt.Errorf("generating the site: %w", err)
+	}
+	if err := addCSP(out); err != nil {
+		return err
 	}
 	files = append(files, file{"app.wasm", wasm})
 	for _, f := range files {

@@ -32,8 +32,14 @@ type sheet struct {
 	query    string          // s.scen.Encode(), also in the URL and in localStorage
 	copyNote string          // result of the last "Copy link"
 	showLink bool            // show the link as selectable text
+	fault    *fault          // the last contained panic, shown in a banner (guard.go)
+	update   bool            // a newer version of the site is installed (update.go)
 	shown    map[string]bool // parameters drawn in this render
 	warned   map[string]bool // warnings drawn in this render
+
+	segs int // segment cards shown on the Line view beyond those in the scenario (a new, empty one)
+	rows int // rows of the pump data sheet shown (at least those in the scenario)
+	wide int // chart width drawn last (see chartWidth)
 }
 
 // newSheet is the route's component. In the browser it restores the
@@ -59,6 +65,7 @@ func newSheet() app.Composer {
 		if err != nil {
 			msg = err.Error()
 		}
+		sc, msg = keepSavedSheet(sc, msg, u.RawQuery != "")
 		s.adopt(sc, msg)
 	}
 	s.loaded = true
@@ -68,6 +75,7 @@ func newSheet() app.Composer {
 // OnMount records when the first result reached the screen, for the
 // browser test and for anyone timing the page.
 func (s *sheet) OnMount(ctx app.Context) {
+	s.watchUpdates(ctx)
 	if app.IsClient && s.loaded {
 		perf := app.Window().Get("performance")
 		if perf.Truthy() {
@@ -83,7 +91,8 @@ func (s *sheet) adopt(sc scenario.Scenario, linkErr string) {
 	s.box = map[string]string{}
 	s.pick = map[string]string{}
 	s.mode = map[string]string{}
-	for _, p := range scenario.Params {
+	s.segs, s.rows = 0, 0
+	for _, p := range allParams() {
 		raw := sc.Get(p)
 		if raw == "" {
 			continue
@@ -176,6 +185,7 @@ func (s *sheet) setParam(p, text string) {
 // evaluate recomputes the result and saves the scenario in the URL and in
 // localStorage.
 func (s *sheet) evaluate() {
+	s.testPanic("evaluate")
 	s.res = scenario.Evaluate(s.scen)
 	s.query = s.scen.Encode()
 	if app.IsClient {
@@ -201,7 +211,7 @@ func (s *sheet) link() string {
 // view is the view the scenario opens on.
 func (s *sheet) view() string {
 	switch v := s.scen.Get("view"); v {
-	case "convert", "regime":
+	case "convert", "regime", "line", "pump", "report":
 		return v
 	}
 	return "balance"
@@ -219,6 +229,7 @@ func (s *sheet) solve() string {
 
 func (s *sheet) onBox(p string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
+		defer s.contain("recalculating after an edit to " + labelFor(p))
 		s.box[p] = ctx.JSSrc().Get("value").String()
 		s.store(p)
 		s.changed()
@@ -227,6 +238,7 @@ func (s *sheet) onBox(p string) app.EventHandler {
 
 func (s *sheet) onPick(p string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
+		defer s.contain("changing the unit of " + labelFor(p))
 		u := ctx.JSSrc().Get("value").String()
 		if u == "" {
 			return
@@ -242,6 +254,7 @@ func (s *sheet) onPick(p string) app.EventHandler {
 
 func (s *sheet) onChoice(p string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
+		defer s.contain("choosing the " + labelFor(p))
 		s.setParam(p, ctx.JSSrc().Get("value").String())
 		s.changed()
 	}
@@ -249,6 +262,7 @@ func (s *sheet) onChoice(p string) app.EventHandler {
 
 func (s *sheet) choose(p, v string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
+		defer s.contain("switching the " + labelFor(p))
 		s.setParam(p, v)
 		s.changed()
 	}

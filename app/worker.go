@@ -10,16 +10,23 @@ package main
 //     share link or a bookmark opens with no network (the query is the
 //     scenario, and the page reads it itself);
 //   - the page is also cached under the folder URL the site is served from,
-//     so the site works offline under a sub-path too.
+//     so the site works offline under a sub-path too;
+//   - installation fetches every file past the browser's HTTP cache, so a
+//     host's cache headers cannot mix files of two versions in one cache;
+//   - caches are named after the site's folder URL and the version
+//     ("fieldhead@<folder URL>#<version>"): activation deletes only this
+//     site's older caches, never those of another copy on the same origin,
+//     and the page can tell that a newer version took over (update.go).
 const workerJS = `// Fieldhead service worker, version {{.Version}}.
-const cacheName = "fieldhead-" + "{{.Version}}";
-const resourcesToCache = {{.ResourcesToCache}};
 const pageURL = new URL("./", self.location).href;
+const cachePrefix = "fieldhead@" + pageURL + "#";
+const cacheName = cachePrefix + "{{.Version}}";
+const resourcesToCache = {{.ResourcesToCache}};
 
 self.addEventListener("install", (event) => {
   event.waitUntil((async () => {
     const cache = await caches.open(cacheName);
-    await cache.addAll(resourcesToCache);
+    await cache.addAll(resourcesToCache.map((url) => new Request(url, { cache: "reload" })));
     const page = await fetch(pageURL, { cache: "reload" });
     if (page.ok) {
       await cache.put(pageURL, page);
@@ -31,7 +38,7 @@ self.addEventListener("install", (event) => {
 self.addEventListener("activate", (event) => {
   event.waitUntil((async () => {
     for (const key of await caches.keys()) {
-      if (key !== cacheName) {
+      if (key !== cacheName && (key.startsWith(cachePrefix) || key.startsWith("fieldhead-"))) {
         await caches.delete(key);
       }
     }

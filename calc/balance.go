@@ -153,6 +153,8 @@ type BalanceResult struct {
 	// has one; Profile is then its EGL/HGL profile (see ProfileNode).
 	Line    *LineResult
 	Profile []ProfileNode
+	// PumpAfter is the pump's place on the line as used for the profile.
+	PumpAfter int
 
 	Budget       []BudgetItem
 	PumpPower    float64 // hydraulic power ρ·g·Q·h_pump, W
@@ -219,6 +221,20 @@ func (b Balance) Solve() (BalanceResult, error) {
 	return res, nil
 }
 
+// Limits of the inputs, in SI: far beyond any liquid line, they keep every
+// term of the balance finite.
+const (
+	maxPressure  = 1e9   // Pa
+	maxElevation = 2e4   // m
+	maxHead      = 1e5   // m
+	maxFlow      = 1e3   // m³/s
+	maxVelocity  = 1e3   // m/s
+	maxDiameter  = 100.0 // m
+	minDiameter  = 1e-5  // m
+	minDensity   = 1.0   // kg/m³
+	maxDensity   = 1e5   // kg/m³
+)
+
 // check validates the inputs that every unknown needs.
 func (b Balance) check() error {
 	fl := b.Fluid
@@ -244,6 +260,37 @@ func (b Balance) check() error {
 		if c.skip != b.Unknown && (math.IsNaN(c.v) || math.IsInf(c.v, 0)) {
 			return fieldErrorf(c.field, "must be a finite number")
 		}
+	}
+	// Magnitudes far beyond any liquid line are refused, so that no term
+	// of the balance can overflow into an infinite result.
+	for _, c := range []struct {
+		field, what string
+		v, max      float64
+		skip        Unknown
+	}{
+		{"p1", "pressure", b.In.P, maxPressure, SolveP1}, {"p2", "pressure", b.Out.P, maxPressure, SolveP2},
+		{"baro", "pressure", b.SitePressure, maxPressure, -1},
+		{"z1", "elevation", b.In.Z, maxElevation, SolveZ1}, {"z2", "elevation", b.Out.Z, maxElevation, SolveZ2},
+		{"hp", "head", b.PumpHead, maxHead, SolvePumpHead}, {"ht", "head", b.TurbineHead, maxHead, SolveTurbineHead},
+		{"hf", "head", b.FrictionHead, maxHead, SolveFrictionHead},
+		{"q", "flow", b.Q, maxFlow, SolveFlow},
+		{"v1", "velocity", b.In.V, maxVelocity, -1}, {"v2", "velocity", b.Out.V, maxVelocity, -1},
+		{"d1", "diameter", b.In.D, maxDiameter, -1}, {"d2", "diameter", b.Out.D, maxDiameter, -1},
+	} {
+		if c.skip != b.Unknown && math.Abs(c.v) > c.max {
+			return fieldErrorf(c.field, "a %s of %.3g (SI) is far beyond any liquid line (at most %.3g); check the value and its unit", c.what, c.v, c.max)
+		}
+	}
+	for _, d := range []struct {
+		field string
+		v     float64
+	}{{"d1", b.In.D}, {"d2", b.Out.D}} {
+		if d.v > 0 && d.v < minDiameter {
+			return fieldErrorf(d.field, "a diameter of %.3g m is below the %.3g m Fieldhead accepts; check the unit", d.v, minDiameter)
+		}
+	}
+	if fl.Density < minDensity || fl.Density > maxDensity {
+		return fieldErrorf("rho", "a density of %.3g kg/m³ is outside the %g to %g kg/m³ of liquids", fl.Density, minDensity, maxDensity)
 	}
 	if b.In.D < 0 {
 		return fieldErrorf("d1", "the diameter must be positive")
@@ -455,7 +502,7 @@ func (b Balance) result(v float64, st state) BalanceResult {
 	g := StandardGravity
 	rho := b.Fluid.Density
 	r := BalanceResult{Solve: b.Unknown, Value: v, Q: b.Q, PumpHead: b.PumpHead,
-		TurbineHead: b.TurbineHead, FrictionHead: st.hf, Run: st.run, Line: st.line}
+		TurbineHead: b.TurbineHead, FrictionHead: st.hf, Run: st.run, Line: st.line, PumpAfter: b.PumpAfter}
 	switch b.Unknown {
 	case SolvePumpHead:
 		r.PumpHead = v

@@ -46,7 +46,7 @@ func FuzzBalance(f *testing.F) {
 	edges := []seed{
 		{},
 		{p1: -1, z1: -1, v1: -1, d1: -1, q: -1, rho: -1, mu: -1},
-		// {p1: 1e308, p2: -1e308, site: 1e308, rho: 1e-300, mu: 1e-300, q: 1e300, d1: 1e-300, unknown: int(SolveP2)},
+		{p1: 1e308, p2: -1e308, site: 1e308, rho: 1e-300, mu: 1e-300, q: 1e300, d1: 1e-300, unknown: int(SolveP2)},
 		{p1: 1e5, p2: 1e5, site: 1e5, rho: 1000, mu: 1e-3, d1: 1e-9, d2: 1e9, unknown: int(SolveFlow), run: true, l: 1e12, d: 1e-9},
 		{rho: 1000, mu: 1e-3, q: 3e-3, run: true, l: 10, d: 0.05, eps: 0.1, unknown: 99, alpha: -3},
 		{rho: 1000, mu: math.Inf(1), q: math.NaN(), hp: math.Inf(-1), site: math.NaN()},

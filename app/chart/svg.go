@@ -34,7 +34,9 @@ func (r *renderer) header(b []byte) []byte {
 	b = appendNum(b, r.w)
 	b = append(b, ' ')
 	b = appendNum(b, r.h)
-	b = append(b, `" width="100%" preserveAspectRatio="xMidYMid meet" role="img" style="display:block;height:auto" font-family="`...)
+	// No style attribute: a page's Content-Security-Policy may refuse
+	// inline styles; the page's stylesheet sets display and height.
+	b = append(b, `" width="100%" preserveAspectRatio="xMidYMid meet" role="img" font-family="`...)
 	b = appendText(b, r.font)
 	b = append(b, `" font-size="15"`...)
 	title := c.Title

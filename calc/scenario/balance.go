@@ -22,7 +22,7 @@ func (e *eval) wantsBalance() bool {
 
 // balance reads the two points and the heads, solves, and fills
 // Result.Balance (and Result.Run when the run sets the friction).
-func (e *eval) balance(run *RunResult) {
+func (e *eval) balance(run *RunResult, line *calc.Line) {
 	solve := calc.SolvePumpHead
 	if e.s.Has("solve") {
 		u, err := calc.ParseUnknown(strings.TrimSpace(e.s.Get("solve")))
@@ -38,7 +38,6 @@ func (e *eval) balance(run *RunResult) {
 	if e.s.Has("l") && run == nil {
 		return // the run's errors say why
 	}
-	line := e.line()
 	if e.segmentCount() > 0 && line == nil {
 		return // the segments' errors say why
 	}
@@ -111,6 +110,7 @@ func (e *eval) balance(run *RunResult) {
 		return
 	}
 	e.res.Balance = &br
+	e.res.Line = br.Line
 	if fl := e.res.Fluid; len(br.Profile) > 0 {
 		shift := (fl.VapourPressure - e.res.SitePressure) / (fl.Density * calc.StandardGravity)
 		for _, n := range br.Profile {

@@ -47,8 +47,19 @@ func Evaluate(s Scenario) Result {
 	e.site()
 	e.liquid()
 	run := e.run()
+	line := e.line()
 	if e.wantsBalance() {
-		e.balance(run)
+		e.balance(run, line)
+	}
+	if res.Line == nil && line != nil && res.Fluid != nil && s.Has("q") {
+		// The line's own losses still show when the balance cannot be solved.
+		if q, ok := e.quantity("q"); ok {
+			if lr, err := line.Evaluate(*res.Fluid, q); err == nil {
+				res.Line = &lr
+			} else {
+				e.failErr("q", err)
+			}
+		}
 	}
 	if res.Run == nil && run != nil && res.Fluid != nil && s.Has("q") {
 		q, ok := e.quantity("q")

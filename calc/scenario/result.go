@@ -17,6 +17,7 @@ type Result struct {
 	SiteNote     string      // how the site pressure was found
 
 	Run     *RunResult          // the pipe run (Regime view; friction in the balance)
+	Line    *calc.LineResult    // the line of segments at the flow (also when the balance cannot be solved)
 	Balance *calc.BalanceResult // the two-point energy balance
 	Convert *ConvertResult      // the Convert view
 

@@ -1,0 +1,677 @@
+//go:build !wasm
+
+// Command bench measures Fieldhead against the budgets of the product
+// brief and prints a table, then, as its last line, one JSON object with
+// every figure. Run it through `make bench`, which builds the site first.
+//
+// What it measures, and how:
+//
+//   - Sizes: app.wasm as built, and gzip -9 of every file a first visit
+//     fetches (the page's own requests, recorded in Chromium, plus the
+//     files the service worker caches on installation).
+//   - cold_load_ms: a new Chromium with a fresh profile for each load, CPU
+//     slowed 4× (Emulation.setCPUThrottlingRate), opening a share link of
+//     the demo; the time from navigation start to the end of the first
+//     frame that paints the answer (#answer-value holding a figure), taken
+//     in the page by a MutationObserver, then requestAnimationFrame and a
+//     posted message (which runs after that frame's paint). Median of the
+//     loads.
+//   - offline_reload_ms: one visit, then the network emulated offline for
+//     the page and the service worker (Network.emulateNetworkConditionsByRule,
+//     emulateOfflineServiceWorker), reload, the same end point; 4× CPU
+//     throttle; median of the reloads.
+//   - edit_p50_ms, edit_p95_ms: on the loaded page, 4× throttle, one key at a
+//     time into the flow box (Backspace, then the digit back, alternately:
+//     each changes the answer), from the keydown's timestamp to the end of
+//     the frame that paints the changed answer (MutationObserver on the
+//     page, then requestAnimationFrame and a posted message). A few warm-up
+//     edits are not counted.
+//   - colebrook_ns, swamee_jain_ns, colebrook_fixed_point_ns, balance_ns,
+//     system_curve_100_ns: `go test -bench` in ./calc (median of -count runs).
+//
+// The machine's other load shows in the browser figures; run it on a quiet
+// machine to compare runs.
+package main
+
+import (
+	"bytes"
+	"compress/gzip"
+	"context"
+	"encoding/json"
+	"errors"
+	"flag"
+	"fmt"
+	"io/fs"
+	"log"
+	"math"
+	"net"
+	"net/http"
+	"net/url"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"regexp"
+	"sort"
+	"strconv"
+	"strings"
+	"sync"
+	"testing"
+	"time"
+
+	"fieldhead/calc"
+	"fieldhead/calc/scenario"
+
+	"github.com/chromedp/cdproto/emulation"
+	"github.com/chromedp/cdproto/network"
+	"github.com/chromedp/cdproto/page"
+	"github.com/chromedp/chromedp"
+	"github.com/chromedp/chromedp/kb"
+)
+
+// Budgets of the product brief.
+const (
+	budgetSiteGzip     = 2.5e6 // bytes (2.5 MB)
+	budgetColdLoad     = 2000  // ms
+	budgetOfflineLoad  = 1000  // ms
+	budgetEditP95      = 50    // ms
+	budgetColebrookX   = 2     // × Swamee–Jain
+	budgetSystemCurve  = 1e6   // ns (1 ms)
+	warmupEdits        = 5
+	systemCurveBenchRe = "BenchmarkSystemCurve100x20"
+)
+
+var (
+	siteDir   = flag.String("site", "build/site", "the built site to measure")
+	chromium  = flag.String("chromium", "", "Chromium's path (default: $CHROMIUM, else chromium on $PATH)")
+	loads     = flag.Int("loads", 5, "cold loads and offline reloads to take the median of (at least 5)")
+	edits     = flag.Int("edits", 60, "edits to time (at least 50)")
+	throttle  = flag.Float64("throttle", 4, "CPU slow-down factor for the browser figures")
+	count     = flag.Int("count", 5, "go test -count for the calc benchmarks")
+	benchtime = flag.String("benchtime", "1s", "go test -benchtime for the calc benchmarks")
+	wasmSrc   = flag.String("app", "./app", "the app package, built unstripped to read the wasm's composition")
+)
+
+func main() {
+	log.SetFlags(0)
+	log.SetPrefix("bench: ")
+	flag.Parse()
+	if *loads < 5 {
+		*loads = 5
+	}
+	if *edits < 50 {
+		*edits = 50
+	}
+	r := &report{JSON: map[string]any{}}
+
+	log.Print("calc benchmarks (go test -bench) …")
+	r.calcBenchmarks()
+
+	log.Print("browser: cold loads, offline reloads, edits …")
+	srv, origin, err := serve(*siteDir)
+	if err != nil {
+		log.Fatal(err)
+	}
+	defer srv.Close()
+	link := origin + "/?" + scenario.Demo().Encode()
+	fetched := r.browser(link, origin)
+
+	log.Print("sizes …")
+	r.sizes(fetched)
+	log.Print("the wasm's composition …")
+	r.composition()
+
+	r.print()
+}
+
+// report collects rows for the table and keys for the JSON line.
+type report struct {
+	rows   [][4]string // figure, measured, budget, verdict
+	notes  []string
+	misses []string
+	JSON   map[string]any
+}
+
+func (r *report) row(figure, measured, budget string, pass *bool) {
+	verdict := ""
+	if pass != nil {
+		verdict = "PASS"
+		if !*pass {
+			verdict = "MISS"
+			r.misses = append(r.misses, figure)
+		}
+	}
+	r.rows = append(r.rows, [4]string{figure, measured, budget, verdict})
+}
+
+func ptr(b bool) *bool { return &b }
+
+// calcBenchmarks runs the calc benchmarks and keeps the median ns/op.
+func (r *report) calcBenchmarks() {
+	pattern := "^(BenchmarkColebrook|BenchmarkSwameeJain|BenchmarkColebrookFixedPoint|BenchmarkBalance|" + systemCurveBenchRe + ")$"
+	cmd := exec.Command("go", "test", "-run", "^$", "-bench", pattern, "-benchtime", *benchtime,
+		"-count", strconv.Itoa(*count), "./calc")
+	cmd.Stderr = os.Stderr
+	out, err := cmd.Output()
+	if err != nil {
+		log.Fatalf("go test -bench: %v\n%s", err, out)
+	}
+	runs := map[string][]float64{}
+	line := regexp.MustCompile(`^(Benchmark\w+?)(?:-\d+)?\s+\d+\s+([0-9.]+) ns/op`)
+	for _, l := range strings.Split(string(out), "\n") {
+		if m := line.FindStringSubmatch(l); m != nil {
+			v, _ := strconv.ParseFloat(m[2], 64)
+			runs[m[1]] = append(runs[m[1]], v)
+		}
+	}
+	get := func(name string) float64 {
+		if len(runs[name]) == 0 {
+			log.Fatalf("%s did not run:\n%s", name, out)
+		}
+		return median(runs[name])
+	}
+	cb, sj, fp, bal := get("BenchmarkColebrook"), get("BenchmarkSwameeJain"), get("BenchmarkColebrookFixedPoint"), get("BenchmarkBalance")
+	r.JSON["colebrook_ns"] = round1(cb)
+	r.JSON["swamee_jain_ns"] = round1(sj)
+	r.JSON["colebrook_fixed_point_ns"] = round1(fp)
+	r.JSON["balance_ns"] = round1(bal)
+	r.row("Colebrook (Clamond), ns", f1(cb), fmt.Sprintf("≤ %g× Swamee–Jain = %s", float64(budgetColebrookX), f1(budgetColebrookX*sj)), ptr(cb <= budgetColebrookX*sj))
+	r.row("Swamee–Jain, ns", f1(sj), "(reference)", nil)
+	r.row("Colebrook fixed point from f = 0.02, ns", f1(fp), fmt.Sprintf("(baseline; Clamond is %.1f× faster)", fp/cb), nil)
+	r.row("balance, demo station, ns", f1(bal), "", nil)
+
+	var sc float64
+	if len(runs[systemCurveBenchRe]) > 0 {
+		sc = median(runs[systemCurveBenchRe])
+	} else {
+		sc = simpleSystemCurve()
+		note := systemCurveBenchRe + " is not in ./calc yet: measured 100 balances over one pipe run instead"
+		r.JSON["system_curve_note"] = note
+		r.notes = append(r.notes, note)
+	}
+	r.JSON["system_curve_100_ns"] = round1(sc)
+	r.row("system curve, 100 flows × 20 segments, ns", f1(sc), "≤ 1 000 000", ptr(sc <= budgetSystemCurve))
+}
+
+// simpleSystemCurve times 100 balances over one pipe run, for a calc that
+// has no system-curve benchmark.
+func simpleSystemCurve() float64 {
+	water, err := calc.Water(291.15, 101325)
+	if err != nil {
+		log.Fatal(err)
+	}
+	b := calc.Balance{Fluid: water, SitePressure: 101325, In: calc.Point{P: 101325}, Out: calc.Point{P: 101325, Z: 40},
+		Run: &calc.Run{Length: 640, Diameter: 0.2027, Roughness: 0.045e-3}}
+	res := testing.Benchmark(func(tb *testing.B) {
+		for i := 0; i < tb.N; i++ {
+			for k := 1; k <= 100; k++ {
+				b.Q = 0.0008 * float64(k)
+				if _, err := b.Solve(); err != nil {
+					tb.Fatal(err)
+				}
+			}
+		}
+	})
+	return float64(res.NsPerOp())
+}
+
+// serve serves the site on a loopback port as a static host would (only
+// the wasm's content type set).
+func serve(dir string) (*http.Server, string, error) {
+	if _, err := os.Stat(filepath.Join(dir, "web", "app.wasm")); err != nil {
+		return nil, "", fmt.Errorf("no built site at %s (make site): %w", dir, err)
+	}
+	files := http.FileServer(http.Dir(dir))
+	ln, err := net.Listen("tcp", "127.0.0.1:0")
+	if err != nil {
+		return nil, "", err
+	}
+	srv := &http.Server{Handler: http.HandlerFunc(func(w http.ResponseWriter, req *http.Request) {
+		if strings.HasSuffix(req.URL.Path, ".wasm") {
+			w.Header().Set("Content-Type", "application/wasm")
+		}
+		files.ServeHTTP(w, req)
+	})}
+	go srv.Serve(ln)
+	return srv, "http://" + ln.Addr().String(), nil
+}
+
+// shownJS records, in the page, the end of the first frame that paints a
+// figure in #answer-value (window.fieldheadShown, ms since navigation).
+const shownJS = `(() => {
+  const check = () => {
+    const el = document.getElementById("answer-value");
+    const t = el ? el.textContent.trim() : "";
+    if (t === "" || t === "—") return false;
+    requestAnimationFrame(() => {
+      const ch = new MessageChannel();
+      ch.port1.onmessage = () => { if (!window.fieldheadShown) window.fieldheadShown = performance.now(); };
+      ch.port2.postMessage(0);
+    });
+    return true;
+  };
+  const mo = new MutationObserver(() => { if (check()) mo.disconnect(); });
+  mo.observe(document, {childList: true, subtree: true, characterData: true});
+})();`
+
+// editJS times edits: keydown → the end of the frame that paints a
+// changed answer.
+const editJS = `(() => {
+  window.fieldheadEdits = [];
+  let start = 0;
+  let last = document.getElementById("answer-value").textContent;
+  document.addEventListener("keydown", (e) => { start = e.timeStamp; }, true);
+  new MutationObserver(() => {
+    const el = document.getElementById("answer-value");
+    const now = el ? el.textContent : "";
+    if (!start || now === last) return;
+    last = now;
+    const s = start;
+    start = 0;
+    requestAnimationFrame(() => {
+      const ch = new MessageChannel();
+      ch.port1.onmessage = () => window.fieldheadEdits.push(performance.now() - s);
+      ch.port2.postMessage(0);
+    });
+  }).observe(document.body, {childList: true, subtree: true, characterData: true});
+  return "";
+})()`
+
+// browserSession is one Chromium with a fresh profile and one tab.
+type browserSession struct {
+	ctx      context.Context
+	cancel   func()
+	mu       sync.Mutex
+	requests []string
+}
+
+func newSession() (*browserSession, error) {
+	path := *chromium
+	if path == "" {
+		path = os.Getenv("CHROMIUM")
+	}
+	if path == "" {
+		for _, n := range []string{"chromium", "chromium-browser", "google-chrome"} {
+			if p, err := exec.LookPath(n); err == nil {
+				path = p
+				break
+			}
+		}
+	}
+	if path == "" {
+		return nil, errors.New("no Chromium: install chromium or set CHROMIUM")
+	}
+	profile, err := os.MkdirTemp("", "fieldhead-bench-profile-")
+	if err != nil {
+		return nil, err
+	}
+	alloc, cancelAlloc := chromedp.NewExecAllocator(context.Background(),
+		chromedp.ExecPath(path),
+		chromedp.Headless,
+		chromedp.NoSandbox,
+		chromedp.DisableGPU,
+		chromedp.NoFirstRun,
+		chromedp.NoDefaultBrowserCheck,
+		chromedp.Flag("disable-background-networking", true),
+		chromedp.Flag("disable-component-update", true),
+		chromedp.Flag("disable-sync", true),
+		chromedp.Flag("disable-quic", true),
+		chromedp.UserDataDir(profile),
+		chromedp.WindowSize(1024, 768),
+	)
+	tab, cancelTab := chromedp.NewContext(alloc)
+	s := &browserSession{ctx: tab}
+	s.cancel = func() {
+		cancelTab()
+		cancelAlloc()
+		os.RemoveAll(profile)
+	}
+	if err := chromedp.Do(tab, chromedp.EmulateViewport(1024, 768)); err != nil {
+		s.cancel()
+		return nil, fmt.Errorf("starting Chromium: %w", err)
+	}
+	reqs := chromedp.Events(tab, network.RequestWillBeSent)
+	go func() {
+		for ev, err := range reqs {
+			if err != nil {
+				return
+			}
+			s.mu.Lock()
+			s.requests = append(s.requests, ev.Request.URL)
+			s.mu.Unlock()
+		}
+	}()
+	if _, err := chromedp.Call(tab, emulation.SetCPUThrottlingRate, emulation.SetCPUThrottlingRateParams{Rate: *throttle}); err != nil {
+		s.cancel()
+		return nil, err
+	}
+	if _, err := chromedp.Call(tab, page.AddScriptToEvaluateOnNewDocument, page.AddScriptToEvaluateOnNewDocumentParams{Source: shownJS}); err != nil {
+		s.cancel()
+		return nil, err
+	}
+	return s, nil
+}
+
+// waitShown waits for the answer on screen and returns the time.
+func (s *browserSession) waitShown() (float64, error) {
+	ctx, cancel := context.WithTimeout(s.ctx, 2*time.Minute)
+	defer cancel()
+	return chromedp.Run(ctx, chromedp.Poll[float64]("window.fieldheadShown || 0", chromedp.WithPollingInterval(20*time.Millisecond)))
+}
+
+// offline takes the page and its service worker off the network.
+func (s *browserSession) offline() error {
+	on := true
+	params := network.EmulateNetworkConditionsByRuleParams{EmulateOfflineServiceWorker: &on,
+		MatchedNetworkConditions: []*network.Conditions{{Offline: true, DownloadThroughput: -1, UploadThroughput: -1}}}
+	if _, err := chromedp.Call(s.ctx, network.EmulateNetworkConditionsByRule, params); err != nil {
+		return err
+	}
+	infos, err := chromedp.Targets(s.ctx)
+	if err != nil {
+		return err
+	}
+	for _, info := range infos {
+		if info.Type == "service_worker" {
+			sw, _ := chromedp.NewContext(s.ctx, chromedp.WithTargetID(info.TargetID))
+			if _, err := chromedp.Call(sw, network.EmulateNetworkConditionsByRule, params); err != nil {
+				return err
+			}
+			return nil
+		}
+	}
+	return errors.New("no service worker to take offline")
+}
+
+// browser takes the three browser figures and returns the URLs a first
+// visit fetched.
+func (r *report) browser(link, origin string) []string {
+	var cold []float64
+	var fetched []string
+	for i := 0; i < *loads; i++ {
+		s, err := newSession()
+		if err != nil {
+			log.Fatal(err)
+		}
+		if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
+			log.Fatal(err)
+		}
+		ms, err := s.waitShown()
+		if err != nil {
+			log.Fatalf("cold load %d: %v", i+1, err)
+		}
+		cold = append(cold, ms)
+		log.Printf("  cold load %d: %.0f ms", i+1, ms)
+		if i == 0 {
+			time.Sleep(2 * time.Second) // let the worker fetch what it caches
+			s.mu.Lock()
+			fetched = append(fetched, s.requests...)
+			s.mu.Unlock()
+		}
+		s.cancel()
+	}
+
+	s, err := newSession()
+	if err != nil {
+		log.Fatal(err)
+	}
+	defer s.cancel()
+	if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
+		log.Fatal(err)
+	}
+	if _, err := s.waitShown(); err != nil {
+		log.Fatal(err)
+	}
+	if _, err := chromedp.Run(s.ctx, chromedp.Poll[bool]("navigator.serviceWorker.controller !== null",
+		chromedp.WithPollingTimeout(time.Minute))); err != nil {
+		log.Fatalf("the service worker never took control: %v", err)
+	}
+	if err := s.offline(); err != nil {
+		log.Fatal(err)
+	}
+	var off []float64
+	for i := 0; i < *loads; i++ {
+		if err := chromedp.Do(s.ctx, chromedp.Reload()); err != nil {
+			log.Fatal(err)
+		}
+		ms, err := s.waitShown()
+		if err != nil {
+			log.Fatalf("offline reload %d: %v", i+1, err)
+		}
+		off = append(off, ms)
+		log.Printf("  offline reload %d: %.0f ms", i+1, ms)
+	}
+
+	// Edits, still offline (the page needs no network to compute).
+	if _, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](editJS)); err != nil {
+		log.Fatal(err)
+	}
+	focus := `(() => { const e = document.getElementById("in-q"); e.focus(); e.setSelectionRange(e.value.length, e.value.length); return e.value; })()`
+	var times []float64
+	for i := 0; i < warmupEdits+*edits; i++ {
+		v, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](focus))
+		if err != nil {
+			log.Fatal(err)
+		}
+		key := kb.Backspace
+		if i%2 == 1 {
+			key = "5"
+		}
+		if i == 0 && v == "" {
+			log.Fatal("the flow box is empty")
+		}
+		if err := chromedp.Do(s.ctx, chromedp.KeyEvent(key)); err != nil {
+			log.Fatal(err)
+		}
+		ctx, cancel := context.WithTimeout(s.ctx, 30*time.Second)
+		_, err = chromedp.Run(ctx, chromedp.Poll[bool](fmt.Sprintf("window.fieldheadEdits.length > %d", i),
+			chromedp.WithPollingInterval(5*time.Millisecond)))
+		cancel()
+		if err != nil {
+			log.Fatalf("edit %d never showed a changed answer: %v", i+1, err)
+		}
+	}
+	all, err := chromedp.Run(s.ctx, chromedp.Evaluate[[]float64]("window.fieldheadEdits"))
+	if err != nil {
+		log.Fatal(err)
+	}
+	times = all[warmupEdits:]
+
+	coldMed, offMed := median(cold), median(off)
+	p50, p95 := percentile(times, 50), percentile(times, 95)
+	r.JSON["cold_load_ms"] = round1(coldMed)
+	r.JSON["offline_reload_ms"] = round1(offMed)
+	r.JSON["edit_p50_ms"] = round1(p50)
+	r.JSON["edit_p95_ms"] = round1(p95)
+	r.JSON["cold_load_runs_ms"] = roundAll(cold)
+	r.JSON["offline_reload_runs_ms"] = roundAll(off)
+	r.JSON["edits_timed"] = len(times)
+	r.JSON["cpu_throttle"] = *throttle
+	th := fmt.Sprintf("%g× CPU", *throttle)
+	r.row("cold load → first result, ms ("+th+", median of "+strconv.Itoa(len(cold))+")", f0(coldMed), "≤ 2 000", ptr(coldMed <= budgetColdLoad))
+	r.row("offline reload → first result, ms ("+th+", median of "+strconv.Itoa(len(off))+")", f0(offMed), "≤ 1 000", ptr(offMed <= budgetOfflineLoad))
+	r.row("edit → updated result p50, ms ("+th+", "+strconv.Itoa(len(times))+" edits)", f1(p50), "", nil)
+	r.row("edit → updated result p95, ms ("+th+")", f1(p95), "≤ 50", ptr(p95 <= budgetEditP95))
+	_ = origin
+	return fetched
+}
+
+// sizes measures the wasm and every file a first visit fetches.
+func (r *report) sizes(fetched []string) {
+	wasm, err := os.ReadFile(filepath.Join(*siteDir, "web", "app.wasm"))
+	if err != nil {
+		log.Fatal(err)
+	}
+	wz := gzip9(wasm)
+	// The page's requests, and what the worker caches on installation.
+	paths := map[string]bool{"/app-worker.js": true}
+	for _, u := range fetched {
+		if pu, err := url.Parse(u); err == nil && (pu.Scheme == "http" || pu.Scheme == "https") {
+			paths[pu.Path] = true
+		}
+	}
+	if w, err := os.ReadFile(filepath.Join(*siteDir, "app-worker.js")); err == nil {
+		if m := regexp.MustCompile(`const resourcesToCache = (\[.*?\]);`).FindSubmatch(w); m != nil {
+			var cached []string
+			if json.Unmarshal(m[1], &cached) == nil {
+				for _, c := range cached {
+					paths[c] = true
+				}
+			}
+		}
+	}
+	total, raw := 0, 0
+	var list []string
+	for p := range paths {
+		f := strings.TrimPrefix(p, "/")
+		if f == "" {
+			f = "index.html"
+		}
+		b, err := os.ReadFile(filepath.Join(*siteDir, filepath.FromSlash(f)))
+		if err != nil {
+			continue // a request the site does not answer (none expected)
+		}
+		total += gzip9(b)
+		raw += len(b)
+		list = append(list, f)
+	}
+	sort.Strings(list)
+	folder := 0
+	filepath.WalkDir(*siteDir, func(p string, d fs.DirEntry, err error) error {
+		if err == nil && !d.IsDir() {
+			if b, err := os.ReadFile(p); err == nil {
+				folder += gzip9(b)
+			}
+		}
+		return nil
+	})
+	r.JSON["wasm_bytes"] = len(wasm)
+	r.JSON["wasm_gzip_bytes"] = wz
+	r.JSON["site_gzip_bytes"] = total
+	r.JSON["site_files"] = list
+	r.rows = append([][4]string{
+		{"app.wasm, bytes", strconv.Itoa(len(wasm)), "", ""},
+		{"app.wasm, gzip -9, bytes", strconv.Itoa(wz), "", ""},
+	}, r.rows...)
+	pass := float64(total) <= budgetSiteGzip
+	verdict := "PASS"
+	if !pass {
+		verdict = "MISS"
+		r.misses = append(r.misses, "site gzip")
+	}
+	r.rows = append([][4]string{{fmt.Sprintf("first visit, %d files, gzip -9, bytes", len(list)), strconv.Itoa(total), "≤ 2 500 000", verdict}}, r.rows...)
+	r.notes = append(r.notes, fmt.Sprintf("first visit fetches %s (%d bytes before compression; the whole folder is %d bytes gzipped)",
+		strings.Join(list, ", "), raw, folder))
+}
+
+// gzip9 is the size of b compressed with gzip -9 (GNU gzip when present,
+// else Go's compress/gzip at its best compression).
+func gzip9(b []byte) int {
+	if p, err := exec.LookPath("gzip"); err == nil {
+		cmd := exec.Command(p, "-9", "-c", "-n")
+		cmd.Stdin = bytes.NewReader(b)
+		if out, err := cmd.Output(); err == nil {
+			return len(out)
+		}
+	}
+	var buf bytes.Buffer
+	w, _ := gzip.NewWriterLevel(&buf, gzip.BestCompression)
+	w.Write(b)
+	w.Close()
+	return buf.Len()
+}
+
+// composition builds the wasm with its symbols and lists its biggest
+// packages.
+func (r *report) composition() {
+	dir, err := os.MkdirTemp("", "fieldhead-bench-wasm-")
+	if err != nil {
+		log.Fatal(err)
+	}
+	defer os.RemoveAll(dir)
+	out := filepath.Join(dir, "app.wasm")
+	cmd := exec.Command("go", "build", "-trimpath", "-o", out, *wasmSrc)
+	cmd.Env = append(os.Environ(), "GOOS=js", "GOARCH=wasm")
+	if b, err := cmd.CombinedOutput(); err != nil {
+		r.notes = append(r.notes, fmt.Sprintf("composition not read: %v %s", err, b))
+		return
+	}
+	mod, err := os.ReadFile(out)
+	if err != nil {
+		log.Fatal(err)
+	}
+	p, err := analyseWasm(mod)
+	if err != nil {
+		r.notes = append(r.notes, "composition not read: "+err.Error())
+		return
+	}
+	r.notes = append(r.notes, fmt.Sprintf("app.wasm with symbols: %.2f MiB = code %.2f MiB + data %.2f MiB + other %.2f MiB; largest code by package:",
+		mib(p.total), mib(p.code), mib(p.data), mib(p.other)))
+	for _, l := range p.topPackages(15) {
+		r.notes = append(r.notes, "    "+l)
+	}
+}
+
+// print writes the table, the notes and, last, the JSON line.
+func (r *report) print() {
+	w := [3]int{}
+	head := [4]string{"figure", "measured", "budget", ""}
+	for _, row := range append([][4]string{head}, r.rows...) {
+		for i := 0; i < 3; i++ {
+			if n := len([]rune(row[i])); n > w[i] {
+				w[i] = n
+			}
+		}
+	}
+	pad := func(s string, n int) string { return s + strings.Repeat(" ", n-len([]rune(s))) }
+	fmt.Println()
+	for i, row := range append([][4]string{head}, r.rows...) {
+		fmt.Printf("%s  %s  %s  %s\n", pad(row[0], w[0]), pad(row[1], w[1]), pad(row[2], w[2]), row[3])
+		if i == 0 {
+			fmt.Println(strings.Repeat("-", w[0]+w[1]+w[2]+12))
+		}
+	}
+	fmt.Println()
+	for _, n := range r.notes {
+		fmt.Println(n)
+	}
+	if len(r.misses) == 0 {
+		fmt.Println("every budget met")
+	} else {
+		fmt.Println("budgets missed: " + strings.Join(r.misses, ", "))
+	}
+	r.JSON["budgets_missed"] = append([]string{}, r.misses...)
+	b, err := json.Marshal(r.JSON)
+	if err != nil {
+		log.Fatal(err)
+	}
+	fmt.Println(string(b))
+}
+
+func median(v []float64) float64 { return percentile(v, 50) }
+
+// percentile is the nearest-rank percentile (the smallest value with at
+// least p% of the values at or below it).
+func percentile(v []float64, p float64) float64 {
+	if len(v) == 0 {
+		return math.NaN()
+	}
+	s := append([]float64(nil), v...)
+	sort.Float64s(s)
+	k := int(math.Ceil(p/100*float64(len(s)))) - 1
+	if k < 0 {
+		k = 0
+	}
+	return s[k]
+}
+
+func round1(x float64) float64 { return math.Round(x*10) / 10 }
+func roundAll(v []float64) []float64 {
+	out := make([]float64, len(v))
+	for i, x := range v {
+		out[i] = round1(x)
+	}
+	return out
+}
+func f0(x float64) string { return strconv.FormatFloat(x, 'f', 0, 64) }
+func f1(x float64) string { return strconv.FormatFloat(x, 'f', 1, 64) }
+func mib(n int) float64   { return float64(n) / (1 << 20) }

@@ -1,0 +1,145 @@
+package scenario
+
+import (
+	"fmt"
+	"math"
+	"reflect"
+	"strings"
+	"testing"
+)
+
+// TestBadLinks completes the bad-input catalogue of TestBadInputs with the
+// cases it leaves out: malformed and truncated links, a link over the size
+// limit, a parameter given twice, markup and script in a parameter, zero
+// flows where a flow or a power divides, and numbers so large that the
+// arithmetic overflows. Each row goes through Parse and Evaluate like a
+// link opened in the page. The expected behaviour is this project's rule
+// for bad input (calc/doc.go and the product brief): an error naming the
+// field, never a panic, a NaN or an Inf, and every other input kept.
+func TestBadLinks(t *testing.T) {
+	// A single-run balance (no segments) with the Convert part.
+	const base = "liq=water&t=18C&alt=210m&p1=0kPa&z1=212m&v1=0&p2=0kPa&z2=251m&v2=0&q=45L/s&solve=hp" +
+		"&l=640m&d=202.7mm&mat=steel&cv=430kPa"
+	with := func(kv ...string) string {
+		s, _ := Parse(base)
+		for _, p := range kv {
+			k, v, _ := strings.Cut(p, "=")
+			_ = s.Set(k, v)
+		}
+		return s.Encode()
+	}
+	demo := func(k, v string) string {
+		s := Demo()
+		_ = s.Set(k, v)
+		return s.Encode()
+	}
+	long := strings.Repeat("x", MaxQueryBytes)
+	tests := []struct {
+		name    string
+		query   string
+		linkErr string // in Parse's error ("" = none)
+		param   string // the parameter whose message must appear ("" = none expected)
+		msg     string // in that message
+		keep    string // a parameter that must survive, as param=value
+		balance bool   // the balance must still be computed
+	}{
+		{"a percent escape cut short stays text", base + "&name=Alder%2", "", "", "", "name=Alder%2", true},
+		{"a UTF-8 sequence cut short", base + "&name=%E2%82", "not valid UTF-8", "", "", "z1=212m", true},
+		{"a bad percent escape in a value", base + "&name=%zzAlder", "", "", "", "name=%zzAlder", true},
+		{"a link cut inside a fitting list", with("fit=gate:2,elb"), "", "fit", "", "fit=gate:2,elb", false},
+		{"a link cut after a parameter name", base + "&k", "", "", "", "z1=212m", true},
+		{"a link cut after the =", strings.Replace(base, "q=45L/s", "q=", 1), "", "q", "flow", "z1=212m", false},
+		{"a link cut inside a unit", strings.Replace(base, "q=45L/s", "q=45L/", 1), "", "q", "", "q=45L/", false},
+		{"a link cut inside a number", strings.Replace(base, "z2=251m", "z2=2.5e", 1), "", "z2", "", "z2=2.5e", false},
+		{"a parameter given twice", "z1=3m&" + base, "given twice", "", "", "z1=3m", true},
+		{"an empty parameter name", base + "&=5", "not a Fieldhead parameter", "", "", "z1=212m", true},
+		{"markup in a number", with("z1=<b>212</b>m"), "", "z1", "length", "z1=<b>212</b>m", false},
+		{"script in the title", with("name=<script>alert(1)</script>"), "", "", "", "name=<script>alert(1)</script>", true},
+		{"markup with an event handler in the title", with(`name=<img src=x onerror="alert(1)">`), "", "", "", `name=<img src=x onerror="alert(1)">`, true},
+		{"markup in a choice", with(`mat=<svg onload=alert(1)>`), "", "mat", "", `mat=<svg onload=alert(1)>`, false},
+		{"zero flow through a pipe run", with("q=0L/s"), "", "", "", "q=0L/s", true},
+		{"zero flow in the Regime view", with("view=regime", "q=0L/s"), "", "", "", "q=0L/s", true},
+		{"zero flow, solving for the turbine head", with("q=0L/s", "solve=ht"), "", "", "", "q=0L/s", true},
+		{"zero measured flow in the field check", demo("qm", "0L/s"), "", "qm", "above zero", "qm=0L/s", true},
+		{"zero motor input: no efficiency, no division", demo("pin", "0kW"), "", "", "", "pin=0kW", true},
+		{"zero pump speed in the affinity laws", demo("spd", "0%"), "", "spd", "between", "spd=0%", true},
+		{"zero diameter at a point", with("d1=0mm"), "", "d1", "", "d1=0mm", false},
+		{"a velocity so large the head overflows", with("v1=1e200m/s"), "", "", "", "v1=1e200m/s", false},
+		{"a pressure so large the head overflows", with("p1=1e300kPa", "p2=-1e300kPa", "solve=ht"), "", "", "", "p1=1e300kPa", false},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			s, err := Parse(tc.query)
+			switch {
+			case tc.linkErr == "" && err != nil:
+				t.Errorf("the link failed: %v", err)
+			case tc.linkErr != "" && (err == nil || !strings.Contains(err.Error(), tc.linkErr)):
+				t.Errorf("link error %v, want it to contain %q", err, tc.linkErr)
+			}
+			r := Evaluate(s)
+			if tc.param != "" {
+				m, ok := r.Errors[tc.param]
+				if !ok {
+					t.Errorf("no message on %s (errors %v)", tc.param, r.Errors)
+				} else if !strings.HasPrefix(m, tc.param+":") || !strings.Contains(m, tc.msg) {
+					t.Errorf("message %q should name %s and say %q", m, tc.param, tc.msg)
+				}
+			}
+			for p, m := range r.Errors {
+				if !strings.HasPrefix(m, p+":") {
+					t.Errorf("message %q on %s does not name its field", m, p)
+				}
+			}
+			if k, v, _ := strings.Cut(tc.keep, "="); s.Get(k) != v {
+				t.Errorf("%s is %q, want %q kept as given", k, s.Get(k), v)
+			}
+			if tc.balance && r.Balance == nil {
+				t.Errorf("the balance was lost (errors %v)", r.Errors)
+			}
+			// A link written back never carries markup literally.
+			if enc := s.Encode(); strings.ContainsAny(enc, "<>\"") {
+				t.Errorf("Encode writes markup characters literally: %.80s", enc)
+			}
+			checkFinite(t, tc.name, r)
+			deepFinite(t, "Result", reflect.ValueOf(r))
+		})
+	}
+
+	// Over the size limit the link is refused as a whole, with a message
+	// that says why (the page then keeps the sheet saved on the device).
+	s, err := Parse(base + "&name=" + long)
+	if err == nil || !strings.Contains(err.Error(), "longer than") {
+		t.Errorf("a link of %d bytes: error %v, want it refused as too long", len(base)+len(long), err)
+	}
+	if len(s.Encode()) != 0 {
+		t.Errorf("a refused link should give an empty scenario, not part of one: %.60s", s.Encode())
+	}
+}
+
+// deepFinite fails on any NaN or Inf reachable from v: every number of a
+// result returned for display.
+func deepFinite(t *testing.T, path string, v reflect.Value) {
+	t.Helper()
+	switch v.Kind() {
+	case reflect.Float32, reflect.Float64:
+		if f := v.Float(); math.IsNaN(f) || math.IsInf(f, 0) {
+			t.Errorf("%s = %v", path, f)
+		}
+	case reflect.Pointer, reflect.Interface:
+		if !v.IsNil() {
+			deepFinite(t, path, v.Elem())
+		}
+	case reflect.Struct:
+		for i := 0; i < v.NumField(); i++ {
+			deepFinite(t, path+"."+v.Type().Field(i).Name, v.Field(i))
+		}
+	case reflect.Slice, reflect.Array:
+		for i := 0; i < v.Len(); i++ {
+			deepFinite(t, fmt.Sprintf("%s[%d]", path, i), v.Index(i))
+		}
+	case reflect.Map:
+		for _, k := range v.MapKeys() {
+			deepFinite(t, fmt.Sprintf("%s[%v]", path, k), v.MapIndex(k))
+		}
+	}
+}
