@@ -71,7 +71,8 @@ const missedJS = `window.fieldheadFocusables.filter((e) => !window.fieldheadReac
 // switch on each side: every input and picker has a label; the Tab key
 // reaches every control in turn and each shows a visible focus; and the
 // views, switches and pickers work from the keyboard alone, keeping the
-// focus where it was.
+// focus where it was. (WCAG 2.1: SC 1.3.1, 2.1.1 Keyboard, 2.4.3 Focus
+// Order, 2.4.7 Focus Visible, 3.3.2, 4.1.2.)
 func TestAccessibility(t *testing.T) {
 	site := testSite(t)
 	b := newTab(t)

@@ -38,7 +38,8 @@ func TestContainNative(t *testing.T) {
 }
 
 // TestPanicPartNames: the part named in the banner is the innermost of
-// this program's functions on the panicking stack.
+// this program's functions on the panicking stack (this project's rule;
+// the frames are as the Go runtime documents runtime.CallersFrames).
 func TestPanicPartNames(t *testing.T) {
 	var got string
 	func() {
@@ -72,7 +73,8 @@ func (s *sheet) panickyBudgetForTest() {
 // while drawing the sheet, must each leave the program running: a banner
 // names what failed, every input is still there, the link and the saved
 // copy are untouched by the failed edit, and the page computes again once
-// the switch is off.
+// the switch is off. (This project's rule for faults; the expected figures
+// are scenario.Evaluate's own.)
 func TestPanicContainment(t *testing.T) {
 	site := testSite(t)
 	b := newTab(t)

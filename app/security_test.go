@@ -114,8 +114,12 @@ func TestSitePolicy(t *testing.T) {
 // TestSecurity opens the page in Chromium with markup and script in the
 // sheet title, goes through every view and the print layout, and checks:
 // the markup is shown as text and never runs; the policy is in force (an
-// injected inline handler, style attribute and foreign fetch are refused);
-// and the page never requests anything from another origin.
+// injected inline handler, style attribute and foreign image are refused,
+// as the CSP Level 3 specification, W3C, says a policy without
+// 'unsafe-inline' and with img-src 'self' must); the page never requests
+// anything from another origin; and a link over the size limit leaves the
+// saved sheet alone (this project's rule for bad links). The service
+// worker's own fetches are its resourcesToCache, checked by TestSitePolicy.
 func TestSecurity(t *testing.T) {
 	site := testSite(t)
 	b := newTab(t)

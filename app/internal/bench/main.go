@@ -20,7 +20,7 @@
 //     the page and the service worker (Network.emulateNetworkConditionsByRule,
 //     emulateOfflineServiceWorker), reload, the same end point; 4× CPU
 //     throttle; median of the reloads.
-//   - edit_p50_ms, edit_p95_ms: on the loaded page, 4× throttle, one key at a
+//   - edit_p50_ms, edit_p95_ms (and edit_phases_mean_ms): on the loaded page, 4× throttle, one key at a
 //     time into the flow box (Backspace, then the digit back, alternately:
 //     each changes the answer), from the keydown's timestamp to the end of
 //     the frame that paints the changed answer (MutationObserver on the
@@ -254,22 +254,32 @@ const shownJS = `(() => {
 })();`
 
 // editJS times edits: keydown → the end of the frame that paints a
-// changed answer.
+// changed answer, and the phases between: keydown → input event (the
+// browser), input → the answer changed in the DOM (the Go program: the
+// handler, go-app's wait for its next frame, drawing and patching the
+// page), → the next animation frame, → that frame painted.
 const editJS = `(() => {
   window.fieldheadEdits = [];
-  let start = 0;
+  window.fieldheadPhases = [];
+  let start = 0, inp = 0;
   let last = document.getElementById("answer-value").textContent;
-  document.addEventListener("keydown", (e) => { start = e.timeStamp; }, true);
+  document.addEventListener("keydown", (e) => { start = e.timeStamp; inp = 0; }, true);
+  document.addEventListener("input", () => { inp = performance.now(); }, true);
   new MutationObserver(() => {
     const el = document.getElementById("answer-value");
     const now = el ? el.textContent : "";
     if (!start || now === last) return;
     last = now;
-    const s = start;
+    const s = start, i = inp || start, m = performance.now();
     start = 0;
     requestAnimationFrame(() => {
+      const r = performance.now();
       const ch = new MessageChannel();
-      ch.port1.onmessage = () => window.fieldheadEdits.push(performance.now() - s);
+      ch.port1.onmessage = () => {
+        const e = performance.now();
+        window.fieldheadEdits.push(e - s);
+        window.fieldheadPhases.push([i - s, m - i, r - m, e - r]);
+      };
       ch.port2.postMessage(0);
     });
   }).observe(document.body, {childList: true, subtree: true, characterData: true});
@@ -475,7 +485,27 @@ func (r *report) browser(link, origin string) []string {
 		log.Fatal(err)
 	}
 	times = all[warmupEdits:]
+	phases, err := chromedp.Run(s.ctx, chromedp.Evaluate[[][]float64]("window.fieldheadPhases"))
+	if err != nil || len(phases) != len(all) {
+		log.Fatalf("edit phases: %v", err)
+	}
+	var mean [4]float64
+	for _, ph := range phases[warmupEdits:] {
+		for k := range mean {
+			mean[k] += ph[k] / float64(len(times))
+		}
+	}
+	r.JSON["edit_phases_mean_ms"] = map[string]float64{"keydown_to_input": round1(mean[0]), "input_to_dom": round1(mean[1]),
+		"dom_to_frame": round1(mean[2]), "frame_to_painted": round1(mean[3])}
+	r.notes = append(r.notes, fmt.Sprintf("an edit, on average: keydown → input event %.1f ms (browser); input → answer changed in the DOM %.1f ms "+
+		"(Go: handler and Evaluate, go-app's wait for its next frame (1/120 s), Render and the DOM patch); → next frame %.1f ms; → painted %.1f ms",
+		mean[0], mean[1], mean[2], mean[3]))
 
+	elements, err := chromedp.Run(s.ctx, chromedp.Evaluate[int]("document.getElementsByTagName('*').length"))
+	if err != nil {
+		log.Fatal(err)
+	}
+	r.JSON["page_elements"] = elements
 	coldMed, offMed := median(cold), median(off)
 	p50, p95 := percentile(times, 50), percentile(times, 95)
 	r.JSON["cold_load_ms"] = round1(coldMed)
@@ -491,6 +521,13 @@ func (r *report) browser(link, origin string) []string {
 	r.row("offline reload → first result, ms ("+th+", median of "+strconv.Itoa(len(off))+")", f0(offMed), "≤ 1 000", ptr(offMed <= budgetOfflineLoad))
 	r.row("edit → updated result p50, ms ("+th+", "+strconv.Itoa(len(times))+" edits)", f1(p50), "", nil)
 	r.row("edit → updated result p95, ms ("+th+")", f1(p95), "≤ 50", ptr(p95 <= budgetEditP95))
+	if p95 > budgetEditP95 {
+		r.notes = append(r.notes, "edit p95 over budget: every key redraws the whole sheet in go-app ("+strconv.Itoa(elements)+" elements "+
+			"compared with the page) after go-app's fixed wait for its next frame (1/120 s), and the browser's own input, "+
+			"frame and paint take about as long again at 4× throttle; the pickers are already components that go-app "+
+			"skips when unchanged (app/selectbox.go). What is left: cards as components so unchanged ones are not redrawn, "+
+			"or a go-app that draws right after the event. The figure also moves with the machine's other load.")
+	}
 	_ = origin
 	return fetched
 }
