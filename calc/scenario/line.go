@@ -12,13 +12,31 @@ import (
 func (e *eval) segmentCount() int {
 	n := 0
 	for k := range e.s.raw {
-		var i int
-		var f string
-		if _, err := fmt.Sscanf(k, "s%d.%s", &i, &f); err == nil && i > n && e.s.Has(k) {
+		if i := segmentOf(k); i > n && e.s.Has(k) {
 			n = i
 		}
 	}
 	return n
+}
+
+// segmentOf returns N for a segment parameter "sN.field", else 0.
+func segmentOf(param string) int {
+	if len(param) < 4 || param[0] != 's' {
+		return 0
+	}
+	n := 0
+	for i := 1; i < len(param); i++ {
+		c := param[i]
+		switch {
+		case c >= '0' && c <= '9':
+			n = n*10 + int(c-'0')
+		case c == '.' && i > 1:
+			return n
+		default:
+			return 0
+		}
+	}
+	return 0
 }
 
 // line reads the segments s1…sN into a calc.Line, or returns nil when there

@@ -6,6 +6,7 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"unicode"
 	"unicode/utf8"
 )
 
@@ -101,6 +102,10 @@ func Parse(query string) (Scenario, error) {
 			errs = append(errs, fmt.Sprintf("%s: the value is not valid UTF-8 text", safeName(key)))
 			continue
 		}
+		if strings.IndexFunc(val, unicode.IsControl) >= 0 {
+			errs = append(errs, fmt.Sprintf("%s: the value holds control characters, which no field takes", safeName(key)))
+			continue
+		}
 		if _, ok := known[key]; !ok {
 			errs = append(errs, fmt.Sprintf("%s: not a Fieldhead parameter", safeName(key)))
 			continue
@@ -110,6 +115,11 @@ func Parse(query string) (Scenario, error) {
 			continue
 		}
 		s.raw[key] = val
+	}
+	// The canonical link must fit too, so that what Parse accepts always
+	// reads back (escaping can triple the length of non-ASCII text).
+	if n := len(s.Encode()); n > MaxQueryBytes {
+		return Scenario{raw: map[string]string{}}, fmt.Errorf("link: the scenario is %d bytes once written out, longer than the %d accepted", n, MaxQueryBytes)
 	}
 	if len(errs) > 0 {
 		return s, fmt.Errorf("%s", strings.Join(errs, "; "))

@@ -36,6 +36,9 @@ func TestParseLinkErrors(t *testing.T) {
 		{"z1=3m&z1=4m", "z1: given twice", "z1"},
 		{"z1=3m&" + strings.Repeat("a", MaxQueryBytes), "longer than", ""},
 		{"z1=3m&name=%ff%fe", "not valid UTF-8", "z1"},
+		{"z1=3m&name=a%07b", "control characters", "z1"},
+		// 2.7 KB of non-ASCII text triples once escaped: refused whole.
+		{"name=" + strings.Repeat("é", 1400), "once written out", ""},
 	}
 	for _, tc := range tests {
 		s, err := Parse(tc.query)
@@ -200,6 +203,14 @@ func checkFinite(t *testing.T, what string, r Result) {
 	if c := r.Convert; c != nil {
 		bad("convert gauge", c.Gauge)
 		bad("convert head", c.Head)
+	}
+}
+
+func TestSegmentOf(t *testing.T) {
+	for in, want := range map[string]int{"s1.l": 1, "s20.fit": 20, "solve": 0, "s.l": 0, "sx.l": 0, "s3": 0, "s12.": 12} {
+		if got := segmentOf(in); got != want {
+			t.Errorf("segmentOf(%q) = %d, want %d", in, got, want)
+		}
 	}
 }
 
