@@ -96,7 +96,7 @@ func (s *sheet) answerCard() app.UI {
 	s.shown["solve"] = true
 	cur := s.solve()
 	var btns []app.UI
-	for _, c := range scenario.Choices("solve") {
+	for _, c := range choicesOf("solve") {
 		on := c.Value == cur
 		btns = append(btns, app.Button().Type("button").ID("solve-"+c.Value).
 			Class(classIf("seg", on, "on")).Aria("pressed", on).Text(c.Label).

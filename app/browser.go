@@ -1,6 +1,8 @@
 package main
 
 import (
+	"time"
+
 	"fieldhead/calc/scenario"
 
 	"github.com/maxence-charriere/go-app/v10/pkg/app"
@@ -46,12 +48,25 @@ func replaceQuery(q string) {
 	app.Window().Get("history").Call("replaceState", nil, "", path)
 }
 
-// nowText is the local date and time for the printed sheet.
+// nowText is the local date and time for the printed sheet. The browser's
+// formatting is slow next to the rest of a redraw, and the text changes
+// once a second: it is kept for the second it was made in.
 func nowText() string {
 	if !app.IsClient {
 		return ""
 	}
-	return app.Window().Get("Date").New().Call("toLocaleString").String()
+	sec := time.Now().Unix()
+	if nowCache.text == "" || nowCache.sec != sec {
+		nowCache.sec = sec
+		nowCache.text = app.Window().Get("Date").New().Call("toLocaleString").String()
+	}
+	return nowCache.text
+}
+
+// nowCache is nowText's last answer (the page has a single UI goroutine).
+var nowCache struct {
+	sec  int64
+	text string
 }
 
 // onCopy copies the share link: the asynchronous clipboard where the

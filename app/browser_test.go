@@ -332,6 +332,29 @@ func TestBrowser(t *testing.T) {
 		t.Errorf("after resetting v2 the answer is %q, want %q", got, wantHead)
 	}
 
+	// An either/or switch puts another parameter's box where the first one
+	// was: what is typed there must reach the new parameter (go-app keeps a
+	// handler whose code is unchanged unless its scope says otherwise). The
+	// parameter names are the link vocabulary of calc/scenario/doc.go.
+	for _, sw := range []struct{ to, box, text, want, not, back string }{
+		{"#sw-pt1-d", "#in-d1", "200", "d1=200mm", "v1=200", "#sw-pt1-v"},
+		{"#sw-site-baro", "#in-baro", "98.8", "baro=98.8kPa", "alt=98.8", "#sw-site-alt"},
+	} {
+		if err := chromedp.Do(ctx, chromedp.Click(chromedp.CSS(sw.to)), chromedp.WaitVisible(chromedp.CSS(sw.box))); err != nil {
+			t.Fatalf("switching to %s: %v", sw.box, err)
+		}
+		typeInto(sw.box, sw.text)
+		if q := js("location.search"); !strings.Contains(q, sw.want) || strings.Contains(q, sw.not) {
+			t.Errorf("typing %s into %s should give %s in the link, which is %q", sw.text, sw.box, sw.want, q)
+		}
+		if err := chromedp.Do(ctx, chromedp.Click(chromedp.CSS(sw.back))); err != nil {
+			t.Fatal(err)
+		}
+	}
+	if got := waitText("#answer-value", wantHead); got != wantHead {
+		t.Errorf("after switching back the answer is %q, want %q", got, wantHead)
+	}
+
 	// 6. The other views and sizes, for a person to look at.
 	for _, v := range []string{"convert", "regime"} {
 		if err := chromedp.Do(ctx, chromedp.Click(chromedp.CSS("#view-"+v))); err != nil {

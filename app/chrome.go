@@ -4,8 +4,6 @@ import (
 	"sort"
 	"strings"
 
-	"fieldhead/calc/scenario"
-
 	"github.com/maxence-charriere/go-app/v10/pkg/app"
 )
 
@@ -110,35 +108,7 @@ func (s *sheet) Render() (ui app.UI) {
 
 // header is the bar with the name, the views and the sheet actions.
 func (s *sheet) header() app.UI {
-	cur := s.view()
-	var tabs []app.UI
-	for _, c := range scenario.Choices("view") {
-		if viewHints[c.Value] == "" {
-			continue // a view this page does not draw yet
-		}
-		on := c.Value == cur && s.loaded
-		tabs = append(tabs, app.Button().Type("button").ID("view-"+c.Value).
-			Class(classIf("tab", on, "on")).Aria("pressed", on).
-			OnClick(s.choose("view", c.Value)).Body(
-			app.Span().Class("tab-name").Text(c.Label),
-			app.Span().Class("tab-hint").Text(viewHints[c.Value]),
-		))
-	}
-	var units []app.UI
-	for _, c := range scenario.Choices("units") {
-		on := (c.Value == "us") == s.us()
-		units = append(units, app.Button().Type("button").ID("units-"+c.Value).
-			Class(classIf("seg", on, "on")).Aria("pressed", on).Text(c.Label).
-			OnClick(s.choose("units", c.Value)))
-	}
-	return app.Header().Class("topbar").Body(
-		app.Div().Class("brand").Body(app.Raw(brandMark), app.Span().Text("Fieldhead")),
-		app.Nav().Class("tabs").Aria("label", "views").Body(tabs...),
-		app.Div().Class("units").Body(
-			app.Span().Class("switch-label").Text("Units"),
-			app.Div().Class("segs").Aria("label", "unit system").Body(units...),
-		),
-	)
+	return &topBar{S: s, View: s.view(), US: s.us(), Loaded: s.loaded}
 }
 
 // brandMark is the icon, drawn inline so it needs no request.

@@ -20,19 +20,7 @@ func (s *sheet) message(p string) string {
 
 // fieldNotes draws p's error and the warnings about p, in place.
 func (s *sheet) fieldNotes(p string) []app.UI {
-	var out []app.UI
-	if m := s.message(p); m != "" {
-		out = append(out, app.P().ID("err-"+domID(p)).Class("msg err").Attr("role", "alert").Body(
-			app.Span().Class("tag").Text("Check"), app.Text(" "+m)))
-	}
-	for _, w := range s.warnings() {
-		if w.Param == p {
-			out = append(out, app.P().Class("msg warn").Body(
-				app.Span().Class("tag").Text("Warning"), app.Text(" about this value: read it beside the result")))
-			break
-		}
-	}
-	return out
+	return s.noteFor(p).ui(p)
 }
 
 // quantity draws an input for a value with a unit: a box (numeric keypad)
@@ -43,29 +31,13 @@ func (s *sheet) quantity(p, label, hint string) app.UI {
 	if unknowns[p] && s.view() == "balance" && s.solve() == p {
 		return s.unknownField(p, label)
 	}
-	bad := s.res.Errors[p] != ""
-	id := "in-" + domID(p)
-	picker := s.unitPicker(p)
-	body := []app.UI{
-		app.Label().For(id).Class("lbl").Body(app.Text(label), hintUI(hint)),
-		app.Div().Class("entry").Body(
-			app.Input().Type("text").ID(id).Class(classIf("box", bad, "bad")).
-				Attr("inputmode", "decimal").Attr("autocomplete", "off").Attr("spellcheck", "false").
-				Aria("invalid", bad).
-				Placeholder(placeholder(p)).
-				Value(s.box[p]).
-				OnInput(s.onBox(p)),
-			picker,
-		),
-	}
-	body = append(body, s.fieldNotes(p)...)
-	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + domID(p)).Body(body...)
+	return &field{S: s, Kind: boxField, P: p, Label: label, Hint: hint, Box: s.box[p], Placeholder: placeholder(p),
+		Bad: s.res.Errors[p] != "", Note: s.noteFor(p), Numeric: true, Options: s.unitOptions(p)}
 }
 
-// unitPicker draws the unit select of p. When the box holds a unit of its
-// own the picker says so instead of pretending to apply.
-func (s *sheet) unitPicker(p string) app.UI {
-	id := "unit-" + domID(p)
+// unitOptions are the options of p's unit picker. When the box holds a
+// unit of its own the picker says so instead of pretending to apply.
+func (s *sheet) unitOptions(p string) []selOpt {
 	num, typed := scenario.Split(s.box[p])
 	if num == "" {
 		typed = "" // not a number at all: the picker still says what a number would mean
@@ -91,7 +63,7 @@ func (s *sheet) unitPicker(p string) app.UI {
 		}
 		opts = append(opts, selOpt{u, u, typed == "" && u == cur})
 	}
-	return &selectBox{ID: id, Class: "unit", Label: "unit", Options: opts, Param: p, Unit: true, S: s}
+	return opts
 }
 
 // placeholder is the greyed example in an empty box.
@@ -135,48 +107,15 @@ func (s *sheet) unknownField(p, label string) app.UI {
 // choice draws a select for an enumerated parameter.
 func (s *sheet) choice(p, label string, blank string) app.UI {
 	s.shown[p] = true
-	id := "in-" + domID(p)
-	cur := s.scen.Get(p)
-	choices := choicesOf(p)
-	opts := make([]selOpt, 0, len(choices)+1)
-	known := false
-	for _, c := range choices {
-		if c.Value == cur {
-			known = true
-		}
-	}
-	if blank != "" {
-		opts = append(opts, selOpt{"", blank, cur == ""})
-	}
-	if !known && cur != "" {
-		opts = append(opts, selOpt{cur, cur + " (not recognised)", true})
-	}
-	for _, c := range choices {
-		opts = append(opts, selOpt{c.Value, c.Label, c.Value == cur})
-	}
-	bad := s.res.Errors[p] != ""
-	body := []app.UI{
-		app.Label().For(id).Class("lbl").Text(label),
-		&selectBox{ID: id, Class: classIf("pick", bad, "bad"), Options: opts, Param: p, S: s},
-	}
-	body = append(body, s.fieldNotes(p)...)
-	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + domID(p)).Body(body...)
+	return &field{S: s, Kind: choiceField, P: p, Label: label, Options: choiceOptions(p, s.scen.Get(p), blank),
+		Bad: s.res.Errors[p] != "", Note: s.noteFor(p)}
 }
 
 // plain draws a text input without a unit (counts, coefficients, the title).
 func (s *sheet) plain(p, label, hint string, numeric bool) app.UI {
 	s.shown[p] = true
-	id := "in-" + domID(p)
-	bad := s.res.Errors[p] != ""
-	in := app.Input().Type("text").ID(id).Class(classIf("box wide", bad, "bad")).
-		Attr("autocomplete", "off").Attr("spellcheck", "false").Aria("invalid", bad).
-		Value(s.box[p]).OnInput(s.onBox(p))
-	if numeric {
-		in = in.Attr("inputmode", "decimal")
-	}
-	body := []app.UI{app.Label().For(id).Class("lbl").Body(app.Text(label), hintUI(hint)), in}
-	body = append(body, s.fieldNotes(p)...)
-	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + domID(p)).Body(body...)
+	return &field{S: s, Kind: plainField, P: p, Label: label, Hint: hint, Box: s.box[p],
+		Bad: s.res.Errors[p] != "", Note: s.noteFor(p), Numeric: numeric}
 }
 
 // ref draws the gauge/absolute choice of a pressure as two buttons.
@@ -186,14 +125,5 @@ func (s *sheet) ref(p string) app.UI {
 	if cur == "" {
 		cur = "g"
 	}
-	var btns []app.UI
-	for _, c := range scenario.Choices(p) {
-		on := c.Value == cur
-		btns = append(btns, app.Button().Type("button").ID("sw-"+p+"-"+c.Value).
-			Class(classIf("seg", on, "on")).Aria("pressed", on).Text(c.Label).
-			OnClick(s.choose(p, c.Value)))
-	}
-	out := []app.UI{app.Div().Class("segs small").Aria("label", "pressure reference").Body(btns...)}
-	out = append(out, s.fieldNotes(p)...)
-	return app.Div().Class("ref").Body(out...)
+	return &field{S: s, Kind: refField, P: p, Cur: cur, Note: s.noteFor(p)}
 }

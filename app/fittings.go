@@ -42,7 +42,7 @@ func fitText(list []fitEntry) string {
 
 // fitLabel is the name of a fitting key.
 func fitLabel(key string) string {
-	for _, c := range scenario.Choices("fit") {
+	for _, c := range choicesOf("fit") {
 		if c.Value == key {
 			return c.Label
 		}
@@ -56,6 +56,27 @@ func (s *sheet) setFittings(p string, list []fitEntry) {
 	s.changed()
 }
 
+// stepFitting changes the count of one kind of fitting in p's list by
+// delta, adding the kind when it is not there. The list is read from the
+// scenario when the button is pressed: the handlers go-app keeps from an
+// earlier drawing must not write back an older list.
+func (s *sheet) stepFitting(p, key string, delta int) {
+	list, ok := fitEntries(s.scen.Get(p))
+	if !ok {
+		return
+	}
+	for i := range list {
+		if list[i].key == key {
+			list[i].count += delta
+			s.setFittings(p, list)
+			return
+		}
+	}
+	if delta > 0 {
+		s.setFittings(p, append(list, fitEntry{key, delta}))
+	}
+}
+
 // fittings draws the fitting editor of the single run.
 func (s *sheet) fittings() app.UI { return s.fittingsFor("fit") }
 
@@ -67,31 +88,29 @@ func (s *sheet) fittingsFor(p string) app.UI {
 	list, ok := fitEntries(s.scen.Get(p))
 	var rows []app.UI
 	if ok {
-		for i, f := range list {
-			i, f := i, f
+		for _, f := range list {
+			key := f.key
 			rows = append(rows, app.Li().Class("fit").Body(
-				app.Span().Class("fit-name").Text(fitLabel(f.key)),
+				app.Span().Class("fit-name").Text(fitLabel(key)),
 				app.Div().Class("stepper").Body(
-					app.Button().Type("button").Class("step").Aria("label", "one fewer "+fitLabel(f.key)).Text("−").
+					app.Button().Type("button").Class("step").Aria("label", "one fewer "+fitLabel(key)).Text("−").
 						OnClick(func(ctx app.Context, e app.Event) {
 							defer s.contain("changing the fittings")
-							list[i].count--
-							s.setFittings(p, list)
-						}),
+							s.stepFitting(p, key, -1)
+						}, app.EventScope(p, key)),
 					app.Span().Class("count").Text(strconv.Itoa(f.count)),
-					app.Button().Type("button").Class("step").Aria("label", "one more "+fitLabel(f.key)).Text("+").
+					app.Button().Type("button").Class("step").Aria("label", "one more "+fitLabel(key)).Text("+").
 						OnClick(func(ctx app.Context, e app.Event) {
 							defer s.contain("changing the fittings")
-							list[i].count++
-							s.setFittings(p, list)
-						}),
+							s.stepFitting(p, key, +1)
+						}, app.EventScope(p, key)),
 				),
 			))
 		}
 	}
 	var add []app.UI
 	add = append(add, app.Option().Value("").Selected(true).Text("Add a fitting…"))
-	for _, c := range scenario.Choices("fit") {
+	for _, c := range choicesOf("fit") {
 		add = append(add, app.Option().Value(c.Value).Text(c.Label))
 	}
 	body := []app.UI{
@@ -108,19 +127,10 @@ func (s *sheet) fittingsFor(p string) app.UI {
 		body = append(body, app.Select().ID(addID).Class("pick add-fit").Aria("label", "add a fitting").
 			OnChange(func(ctx app.Context, e app.Event) {
 				defer s.contain("adding a fitting")
-				key := ctx.JSSrc().Get("value").String()
-				if key == "" {
-					return
+				if key := ctx.JSSrc().Get("value").String(); key != "" {
+					s.stepFitting(p, key, +1)
 				}
-				for i := range list {
-					if list[i].key == key {
-						list[i].count++
-						s.setFittings(p, list)
-						return
-					}
-				}
-				s.setFittings(p, append(list, fitEntry{key, 1}))
-			}).Body(add...))
+			}, app.EventScope(p)).Body(add...))
 	}
 	body = append(body,
 		app.Details().Class("astext").Open(!ok || s.res.Errors[p] != "").Body(

@@ -83,22 +83,7 @@ func (s *sheet) switchTo(group, key string) app.EventHandler {
 
 // toggle draws a group's switch.
 func (s *sheet) toggle(group, label string) app.UI {
-	cur := s.current(group)
-	opts := groupOptions(group)
-	buttons := make([]app.UI, 0, len(opts))
-	for _, o := range opts {
-		buttons = append(buttons, app.Button().
-			Type("button").
-			ID("sw-"+domID(group)+"-"+o.key).
-			Class(classIf("seg", o.key == cur, "on")).
-			Aria("pressed", o.key == cur).
-			Text(o.label).
-			OnClick(s.switchTo(group, o.key)))
-	}
-	return app.Div().Class("switch").Body(
-		app.Span().Class("switch-label").Text(label),
-		app.Div().Class("segs").Aria("label", label).Body(buttons...),
-	)
+	return &field{S: s, Kind: switchField, P: group, Label: label, Cur: s.current(group)}
 }
 
 // domID makes a parameter or group name fit for an element id that CSS

@@ -93,7 +93,8 @@ var partNames = map[string]string{
 	"warningList":  "the warnings",
 	"fieldNotes":   "a field's messages",
 	"quantity":     "an input",
-	"unitPicker":   "a unit picker",
+	"unitOptions":  "a unit picker",
+	"noteFor":      "a field's messages",
 	"choice":       "a picker",
 	"plain":        "an input",
 	"toggle":       "a switch",
@@ -187,7 +188,7 @@ func (s *sheet) fallbackSheet() app.UI {
 			app.Label().For(id).Class("lbl").Text(labelFor(p)),
 			app.Input().Type("text").ID(id).Class("box wide").
 				Attr("autocomplete", "off").Attr("spellcheck", "false").
-				Value(s.scen.Get(p)).OnInput(s.onBox(p)),
+				Value(s.scen.Get(p)).OnInput(s.onBox(p), app.EventScope(p)),
 		))
 	}
 	return app.Div().ID("sheet").Class("sheet fallback").Body(

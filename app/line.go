@@ -481,11 +481,11 @@ func (s *sheet) segmentCard(n, count int) app.UI {
 	}
 	ctl := app.Div().Class("segctl").Body(
 		app.Button().Type("button").ID("seg-up-"+num).Class("step").Aria("label", "move segment "+num+" up").
-			Disabled(n == 1).Text("↑").OnClick(s.onSegMove(n, -1)),
+			Disabled(n == 1).Text("↑").OnClick(s.onSegMove(n, -1), app.EventScope(n, -1)),
 		app.Button().Type("button").ID("seg-down-"+num).Class("step").Aria("label", "move segment "+num+" down").
-			Disabled(n == count).Text("↓").OnClick(s.onSegMove(n, +1)),
+			Disabled(n == count).Text("↓").OnClick(s.onSegMove(n, +1), app.EventScope(n, +1)),
 		app.Button().Type("button").ID("seg-del-"+num).Class("step").Aria("label", "remove segment "+num).
-			Text("✕").OnClick(s.onSegRemove(n)),
+			Text("✕").OnClick(s.onSegRemove(n), app.EventScope(n)),
 	)
 	body := []app.UI{
 		app.Div().Class("seghead").Body(

@@ -239,12 +239,12 @@ func (s *sheet) dataSheetCard() app.UI {
 				app.Input().Type("text").ID("in-"+c.param+"-"+strconv.Itoa(i)).Class(classIf("box cell", bad, "bad")).
 					Attr("inputmode", "decimal").Attr("autocomplete", "off").Attr("spellcheck", "false").
 					Aria("label", c.name+", point "+num).Aria("invalid", bad).
-					Value(cells[c.param][i]).OnInput(s.onCell(c.param, i)),
+					Value(cells[c.param][i]).OnInput(s.onCell(c.param, i), app.EventScope(c.param, i)),
 			))
 		}
 		tr = append(tr, app.Td().Body(
 			app.Button().Type("button").Class("step").ID("row-del-"+num).Aria("label", "remove point "+num).
-				Disabled(n <= minRows).Text("✕").OnClick(s.onRowRemove(i)),
+				Disabled(n <= minRows).Text("✕").OnClick(s.onRowRemove(i), app.EventScope(i)),
 		))
 		rows = append(rows, app.Tr().Body(tr...))
 	}

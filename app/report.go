@@ -67,7 +67,7 @@ func (s *sheet) inputValue(p string) string {
 	case "name":
 		return raw
 	}
-	if cs := scenario.Choices(p); len(cs) > 0 {
+	if cs := choicesOf(p); len(cs) > 0 {
 		for _, c := range cs {
 			if c.Value == raw {
 				if strings.EqualFold(c.Label, raw) {

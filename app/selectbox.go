@@ -18,6 +18,9 @@ import (
 //     all, unless its list or its choice changed;
 //   - the lists are kept once built (choicesOf, unitChoicesOf): they depend
 //     on the parameter alone.
+//
+// The inputs around the pickers and the top bar are components too
+// (parts.go).
 
 // selectBox is a <select> drawn as a component.
 type selectBox struct {
@@ -46,7 +49,7 @@ func (b *selectBox) Render() app.UI {
 	if b.Unit {
 		h = b.S.onPick(b.Param)
 	}
-	sel := app.Select().ID(b.ID).Class(b.Class).OnChange(h)
+	sel := app.Select().ID(b.ID).Class(b.Class).OnChange(h, app.EventScope(b.Param, b.Unit))
 	if b.Label != "" {
 		sel = sel.Aria("label", b.Label)
 	}

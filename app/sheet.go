@@ -231,7 +231,14 @@ func (s *sheet) onBox(p string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
 		defer s.contain("recalculating after an edit to " + labelFor(p))
 		s.box[p] = ctx.JSSrc().Get("value").String()
+		before := s.scen.Get(p)
 		s.store(p)
+		if s.scen.Get(p) == before {
+			// Only the box changed (a space, a unit picked once a number is
+			// typed): the scenario, its result and the link stay as they are.
+			s.copyNote = ""
+			return
+		}
 		s.changed()
 	}
 }
