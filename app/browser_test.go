@@ -19,6 +19,8 @@ import (
 
 	"github.com/chromedp/cdproto/emulation"
 	"github.com/chromedp/chromedp"
+
+	"fieldhead/app/internal/headless"
 )
 
 // The browser test drives the built site in headless Chromium: the page and
@@ -70,19 +72,7 @@ func TestBrowser(t *testing.T) {
 	defer srv.Close()
 
 	alloc, cancelAlloc := chromedp.NewExecAllocator(context.Background(),
-		chromedp.ExecPath(chrome),
-		chromedp.Headless,
-		chromedp.NoSandbox,
-		chromedp.DisableGPU,
-		chromedp.NoFirstRun,
-		chromedp.NoDefaultBrowserCheck,
-		chromedp.Flag("disable-background-networking", true),
-		chromedp.Flag("disable-component-update", true),
-		chromedp.Flag("disable-sync", true),
-		chromedp.Flag("disable-quic", true),
-		chromedp.UserDataDir(t.TempDir()),
-		chromedp.WindowSize(1024, 768),
-	)
+		headless.Options(chrome, t.TempDir(), 1024, 768)...)
 	defer cancelAlloc()
 	browser, cancelBrowser := chromedp.NewContext(alloc)
 	defer cancelBrowser()

@@ -18,6 +18,8 @@ import (
 	"github.com/chromedp/cdproto/network"
 	"github.com/chromedp/cdproto/page"
 	"github.com/chromedp/chromedp"
+
+	"fieldhead/app/internal/headless"
 )
 
 // Shared pieces of the browser checks in security_test.go, offline_test.go,
@@ -97,18 +99,7 @@ func newTab(t *testing.T) *tab {
 		needBrowser(t, "no Chromium found: install it with `apt-get install chromium` or set CHROMIUM")
 	}
 	alloc, cancelAlloc := chromedp.NewExecAllocator(context.Background(),
-		chromedp.ExecPath(chrome),
-		chromedp.Headless,
-		chromedp.NoSandbox,
-		chromedp.DisableGPU,
-		chromedp.NoFirstRun,
-		chromedp.NoDefaultBrowserCheck,
-		chromedp.Flag("disable-background-networking", true),
-		chromedp.Flag("disable-component-update", true),
-		chromedp.Flag("disable-sync", true),
-		chromedp.Flag("disable-quic", true),
-		chromedp.WindowSize(1024, 768),
-	)
+		headless.Options(chrome, "", 1024, 768)...)
 	t.Cleanup(cancelAlloc)
 	browser, cancelBrowser := chromedp.NewContext(alloc)
 	t.Cleanup(cancelBrowser)

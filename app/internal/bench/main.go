@@ -65,6 +65,8 @@ import (
 	"github.com/chromedp/cdproto/network"
 	"github.com/chromedp/cdproto/page"
 	"github.com/chromedp/chromedp"
+
+	"fieldhead/app/internal/headless"
 	"github.com/chromedp/chromedp/kb"
 )
 
@@ -315,19 +317,7 @@ func newSession() (*browserSession, error) {
 		return nil, err
 	}
 	alloc, cancelAlloc := chromedp.NewExecAllocator(context.Background(),
-		chromedp.ExecPath(path),
-		chromedp.Headless,
-		chromedp.NoSandbox,
-		chromedp.DisableGPU,
-		chromedp.NoFirstRun,
-		chromedp.NoDefaultBrowserCheck,
-		chromedp.Flag("disable-background-networking", true),
-		chromedp.Flag("disable-component-update", true),
-		chromedp.Flag("disable-sync", true),
-		chromedp.Flag("disable-quic", true),
-		chromedp.UserDataDir(profile),
-		chromedp.WindowSize(1024, 768),
-	)
+		headless.Options(path, profile, 1024, 768)...)
 	tab, cancelTab := chromedp.NewContext(alloc)
 	s := &browserSession{ctx: tab}
 	s.cancel = func() {
