@@ -40,7 +40,7 @@ var paramLabels = map[string]string{
 func (s *sheet) toCheck(params ...string) string {
 	var names []string
 	for _, p := range params {
-		if s.res.Errors[p] != "" {
+		if s.res.Errors[p] != nil {
 			names = append(names, labelOf(p))
 		}
 	}
@@ -166,7 +166,7 @@ func (s *sheet) orphans() app.UI {
 	sort.Strings(keys)
 	var items []app.UI
 	for _, k := range keys {
-		items = append(items, app.Li().Text(s.res.Errors[k]))
+		items = append(items, app.Li().Text(s.res.Errors[k].Error()))
 	}
 	return app.Div().Class("banner").ID("other-errors").Attr("role", "alert").Body(
 		app.Span().Class("tag").Text("Check"),

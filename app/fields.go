@@ -15,7 +15,10 @@ var unknowns = map[string]bool{"hp": true, "ht": true, "hf": true, "p1": true, "
 // the parameter (the field's own label already says which it is).
 func (s *sheet) message(p string) string {
 	m := s.res.Errors[p]
-	return strings.TrimPrefix(m, p+": ")
+	if m == nil {
+		return ""
+	}
+	return strings.TrimPrefix(m.Error(), p+": ")
 }
 
 // fieldNotes draws p's error and the warnings about p, in place.
@@ -32,7 +35,7 @@ func (s *sheet) quantity(p, label, hint string) app.UI {
 		return s.unknownField(p, label)
 	}
 	return &field{S: s, Kind: boxField, P: p, Label: label, Hint: hint, Box: s.box[p], Placeholder: placeholder(p),
-		Bad: s.res.Errors[p] != "", Note: s.noteFor(p), Numeric: true, Options: s.unitOptions(p)}
+		Bad: s.res.Errors[p] != nil, Note: s.noteFor(p), Numeric: true, Options: s.unitOptions(p)}
 }
 
 // unitOptions are the options of p's unit picker. When the box holds a
@@ -108,14 +111,14 @@ func (s *sheet) unknownField(p, label string) app.UI {
 func (s *sheet) choice(p, label string, blank string) app.UI {
 	s.shown[p] = true
 	return &field{S: s, Kind: choiceField, P: p, Label: label, Options: choiceOptions(p, s.scen.Get(p), blank),
-		Bad: s.res.Errors[p] != "", Note: s.noteFor(p)}
+		Bad: s.res.Errors[p] != nil, Note: s.noteFor(p)}
 }
 
 // plain draws a text input without a unit (counts, coefficients, the title).
 func (s *sheet) plain(p, label, hint string, numeric bool) app.UI {
 	s.shown[p] = true
 	return &field{S: s, Kind: plainField, P: p, Label: label, Hint: hint, Box: s.box[p],
-		Bad: s.res.Errors[p] != "", Note: s.noteFor(p), Numeric: numeric}
+		Bad: s.res.Errors[p] != nil, Note: s.noteFor(p), Numeric: numeric}
 }
 
 // ref draws the gauge/absolute choice of a pressure as two buttons.

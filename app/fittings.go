@@ -133,7 +133,7 @@ func (s *sheet) fittingsFor(p string) app.UI {
 			}, app.EventScope(p)).Body(add...))
 	}
 	body = append(body,
-		app.Details().Class("astext").Open(!ok || s.res.Errors[p] != "").Body(
+		app.Details().Class("astext").Open(!ok || s.res.Errors[p] != nil).Body(
 			app.Summary().Text("Fittings as text"),
 			s.plain(p, "key:count, comma separated", "", false),
 		))

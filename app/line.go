@@ -282,7 +282,7 @@ func (s *sheet) lineWarnings() []app.UI {
 		_, _, seg := segmentOf(w.Param)
 		if (w.Topic == "line" || w.Topic == "" || seg) && !s.warned[w.Text] {
 			s.warned[w.Text] = true
-			items = append(items, app.Li().Text(w.Text))
+			items = append(items, app.Li().Text(w.String()))
 		}
 	}
 	if len(items) == 0 {
@@ -315,7 +315,7 @@ func (s *sheet) pumpPlace(n int) app.UI {
 	if !known {
 		opts = append(opts, app.Option().Value(cur).Selected(true).Text(cur+" (not a segment of this line)"))
 	}
-	bad := s.res.Errors["pafter"] != ""
+	bad := s.res.Errors["pafter"] != nil
 	body := []app.UI{
 		app.Label().For("in-pafter").Class("lbl").Body(app.Text("Pump position"), hintUI("(for the profile and the suction side of NPSH)")),
 		app.Select().ID("in-pafter").Class(classIf("pick", bad, "bad")).OnChange(s.onChoice("pafter")).Body(opts...),

@@ -234,7 +234,7 @@ func (s *sheet) dataSheetCard() app.UI {
 		num := strconv.Itoa(i + 1)
 		tr := []app.UI{app.Th().Scope("row").Text(num)}
 		for _, c := range cols {
-			bad := s.res.Errors[c.param] != ""
+			bad := s.res.Errors[c.param] != nil
 			tr = append(tr, app.Td().Body(
 				app.Input().Type("text").ID("in-"+c.param+"-"+strconv.Itoa(i)).Class(classIf("box cell", bad, "bad")).
 					Attr("inputmode", "decimal").Attr("autocomplete", "off").Attr("spellcheck", "false").

@@ -258,7 +258,7 @@ func (s *sheet) reportResults() app.UI {
 func (s *sheet) reportWarnings() app.UI {
 	var items []app.UI
 	for _, w := range s.warnings() {
-		items = append(items, app.Li().Text(w.Text))
+		items = append(items, app.Li().Text(w.String()))
 	}
 	if len(items) == 0 {
 		return app.Section().Class("card rsec").ID("report-warnings").Body(

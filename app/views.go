@@ -200,7 +200,7 @@ func (s *sheet) warnings() []scenario.Warning {
 		for _, w := range b.Warnings {
 			if !seen[w.Text] {
 				seen[w.Text] = true
-				out = append(out, scenario.Warning{Param: w.Field, Topic: "balance", Text: w.Text})
+				out = append(out, scenario.Warning{Param: w.Field, Topic: "balance", Text: w.Text, Figures: w.Figures})
 			}
 		}
 	}
@@ -218,7 +218,7 @@ func (s *sheet) warningList(topics ...string) []app.UI {
 	for _, w := range s.warnings() {
 		if want[w.Topic] && !s.warned[w.Text] {
 			s.warned[w.Text] = true
-			items = append(items, app.Li().Text(w.Text))
+			items = append(items, app.Li().Text(w.String()))
 		}
 	}
 	if len(items) == 0 {

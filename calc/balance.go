@@ -127,12 +127,6 @@ type BudgetItem struct {
 	Pressure float64 // Pa
 }
 
-// Warning is a caution about a result; Field names the input it concerns.
-type Warning struct {
-	Field string
-	Text  string
-}
-
 // BalanceResult is a solved balance.
 type BalanceResult struct {
 	Solve Unknown
@@ -215,8 +209,8 @@ func (b Balance) Solve() (BalanceResult, error) {
 		if lam, _, err := b.solveFor(boundLaminar); err == nil {
 			res.ValueLow, res.ValueHigh = math.Min(design, lam), math.Max(design, lam)
 		}
-		res.Warnings = append(res.Warnings, Warning{Field: b.Unknown.String(), Text: fmt.Sprintf(
-			"transitional flow (Re 2300–4000): the result lies between the laminar and turbulent bounds, shown as a range; the design value uses the turbulent bound")})
+		res.Warnings = append(res.Warnings, warnf(b.Unknown.String(),
+			"transitional flow (Re 2300–4000): the result lies between the laminar and turbulent bounds, shown as a range; the design value uses the turbulent bound"))
 	}
 	return res, nil
 }
@@ -286,11 +280,11 @@ func (b Balance) check() error {
 		v     float64
 	}{{"d1", b.In.D}, {"d2", b.Out.D}} {
 		if d.v > 0 && d.v < minDiameter {
-			return fieldErrorf(d.field, "a diameter of %.3g m is below the %.3g m Fieldhead accepts; check the unit", d.v, minDiameter)
+			return fieldErrorf(d.field, "a diameter of %v is below the %v Fieldhead accepts; check the unit", Fig(d.v, Length), Fig(minDiameter, Length))
 		}
 	}
 	if fl.Density < minDensity || fl.Density > maxDensity {
-		return fieldErrorf("rho", "a density of %.3g kg/m³ is outside the %g to %g kg/m³ of liquids", fl.Density, minDensity, maxDensity)
+		return fieldErrorf("rho", "a density of %v is outside the %v to %v of liquids", Fig(fl.Density, Density), Fig(minDensity, Density), Fig(maxDensity, Density))
 	}
 	if b.In.D < 0 {
 		return fieldErrorf("d1", "the diameter must be positive")
@@ -356,7 +350,7 @@ func (b Balance) at(q float64, bd bound) (state, error) {
 			}
 			ps.Alpha = a
 		case !ps.HasRegime && ps.Velocity != 0 && b.Alpha == AlphaFromRegime:
-			st.warn = append(st.warn, Warning{Field: "d" + field[1:], Text: "α taken as 1 (turbulent): give the diameter at this point to find its regime"})
+			st.warn = append(st.warn, warnf("d"+field[1:], "α taken as 1 (turbulent): give the diameter at this point to find its regime"))
 		}
 		ps.PressureHead = (p.P - b.SitePressure) / (rho * g)
 		ps.VelocityHead = ps.Alpha * ps.Velocity * ps.Velocity / (2 * g)
@@ -479,7 +473,7 @@ func (b Balance) solveFlow(bd bound) (float64, state, error) {
 		if f(qmin) < 0 {
 			return 0, state{}, fieldErrorf("q", "no flow from point 1 to point 2 is possible: even at almost no flow the head at point 1 (with any pump) is below what point 2 needs")
 		}
-		return 0, state{}, fieldErrorf("q", "no solution in range: even at %.3g m³/s (30 m/s in the narrowest pipe) the head at point 1 exceeds what the line uses; check the inputs", qmax)
+		return 0, state{}, fieldErrorf("q", "no solution in range: even at %v (%v in the narrowest pipe) the head at point 1 exceeds what the line uses; check the inputs", Fig(qmax, Flow), Fig(30, Velocity))
 	}
 	if err != nil {
 		return 0, state{}, fieldErrorf("q", "no solution found: %v", err)
@@ -492,7 +486,7 @@ func (b Balance) solveFlow(bd bound) (float64, state, error) {
 	// switching at the laminar/turbulent limit); a real root has a small
 	// residual.
 	if r := b.residual(st); math.Abs(r) > 1e-6*(1+math.Abs(st.in.TotalHead)+math.Abs(st.out.TotalHead)) {
-		return 0, st, fieldErrorf("q", "no steady flow closes the balance: it jumps across the laminar–turbulent limit near %.4g m³/s", q)
+		return 0, st, fieldErrorf("q", "no steady flow closes the balance: it jumps across the laminar–turbulent limit near %v", Fig(q, Flow))
 	}
 	return q, st, nil
 }
@@ -534,7 +528,7 @@ func (b Balance) result(v float64, st state) BalanceResult {
 	r.Warnings = append(r.Warnings, st.warn...)
 	if st.run != nil {
 		for _, w := range st.run.Warnings {
-			r.Warnings = append(r.Warnings, Warning{Field: "l", Text: w})
+			r.Warnings = append(r.Warnings, warnf("l", "%s", w))
 		}
 	}
 	if st.line != nil {
@@ -585,23 +579,23 @@ func (b Balance) result(v float64, st state) BalanceResult {
 
 	switch {
 	case b.Unknown == SolvePumpHead && v < 0:
-		r.Warnings = append(r.Warnings, Warning{Field: "hp", Text: "the pump head comes out negative: no pump is needed, point 1 alone drives this flow (a valve or turbine would have to take the surplus)"})
+		r.Warnings = append(r.Warnings, warnf("hp", "the pump head comes out negative: no pump is needed, point 1 alone drives this flow (a valve or turbine would have to take the surplus)"))
 	case b.Unknown == SolveTurbineHead && v < 0:
-		r.Warnings = append(r.Warnings, Warning{Field: "ht", Text: "the turbine head comes out negative: at this flow the line cannot drive a turbine; it needs a pump"})
+		r.Warnings = append(r.Warnings, warnf("ht", "the turbine head comes out negative: at this flow the line cannot drive a turbine; it needs a pump"))
 	case b.Unknown == SolveFrictionHead && v < 0:
-		r.Warnings = append(r.Warnings, Warning{Field: "hf", Text: "the friction head comes out negative, which no real line does: check the readings and the direction of flow"})
+		r.Warnings = append(r.Warnings, warnf("hf", "the friction head comes out negative, which no real line does: check the readings and the direction of flow"))
 	}
 	pv := b.Fluid.VapourPressure
 	for i, p := range []PointState{r.In, r.Out} {
 		n := fmt.Sprint(i + 1)
 		switch {
 		case p.P <= 0:
-			r.Warnings = append(r.Warnings, Warning{Field: "p" + n, Text: "the absolute pressure at this point is zero or negative, which a liquid cannot sustain: the column breaks and the liquid vaporises"})
+			r.Warnings = append(r.Warnings, warnf("p"+n, "the absolute pressure at this point is zero or negative, which a liquid cannot sustain: the column breaks and the liquid vaporises"))
 		case pv > 0 && p.P <= pv:
-			r.Warnings = append(r.Warnings, Warning{Field: "p" + n, Text: fmt.Sprintf("the absolute pressure at this point (%.4g kPa) is at or below the liquid's vapour pressure (%.4g kPa): expect cavitation or flashing", p.P/1e3, pv/1e3)})
+			r.Warnings = append(r.Warnings, warnf("p"+n, "the absolute pressure at this point (%v absolute) is at or below the liquid's vapour pressure (%v): expect cavitation or flashing", Fig(p.P, Pressure), Fig(pv, Pressure)))
 		}
 		if v := math.Abs(p.Velocity); v > 6 {
-			r.Warnings = append(r.Warnings, Warning{Field: "v" + n, Text: fmt.Sprintf("a velocity of %.3g m/s is unusually high for a liquid line (common practice keeps below about 3 m/s): erosion, noise and water-hammer risk", v)})
+			r.Warnings = append(r.Warnings, warnf("v"+n, "a velocity of %v is unusually high for a liquid line (common practice keeps below about %v): erosion, noise and water-hammer risk", Fig(v, Velocity), Fig(3, Velocity)))
 		}
 	}
 	return r

@@ -44,6 +44,11 @@ func TestBrent(t *testing.T) {
 	if _, err := brent(func(x float64) float64 { return x*x + 1 }, -1, 1, 1e-12); !errors.Is(err, errNoBracket) {
 		t.Errorf("no root: got %v, want errNoBracket", err)
 	}
+	// A tolerance no interval can meet (below zero) runs out the iteration
+	// limit: an error, not the last iterate (by construction).
+	if x, err := brent(func(x float64) float64 { return x*x - 2 }, 0, 2, -1); !errors.Is(err, errNoConvergence) {
+		t.Errorf("unreachable tolerance: got %v, %v; want errNoConvergence", x, err)
+	}
 }
 
 // TestBalanceTorricelli: an open tank emptying through a short nozzle,

@@ -1,7 +1,6 @@
 package calc
 
 import (
-	"fmt"
 	"math"
 )
 
@@ -76,9 +75,9 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	case !finite(fl.Density) || !(fl.Density > 0):
 		return FieldCheck{}, fieldErrorf("rho", "the liquid density must be a positive number")
 	case !finite(r.Ps) || r.Ps < fieldVacuum:
-		return FieldCheck{}, fieldErrorf("ps", "the suction gauge reading must be a finite gauge pressure not below full vacuum (about −101 kPa), got %g Pa", r.Ps)
+		return FieldCheck{}, fieldErrorf("ps", "the suction gauge reading must be a finite gauge pressure not below full vacuum, got %v", Fig(r.Ps, Pressure))
 	case !finite(r.Pd) || r.Pd < fieldVacuum:
-		return FieldCheck{}, fieldErrorf("pd", "the discharge gauge reading must be a finite gauge pressure not below full vacuum (about −101 kPa), got %g Pa", r.Pd)
+		return FieldCheck{}, fieldErrorf("pd", "the discharge gauge reading must be a finite gauge pressure not below full vacuum, got %v", Fig(r.Pd, Pressure))
 	case !finite(r.Zs):
 		return FieldCheck{}, fieldErrorf("zs", "the suction gauge's height must be a finite number")
 	case !finite(r.Zd):
@@ -90,7 +89,7 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	case !finite(r.Q) || !(r.Q > 0):
 		return FieldCheck{}, fieldErrorf("qm", "give the measured flow (above zero)")
 	case !finite(r.PowerIn) || r.PowerIn < 0:
-		return FieldCheck{}, fieldErrorf("pin", "the measured electrical input must be zero (not measured) or positive, got %g W", r.PowerIn)
+		return FieldCheck{}, fieldErrorf("pin", "the measured electrical input must be zero (not measured) or positive, got %v", Fig(r.PowerIn, Power))
 	}
 	g := StandardGravity
 	rhog := fl.Density * g
@@ -103,15 +102,15 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	fc.Head = fc.PressureHead + fc.ElevationHead + fc.VelocityHead
 	fc.HydraulicPower = rhog * r.Q * fc.Head
 	if fc.Head <= 0 {
-		fc.Warnings = append(fc.Warnings, Warning{Field: "pd", Text: fmt.Sprintf("the readings give a pump head of %.3g m, which a running pump does not: check that the gauges are the right way round and read in the same units", fc.Head)})
+		fc.Warnings = append(fc.Warnings, warnf("pd", "the readings give a pump head of %v, which a running pump does not: check that the gauges are the right way round and read in the same units", Fig(fc.Head, Length)))
 	}
 	if r.PowerIn > 0 {
 		fc.Efficiency = fc.HydraulicPower / r.PowerIn
 		switch {
 		case fc.Efficiency > 1:
-			fc.Warnings = append(fc.Warnings, Warning{Field: "pin", Text: fmt.Sprintf("the wire-to-water efficiency comes out at %.0f %%, above 100 %%: the readings are inconsistent (check the flow, the gauges and the power reading)", fc.Efficiency*100)})
+			fc.Warnings = append(fc.Warnings, warnf("pin", "the wire-to-water efficiency comes out at %.0f %%, above 100 %%: the readings are inconsistent (check the flow, the gauges, the power reading and its unit)", fc.Efficiency*100))
 		case fc.Efficiency < FieldEfficiencyLow && fc.Head > 0:
-			fc.Warnings = append(fc.Warnings, Warning{Field: "pin", Text: fmt.Sprintf("the wire-to-water efficiency is only %.0f %% (below %.0f %%): look for wear, a throttled or recirculating pump, a motor problem, or a reading error", fc.Efficiency*100, FieldEfficiencyLow*100)})
+			fc.Warnings = append(fc.Warnings, warnf("pin", "the wire-to-water efficiency is only %.0f %% (below %.0f %%): look for wear, a throttled or recirculating pump, a motor problem, or a reading error", fc.Efficiency*100, FieldEfficiencyLow*100))
 		}
 	}
 	if c != nil {
@@ -125,7 +124,7 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 				fc.CurveEfficiency = e
 			}
 		} else {
-			fc.Warnings = append(fc.Warnings, Warning{Field: "qm", Text: fmt.Sprintf("the measured flow (%.4g m³/s) lies outside the data sheet's flows (%.4g to %.4g m³/s): no curve head to compare with", r.Q, c.MinFlow(), c.MaxFlow())})
+			fc.Warnings = append(fc.Warnings, warnf("qm", "the measured flow (%v) lies outside the data sheet's flows (%v to %v): no curve head to compare with", Fig(r.Q, Flow), Fig(c.MinFlow(), Flow), Fig(c.MaxFlow(), Flow)))
 		}
 	}
 	return fc, nil

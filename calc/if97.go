@@ -168,7 +168,7 @@ func if97Region1DensityCore(tK, pPa float64) float64 {
 // extrapolated.
 func IF97Region1Density(tK, pPa float64) (float64, error) {
 	if math.IsNaN(tK) || tK < if97Tmin || tK > if97R1Tmax {
-		return 0, fieldErrorf("t", "temperature must be between %g K and %g K for IAPWS-IF97 region 1 (liquid water); got %g K", if97Tmin, if97R1Tmax, tK)
+		return 0, fieldErrorf("t", "temperature must be between %v and %v for IAPWS-IF97 region 1 (liquid water); got %v", Fig(if97Tmin, Temperature), Fig(if97R1Tmax, Temperature), Fig(tK, Temperature))
 	}
 	if math.IsNaN(pPa) || pPa <= 0 || pPa > if97R1Pmax {
 		return 0, fieldErrorf("p", "absolute pressure must be above the vapour pressure and at most %g MPa for IAPWS-IF97 region 1; got %g Pa", if97R1Pmax/1e6, pPa)
@@ -216,7 +216,7 @@ func if97SaturationPressureCore(tK float64) float64 {
 // result is a *FieldError naming "t".
 func SaturationPressure(tK float64) (float64, error) {
 	if math.IsNaN(tK) || tK < if97Tmin || tK > if97Tcrit {
-		return 0, fieldErrorf("t", "temperature must be between %g K and %g K for the IAPWS-IF97 saturation line; got %g K", if97Tmin, if97Tcrit, tK)
+		return 0, fieldErrorf("t", "temperature must be between %v and %v for the IAPWS-IF97 saturation line; got %v", Fig(if97Tmin, Temperature), Fig(if97Tcrit, Temperature), Fig(tK, Temperature))
 	}
 	return if97SaturationPressureCore(tK), nil
 }

@@ -4,7 +4,6 @@ import (
 	"errors"
 	"fmt"
 	"math"
-	"strconv"
 )
 
 // MaxSegments is the largest number of segments a Line may have.
@@ -48,34 +47,23 @@ type LineResult struct {
 	MajorLoss, MinorLoss, TransitionLoss float64
 }
 
-// segmentField maps a field named by Run.Evaluate to the share-link
-// parameter of segment i (0-based): "length" becomes "s1.l", "d" "s1.d",
-// "method" "s1.fm", and so on. Liquid and flow fields are not per segment
-// and come back empty.
-func segmentField(i int, field string) string {
-	switch field {
-	case "length":
-		field = "l"
-	case "method":
-		field = "fm"
-	case "d", "eps", "fit", "k", "chw", "z":
-	default:
-		return ""
-	}
-	return "s" + strconv.Itoa(i+1) + "." + field
-}
-
-// wrapSegmentError renames the field of a segment's *FieldError after the
-// segment, and says which segment a liquid or flow error came from.
+// wrapSegmentError marks a segment's *FieldError with the segment it came
+// from (i is 0-based) when the field is the segment's own (its length,
+// size, wall, fittings); a liquid or flow error keeps its field and says
+// which segment it arose in.
 func wrapSegmentError(i int, err error) error {
 	var fe *FieldError
 	if !errors.As(err, &fe) {
 		return fmt.Errorf("segment %d: %w", i+1, err)
 	}
-	if f := segmentField(i, fe.Field); f != "" {
-		return &FieldError{Field: f, Msg: fe.Msg}
+	c := *fe
+	switch fe.Field {
+	case "length", "d", "eps", "fit", "k", "method", "chw", "z":
+		c.Segment = i + 1
+	default:
+		c.Msg = fmt.Sprintf("segment %d: %s", i+1, fe.Msg)
 	}
-	return &FieldError{Field: fe.Field, Msg: fmt.Sprintf("segment %d: %s", i+1, fe.Msg)}
+	return &c
 }
 
 // transitionLoss is the head lost where the diameter changes from d1 (mean
@@ -106,7 +94,7 @@ func (l Line) check() error {
 	}
 	for i, s := range l.Segments {
 		if math.IsNaN(s.EndZ) || math.IsInf(s.EndZ, 0) {
-			return fieldErrorf(segmentField(i, "z"), "the elevation of the segment's end must be a finite number")
+			return &FieldError{Field: "z", Segment: i + 1, Msg: "the elevation of the segment's end must be a finite number"}
 		}
 	}
 	return nil
@@ -198,12 +186,12 @@ func (l Line) minDiameter() float64 {
 // naming its segment; at zero flow one warning stands for all.
 func lineWarnings(lr *LineResult, q float64) []Warning {
 	if q == 0 {
-		return []Warning{{Field: "q", Text: "no flow: all losses in the line are zero"}}
+		return []Warning{warnf("q", "no flow: all losses in the line are zero")}
 	}
 	var out []Warning
 	for i, s := range lr.Segments {
 		for _, w := range s.Warnings {
-			out = append(out, Warning{Field: segmentField(i, "d"), Text: "segment " + strconv.Itoa(i+1) + ": " + w})
+			out = append(out, Warning{Field: "d", Segment: i + 1, Text: w})
 		}
 	}
 	return out

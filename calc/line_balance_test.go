@@ -232,11 +232,11 @@ func TestBalanceLineErrors(t *testing.T) {
 		{"pump after negative", func(b *Balance) { b.PumpAfter = -1 }, "pafter"},
 		{"solve hf", func(b *Balance) { b.Unknown = SolveFrictionHead }, "solve"},
 		{"no segments", func(b *Balance) { b.Line = &Line{} }, "line"},
-		{"bad segment", func(b *Balance) { b.Line = &Line{Segments: []Segment{{Run: Run{Length: 10}}}} }, "s1.d"},
+		{"bad segment", func(b *Balance) { b.Line = &Line{Segments: []Segment{{Run: Run{Length: 10}}}} }, "1:d"},
 		{"bad segment, flow", func(b *Balance) {
 			b.Line = &Line{Segments: []Segment{{Run: Run{Length: 10}}}}
 			b.Unknown = SolveFlow
-		}, "s1.d"},
+		}, "1:d"},
 		{"no viscosity", func(b *Balance) { b.Fluid.Viscosity = 0 }, "mu"},
 	}
 	for _, tc := range tests {
@@ -244,7 +244,7 @@ func TestBalanceLineErrors(t *testing.T) {
 		tc.mod(&b)
 		_, err := b.Solve()
 		var fe *FieldError
-		if !errors.As(err, &fe) || fe.Field != tc.field {
+		if !errors.As(err, &fe) || segField(fe) != tc.field {
 			t.Errorf("%s: got %v, want a *FieldError for %q", tc.name, err, tc.field)
 		}
 	}
@@ -269,7 +269,7 @@ func TestProfileVapourWarning(t *testing.T) {
 	}
 	found := false
 	for _, w := range r.Warnings {
-		if w.Field == "s1.z" && strings.Contains(w.Text, "vapour pressure") {
+		if w.Segment == 1 && w.Field == "z" && strings.Contains(w.Text, "vapour pressure") {
 			found = true
 		}
 	}

@@ -1,7 +1,5 @@
 package calc
 
-import "fmt"
-
 // ProfileNode is one point of the energy and hydraulic grade lines along a
 // line, for the profile chart. Heads are on the gauge basis of
 // PointState.TotalHead: pressure head above the site pressure plus
@@ -80,9 +78,10 @@ func (b Balance) profile(r *BalanceResult, lr *LineResult) ([]ProfileNode, []War
 		nodes = append(nodes, start, end)
 		for _, n := range [2]ProfileNode{start, end} {
 			if n.Pressure <= pv || n.Pressure <= 0 {
-				warn = append(warn, Warning{Field: segmentField(i, "z"), Text: fmt.Sprintf(
-					"segment %d: the absolute pressure in the pipe falls to %.4g kPa at %.4g m from point 1, at or below the liquid's vapour pressure (%.4g kPa): the liquid column would break there (vapour pockets, cavitation); lower the pipe, reduce the losses upstream or raise the pressure",
-					i+1, n.Pressure/1e3, n.Distance, pv/1e3)})
+				w := warnf("z", "the absolute pressure in the pipe falls to %v absolute at %v from point 1, at or below the liquid's vapour pressure (%v): the liquid column would break there (vapour pockets, cavitation); lower the pipe, reduce the losses upstream or raise the pressure",
+					Fig(n.Pressure, Pressure), Fig(n.Distance, Length), Fig(pv, Pressure))
+				w.Segment = i + 1
+				warn = append(warn, w)
 				break
 			}
 		}

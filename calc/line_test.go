@@ -209,14 +209,14 @@ func TestLineErrors(t *testing.T) {
 	}{
 		{"empty", Line{}, testLiquid, 0.01, "line"},
 		{"too many", Line{Segments: many}, testLiquid, 0.01, "line"},
-		{"length", Line{Segments: []Segment{ok, {Run: Run{Length: -1, Diameter: 0.1}}}}, testLiquid, 0.01, "s2.l"},
-		{"diameter", Line{Segments: []Segment{ok, {Run: Run{Length: 1}}}}, testLiquid, 0.01, "s2.d"},
-		{"roughness", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, Roughness: 0.01}}}}, testLiquid, 0.01, "s1.eps"},
-		{"fitting", Line{Segments: []Segment{ok, ok, {Run: Run{Length: 1, Diameter: 0.1, Fittings: []FittingCount{{"nosuch", 1}}}}}}, testLiquid, 0.01, "s3.fit"},
-		{"k", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, ExtraK: math.NaN()}}}}, testLiquid, 0.01, "s1.k"},
-		{"method", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, Method: 9}}}}, testLiquid, 0.01, "s1.fm"},
-		{"hazen c", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, Method: MethodHazenWilliams}}}}, testLiquid, 0.01, "s1.chw"},
-		{"end z", Line{Segments: []Segment{ok, {Run: ok.Run, EndZ: math.Inf(1)}}}, testLiquid, 0.01, "s2.z"},
+		{"length", Line{Segments: []Segment{ok, {Run: Run{Length: -1, Diameter: 0.1}}}}, testLiquid, 0.01, "2:length"},
+		{"diameter", Line{Segments: []Segment{ok, {Run: Run{Length: 1}}}}, testLiquid, 0.01, "2:d"},
+		{"roughness", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, Roughness: 0.01}}}}, testLiquid, 0.01, "1:eps"},
+		{"fitting", Line{Segments: []Segment{ok, ok, {Run: Run{Length: 1, Diameter: 0.1, Fittings: []FittingCount{{"nosuch", 1}}}}}}, testLiquid, 0.01, "3:fit"},
+		{"k", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, ExtraK: math.NaN()}}}}, testLiquid, 0.01, "1:k"},
+		{"method", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, Method: 9}}}}, testLiquid, 0.01, "1:method"},
+		{"hazen c", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, Method: MethodHazenWilliams}}}}, testLiquid, 0.01, "1:chw"},
+		{"end z", Line{Segments: []Segment{ok, {Run: ok.Run, EndZ: math.Inf(1)}}}, testLiquid, 0.01, "2:z"},
 		{"viscosity", Line{Segments: []Segment{ok}}, Fluid{Density: 1000}, 0.01, "mu"},
 		{"flow", Line{Segments: []Segment{ok}}, testLiquid, -1, "q"},
 		{"flow NaN", Line{Segments: []Segment{ok}}, testLiquid, math.NaN(), "q"},
@@ -224,7 +224,8 @@ func TestLineErrors(t *testing.T) {
 	for _, tc := range tests {
 		_, err := tc.line.Evaluate(tc.fl, tc.q)
 		var fe *FieldError
-		if !errors.As(err, &fe) || fe.Field != tc.field {
+		// A segment's error names the segment and its field ("2:length").
+		if !errors.As(err, &fe) || segField(fe) != tc.field {
 			t.Errorf("%s: got %v, want a *FieldError for %q", tc.name, err, tc.field)
 		}
 	}
@@ -246,4 +247,13 @@ func TestLineLossThrough(t *testing.T) {
 	if lr.LossThrough(0) != 0 || lr.LossThrough(99) != lr.TotalLoss {
 		t.Errorf("LossThrough ends: %g, %g (total %g)", lr.LossThrough(0), lr.LossThrough(99), lr.TotalLoss)
 	}
+}
+
+// segField writes a FieldError's segment and field as "2:length", or the
+// field alone when no segment is named.
+func segField(fe *FieldError) string {
+	if fe.Segment > 0 {
+		return strconv.Itoa(fe.Segment) + ":" + fe.Field
+	}
+	return fe.Field
 }

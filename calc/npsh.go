@@ -87,15 +87,15 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 	case !finite(fl.VapourPressure) || fl.VapourPressure < 0:
 		return NPSHResult{}, fieldErrorf("pv", "the liquid's vapour pressure must be zero or positive (absolute)")
 	case !finite(in.SurfacePressure) || !(in.SurfacePressure > 0):
-		return NPSHResult{}, fieldErrorf("p1", "the pressure on the source surface must be a positive absolute pressure, got %g Pa", in.SurfacePressure)
+		return NPSHResult{}, fieldErrorf("p1", "the pressure on the source surface must be a positive absolute pressure, got %v absolute", Fig(in.SurfacePressure, Pressure))
 	case !finite(in.SurfaceZ):
 		return NPSHResult{}, fieldErrorf("z1", "the source surface's elevation must be a finite number")
 	case !finite(in.PumpZ):
 		return NPSHResult{}, fieldErrorf("zp", "the pump's elevation must be a finite number")
 	case !finite(in.SuctionLoss) || in.SuctionLoss < 0:
-		return NPSHResult{}, fieldErrorf("hs", "the suction-line loss must be zero or positive, got %g m", in.SuctionLoss)
+		return NPSHResult{}, fieldErrorf("hs", "the suction-line loss must be zero or positive, got %v", Fig(in.SuctionLoss, Length))
 	case !finite(in.NPSHr) || in.NPSHr < 0:
-		return NPSHResult{}, fieldErrorf("npshr", "the NPSH required must be zero (not given) or positive, got %g m", in.NPSHr)
+		return NPSHResult{}, fieldErrorf("npshr", "the NPSH required must be zero (not given) or positive, got %v", Fig(in.NPSHr, Length))
 	}
 	r := NPSHResult{Required: in.NPSHr}
 	r.Available = (in.SurfacePressure-fl.VapourPressure)/(fl.Density*StandardGravity) + in.SurfaceZ - in.PumpZ - in.SuctionLoss

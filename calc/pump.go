@@ -63,13 +63,13 @@ func FitPump(points []PumpPoint) (PumpCurve, error) {
 		k := i + 1
 		switch {
 		case !finite(p.Q) || p.Q < 0:
-			return PumpCurve{}, fieldErrorf("pq", "point %d: the flow must be zero or positive, got %g", k, p.Q)
+			return PumpCurve{}, fieldErrorf("pq", "point %d: the flow must be zero or positive, got %v", k, Fig(p.Q, Flow))
 		case i > 0 && !(p.Q > points[i-1].Q):
-			return PumpCurve{}, fieldErrorf("pq", "point %d: the flow (%g m³/s) must be above the previous point's (%g m³/s); list the points in order of rising flow, each flow once", k, p.Q, points[i-1].Q)
+			return PumpCurve{}, fieldErrorf("pq", "point %d: the flow (%v) must be above the previous point's (%v); list the points in order of rising flow, each flow once", k, Fig(p.Q, Flow), Fig(points[i-1].Q, Flow))
 		case !finite(p.H) || p.H < 0:
-			return PumpCurve{}, fieldErrorf("ph", "point %d: the head must be zero or positive, got %g", k, p.H)
+			return PumpCurve{}, fieldErrorf("ph", "point %d: the head must be zero or positive, got %v", k, Fig(p.H, Length))
 		case i > 0 && !(p.H < points[i-1].H):
-			return PumpCurve{}, fieldErrorf("ph", "point %d: the head (%g m) must be below the previous point's (%g m): the curve must fall with rising flow; a curve that rises or stays level is not accepted", k, p.H, points[i-1].H)
+			return PumpCurve{}, fieldErrorf("ph", "point %d: the head (%v) must be below the previous point's (%v): the curve must fall with rising flow; a curve that rises or stays level is not accepted", k, Fig(p.H, Length), Fig(points[i-1].H, Length))
 		}
 		effGiven = effGiven || p.Eff != 0
 		npshGiven = npshGiven || p.NPSHr != 0
@@ -100,7 +100,7 @@ func FitPump(points []PumpPoint) (PumpCurve, error) {
 		for i := c.npshStart; i < n; i++ {
 			p := points[i]
 			if !finite(p.NPSHr) || !(p.NPSHr > 0) {
-				return PumpCurve{}, fieldErrorf("pnpsh", "point %d: the NPSH required must be a positive number of metres, got %g; give it for every point or for none", i+1, p.NPSHr)
+				return PumpCurve{}, fieldErrorf("pnpsh", "point %d: the NPSH required must be positive, got %v; give it for every point or for none", i+1, Fig(p.NPSHr, Length))
 			}
 			y[i] = p.NPSHr
 		}

@@ -45,9 +45,9 @@ func OperatingPoint(c PumpCurve, b Balance) (OperatingResult, error) {
 	}
 	if ha < sa {
 		if qa == 0 {
-			return OperatingResult{}, fieldErrorf("ph", "the curves do not meet: the pump's shut-off head %.4g m is below the %.4g m the line needs at zero flow", ha, sa)
+			return OperatingResult{}, fieldErrorf("ph", "the curves do not meet: the pump's shut-off head %v is below the %v the line needs at zero flow", Fig(ha, Length), Fig(sa, Length))
 		}
-		return OperatingResult{}, fieldErrorf("ph", "the curves do not meet within the data sheet: at its first point (Q = %.4g m³/s) the pump's head %.4g m is already below the %.4g m the line needs; a point at lower flow may be missing", qa, ha, sa)
+		return OperatingResult{}, fieldErrorf("ph", "the curves do not meet within the data sheet: at its first point (Q = %v) the pump's head %v is already below the %v the line needs; a point at lower flow may be missing", Fig(qa, Flow), Fig(ha, Length), Fig(sa, Length))
 	}
 	hb, _ := c.Head(qb)
 	sb, _, err := b.systemHead(qb)
@@ -55,7 +55,7 @@ func OperatingPoint(c PumpCurve, b Balance) (OperatingResult, error) {
 		return OperatingResult{}, err
 	}
 	if hb > sb {
-		return OperatingResult{}, fieldErrorf("pq", "the curves do not meet within the data sheet: beyond its last point (Q = %.4g m³/s, where the pump still gives %.4g m against the %.4g m the line needs) the pump would run out; add a point or throttle", qb, hb, sb)
+		return OperatingResult{}, fieldErrorf("pq", "the curves do not meet within the data sheet: beyond its last point (Q = %v, where the pump still gives %v against the %v the line needs) the pump would run out; add a point or throttle", Fig(qb, Flow), Fig(hb, Length), Fig(sb, Length))
 	}
 	var evalErr error
 	f := func(q float64) float64 {
@@ -78,7 +78,7 @@ func OperatingPoint(c PumpCurve, b Balance) (OperatingResult, error) {
 	// Brent lands on a jump when the system curve is discontinuous (α or
 	// the friction factor switching at the laminar–turbulent limit).
 	if r := f(q); math.Abs(r) > 1e-6*(1+math.Abs(h)) {
-		return OperatingResult{}, fieldErrorf("q", "the curves do not meet cleanly: the system curve jumps across the laminar–turbulent limit near %.4g m³/s, where the pump curve crosses it", q)
+		return OperatingResult{}, fieldErrorf("q", "the curves do not meet cleanly: the system curve jumps across the laminar–turbulent limit near %v, where the pump curve crosses it", Fig(q, Flow))
 	}
 	orig.Unknown, orig.Q = SolvePumpHead, q
 	br, err := orig.Solve()

@@ -322,7 +322,7 @@ func TestOperatingPointNoMeet(t *testing.T) {
 	high := Balance{Fluid: testLiquid, SitePressure: 101325, In: Point{P: 101325}, Out: Point{P: 101325, Z: 60}, Line: pmKLine(10, 0.1)}
 	_, err = OperatingPoint(c, high)
 	var fe *FieldError
-	if !errors.As(err, &fe) || fe.Field != "ph" || !strings.Contains(fe.Msg, "shut-off head 48 m is below the 60 m") {
+	if !errors.As(err, &fe) || fe.Field != "ph" || !strings.Contains(fe.Error(), "shut-off head 48.00 m is below the 60.00 m") {
 		t.Errorf("lift above shut-off: %v", err)
 	}
 	easy := Balance{Fluid: testLiquid, SitePressure: 101325, In: Point{P: 101325}, Out: Point{P: 101325, Z: 5}, Line: pmKLine(1, 0.3)}

@@ -12,7 +12,9 @@ var errNoBracket = errors.New("root not bracketed")
 // Algorithms for Minimization without Derivatives, 1973, ch. 4): bisection
 // safeguarding inverse quadratic interpolation, so it converges for any
 // continuous f whose signs differ at the ends, and lands on the jump when f
-// is discontinuous there. tol is the absolute tolerance on x.
+// is discontinuous there. tol is the absolute tolerance on x. An interval
+// not narrowed to tol within 200 steps is an error (errNoConvergence), never
+// an unconverged root.
 func brent(f func(float64) float64, a, b, tol float64) (float64, error) {
 	fa, fb := f(a), f(b)
 	if math.IsNaN(fa) || math.IsNaN(fb) {
@@ -86,8 +88,12 @@ func brent(f func(float64) float64, a, b, tol float64) (float64, error) {
 			return 0, errors.New("function is not defined inside the range")
 		}
 	}
-	return b, nil
+	return b, errNoConvergence
 }
+
+// errNoConvergence is returned by brent when the tolerance is not reached
+// within its iteration limit; the root is then not reported at all.
+var errNoConvergence = errors.New("root not found to the tolerance within 200 iterations")
 
 // eps64 is the float64 machine epsilon.
 const eps64 = 2.220446049250313e-16

@@ -39,7 +39,7 @@ const (
 func Seawater(tK, pPa float64) (Fluid, error) {
 	switch {
 	case math.IsNaN(tK) || tK < SeawaterMinTemperature-waterTempSlack || tK > SeawaterMaxTemperature+waterTempSlack:
-		return Fluid{}, fieldErrorf("t", "seawater temperature must be between 0 °C and 40 °C (273.15 K to 313.15 K); got %s", formatKelvin(tK))
+		return Fluid{}, fieldErrorf("t", "seawater temperature must be between %v and %v; got %v", Fig(SeawaterMinTemperature, Temperature), Fig(SeawaterMaxTemperature, Temperature), Fig(tK, Temperature))
 	case tK < SeawaterMinTemperature:
 		tK = SeawaterMinTemperature
 	case tK > SeawaterMaxTemperature:
@@ -47,7 +47,7 @@ func Seawater(tK, pPa float64) (Fluid, error) {
 	}
 	pv := if97SaturationPressureCore(tK)
 	if math.IsNaN(pPa) || pPa < pv || pPa > SeawaterMaxPressure {
-		return Fluid{}, fieldErrorf("p", "absolute pressure for seawater must be between its vapour pressure (%.6g Pa at %s) and %g MPa; got %g Pa", pv, formatCelsius(tK), SeawaterMaxPressure/1e6, pPa)
+		return Fluid{}, fieldErrorf("p", "absolute pressure for seawater must be between its vapour pressure (%v at %v) and %v; got %v", Fig(pv, Pressure), Fig(tK, Temperature), Fig(SeawaterMaxPressure, Pressure), Fig(pPa, Pressure))
 	}
 	t := tK - 273.15 // °C
 	s := SeawaterSalinity

@@ -1,7 +1,6 @@
 package calc
 
 import (
-	"fmt"
 	"math"
 )
 
@@ -54,9 +53,9 @@ func Turbine(b Balance, eff float64) (TurbineResult, error) {
 	r.HydraulicPower = rhog * r.Q * r.NetHead
 	r.Power = r.HydraulicPower * eff
 	if r.GrossHead <= 0 {
-		r.Warnings = append(r.Warnings, Warning{Field: "z1", Text: fmt.Sprintf("the gross head is %.3g m: point 1 does not lie above point 2 in head, so there is nothing for a turbine to take", r.GrossHead)})
+		r.Warnings = append(r.Warnings, warnf("z1", "the gross head is %v: point 1 does not lie above point 2 in head, so there is nothing for a turbine to take", Fig(r.GrossHead, Length)))
 	} else if r.NetHead <= 0 {
-		r.Warnings = append(r.Warnings, Warning{Field: "q", Text: fmt.Sprintf("at this flow the line's losses (%.3g m) and the exit velocity head use up the whole gross head (%.3g m): no output; lower the flow or enlarge the pipe", r.Losses, r.GrossHead)})
+		r.Warnings = append(r.Warnings, warnf("q", "at this flow the line's losses (%v) and the exit velocity head use up the whole gross head (%v): no output; lower the flow or enlarge the pipe", Fig(r.Losses, Length), Fig(r.GrossHead, Length)))
 	}
 	return r, nil
 }
@@ -111,7 +110,7 @@ func BestTurbineFlow(b Balance, eff, qmax float64) (TurbineResult, error) {
 	b = b.lumped()
 	rhog := b.Fluid.Density * StandardGravity
 	if gross := (b.In.P-b.Out.P)/rhog + b.In.Z - b.Out.Z; gross <= 0 {
-		return TurbineResult{}, fieldErrorf("z1", "the gross head is %.3g m: point 1 must lie above point 2 in head for a turbine to give output", gross)
+		return TurbineResult{}, fieldErrorf("z1", "the gross head is %v: point 1 must lie above point 2 in head for a turbine to give output", Fig(gross, Length))
 	}
 	var evalErr error
 	net := func(q float64) float64 {
@@ -144,7 +143,7 @@ func BestTurbineFlow(b Balance, eff, qmax float64) (TurbineResult, error) {
 			return TurbineResult{}, evalErr
 		}
 		if hb > 0 {
-			return TurbineResult{}, fieldErrorf("q", "even at %.3g m³/s (30 m/s in the narrowest pipe) the line leaves head for the turbine: give the largest flow to search", qbig)
+			return TurbineResult{}, fieldErrorf("q", "even at %v (%v in the narrowest pipe) the line leaves head for the turbine: give the largest flow to search", Fig(qbig, Flow), Fig(30, Velocity))
 		}
 		q0, err := brent(net, qbig*1e-9, qbig, qbig*1e-13)
 		if evalErr != nil {

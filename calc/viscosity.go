@@ -95,7 +95,7 @@ func waterViscosityCore(tK, rho float64) float64 {
 // *FieldError naming "t" or "rho".
 func WaterViscosity(tK, rho float64) (float64, error) {
 	if math.IsNaN(tK) || tK < viscTmin || tK > viscTmax {
-		return 0, fieldErrorf("t", "temperature must be between %g K and %g K for the IAPWS 2008 viscosity formulation; got %g K", viscTmin, viscTmax, tK)
+		return 0, fieldErrorf("t", "temperature must be between %v and %v for the IAPWS 2008 viscosity formulation; got %v", Fig(viscTmin, Temperature), Fig(viscTmax, Temperature), Fig(tK, Temperature))
 	}
 	if math.IsNaN(rho) || math.IsInf(rho, 0) || rho <= 0 {
 		return 0, fieldErrorf("rho", "density must be a positive finite number in kg/m³; got %g", rho)

@@ -36,7 +36,7 @@ const (
 func Water(tK, pPa float64) (Fluid, error) {
 	switch {
 	case math.IsNaN(tK) || tK < WaterMinTemperature-waterTempSlack || tK > WaterMaxTemperature+waterTempSlack:
-		return Fluid{}, fieldErrorf("t", "water temperature must be between 0 °C and 100 °C (273.15 K to 373.15 K); got %s", formatKelvin(tK))
+		return Fluid{}, fieldErrorf("t", "water temperature must be between %v and %v; got %v", Fig(WaterMinTemperature, Temperature), Fig(WaterMaxTemperature, Temperature), Fig(tK, Temperature))
 	case tK < WaterMinTemperature:
 		tK = WaterMinTemperature
 	case tK > WaterMaxTemperature:
@@ -45,9 +45,9 @@ func Water(tK, pPa float64) (Fluid, error) {
 	ps := if97SaturationPressureCore(tK)
 	if math.IsNaN(pPa) || pPa < ps || pPa > WaterMaxPressure {
 		if !math.IsNaN(pPa) && pPa < ps {
-			return Fluid{}, fieldErrorf("p", "absolute pressure %g Pa is below the vapour pressure of water at %s (%.6g Pa): the water would boil; valid range is %.6g Pa to %g MPa absolute", pPa, formatCelsius(tK), ps, ps, WaterMaxPressure/1e6)
+			return Fluid{}, fieldErrorf("p", "absolute pressure %v is below the vapour pressure of water at %v (%v): the water would boil; valid range is %v to %v absolute", Fig(pPa, Pressure), Fig(tK, Temperature), Fig(ps, Pressure), Fig(ps, Pressure), Fig(WaterMaxPressure, Pressure))
 		}
-		return Fluid{}, fieldErrorf("p", "absolute pressure must be between the vapour pressure (%.6g Pa at %s) and %g MPa; got %g Pa", ps, formatCelsius(tK), WaterMaxPressure/1e6, pPa)
+		return Fluid{}, fieldErrorf("p", "absolute pressure must be between the vapour pressure (%v at %v) and %v; got %v", Fig(ps, Pressure), Fig(tK, Temperature), Fig(WaterMaxPressure, Pressure), Fig(pPa, Pressure))
 	}
 	rho := if97Region1DensityCore(tK, pPa)
 	return Fluid{

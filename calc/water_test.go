@@ -221,7 +221,7 @@ func ExampleWater() {
 	// viscosity 1.05268 mPa·s
 	// vapour pressure 2064.7 Pa
 	// kinematic viscosity 1.0542e-06 m²/s
-	// p: absolute pressure 1500 Pa is below the vapour pressure of water at 18 °C (2064.66 Pa): the water would boil; valid range is 2064.66 Pa to 10 MPa absolute
+	// p: absolute pressure 1.500 kPa is below the vapour pressure of water at 18.00 °C (2.065 kPa): the water would boil; valid range is 2.065 kPa to 10000 kPa absolute
 }
 
 func BenchmarkWater(b *testing.B) {

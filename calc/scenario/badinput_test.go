@@ -78,15 +78,19 @@ func TestBadLinks(t *testing.T) {
 			}
 			r := Evaluate(s)
 			if tc.param != "" {
-				m, ok := r.Errors[tc.param]
+				fe, ok := r.Errors[tc.param]
+				m := ""
+				if ok {
+					m = fe.Error()
+				}
 				if !ok {
 					t.Errorf("no message on %s (errors %v)", tc.param, r.Errors)
 				} else if !strings.HasPrefix(m, tc.param+":") || !strings.Contains(m, tc.msg) {
 					t.Errorf("message %q should name %s and say %q", m, tc.param, tc.msg)
 				}
 			}
-			for p, m := range r.Errors {
-				if !strings.HasPrefix(m, p+":") {
+			for p, fe := range r.Errors {
+				if m := fe.Error(); !strings.HasPrefix(m, p+":") {
 					t.Errorf("message %q on %s does not name its field", m, p)
 				}
 			}

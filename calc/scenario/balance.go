@@ -118,7 +118,7 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 		}
 	}
 	for _, w := range br.Warnings {
-		e.warn(w.Field, "balance", w.Text)
+		e.warnCalc("balance", w)
 	}
 	if run != nil && br.Run != nil {
 		run.RunResult = *br.Run
@@ -135,7 +135,7 @@ func (e *eval) pressure(param string, unknown, solve calc.Unknown, ok *bool) flo
 	}
 	text := e.s.Get(param)
 	if strings.TrimSpace(text) == "" {
-		e.fail(param, param+": "+missing[param])
+		e.fail(param, missingMsg(param))
 		*ok = false
 		return 0
 	}

@@ -6,8 +6,10 @@
 // (z2=38.5m, q=240gpm, p1=-18kPa). A value typed without a unit takes the
 // default unit of the chosen unit system (units=si or units=us); the default
 // is shown beside the field in the app, so it is never a hidden guess.
-// Parse keeps exactly what was typed in Scenario.Raw, so a bad value is
-// reported and kept, never dropped.
+// Parse keeps exactly what was typed (Scenario.Get returns it), so a bad
+// value is reported and kept, never dropped. Every parameter is described
+// once, in Table: its label, kind, dimension, default units, choices,
+// either/or group and the message asking for it when it is missing.
 //
 // # Parameters
 //

@@ -27,7 +27,7 @@ type eval struct {
 // It never fails as a whole: a bad or missing input is reported under its
 // parameter in Result.Errors and only the parts that need it are left nil.
 func Evaluate(s Scenario) Result {
-	res := Result{Errors: map[string]string{}}
+	res := Result{Errors: map[string]*calc.FieldError{}}
 	e := &eval{s: s, res: &res}
 	switch u := strings.TrimSpace(s.Get("units")); u {
 	case "", "si":
@@ -40,10 +40,8 @@ func Evaluate(s Scenario) Result {
 	if n := s.Get("name"); n != "" && (!printable(n) || len(n) > 200) {
 		e.fail("name", "the title must be plain text of at most 200 characters")
 	}
-	if v := s.Get("view"); v != "" && !oneOf(v, Choices("view")) {
-		e.fail("view", fmt.Sprintf("%q is not a view; use balance, convert or regime", v))
-	}
 
+	e.checkAll()
 	e.site()
 	e.liquid()
 	run := e.run()
@@ -86,46 +84,89 @@ func oneOf(v string, cs []Choice) bool {
 	return false
 }
 
-// fail records the first message for a parameter.
+// fail records the first problem with a parameter; msg may start with
+// the parameter's name ("q: …"), which is dropped.
 func (e *eval) fail(param, msg string) {
-	if !strings.HasPrefix(msg, param+":") {
-		msg = param + ": " + msg
-	}
-	if _, ok := e.res.Errors[param]; !ok {
-		e.res.Errors[param] = msg
+	e.record(&calc.FieldError{Field: param, Msg: strings.TrimPrefix(msg, param+": ")})
+}
+
+// record keeps the first problem recorded for its field.
+func (e *eval) record(fe *calc.FieldError) {
+	if _, ok := e.res.Errors[fe.Field]; !ok {
+		e.res.Errors[fe.Field] = fe
 	}
 }
 
-// failErr records an error, under the field it names when it is a *calc.FieldError.
+// failErr records an error under the parameter it concerns: the one a
+// *calc.FieldError names when that is a parameter of the link (a
+// segment's field under that segment's parameter), else param.
 func (e *eval) failErr(param string, err error) {
 	var fe *calc.FieldError
-	if errors.As(err, &fe) && fe.Field != "" {
-		if _, ok := known[fe.Field]; ok {
-			e.fail(fe.Field, err.Error())
-			return
-		}
-		// A field calc names internally ("re", "method"): report it under
-		// the parameter the user typed.
-		e.fail(param, param+": "+fe.Msg)
+	if !errors.As(err, &fe) {
+		e.fail(param, err.Error())
+		return
+	}
+	c := *fe
+	c.Field, c.Segment = param, 0
+	if f := linkName(fe.Field); fe.Segment > 0 && f != "" {
+		c.Field = SegmentParam(fe.Segment, f)
+	} else if _, ok := known[fe.Field]; ok && fe.Segment == 0 {
+		c.Field = fe.Field
+	}
+	e.record(&c)
+}
+
+// failAt records err under param whatever field calc named: used where one
+// calc field ("fit", "d") stands for several parameters ("s2.fit").
+func (e *eval) failAt(param string, err error) {
+	var fe *calc.FieldError
+	if errors.As(err, &fe) {
+		c := *fe
+		c.Field, c.Segment = param, 0
+		e.record(&c)
 		return
 	}
 	e.fail(param, err.Error())
+}
+
+// linkName is the link's name of a field calc names in a run ("length"
+// is l, "method" fm), "" for one that is not a run's own.
+func linkName(calcField string) string {
+	switch calcField {
+	case "length":
+		return "l"
+	case "method":
+		return "fm"
+	case "d", "eps", "fit", "k", "chw", "z":
+		return calcField
+	}
+	return ""
 }
 
 func (e *eval) warn(param, topic, text string) {
 	e.res.Warnings = append(e.res.Warnings, Warning{Param: param, Topic: topic, Text: text})
 }
 
+// warnCalc records a warning from calc, under its segment's parameter
+// when it names a segment.
+func (e *eval) warnCalc(topic string, w calc.Warning) {
+	p := w.Field
+	if f := linkName(w.Field); w.Segment > 0 && f != "" {
+		p = SegmentParam(w.Segment, f)
+	}
+	e.res.Warnings = append(e.res.Warnings, Warning{Param: p, Topic: topic, Segment: w.Segment, Text: w.Text, Figures: w.Figures})
+}
+
 // quantity parses a dimensioned parameter into SI. A missing value is an
 // error that asks for it.
 func (e *eval) quantity(param string) (float64, bool) {
-	f := fields[baseParam(param)]
+	p, _, _ := Lookup(param)
 	text := e.s.Get(param)
 	if strings.TrimSpace(text) == "" {
-		e.fail(param, param+": "+missing[baseParam(param)])
+		e.fail(param, p.Missing)
 		return 0, false
 	}
-	v, err := calc.Parse(param, text, f.dim, DefaultUnit(param, e.us))
+	v, err := calc.Parse(param, text, p.Dim, DefaultUnit(param, e.us))
 	if err != nil {
 		e.failErr(param, err)
 		return 0, false
@@ -133,28 +174,10 @@ func (e *eval) quantity(param string) (float64, bool) {
 	return v, true
 }
 
-// missing says what to enter when a needed parameter is absent.
-var missing = map[string]string{
-	"t":    "enter the liquid temperature",
-	"rho":  "enter the liquid's density",
-	"mu":   "enter the liquid's dynamic viscosity",
-	"pv":   "enter the liquid's vapour pressure (absolute; 0 if negligible)",
-	"p1":   "enter the pressure at point 1 (0 for a surface open to the air)",
-	"p2":   "enter the pressure at point 2 (0 for a surface open to the air)",
-	"z1":   "enter the elevation of point 1",
-	"z2":   "enter the elevation of point 2",
-	"v1":   "enter the velocity at point 1 (0 for a large tank surface), or its diameter d1",
-	"v2":   "enter the velocity at point 2 (0 for a large tank surface), or its diameter d2",
-	"q":    "enter the flow",
-	"hp":   "enter the pump head (0 if there is no pump)",
-	"ht":   "enter the turbine head (0 if there is no turbine)",
-	"hf":   "enter the friction head, or describe the pipe run (length l) to compute it",
-	"l":    "enter the length of the pipe run",
-	"d":    "enter the inside diameter, or pick a nominal size and schedule",
-	"eps":  "enter the roughness, or pick a material",
-	"cv":   "enter a value to convert",
-	"alt":  "enter the site altitude",
-	"baro": "enter the barometer reading",
+// missingMsg says what to enter for a needed parameter that is absent.
+func missingMsg(param string) string {
+	p, _, _ := Lookup(param)
+	return p.Missing
 }
 
 // site finds the site's barometric pressure: typed, from altitude, or the

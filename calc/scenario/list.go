@@ -14,7 +14,7 @@ import (
 func (e *eval) list(param string) ([]float64, bool) {
 	text := strings.TrimSpace(e.s.Get(param))
 	if text == "" {
-		e.fail(param, param+": "+missingList[param])
+		e.fail(param, missingMsg(param))
 		return nil, false
 	}
 	sep := ","
@@ -23,7 +23,7 @@ func (e *eval) list(param string) ([]float64, bool) {
 	}
 	items := strings.Split(text, sep)
 	_, unit := Split(items[len(items)-1])
-	f := fields[param]
+	dim, _ := DimensionOf(param)
 	out := make([]float64, 0, len(items))
 	for i, it := range items {
 		it = strings.TrimSpace(it)
@@ -34,7 +34,7 @@ func (e *eval) list(param string) ([]float64, bool) {
 		if _, u := Split(it); u == "" {
 			it += unit
 		}
-		v, err := calc.Parse(param, it, f.dim, DefaultUnit(param, e.us))
+		v, err := calc.Parse(param, it, dim, DefaultUnit(param, e.us))
 		if err != nil {
 			e.failErr(param, fmt.Errorf("%w (value %d of the list)", err, i+1))
 			return nil, false
@@ -42,11 +42,4 @@ func (e *eval) list(param string) ([]float64, bool) {
 		out = append(out, v)
 	}
 	return out, true
-}
-
-var missingList = map[string]string{
-	"pq":    "enter the data-sheet flows, e.g. 0,20,40,55,70L/s",
-	"ph":    "enter the data-sheet heads, one per flow, e.g. 62,59,52,44,33m",
-	"peff":  "enter the data-sheet efficiencies, one per flow",
-	"pnpsh": "enter the data-sheet NPSH required, one per flow",
 }

@@ -242,7 +242,7 @@ func (e *eval) field() {
 	}
 	e.res.Field = &fc
 	for _, w := range fc.Warnings {
-		e.warn(w.Field, "field", w.Text)
+		e.warnCalc("field", w)
 	}
 }
 
@@ -274,6 +274,6 @@ func (e *eval) turbine() {
 	}
 	e.res.BestTurbine = &best
 	for _, w := range t.Warnings {
-		e.warn(w.Field, "turbine", w.Text)
+		e.warnCalc("turbine", w)
 	}
 }

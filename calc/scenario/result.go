@@ -7,7 +7,7 @@ import "fieldhead/calc"
 // parameter, so the app can put each message beside its own field while the
 // other parts still render.
 type Result struct {
-	Errors   map[string]string // parameter → message naming it
+	Errors   map[string]*calc.FieldError // parameter → why it cannot be used (Field is the parameter)
 	Warnings []Warning         // cautions about the results, next to what they concern
 
 	US bool // the scenario asks for US customary units
@@ -39,11 +39,23 @@ type Result struct {
 // Warning is a caution about a result. Param names the input it concerns,
 // or is empty for the scenario as a whole; Topic groups it for display
 // ("balance", "run", "convert", "liquid", "site").
+// Text quotes its figures as calc.FieldError's Msg does: word it with
+// Words.
 type Warning struct {
-	Param string
-	Topic string
-	Text  string
+	Param   string
+	Topic   string
+	Segment int // the segment of a line it is about, 0 none
+	Text    string
+	Figures []calc.Figure
 }
+
+// Words writes the warning with each figure written by show.
+func (w Warning) Words(show func(calc.Figure) string) string {
+	return calc.Warning{Text: w.Text, Figures: w.Figures}.Words(show)
+}
+
+// String writes the warning with its figures in SI.
+func (w Warning) String() string { return w.Words(calc.Figure.SI) }
 
 // RunResult is the pipe run as evaluated, with the dimensions actually used.
 type RunResult struct {

@@ -7,17 +7,6 @@ import (
 	"fieldhead/calc"
 )
 
-// failAt records err under param whatever field calc named: used where one
-// calc field ("fit", "d") stands for several parameters ("s2.fit").
-func (e *eval) failAt(param string, err error) {
-	var fe *calc.FieldError
-	if errors.As(err, &fe) {
-		e.fail(param, param+": "+fe.Msg)
-		return
-	}
-	e.fail(param, param+": "+err.Error())
-}
-
 // run reads the single pipe run, or returns nil when none is described
 // (its length l is the sign of one).
 func (e *eval) run() *RunResult {
@@ -48,7 +37,16 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 		ok = ok && good
 		return v
 	}
-	r.Length = positive(p("l"), "the length of the run")
+	// A length of zero is a run of fittings alone (a valve set), as calc
+	// allows.
+	if l, good := e.quantity(p("l")); !good {
+		ok = false
+	} else if l < 0 {
+		e.fail(p("l"), "the length of the run must not be negative")
+		ok = false
+	} else {
+		r.Length = l
+	}
 	switch {
 	case e.s.Has(p("d")):
 		r.Diameter = positive(p("d"), "the inside diameter")
@@ -67,7 +65,7 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 			r.Diameter = ps.ID
 		}
 	default:
-		e.fail(p("d"), p("d")+": "+missing["d"])
+		e.fail(p("d"), missingMsg("d"))
 		ok = false
 	}
 	var mat *calc.Material
@@ -104,7 +102,7 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 	case mat != nil:
 		r.Roughness = mat.Roughness
 	case method != calc.MethodHazenWilliams:
-		e.fail(p("eps"), p("eps")+": "+missing["eps"])
+		e.fail(p("eps"), missingMsg("eps"))
 		ok = false
 	}
 	hc := 0.0

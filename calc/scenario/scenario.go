@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"net/url"
 	"sort"
-	"strconv"
 	"strings"
 	"unicode"
 	"unicode/utf8"
@@ -15,51 +14,35 @@ import (
 // the page anything.
 const MaxQueryBytes = 8 << 10
 
-// Params lists every parameter of the vocabulary in the order Encode writes
-// them. It is the single list the app, the case files and the docs share.
-var Params = []string{
-	"view", "units", "name",
-	"liq", "t", "rho", "mu", "pv", "alt", "baro",
-	"p1", "p1ref", "z1", "v1", "d1",
-	"p2", "p2ref", "z2", "v2", "d2",
-	"q", "hp", "ht", "hf", "solve", "alpha",
-	"l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw",
-	"cv", "cvref",
-	"pq", "ph", "peff", "pnpsh", "spd", "pumps", "zp", "pafter", "npshr",
-	"ps", "pd", "zs", "zd", "ds", "dd", "qm", "pin", "etat",
-}
-
-// MaxSegments is the most pipe segments a line may have.
-const MaxSegments = 20
-
-// SegmentFields are the per-segment parameters: segment N's are written
-// sN.l, sN.d, … (N from 1 to MaxSegments). They mean what the single-run
-// parameters of the same name mean; sN.z is the elevation of the
-// segment's end.
-var SegmentFields = []string{"l", "d", "nps", "sch", "mat", "eps", "fit", "k", "z"}
-
-// SegmentParam returns the name of field f of segment n (1-based).
-func SegmentParam(n int, f string) string { return "s" + strconv.Itoa(n) + "." + f }
-
-// known maps every parameter name to its place in the canonical order:
-// the segments' parameters come right after the single run's.
+// known maps every parameter name, the segments' included, to its place
+// in the canonical order: the segments' parameters come right after the
+// single run's (after chw), segment by segment.
 var known = func() map[string]int {
-	nseg := MaxSegments * len(SegmentFields)
-	m := make(map[string]int, len(Params)+nseg)
-	after := 0
-	for i, p := range Params {
-		m[p] = i + after
-		if p == "chw" {
-			after = nseg
+	segFields := SegmentFields
+	m := make(map[string]int, len(Table)+MaxSegments*len(segFields))
+	i := 0
+	for _, p := range Table {
+		if p.Name == "z" {
+			continue
+		}
+		m[p.Name] = i
+		i++
+		if p.Name == "chw" {
 			for n := 1; n <= MaxSegments; n++ {
-				for j, f := range SegmentFields {
-					m[SegmentParam(n, f)] = i + 1 + (n-1)*len(SegmentFields) + j
+				for _, f := range segFields {
+					m[SegmentParam(n, f)] = i
+					i++
 				}
 			}
 		}
 	}
 	return m
 }()
+
+// sortByLink sorts parameter names into the canonical order.
+func sortByLink(keys []string) {
+	sort.Slice(keys, func(i, j int) bool { return known[keys[i]] < known[keys[j]] })
+}
 
 // Scenario is a parsed share link: for each parameter, exactly the text the
 // user typed. Values are interpreted by Evaluate, so a bad value is kept and
@@ -167,7 +150,7 @@ func (s Scenario) Encode() string {
 	for k := range s.raw {
 		keys = append(keys, k)
 	}
-	sort.Slice(keys, func(i, j int) bool { return known[keys[i]] < known[keys[j]] })
+	sortByLink(keys)
 	var b strings.Builder
 	for _, k := range keys {
 		if b.Len() > 0 {

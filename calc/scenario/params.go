@@ -1,0 +1,381 @@
+package scenario
+
+import (
+	"strconv"
+	"strings"
+
+	"fieldhead/calc"
+)
+
+// Kind says how a parameter's value is written in the link.
+type Kind uint8
+
+const (
+	KindQuantity Kind = iota // a number and its unit: q=45L/s
+	KindList                 // numbers with one unit after the last: pq=0,20,40L/s
+	KindChoice               // one of the parameter's Choices: liq=water
+	KindNumber               // a plain number without a unit: k=2.5
+	KindText                 // free text: name=…
+	KindFittings             // key:count pairs: fit=gate:2,exit:1
+)
+
+// Param describes one parameter of the vocabulary. The table of them,
+// Table, is the one place a parameter is declared: the link's order, the
+// parsing, the app's boxes and pickers, the labels of errors and of the
+// report, and the messages for a missing value are all read from it.
+type Param struct {
+	Name  string // in the link
+	Label string // in words, lower case ("flow"), for lists of fields and the report
+	// Box is the label of the parameter's own input, as a sentence start
+	// ("Flow"); Hint a short note after it ("(optional)").
+	Box, Hint string
+	Kind      Kind
+	Dim       calc.Dimension // Quantity and List only
+	SI, US    string         // default units of a value typed without one
+	// ExtraUnits are offered by the unit picker besides those of Dim (the
+	// Convert value also takes a head of the liquid in m or ft).
+	ExtraUnits []string
+	// Segment marks a parameter each segment of a line has too, written
+	// sN.<Name>; SegLabel is its label there ("length"), SegBox its box's.
+	Segment          bool
+	SegLabel, SegBox string
+	// Group is the either/or group the parameter belongs to ("" none): the
+	// link holds only the chosen side's parameters.
+	Group string
+	// Missing says what to enter when the value is needed but absent.
+	Missing string
+	// Placeholder is the greyed example in an empty box.
+	Placeholder string
+	choices     func() []Choice
+}
+
+// Table lists every parameter in the order Encode writes them; segment
+// parameters (sN.…) follow the single run's.
+var Table = []Param{
+	{Name: "view", Label: "view", Kind: KindChoice, choices: func() []Choice {
+		return []Choice{{"balance", "Balance"}, {"convert", "Convert"}, {"regime", "Regime"},
+			{"line", "Line"}, {"pump", "Pump"}, {"report", "Report"}}
+	}},
+	{Name: "units", Label: "unit system", Kind: KindChoice, choices: func() []Choice { return []Choice{{"si", "SI"}, {"us", "US"}} }},
+	{Name: "name", Label: "sheet title", Box: "Sheet title", Hint: "(site, equipment, date)", Kind: KindText},
+
+	{Name: "liq", Label: "liquid", Box: "Liquid", Kind: KindChoice, choices: func() []Choice {
+		return []Choice{{"water", "Water"}, {"seawater", "Seawater, 35 g/kg (0–40 °C)"}, {"custom", "Other liquid (typed properties)"}}
+	}},
+	q("t", "temperature", "Temperature", "", calc.Temperature, "°C", "°F", "enter the liquid temperature"),
+	q("rho", "density", "Density", "", calc.Density, "kg/m³", "lb/ft³", "enter the liquid's density"),
+	q("mu", "viscosity", "Viscosity", "(dynamic)", calc.DynamicViscosity, "mPa·s", "cP", "enter the liquid's dynamic viscosity"),
+	q("pv", "vapour pressure", "Vapour pressure", "(absolute)", calc.Pressure, "kPa", "psi", "enter the liquid's vapour pressure (absolute; 0 if negligible)"),
+	grp(q("alt", "site altitude", "Site altitude", "(above sea level)", calc.Length, "m", "ft", "enter the site altitude"), "site"),
+	grp(q("baro", "barometer", "Barometer", "(absolute)", calc.Pressure, "kPa", "psi", "enter the barometer reading"), "site"),
+
+	q("p1", "pressure at 1", "Pressure", "", calc.Pressure, "kPa", "psi", "enter the pressure at point 1 (0 for a surface open to the air)"),
+	ref("p1ref", "gauge/absolute at 1"),
+	q("z1", "elevation of 1", "Elevation", "", calc.Length, "m", "ft", "enter the elevation of point 1"),
+	grp(q("v1", "velocity at 1", "Mean velocity", "(0 at a tank surface)", calc.Velocity, "m/s", "ft/s", "enter the velocity at point 1 (0 for a large tank surface), or its diameter"), "pt1"),
+	grp(q("d1", "diameter at 1", "Inside diameter", "(velocity = flow ÷ area)", calc.Length, "mm", "in", "enter the inside diameter at point 1"), "pt1"),
+	q("p2", "pressure at 2", "Pressure", "", calc.Pressure, "kPa", "psi", "enter the pressure at point 2 (0 for a surface open to the air)"),
+	ref("p2ref", "gauge/absolute at 2"),
+	q("z2", "elevation of 2", "Elevation", "", calc.Length, "m", "ft", "enter the elevation of point 2"),
+	grp(q("v2", "velocity at 2", "Mean velocity", "(0 at a tank surface)", calc.Velocity, "m/s", "ft/s", "enter the velocity at point 2 (0 for a large tank surface), or its diameter"), "pt2"),
+	grp(q("d2", "diameter at 2", "Inside diameter", "(velocity = flow ÷ area)", calc.Length, "mm", "in", "enter the inside diameter at point 2"), "pt2"),
+
+	q("q", "flow", "Flow", "", calc.Flow, "L/s", "gpm", "enter the flow"),
+	q("hp", "pump head", "Pump head", "(added; blank if none)", calc.Length, "m", "ft", "enter the pump head (0 if there is no pump)"),
+	q("ht", "turbine head", "Turbine head", "(taken; blank if none)", calc.Length, "m", "ft", "enter the turbine head (0 if there is no turbine)"),
+	grp(q("hf", "friction head", "Friction head", "(all losses, 1 to 2)", calc.Length, "m", "ft", "enter the friction head, or describe the pipe run to compute it"), "fric"),
+	{Name: "solve", Label: "solve for", Kind: KindChoice, choices: func() []Choice {
+		return []Choice{
+			{"hp", "pump head"}, {"ht", "turbine head"}, {"hf", "friction head"},
+			{"p1", "pressure at 1"}, {"p2", "pressure at 2"},
+			{"z1", "elevation of 1"}, {"z2", "elevation of 2"}, {"q", "flow"},
+		}
+	}},
+	{Name: "alpha", Label: "α", Box: "Kinetic-energy factor α", Kind: KindChoice, choices: func() []Choice {
+		return []Choice{{"auto", "from the regime (2 laminar, 1 turbulent)"}, {"1", "1 everywhere"}, {"pl", "power-law profile estimate"}}
+	}},
+
+	seg(grp(q("l", "length of the run", "Length of the run", "", calc.Length, "m", "ft", "enter the length of the pipe run"), "fric"), "length", "Length"),
+	seg(grp(q("d", "inside diameter", "Inside diameter", "", calc.Length, "mm", "in", "enter the inside diameter, or pick a nominal size and schedule"), "pipe"), "inside diameter", ""),
+	seg(grp(Param{Name: "nps", Label: "nominal size", Box: "Nominal size", Kind: KindChoice, choices: npsChoices}, "pipe"), "nominal size", ""),
+	seg(grp(Param{Name: "sch", Label: "schedule", Box: "Schedule or class", Kind: KindChoice, choices: schChoices}, "pipe"), "schedule", ""),
+	seg(grp(Param{Name: "mat", Label: "material", Box: "Material", Kind: KindChoice, choices: matChoices}, "rough"), "material", ""),
+	seg(grp(q("eps", "roughness", "Absolute roughness", "", calc.Length, "mm", "in", "enter the roughness, or pick a material"), "rough"), "roughness", ""),
+	seg(Param{Name: "fit", Label: "fittings", Box: "Fittings", Kind: KindFittings, choices: fitChoices}, "fittings", ""),
+	seg(Param{Name: "k", Label: "extra ΣK", Box: "Extra loss coefficient ΣK", Hint: "(optional)", Kind: KindNumber}, "extra ΣK", ""),
+	{Name: "fm", Label: "friction method", Box: "Friction factor method", Kind: KindChoice, choices: func() []Choice {
+		return []Choice{
+			{calc.MethodColebrook.String(), "Colebrook–White"},
+			{calc.MethodSwameeJain.String(), "Swamee–Jain (explicit)"},
+			{calc.MethodHaaland.String(), "Haaland (explicit)"},
+			{calc.MethodHazenWilliams.String(), "Hazen–Williams (water)"},
+		}
+	}},
+	{Name: "chw", Label: "Hazen–Williams C", Box: "Hazen–Williams C", Hint: "(blank: from the material)", Kind: KindNumber},
+	{Name: "z", Label: "end elevation", Kind: KindQuantity, Dim: calc.Length, SI: "m", US: "ft",
+		Segment: true, SegLabel: "elevation of its end", SegBox: "Elevation at its end"},
+
+	{Name: "cv", Label: "value to convert", Box: "Pressure, water column or head", Kind: KindQuantity, Dim: calc.Pressure,
+		SI: "kPa", US: "psi", ExtraUnits: []string{"m", "ft"}, Missing: "enter a value to convert"},
+	ref("cvref", "gauge/absolute"),
+
+	list("pq", "data-sheet flows", calc.Flow, "L/s", "gpm", "enter the data-sheet flows, e.g. 0,20,40,55,70L/s"),
+	list("ph", "data-sheet heads", calc.Length, "m", "ft", "enter the data-sheet heads, one per flow, e.g. 62,59,52,44,33m"),
+	list("peff", "data-sheet efficiencies", calc.Dimensionless, "%", "%", "enter the data-sheet efficiencies, one per flow"),
+	grp(list("pnpsh", "data-sheet NPSH required", calc.Length, "m", "ft", "enter the data-sheet NPSH required, one per flow"), "npsh"),
+	q("spd", "speed", "Speed", "(share of the data sheet's; blank: 100 %)", calc.Dimensionless, "%", "%", "enter the speed as a share of the data sheet's"),
+	{Name: "pumps", Label: "pumps working together", Box: "Pumps working together", Kind: KindChoice, choices: func() []Choice {
+		return []Choice{{"1", "one pump"}, {"2p", "two in parallel"}, {"2s", "two in series"},
+			{"3p", "three in parallel"}, {"3s", "three in series"}}
+	}},
+	q("zp", "pump centreline elevation", "Pump centreline elevation", "(for NPSH)", calc.Length, "m", "ft", "enter the pump centreline elevation"),
+	{Name: "pafter", Label: "pump position on the line", Box: "Pump position", Hint: "(for the profile and the suction side of NPSH)", Kind: KindNumber},
+	grp(q("npshr", "NPSH required (typed)", "NPSH required", "(at the operating flow)", calc.Length, "m", "ft", "enter the NPSH required"), "npsh"),
+
+	q("ps", "suction gauge reading", "Suction gauge", "(reading)", calc.Pressure, "kPa", "psi", "enter the gauge reading"),
+	q("pd", "discharge gauge reading", "Discharge gauge", "(reading)", calc.Pressure, "kPa", "psi", "enter the gauge reading"),
+	q("zs", "suction gauge height", "Suction gauge height", "", calc.Length, "m", "ft", "enter the suction gauge's height"),
+	q("zd", "discharge gauge height", "Discharge gauge height", "(same datum)", calc.Length, "m", "ft", "enter the discharge gauge's height"),
+	q("ds", "pipe diameter at the suction gauge", "Pipe inside diameter at the suction gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the suction gauge"),
+	q("dd", "pipe diameter at the discharge gauge", "Pipe inside diameter at the discharge gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the discharge gauge"),
+	q("qm", "measured flow", "Measured flow", "", calc.Flow, "L/s", "gpm", "enter the measured flow"),
+	q("pin", "motor electrical input", "Motor electrical input", "(optional)", calc.Power, "kW", "hp", "enter the motor's electrical input"),
+	q("etat", "turbine-and-generator efficiency", "Turbine-and-generator efficiency", "", calc.Dimensionless, "%", "%", "enter the turbine-and-generator efficiency"),
+}
+
+func q(name, label, box, hint string, dim calc.Dimension, si, us, missing string) Param {
+	return Param{Name: name, Label: label, Box: box, Hint: hint, Kind: KindQuantity, Dim: dim, SI: si, US: us, Missing: missing}
+}
+
+func list(name, label string, dim calc.Dimension, si, us, missing string) Param {
+	return Param{Name: name, Label: label, Kind: KindList, Dim: dim, SI: si, US: us, Missing: missing}
+}
+
+func ref(name, label string) Param {
+	return Param{Name: name, Label: label, Kind: KindChoice, choices: func() []Choice { return []Choice{{"g", "gauge"}, {"a", "absolute"}} }}
+}
+
+func grp(p Param, group string) Param { p.Group = group; return p }
+
+func seg(p Param, label, box string) Param {
+	p.Segment, p.SegLabel, p.SegBox = true, label, box
+	if box == "" {
+		p.SegBox = p.Box
+	}
+	return p
+}
+
+func npsChoices() []Choice {
+	var out []Choice
+	seen := map[string]bool{}
+	for _, p := range calc.PipeSizes() {
+		if !seen[p.NPS] {
+			seen[p.NPS] = true
+			out = append(out, Choice{p.NPS, p.NPS})
+		}
+	}
+	return out
+}
+
+func schChoices() []Choice {
+	var out []Choice
+	seen := map[string]bool{}
+	for _, p := range calc.PipeSizes() {
+		if !seen[p.Schedule] {
+			seen[p.Schedule] = true
+			out = append(out, Choice{p.Schedule, p.Schedule})
+		}
+	}
+	return out
+}
+
+func matChoices() []Choice {
+	var out []Choice
+	for _, m := range calc.MaterialTable() {
+		out = append(out, Choice{m.Key, m.Name})
+	}
+	return out
+}
+
+func fitChoices() []Choice {
+	var out []Choice
+	for _, f := range calc.FittingTable() {
+		out = append(out, Choice{f.Key, f.Name})
+	}
+	return out
+}
+
+// byName indexes Table.
+var byName = func() map[string]*Param {
+	m := make(map[string]*Param, len(Table))
+	for i := range Table {
+		m[Table[i].Name] = &Table[i]
+	}
+	return m
+}()
+
+// Lookup returns the description of a parameter; a segment's parameter
+// ("s3.d") is described by its row ("d") with the segment's labels. ok is
+// false for a name that is not in the vocabulary.
+func Lookup(name string) (p Param, seg int, ok bool) {
+	if n, f := splitSegment(name); n > 0 {
+		r, found := byName[f]
+		if !found || !r.Segment || n > MaxSegments {
+			return Param{}, 0, false
+		}
+		p = *r
+		p.Name, p.Label, p.Box = name, "segment "+strconv.Itoa(n)+" "+r.SegLabel, r.SegBox
+		if f == "z" {
+			p.Missing = "enter the elevation of the end of segment " + strconv.Itoa(n)
+		}
+		return p, n, true
+	}
+	r, found := byName[name]
+	if !found || (r.Name == "z") {
+		return Param{}, 0, false
+	}
+	return *r, 0, true
+}
+
+// splitSegment splits "s3.d" into 3 and "d"; n is 0 for any other name.
+func splitSegment(name string) (n int, field string) {
+	if len(name) < 4 || name[0] != 's' {
+		return 0, ""
+	}
+	num, f, ok := strings.Cut(name[1:], ".")
+	if !ok || num == "" || num[0] == '0' || len(num) > 3 {
+		return 0, ""
+	}
+	for _, c := range num {
+		if c < '0' || c > '9' {
+			return 0, ""
+		}
+	}
+	n, _ = strconv.Atoi(num)
+	return n, f
+}
+
+// Label names a parameter in words ("flow", "segment 2 length"); an
+// unknown name is returned as it is.
+func Label(name string) string {
+	if p, _, ok := Lookup(name); ok {
+		return p.Label
+	}
+	return name
+}
+
+// Params lists every parameter of the vocabulary but the segments' in the
+// order Encode writes them.
+var Params = func() []string {
+	var out []string
+	for _, p := range Table {
+		if p.Name != "z" {
+			out = append(out, p.Name)
+		}
+	}
+	return out
+}()
+
+// SegmentFields are the per-segment parameters: segment N's are written
+// sN.l, sN.d, … (N from 1 to MaxSegments). They mean what the single-run
+// parameters of the same name mean; sN.z is the elevation of the
+// segment's end.
+var SegmentFields = func() []string {
+	var out []string
+	for _, p := range Table {
+		if p.Segment {
+			out = append(out, p.Name)
+		}
+	}
+	return out
+}()
+
+// MaxSegments is the most pipe segments a line may have.
+const MaxSegments = calc.MaxSegments
+
+// SegmentParam returns the name of field f of segment n (1-based).
+func SegmentParam(n int, f string) string { return "s" + strconv.Itoa(n) + "." + f }
+
+// AllParams lists every parameter a sheet may hold, in link order: the
+// vocabulary's and every segment's.
+func AllParams() []string {
+	out := make([]string, 0, len(known))
+	for k := range known {
+		out = append(out, k)
+	}
+	sortByLink(out)
+	return out
+}
+
+// Group is an either/or choice of inputs: a value given one way or
+// another. The link holds only the parameters of the side in use, so it
+// never carries a value that is silently ignored.
+type Group struct {
+	Key   string
+	Label string // the switch's label
+	Sides []Side // the first is the default
+}
+
+// Side is one way of giving a group's value.
+type Side struct {
+	Key, Label string
+	Params     []string
+}
+
+// Groups lists the either/or groups. A segment's group is written with the
+// segment's prefix ("s2.pipe") and holds the segment's parameters.
+var Groups = []Group{
+	{"pt1", "Speed of the liquid here, from", []Side{{"v", "velocity", []string{"v1"}}, {"d", "inside diameter", []string{"d1"}}}},
+	{"pt2", "Speed of the liquid here, from", []Side{{"v", "velocity", []string{"v2"}}, {"d", "inside diameter", []string{"d2"}}}},
+	{"fric", "Friction head between the points", []Side{{"run", "from the pipe run", []string{"l"}}, {"hf", "typed in", []string{"hf"}}}},
+	{"pipe", "Pipe given by", []Side{{"nps", "nominal size", []string{"nps", "sch"}}, {"d", "inside diameter", []string{"d"}}}},
+	{"rough", "Wall roughness from", []Side{{"mat", "material", []string{"mat"}}, {"eps", "roughness", []string{"eps"}}}},
+	{"site", "Site pressure from", []Side{{"alt", "altitude", []string{"alt"}}, {"baro", "barometer", []string{"baro"}}}},
+	{"npsh", "NPSH required", []Side{{"sheet", "from the data sheet", []string{"pnpsh"}}, {"typed", "typed in", []string{"npshr"}}}},
+}
+
+// LookupGroup returns a group by key; "s2.pipe" is the pipe group of
+// segment 2, with that segment's parameters.
+func LookupGroup(key string) (Group, bool) {
+	n, base := splitSegment(key)
+	if n == 0 {
+		base = key
+	}
+	for _, g := range Groups {
+		if g.Key != base {
+			continue
+		}
+		if n == 0 {
+			return g, true
+		}
+		out := Group{Key: key, Label: g.Label}
+		for _, sd := range g.Sides {
+			ns := Side{Key: sd.Key, Label: sd.Label}
+			for _, p := range sd.Params {
+				ns.Params = append(ns.Params, SegmentParam(n, p))
+			}
+			out.Sides = append(out.Sides, ns)
+		}
+		return out, true
+	}
+	return Group{}, false
+}
+
+// CurrentSide is the side of group g a scenario uses: the one whose
+// parameters it holds, else chosen (when it names a side), else the
+// default.
+func (s Scenario) CurrentSide(g Group, chosen string) string {
+	for _, sd := range g.Sides {
+		for _, p := range sd.Params {
+			if s.Has(p) {
+				return sd.Key
+			}
+		}
+	}
+	for _, sd := range g.Sides {
+		if sd.Key == chosen {
+			return chosen
+		}
+	}
+	return g.Sides[0].Key
+}
