@@ -431,7 +431,7 @@ func (s *sheet) npshFacts() []app.UI {
 	}
 	out = append(out,
 		fact("at a flow of", scenario.ShowParam("q", s.res.NPSHFlow, us)),
-		app.P().Class("note-text").ID("npsh-note").Text(n.Note),
+		app.P().Class("note-text").ID("npsh-note").Text(n.Note.String()),
 	)
 	return out
 }

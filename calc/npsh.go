@@ -1,7 +1,6 @@
 package calc
 
 import (
-	"fmt"
 	"math"
 )
 
@@ -63,7 +62,7 @@ type NPSHResult struct {
 	Margin    float64 // NPSHa − NPSHr, m
 	Ratio     float64 // NPSHa / NPSHr (0 when NPSHr is not given)
 	Level     NPSHLevel
-	Note      string // the verdict and the guidance it rests on, in words
+	Note      Warning // the verdict and the guidance it rests on, in words (Field empty)
 }
 
 // NPSH computes the net positive suction head available at the pump,
@@ -99,16 +98,17 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 	}
 	r := NPSHResult{Required: in.NPSHr}
 	r.Available = (in.SurfacePressure-fl.VapourPressure)/(fl.Density*StandardGravity) + in.SurfaceZ - in.PumpZ - in.SuctionLoss
-	const guidance = "margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least 0.6 m (common practice, from memory); large, high-energy or hot-liquid pumps need more"
+	const guidance = "margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least %v (common practice, from memory); large, high-energy or hot-liquid pumps need more"
+	minMargin := Fig(NPSHMarginMin, Length)
 	if in.NPSHr == 0 {
 		r.Level = NPSHUnrated
 		r.Margin = r.Available
 		if r.Available <= 0 {
 			r.Level = NPSHDanger
-			r.Note = fmt.Sprintf("NPSH available is %.3g m, not above zero: the liquid boils at the pump inlet whatever the pump", r.Available)
+			r.Note = warnf("", "NPSH available is %v, not above zero: the liquid boils at the pump inlet whatever the pump", Fig(r.Available, Length))
 			return r, nil
 		}
-		r.Note = fmt.Sprintf("NPSH available is %.3g m; give the pump's NPSH required at this flow to judge the margin (%s)", r.Available, guidance)
+		r.Note = warnf("", "NPSH available is %v; give the pump's NPSH required at this flow to judge the margin ("+guidance+")", Fig(r.Available, Length), minMargin)
 		return r, nil
 	}
 	r.Margin = r.Available - r.Required
@@ -116,13 +116,13 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 	switch {
 	case r.Available <= 0 || r.Available < r.Required:
 		r.Level = NPSHDanger
-		r.Note = fmt.Sprintf("NPSH available %.3g m is below the %.3g m required: the pump will cavitate (lost head, noise, damage); raise the source, lower the pump, cut the suction losses or cool the liquid", r.Available, r.Required)
+		r.Note = warnf("", "NPSH available %v is below the %v required: the pump will cavitate (lost head, noise, damage); raise the source, lower the pump, cut the suction losses or cool the liquid", Fig(r.Available, Length), Fig(r.Required, Length))
 	case r.Ratio < NPSHMarginRatio || r.Margin < NPSHMarginMin:
 		r.Level = NPSHCaution
-		r.Note = fmt.Sprintf("NPSH available %.3g m exceeds the %.3g m required by only %.2g m (ratio %.2f): expect some cavitation; %s", r.Available, r.Required, r.Margin, r.Ratio, guidance)
+		r.Note = warnf("", "NPSH available %v exceeds the %v required by only %v (ratio %.2f): expect some cavitation; "+guidance, Fig(r.Available, Length), Fig(r.Required, Length), Fig(r.Margin, Length), r.Ratio, minMargin)
 	default:
 		r.Level = NPSHOK
-		r.Note = fmt.Sprintf("NPSH available %.3g m against %.3g m required: margin %.2g m, ratio %.2f; %s", r.Available, r.Required, r.Margin, r.Ratio, guidance)
+		r.Note = warnf("", "NPSH available %v against %v required: margin %v, ratio %.2f; "+guidance, Fig(r.Available, Length), Fig(r.Required, Length), Fig(r.Margin, Length), r.Ratio, minMargin)
 	}
 	return r, nil
 }

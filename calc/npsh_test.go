@@ -73,8 +73,8 @@ func TestNPSHLevels(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		if math.Abs(r.Available-10) > 1e-12 || r.Level != tc.lvl || !strings.Contains(r.Note, tc.note) {
-			t.Errorf("NPSHr %g: NPSHa %g, %v, note %q; want %v, %q", tc.npshr, r.Available, r.Level, r.Note, tc.lvl, tc.note)
+		if math.Abs(r.Available-10) > 1e-12 || r.Level != tc.lvl || !strings.Contains(r.Note.String(), tc.note) {
+			t.Errorf("NPSHr %g: NPSHa %g, %v, note %q; want %v, %q", tc.npshr, r.Available, r.Level, r.Note.String(), tc.lvl, tc.note)
 		}
 	}
 	// A small pump with a low NPSHr: the ratio is large but the margin

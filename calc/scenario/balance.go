@@ -38,7 +38,7 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 	if e.s.Has("l") && run == nil {
 		return // the run's errors say why
 	}
-	if e.segmentCount() > 0 && line == nil {
+	if e.s.SegmentCount() > 0 && line == nil {
 		return // the segments' errors say why
 	}
 	b := calc.Balance{Fluid: *e.res.Fluid, SitePressure: e.res.SitePressure, Unknown: solve}

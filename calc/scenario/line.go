@@ -7,43 +7,11 @@ import (
 	"fieldhead/calc"
 )
 
-// segmentCount returns the number of segments described (the highest N
-// with any sN. parameter), 0 when none.
-func (e *eval) segmentCount() int {
-	n := 0
-	for k := range e.s.raw {
-		if i := segmentOf(k); i > n && e.s.Has(k) {
-			n = i
-		}
-	}
-	return n
-}
-
-// segmentOf returns N for a segment parameter "sN.field", else 0.
-func segmentOf(param string) int {
-	if len(param) < 4 || param[0] != 's' {
-		return 0
-	}
-	n := 0
-	for i := 1; i < len(param); i++ {
-		c := param[i]
-		switch {
-		case c >= '0' && c <= '9':
-			n = n*10 + int(c-'0')
-		case c == '.' && i > 1:
-			return n
-		default:
-			return 0
-		}
-	}
-	return 0
-}
-
 // line reads the segments s1…sN into a calc.Line, or returns nil when there
 // are none or one is bad (its errors are recorded). z2 is the elevation of
 // point 2, where the last segment ends unless its sN.z says otherwise.
 func (e *eval) line() *calc.Line {
-	n := e.segmentCount()
+	n := e.s.SegmentCount()
 	if n == 0 {
 		return nil
 	}

@@ -8,7 +8,7 @@ import "fieldhead/calc"
 // other parts still render.
 type Result struct {
 	Errors   map[string]*calc.FieldError // parameter → why it cannot be used (Field is the parameter)
-	Warnings []Warning         // cautions about the results, next to what they concern
+	Warnings []Warning                   // cautions about the results, next to what they concern
 
 	US bool // the scenario asks for US customary units
 

@@ -206,10 +206,12 @@ func checkFinite(t *testing.T, what string, r Result) {
 	}
 }
 
-func TestSegmentOf(t *testing.T) {
-	for in, want := range map[string]int{"s1.l": 1, "s20.fit": 20, "solve": 0, "s.l": 0, "sx.l": 0, "s3": 0, "s12.": 12} {
-		if got := segmentOf(in); got != want {
-			t.Errorf("segmentOf(%q) = %d, want %d", in, got, want)
+// TestSplitSegment: segment parameters are sN.field with N written
+// without leading zeros (the link's own syntax, doc.go).
+func TestSplitSegment(t *testing.T) {
+	for in, want := range map[string]int{"s1.l": 1, "s20.fit": 20, "solve": 0, "s.l": 0, "sx.l": 0, "s3": 0, "s12.": 12, "s01.l": 0} {
+		if got, _ := splitSegment(in); got != want {
+			t.Errorf("splitSegment(%q) = %d, want %d", in, got, want)
 		}
 	}
 }

@@ -1,0 +1,426 @@
+// Package present is Fieldhead's view model: it turns a sheet being edited
+// (scenario.Draft) and its result (scenario.Result) into what each card of
+// the page shows, already worded and in the sheet's display units (SI, or
+// US customary units in a US sheet: ft of liquid, psig and psia, gpm, °F,
+// hp). Errors and warnings arrive structured from calc and scenario and are
+// worded here. The page (app) only draws what Build returns.
+package present
+
+import (
+	"math"
+	"sort"
+	"strconv"
+	"strings"
+
+	"fieldhead/calc"
+	"fieldhead/calc/scenario"
+)
+
+// builder carries one Build.
+type builder struct {
+	d      *scenario.Draft
+	s      scenario.Scenario
+	r      scenario.Result
+	us     bool
+	shown  map[string]bool // parameters a card draws (their problems are shown there)
+	warned map[string]bool // warnings listed once
+}
+
+// Views lists the views a sheet can open on, with a hint of what each does.
+var Views = []struct{ Key, Hint string }{
+	{"balance", "two-point energy balance"},
+	{"convert", "head ↔ pressure"},
+	{"regime", "Re and friction"},
+	{"line", "segments, EGL/HGL"},
+	{"pump", "duty, NPSH, readings"},
+	{"report", "the printed sheet"},
+}
+
+// Build makes the view model of a sheet: d is the sheet being edited and r
+// its result (scenario.Evaluate(d.Scen)).
+func Build(d *scenario.Draft, r scenario.Result) Sheet {
+	b := &builder{d: d, s: d.Scen, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
+	sh := Sheet{View: b.view(), US: b.us, Cautions: Cautions, Methods: Methods}
+	sh.Name = strings.TrimSpace(b.s.Get("name"))
+	if sh.Name == "" {
+		sh.Name = "Untitled sheet"
+	}
+	sh.Title = b.plain("name", "", "", false)
+	for _, v := range Views {
+		label := v.Key
+		for _, c := range scenario.Choices("view") {
+			if c.Value == v.Key {
+				label = c.Label
+			}
+		}
+		sh.Tabs = append(sh.Tabs, Button{ID: "view-" + v.Key, Text: label, Hint: v.Hint, Class: "tab",
+			On: v.Key == sh.View, Act: Action{Do: "choose", Param: "view", Value: v.Key}})
+	}
+	for _, c := range scenario.Choices("units") {
+		sh.Units = append(sh.Units, Button{ID: "units-" + c.Value, Text: c.Label, Class: "seg",
+			On: (c.Value == "us") == b.us, Act: Action{Do: "choose", Param: "units", Value: c.Value}})
+	}
+	switch sh.View {
+	case "convert":
+		sh.Cards = b.convertView()
+	case "regime":
+		sh.Cards = b.regimeView()
+	case "line":
+		sh.Cards = b.lineView()
+	case "pump":
+		sh.Cards = b.pumpView()
+	case "report":
+		sh.Cards = b.reportView()
+	default:
+		sh.Cards = b.balanceView()
+	}
+	sh.Others = b.others(sh.View)
+	return sh
+}
+
+// view is the view the scenario opens on.
+func (b *builder) view() string {
+	v := b.s.Get("view")
+	for _, w := range Views {
+		if w.Key == v {
+			return v
+		}
+	}
+	return "balance"
+}
+
+// solve is the parameter the balance solves for.
+func (b *builder) solve() string {
+	if v := b.s.Get("solve"); v != "" {
+		return v
+	}
+	return calc.SolvePumpHead.String()
+}
+
+// Figures in the sheet's units.
+
+// show writes an SI value in the display unit of its dimension.
+func (b *builder) show(v float64, dim calc.Dimension) string { return scenario.Show(v, dim, b.us) }
+
+// head writes a head of the liquid (m or ft).
+func (b *builder) head(v float64) string { return b.show(v, calc.Length) }
+
+// param writes an SI value in a parameter's own display unit (mm or in for
+// diameters, L/s or gpm for flows).
+func (b *builder) param(p string, v float64) string { return scenario.ShowParam(p, v, b.us) }
+
+// gauge and absolute write a pressure with its reference: "430.0 kPa
+// gauge" or "62.37 psig".
+func (b *builder) gauge(v float64) string    { return b.pressure(v, false) }
+func (b *builder) absolute(v float64) string { return b.pressure(v, true) }
+
+func (b *builder) pressure(v float64, abs bool) string {
+	if b.us {
+		t := calc.FormatValue(v, "psi", 4)
+		if abs {
+			return t + "a"
+		}
+		return t + "g"
+	}
+	t := calc.FormatValue(v, "kPa", 4)
+	if abs {
+		return t + " absolute"
+	}
+	return t + " gauge"
+}
+
+// figure writes a figure of a message: pressures as differences or as the
+// message says (gauge or absolute is in its words), the rest in display
+// units.
+func (b *builder) figure(f calc.Figure) string { return b.show(f.Value, f.Dim) }
+
+// percent writes a share (0.76) as a percentage.
+func percent(v float64) string { return calc.FormatValue(v, "%", 3) }
+
+// plainNumber writes a dimensionless number for reading at a glance:
+// three significant digits, thousands grouped with thin spaces.
+func plainNumber(x float64) string {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		return "—"
+	}
+	if math.Abs(x) < 1000 {
+		return calc.FormatNumber(x, 3)
+	}
+	mag := math.Pow(10, math.Floor(math.Log10(math.Abs(x)))-2)
+	digits := strconv.FormatFloat(math.Abs(math.Round(x/mag)*mag), 'f', 0, 64)
+	var out strings.Builder
+	if x < 0 {
+		out.WriteString("−")
+	}
+	for i, c := range digits {
+		if i > 0 && (len(digits)-i)%3 == 0 {
+			out.WriteString("\u2009")
+		}
+		out.WriteRune(c)
+	}
+	return out.String()
+}
+
+// Problems, worded.
+
+// problem is the worded problem with p, without the parameter's name ("" if none).
+func (b *builder) problem(p string) string {
+	fe := b.r.Errors[p]
+	if fe == nil {
+		return ""
+	}
+	return fe.Words(b.figure)
+}
+
+// named is p's problem preceded by its label, for lists.
+func (b *builder) named(p string) string {
+	return scenario.Label(p) + ": " + b.problem(p)
+}
+
+// toCheck says which of params have problems, or that inputs are missing.
+func (b *builder) toCheck(params ...string) string {
+	var names []string
+	seen := map[string]bool{}
+	for _, p := range params {
+		if b.r.Errors[p] != nil && !seen[p] {
+			seen[p] = true
+			names = append(names, scenario.Label(p))
+		}
+	}
+	if len(names) == 0 {
+		return "No answer yet: complete the inputs."
+	}
+	return "No answer yet. Check: " + strings.Join(names, ", ") + "."
+}
+
+// warnsAbout reports whether a warning names p.
+func (b *builder) warnsAbout(p string) bool {
+	for _, w := range b.r.Warnings {
+		if w.Param == p {
+			return true
+		}
+	}
+	return false
+}
+
+// warnText words a warning, naming its segment.
+func (b *builder) warnText(w scenario.Warning) string {
+	t := w.Words(b.figure)
+	if w.Segment > 0 {
+		t = "segment " + strconv.Itoa(w.Segment) + ": " + t
+	}
+	return t
+}
+
+// warnings is the block of the warnings of the given topics (and of those
+// about the whole scenario), each listed once on a view; match, when not
+// nil, picks warnings by another rule.
+func (b *builder) warnings(match func(scenario.Warning) bool, topics ...string) Block {
+	want := map[string]bool{"": true}
+	for _, t := range topics {
+		want[t] = true
+	}
+	var items []string
+	for _, w := range b.r.Warnings {
+		t := b.warnText(w)
+		if (want[w.Topic] || (match != nil && match(w))) && !b.warned[t] {
+			b.warned[t] = true
+			items = append(items, t)
+		}
+	}
+	return Block{Kind: BlockWarnings, Items: items}
+}
+
+// allWarnings words every warning once.
+func (b *builder) allWarnings() []string {
+	var out []string
+	seen := map[string]bool{}
+	for _, w := range b.r.Warnings {
+		if t := b.warnText(w); !seen[t] {
+			seen[t] = true
+			out = append(out, t)
+		}
+	}
+	return out
+}
+
+// others lists the problems with inputs the view uses but does not draw.
+func (b *builder) others(view string) []string {
+	var keys []string
+	for p := range b.r.Errors {
+		if b.shown[p] || !uses(view, p) {
+			continue
+		}
+		keys = append(keys, p)
+	}
+	sort.Strings(keys)
+	out := make([]string, 0, len(keys))
+	for _, k := range keys {
+		out = append(out, b.named(k))
+	}
+	return out
+}
+
+// uses reports whether a view's figures depend on p.
+func uses(view, p string) bool {
+	switch view {
+	case "convert":
+		return oneOf(p, "view", "units", "name", "liq", "t", "rho", "mu", "pv", "alt", "baro", "cv", "cvref")
+	case "regime":
+		return oneOf(p, "view", "units", "name", "liq", "t", "rho", "mu", "pv", "q", "l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw")
+	case "balance", "line", "pump":
+		return p != "cv" && p != "cvref"
+	}
+	return true
+}
+
+func oneOf(p string, set ...string) bool {
+	for _, s := range set {
+		if s == p {
+			return true
+		}
+	}
+	return false
+}
+
+// Inputs.
+
+// field starts the Field of p with what every kind shares.
+func (b *builder) field(p string, kind FieldKind, label, hint string) Field {
+	b.shown[p] = true
+	row, _, _ := scenario.Lookup(p)
+	if label == "" {
+		label = row.Box
+	}
+	if hint == "" {
+		hint = row.Hint
+	}
+	return Field{Param: p, Kind: kind, ID: "in-" + DomID(p), Label: label, Hint: hint,
+		Placeholder: row.Placeholder, Error: b.problem(p), Warn: b.warnsAbout(p)}
+}
+
+// quantity is the box and unit picker of a value; when p is the balance's
+// unknown on the Balance view, its answer stands in its place.
+func (b *builder) quantity(p, label, hint string) Field {
+	f := b.field(p, FieldQuantity, label, hint)
+	if b.view() == "balance" && b.solve() == p {
+		f.Kind, f.Solved = FieldSolved, "—"
+		if b.r.Balance != nil {
+			f.Solved = b.solvedText(b.r.Balance.Value)
+		}
+		return f
+	}
+	f.Numeric = true
+	box, unit := b.d.Box(p)
+	f.Box = box
+	f.Options = b.unitOptions(p, box, unit)
+	return f
+}
+
+// unitOptions are the options of p's unit picker; a unit typed in the box
+// shows as "as typed" rather than a picker that pretends to apply.
+func (b *builder) unitOptions(p, box, unit string) []Option {
+	choices := scenario.UnitChoices(p, b.us)
+	if num, typed := scenario.Split(box); num != "" && typed != "" && unit == "" {
+		opts := []Option{{"", "as typed", true}}
+		for _, u := range choices {
+			if u != "" {
+				opts = append(opts, Option{u, u, false})
+			}
+		}
+		return opts
+	}
+	found := false
+	for _, u := range choices {
+		found = found || u == unit
+	}
+	if !found && unit != "" {
+		choices = append([]string{unit}, choices...)
+	}
+	opts := make([]Option, 0, len(choices))
+	for _, u := range choices {
+		if u != "" {
+			opts = append(opts, Option{u, u, u == unit})
+		}
+	}
+	return opts
+}
+
+// picker is the picker of an enumerated parameter; blank, when given, is
+// the option for "not chosen". A value the vocabulary does not know is
+// kept and said to be unknown.
+func (b *builder) picker(p, label, blank string) Field {
+	f := b.field(p, FieldPicker, label, "")
+	cur := b.s.Get(p)
+	f.Options = choiceOptions(scenario.Choices(p), cur, blank)
+	return f
+}
+
+func choiceOptions(choices []scenario.Choice, cur, blank string) []Option {
+	opts := make([]Option, 0, len(choices)+2)
+	known := false
+	for _, c := range choices {
+		known = known || c.Value == cur
+	}
+	if blank != "" {
+		opts = append(opts, Option{"", blank, cur == ""})
+	}
+	if !known && cur != "" {
+		opts = append(opts, Option{cur, cur + " (not recognised)", true})
+	}
+	for _, c := range choices {
+		opts = append(opts, Option{c.Value, c.Label, c.Value == cur})
+	}
+	return opts
+}
+
+// plain is a box without a unit (a count, a coefficient, the title).
+func (b *builder) plain(p, label, hint string, numeric bool) Field {
+	f := b.field(p, FieldPlain, label, hint)
+	f.Box, _ = b.d.Box(p)
+	f.Numeric = numeric
+	return f
+}
+
+// ref is the gauge/absolute choice of a pressure.
+func (b *builder) ref(p string) Field {
+	f := b.field(p, FieldRef, "pressure reference", "")
+	cur := b.s.Get(p)
+	if cur == "" {
+		cur = "g"
+	}
+	for _, c := range scenario.Choices(p) {
+		f.Options = append(f.Options, Option{c.Value, c.Label, c.Value == cur})
+	}
+	return f
+}
+
+// fields is a block of inputs side by side.
+func fields(fs ...Field) Block { return Block{Kind: BlockFields, Fields: fs} }
+
+// toggle is the switch of an either/or group.
+func (b *builder) toggle(group string) Block {
+	g, _ := scenario.LookupGroup(group)
+	cur := b.d.SideOf(group)
+	sw := &Switch{Group: group, Label: g.Label}
+	for _, sd := range g.Sides {
+		sw.Sides = append(sw.Sides, Button{ID: "sw-" + DomID(group) + "-" + sd.Key, Text: sd.Label, Class: "seg",
+			On: sd.Key == cur, Act: Action{Do: "switch", Param: group, Value: sd.Key}})
+	}
+	return Block{Kind: BlockSwitch, Switch: sw}
+}
+
+// text, muted and computed are paragraphs.
+func text(class, id, t string) Block { return Block{Kind: BlockText, Class: class, ID: id, Text: t} }
+
+// maybe is b when ok, else an empty block keeping its place.
+func maybe(ok bool, b Block) Block {
+	if ok {
+		return b
+	}
+	return Block{Kind: BlockEmpty}
+}
+
+// DomID makes a parameter or group name fit for an element id that CSS
+// selectors name without escaping: "s2.l" → "s2-l".
+func DomID(name string) string { return strings.ReplaceAll(name, ".", "-") }
