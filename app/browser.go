@@ -134,7 +134,6 @@ func (s *sheet) onDemo(ctx app.Context, e app.Event) {
 		return
 	}
 	s.adopt(scenario.Demo(), "")
-	s.copyNote, s.showLink = "", false
 }
 
 // onBlank starts an empty sheet on the same view and unit system.
@@ -145,8 +144,7 @@ func (s *sheet) onBlank(ctx app.Context, e app.Event) {
 	}
 	var sc scenario.Scenario
 	for _, p := range []string{"view", "units"} {
-		_ = sc.Set(p, s.scen.Get(p))
+		_ = sc.Set(p, s.d.Scen.Get(p))
 	}
 	s.adopt(sc, "")
-	s.copyNote, s.showLink = "", false
 }

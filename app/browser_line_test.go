@@ -12,6 +12,7 @@ import (
 
 	"fieldhead/calc"
 	"fieldhead/calc/scenario"
+	"fieldhead/calc/scenario/present"
 
 	"github.com/chromedp/cdproto/emulation"
 	"github.com/chromedp/chromedp"
@@ -86,7 +87,8 @@ func TestBrowserLinePump(t *testing.T) {
 	expect("#npsh-margin", scenario.Show(want.NPSH.Margin, calc.Length, us))
 	expect("#npsh-ratio", calc.FormatNumber(want.NPSH.Ratio, 3))
 	expect("#npsh-note", want.NPSH.Note.String())
-	if level, _ := npshLevel(want.NPSH.Level); b.js(`document.querySelector("#npsh-level").textContent`) != level {
+	pumpDraft := scenario.NewDraft(pumpLink)
+	if level, _ := present.Build(&pumpDraft, want).Text("npsh-level"); b.js(`document.querySelector("#npsh-level").textContent`) != level {
 		t.Errorf("the NPSH verdict shows %q, want %q for level %s", b.js(`document.querySelector("#npsh-level").textContent`), level, want.NPSH.Level)
 	}
 	expect("#field-head", scenario.Show(want.Field.Head, calc.Length, us))

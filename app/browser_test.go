@@ -16,6 +16,7 @@ import (
 
 	"fieldhead/calc"
 	"fieldhead/calc/scenario"
+	"fieldhead/calc/scenario/present"
 
 	"github.com/chromedp/cdproto/emulation"
 	"github.com/chromedp/chromedp"
@@ -377,8 +378,8 @@ func TestBrowser(t *testing.T) {
 		t.Fatal(err)
 	}
 	waitResult()
-	if got := waitText("#answer-value", plainNumber(wantSingle.Run.Reynolds)); got != plainNumber(wantSingle.Run.Reynolds) {
-		t.Errorf("Regime shows Re %q, core gives %q", got, plainNumber(wantSingle.Run.Reynolds))
+	if got := waitText("#answer-value", reynoldsText(wantSingle)); got != reynoldsText(wantSingle) {
+		t.Errorf("Regime shows Re %q, core gives %q", got, reynoldsText(wantSingle))
 	}
 	if err := chromedp.Do(ctx, chromedp.Click(chromedp.CSS("#view-balance")), chromedp.WaitVisible(chromedp.CSS("#run-line"))); err != nil {
 		t.Fatalf("the balance of a single-run link shows no pipe-run friction: %v", err)
@@ -534,4 +535,13 @@ func buildSite(t *testing.T) (string, error) {
 	}
 	site := filepath.Join(dir, "site")
 	return site, writeSite(site, wasm, filepath.Join("..", "web"), "")
+}
+
+// reynoldsText is the Reynolds number as the view model words it for the
+// Regime view of a single run.
+func reynoldsText(r scenario.Result) string {
+	d := scenario.NewDraft(scenario.Scenario{})
+	_ = d.Scen.Set("view", "regime")
+	t, _ := present.Build(&d, r).Text("answer-value")
+	return t
 }

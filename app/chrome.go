@@ -1,114 +1,42 @@
 package main
 
 import (
-	"sort"
-	"strings"
+	"fieldhead/calc/scenario/present"
 
 	"github.com/maxence-charriere/go-app/v10/pkg/app"
 )
 
-// viewHints say in a few words what each view does.
-var viewHints = map[string]string{
-	"balance": "two-point energy balance",
-	"convert": "head ↔ pressure",
-	"regime":  "Re and friction",
-	"line":    "segments, EGL/HGL",
-	"pump":    "duty, NPSH, readings",
-	"report":  "the printed sheet",
+// topBar is the bar with the name, the views and the unit system.
+type topBar struct {
+	app.Compo
+	S           *sheet
+	Tabs, Units []present.Button
 }
 
-// paramLabels name the parameters in words, for lists of fields to check.
-var paramLabels = map[string]string{
-	"units": "unit system", "name": "sheet title", "view": "view",
-	"liq": "liquid", "t": "temperature", "rho": "density", "mu": "viscosity", "pv": "vapour pressure",
-	"alt": "site altitude", "baro": "barometer",
-	"p1": "pressure at 1", "p1ref": "gauge/absolute at 1", "z1": "elevation of 1", "v1": "velocity at 1", "d1": "diameter at 1",
-	"p2": "pressure at 2", "p2ref": "gauge/absolute at 2", "z2": "elevation of 2", "v2": "velocity at 2", "d2": "diameter at 2",
-	"q": "flow", "hp": "pump head", "ht": "turbine head", "hf": "friction head", "solve": "solve for", "alpha": "α",
-	"l": "length of the run", "d": "inside diameter", "nps": "nominal size", "sch": "schedule", "mat": "material",
-	"eps": "roughness", "fit": "fittings", "k": "extra ΣK", "fm": "friction method", "chw": "Hazen–Williams C",
-	"cv": "value to convert", "cvref": "gauge/absolute",
-	"pq": "data-sheet flows", "ph": "data-sheet heads", "peff": "data-sheet efficiencies", "pnpsh": "data-sheet NPSH required",
-	"spd": "speed", "pumps": "pumps working together", "zp": "pump centreline elevation", "pafter": "pump position on the line",
-	"npshr": "NPSH required (typed)", "ps": "suction gauge reading", "pd": "discharge gauge reading",
-	"zs": "suction gauge height", "zd": "discharge gauge height", "ds": "pipe diameter at the suction gauge",
-	"dd": "pipe diameter at the discharge gauge", "qm": "measured flow", "pin": "motor electrical input",
-	"etat": "turbine-and-generator efficiency",
-}
-
-// toCheck lists, in words, the fields with errors among params.
-func (s *sheet) toCheck(params ...string) string {
-	var names []string
-	for _, p := range params {
-		if s.res.Errors[p] != nil {
-			names = append(names, labelOf(p))
-		}
+// Render draws the bar; before the program runs (S nil) it shows the name
+// alone.
+func (t *topBar) Render() (ui app.UI) {
+	defer containPart(t.S, "the top bar", &ui)
+	brand := app.Div().Class("brand").Body(app.Raw(brandMark), app.Span().Text("Fieldhead"))
+	if t.S == nil {
+		return app.Header().Class("topbar").Body(brand)
 	}
-	if len(names) == 0 {
-		return "No answer yet: complete the inputs."
+	tabs := make([]app.UI, len(t.Tabs))
+	for i, b := range t.Tabs {
+		tabs[i] = button(t.S, b)
 	}
-	return "No answer yet. Check: " + strings.Join(names, ", ") + "."
-}
-
-// relevant lists, per view, the parameters whose errors matter there even
-// when the view does not draw their field (so none is silently hidden).
-var relevant = map[string]map[string]bool{
-	"convert": set("view", "units", "name", "liq", "t", "rho", "mu", "pv", "alt", "baro", "cv", "cvref"),
-	"regime":  set("view", "units", "name", "liq", "t", "rho", "mu", "pv", "q", "l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw"),
-}
-
-func set(keys ...string) map[string]bool {
-	m := make(map[string]bool, len(keys))
-	for _, k := range keys {
-		m[k] = true
+	units := make([]app.UI, len(t.Units))
+	for i, b := range t.Units {
+		units[i] = button(t.S, b)
 	}
-	return m
-}
-
-// Render draws the page.
-func (s *sheet) Render() (ui app.UI) {
-	defer s.containRender(&ui)
-	s.shown = map[string]bool{}
-	s.warned = map[string]bool{}
-	if !s.loaded {
-		return app.Div().ID("sheet").Class("sheet").Body(
-			s.header(),
-			app.Main().Body(app.P().Class("starting").Text("Starting the calculator…")),
-			cautions(),
-		)
-	}
-	s.testPanic("render")
-	var view app.UI
-	switch s.view() {
-	case "convert":
-		view = s.convertView()
-	case "regime":
-		view = s.regimeView()
-	case "line":
-		view = s.lineView()
-	case "pump":
-		view = s.pumpView()
-	case "report":
-		view = s.reportView()
-	default:
-		view = s.balanceView()
-	}
-	title := s.plain("name", "Sheet title", "(site, equipment, date)", false)
-	return app.Div().ID("sheet").Class("sheet view-"+s.view()).Body(
-		s.printHead(),
-		s.header(),
-		app.Div().Class("notices").Body(s.faultBanner(), s.updateBanner()), // always there: a notice must not move the inputs
-		app.Div().Class("titlerow").Body(title, s.shareRow()),
-		s.linkProblem(),
-		app.Main().Body(app.Div().Class("notices").Body(s.orphans()), view), // a stable slot: the list appearing must not re-create the inputs (and lose the focus)
-		cautions(),
-		s.printFoot(),
+	return app.Header().Class("topbar").Body(
+		brand,
+		app.Nav().Class("tabs").Aria("label", "views").Body(tabs...),
+		app.Div().Class("units").Body(
+			app.Span().Class("switch-label").Text("Units"),
+			app.Div().Class("segs").Attr("role", "group").Aria("label", "unit system").Body(units...),
+		),
 	)
-}
-
-// header is the bar with the name, the views and the sheet actions.
-func (s *sheet) header() app.UI {
-	return &topBar{S: s, View: s.view(), US: s.us(), Loaded: s.loaded}
 }
 
 // brandMark is the icon, drawn inline so it needs no request.
@@ -143,52 +71,27 @@ func (s *sheet) linkProblem() app.UI {
 	)
 }
 
-// orphans lists errors about parameters that this view uses but does not
-// draw, so no problem is hidden.
-func (s *sheet) orphans() app.UI {
-	rel := relevant[s.view()]
-	var keys []string
-	for p := range s.res.Errors {
-		if s.shown[p] {
-			continue
-		}
-		if s.view() == "balance" && (p == "cv" || p == "cvref") {
-			continue
-		}
-		if rel != nil && !rel[p] {
-			continue
-		}
-		keys = append(keys, p)
-	}
-	if len(keys) == 0 {
+// others lists problems with inputs that this view uses but does not draw.
+func others(items []string) app.UI {
+	if len(items) == 0 {
 		return nil
 	}
-	sort.Strings(keys)
-	var items []app.UI
-	for _, k := range keys {
-		items = append(items, app.Li().Text(s.res.Errors[k].Error()))
+	lis := make([]app.UI, len(items))
+	for i, t := range items {
+		lis[i] = app.Li().Text(t)
 	}
 	return app.Div().Class("banner").ID("other-errors").Attr("role", "alert").Body(
 		app.Span().Class("tag").Text("Check"),
 		app.Text(" Inputs of this sheet not shown here:"),
-		app.Ul().Body(items...),
+		app.Ul().Body(lis...),
 	)
 }
 
-// cautionText is the caution of every sheet, on screen and on paper.
-var cautionText = []string{
-	"Lines and vessels under pressure hold stored energy: isolate and release it before you open anything.",
-	"Shutting a valve fast, water hammer and cavitation can break equipment and injure people.",
-	"Pumps bring rotating parts and live electrical supplies: lock out and tag out before work.",
-	"A wet well is a confined space: test the air and work to your entry permit.",
-	"These figures are engineering estimates from the values entered here. Local codes, the makers' instructions and the judgement of a licensed professional decide any real action.",
-}
-
 // cautions draws the caution box.
-func cautions() app.UI {
-	items := make([]app.UI, 0, len(cautionText))
-	for _, c := range cautionText {
-		items = append(items, app.Li().Text(c))
+func cautions(list []string) app.UI {
+	items := make([]app.UI, len(list))
+	for i, c := range list {
+		items[i] = app.Li().Text(c)
 	}
 	return app.Aside().Class("cautions").ID("cautions").Body(
 		app.H2().Text("Before you act on these figures"),
@@ -198,22 +101,23 @@ func cautions() app.UI {
 
 // printHead and printFoot appear on the printed sheet only.
 func (s *sheet) printHead() app.UI {
-	name := strings.TrimSpace(s.scen.Get("name"))
-	if name == "" {
-		name = "Untitled sheet"
-	}
 	return app.Div().Class("print-only printhead").Body(
-		app.Div().Class("ph-name").Text("Fieldhead — "+name),
+		app.Div().Class("ph-name").Text("Fieldhead — "+s.vm.Name),
 		app.Div().Class("ph-date").Text("Printed "+nowText()),
 	)
 }
 
 func (s *sheet) printFoot() app.UI {
+	var names []app.UI
+	for i, m := range s.vm.Methods {
+		sep := "; "
+		if i == len(s.vm.Methods)-1 {
+			sep = "."
+		}
+		names = append(names, app.Text(m.What+sep))
+	}
 	return app.Div().Class("print-only printfoot").Body(
-		app.P().Body(app.Strong().Text("Methods: "), app.Text(methodsText)),
+		app.P().Body(append([]app.UI{app.Strong().Text("Methods (listed on the Report view): ")}, names...)...),
 		app.P().Body(app.Strong().Text("This sheet as a link: "), app.Span().Class("linktext").Text(s.link())),
 	)
 }
-
-// methodsText names the methods behind the figures, for the printed sheet.
-const methodsText = "steady-flow energy balance in head form; water properties from IAPWS-IF97 (region 1 and saturation line) and the IAPWS 2008 viscosity release; site pressure from the ISO 2533 standard atmosphere; Darcy friction factor by Colebrook–White (or Swamee–Jain, Haaland, Hazen–Williams as chosen); fittings by loss coefficients K; unit factors per NIST SP 811; pipe dimensions per ASME B36.10M/B36.19M."

@@ -3,9 +3,9 @@ package main
 import (
 	"fmt"
 	"runtime"
-	"strings"
 
 	"fieldhead/calc/scenario"
+	"fieldhead/calc/scenario/present"
 
 	"github.com/maxence-charriere/go-app/v10/pkg/app"
 )
@@ -40,22 +40,39 @@ func (s *sheet) contain(what string) {
 		defer func() {
 			if recover() != nil {
 				s.res = scenario.Result{} // no figures rather than stale ones
+				s.vm = present.Sheet{View: s.vm.View, Name: s.vm.Name, Cautions: present.Cautions}
 			}
 		}()
-		s.res = scenario.Evaluate(s.scen)
+		s.res = scenario.Evaluate(s.d.Scen)
+		s.vm = present.Build(&s.d, s.res)
 	}()
 }
 
-// containRender is deferred by Render: on a panic it names the part that
-// failed (from the stack) and draws a plain sheet that still holds every
-// input, so the person can correct or copy them.
+// containRender is deferred by Render: on a panic it draws a plain sheet
+// that still holds every input, so the person can correct or copy them.
+// (A card's own failure is contained by the card, containPart, which
+// names it by its title.)
 func (s *sheet) containRender(ui *app.UI) {
 	r := recover()
 	if r == nil {
 		return
 	}
-	s.noteFault("drawing "+panicPart(), r)
+	s.noteFault("drawing the sheet", r)
 	*ui = s.fallbackSheet()
+}
+
+// containPart is deferred by a component's Render: a panic there is
+// recorded for the banner, naming what was drawn, and the part is drawn
+// as an empty placeholder, rather than ending the program.
+func containPart(s *sheet, what string, ui *app.UI) {
+	r := recover()
+	if r == nil {
+		return
+	}
+	if s != nil {
+		s.noteFault("drawing "+what, r)
+	}
+	*ui = app.Div().Class("field")
 }
 
 // noteFault records a contained panic and logs it with its stack to the
@@ -65,87 +82,6 @@ func (s *sheet) noteFault(what string, r any) {
 	buf := make([]byte, 8<<10)
 	buf = buf[:runtime.Stack(buf, false)]
 	app.Logf("fieldhead: contained a panic while %s: %v\n%s", what, r, buf)
-}
-
-// partNames put the sheet's drawing functions in words for the banner. A
-// function not listed is named by its Go name, which still says where.
-var partNames = map[string]string{
-	"Render":       "the sheet",
-	"header":       "the top bar",
-	"balanceView":  "the Balance view",
-	"convertView":  "the Convert view",
-	"regimeView":   "the Regime view",
-	"lineView":     "the Line view",
-	"pumpView":     "the Pump view",
-	"reportView":   "the Report view",
-	"answerCard":   "the answer",
-	"answerText":   "the answer",
-	"answerLines":  "the lines under the answer",
-	"budgetCard":   "“Where the head goes”",
-	"pointCard":    "a point of the balance",
-	"betweenCard":  "“Between the points”",
-	"liquidCard":   "“Liquid and site”",
-	"regimeCard":   "the flow in the run",
-	"convertCard":  "the converted values",
-	"runInputs":    "the pipe run inputs",
-	"fittings":     "the fitting list",
-	"fittingsFor":  "the fitting list",
-	"warningList":  "the warnings",
-	"fieldNotes":   "a field's messages",
-	"quantity":     "an input",
-	"unitOptions":  "a unit picker",
-	"noteFor":      "a field's messages",
-	"choice":       "a picker",
-	"plain":        "an input",
-	"toggle":       "a switch",
-	"shareRow":     "the sheet actions",
-	"orphans":      "the list of other inputs to check",
-	"printHead":    "the printed sheet's heading",
-	"printFoot":    "the printed sheet's footer",
-	"linkProblem":  "the link notice",
-	"updateBanner": "the update notice",
-}
-
-// guardFuncs are this file's own functions, skipped when naming the part
-// that panicked.
-var guardFuncs = map[string]bool{
-	"contain": true, "containRender": true, "noteFault": true, "testPanic": true, "panicPart": true,
-}
-
-// panicPart names the innermost function of this program on the stack of
-// the panic being recovered ("the answer", or a Go name such as
-// "lineChart"). It is called from a deferred function, where the frames of
-// the panic are still on the stack.
-func panicPart() string {
-	pcs := make([]uintptr, 64)
-	n := runtime.Callers(1, pcs)
-	frames := runtime.CallersFrames(pcs[:n])
-	self, _ := frames.Next()
-	// This program's functions are "main.…" in the page and
-	// "fieldhead/app.…" in its tests: take the prefix from this function.
-	own := strings.TrimSuffix(self.Function, "panicPart")
-	afterPanic := false
-	for {
-		f, more := frames.Next()
-		if strings.HasPrefix(f.Function, "runtime.gopanic") {
-			afterPanic = true
-		} else if afterPanic && strings.HasPrefix(f.Function, own) {
-			name := f.Function[strings.LastIndexByte(f.Function, '.')+1:]
-			if strings.HasPrefix(name, "func") { // a closure: name its enclosing method
-				trimmed := strings.TrimSuffix(f.Function, "."+name)
-				name = trimmed[strings.LastIndexByte(trimmed, '.')+1:]
-			}
-			if !guardFuncs[name] {
-				if words := partNames[name]; words != "" {
-					return words
-				}
-				return name
-			}
-		}
-		if !more {
-			return "the sheet"
-		}
-	}
 }
 
 // testPanic panics when the page was started with the test-only switch
@@ -182,13 +118,16 @@ func (s *sheet) faultBanner() app.UI {
 // sheet back.
 func (s *sheet) fallbackSheet() app.UI {
 	var rows []app.UI
-	for _, p := range s.presentParams() {
-		id := "in-" + p
-		rows = append(rows, app.Div().Class("field").ID("f-"+p).Body(
-			app.Label().For(id).Class("lbl").Text(labelFor(p)),
+	for _, p := range scenario.AllParams() {
+		if s.d.Scen.Get(p) == "" {
+			continue
+		}
+		id := "in-" + present.DomID(p)
+		rows = append(rows, app.Div().Class("field").ID("f-"+present.DomID(p)).Body(
+			app.Label().For(id).Class("lbl").Text(scenario.Label(p)),
 			app.Input().Type("text").ID(id).Class("box wide").
 				Attr("autocomplete", "off").Attr("spellcheck", "false").
-				Value(s.scen.Get(p)).OnInput(s.onBox(p), app.EventScope(p)),
+				Value(s.d.Scen.Get(p)).OnInput(s.onBox(p), app.EventScope(p)),
 		))
 	}
 	return app.Div().ID("sheet").Class("sheet fallback").Body(
@@ -196,34 +135,8 @@ func (s *sheet) fallbackSheet() app.UI {
 		app.Main().Body(app.Section().Class("card").ID("fallback-inputs").Body(
 			append([]app.UI{app.H2().Text("Inputs of this sheet")}, rows...)...,
 		)),
-		cautions(),
+		cautions(present.Cautions),
 	)
-}
-
-// presentParams lists the scenario's parameters in link order.
-func (s *sheet) presentParams() []string {
-	var out []string
-	for _, p := range scenario.Params {
-		if s.scen.Get(p) != "" {
-			out = append(out, p)
-		}
-	}
-	for n := 1; n <= scenario.MaxSegments; n++ {
-		for _, f := range scenario.SegmentFields {
-			if p := scenario.SegmentParam(n, f); s.scen.Get(p) != "" {
-				out = append(out, p)
-			}
-		}
-	}
-	return out
-}
-
-// labelFor names a parameter in words for the fallback sheet.
-func labelFor(p string) string {
-	if l := paramLabels[p]; l != "" {
-		return l
-	}
-	return p
 }
 
 // keepSavedSheet handles a link refused as a whole (too long, say): rather

@@ -1,10 +1,10 @@
 package main
 
 import (
-	"strings"
+	"strconv"
 
-	"fieldhead/calc"
 	"fieldhead/calc/scenario"
+	"fieldhead/calc/scenario/present"
 
 	"github.com/maxence-charriere/go-app/v10/pkg/app"
 )
@@ -13,33 +13,25 @@ import (
 // same query string as the share link.
 const storageKey = "fieldhead.scenario"
 
-// sheet is the whole page: one scenario, its result, and the text of every
-// input box as typed. The scenario is the single source of truth; boxes and
-// unit pickers only hold what a person is in the middle of typing.
+// sheet is the page: the sheet being edited, its result and view model,
+// and the page's own state (the link, notices). It keeps state and
+// handles events; the cards draw the view model (card.go, field.go).
 type sheet struct {
 	app.Compo
 
-	scen    scenario.Scenario
+	d       scenario.Draft
 	res     scenario.Result
+	vm      present.Sheet
 	linkErr string // a problem with the link as a whole (unknown parameter, …)
 	loaded  bool   // false while pre-rendered on the server, before the wasm runs
 
-	box  map[string]string // text in each input box
-	pick map[string]string // unit chosen in each picker ("" = the default unit)
-	mode map[string]string // explicit choice of an either/or group, see groups
-
-	base     string          // page URL without the query
-	query    string          // s.scen.Encode(), also in the URL and in localStorage
-	copyNote string          // result of the last "Copy link"
-	showLink bool            // show the link as selectable text
-	fault    *fault          // the last contained panic, shown in a banner (guard.go)
-	update   bool            // a newer version of the site is installed (update.go)
-	shown    map[string]bool // parameters drawn in this render
-	warned   map[string]bool // warnings drawn in this render
-
-	segs int // segment cards shown on the Line view beyond those in the scenario (a new, empty one)
-	rows int // rows of the pump data sheet shown (at least those in the scenario)
-	wide int // chart width drawn last (see chartWidth)
+	base     string // page URL without the query
+	query    string // the scenario's link, also in the URL and in localStorage
+	copyNote string // result of the last "Copy link"
+	showLink bool   // show the link as selectable text
+	fault    *fault // the last contained panic, shown in a banner (guard.go)
+	update   bool   // a newer version of the site is installed (update.go)
+	wide     int    // chart width drawn last (see chartWidth)
 }
 
 // newSheet is the route's component. In the browser it restores the
@@ -69,6 +61,7 @@ func newSheet() app.Composer {
 		s.adopt(sc, msg)
 	}
 	s.loaded = true
+	s.wide = chartWidth()
 	return s
 }
 
@@ -77,127 +70,50 @@ func newSheet() app.Composer {
 func (s *sheet) OnMount(ctx app.Context) {
 	s.watchUpdates(ctx)
 	if app.IsClient && s.loaded {
-		perf := app.Window().Get("performance")
-		if perf.Truthy() {
+		if perf := app.Window().Get("performance"); perf.Truthy() {
 			app.Window().Set("fieldheadFirstResult", perf.Call("now").Float())
 		}
 	}
 }
 
-// adopt makes sc the current scenario and fills the boxes from it.
-func (s *sheet) adopt(sc scenario.Scenario, linkErr string) {
-	s.scen = sc
-	s.linkErr = linkErr
-	s.box = map[string]string{}
-	s.pick = map[string]string{}
-	s.mode = map[string]string{}
-	s.segs, s.rows = 0, 0
-	for _, p := range allParams() {
-		raw := sc.Get(p)
-		if raw == "" {
-			continue
-		}
-		s.box[p], s.pick[p] = s.splitForBox(p, raw)
+// OnResize redraws the charts when they need another width.
+func (s *sheet) OnResize(ctx app.Context) {
+	if w := chartWidth(); w != s.wide {
+		s.wide = w
+		return
 	}
+	ctx.PreventUpdate()
+}
+
+// adopt makes sc the sheet, with nothing of the previous one held aside.
+func (s *sheet) adopt(sc scenario.Scenario, linkErr string) {
+	s.d.Reset(sc)
+	s.linkErr = linkErr
+	s.copyNote, s.showLink = "", false
 	s.evaluate()
 }
 
-// splitForBox decides what a box and its picker show for a stored text:
-// "45L/s" → "45" with L/s picked; a unit the picker does not list stays in
-// the box as typed.
-func (s *sheet) splitForBox(p, raw string) (box, pick string) {
-	if !hasUnits(p) {
-		return raw, ""
-	}
-	num, unit := scenario.Split(raw)
-	if unit == "" {
-		return num, ""
-	}
-	if num == "" {
-		return raw, ""
-	}
-	if u, err := calc.LookupUnit(unit); err == nil && listed(p, u.Symbol) {
-		return num, u.Symbol
-	}
-	if listed(p, unit) {
-		return num, unit
-	}
-	return raw, ""
-}
-
-// hasUnits reports whether a parameter takes a value with a unit picker.
-func hasUnits(p string) bool {
-	_, ok := scenario.DimensionOf(p)
-	return ok && len(scenario.UnitChoices(p, false)) > 0
-}
-
-// listed reports whether unit is in the picker of p, in either system.
-func listed(p, unit string) bool {
-	for _, us := range []bool{false, true} {
-		for _, u := range scenario.UnitChoices(p, us) {
-			if u == unit {
-				return true
-			}
-		}
-	}
-	return false
-}
-
-// us reports whether US customary units are the defaults.
-func (s *sheet) us() bool { return s.scen.Get("units") == "us" }
-
-// unitFor is the unit a number typed into p's box is taken in.
-func (s *sheet) unitFor(p string) string {
-	if s.pick[p] != "" {
-		return s.pick[p]
-	}
-	return scenario.DefaultUnit(p, s.us())
-}
-
-// compose is the scenario text for p's box: the box as typed if it holds a
-// unit, else the number and the picker's unit.
-func (s *sheet) compose(p string) string {
-	text := strings.TrimSpace(s.box[p])
-	if text == "" || !hasUnits(p) {
-		return text
-	}
-	num, unit := scenario.Split(text)
-	if unit != "" || num == "" {
-		return text
-	}
-	if s.pick[p] == "" {
-		s.pick[p] = s.unitFor(p) // the unit is fixed once a number is typed
-	}
-	return num + s.pick[p]
-}
-
-// store writes p from its box into the scenario.
-func (s *sheet) store(p string) {
-	_ = s.scen.Set(p, s.compose(p))
-}
-
-// setParam sets a parameter directly (choices, counts) and its box.
-func (s *sheet) setParam(p, text string) {
-	s.box[p], s.pick[p] = s.splitForBox(p, text)
-	_ = s.scen.Set(p, text)
-}
-
-// evaluate recomputes the result and saves the scenario in the URL and in
-// localStorage.
+// evaluate recomputes the result and the view model and saves the
+// scenario in the URL and in localStorage.
 func (s *sheet) evaluate() {
 	s.testPanic("evaluate")
-	s.res = scenario.Evaluate(s.scen)
-	s.query = s.scen.Encode()
+	s.res = scenario.Evaluate(s.d.Scen)
+	s.query = s.d.Scen.Encode()
+	s.build()
 	if app.IsClient {
 		replaceQuery(s.query)
 		storageSet(storageKey, s.query)
 	}
 }
 
-// changed is called after any edit.
-func (s *sheet) changed() {
-	s.copyNote = ""
-	s.evaluate()
+// build makes the view model, with what only the page knows: the link
+// and the time on the printed sheet.
+func (s *sheet) build() {
+	s.vm = present.Build(&s.d, s.res)
+	if s.vm.View == "report" {
+		s.vm.SetText("report-url", s.link())
+		s.vm.SetText("report-date", nowText())
+	}
 }
 
 // link is the full share link.
@@ -208,69 +124,174 @@ func (s *sheet) link() string {
 	return s.base + "?" + s.query
 }
 
-// view is the view the scenario opens on.
-func (s *sheet) view() string {
-	switch v := s.scen.Get("view"); v {
-	case "convert", "regime", "line", "pump", "report":
-		return v
-	}
-	return "balance"
-}
+// Event handlers: each changes the Draft one way, then recomputes.
 
-// solve is the parameter the balance solves for.
-func (s *sheet) solve() string {
-	if v := s.scen.Get("solve"); v != "" {
-		return v
-	}
-	return "hp"
-}
-
-// Event handlers.
-
+// onBox records what is typed into a box.
 func (s *sheet) onBox(p string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
-		defer s.contain("recalculating after an edit to " + labelFor(p))
-		s.box[p] = ctx.JSSrc().Get("value").String()
-		before := s.scen.Get(p)
-		s.store(p)
-		if s.scen.Get(p) == before {
-			// Only the box changed (a space, a unit picked once a number is
-			// typed): the scenario, its result and the link stay as they are.
+		defer s.contain("recalculating after an edit to " + scenario.Label(p))
+		if s.d.Type(p, ctx.JSSrc().Get("value").String()) {
 			s.copyNote = ""
+			s.evaluate()
 			return
 		}
-		s.changed()
+		// Only the box changed (a space, a unit half typed): the scenario,
+		// its result and the link stay; the view model follows the box.
+		s.build()
 	}
 }
 
-func (s *sheet) onPick(p string) app.EventHandler {
+// onPicked handles a picker: a unit, a choice, a data-sheet column's unit
+// or a fitting to add.
+func (s *sheet) onPicked(p, kind string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
-		defer s.contain("changing the unit of " + labelFor(p))
-		u := ctx.JSSrc().Get("value").String()
-		if u == "" {
+		defer s.contain("changing " + scenario.Label(p))
+		v := ctx.JSSrc().Get("value").String()
+		switch kind {
+		case "unit":
+			if v == "" {
+				return
+			}
+			s.d.PickUnit(p, v)
+		case "list-unit":
+			s.d.SetListUnit(p, v)
+		case "fit":
+			if v == "" {
+				return
+			}
+			s.d.StepFitting(p, v, +1)
+		default:
+			s.d.Choose(p, v)
+		}
+		s.copyNote = ""
+		s.evaluate()
+	}
+}
+
+// onCell records a value typed into the data sheet.
+func (s *sheet) onCell(p string, row int) app.EventHandler {
+	return func(ctx app.Context, e app.Event) {
+		defer s.contain("recalculating after an edit to the data sheet")
+		s.d.SetCell(p, row, ctx.JSSrc().Get("value").String())
+		s.evaluate()
+	}
+}
+
+// onAct is the handler of a button.
+func (s *sheet) onAct(a present.Action) app.EventHandler { return s.onConfirmed(a, "") }
+
+// onConfirmed is the handler of a button that asks first when confirm is
+// not empty.
+func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
+	return func(ctx app.Context, e app.Event) {
+		defer s.contain("acting on “" + a.Do + " " + a.Param + "”")
+		if confirm != "" && !app.Window().Call("confirm", confirm).Bool() {
 			return
 		}
-		s.pick[p] = u
-		if num, unit := scenario.Split(s.box[p]); unit != "" && num != "" {
-			s.box[p] = num // the picker replaces a typed unit
+		switch a.Do {
+		case "choose":
+			s.d.Choose(a.Param, a.Value)
+		case "switch":
+			s.d.Switch(a.Param, a.Value)
+		case "seg-move":
+			delta, _ := strconv.Atoi(a.Value)
+			s.d.MoveSegment(a.N, delta)
+		case "seg-remove":
+			s.d.RemoveSegment(a.N)
+		case "seg-add":
+			s.d.AddSegment()
+		case "row-add":
+			s.d.AddRow()
+		case "row-remove":
+			s.d.RemoveRow(a.N)
+		case "fit-step":
+			s.d.StepFitting(a.Param, a.Value, a.N)
+		default:
+			return
 		}
-		s.store(p)
-		s.changed()
+		s.copyNote = ""
+		s.evaluate()
 	}
 }
 
-func (s *sheet) onChoice(p string) app.EventHandler {
-	return func(ctx app.Context, e app.Event) {
-		defer s.contain("choosing the " + labelFor(p))
-		s.setParam(p, ctx.JSSrc().Get("value").String())
-		s.changed()
+// Render draws the page.
+func (s *sheet) Render() (ui app.UI) {
+	defer s.containRender(&ui)
+	if !s.loaded {
+		return app.Div().ID("sheet").Class("sheet").Body(
+			&topBar{},
+			app.Main().Body(app.P().Class("starting").Text("Starting the calculator…")),
+			cautions(present.Cautions),
+		)
 	}
+	s.testPanic("render")
+	vm := &s.vm
+	return app.Div().ID("sheet").Class("sheet view-"+vm.View).Body(
+		s.printHead(),
+		&topBar{S: s, Tabs: vm.Tabs, Units: vm.Units},
+		app.Div().Class("notices").Body(s.faultBanner(), s.updateBanner()), // always there: a notice must not move the inputs
+		app.Div().Class("titlerow").Attr("role", "region").Aria("label", "sheet").Body(&field{S: s, F: vm.Title}, s.shareRow()),
+		s.linkProblem(),
+		app.Main().Body(
+			app.H1().Class("sr").Text(vm.Name+" — Fieldhead"),
+			app.Div().Class("notices").Body(others(vm.Others)), // a stable slot: the list appearing must not re-create the inputs
+			s.layout()),
+		cautions(vm.Cautions),
+		s.printFoot(),
+	)
 }
 
-func (s *sheet) choose(p, v string) app.EventHandler {
-	return func(ctx app.Context, e app.Event) {
-		defer s.contain("switching the " + labelFor(p))
-		s.setParam(p, v)
-		s.changed()
+// layout arranges the view's cards; a card the arrangement does not name
+// goes after the others.
+func (s *sheet) layout() app.UI {
+	vm := &s.vm
+	byID := map[string]present.Card{}
+	for _, c := range vm.Cards {
+		byID[c.ID] = c
 	}
+	used := map[string]bool{}
+	cards := func(ids ...string) []app.UI {
+		var out []app.UI
+		for _, id := range ids {
+			if c, ok := byID[id]; ok && !used[id] {
+				used[id] = true
+				out = append(out, &card{S: s, C: c, W: s.wide})
+			}
+		}
+		return out
+	}
+	div := func(class string, body ...app.UI) app.UI { return app.Div().Class(class).Body(body...) }
+	var root app.UI
+	switch vm.View {
+	case "balance":
+		root = div("layout", div("area-answer", cards("answer-card")...),
+			div("area-inputs", div("points", cards("point-1", "point-2")...), div("stack", cards("between", "liquid")...)),
+			div("area-more", cards("budget")...))
+	case "convert":
+		root = div("layout", div("area-answer", cards("convert-card")...), div("area-inputs", cards("convert-in", "liquid")...))
+	case "regime":
+		root = div("layout", div("area-answer", cards("regime-card")...), div("area-inputs", cards("run", "liquid")...))
+	case "line":
+		root = div("stack", div("duo", cards("line-card", "profile-card")...), div("stack", cards("seg-results", "segments")...))
+	case "pump":
+		root = div("stack", div("duo", div("col", cards("operating", "npsh", "turbine")...), div("col", cards("pump-chart-card", "profile-card")...)),
+			div("duo even", div("col", cards("datasheet-card", "pump-side")...), div("col", cards("pump-setup", "field")...)))
+	default:
+		root = app.Article().Class("report").Body(cards(ids(vm.Cards)...)...)
+	}
+	var rest []string
+	for _, c := range vm.Cards {
+		if !used[c.ID] {
+			rest = append(rest, c.ID)
+		}
+	}
+	return app.Div().Body(root, div("stack", cards(rest...)...))
+}
+
+func ids(cs []present.Card) []string {
+	out := make([]string, len(cs))
+	for i, c := range cs {
+		out[i] = c.ID
+	}
+	return out
 }

@@ -112,11 +112,21 @@ type Warning struct {
 	Figures []Figure
 }
 
-// warnf builds a Warning with a formatted text; Figure arguments become
-// its Figures.
-func warnf(field, format string, args ...any) Warning {
+// Warnf builds a Warning with a formatted text; Figure arguments
+// (formatted with %v) become its Figures.
+func Warnf(field, format string, args ...any) Warning {
 	t, figs := sprintFigures(format, args)
 	return Warning{Field: field, Text: t, Figures: figs}
+}
+
+// warnf is Warnf, for this package's own use.
+func warnf(field, format string, args ...any) Warning { return Warnf(field, format, args...) }
+
+// FieldErrorf builds a *FieldError as fieldErrorf does, for callers that
+// word their own checks.
+func FieldErrorf(field, format string, args ...any) *FieldError {
+	msg, figs := sprintFigures(format, args)
+	return &FieldError{Field: field, Msg: msg, Figures: figs}
 }
 
 // Words writes the warning's text with each figure written by show.

@@ -190,7 +190,7 @@ func (e *eval) site() {
 				e.fail("baro", "baro: a barometer reading is an absolute pressure and must be above zero")
 				return
 			}
-			e.res.SitePressure, e.res.SiteNote = p, "barometer reading"
+			e.res.SitePressure, e.res.SiteFrom = p, SiteBarometer
 		}
 	case e.s.Has("alt"):
 		if z, ok := e.quantity("alt"); ok {
@@ -199,11 +199,11 @@ func (e *eval) site() {
 				e.failErr("alt", err)
 				return
 			}
-			e.res.SitePressure, e.res.SiteNote = p, "ISO 2533 standard atmosphere at the site altitude"
+			e.res.SitePressure, e.res.SiteFrom = p, SiteAltitude
 		}
 	default:
-		e.res.SitePressure, e.res.SiteNote = seaLevel, "standard sea-level pressure (no altitude or barometer given)"
-		e.warn("alt", "site", "no site altitude or barometer reading: the standard sea-level pressure 101.325 kPa is used for gauge ↔ absolute and the vapour-pressure check")
+		e.res.SitePressure, e.res.SiteFrom = seaLevel, SiteStandard
+		e.warnCalc("site", calc.Warnf("alt", "no site altitude or barometer reading: the standard sea-level pressure %v absolute is used for gauge ↔ absolute and the vapour-pressure check", calc.Fig(seaLevel, calc.Pressure)))
 	}
 }
 

@@ -52,8 +52,8 @@ func (e *eval) line() *calc.Line {
 	}
 	if e.s.Has("z2") && e.s.Has(fmt.Sprintf("s%d.z", n)) {
 		if z2, good := e.quantity("z2"); good && math.Abs(z2-ln.Segments[n-1].EndZ) > 0.01 {
-			e.warn(fmt.Sprintf("s%d.z", n), "line", fmt.Sprintf("the last segment ends at %s but point 2 is at %s: the profile follows the segments",
-				ShowParam("z2", ln.Segments[n-1].EndZ, e.us), ShowParam("z2", z2, e.us)))
+			e.warnCalc("line", calc.Warnf(SegmentParam(n, "z"), "the last segment ends at %v but point 2 is at %v: the profile follows the segments",
+				calc.Fig(ln.Segments[n-1].EndZ, calc.Length), calc.Fig(z2, calc.Length)))
 		}
 	}
 	return ln

@@ -60,7 +60,7 @@ var Table = []Param{
 	{Name: "name", Label: "sheet title", Box: "Sheet title", Hint: "(site, equipment, date)", Kind: KindText},
 
 	{Name: "liq", Label: "liquid", Box: "Liquid", Kind: KindChoice, choices: func() []Choice {
-		return []Choice{{"water", "Water"}, {"seawater", "Seawater, 35 g/kg (0–40 °C)"}, {"custom", "Other liquid (typed properties)"}}
+		return []Choice{{"water", "Water"}, {"seawater", "Seawater, 35 g/kg"}, {"custom", "Other liquid (typed properties)"}}
 	}},
 	q("t", "temperature", "Temperature", "", calc.Temperature, "°C", "°F", "enter the liquid temperature"),
 	q("rho", "density", "Density", "", calc.Density, "kg/m³", "lb/ft³", "enter the liquid's density"),

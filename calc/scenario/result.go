@@ -14,7 +14,7 @@ type Result struct {
 
 	Fluid        *calc.Fluid // the liquid at its temperature
 	SitePressure float64     // Pa absolute
-	SiteNote     string      // how the site pressure was found
+	SiteFrom     SiteSource  // how the site pressure was found
 
 	Run     *RunResult          // the pipe run (Regime view; friction in the balance)
 	Line    *calc.LineResult    // the line of segments at the flow (also when the balance cannot be solved)
@@ -81,3 +81,12 @@ type ConvertRow struct {
 	Label string // e.g. "gauge pressure", "head of this liquid"
 	Text  string // formatted value with its unit
 }
+
+// SiteSource says how the site pressure was found.
+type SiteSource uint8
+
+const (
+	SiteStandard  SiteSource = iota // the standard sea-level pressure: neither altitude nor barometer given
+	SiteAltitude                    // the ISO 2533 standard atmosphere at the site altitude
+	SiteBarometer                   // the barometer reading
+)

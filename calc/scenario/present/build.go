@@ -40,7 +40,7 @@ var Views = []struct{ Key, Hint string }{
 // its result (scenario.Evaluate(d.Scen)).
 func Build(d *scenario.Draft, r scenario.Result) Sheet {
 	b := &builder{d: d, s: d.Scen, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
-	sh := Sheet{View: b.view(), US: b.us, Cautions: Cautions, Methods: Methods}
+	sh := Sheet{View: b.view(), US: b.us, Cautions: Cautions, Methods: methodsFor(b.us)}
 	sh.Name = strings.TrimSpace(b.s.Get("name"))
 	if sh.Name == "" {
 		sh.Name = "Untitled sheet"
@@ -135,7 +135,7 @@ func (b *builder) pressure(v float64, abs bool) string {
 func (b *builder) figure(f calc.Figure) string { return b.show(f.Value, f.Dim) }
 
 // percent writes a share (0.76) as a percentage.
-func percent(v float64) string { return calc.FormatValue(v, "%", 3) }
+func percent(v float64) string { return calc.FormatValue(v, "%", 4) }
 
 // plainNumber writes a dimensionless number for reading at a glance:
 // three significant digits, thousands grouped with thin spaces.

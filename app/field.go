@@ -1,0 +1,143 @@
+package main
+
+import (
+	"fieldhead/calc/scenario/present"
+
+	"github.com/maxence-charriere/go-app/v10/pkg/app"
+)
+
+// field is one input, drawn from its part of the view model. A component
+// of its own: go-app compares F with the field on screen and draws it
+// again only when it changed (S, the sheet, is compared by pointer and is
+// there for the event handlers). Handlers carry an EventScope naming the
+// parameter: go-app keeps a handler whose code is unchanged, and without
+// the scope a box reused for another parameter would write to the old one.
+type field struct {
+	app.Compo
+	S *sheet
+	F present.Field
+}
+
+// Render draws the field.
+func (f *field) Render() (ui app.UI) {
+	defer containPart(f.S, "an input", &ui)
+	x := f.F
+	switch x.Kind {
+	case present.FieldRef:
+		var btns []app.UI
+		for _, o := range x.Options {
+			btns = append(btns, app.Button().Type("button").ID("sw-"+x.Param+"-"+o.Value).
+				Class(classIf("seg", o.Selected, "on")).Aria("pressed", o.Selected).Text(o.Text).
+				OnClick(f.S.onAct(present.Action{Do: "choose", Param: x.Param, Value: o.Value}), app.EventScope(x.Param, o.Value)))
+		}
+		return app.Div().Class("ref").Body(append([]app.UI{
+			app.Div().Class("segs small").Attr("role", "group").Aria("label", x.Label).Body(btns...)}, notes(x)...)...)
+	case present.FieldSolved:
+		return app.Div().Class("field is-unknown").ID("f-" + present.DomID(x.Param)).Body(append([]app.UI{
+			app.Div().Class("lbl").Text(x.Label),
+			app.Div().Class("solved").ID("solved-"+x.Param).Body(
+				app.Span().Class("tag").Text("Unknown"),
+				app.Span().Class("solved-val").Text(x.Solved)),
+		}, notes(x)...)...)
+	}
+	bad := x.Error != ""
+	var body []app.UI
+	if x.Kind == present.FieldPicker {
+		body = []app.UI{
+			app.Label().For(x.ID).Class("lbl").Text(x.Label),
+			&selectBox{ID: x.ID, Class: classIf("pick", bad, "bad"), Options: x.Options, Param: x.Param, S: f.S},
+		}
+	} else {
+		cls := "box"
+		if x.Kind == present.FieldPlain {
+			cls = "box wide"
+		}
+		in := app.Input().Type("text").ID(x.ID).Class(classIf(cls, bad, "bad")).
+			Attr("autocomplete", "off").Attr("spellcheck", "false").Aria("invalid", bad)
+		if x.Numeric {
+			in = in.Attr("inputmode", "decimal")
+		}
+		if x.Placeholder != "" {
+			in = in.Placeholder(x.Placeholder)
+		}
+		in = in.Value(x.Box).OnInput(f.S.onBox(x.Param), app.EventScope(x.Param))
+		label := app.Label().For(x.ID).Class("lbl").Body(app.Text(x.Label), hint(x.Hint))
+		if x.Kind == present.FieldPlain {
+			body = []app.UI{label, in}
+		} else {
+			body = []app.UI{label, app.Div().Class("entry").Body(in,
+				&selectBox{ID: "unit-" + present.DomID(x.Param), Class: "unit", Label: "unit of " + x.Label, Options: x.Options, Param: x.Param, Unit: true, S: f.S})}
+		}
+	}
+	body = append(body, notes(x)...)
+	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + present.DomID(x.Param)).Body(body...)
+}
+
+// notes draws a field's problem beside it, and a pointer to the warnings
+// when one is about its value.
+func notes(x present.Field) []app.UI {
+	var out []app.UI
+	if x.Error != "" {
+		out = append(out, app.P().ID("err-"+present.DomID(x.Param)).Class("msg err").Attr("role", "alert").Body(
+			app.Span().Class("tag").Text("Check"), app.Text(" "+x.Error)))
+	}
+	if x.Warn {
+		out = append(out, app.P().Class("msg warn").Body(
+			app.Span().Class("tag").Text("Warning"), app.Text(" about this value: read it beside the result")))
+	}
+	return out
+}
+
+// hint is a short grey explanation after a label.
+func hint(h string) app.UI {
+	if h == "" {
+		return nil
+	}
+	return app.Span().Class("hint").Text(" " + h)
+}
+
+// selectBox is a <select> drawn as a component, so that its options are
+// compared as values and drawn only when they changed.
+type selectBox struct {
+	app.Compo
+	ID, Class string
+	Label     string // aria-label ("" when a <label for> names it)
+	Options   []present.Option
+	Param     string
+	Unit      bool   // a unit picker rather than a choice
+	List      bool   // the unit of a data-sheet column
+	Fit       bool   // the picker that adds a fitting
+	S         *sheet // the sheet whose handlers it calls (compared by pointer)
+}
+
+// Render draws the select.
+func (b *selectBox) Render() app.UI {
+	opts := make([]app.UI, len(b.Options))
+	for i, o := range b.Options {
+		opts[i] = app.Option().Value(o.Value).Selected(o.Selected).Text(o.Text)
+	}
+	var h app.EventHandler
+	switch {
+	case b.Fit:
+		h = b.S.onPicked(b.Param, "fit")
+	case b.List:
+		h = b.S.onPicked(b.Param, "list-unit")
+	case b.Unit:
+		h = b.S.onPicked(b.Param, "unit")
+	default:
+		h = b.S.onPicked(b.Param, "choose")
+	}
+	sel := app.Select().ID(b.ID).Class(b.Class).OnChange(h, app.EventScope(b.Param, b.Unit, b.List, b.Fit))
+	if b.Label != "" {
+		sel = sel.Aria("label", b.Label)
+	}
+	return sel.Body(opts...)
+}
+
+// classIf returns base, plus extra when cond holds.
+func classIf(base string, cond bool, extra string) string {
+	if cond {
+		return base + " " + extra
+	}
+	return base
+}

@@ -1,0 +1,164 @@
+package scenario
+
+import (
+	"testing"
+
+	"fieldhead/calc"
+)
+
+// boxesMatch checks that every box of the sheet shows what the scenario
+// holds: the number and unit of each value (Boxed), nothing for a value
+// the scenario does not hold. (The rule of the page: a box is always the
+// scenario; this project's own contract, no external source.)
+func boxesMatch(t *testing.T, what string, d *Draft) {
+	t.Helper()
+	for _, p := range AllParams() {
+		box, unit := d.Box(p)
+		raw := d.Scen.Get(p)
+		want := raw
+		if hasUnits(p) {
+			want, _ = Boxed(p, raw)
+		}
+		if box != want {
+			t.Errorf("%s: box %s shows %q, the scenario holds %q", what, p, box, raw)
+		}
+		if row, _, _ := Lookup(p); raw != "" && row.Kind == KindQuantity {
+			// The box and its picker mean the value the scenario holds
+			// ("18" with °C for "18C").
+			back := compose(p, box, unit)
+			a, errA := calc.Parse(p, back, row.Dim, DefaultUnit(p, d.US()))
+			b, errB := calc.Parse(p, raw, row.Dim, DefaultUnit(p, d.US()))
+			if (errA == nil) != (errB == nil) || a != b {
+				t.Errorf("%s: box %s with unit %q reads back as %q, the scenario holds %q", what, p, unit, back, raw)
+			}
+		}
+	}
+}
+
+func TestDraftBoxesAreTheScenario(t *testing.T) {
+	d := NewDraft(Demo())
+	boxesMatch(t, "demo", &d)
+
+	// Typing: the box holds the text as typed until another edit.
+	d.Type("q", "4")
+	if box, _ := d.Box("q"); box != "4" || d.Scen.Get("q") != "4L/s" {
+		t.Errorf("typing 4 in q: box %q, scenario %q", box, d.Scen.Get("q"))
+	}
+	d.Type("q", "45 L/")
+	if box, _ := d.Box("q"); box != "45 L/" {
+		t.Errorf("typing a half unit: box %q, want it as typed", box)
+	}
+
+	// New sheet: every box empty, nothing held aside.
+	var blank Scenario
+	_ = blank.Set("units", "si")
+	d.Reset(blank)
+	boxesMatch(t, "new sheet", &d)
+	for _, p := range []string{"z1", "z2", "q", "t", "name"} {
+		if box, _ := d.Box(p); box != "" {
+			t.Errorf("new sheet: box %s shows %q", p, box)
+		}
+	}
+
+	// Segments moved, added, removed; data-sheet rows; units switched.
+	d.Reset(Demo())
+	d.MoveSegment(1, +1)
+	boxesMatch(t, "segment moved", &d)
+	if d.Scen.Get("s2.l") != "8m" || d.Scen.Get("s1.l") != "632m" {
+		t.Errorf("moved: s1.l %q, s2.l %q", d.Scen.Get("s1.l"), d.Scen.Get("s2.l"))
+	}
+	d.AddSegment()
+	boxesMatch(t, "segment added", &d)
+	if d.ShownSegments() != 3 || d.Scen.Get("s3.nps") != "8" {
+		t.Errorf("added: %d segments, s3.nps %q", d.ShownSegments(), d.Scen.Get("s3.nps"))
+	}
+	d.RemoveSegment(1)
+	boxesMatch(t, "segment removed", &d)
+	if d.Scen.Get("s1.l") != "8m" {
+		t.Errorf("removed segment 1: s1.l %q, want the old segment 2's 8m", d.Scen.Get("s1.l"))
+	}
+	d.SetCell("ph", 1, "60")
+	boxesMatch(t, "data-sheet cell", &d)
+	if d.Scen.Get("ph") != "62,60,52,44,33m" {
+		t.Errorf("cell: ph %q", d.Scen.Get("ph"))
+	}
+	d.RemoveRow(0)
+	boxesMatch(t, "data-sheet row removed", &d)
+	if d.Scen.Get("pq") != "20,40,55,70L/s" {
+		t.Errorf("row removed: pq %q", d.Scen.Get("pq"))
+	}
+	d.Choose("units", "us")
+	boxesMatch(t, "units switched", &d)
+	if _, unit := d.Box("q"); unit != "L/s" {
+		t.Errorf("after the switch the flow's unit shows %q; a value keeps the unit it was typed in", unit)
+	}
+	if _, unit := d.Box("hp"); unit != "ft" {
+		t.Errorf("an empty box takes the new system's unit, got %q", unit)
+	}
+}
+
+func TestDraftSwitchKeepsTheOtherSide(t *testing.T) {
+	// Nothing typed is lost: a value switched away is kept aside and
+	// comes back (this project's rule).
+	d := NewDraft(Demo())
+	d.Switch("site", "baro")
+	if d.Scen.Has("alt") || d.SideOf("site") != "baro" {
+		t.Fatalf("switched to baro: alt %q, side %q", d.Scen.Get("alt"), d.SideOf("site"))
+	}
+	d.Switch("site", "alt")
+	if d.Scen.Get("alt") != "210m" {
+		t.Errorf("switched back: alt %q, want 210m", d.Scen.Get("alt"))
+	}
+	d.Switch("s1.pipe", "d")
+	if d.Scen.Has("s1.nps") || d.SideOf("s1.pipe") != "d" {
+		t.Errorf("segment group: nps %q, side %q", d.Scen.Get("s1.nps"), d.SideOf("s1.pipe"))
+	}
+	d.Switch("s1.pipe", "nps")
+	if d.Scen.Get("s1.nps") != "8" || d.Scen.Get("s1.sch") != "40" {
+		t.Errorf("segment group back: nps %q sch %q", d.Scen.Get("s1.nps"), d.Scen.Get("s1.sch"))
+	}
+}
+
+func TestDraftFittingsAndUnits(t *testing.T) {
+	d := NewDraft(Demo())
+	d.StepFitting("s1.fit", "gate", +1)
+	d.StepFitting("s1.fit", "elbow90lr", -1)
+	if got := d.Scen.Get("s1.fit"); got != "entry_sharp:1,gate:2" {
+		t.Errorf("stepped fittings: %q", got)
+	}
+	d.PickUnit("q", "gpm")
+	if got := d.Scen.Get("q"); got != "45gpm" {
+		t.Errorf("picked gpm: q %q", got)
+	}
+	d.Choose("hp", "")
+	d.PickUnit("hp", "ft")
+	d.Type("hp", "30")
+	if got := d.Scen.Get("hp"); got != "30ft" {
+		t.Errorf("a unit picked for an empty box: hp %q, want 30ft", got)
+	}
+}
+
+func TestSplitUnicodeMinus(t *testing.T) {
+	// calc.Parse reads U+2212 as a minus (calc/quantity.go); Split must
+	// agree, so the box keeps the sign with the number.
+	if n, u := Split("−18kPa"); n != "−18" || u != "kPa" {
+		t.Errorf("Split(−18kPa) = %q, %q", n, u)
+	}
+}
+
+func TestEveryErrorAtOnce(t *testing.T) {
+	// Every input that cannot be read is reported in one evaluation, not
+	// after the ones read before it are fixed (this project's rule).
+	s := Demo()
+	_ = s.Set("t", "warm")
+	_ = s.Set("q", "45 furlongs")
+	_ = s.Set("s2.l", "long")
+	_ = s.Set("liq", "mercury")
+	_ = s.Set("ph", "62,59,x,44,33m")
+	r := Evaluate(s)
+	for _, p := range []string{"t", "q", "s2.l", "liq", "ph"} {
+		if r.Errors[p] == nil {
+			t.Errorf("no problem reported on %s (have %v)", p, r.Errors)
+		}
+	}
+}

@@ -1,0 +1,190 @@
+package present
+
+import (
+	"strings"
+
+	"fieldhead/calc"
+)
+
+// liquidCard is the liquid, its temperature and the site pressure.
+func (b *builder) liquidCard() Card {
+	blocks := []Block{fields(b.picker("liq", "", ""))}
+	if b.s.Get("liq") == "custom" {
+		blocks = append(blocks, fields(b.quantity("rho", "", ""), b.quantity("mu", "", ""), b.quantity("pv", "", "")))
+	} else {
+		blocks = append(blocks, fields(b.quantity("t", "", "")))
+	}
+	fluid := ""
+	if f := b.r.Fluid; f != nil {
+		fluid = b.fluidName() + ": density " + b.show(f.Density, calc.Density) + " · viscosity " +
+			b.show(f.Viscosity, calc.DynamicViscosity) + " · vapour pressure " + b.absolute(f.VapourPressure)
+	}
+	blocks = append(blocks, text("computed", "fluid", fluid), b.toggle("site"))
+	if b.d.SideOf("site") == "baro" {
+		blocks = append(blocks, fields(b.quantity("baro", "", "")))
+	} else {
+		blocks = append(blocks, fields(b.quantity("alt", "", "")))
+	}
+	site := ""
+	if b.r.SitePressure > 0 {
+		site = "site pressure " + b.absolute(b.r.SitePressure) + " — " + siteNotes[b.r.SiteFrom]
+	}
+	blocks = append(blocks, text("computed", "site", site), b.warnings(nil, "liquid", "site"))
+	return Card{ID: "liquid", Class: "liquid", Title: "Liquid and site", Blocks: blocks}
+}
+
+// siteNotes say how the site pressure was found.
+var siteNotes = []string{
+	"standard sea-level pressure (no altitude or barometer given)",
+	"ISO 2533 standard atmosphere at the site altitude",
+	"barometer reading",
+}
+
+// fluidName names the liquid at its temperature in the sheet's units.
+func (b *builder) fluidName() string {
+	f := b.r.Fluid
+	switch strings.TrimSpace(b.s.Get("liq")) {
+	case "custom":
+		return "liquid of the typed properties"
+	case "seawater":
+		return "seawater (35 g/kg) at " + b.show(f.Temperature, calc.Temperature)
+	}
+	return "water at " + b.show(f.Temperature, calc.Temperature)
+}
+
+// runInputs are the inputs of one pipe run; withFlow adds the flow (the
+// Regime view has no other place for it).
+func (b *builder) runInputs(withFlow bool) []Block {
+	var first []Field
+	if withFlow {
+		first = append(first, b.quantity("q", "", ""))
+	}
+	first = append(first, b.quantity("l", "", ""))
+	out := []Block{fields(first...), b.toggle("pipe")}
+	if b.d.SideOf("pipe") == "d" {
+		out = append(out, fields(b.quantity("d", "", "")))
+	} else {
+		out = append(out, fields(b.picker("nps", "", "choose…"), b.picker("sch", "", "choose…")))
+	}
+	out = append(out, b.toggle("rough"))
+	if b.d.SideOf("rough") == "eps" {
+		out = append(out, fields(b.quantity("eps", "", "")))
+	} else {
+		out = append(out, fields(b.picker("mat", "", "choose…")))
+	}
+	out = append(out, b.fittings("fit"), fields(b.plain("k", "", "", true), b.picker("fm", "", "")))
+	if b.s.Get("fm") == calc.MethodHazenWilliams.String() {
+		out = append(out, fields(b.plain("chw", "", "", true)))
+	}
+	return out
+}
+
+// regimeView is one pipe run: Reynolds number, regime, α and friction.
+func (b *builder) regimeView() []Card {
+	res := b.regimeCard()
+	run := Card{ID: "run", Class: "run", Title: "Pipe run", Blocks: b.runInputs(true)}
+	return []Card{res, run, b.liquidCard()}
+}
+
+// regimeCard shows the run's results.
+func (b *builder) regimeCard() Card {
+	c := Card{ID: "regime-card", Class: "answer-card", Title: "Flow in the run"}
+	r := b.r.Run
+	if r == nil {
+		c.Blocks = []Block{{Kind: BlockAnswer, ID: "answer", Answer: &Answer{None: true, NoneID: "answer-value",
+			Why: b.toCheck("liq", "t", "rho", "mu", "pv", "q", "l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw")}}}
+		return c
+	}
+	friction := calc.FormatNumber(r.Friction, 4)
+	if r.FrictionLow != r.FrictionHigh {
+		friction += " (between " + calc.FormatNumber(r.FrictionLow, 4) + " and " + calc.FormatNumber(r.FrictionHigh, 4) + ")"
+	}
+	total := b.head(r.TotalLoss)
+	if r.TotalLossLow != r.TotalLossHigh {
+		total += " (between " + b.head(r.TotalLossLow) + " and " + b.head(r.TotalLossHigh) + ")"
+	}
+	pipe := b.param("d", r.Diameter) + " inside"
+	if r.Pipe != nil {
+		pipe = "NPS " + r.Pipe.NPS + " " + r.Pipe.Schedule + " (" + r.Pipe.Standard + "): " + pipe
+	}
+	rough := b.param("eps", r.Roughness)
+	if r.Material != nil {
+		rough += " (" + r.Material.Name + ")"
+	}
+	c.Blocks = []Block{
+		{Kind: BlockAnswer, ID: "answer", Answer: &Answer{Label: "Reynolds number",
+			Values: []Value{{"answer-value", plainNumber(r.Reynolds)}},
+			Badge:  r.Regime.String() + " flow", BadgeID: "regime"}},
+		{Kind: BlockFacts, Facts: []Fact{
+			{Label: "mean velocity", Value: b.show(r.Velocity, calc.Velocity)},
+			{Label: "kinetic-energy factor α", Value: calc.FormatNumber(r.Alpha, 3)},
+			{Label: "Darcy friction factor f", Value: friction},
+			{Label: "pipe friction", Value: b.head(r.MajorLoss)},
+			{Label: "fittings", Value: b.head(r.MinorLoss) + " (ΣK " + calc.FormatNumber(r.SumK, 3) + ")"},
+			{Label: "friction head of the run", Value: total, Key: true},
+			{Label: "pipe", Value: pipe},
+			{Label: "roughness", Value: rough},
+			{Label: "length", Value: b.param("l", r.Length)},
+		}},
+		b.warnings(nil, "run", "liquid"),
+	}
+	return c
+}
+
+// convertView is head ↔ pressure ↔ water column, gauge ↔ absolute.
+func (b *builder) convertView() []Card {
+	in := Card{ID: "convert-in", Title: "Value to convert", Blocks: []Block{
+		fields(b.quantity("cv", "", "")), fields(b.ref("cvref")),
+	}}
+	return []Card{b.convertCard(), in, b.liquidCard()}
+}
+
+// convertCard lists the value in every form the sheet's reader needs, in
+// the sheet's unit system.
+func (b *builder) convertCard() Card {
+	c := Card{ID: "convert-card", Class: "answer-card", Title: "The same value as"}
+	cr := b.r.Convert
+	if cr == nil {
+		c.Blocks = []Block{{Kind: BlockAnswer, ID: "answer", Answer: &Answer{None: true, NoneID: "answer-value",
+			Why: b.toCheck("cv", "cvref", "liq", "t", "rho", "mu", "pv", "alt", "baro")}}}
+		return c
+	}
+	t := &Table{ID: "answer", Class: "conv"}
+	row := func(label, unit string, v float64) {
+		t.Rows = append(t.Rows, Row{Head: label, Cells: []Cell{{Text: calc.FormatValue(v, unit, 5)}}})
+	}
+	// The units of each row, SI then US; "" leaves the row out.
+	units := func(si, us string) string {
+		if b.us {
+			return us
+		}
+		return si
+	}
+	rows := []struct {
+		label, unit string
+		v           float64
+		liquid      bool // needs the liquid's density
+	}{
+		{"gauge pressure", units("kPa", "psi"), cr.Gauge, false},
+		{"gauge pressure", units("bar", ""), cr.Gauge, false},
+		{"absolute pressure", units("kPa", "psi"), cr.Absolute, false},
+		{"head of this liquid (gauge)", units("m", "ft"), cr.Head, true},
+		{"head of this liquid (absolute)", units("m", "ft"), 0, true},
+		{"conventional water column", units("mH2O", "ftH2O"), cr.Gauge, false},
+		{"conventional water column", units("", "inH2O"), cr.Gauge, false},
+	}
+	for _, r := range rows {
+		switch {
+		case r.unit == "", r.liquid && b.r.Fluid == nil:
+			continue
+		case r.label == "head of this liquid (absolute)":
+			r.v = cr.Absolute / (b.r.Fluid.Density * calc.StandardGravity)
+		}
+		row(r.label, r.unit, r.v)
+	}
+	if len(t.Rows) > 0 {
+		t.Rows[0].Class = "first"
+	}
+	c.Blocks = []Block{{Kind: BlockTable, Table: t}, b.warnings(nil, "convert", "site", "liquid")}
+	return c
+}

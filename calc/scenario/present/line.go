@@ -1,0 +1,385 @@
+package present
+
+import (
+	"strconv"
+	"strings"
+
+	"fieldhead/calc"
+	"fieldhead/calc/scenario"
+)
+
+// lineView is the pipe between the points as segments, their losses and
+// the grade lines.
+func (b *builder) lineView() []Card {
+	return []Card{b.lineCard(), b.profileCard(), b.segmentTableCard(), b.segmentList()}
+}
+
+// lineCard is the line's answer: its total loss at the flow.
+func (b *builder) lineCard() Card {
+	n := b.d.ShownSegments()
+	a := &Answer{Label: "Friction and fittings", NoneID: "line-loss"}
+	facts := Block{Kind: BlockEmpty}
+	br := b.r.Balance
+	if br == nil || br.Line == nil {
+		a.None, a.Why = true, "Describe the pipe below as segments, from point 1 to point 2."
+		if n > 0 {
+			a.Why = b.toCheck(b.lineInputs()...)
+		}
+	} else {
+		l := br.Line
+		a.Label = "Friction and fittings at " + b.param("q", br.Q)
+		a.Values = []Value{{"line-loss", b.head(l.TotalLoss)}}
+		if l.Transitional && l.TotalLossLow != l.TotalLossHigh {
+			a.Subs = []string{"transitional flow in the line: between " + b.head(l.TotalLossLow) + " and " + b.head(l.TotalLossHigh)}
+		}
+		length := ""
+		if len(br.Profile) > 0 {
+			length = b.param("l", br.Profile[len(br.Profile)-1].Distance)
+		}
+		facts = Block{Kind: BlockFacts, Facts: []Fact{
+			{Label: "pipe friction", Value: b.head(l.MajorLoss)},
+			{Label: "fittings", Value: b.head(l.MinorLoss)},
+			{Label: "changes of diameter", Value: b.head(l.TransitionLoss)},
+			{Label: "length of the line", Value: length},
+			{Label: "segments", Value: strconv.Itoa(len(l.Segments))},
+		}}
+	}
+	isLine := func(w scenario.Warning) bool {
+		n, _ := splitSegment(w.Param)
+		return w.Topic == "line" || n > 0 || w.Segment > 0
+	}
+	return Card{ID: "line-card", Class: "answer-card", Title: "Line, point 1 to point 2", Blocks: []Block{
+		{Kind: BlockAnswer, ID: "answer", Answer: a}, facts, fields(b.pumpPlace(n)), b.warnings(isLine),
+	}}
+}
+
+// splitSegment reads "s3.d" as 3 and "d"; 0 for another name.
+func splitSegment(p string) (int, string) {
+	if !strings.HasPrefix(p, "s") {
+		return 0, ""
+	}
+	num, f, ok := strings.Cut(p[1:], ".")
+	n, err := strconv.Atoi(num)
+	if !ok || err != nil || n < 1 {
+		return 0, ""
+	}
+	return n, f
+}
+
+// lineInputs are the parameters the line's result depends on.
+func (b *builder) lineInputs() []string {
+	out := balanceInputs()
+	for n := 1; n <= b.d.ShownSegments(); n++ {
+		for _, f := range scenario.SegmentFields {
+			out = append(out, scenario.SegmentParam(n, f))
+		}
+	}
+	return out
+}
+
+// pumpPlace is the choice of where the pump sits on the line.
+func (b *builder) pumpPlace(n int) Field {
+	f := b.field("pafter", FieldPicker, "", "")
+	cur := strings.TrimSpace(b.s.Get("pafter"))
+	choices := []scenario.Choice{}
+	for k := 0; k <= n; k++ {
+		v := strconv.Itoa(k)
+		label := "after segment " + v
+		switch {
+		case k == 0:
+			label = "at point 1, before segment 1"
+		case k == n:
+			label += ", at point 2"
+		}
+		choices = append(choices, scenario.Choice{Value: v, Label: label})
+	}
+	f.Options = choiceOptions(choices, cur, "not given: after segment 1, or at point 1 with one segment")
+	for i := range f.Options {
+		if strings.HasSuffix(f.Options[i].Text, "(not recognised)") {
+			f.Options[i].Text = cur + " (not a segment of this line)"
+		}
+	}
+	return f
+}
+
+// pumpAfter is the segment the pump follows as the link gives it, or by
+// the vocabulary's default: after segment 1 when there are two or more,
+// else at point 1. −1 when pafter cannot be read.
+func (b *builder) pumpAfter() int {
+	if v := strings.TrimSpace(b.s.Get("pafter")); v != "" {
+		k, err := strconv.Atoi(v)
+		if err != nil || k < 0 {
+			return -1
+		}
+		return k
+	}
+	if b.s.SegmentCount() > 1 {
+		return 1
+	}
+	return 0
+}
+
+// profileCard holds the grade-line chart.
+func (b *builder) profileCard() Card {
+	ch := b.profileChart("profile-chart", "Dashed: the energy grade line (total head). Accent: the hydraulic grade line, one velocity head below it; its height above the pipe is the pressure head in the pipe. Dotted: the level at which the pressure in the pipe would fall to the liquid's vapour pressure; the hydraulic grade line must stay well above it.")
+	if ch.Kind == BlockEmpty {
+		ch = text("muted", "", "Drawn once the line has a result.")
+	}
+	return Card{ID: "profile-card", Class: "chart-card", Title: "Energy and hydraulic grade lines", Blocks: []Block{ch}}
+}
+
+// profileChart is the grade lines along the line in display units, an
+// empty block without a line.
+func (b *builder) profileChart(id, caption string) Block {
+	br := b.r.Balance
+	if br == nil || len(br.Profile) == 0 {
+		return Block{Kind: BlockEmpty}
+	}
+	lu, zu := displayUnit("l", b.us), displayUnit("z1", b.us)
+	n := len(br.Profile)
+	dist, z, egl, hgl := make([]float64, n), make([]float64, n), make([]float64, n), make([]float64, n)
+	for i, p := range br.Profile {
+		dist[i], z[i], egl[i], hgl[i] = lu.FromSI(p.Distance), zu.FromSI(p.Z), zu.FromSI(p.EGL), zu.FromSI(p.HGL)
+	}
+	ch := &Chart{ID: id, Kind: "profile", Caption: caption,
+		Title:  "Along the line at " + b.param("q", br.Q),
+		XLabel: "distance from point 1 (" + lu.Symbol + ")",
+		YLabel: "elevation and head (" + zu.Symbol + ", gauge basis)",
+		Curves: []Curve{
+			{Role: RolePipe, Name: "pipe elevation", X: dist, Y: z},
+			{Role: RoleEGL, Name: "energy grade line (EGL)", X: dist, Y: egl},
+			{Role: RoleHGL, Name: "hydraulic grade line (HGL)", X: dist, Y: hgl},
+		}}
+	if len(b.r.VapourLine) == n {
+		v := make([]float64, n)
+		for i, y := range b.r.VapourLine {
+			v[i] = zu.FromSI(y)
+		}
+		ch.Curves = append(ch.Curves, Curve{Role: RoleVapour, Name: "vapour-pressure line", X: dist, Y: v})
+	}
+	first, last := br.Profile[0], br.Profile[n-1]
+	ch.Markers = append(ch.Markers, Marker{X: dist[0], Y: zu.FromSI(first.Z), Label: "1"}, Marker{X: dist[n-1], Y: zu.FromSI(last.Z), Label: "2"})
+	if k := b.pumpAfter(); br.PumpHead > 0 && k >= 0 {
+		for i, p := range br.Profile {
+			if p.Segment == k+1 {
+				ch.Markers = append(ch.Markers, Marker{X: dist[i], Y: egl[i], Label: "pump", Pump: true})
+				break
+			}
+		}
+	}
+	return Block{Kind: BlockChart, ID: id, Chart: ch}
+}
+
+// displayUnit is the unit a parameter is shown in.
+func displayUnit(param string, us bool) calc.Unit {
+	u, err := calc.LookupUnit(scenario.DefaultUnit(param, us))
+	if err != nil {
+		return calc.Unit{Factor: 1}
+	}
+	return u
+}
+
+// segmentTableCard is the table of losses by segment.
+func (b *builder) segmentTableCard() Card {
+	c := Card{ID: "seg-results", Title: "Losses by segment"}
+	t := b.segmentTable()
+	if br := b.r.Balance; br != nil && br.Line != nil {
+		c.Title += " at " + b.param("q", br.Q)
+	}
+	c.Blocks = []Block{t}
+	return c
+}
+
+// segmentTable lists each segment's flow and losses; an empty block
+// without a line.
+func (b *builder) segmentTable() Block {
+	br := b.r.Balance
+	if br == nil || br.Line == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	l := br.Line
+	cols := []string{"segment", "velocity", "Reynolds number", "regime", "friction factor f", "pipe friction", "fittings (ΣK)", "change of diameter"}
+	t := &Table{ID: "seg-table", Class: "grid figures", Head: cols}
+	cell := func(col int, text string) Cell { return Cell{Text: text, Label: cols[col]} }
+	for i, r := range l.Segments {
+		f := calc.FormatNumber(r.Friction, 4)
+		if r.FrictionLow != r.FrictionHigh {
+			f = calc.FormatNumber(r.FrictionLow, 4) + "–" + calc.FormatNumber(r.FrictionHigh, 4)
+		}
+		t.Rows = append(t.Rows, Row{Head: "segment " + strconv.Itoa(i+1), Cells: []Cell{
+			cell(1, b.show(r.Velocity, calc.Velocity)),
+			cell(2, plainNumber(r.Reynolds)),
+			{Text: r.Regime.String(), Label: cols[3], Badge: "rg rg-" + r.Regime.String()},
+			cell(4, f),
+			cell(5, b.head(r.MajorLoss)),
+			cell(6, b.head(r.MinorLoss)+" ("+calc.FormatNumber(r.SumK, 3)+")"),
+			cell(7, b.head(r.TransitionLoss)),
+		}})
+	}
+	t.Foot = []Row{
+		{Head: "whole line", HeadSpan: 5, Class: "sum", Cells: []Cell{
+			cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss))}},
+		{Head: "friction and fittings, point 1 to point 2", HeadSpan: 5, Class: "sum total", Cells: []Cell{
+			{ID: "seg-total", Text: b.head(l.TotalLoss), Span: 3}}},
+	}
+	return Block{Kind: BlockTable, Table: t}
+}
+
+// segmentList is the ordered list of segment cards from point 1 to point
+// 2, with the pump where it sits.
+func (b *builder) segmentList() Card {
+	n := b.d.ShownSegments()
+	pump := b.pumpAfter()
+	br := b.r.Balance
+	hasPump := b.solve() == "hp" || b.s.Has("hp") || b.s.Has("pq")
+	elev := func(p string, z float64) string {
+		switch {
+		case br != nil:
+			return "elevation " + b.param(p, z) + " (on the Balance view)"
+		case b.s.Has(p):
+			return "elevation " + b.asEntered(p) + " (on the Balance view)"
+		}
+		return "elevation not given (on the Balance view)"
+	}
+	var z1, z2 float64
+	if br != nil {
+		z1, z2 = br.In.Z, br.Out.Z
+	}
+	pumpNode := func() Block {
+		detail := "(its data sheet is on the Pump view)"
+		if b.s.Has("zp") {
+			detail = "centreline " + b.asEntered("zp")
+		}
+		return Block{Kind: BlockNode, Node: &Node{ID: "pump-node", Num: "▲", Title: "Pump", Detail: detail, Pump: true}}
+	}
+	blocks := []Block{{Kind: BlockNode, Node: &Node{ID: "node-1", Num: "1", Title: "Point 1", Detail: elev("z1", z1)}}}
+	for i := 1; i <= n; i++ {
+		if pump == i-1 && hasPump {
+			blocks = append(blocks, pumpNode())
+		}
+		c := b.segmentCard(i, n)
+		blocks = append(blocks, Block{Kind: BlockCard, Card: &c})
+	}
+	if pump == n && n > 0 && hasPump {
+		blocks = append(blocks, pumpNode())
+	}
+	blocks = append(blocks, Block{Kind: BlockNode, Node: &Node{ID: "node-2", Num: "2", Title: "Point 2", Detail: elev("z2", z2)}})
+	label := "Add a segment"
+	if n == 0 && b.s.Has("l") {
+		label = "Make the pipe run segment 1"
+	}
+	blocks = append(blocks, Block{Kind: BlockButtons, Buttons: []Button{{ID: "seg-add", Text: "+ " + label, Class: "act",
+		Disabled: n >= scenario.MaxSegments, Act: Action{Do: "seg-add"}}}})
+	return Card{ID: "segments", Class: "seglist", Title: "Segments, in the direction of flow", Blocks: blocks}
+}
+
+// segmentCard is one segment's inputs and its figures at the flow.
+func (b *builder) segmentCard(n, count int) Card {
+	num := strconv.Itoa(n)
+	p := func(f string) string { return scenario.SegmentParam(n, f) }
+	zHint := ""
+	if n == count {
+		zHint = "(blank: at point 2)"
+	}
+	confirm := ""
+	for _, f := range scenario.SegmentFields {
+		if b.s.Has(p(f)) {
+			confirm = "Remove segment " + num + " and its values?"
+		}
+	}
+	c := Card{ID: "seg-" + num, Class: "seg", Num: num, Title: "Segment " + num, Controls: []Button{
+		{ID: "seg-up-" + num, Text: "↑", Label: "move segment " + num + " up", Class: "step", Disabled: n == 1, Act: Action{Do: "seg-move", N: n, Value: "-1"}},
+		{ID: "seg-down-" + num, Text: "↓", Label: "move segment " + num + " down", Class: "step", Disabled: n == count, Act: Action{Do: "seg-move", N: n, Value: "+1"}},
+		{ID: "seg-del-" + num, Text: "✕", Label: "remove segment " + num, Class: "step", Confirm: confirm, Act: Action{Do: "seg-remove", N: n}},
+	}}
+	blocks := []Block{fields(b.quantity(p("l"), "", ""), b.quantity(p("z"), "", zHint)), b.toggle(p("pipe"))}
+	if b.d.SideOf(p("pipe")) == "d" {
+		blocks = append(blocks, fields(b.quantity(p("d"), "", "")))
+	} else {
+		blocks = append(blocks, fields(b.picker(p("nps"), "", "choose…"), b.picker(p("sch"), "", "choose…")))
+	}
+	blocks = append(blocks, b.toggle(p("rough")))
+	if b.d.SideOf(p("rough")) == "eps" {
+		blocks = append(blocks, fields(b.quantity(p("eps"), "", "")))
+	} else {
+		blocks = append(blocks, fields(b.picker(p("mat"), "", "choose…")))
+	}
+	blocks = append(blocks, b.fittings(p("fit")), fields(b.plain(p("k"), "", "", true)))
+	line := ""
+	if br := b.r.Balance; br != nil && br.Line != nil && n <= len(br.Line.Segments) {
+		r := br.Line.Segments[n-1]
+		line = "velocity " + b.show(r.Velocity, calc.Velocity) + " · Re " + plainNumber(r.Reynolds) + " (" + r.Regime.String() +
+			") · pipe friction " + b.head(r.MajorLoss) + " + fittings " + b.head(r.MinorLoss)
+		if r.TransitionLoss != 0 {
+			line += " + change of diameter " + b.head(r.TransitionLoss)
+		}
+	}
+	c.Blocks = append(blocks, text("computed", "seg-line-"+num, line))
+	return c
+}
+
+// lineSummary stands in the Balance view for the single run's inputs when
+// the friction comes from a line of segments.
+func (b *builder) lineSummary(n int) Block {
+	what := "Friction and fittings come from the line of " + strconv.Itoa(n) + " segments"
+	if n == 1 {
+		what = "Friction and fittings come from the line of 1 segment"
+	}
+	t := what + ": shown once the balance has an answer."
+	if br := b.r.Balance; br != nil && br.Line != nil {
+		l := br.Line
+		t = what + ": pipe friction " + b.head(l.MajorLoss) + " + fittings " + b.head(l.MinorLoss) +
+			" + changes of diameter " + b.head(l.TransitionLoss) + " = " + b.head(l.TotalLoss)
+	}
+	return Block{Kind: BlockText, ID: "line-total", Class: "computed", Text: t, Buttons: []Button{
+		{ID: "to-line", Text: "Open the Line view", Class: "act", Act: Action{Do: "choose", Param: "view", Value: "line"}}}}
+}
+
+// fittings is the fitting editor of p ("fit", "s2.fit").
+func (b *builder) fittings(p string) Block {
+	b.shown[p] = true
+	list, err := scenario.ParseFittings(b.s.Get(p))
+	f := &Fittings{Param: p, AddID: "add-fit", Usable: err == nil, Open: err != nil || b.r.Errors[p] != nil}
+	if p != "fit" {
+		f.AddID = "add-" + DomID(p)
+	}
+	for _, fc := range list {
+		name := fittingName(fc.Key)
+		f.Items = append(f.Items, Fitting{Key: fc.Key, Name: name, Count: fc.Count,
+			Less: Button{Text: "−", Label: "one fewer " + name, Class: "step", Act: Action{Do: "fit-step", Param: p, Value: fc.Key, N: -1}},
+			More: Button{Text: "+", Label: "one more " + name, Class: "step", Act: Action{Do: "fit-step", Param: p, Value: fc.Key, N: +1}},
+		})
+	}
+	f.Add = append([]Option{{"", "Add a fitting…", true}}, choiceOptions(scenario.Choices("fit"), "", "")...)
+	f.AsText = b.plain(p, "key:count, comma separated", "", false)
+	return Block{Kind: BlockFittings, Fittings: f}
+}
+
+// fittingName is the name of a fitting key.
+func fittingName(key string) string {
+	for _, c := range scenario.Choices("fit") {
+		if c.Value == key {
+			return c.Label
+		}
+	}
+	return key
+}
+
+// asEntered is a value as typed, its number and unit spaced for reading
+// ("45L/s" → "45 L/s"); one typed without a unit names the default unit it
+// is taken in.
+func (b *builder) asEntered(p string) string {
+	raw := strings.TrimSpace(b.s.Get(p))
+	row, _, _ := scenario.Lookup(p)
+	if row.Kind != scenario.KindQuantity {
+		return raw
+	}
+	num, unit := scenario.Split(raw)
+	switch {
+	case num == "":
+		return raw
+	case unit == "":
+		return num + " " + scenario.DefaultUnit(p, b.us) + " (default unit)"
+	}
+	return num + " " + unit
+}

@@ -1,0 +1,441 @@
+package present
+
+import (
+	"strconv"
+
+	"fieldhead/calc"
+	"fieldhead/calc/scenario"
+)
+
+// The Pump view: where the pump runs on the line, the NPSH margin, the
+// pump and system chart, the data sheet, the pump as installed, the field
+// check from gauge readings and, for a line that feeds a turbine, the
+// turbine's output.
+
+// pumpView is the Pump view. With the balance solved for a turbine head it
+// shows the turbine side instead.
+func (b *builder) pumpView() []Card {
+	if b.solve() == "ht" {
+		return []Card{b.turbineCard(), b.profileCard(), {ID: "pump-side", Title: "Pump side", Blocks: []Block{
+			text("muted", "", "The pump's operating point, NPSH and data sheet apply when the balance solves for the pump head."),
+			{Kind: BlockButtons, Buttons: []Button{{ID: "to-hp", Text: "Solve for the pump head", Class: "act",
+				Act: Action{Do: "choose", Param: "solve", Value: "hp"}}}},
+		}}}
+	}
+	cards := []Card{b.operatingCard(), b.npshCard(), b.pumpChartCard(), b.dataSheetCard(), b.pumpSetupCard(), b.fieldCard()}
+	if b.s.Has("etat") {
+		cards = append(cards, b.turbineCard())
+	}
+	return cards
+}
+
+// operatingCard is where the pump runs on the line.
+func (b *builder) operatingCard() Card {
+	b.shown["solve"] = true
+	pr := b.r.Pump
+	a := &Answer{Label: "Operating point", None: true, NoneID: "op-q"}
+	switch {
+	case pr == nil:
+		a.Why = "Enter the pump's data sheet below: at least three flows and heads."
+		if b.s.Has("pq") || b.s.Has("ph") {
+			a.Why = b.toCheck("pq", "ph", "peff", "pnpsh", "spd", "pumps")
+		}
+	case pr.Operating == nil:
+		for _, p := range []string{"pq", "ph", "spd", "pumps"} {
+			if m := b.problem(p); m != "" {
+				a.Why = m
+				break
+			}
+		}
+		if a.Why == "" {
+			a.Why = b.toCheck(balanceInputs()...)
+		}
+	default:
+		op := pr.Operating
+		a = &Answer{Label: "Operating point: flow and head",
+			Values: []Value{{"op-q", b.param("q", op.Q)}, {"op-h", b.head(op.H)}}}
+		if br := b.r.Balance; br != nil && br.Solve == calc.SolvePumpHead {
+			a.Subs = []string{"duty asked for " + b.param("q", br.Q) + ": the line needs " + b.head(br.Value) + " there"}
+		}
+	}
+	facts := b.operatingFacts()
+	return Card{ID: "operating", Class: "answer-card", Title: "Where the pump runs", Blocks: []Block{
+		{Kind: BlockAnswer, ID: "answer", Answer: a},
+		maybe(facts != nil, Block{Kind: BlockFacts, Class: "facts", Facts: facts}),
+		maybe(b.problem("solve") != "", text("msg err", "err-solve", b.problem("solve"))),
+		b.warnings(nil, "pump", "balance"),
+	}}
+}
+
+// operatingFacts are the figures at the operating point, nil without one.
+func (b *builder) operatingFacts() []Fact {
+	pr := b.r.Pump
+	if pr == nil || pr.Operating == nil {
+		return nil
+	}
+	op := pr.Operating
+	eff, shaft := "not known (no efficiencies on the data sheet)", "not known (needs the efficiency)"
+	if op.Eff > 0 {
+		eff = percent(op.Eff)
+	}
+	if op.ShaftPower > 0 {
+		shaft = b.show(op.ShaftPower, calc.Power)
+	}
+	out := []Fact{
+		{ID: "op-eff", Label: "pump efficiency η", Value: eff},
+		{ID: "op-shaft", Label: "power at the pump shaft", Value: shaft},
+		{ID: "op-hyd", Label: "hydraulic power (to the liquid)", Value: b.show(op.HydraulicPower, calc.Power)},
+	}
+	if op.NPSHr > 0 {
+		out = append(out, Fact{Label: "NPSH required here", Value: b.head(op.NPSHr)})
+	}
+	return append(out, Fact{Label: "pumps running", Value: curveName(pr)})
+}
+
+// curveName says which pump curve is drawn: the data sheet's single pump,
+// or the pumps as they run (speed, arrangement).
+func curveName(pr *scenario.PumpResult) string {
+	name := "one pump"
+	if pr.Count > 1 {
+		arr := "in series"
+		if pr.Parallel {
+			arr = "in parallel"
+		}
+		name = countWord(pr.Count) + " pumps " + arr
+	}
+	if pr.Speed != 1 {
+		return name + " at " + percent(pr.Speed) + " speed"
+	}
+	return name + " at full speed"
+}
+
+// countWord writes a small count in words.
+func countWord(n int) string {
+	words := []string{"", "one", "two", "three", "four", "five", "six", "seven", "eight"}
+	if n > 0 && n < len(words) {
+		return words[n]
+	}
+	return plainNumber(float64(n))
+}
+
+// npshLevel is the margin's verdict in words and its badge class.
+func npshLevel(l calc.NPSHLevel) (text, class string) {
+	switch l {
+	case calc.NPSHOK:
+		return "✓ Margin adequate", "lvl-ok"
+	case calc.NPSHCaution:
+		return "⚠ Caution: small margin", "lvl-caution"
+	case calc.NPSHDanger:
+		return "✕ Danger: the pump will cavitate", "lvl-danger"
+	}
+	return "NPSH required not given: no margin to judge", "lvl-none"
+}
+
+// npshBlocks are the NPSH verdict, its figures and its note; each is an
+// empty block without an NPSH result.
+func (b *builder) npshBlocks() (level, facts, note Block) {
+	n := b.r.NPSH
+	if n == nil {
+		e := Block{Kind: BlockEmpty}
+		return e, e, e
+	}
+	t, cls := npshLevel(n.Level)
+	level = Block{Kind: BlockLevel, ID: "npsh-level", Class: cls, Text: t}
+	fs := []Fact{{ID: "npsh-a", Label: "NPSH available", Value: b.head(n.Available)}}
+	if n.Level != calc.NPSHUnrated {
+		fs = append(fs,
+			Fact{ID: "npsh-r", Label: "NPSH required", Value: b.head(n.Required)},
+			Fact{ID: "npsh-margin", Label: "margin", Value: b.head(n.Margin), Key: true},
+			Fact{ID: "npsh-ratio", Label: "ratio available ÷ required", Value: calc.FormatNumber(n.Ratio, 3)},
+		)
+	}
+	fs = append(fs, Fact{Label: "at a flow of", Value: b.param("q", b.r.NPSHFlow)})
+	return level, Block{Kind: BlockFacts, Class: "facts", Facts: fs}, text("note-text", "npsh-note", n.Note.Words(b.figure))
+}
+
+// npshCard is NPSH available against required.
+func (b *builder) npshCard() Card {
+	why := "Enter the pump centreline elevation to work out the NPSH available."
+	if b.s.Has("zp") {
+		why = b.toCheck("zp", "npshr", "pafter", "t", "liq", "alt", "baro", "p1", "z1", "q")
+	}
+	level, facts, note := b.npshBlocks()
+	return Card{ID: "npsh", Class: "npsh", Title: "Cavitation check (NPSH)", Blocks: []Block{
+		maybe(b.r.NPSH == nil, text("muted", "npsh-why", why)),
+		level, facts, note,
+		b.warnings(nil, "npsh", "site", "liquid"),
+	}}
+}
+
+// pumpChartCard holds the pump and system chart.
+func (b *builder) pumpChartCard() Card {
+	pr := b.r.Pump
+	caption := "Accent: the pump's head curve through the data-sheet points (squares). Dash-dot: the head the line needs at each flow. They cross at the operating point."
+	if pr != nil && len(pr.System) > 0 {
+		caption += " At zero flow the line needs " + b.head(pr.System[0].H) + " (levels and pressures alone); the rest is friction, fittings and velocity head."
+	}
+	if pr != nil && (pr.Curve.HasNPSHr() || len(pr.NPSHa) > 0) {
+		caption += " Lower panel: NPSH the pump requires (solid) and NPSH available at its inlet (dashed); available must stay above required."
+	}
+	return Card{ID: "pump-chart-card", Class: "chart-card", Title: "Pump and system curves", Blocks: []Block{
+		maybe(pr == nil, text("muted", "", "Drawn once the data sheet has at least three points.")),
+		b.pumpChart("pump-chart", caption),
+	}}
+}
+
+// chartSamples is the number of flows a fitted curve is drawn through.
+const chartSamples = 61
+
+// sampleCurve evaluates f at chartSamples flows from lo to hi and returns
+// them in display units; flows where f has no value are left out.
+func sampleCurve(lo, hi float64, f func(q float64) (float64, bool), xu, yu calc.Unit) (xs, ys []float64) {
+	if !(hi > lo) {
+		return nil, nil
+	}
+	for i := 0; i < chartSamples; i++ {
+		q := lo + (hi-lo)*float64(i)/float64(chartSamples-1)
+		if i == chartSamples-1 {
+			q = hi
+		}
+		if y, ok := f(q); ok {
+			xs, ys = append(xs, xu.FromSI(q)), append(ys, yu.FromSI(y))
+		}
+	}
+	return xs, ys
+}
+
+// curvePoints converts points of a curve into display units.
+func curvePoints(pts []calc.CurvePoint, xu, yu calc.Unit) (xs, ys []float64) {
+	for _, p := range pts {
+		xs, ys = append(xs, xu.FromSI(p.Q)), append(ys, yu.FromSI(p.H))
+	}
+	return xs, ys
+}
+
+// pumpChart is the pump and system chart in display units, an empty block
+// when there is no pump curve.
+func (b *builder) pumpChart(id, caption string) Block {
+	pr := b.r.Pump
+	if pr == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	qu, hu := displayUnit("q", b.us), displayUnit("hp", b.us)
+	ch := &Chart{ID: id, Kind: "pump", Caption: caption, Title: "Pump against the line",
+		XLabel: "flow Q (" + qu.Symbol + ")", YLabel: "head H (" + hu.Symbol + ")"}
+	add := func(role CurveRole, name string, xs, ys []float64) {
+		if len(xs) > 0 {
+			ch.Curves = append(ch.Curves, Curve{Role: role, Name: name, X: xs, Y: ys})
+		}
+	}
+	c := pr.Curve
+	xs, ys := sampleCurve(c.MinFlow(), c.MaxFlow(), c.Head, qu, hu)
+	add(RolePump, curveName(pr), xs, ys)
+	if pr.Speed != 1 || pr.Count > 1 {
+		base := pr.Base
+		xs, ys = sampleCurve(base.MinFlow(), base.MaxFlow(), base.Head, qu, hu)
+		add(RolePumpBase, "data sheet, one pump at full speed", xs, ys)
+	}
+	var pts []calc.CurvePoint
+	for _, p := range pr.Base.Points() {
+		pts = append(pts, calc.CurvePoint{Q: p.Q, H: p.H})
+	}
+	xs, ys = curvePoints(pts, qu, hu)
+	add(RoleDataPoints, "data-sheet points", xs, ys)
+	if len(pr.System) > 0 {
+		xs, ys = curvePoints(pr.System, qu, hu)
+		add(RoleSystem, "system curve of the line", xs, ys)
+		if last := pr.System[len(pr.System)-1].Q; last > c.MaxFlow() {
+			x0 := qu.FromSI(c.MaxFlow())
+			ch.Bands = append(ch.Bands, Band{X0: x0, X1: x0 - 1, Label: "beyond the data sheet"})
+		}
+	}
+	if op := pr.Operating; op != nil {
+		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(op.Q), Y: hu.FromSI(op.H),
+			Label: "operating point\n" + b.param("q", op.Q) + ", " + b.head(op.H)})
+	}
+	if c.HasEfficiency() {
+		pct := displayUnit("peff", b.us)
+		xs, ys = sampleCurve(c.MinFlow(), c.MaxFlow(), c.Efficiency, qu, pct)
+		add(RoleEfficiency, "pump efficiency η", xs, ys)
+		ch.Y2Label = "efficiency η (" + pct.Symbol + ")"
+	}
+	if c.HasNPSHr() {
+		xs, ys = sampleCurve(c.MinFlow(), c.MaxFlow(), c.NPSHr, qu, hu)
+		add(RoleNPSHRequired, "NPSH required", xs, ys)
+	}
+	if len(pr.NPSHa) > 0 {
+		xs, ys = curvePoints(pr.NPSHa, qu, hu)
+		add(RoleNPSHAvailable, "NPSH available", xs, ys)
+	}
+	if c.HasNPSHr() || len(pr.NPSHa) > 0 {
+		ch.Y3Label = "NPSH (" + hu.Symbol + ")"
+	}
+	return Block{Kind: BlockChart, ID: id, Text: caption, Chart: ch}
+}
+
+// dataColumns are the data sheet's columns: a list parameter each.
+var dataColumns = []struct {
+	param, head, name string
+	optional          bool
+}{
+	{"pq", "Flow Q", "flow", false},
+	{"ph", "Head H", "head", false},
+	{"peff", "η", "efficiency", true},
+	{"pnpsh", "NPSHr", "NPSH required", true},
+}
+
+// dataSheetCard is the data-sheet table: MinRows to MaxRows rows of Q, H
+// and, when given, η and NPSHr.
+func (b *builder) dataSheetCard() Card {
+	n := b.d.RowCount()
+	cols := dataColumns
+	if b.d.SideOf("npsh") == "typed" {
+		cols = cols[:3]
+	}
+	ds := &DataSheet{Note: "Points read off the maker's curve for one pump at full speed, lowest flow first (" +
+		strconv.Itoa(scenario.MinRows) + " to " + strconv.Itoa(scenario.MaxRows) +
+		"). Efficiency and NPSH required are optional, but give them at every point or not at all."}
+	cells := map[string][]string{}
+	for _, c := range cols {
+		b.shown[c.param] = true
+		ds.Columns = append(ds.Columns, Column{Param: c.param, Head: c.head, Name: c.name, Optional: c.optional,
+			UnitID: "unit-" + c.param, Units: b.unitOptions(c.param, "", b.d.ListUnit(c.param)), Error: b.problem(c.param)})
+		vs, _ := b.s.Cells(c.param)
+		for len(vs) < n {
+			vs = append(vs, "")
+		}
+		cells[c.param] = vs
+		f := b.field(c.param, FieldPlain, "Data-sheet "+c.name+" ("+c.param+"), comma separated, unit after the last", "")
+		f.Box = b.s.Get(c.param)
+		if b.d.Edit == c.param {
+			f.Box = b.d.Text
+		}
+		ds.AsText = append(ds.AsText, f)
+	}
+	for i := 0; i < n; i++ {
+		num := strconv.Itoa(i + 1)
+		row := DataRow{Num: num, Remove: Button{ID: "row-del-" + num, Text: "✕", Label: "remove point " + num, Class: "step",
+			Disabled: n <= scenario.MinRows, Act: Action{Do: "row-remove", N: i}}}
+		for _, c := range cols {
+			row.Cells = append(row.Cells, DataCell{ID: "in-" + c.param + "-" + strconv.Itoa(i), Text: cells[c.param][i],
+				Label: c.name + ", point " + num, Bad: b.r.Errors[c.param] != nil, Param: c.param, Row: i})
+		}
+		ds.Rows = append(ds.Rows, row)
+	}
+	ds.Add = Button{ID: "row-add", Text: "+ Add a point", Class: "act", Disabled: n >= scenario.MaxRows, Act: Action{Do: "row-add"}}
+	return Card{ID: "datasheet-card", Title: "Pump data sheet", Blocks: []Block{
+		{Kind: BlockDataSheet, ID: "datasheet", Class: "grid datasheet", DataSheet: ds},
+	}}
+}
+
+// pumpSetupCard is the speed, the arrangement, the pump's elevation and
+// the NPSH it requires.
+func (b *builder) pumpSetupCard() Card {
+	typed := b.d.SideOf("npsh") == "typed"
+	var npshr Block
+	if typed {
+		npshr = fields(b.quantity("npshr", "", ""))
+	}
+	return Card{ID: "pump-setup", Title: "Pump as installed", Blocks: []Block{
+		fields(b.quantity("spd", "", ""), b.picker("pumps", "", "")),
+		fields(b.quantity("zp", "", "")),
+		b.toggle("npsh"),
+		maybe(typed, npshr),
+	}}
+}
+
+// fieldCard is the field check: gauge readings in, the pump's real
+// performance out.
+func (b *builder) fieldCard() Card {
+	facts := b.fieldFacts()
+	return Card{ID: "field", Title: "Field check from gauge readings", Blocks: []Block{
+		fields(b.quantity("ps", "", ""), b.quantity("pd", "", "")),
+		fields(b.quantity("zs", "", ""), b.quantity("zd", "", "")),
+		fields(b.quantity("ds", "", ""), b.quantity("dd", "", "")),
+		fields(b.quantity("qm", "", ""), b.quantity("pin", "", "")),
+		maybe(facts != nil, Block{Kind: BlockFacts, ID: "field-results", Class: "facts", Facts: facts}),
+		b.warnings(nil, "field"),
+	}}
+}
+
+// fieldFacts are the field check's figures, nil without a field check.
+func (b *builder) fieldFacts() []Fact {
+	f := b.r.Field
+	if f == nil {
+		return nil
+	}
+	out := []Fact{
+		{ID: "field-head", Label: "pump head delivered", Value: b.head(f.Head), Key: true},
+		{Label: "of which: gauge pressure difference", Value: b.head(f.PressureHead)},
+		{Label: "gauge height difference", Value: b.head(f.ElevationHead)},
+		{Label: "velocity head difference", Value: b.head(f.VelocityHead)},
+		{ID: "field-power", Label: "hydraulic power", Value: b.show(f.HydraulicPower, calc.Power)},
+	}
+	if f.Efficiency > 0 {
+		out = append(out, Fact{ID: "field-eff", Label: "wire-to-water efficiency", Value: percent(f.Efficiency), Key: true})
+	}
+	if f.HasCurve {
+		out = append(out,
+			Fact{Label: "data-sheet head at this flow", Value: b.head(f.CurveHead)},
+			Fact{ID: "field-dev", Label: "below (−) or above the data sheet",
+				Value: b.head(f.Deviation) + " (" + calc.FormatNumber(f.DeviationPct, 3) + " %)"},
+		)
+		if f.CurveEfficiency > 0 {
+			out = append(out, Fact{Label: "data-sheet pump efficiency here (pump alone)", Value: percent(f.CurveEfficiency)})
+		}
+	}
+	return out
+}
+
+// turbineCard is the turbine's output on the line (solve=ht).
+func (b *builder) turbineCard() Card {
+	t := b.r.Turbine
+	solved := b.solve() == "ht"
+	// The turbine's answer is the page's answer when the view is the
+	// turbine side; beside the operating point it keeps an id of its own.
+	id := "turb-answer"
+	if solved {
+		id = "answer"
+	}
+	var a *Answer
+	switch {
+	case t != nil:
+		a = &Answer{Label: "Output at " + b.param("q", t.Q), Values: []Value{{"turb-power", b.show(t.Power, calc.Power)}}}
+	case solved:
+		a = &Answer{None: true, NoneID: "turb-power", Why: b.toCheck(b.lineInputs()...)}
+	}
+	facts := b.turbineFacts()
+	offer := t == nil && !solved
+	return Card{ID: "turbine", Class: "answer-card", Title: "Turbine on the line", Blocks: []Block{
+		fields(b.quantity("etat", "", "")),
+		maybe(a != nil, Block{Kind: BlockAnswer, ID: id, Answer: a}),
+		maybe(facts != nil, Block{Kind: BlockFacts, Class: "facts", Facts: facts}),
+		maybe(offer, text("muted", "", "The output needs the balance solved for the turbine head.")),
+		maybe(offer, Block{Kind: BlockButtons, Buttons: []Button{{ID: "to-ht", Text: "Solve for the turbine head", Class: "act",
+			Act: Action{Do: "choose", Param: "solve", Value: "ht"}}}}),
+		b.warnings(nil, "turbine", "balance"),
+	}}
+}
+
+// turbineFacts are the turbine's figures at the flow and at the best flow,
+// nil without a turbine result.
+func (b *builder) turbineFacts() []Fact {
+	t := b.r.Turbine
+	if t == nil {
+		return nil
+	}
+	out := []Fact{
+		{ID: "turb-gross", Label: "gross head (levels and pressures)", Value: b.head(t.GrossHead)},
+		{Label: "line losses at this flow", Value: b.head(t.Losses)},
+		{Label: "velocity head left at the outlet", Value: b.head(t.ExitVelocityHead)},
+		{ID: "turb-net", Label: "net head for the turbine", Value: b.head(t.NetHead), Key: true},
+		{Label: "hydraulic power (before the machine)", Value: b.show(t.HydraulicPower, calc.Power)},
+	}
+	if best := b.r.BestTurbine; best != nil {
+		out = append(out,
+			Fact{ID: "turb-best", Label: "most output: at " + b.param("q", best.Q), Value: b.show(best.Power, calc.Power), Key: true},
+			Fact{Label: "net head at that flow", Value: b.head(best.NetHead)},
+		)
+	}
+	return out
+}

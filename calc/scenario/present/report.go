@@ -1,0 +1,279 @@
+package present
+
+import (
+	"strconv"
+	"strings"
+
+	"fieldhead/calc"
+	"fieldhead/calc/scenario"
+)
+
+// The Report view is the printed sheet of the scenario: every input as
+// typed, with its unit, every result, both charts, the warnings, the
+// methods and their sources and the share link (which the page fills in,
+// with the date). The cautions are the Sheet's, drawn around every view.
+
+// reportView is the Report view.
+func (b *builder) reportView() []Card {
+	name := strings.TrimSpace(b.s.Get("name"))
+	if name == "" {
+		name = "Untitled sheet"
+	}
+	system := "SI units"
+	if b.us {
+		system = "US customary units"
+	}
+	cards := []Card{
+		{ID: "report-head", Class: "rhead", Blocks: []Block{
+			text("rtitle", "report-title", name),
+			text("rmeta", "", "Fieldhead calculation sheet · "+system),
+			text("rdate", "report-date", ""),
+		}},
+		b.reportInputs(),
+		b.reportResults(),
+	}
+	if c, ok := b.reportCharts(); ok {
+		cards = append(cards, c)
+	}
+	warn := b.allWarnings()
+	cards = append(cards,
+		Card{ID: "report-warnings", Class: "rsec", Title: "Warnings", Blocks: []Block{
+			maybe(len(warn) > 0, Block{Kind: BlockWarnings, Items: warn}),
+			maybe(len(warn) == 0, text("", "", "None for these inputs.")),
+		}},
+		Card{ID: "report-methods", Class: "rsec", Title: "Methods and sources", Blocks: []Block{
+			{Kind: BlockList, Class: "methods", Items: b.methodLines()},
+		}},
+		Card{ID: "report-link", Class: "rsec", Title: "This sheet as a link", Blocks: []Block{
+			text("linktext", "report-url", ""),
+			text("muted small", "", "Open the link on any device to see and change the same calculation."),
+		}},
+	)
+	return cards
+}
+
+// methodLines are the methods and their sources, one line each, in the
+// sheet's units.
+func (b *builder) methodLines() []string {
+	ms := methodsFor(b.us)
+	out := make([]string, 0, len(ms))
+	for _, m := range ms {
+		out = append(out, m.What+": "+m.How)
+	}
+	return out
+}
+
+// inputValue writes a parameter's text for the sheet: with the default
+// unit named when none was typed, lists spaced, fittings and choices in
+// words.
+func (b *builder) inputValue(p string) string {
+	raw := strings.TrimSpace(b.s.Get(p))
+	base := p
+	if _, f := splitSegment(p); f != "" {
+		base = f
+	}
+	switch base {
+	case "fit":
+		if list, err := scenario.ParseFittings(raw); err == nil && len(list) > 0 {
+			parts := make([]string, 0, len(list))
+			for _, e := range list {
+				parts = append(parts, strconv.Itoa(e.Count)+" × "+fittingName(e.Key))
+			}
+			return strings.Join(parts, "; ")
+		}
+		return raw
+	case "pq", "ph", "peff", "pnpsh":
+		cells, unit := b.s.Cells(p)
+		if unit == "" {
+			unit = scenario.DefaultUnit(p, b.us)
+		}
+		return strings.Join(cells, ", ") + " " + unit
+	case "pafter":
+		if raw == "0" {
+			return "at point 1"
+		}
+		return "after segment " + raw
+	}
+	if cs := scenario.Choices(p); len(cs) > 0 {
+		for _, c := range cs {
+			if c.Value == raw {
+				if strings.EqualFold(c.Label, raw) {
+					return raw
+				}
+				return c.Label + " (" + raw + ")"
+			}
+		}
+		return raw
+	}
+	return b.asEntered(p)
+}
+
+// reportInputs lists every input of the scenario, the segments in a table
+// of their own.
+func (b *builder) reportInputs() Card {
+	t := &Table{ID: "report-inputs", Class: "grid inputs", Head: []string{"input", "in the link", "value as entered"}}
+	for _, p := range scenario.Params {
+		if p == "view" || p == "name" || !b.s.Has(p) {
+			continue
+		}
+		b.shown[p] = true
+		val := Cell{Text: b.inputValue(p), Label: "value as entered", Error: b.problem(p)}
+		if val.Error != "" {
+			val.ErrorID = "err-" + DomID(p)
+		}
+		t.Rows = append(t.Rows, Row{Head: scenario.Label(p), Cells: []Cell{{Text: p, Label: "in the link"}, val}})
+	}
+	n := b.s.SegmentCount()
+	return Card{ID: "report-inputs-card", Class: "rsec", Title: "Inputs", Blocks: []Block{
+		{Kind: BlockTable, Table: t},
+		maybe(n > 0, Block{Kind: BlockHeading, Text: "Segments of the line, from point 1"}),
+		maybe(n > 0, b.segmentInputs(n)),
+		maybe(n > 0, text("muted small", "", "In the link these are sN.l, sN.nps, sN.sch, sN.d, sN.mat, sN.eps, sN.fit, sN.k and sN.z, N being the segment's number.")),
+	}}
+}
+
+// segmentInputs is one row per segment: its inputs as entered, each cell
+// with its parameters' problems.
+func (b *builder) segmentInputs(n int) Block {
+	cols := []struct {
+		head   string
+		fields []string
+	}{
+		{"length", []string{"l"}}, {"pipe", []string{"nps", "sch", "d"}}, {"wall", []string{"mat", "eps"}},
+		{"fittings", []string{"fit"}}, {"extra ΣK", []string{"k"}}, {"end elevation", []string{"z"}},
+	}
+	t := &Table{ID: "report-segments", Class: "grid inputs", Head: []string{"segment"}}
+	for _, c := range cols {
+		t.Head = append(t.Head, c.head)
+	}
+	for i := 1; i <= n; i++ {
+		row := Row{Head: strconv.Itoa(i)}
+		for _, c := range cols {
+			var parts, errs []string
+			errID := ""
+			for _, f := range c.fields {
+				p := scenario.SegmentParam(i, f)
+				b.shown[p] = true
+				if b.s.Has(p) {
+					v := b.inputValue(p)
+					switch f {
+					case "nps":
+						v = "NPS " + v
+					case "sch":
+						v = "schedule " + v
+					}
+					parts = append(parts, v)
+				}
+				if m := b.problem(p); m != "" {
+					errs = append(errs, m)
+					if errID == "" {
+						errID = "err-" + DomID(p)
+					}
+				}
+			}
+			if len(parts) == 0 && c.fields[0] == "z" {
+				parts = append(parts, "at point 2")
+			}
+			row.Cells = append(row.Cells, Cell{Text: strings.Join(parts, "; "), Label: c.head,
+				Error: strings.Join(errs, "; "), ErrorID: errID})
+		}
+		t.Rows = append(t.Rows, row)
+	}
+	return Block{Kind: BlockTable, Table: t}
+}
+
+// reportResults lists every result the scenario has; its blocks keep
+// their places whichever results there are.
+func (b *builder) reportResults() Card {
+	br := b.r.Balance
+	var answer, budget Block
+	if br != nil {
+		label := solveLabels[b.solve()]
+		if label == "" {
+			label = b.solve()
+		}
+		main := b.solvedText(br.Value)
+		switch p := b.solve(); p {
+		case "p1", "p2":
+			alt := b.absolute(br.Value)
+			if b.s.Get(p+"ref") == "a" {
+				alt = b.gauge(br.Value - b.r.SitePressure)
+			}
+			main += " (" + alt + ")"
+		}
+		answer = Block{Kind: BlockFacts, Class: "facts", Facts: []Fact{
+			{ID: "report-answer", Label: label + " (the unknown)", Value: main, Key: true},
+			{Label: "at a flow of", Value: b.param("q", br.Q)},
+			{Label: "friction and fittings", Value: b.head(br.FrictionHead)},
+		}}
+		t := &Table{ID: "report-budget", Class: "grid", Head: []string{"term", "side", "head", "as pressure"}}
+		for _, it := range br.Budget {
+			if it.Head == 0 {
+				continue
+			}
+			side := "supplied"
+			if it.Side < 0 {
+				side = "used"
+			}
+			t.Rows = append(t.Rows, Row{Head: b.budgetLabel(it.Key, it.Label), Cells: []Cell{
+				{Text: side, Label: "side"}, {Text: b.head(it.Head), Label: "head"},
+				{Text: b.show(it.Pressure, calc.Pressure), Label: "as pressure"},
+			}})
+		}
+		budget = Block{Kind: BlockTable, Table: t}
+	} else {
+		answer = text("muted", "", "The energy balance has no answer: "+b.toCheck(balanceInputs()...))
+	}
+	line := br != nil && br.Line != nil
+
+	opFacts := b.operatingFacts()
+	var op Block
+	if opFacts != nil {
+		o := b.r.Pump.Operating
+		op = Block{Kind: BlockFacts, Class: "facts", Facts: append([]Fact{
+			{ID: "report-op", Label: "flow and head", Value: b.param("q", o.Q) + " at " + b.head(o.H), Key: true},
+		}, opFacts...)}
+	}
+	level, npsh, note := b.npshBlocks()
+	fieldFacts := b.fieldFacts()
+	t := b.r.Turbine
+	var turb Block
+	if t != nil {
+		turb = Block{Kind: BlockFacts, Class: "facts", Facts: append([]Fact{
+			{ID: "report-turbine", Label: "output at " + b.param("q", t.Q), Value: b.show(t.Power, calc.Power), Key: true},
+		}, b.turbineFacts()...)}
+	}
+	heading := func(ok bool, s string) Block { return maybe(ok, Block{Kind: BlockHeading, Text: s}) }
+	return Card{ID: "report-results", Class: "rsec", Title: "Results", Blocks: []Block{
+		heading(br != nil, "Energy balance"),
+		answer,
+		heading(br != nil, "Where the head goes"),
+		maybe(br != nil, budget),
+		heading(line, "Losses by segment"),
+		b.segmentTable(),
+		heading(opFacts != nil, "Operating point"),
+		maybe(opFacts != nil, op),
+		heading(b.r.NPSH != nil, "Cavitation check (NPSH)"),
+		level, npsh, note,
+		heading(fieldFacts != nil, "Field check from gauge readings"),
+		maybe(fieldFacts != nil, Block{Kind: BlockFacts, Class: "facts", Facts: fieldFacts}),
+		heading(t != nil, "Turbine"),
+		maybe(t != nil, turb),
+	}}
+}
+
+// reportCharts holds both charts; ok is false when there is neither.
+func (b *builder) reportCharts() (Card, bool) {
+	pump := b.pumpChart("pump-chart", "Pump head curve through the data-sheet points, the line's system curve and the operating point where they meet; below, NPSH required and available.")
+	profile := b.profileChart("profile-chart", "Pipe elevation, energy and hydraulic grade lines and the vapour-pressure line along the line, from point 1.")
+	hasPump, hasProfile := pump.Kind == BlockChart, profile.Kind == BlockChart
+	if profile.Text == "" && hasProfile {
+		profile.Text = profile.Chart.Caption
+	}
+	return Card{ID: "report-charts", Class: "rsec charts", Title: "Charts", Blocks: []Block{
+		maybe(hasPump, Block{Kind: BlockHeading, Text: "Pump and system curves"}),
+		pump,
+		maybe(hasProfile, Block{Kind: BlockHeading, Text: "Energy and hydraulic grade lines"}),
+		profile,
+	}}, hasPump || hasProfile
+}
