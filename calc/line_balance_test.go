@@ -170,7 +170,7 @@ func TestProfileProperties(t *testing.T) {
 // same answer as the single run (Line adds no loss of its own).
 func TestBalanceLineMatchesRun(t *testing.T) {
 	run := Run{Length: 640, Diameter: 0.2027, Roughness: 0.045e-3,
-		Fittings: []FittingCount{{"gate", 2}, {"elbow90lr", 6}, {"check_swing", 1}, {"exit", 1}}}
+		Fittings: []FittingCount{{Key: "gate", Count: 2}, {Key: "elbow90lr", Count: 6}, {Key: "check_swing", Count: 1}, {Key: "exit", Count: 1}}}
 	b := Balance{Fluid: testLiquid, SitePressure: 98.8e3,
 		In: Point{P: 98.8e3, Z: 212}, Out: Point{P: 98.8e3, Z: 251}, Q: 0.045, Run: &run}
 	r1, err := b.Solve()
@@ -319,7 +319,7 @@ func TestSystemCurveMatchesSolve(t *testing.T) {
 // solved at each flow, to the last bit, the run untouched.
 func TestSystemCurveRun(t *testing.T) {
 	run := &Run{Length: 640, Diameter: 0.2027, Roughness: 0.045e-3,
-		Fittings: []FittingCount{{"gate", 2}, {"elbow90lr", 6}, {"check_swing", 1}, {"exit", 1}}}
+		Fittings: []FittingCount{{Key: "gate", Count: 2}, {Key: "elbow90lr", Count: 6}, {Key: "check_swing", Count: 1}, {Key: "exit", Count: 1}}}
 	b := Balance{Fluid: testLiquid, SitePressure: 101325, Alpha: AlphaProfile,
 		In: Point{P: 101325, Z: 212}, Out: Point{P: 101325, Z: 251, D: 0.2027}, Run: run}
 	flows := Flows(0.07, 8)

@@ -76,7 +76,7 @@ func (b Balance) lumped() Balance {
 		l := b.Line.lumped()
 		b.Line = &l
 	}
-	if b.Run != nil && len(b.Run.Fittings) > 0 {
+	if b.Run != nil && len(b.Run.Fittings) > 0 && !b.Run.ReDependent() {
 		if k, err := b.Run.SumK(); err == nil {
 			r := *b.Run
 			r.ExtraK, r.Fittings = k, nil
