@@ -39,7 +39,7 @@ var materialTable = [...]Material{
 	{"ductile", "ductile iron, cement-mortar lined", 0.033e-3, 140,
 		"ε " + srcFarshad + " ['Cement lining']; C from memory (typical 130–140)"},
 	{"galv", "galvanized steel", 0.152e-3, 120,
-		"ε " + srcMoody + " ['Galvanized iron']; within " + srcHHR + " 'Galvanized steel tubes, Ordinary galvanization' 0.10–0.15 mm; C from memory (typical 110–120)"},
+		"ε " + srcMoody + " ['Galvanized iron']; " + srcHHR + " gives 0.10–0.15 mm for ordinary galvanization; C from memory (typical 110–120)"},
 	{"copper", "copper or brass, drawn tubing", 1.52e-6, 140,
 		"ε " + srcMoody + " ['Brass']; " + srcHHR + " gives 0.0015–0.01 mm for seamless brass and copper tubes; C from memory (typical 130–140)"},
 	{"pe", "polyethylene (PE)", 0.007e-3, 150,
