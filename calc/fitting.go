@@ -161,17 +161,31 @@ func FittingTable() []Fitting {
 // insensitive). An unknown key gives a *FieldError for field "fit" that
 // lists the known keys.
 func LookupFitting(key string) (Fitting, error) {
-	k := strings.ToLower(strings.TrimSpace(key))
-	for _, f := range fittingTable {
-		if f.Key == k {
-			return f, nil
-		}
+	if f := frFitting(key); f != nil {
+		return *f, nil
 	}
 	keys := make([]string, 0, len(fittingTable))
 	for _, f := range FittingTable() {
 		keys = append(keys, f.Key)
 	}
 	return Fitting{}, fieldErrorf("fit", "unknown fitting %q; expected one of %s", key, strings.Join(keys, ", "))
+}
+
+// frFitting returns the table row of key, or nil. Keys as stored (lower
+// case, no spaces) are found without allocating.
+func frFitting(key string) *Fitting {
+	for i := range fittingTable {
+		if fittingTable[i].Key == key {
+			return &fittingTable[i]
+		}
+	}
+	k := strings.ToLower(strings.TrimSpace(key))
+	for i := range fittingTable {
+		if fittingTable[i].Key == k {
+			return &fittingTable[i]
+		}
+	}
+	return nil
 }
 
 // CraneFT returns f_T, the fully turbulent Darcy friction factor of clean
@@ -216,19 +230,35 @@ func (f Fitting) crane(d float64) float64 {
 // vanishes). d must be finite and positive, within 1 mm–10 m for Crane
 // (field "d"); re must be positive (field "re").
 func (f Fitting) KAt(d, re float64) (float64, error) {
+	if err := frCheckKInputs(d, re); err != nil {
+		return 0, err
+	}
+	return f.kAt(d, re, 0)
+}
+
+// frCheckKInputs validates the diameter and Reynolds number of KAt.
+func frCheckKInputs(d, re float64) error {
 	if math.IsNaN(d) || math.IsInf(d, 0) || d <= 0 {
-		return 0, fieldErrorf("d", "inside diameter must be positive, got %g", d)
+		return fieldErrorf("d", "inside diameter must be positive, got %g", d)
 	}
 	if math.IsNaN(re) || re <= 0 {
-		return 0, fieldErrorf("re", "Reynolds number must be positive, got %g", re)
+		return fieldErrorf("re", "Reynolds number must be positive, got %g", re)
 	}
+	return nil
+}
+
+// kAt is KAt for valid d and re, with Crane's f_T at d already known when
+// ft > 0.
+func (f *Fitting) kAt(d, re, ft float64) (float64, error) {
 	switch f.Method {
 	case KFixed:
 		return f.K, nil
 	case KCrane:
-		ft, err := CraneFT(d)
-		if err != nil {
-			return 0, err
+		if ft == 0 {
+			var err error
+			if ft, err = CraneFT(d); err != nil {
+				return 0, err
+			}
 		}
 		return f.crane(d) * ft, nil
 	case KHooper:

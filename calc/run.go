@@ -53,6 +53,10 @@ type Run struct {
 	ExtraK    float64 // further loss coefficients, added to ΣK
 	Method    FrictionMethod
 	HazenC    float64 // Hazen–Williams C, for MethodHazenWilliams
+
+	// extraK1 is Σ Count·K1 of Hooper fittings folded into ExtraK by
+	// lumped: ΣK gains extraK1/Re.
+	extraK1 float64
 }
 
 // RunResult is a Run evaluated at one flow. Losses are heads in metres of
@@ -98,7 +102,28 @@ func (r Run) SumK() (float64, error) {
 // ReDependent reports whether a fitting of the run has a K that changes
 // with the Reynolds number (Hooper 2-K, not overridden).
 func (r Run) ReDependent() bool {
-	return r.anyFitting(Fitting.ReDependent)
+	return r.extraK1 > 0 || r.anyFitting(Fitting.ReDependent)
+}
+
+// lumped returns the run with its fittings folded into ExtraK (fully
+// turbulent ΣK) and extraK1 (the Hooper K1 terms), the same ΣK at any
+// Reynolds number to rounding, without the table look-ups. A run whose
+// ΣK cannot be formed is returned as it is, for Evaluate to report.
+func (r Run) lumped() Run {
+	if len(r.Fittings) == 0 {
+		return r
+	}
+	k, err := r.SumK()
+	if err != nil {
+		return r
+	}
+	for _, fc := range r.Fittings {
+		if f := frFitting(fc.Key); f.ReDependent() && !fc.Override {
+			r.extraK1 += float64(fc.Count) * f.K1
+		}
+	}
+	r.ExtraK, r.Fittings = k, nil
+	return r
 }
 
 // FittingKs returns the K of each kind of fitting of the run in the run's
@@ -111,10 +136,15 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 		return nil, 0, fieldErrorf("k", "extra loss coefficient must be zero or positive, got %g", r.ExtraK)
 	}
 	sum := r.ExtraK
+	if r.extraK1 > 0 && !math.IsInf(re, 1) {
+		sum += r.extraK1 / re
+	}
 	var out []FittingK
+	ft := 0.0 // Crane's f_T at the run's diameter, once found
 	for _, fc := range r.Fittings {
-		f, err := LookupFitting(fc.Key)
-		if err != nil {
+		f := frFitting(fc.Key)
+		if f == nil {
+			_, err := LookupFitting(fc.Key)
 			return nil, 0, err
 		}
 		if fc.Count < 0 {
@@ -127,7 +157,14 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 			}
 			fk.K, fk.Method, fk.Formula = fc.K, "given", "K = "+frG(fc.K)
 		} else {
-			k, err := f.KAt(r.Diameter, re)
+			err := frCheckKInputs(r.Diameter, re)
+			if err == nil && f.Method == KCrane && ft == 0 {
+				ft, err = CraneFT(r.Diameter)
+			}
+			var k float64
+			if err == nil {
+				k, err = f.kAt(r.Diameter, re, ft)
+			}
 			if err != nil {
 				return nil, 0, fieldErrorf("fit", "%s: %v", fc.Key, err)
 			}
@@ -143,7 +180,7 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 // a K, satisfies ok.
 func (r Run) anyFitting(ok func(Fitting) bool) bool {
 	for _, fc := range r.Fittings {
-		if f, err := LookupFitting(fc.Key); err == nil && !fc.Override && fc.Count > 0 && ok(f) {
+		if f := frFitting(fc.Key); f != nil && !fc.Override && fc.Count > 0 && ok(*f) {
 			return true
 		}
 	}

@@ -278,3 +278,75 @@ func TestRunValidation(t *testing.T) {
 		t.Errorf("good run: %v", err)
 	}
 }
+
+func TestRunFittingKs(t *testing.T) {
+	// A given K replaces the table's method; Hooper 2-K kinds take the
+	// run's Reynolds number: K = K1/Re + K∞(1 + 1 in/D) (Hooper 1981,
+	// constants as python3-fluids' Hooper table: threaded tee run
+	// 200/0.1). Liquid properties are inputs only.
+	fl := Fluid{Density: 1000, Viscosity: 1e-3}
+	d := 0.0508 // 2 in
+	q := 1e4 * 1e-3 / (1000 * d) * math.Pi * d * d / 4
+	r := Run{Length: 10, Diameter: d, Roughness: 0, Fittings: []FittingCount{
+		{Key: "gate", Count: 2, K: 0.12, Override: true}, {Key: "tee_run_thr", Count: 3}}}
+	res, err := r.Evaluate(fl, q)
+	if err != nil {
+		t.Fatal(err)
+	}
+	kTee := 200/res.Reynolds + 0.1*1.5 // 1 in/D = 0.5
+	want := 2*0.12 + 3*kTee
+	if math.Abs(res.SumK-want) > 1e-14 || len(res.Fittings) != 2 {
+		t.Fatalf("ΣK %.15g, want %.15g; list %+v", res.SumK, want, res.Fittings)
+	}
+	g, h := res.Fittings[0], res.Fittings[1]
+	if g.K != 0.12 || g.Method != "given" || g.Formula != "K = 0.12" || g.Source != "" {
+		t.Errorf("given K reported as %+v", g)
+	}
+	if math.Abs(h.K-kTee) > 1e-15 || h.Method != "Hooper 2-K" || h.Count != 3 || h.Formula != "K = 200/Re + 0.1·(1 + 1 in/D)" {
+		t.Errorf("Hooper K reported as %+v", h)
+	}
+	// Fully turbulent ΣK (SumK) leaves the K1/Re term out.
+	if s, err := r.SumK(); err != nil || math.Abs(s-(0.24+3*0.15)) > 1e-15 {
+		t.Errorf("SumK() = %g, %v; want 0.69", s, err)
+	}
+	if !r.ReDependent() {
+		t.Error("a Hooper fitting should make the run Re-dependent")
+	}
+	// At zero flow the list is the fully turbulent one.
+	if z, err := r.Evaluate(fl, 0); err != nil || math.Abs(z.Fittings[1].K-0.15) > 1e-15 {
+		t.Errorf("zero flow: %+v, %v", z.Fittings, err)
+	}
+	// A bad given K is an error on "fit".
+	bad := r
+	bad.Fittings = []FittingCount{{Key: "gate", Count: 1, K: math.Inf(1), Override: true}}
+	var fe *FieldError
+	if _, err := bad.Evaluate(fl, q); !errors.As(err, &fe) || fe.Field != "fit" {
+		t.Errorf("infinite K: %v", err)
+	}
+	// Laminar flow: the warning about turbulent-only K values goes when
+	// every fitting has a Reynolds term or a given K.
+	lam := Run{Length: 10, Diameter: d, Fittings: []FittingCount{{Key: "tee_run_thr", Count: 1}}}
+	qLam := 1e3 * 1e-3 / (1000 * d) * math.Pi * d * d / 4
+	if res, err := lam.Evaluate(fl, qLam); err != nil || frHasWarning(res.Warnings, "turbulent-flow figures") {
+		t.Errorf("laminar with Hooper only: %q, %v", res.Warnings, err)
+	}
+	lam.Fittings = append(lam.Fittings, FittingCount{Key: "gate", Count: 1})
+	if res, err := lam.Evaluate(fl, qLam); err != nil || !frHasWarning(res.Warnings, "turbulent-flow figures") {
+		t.Errorf("laminar with a Crane valve: %q, %v", res.Warnings, err)
+	}
+	// Sizes beyond the published ones draw a warning.
+	big := Run{Length: 10, Diameter: 1.2, Fittings: []FittingCount{{Key: "gate", Count: 1}}}
+	if res, err := big.Evaluate(fl, 1); err != nil || !frHasWarning(res.Warnings, "extrapolated") {
+		t.Errorf("1.2 m gate valve: %q, %v", res.Warnings, err)
+	}
+}
+
+func TestSystemCurveHooper(t *testing.T) {
+	// With a Re-dependent fitting the lumped system curve (K1 terms summed
+	// apart) equals Solve at every flow to rounding.
+	run := &Run{Length: 80, Diameter: 0.0525, Roughness: 0.045e-3,
+		Fittings: []FittingCount{{Key: "elbow90_thr", Count: 4}, {Key: "globe_y", Count: 1}, {Key: "exit", Count: 1}}}
+	b := Balance{Fluid: testLiquid, SitePressure: 101325, Alpha: AlphaProfile,
+		In: Point{P: 101325, Z: 0}, Out: Point{P: 101325, Z: 6, D: 0.0525}, Run: run}
+	frCurveMatchesSolve(t, b, Flows(0.006, 6), 1e-12)
+}

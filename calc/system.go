@@ -76,12 +76,9 @@ func (b Balance) lumped() Balance {
 		l := b.Line.lumped()
 		b.Line = &l
 	}
-	if b.Run != nil && len(b.Run.Fittings) > 0 && !b.Run.ReDependent() {
-		if k, err := b.Run.SumK(); err == nil {
-			r := *b.Run
-			r.ExtraK, r.Fittings = k, nil
-			b.Run = &r
-		}
+	if b.Run != nil && len(b.Run.Fittings) > 0 {
+		r := b.Run.lumped()
+		b.Run = &r
 	}
 	return b
 }
