@@ -74,7 +74,7 @@ var catalogueTable = [...]Catalogue{
 	{Key: "copper", Name: "copper water tube", Standard: StandardB88, Notation: "nominal inch", Material: "copper",
 		Source: "ASTM B88 types K, L, M from memory; outside diameters agree with python3-fluids' copper tube sizes (ASTM D2241 CTS) for 1–2 in"},
 	{Key: "pe", Name: "polyethylene pipe", Standard: StandardPE, Notation: "OD mm", Material: "pe",
-		Source: "ISO 4427 OD series and SDR 9–26, from memory; wall OD/SDR rounded up to 0.1 mm (ISO 4065 rule, from memory)"},
+		Source: "ISO 4427 OD series and SDR 9–26, from memory; wall OD/(2S + 1) with S the exact ISO 4065 R10 series value, rounded up to 0.1 mm (ISO 4065 calculation, from memory)"},
 	{Key: "di", Name: "ductile iron pipe, cement-mortar lined", Standard: StandardDI, Notation: "DN", Material: "ductile",
 		Source: "ISO 2531 outside diameters and class K9 walls, ISO 4179 lining thickness, all from memory"},
 }

@@ -33,6 +33,6 @@ func ExampleLookupPipe() {
 	// Output:
 	// NPS 6 sch 40: ID 154.08 mm (ASME B36.10M)
 	// 3/4 in type L: ID 19.94 mm (ASTM B88)
-	// OD 90 SDR17: ID 79.40 mm (ISO 4427)
+	// OD 90 SDR17: ID 79.20 mm (ISO 4427)
 	// DN 300 K9: ID 305.60 mm (ISO 2531 / ISO 4179)
 }

@@ -1,5 +1,7 @@
 package calc
 
+import "math"
+
 // Pipe dimension tables. Each class lists its sizes with outside diameter
 // and wall thickness, in millimetres or, for the standards written in
 // inches, in inches. Every class names its source; the classes checked
@@ -124,12 +126,12 @@ var frClasses = [...]frClass{
 	{cat: "copper", name: "M", inch: true, memo: true, standard: StandardB88, rows: frCopper(
 		0, 0.025, 0.028, 0, 0.032, 0.035, 0.042, 0.049, 0.058, 0.065, 0.072, 0.083, 0.095, 0.109, 0.122, 0.170, 0.212, 0.254)},
 	// Polyethylene, ISO 4427: built by frPE below.
-	{cat: "pe", name: "SDR9", memo: true, standard: StandardPE, rows: frPE(9)},
-	{cat: "pe", name: "SDR11", memo: true, standard: StandardPE, rows: frPE(11)},
-	{cat: "pe", name: "SDR13.6", memo: true, standard: StandardPE, rows: frPE(13.6)},
-	{cat: "pe", name: "SDR17", memo: true, standard: StandardPE, rows: frPE(17)},
-	{cat: "pe", name: "SDR21", memo: true, standard: StandardPE, rows: frPE(21)},
-	{cat: "pe", name: "SDR26", memo: true, standard: StandardPE, rows: frPE(26)},
+	{cat: "pe", name: "SDR9", memo: true, standard: StandardPE, rows: frPE(6)},
+	{cat: "pe", name: "SDR11", memo: true, standard: StandardPE, rows: frPE(7)},
+	{cat: "pe", name: "SDR13.6", memo: true, standard: StandardPE, rows: frPE(8)},
+	{cat: "pe", name: "SDR17", memo: true, standard: StandardPE, rows: frPE(9)},
+	{cat: "pe", name: "SDR21", memo: true, standard: StandardPE, rows: frPE(10)},
+	{cat: "pe", name: "SDR26", memo: true, standard: StandardPE, rows: frPE(11)},
 	// Ductile iron, ISO 2531 class K9 with an ISO 4179 cement-mortar
 	// lining: built by frDuctile below.
 	{cat: "di", name: "K9", memo: true, standard: StandardDI, rows: frDuctile(9)},
@@ -140,11 +142,16 @@ var frClasses = [...]frClass{
 var frPEOD = [...]float64{20, 25, 32, 40, 50, 63, 75, 90, 110, 125, 140, 160,
 	180, 200, 225, 250, 280, 315, 355, 400, 450, 500, 560, 630}
 
-// frPE builds the sizes of one SDR: the wall is OD/SDR rounded up to the
-// next 0.1 mm (the rounding rule of ISO 4065, from memory), and sizes
-// whose wall would be under 2.0 mm are left out (there the standard's
-// minimum wall, not the SDR, governs; from memory).
-func frPE(sdr float64) []frRow {
+// frPE builds the sizes of the SDR of pipe series S = 10^(k/10), the
+// R10 preferred number of ISO 4065 (S 4, 5, 6.3, 8, 10, 12.5 for k = 6…11,
+// named SDR 9, 11, 13.6, 17, 21, 26 = 2S + 1 rounded): the wall is
+// OD/(2S + 1) with the exact S, rounded up to the next 0.1 mm (the ISO 4065
+// calculation, from memory; it gives, for instance, 5.4 mm for OD 90
+// SDR 17 where 90/17 would round to 5.3). Sizes whose wall would be under
+// 2.0 mm are left out (there the standard's minimum wall, not the SDR,
+// governs; from memory).
+func frPE(k float64) []frRow {
+	sdr := 2*math.Pow(10, k/10) + 1
 	var out []frRow
 	for _, od := range frPEOD {
 		w := od / sdr

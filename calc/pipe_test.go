@@ -10,8 +10,8 @@ import (
 func TestPipeSpotValues(t *testing.T) {
 	// Dimensions in mm. Sources: ASME B36.10M (schedules 40/80, STD, XS)
 	// and ASME B36.19M (10S, 40S) as python3-fluids 1.0.22 tabulates them
-	// (fluids.piping.schedule_lookup); PE by the ISO 4427 OD series with
-	// the wall OD/SDR rounded up to 0.1 mm (from memory); copper ASTM B88
+	// (fluids.piping.schedule_lookup); PE walls of the ISO 4427 tables
+	// (from memory); copper ASTM B88
 	// (from memory); ductile iron ISO 2531 K9 with ISO 4179 lining (from
 	// memory).
 	cases := []struct {

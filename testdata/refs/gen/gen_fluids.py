@@ -252,6 +252,16 @@ def fittings():
                CUSTOM + "&l=1m&nps=%s&sch=40&eps=0mm&q=%sL/s&fit=elbow90lr:1" % (nps, q),
                ["run.sumk = %s ± 0.5%%" % g(k)],
                source="Crane TP-410 bends via %s fluids.fittings.bend_rounded_Crane(bend_diameters=1.5)" % FLUIDS)
+    # A K given in the link (key:count@K) replaces the table's method;
+    # fluids' Hooper2K with the constants given explicitly checks the
+    # others in the same run.
+    d = pipe("40", "3")[2] / 1000
+    q, re_w = flow_for(5e4, d)
+    k = 3 * fit.Hooper2K(Di=d / INCH, Re=re_w, K1=800.0, Kinfty=0.4) + 2 * 0.21
+    w.case("given K beside a Hooper elbow, NPS 3 sch 40",
+           CUSTOM + "&l=1m&nps=3&sch=40&eps=0mm&q=%sL/s&fit=elbow90_thr:3,gate:2@0.21" % q,
+           ["run.sumk = %s ± 1e-12 rel" % g(k)],
+           source="Hooper (1981) 2-K via %s fluids.fittings.Hooper2K(K1=800, Kinfty=0.4), plus 2 x 0.21 given" % FLUIDS)
     table("fittings.tsv", "fitting K: key, inside diameter m, Re (inf: fully turbulent), K with f_T from "
           "Colebrook as ft_Crane's docstring, K with ft_Crane's own f_T",
           ["key", "d_m", "re", "k", "k_lib"], rows)
@@ -292,6 +302,17 @@ def roughness():
             w.case("%s at Re %g" % (key, re), CUSTOM + "&l=100m&d=100mm&mat=%s&q=%sL/s" % (key, q),
                    ["run.f = %s ± 1e-9 rel" % g(f)],
                    source="%s via %s fluids.friction.%s and Colebrook" % (who, FLUIDS, expr))
+    # Materials whose roughness no library table gives: the figure recalled
+    # (from memory), the friction factor by fluids' Colebrook.
+    for key, eps, what in (("steel", 0.045e-3, "Moody (1944) chart 0.00015 ft, from memory"),
+                           ("pe", 0.007e-3, "typical handbook value for PE, from memory"),
+                           ("pvc", 0.0015e-3, "typical handbook value for PVC, from memory"),
+                           ("concrete", 1.0e-3, "middle of Moody's 0.3-3 mm range, from memory")):
+        q, re_w = flow_for(2e5, d)
+        f = Colebrook(re_w, eps / d)
+        w.case("%s at Re 2e5" % key, CUSTOM + "&l=100m&d=100mm&mat=%s&q=%sL/s" % (key, q),
+               ["run.f = %s ± 1e-9 rel" % g(f)],
+               source="%s fluids.friction.Colebrook with eps %g mm (%s)" % (FLUIDS, eps * 1e3, what))
     for key, name in RANGES:
         lo, hi, _ = HHR_roughness[name]
         rows.append([key, "min", repr(lo), "HHR_roughness['%s']" % name])
