@@ -65,8 +65,9 @@ type CraneBand struct {
 
 // Inside diameters, m, between which the K methods are used as published.
 // CraneFT is defined from 1 mm to 10 m; outside KDiameterMin…KDiameterMax
-// (the inside diameters of NPS ½ schedule 160 and NPS 24 schedule 10S,
-// roughly the sizes Crane TP-410 tabulates) Run.Evaluate warns that the
+// (the inside diameters of NPS ½ schedule 160 and NPS 24 schedule 10S as
+// python3-fluids tabulates them, the span of the sizes Crane TP-410
+// tabulates) Run.Evaluate warns that the
 // figures are extrapolated.
 const (
 	KDiameterMin = 0.0117 // m
