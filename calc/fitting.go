@@ -153,9 +153,18 @@ var fittingTable = [...]Fitting{
 // fresh copy.
 func FittingTable() []Fitting {
 	out := make([]Fitting, len(fittingTable))
-	copy(out, fittingTable[:])
+	for i := range fittingTable {
+		out[i] = fittingTable[i].clone()
+	}
 	sort.Slice(out, func(i, j int) bool { return out[i].Key < out[j].Key })
 	return out
+}
+
+// clone returns a copy of f that shares no memory with it.
+func (f *Fitting) clone() Fitting {
+	c := *f
+	c.Bands = append([]CraneBand(nil), f.Bands...)
+	return c
 }
 
 // LookupFitting returns the fitting with the given key (case
@@ -163,7 +172,7 @@ func FittingTable() []Fitting {
 // lists the known keys.
 func LookupFitting(key string) (Fitting, error) {
 	if f := frFitting(key); f != nil {
-		return *f, nil
+		return f.clone(), nil
 	}
 	keys := make([]string, 0, len(fittingTable))
 	for _, f := range FittingTable() {

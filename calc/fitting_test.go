@@ -46,6 +46,11 @@ func TestFittingTable(t *testing.T) {
 	if FittingTable()[0].N == -1 {
 		t.Error("FittingTable shares its backing array")
 	}
+	bf, _ := LookupFitting("butterfly")
+	bf.Bands[0].N = -1
+	if again, _ := LookupFitting("butterfly"); again.Bands[0].N == -1 {
+		t.Error("LookupFitting shares the size bands")
+	}
 }
 
 func TestCraneFT(t *testing.T) {
