@@ -68,7 +68,7 @@ func FuzzBalance(f *testing.F) {
 		}
 		if withRun {
 			b.Run = &Run{Length: l, Diameter: d, Roughness: eps, ExtraK: k, Method: FrictionMethod(method), HazenC: c,
-				Fittings: []FittingCount{{"gate", 2}, {"elbow90lr", 6}}}
+				Fittings: []FittingCount{{Key: "gate", Count: 2}, {Key: "elbow90lr", Count: 6}}}
 		}
 		what := fmt.Sprintf("%+v run=%+v", b, b.Run)
 		r, err := b.Solve()

@@ -47,7 +47,7 @@ func BenchmarkColebrookFixedPoint(b *testing.B) {
 // BenchmarkRunEvaluate: one pipe run with fittings at a turbulent flow.
 func BenchmarkRunEvaluate(b *testing.B) {
 	r := Run{Length: 640, Diameter: 0.2027, Roughness: 0.045e-3,
-		Fittings: []FittingCount{{"gate", 2}, {"elbow90lr", 6}, {"check_swing", 1}, {"exit", 1}}}
+		Fittings: []FittingCount{{Key: "gate", Count: 2}, {Key: "elbow90lr", Count: 6}, {Key: "check_swing", Count: 1}, {Key: "exit", Count: 1}}}
 	fl := Fluid{Density: 998.6, Viscosity: 1.05e-3}
 	sum := 0.0
 	for i := 0; i < b.N; i++ {

@@ -200,19 +200,15 @@ func lineWarnings(lr *LineResult, q float64) []Warning {
 // lumped returns a copy of the line with each segment's fittings folded
 // into its ExtraK: the same ΣK to the last bit (Run.SumK adds the fittings
 // to ExtraK in the same order), so the same results, without the fitting
-// table look-ups on every evaluation. A segment whose ΣK cannot be formed
-// is left as it is, for Evaluate to report.
+// table look-ups on every evaluation (see Run.lumped; with Hooper 2-K
+// fittings the ΣK agrees to rounding). A segment whose ΣK cannot be formed
+// is left as it is.
 func (l Line) lumped() Line {
 	out := Line{Segments: make([]Segment, len(l.Segments))}
 	copy(out.Segments, l.Segments)
 	for i := range out.Segments {
 		r := &out.Segments[i].Run
-		if len(r.Fittings) == 0 {
-			continue
-		}
-		if k, err := r.SumK(); err == nil {
-			r.ExtraK, r.Fittings = k, nil
-		}
+		*r = r.lumped()
 	}
 	return out
 }

@@ -138,7 +138,7 @@ func TestLineReference(t *testing.T) {
 // TestLineOneSegmentIsRun: a line of one segment is the run itself (the
 // definition of Line.Evaluate: no transitions without a neighbour).
 func TestLineOneSegmentIsRun(t *testing.T) {
-	run := Run{Length: 640, Diameter: 0.2027, Roughness: 0.045e-3, Fittings: []FittingCount{{"gate", 2}, {"exit", 1}}}
+	run := Run{Length: 640, Diameter: 0.2027, Roughness: 0.045e-3, Fittings: []FittingCount{{Key: "gate", Count: 2}, {Key: "exit", Count: 1}}}
 	rr, err := run.Evaluate(testLiquid, 0.045)
 	if err != nil {
 		t.Fatal(err)
@@ -212,7 +212,7 @@ func TestLineErrors(t *testing.T) {
 		{"length", Line{Segments: []Segment{ok, {Run: Run{Length: -1, Diameter: 0.1}}}}, testLiquid, 0.01, "2:length"},
 		{"diameter", Line{Segments: []Segment{ok, {Run: Run{Length: 1}}}}, testLiquid, 0.01, "2:d"},
 		{"roughness", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, Roughness: 0.01}}}}, testLiquid, 0.01, "1:eps"},
-		{"fitting", Line{Segments: []Segment{ok, ok, {Run: Run{Length: 1, Diameter: 0.1, Fittings: []FittingCount{{"nosuch", 1}}}}}}, testLiquid, 0.01, "3:fit"},
+		{"fitting", Line{Segments: []Segment{ok, ok, {Run: Run{Length: 1, Diameter: 0.1, Fittings: []FittingCount{{Key: "nosuch", Count: 1}}}}}}, testLiquid, 0.01, "3:fit"},
 		{"k", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, ExtraK: math.NaN()}}}}, testLiquid, 0.01, "1:k"},
 		{"method", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, Method: 9}}}}, testLiquid, 0.01, "1:method"},
 		{"hazen c", Line{Segments: []Segment{{Run: Run{Length: 1, Diameter: 0.1, Method: MethodHazenWilliams}}}}, testLiquid, 0.01, "1:chw"},

@@ -16,27 +16,38 @@ type Material struct {
 	Source    string  // where the figures come from
 }
 
-// materialTable holds the pipe materials. The values were recalled
-// without a document at hand; each row says so and gives the usual range.
+// Sources of the roughness figures.
+const (
+	srcMoody   = "python3-fluids fluids.friction._roughness (Moody 1944 chart values, feet converted to metres; Moody attribution from memory)"
+	srcFarshad = "Farshad & Rieke (2006), SPE Projects, Facilities & Construction 1(3), mean roughness, as python3-fluids fluids.friction._Farshad_roughness"
+	srcHHR     = "Idelchik & Ginevskiy, Handbook of Hydraulic Resistance (4th ed.), as python3-fluids fluids.friction.HHR_roughness"
+)
+
+// materialTable holds the pipe materials. Hazen–Williams C factors are
+// typical values recalled without a document at hand (from memory).
 var materialTable = [...]Material{
 	{"steel", "commercial steel, new", 0.045e-3, 120,
-		"ε from memory (Moody 1944 chart value 0.045 mm); C from memory (typical 120–140)"},
-	{"ss", "stainless steel", 0.015e-3, 140,
-		"from memory (typical handbook values: ε 0.002–0.015 mm, C 140–150)"},
-	{"ci", "cast iron, uncoated", 0.26e-3, 130,
-		"ε from memory (Moody 1944 chart value 0.26 mm); C from memory (new 130, falling to about 100 with age)"},
-	{"ductile", "ductile iron, cement-mortar lined", 0.1e-3, 140,
-		"from memory (typical handbook values: ε 0.03–0.3 mm depending on lining, C 130–140)"},
-	{"galv", "galvanized steel", 0.15e-3, 120,
-		"ε from memory (Moody 1944 chart value 0.15 mm); C from memory (typical 110–120)"},
-	{"copper", "copper or brass, drawn tubing", 0.0015e-3, 140,
-		"ε from memory (Moody 1944 chart value for drawn tubing 0.0015 mm); C from memory (typical 130–140)"},
+		"ε Moody (1944) chart 0.00015 ft, from memory; within " + srcHHR + " 'Seamless steel tubes, New and unused' 0.02–0.1 mm; C from memory (typical 120–140)"},
+	{"ss", "stainless steel, bare", 0.055e-3, 140,
+		"ε " + srcFarshad + " ['Cr13, bare']; C from memory (typical 140–150)"},
+	{"ss_ep", "stainless steel, electropolished", 0.030e-3, 150,
+		"ε " + srcFarshad + " ['Cr13, electropolished bare']; C from memory (typical 140–150)"},
+	{"ci", "cast iron, uncoated", 0.259e-3, 130,
+		"ε " + srcMoody + " ['Cast iron']; C from memory (new 130, falling to about 100 with age)"},
+	{"ci_asphalt", "cast iron, asphalt coated", 0.122e-3, 130,
+		"ε " + srcMoody + " ['Asphalted cast iron']; C from memory (typical 130)"},
+	{"ductile", "ductile iron, cement-mortar lined", 0.033e-3, 140,
+		"ε " + srcFarshad + " ['Cement lining']; C from memory (typical 130–140)"},
+	{"galv", "galvanized steel", 0.152e-3, 120,
+		"ε " + srcMoody + " ['Galvanized iron']; " + srcHHR + " gives 0.10–0.15 mm for ordinary galvanization; C from memory (typical 110–120)"},
+	{"copper", "copper or brass, drawn tubing", 1.52e-6, 140,
+		"ε " + srcMoody + " ['Brass']; " + srcHHR + " gives 0.0015–0.01 mm for seamless brass and copper tubes; C from memory (typical 130–140)"},
 	{"pe", "polyethylene (PE)", 0.007e-3, 150,
-		"from memory (typical handbook values: ε 0.0015–0.007 mm, upper value taken; C 140–150)"},
+		"from memory (typical handbook values: ε 0.0015–0.007 mm, upper value taken; C 140–150); no plastic pipe in the reference libraries' tables"},
 	{"pvc", "PVC", 0.0015e-3, 150,
-		"from memory (typical handbook values: ε 0.0015–0.007 mm; C 140–150)"},
+		"from memory (typical handbook values: ε 0.0015–0.007 mm; C 140–150); no plastic pipe in the reference libraries' tables"},
 	{"concrete", "concrete", 1.0e-3, 120,
-		"from memory (Moody 1944 chart range ε 0.3–3 mm, middle value taken; C 100–140)"},
+		"ε middle of the range of " + srcMoody + " ['Concrete'] 0.305 mm to ['Rough concrete'] 3.05 mm; C from memory (100–140)"},
 }
 
 // MaterialTable returns every pipe material, sorted by key. The slice is

@@ -18,15 +18,18 @@ func TestMaterialTable(t *testing.T) {
 			t.Errorf("incomplete row %+v", m)
 		}
 	}
-	for _, k := range []string{"steel", "ss", "ci", "galv", "pe", "pvc", "concrete", "ductile", "copper"} {
+	for _, k := range []string{"steel", "ss", "ss_ep", "ci", "ci_asphalt", "galv", "pe", "pvc", "concrete", "ductile", "copper"} {
 		if _, ok := seen[k]; !ok {
 			t.Errorf("missing material %q", k)
 		}
 	}
-	// Moody (1944) chart roughness values, from memory: commercial steel
-	// 0.045 mm, cast iron 0.26 mm, galvanized 0.15 mm, drawn tubing
-	// 0.0015 mm; concrete within the chart's 0.3–3 mm.
-	for k, eps := range map[string]float64{"steel": 0.045e-3, "ci": 0.26e-3, "galv": 0.15e-3, "copper": 0.0015e-3} {
+	// Moody (1944) chart roughness values: commercial steel 0.045 mm (from
+	// memory); cast iron 0.259 mm, galvanized 0.152 mm, drawn tubing
+	// 0.00152 mm (python3-fluids 1.0.22 fluids.friction._roughness);
+	// cement lining 0.033 mm, Cr13 bare 0.055 mm (Farshad & Rieke 2006, as
+	// fluids' _Farshad_roughness); concrete within the chart's 0.3–3 mm.
+	for k, eps := range map[string]float64{"steel": 0.045e-3, "ci": 0.259e-3, "galv": 0.152e-3, "copper": 1.52e-6,
+		"ductile": 0.033e-3, "ss": 0.055e-3, "ss_ep": 0.030e-3, "ci_asphalt": 0.122e-3} {
 		if math.Abs(seen[k].Roughness-eps) > 1e-12 {
 			t.Errorf("%s roughness %g m, want %g m", k, seen[k].Roughness, eps)
 		}

@@ -13,7 +13,7 @@ import (
 // the source surface through the suction pipe, α = 1).
 func TestNPSHAgainstBalance(t *testing.T) {
 	const site = 96e3
-	suction := Run{Length: 8, Diameter: 0.15, Roughness: 0.045e-3, Fittings: []FittingCount{{"entry_sharp", 1}, {"elbow90", 1}}}
+	suction := Run{Length: 8, Diameter: 0.15, Roughness: 0.045e-3, Fittings: []FittingCount{{Key: "entry_sharp", Count: 1}, {Key: "elbow90", Count: 1}}}
 	for _, q := range []float64{0.005, 0.02, 0.04} {
 		b := Balance{Fluid: testLiquid, SitePressure: site, Alpha: AlphaUnity,
 			In: Point{P: site, Z: 100}, Out: Point{Z: 103.2, D: 0.15}, Q: q, Run: &suction, Unknown: SolveP2}

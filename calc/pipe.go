@@ -10,96 +10,119 @@ import (
 const (
 	StandardB3610M = "ASME B36.10M"
 	StandardB3619M = "ASME B36.19M"
-	StandardPE     = "ISO 4427 / EN 12201"
+	StandardD1785  = "ASTM D1785"
+	StandardD2241  = "ASTM D2241"
+	StandardB88    = "ASTM B88"
+	StandardPE     = "ISO 4427"
+	StandardDI     = "ISO 2531 / ISO 4179"
 )
 
 // PipeSize is one pipe of a dimension standard. Lengths are in metres.
 type PipeSize struct {
-	Standard string  // e.g. "ASME B36.10M"
-	NPS      string  // nominal size: inches for steel ("1-1/2", "8"), OD in mm for PE ("160")
-	Schedule string  // "40", "80", "STD", "XS", "10S", "40S", "SDR11", "SDR17"
-	OD       float64 // outside diameter, m
-	Wall     float64 // wall thickness, m
-	ID       float64 // inside diameter OD − 2·Wall, m
+	Catalogue string  // key of its Catalogue: "steel", "ss", "pvc", "copper", "pe", "di"
+	Standard  string  // e.g. "ASME B36.10M"
+	NPS       string  // nominal size in the catalogue's notation: "1-1/2" (inch), "160" (PE OD, mm), "200" (DN)
+	Schedule  string  // class: "40", "10S", "PVC-SDR21", "L", "SDR11", "K9"
+	DN        int     // metric designation where the standard gives one (steel), else 0
+	OD        float64 // outside diameter, m
+	Wall      float64 // wall thickness, m (iron only; a lining is not included)
+	Lining    float64 // cement-mortar lining on each side, m (ductile iron), else 0
+	ID        float64 // inside diameter OD − 2·(Wall + Lining), m
+	// FromMemory is set when the row was recalled without the standard at
+	// hand and could not be checked against a reference library.
+	FromMemory bool
 }
 
-// frSchedules lists the schedules in the order PipeSizes reports them.
-var frSchedules = [...]string{"40", "80", "STD", "XS", "10S", "40S", "SDR11", "SDR17"}
+// Label returns the size in its catalogue's notation, such as "NPS 8
+// sch 40", "NPS 2 PVC-SDR21", "1/2 in type L", "OD 160 SDR11" or
+// "DN 200 K9".
+func (p PipeSize) Label() string {
+	switch p.Catalogue {
+	case "copper":
+		return p.NPS + " in type " + p.Schedule
+	case "pe":
+		return "OD " + p.NPS + " " + p.Schedule
+	case "di":
+		return "DN " + p.NPS + " " + p.Schedule
+	case "pvc":
+		return "NPS " + p.NPS + " " + p.Schedule
+	}
+	return "NPS " + p.NPS + " sch " + p.Schedule
+}
 
-// PipeSizes returns every tabulated pipe, by schedule then size:
+// PipeSizes returns every tabulated pipe, class by class in the order of
+// Catalogues:
 //
-//   - ASME B36.10M carbon steel, schedules 40, 80, STD and XS, NPS 1/2–24;
-//   - ASME B36.19M stainless steel, 10S (NPS 1/2–24) and 40S (NPS 1/2–12);
-//   - polyethylene to the ISO 4427 / EN 12201 OD series, SDR 11 (OD
-//     25–630 mm) and SDR 17 (OD 40–630 mm), with the wall taken as OD/SDR:
-//     a mean-wall approximation; the standards tabulate rounded minimum
-//     walls, and real mean walls are slightly thicker.
+//   - ASME B36.10M carbon steel, schedules 40, 80, STD, XS, NPS 1/2–24;
+//   - ASME B36.19M stainless steel, 5S, 10S, 40S, 80S, NPS 1/2–24;
+//   - PVC: ASTM D1785 schedules 40 and 80 (NPS 1/2–24), ASTM D2241 SDR 21
+//     (NPS 3/4–24) and SDR 26 (NPS 1–24), as classes "PVC40", "PVC80",
+//     "PVC-SDR21", "PVC-SDR26";
+//   - ASTM B88 copper tube types K, L (1/4–12 in) and M (3/8–12 in);
+//   - polyethylene, ISO 4427 OD 20–630 mm, SDR 9, 11, 13.6, 17, 21, 26;
+//   - ductile iron, ISO 2531 class K9, DN 80–1000, with the ISO 4179
+//     cement-mortar lining taken off the bore.
 //
-// The dimensions were recalled without the documents at hand (from
-// memory). The slice is freshly built.
+// Rows recalled without the standard at hand have FromMemory set (see
+// Catalogue.Source). The slice is freshly built.
 func PipeSizes() []PipeSize {
 	var out []PipeSize
-	for _, s := range frSchedules {
-		out = append(out, frSchedulePipes(s)...)
+	for _, c := range frClasses {
+		out = append(out, frClassPipes(c.name)...)
 	}
 	return out
 }
 
-// frSchedulePipes builds the pipes of one canonical schedule.
-func frSchedulePipes(sch string) []PipeSize {
-	var out []PipeSize
-	for _, p := range frPESDR {
-		if p.name != sch {
+// frClassPipes builds the pipes of one canonical class name.
+func frClassPipes(sch string) []PipeSize {
+	for _, c := range frClasses {
+		if c.name != sch {
 			continue
 		}
-		for _, od := range frPEOD {
-			if od < p.minOD {
-				continue
+		out := make([]PipeSize, 0, len(c.rows))
+		for _, r := range c.rows {
+			od, wall := r.od, r.wall
+			if c.inch {
+				od, wall = od*25.4, wall*25.4
 			}
-			wall := od / p.sdr
-			out = append(out, PipeSize{Standard: StandardPE, NPS: strconv.FormatFloat(od, 'f', -1, 64),
-				Schedule: sch, OD: od / 1000, Wall: wall / 1000, ID: (od - 2*wall) / 1000})
+			lining := 0.0
+			if c.cat == "di" {
+				dn, _ := frNPSValue(r.size)
+				lining = frLining(dn)
+			}
+			id := od - 2*(wall+lining)
+			if c.idRound > 0 {
+				// Round the ID as the tables print it.
+				id = math.Round(id/c.idRound) * c.idRound
+			}
+			p := PipeSize{Catalogue: c.cat, Standard: c.standard, NPS: r.size, Schedule: c.name,
+				OD: od / 1000, Wall: wall / 1000, Lining: lining / 1000, ID: id / 1000, FromMemory: c.memo}
+			if c.cat == "steel" || c.cat == "ss" {
+				p.DN = SteelDN(r.size)
+			}
+			out = append(out, p)
 		}
 		return out
 	}
-	for _, r := range frSteelRows {
-		std := StandardB3610M
-		var wall float64
-		switch sch {
-		case "40":
-			wall = r.s40
-		case "80":
-			wall = r.s80
-		case "STD":
-			wall = r.std
-		case "XS":
-			wall = r.xs
-		case "10S":
-			wall, std = r.s10s, StandardB3619M
-		case "40S":
-			wall, std = r.s40s, StandardB3619M
-		}
-		if wall == 0 {
-			continue
-		}
-		// Round the ID to 0.01 mm so that it reads as the tables print it.
-		id := math.Round((r.od-2*wall)*100) / 100
-		out = append(out, PipeSize{Standard: std, NPS: r.nps, Schedule: sch,
-			OD: r.od / 1000, Wall: wall / 1000, ID: id / 1000})
-	}
-	return out
+	return nil
 }
 
 // frNormSchedule maps user spellings ("sch 40", "Sch40", "std", "40s",
-// "SDR 11") to the canonical schedule name, or "" if unknown.
+// "SDR 11", "type L", "pvc sdr 21") to the canonical class name, or "" if
+// unknown.
 func frNormSchedule(s string) string {
-	t := strings.ToLower(strings.TrimSpace(s))
-	t = strings.NewReplacer(" ", "", ".", "", "-", "", "_", "").Replace(t)
-	t = strings.TrimPrefix(t, "schedule")
-	t = strings.TrimPrefix(t, "sch")
-	for _, c := range frSchedules {
-		if strings.ToLower(c) == t {
-			return c
+	n := func(s string) string {
+		t := strings.ToLower(strings.TrimSpace(s))
+		t = strings.NewReplacer(" ", "", ".", "", "-", "", "_", "").Replace(t)
+		for _, p := range []string{"schedule", "sch", "type"} {
+			t = strings.TrimPrefix(t, p)
+		}
+		return t
+	}
+	t := n(s)
+	for _, c := range frClasses {
+		if n(c.name) == t {
+			return c.name
 		}
 	}
 	return ""
@@ -150,21 +173,31 @@ func frNPSValue(s string) (float64, bool) {
 	return total, true
 }
 
-// LookupPipe returns the pipe of nominal size nps in the given schedule.
-// Schedules: "40", "80", "STD", "XS" (ASME B36.10M), "10S", "40S"
-// (ASME B36.19M), "SDR11", "SDR17" (PE, nps is then the OD in mm);
-// spellings such as "sch 40" or "SDR 11" are accepted. Sizes may be
-// written "1-1/2", "1 1/2" or "1.5". Errors: *FieldError for field "sch"
-// (unknown schedule) or "nps" (size not in that schedule, with the list of
-// sizes that are).
+// LookupPipe returns the pipe of nominal size nps in the given class
+// (schedule, type, SDR or wall class; see PipeSizes and Catalogues).
+// Class spellings such as "sch 40", "SDR 11", "type L" or "pvc sdr 21" are
+// accepted. Inch sizes may be written "1-1/2", "1 1/2" or "1.5"; PE sizes
+// as the OD in mm ("160", "160mm", "d160"); ductile iron as the DN ("200",
+// "DN200"); steel and stainless sizes also as their DN ("DN 200" for
+// NPS 8). Errors: *FieldError for field "sch" (unknown class) or "nps"
+// (size not in that class, with the list of sizes that are).
 func LookupPipe(nps, schedule string) (PipeSize, error) {
 	sch := frNormSchedule(schedule)
 	if sch == "" {
-		return PipeSize{}, fieldErrorf("sch", "unknown schedule %q; expected one of %s", schedule, strings.Join(frSchedules[:], ", "))
+		var all []string
+		for _, c := range frClasses {
+			all = append(all, c.name)
+		}
+		return PipeSize{}, fieldErrorf("sch", "unknown schedule or class %q; expected one of %s", schedule, strings.Join(all, ", "))
 	}
-	pipes := frSchedulePipes(sch)
-	v, ok := frNPSValue(nps)
-	if ok {
+	pipes := frClassPipes(sch)
+	size := nps
+	if t := strings.ToLower(strings.TrimSpace(nps)); strings.HasPrefix(t, "dn") && len(pipes) > 0 && pipes[0].DN > 0 {
+		if dn, ok := frNPSValue(t); ok && dn == math.Trunc(dn) {
+			size = SteelNPS(int(dn))
+		}
+	}
+	if v, ok := frNPSValue(size); ok {
 		for _, p := range pipes {
 			if w, _ := frNPSValue(p.NPS); w == v {
 				return p, nil
@@ -175,5 +208,5 @@ func LookupPipe(nps, schedule string) (PipeSize, error) {
 	for i, p := range pipes {
 		sizes[i] = p.NPS
 	}
-	return PipeSize{}, fieldErrorf("nps", "no size %q in schedule %s; sizes listed: %s", nps, sch, strings.Join(sizes, ", "))
+	return PipeSize{}, fieldErrorf("nps", "no size %q in class %s; sizes listed: %s", nps, sch, strings.Join(sizes, ", "))
 }

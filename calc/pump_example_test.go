@@ -73,8 +73,8 @@ func ExampleOperatingPoint() {
 	fmt.Printf("Q = %.2f L/s, H = %.2f m, hydraulic power %.1f kW\n", op.Q*1e3, op.H, op.HydraulicPower/1e3)
 	fmt.Printf("losses %.2f m, NPSHr %.2f m\n", op.Balance.FrictionHead, op.NPSHr)
 	// Output:
-	// Q = 50.91 L/s, H = 46.45 m, hydraulic power 23.2 kW
-	// losses 7.45 m, NPSHr 3.34 m
+	// Q = 51.24 L/s, H = 46.26 m, hydraulic power 23.2 kW
+	// losses 7.26 m, NPSHr 3.36 m
 }
 
 // NPSH available at the demo pump at its operating point, against its
@@ -95,5 +95,5 @@ func ExampleNPSH() {
 	}
 	fmt.Printf("NPSHa %.2f m, NPSHr %.2f m, margin %.2f m, ratio %.2f: %v\n", r.Available, r.Required, r.Margin, r.Ratio, r.Level)
 	// Output:
-	// NPSHa 7.26 m, NPSHr 3.34 m, margin 3.91 m, ratio 2.17: ok
+	// NPSHa 7.25 m, NPSHr 3.36 m, margin 3.89 m, ratio 2.16: ok
 }

@@ -21,10 +21,24 @@ const (
 )
 
 // FittingCount is a number of identical fittings in a run, by key of
-// FittingTable.
+// FittingTable. When Override is set, K replaces the table's method for
+// these fittings (a figure from the maker's data sheet, say); it must be
+// finite and zero or positive.
 type FittingCount struct {
-	Key   string
-	Count int
+	Key      string
+	Count    int
+	K        float64 // per fitting, used when Override is set
+	Override bool
+}
+
+// FittingK is the loss coefficient a run used for one kind of fitting.
+type FittingK struct {
+	Key     string
+	Count   int
+	K       float64 // per fitting, at the run's diameter and Reynolds number
+	Method  string  // "Crane TP-410", "Hooper 2-K", "fixed" or "given"
+	Formula string  // e.g. "K = 8·f_T"; for a given K, "K = 0.12"
+	Source  string  // the table's source; empty for a given K
 }
 
 // Run is one straight pipe run of constant inside diameter with its
@@ -39,6 +53,10 @@ type Run struct {
 	ExtraK    float64 // further loss coefficients, added to ΣK
 	Method    FrictionMethod
 	HazenC    float64 // Hazen–Williams C, for MethodHazenWilliams
+
+	// extraK1 is Σ Count·K1 of Hooper fittings folded into ExtraK by
+	// lumped: ΣK gains extraK1/Re.
+	extraK1 float64
 }
 
 // RunResult is a Run evaluated at one flow. Losses are heads in metres of
@@ -59,7 +77,11 @@ type RunResult struct {
 	TotalLossLow              float64 // transitional flow: total with the smaller friction bound
 	TotalLossHigh             float64 // transitional flow: total with the larger bound (= TotalLoss)
 	SumK                      float64 // ΣK of the fittings plus ExtraK
-	Warnings                  []string
+	// Fittings lists the K used for each kind of fitting, in the run's
+	// order: at the run's diameter and Reynolds number (fully turbulent
+	// at zero flow).
+	Fittings []FittingK
+	Warnings []string
 }
 
 // frCheckPositive reports whether v is finite and > 0.
@@ -68,24 +90,101 @@ func frCheckPositive(v float64) bool { return v > 0 && !math.IsInf(v, 0) }
 // frCheckNonNeg reports whether v is finite and ≥ 0.
 func frCheckNonNeg(v float64) bool { return v >= 0 && !math.IsInf(v, 0) }
 
-// SumK returns ΣK of the run's fittings plus ExtraK. Errors name field
-// "fit" (unknown key or negative count) or "k" (bad ExtraK).
+// SumK returns ΣK of the run's fittings plus ExtraK, fully turbulent
+// (Hooper's K1/Re terms left out; see FittingKs). Errors name field "fit"
+// (unknown key, negative count, bad K override or a diameter outside the
+// method's range) or "k" (bad ExtraK).
 func (r Run) SumK() (float64, error) {
+	_, sum, err := r.FittingKs(math.Inf(1))
+	return sum, err
+}
+
+// ReDependent reports whether a fitting of the run has a K that changes
+// with the Reynolds number (Hooper 2-K, not overridden).
+func (r Run) ReDependent() bool {
+	return r.extraK1 > 0 || r.anyFitting(Fitting.ReDependent)
+}
+
+// lumped returns the run with its fittings folded into ExtraK (fully
+// turbulent ΣK) and extraK1 (the Hooper K1 terms), the same ΣK at any
+// Reynolds number to rounding, without the table look-ups. A run whose
+// ΣK cannot be formed is returned as it is, for Evaluate to report.
+func (r Run) lumped() Run {
+	if len(r.Fittings) == 0 {
+		return r
+	}
+	k, err := r.SumK()
+	if err != nil {
+		return r
+	}
+	for _, fc := range r.Fittings {
+		if f := frFitting(fc.Key); f.ReDependent() && !fc.Override {
+			r.extraK1 += float64(fc.Count) * f.K1
+		}
+	}
+	r.ExtraK, r.Fittings = k, nil
+	return r
+}
+
+// FittingKs returns the K of each kind of fitting of the run in the run's
+// inside diameter at Reynolds number re (+Inf: fully turbulent), and
+// ΣK = ExtraK + Σ Count·K in the run's order. Errors name field "fit"
+// (unknown key, negative count, bad K override, a diameter outside the
+// method's range, re not positive) or "k" (bad ExtraK).
+func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 	if !frCheckNonNeg(r.ExtraK) {
-		return 0, fieldErrorf("k", "extra loss coefficient must be zero or positive, got %g", r.ExtraK)
+		return nil, 0, fieldErrorf("k", "extra loss coefficient must be zero or positive, got %g", r.ExtraK)
 	}
 	sum := r.ExtraK
+	if r.extraK1 > 0 && !math.IsInf(re, 1) {
+		sum += r.extraK1 / re
+	}
+	var out []FittingK
+	ft := 0.0 // Crane's f_T at the run's diameter, once found
 	for _, fc := range r.Fittings {
-		f, err := LookupFitting(fc.Key)
-		if err != nil {
-			return 0, err
+		f := frFitting(fc.Key)
+		if f == nil {
+			_, err := LookupFitting(fc.Key)
+			return nil, 0, err
 		}
 		if fc.Count < 0 {
-			return 0, fieldErrorf("fit", "number of %q fittings must not be negative, got %d", fc.Key, fc.Count)
+			return nil, 0, fieldErrorf("fit", "number of %q fittings must not be negative, got %d", fc.Key, fc.Count)
 		}
-		sum += float64(fc.Count) * f.K
+		fk := FittingK{Key: f.Key, Count: fc.Count}
+		if fc.Override {
+			if !frCheckNonNeg(fc.K) {
+				return nil, 0, fieldErrorf("fit", "the K given for %q must be zero or positive, got %g", fc.Key, fc.K)
+			}
+			fk.K, fk.Method, fk.Formula = fc.K, "given", "K = "+frG(fc.K)
+		} else {
+			err := frCheckKInputs(r.Diameter, re)
+			if err == nil && f.Method == KCrane && ft == 0 {
+				ft, err = CraneFT(r.Diameter)
+			}
+			var k float64
+			if err == nil {
+				k, err = f.kAt(r.Diameter, re, ft)
+			}
+			if err != nil {
+				return nil, 0, fieldErrorf("fit", "%s: %v", fc.Key, err)
+			}
+			fk.K, fk.Method, fk.Formula, fk.Source = k, f.Method.String(), f.Formula(r.Diameter), f.Source
+		}
+		sum += float64(fc.Count) * fk.K
+		out = append(out, fk)
 	}
-	return sum, nil
+	return out, sum, nil
+}
+
+// anyFitting reports whether a fitting of the run, present and not given
+// a K, satisfies ok.
+func (r Run) anyFitting(ok func(Fitting) bool) bool {
+	for _, fc := range r.Fittings {
+		if f := frFitting(fc.Key); f != nil && !fc.Override && fc.Count > 0 && ok(*f) {
+			return true
+		}
+	}
+	return false
 }
 
 // validate checks the run and the liquid.
@@ -178,18 +277,26 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	if err := r.validate(fl); err != nil {
 		return RunResult{}, err
 	}
-	sumK, err := r.SumK()
+	ks, sumK, err := r.FittingKs(math.Inf(1))
 	if err != nil {
 		return RunResult{}, err
 	}
 	if math.IsNaN(q) || math.IsInf(q, 0) || q < 0 {
 		return RunResult{}, fieldErrorf("q", "flow must be zero or positive, got %g", q)
 	}
-	res := RunResult{SumK: sumK}
 	area := math.Pi * r.Diameter * r.Diameter / 4
 	v := q / area
 	re := Reynolds(fl.Density, v, r.Diameter, fl.Viscosity)
+	if q > 0 && r.ReDependent() {
+		if ks, sumK, err = r.FittingKs(re); err != nil {
+			return RunResult{}, err
+		}
+	}
+	res := RunResult{SumK: sumK, Fittings: ks}
 	res.Velocity, res.Reynolds, res.Regime = v, re, RegimeOf(re)
+	if (r.Diameter < KDiameterMin || r.Diameter > KDiameterMax) && r.anyFitting(func(f Fitting) bool { return f.Method != KFixed }) {
+		res.Warnings = append(res.Warnings, fmt.Sprintf("inside diameter %.4g m is outside the sizes the fitting methods were published for (about %.4g–%.3g m): their K values are extrapolated", r.Diameter, KDiameterMin, KDiameterMax))
+	}
 	if q == 0 {
 		res.Alpha = AlphaLaminar()
 		res.Warnings = append(res.Warnings, "no flow: all losses are zero")
@@ -207,8 +314,8 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		if r.Method == MethodHazenWilliams {
 			res.Warnings = append(res.Warnings, "laminar flow: friction from 64/Re; Hazen–Williams does not apply")
 		}
-		if sumK > 0 {
-			res.Warnings = append(res.Warnings, "laminar flow: the fitting K values are turbulent-flow figures; real fitting losses are higher")
+		if sumK > r.ExtraK && r.anyFitting(func(f Fitting) bool { return !f.ReDependent() }) {
+			res.Warnings = append(res.Warnings, "laminar flow: the fitting K values (Crane TP-410 and fixed ones) are turbulent-flow figures; real fitting losses are higher")
 		}
 	case Transitional:
 		fLam := 64 / re

@@ -33,5 +33,5 @@ func ExampleRun_Evaluate() {
 	fmt.Printf("ΣK = %.2f, major %.2f m + minor %.2f m = %.2f m\n", res.SumK, res.MajorLoss, res.MinorLoss, res.TotalLoss)
 	// Output:
 	// V = 1.394 m/s, Re = 268007 (turbulent), f = 0.01663
-	// ΣK = 6.00, major 5.20 m + minor 0.59 m = 5.79 m
+	// ΣK = 3.81, major 5.20 m + minor 0.38 m = 5.58 m
 }

@@ -77,11 +77,8 @@ func (b Balance) lumped() Balance {
 		b.Line = &l
 	}
 	if b.Run != nil && len(b.Run.Fittings) > 0 {
-		if k, err := b.Run.SumK(); err == nil {
-			r := *b.Run
-			r.ExtraK, r.Fittings = k, nil
-			b.Run = &r
-		}
+		r := b.Run.lumped()
+		b.Run = &r
 	}
 	return b
 }

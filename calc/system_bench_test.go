@@ -11,7 +11,7 @@ func benchLine20() *Line {
 	for i := 0; i < 20; i++ {
 		l.Segments = append(l.Segments, Segment{
 			Run: Run{Length: 20 + 5*float64(i), Diameter: ds[i%len(ds)], Roughness: 0.045e-3,
-				Fittings: []FittingCount{{"elbow90lr", 2}, {"gate", 1}}},
+				Fittings: []FittingCount{{Key: "elbow90lr", Count: 2}, {Key: "gate", Count: 1}}},
 			EndZ: 2 * float64(i+1),
 		})
 	}

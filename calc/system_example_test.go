@@ -19,7 +19,7 @@ func ExampleSystemCurve() {
 	}
 	// Output:
 	// 0 L/s: 39.00 m
-	// 20 L/s: 40.29 m
-	// 40 L/s: 43.71 m
-	// 60 L/s: 49.19 m
+	// 20 L/s: 40.24 m
+	// 40 L/s: 43.54 m
+	// 60 L/s: 48.80 m
 }

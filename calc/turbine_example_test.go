@@ -34,7 +34,7 @@ func ExampleTurbine() {
 	fmt.Printf("gross %.1f m, losses %.2f m, exit %.2f m, net %.2f m: %.1f kW\n",
 		r.GrossHead, r.Losses, r.ExitVelocityHead, r.NetHead, r.Power/1e3)
 	// Output:
-	// gross 115.0 m, losses 24.70 m, exit 0.14 m, net 90.17 m: 15.9 kW
+	// gross 115.0 m, losses 24.69 m, exit 0.14 m, net 90.17 m: 15.9 kW
 }
 
 // The flow that gives the demo line the most output.

@@ -279,37 +279,3 @@ func number(param, text string) (float64, error) {
 	}
 	return v, nil
 }
-
-// ParseFittings reads a fitting list "gate:2,elbow90lr:6,exit" (a count of
-// 1 may be left out).
-func ParseFittings(text string) ([]calc.FittingCount, error) {
-	var out []calc.FittingCount
-	seen := map[string]bool{}
-	for _, item := range strings.Split(text, ",") {
-		item = strings.TrimSpace(item)
-		if item == "" {
-			continue
-		}
-		key, cnt, hasCount := strings.Cut(item, ":")
-		key = strings.TrimSpace(key)
-		if _, err := calc.LookupFitting(key); err != nil {
-			return nil, err
-		}
-		if seen[key] {
-			return nil, &calc.FieldError{Field: "fit", Msg: fmt.Sprintf("%q is listed twice; give one count", key)}
-		}
-		seen[key] = true
-		n := 1
-		if hasCount {
-			c, err := strconv.Atoi(strings.TrimSpace(cnt))
-			if err != nil || c < 0 || c > 1000 {
-				return nil, &calc.FieldError{Field: "fit", Msg: fmt.Sprintf("the count of %q must be a whole number from 0 to 1000", key)}
-			}
-			n = c
-		}
-		if n > 0 {
-			out = append(out, calc.FittingCount{Key: key, Count: n})
-		}
-	}
-	return out, nil
-}

@@ -283,6 +283,6 @@ func ExampleEvaluate() {
 	fmt.Println("pump head", ShowParam("hp", r.Balance.Value, false))
 	fmt.Println("regime", r.Run.Regime, "at Re", calc.FormatNumber(r.Run.Reynolds, 4))
 	// Output:
-	// pump head 28.64 m
+	// pump head 28.53 m
 	// regime turbulent at Re 101500
 }

@@ -103,7 +103,11 @@ def seawater_points(path):
                 sea = SeaWater(T=t, P=p, S=0.035)
                 pure = SeaWater(T=t, P=p, S=0.0)
                 aw = math.exp((sea.muw - pure.g) / (r * t))
-                out.write("\t".join([f(t), f(p * 1e6), f(sea.rho), f(aw)]) + "\n")
+                # IAPWS-08 density comes out of an iterative solve
+                # (scipy.optimize.fsolve inside python3-iapws) whose last
+                # digits change with the scipy and numpy builds: 12
+                # significant digits keep the file identical across them.
+                out.write("\t".join([f(t), f(p * 1e6), "%.12g" % sea.rho, "%.12g" % aw]) + "\n")
 
 
 def main():
