@@ -310,7 +310,7 @@ func (c *card) fittings(f *present.Fittings) app.UI {
 		var rows []app.UI
 		for _, it := range f.Items {
 			rows = append(rows, app.Li().Class("fit").Body(
-				app.Span().Class("fit-name").Text(it.Name),
+				app.Span().Class("fit-name").Body(app.Text(it.Name), app.Span().Class("fit-k").Text(" "+it.K)),
 				app.Div().Class("stepper").Body(button(c.S, it.Less), app.Span().Class("count").Text(strconv.Itoa(it.Count)), button(c.S, it.More)),
 			))
 		}

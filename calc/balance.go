@@ -528,7 +528,10 @@ func (b Balance) result(v float64, st state) BalanceResult {
 	r.Warnings = append(r.Warnings, st.warn...)
 	if st.run != nil {
 		for _, w := range st.run.Warnings {
-			r.Warnings = append(r.Warnings, warnf("l", "%s", w))
+			if w.Field == "" {
+				w.Field = "l"
+			}
+			r.Warnings = append(r.Warnings, w)
 		}
 	}
 	if st.line != nil {

@@ -191,7 +191,11 @@ func lineWarnings(lr *LineResult, q float64) []Warning {
 	var out []Warning
 	for i, s := range lr.Segments {
 		for _, w := range s.Warnings {
-			out = append(out, Warning{Field: "d", Segment: i + 1, Text: w})
+			if w.Field != "d" {
+				w.Field = "d" // the segment's own input: the pipe it is
+			}
+			w.Segment = i + 1
+			out = append(out, w)
 		}
 	}
 	return out

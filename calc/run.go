@@ -81,7 +81,7 @@ type RunResult struct {
 	// order: at the run's diameter and Reynolds number (fully turbulent
 	// at zero flow).
 	Fittings []FittingK
-	Warnings []string
+	Warnings []Warning // Field "d" or "q" where one input is to blame, else empty
 }
 
 // frCheckPositive reports whether v is finite and > 0.
@@ -295,11 +295,11 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	res := RunResult{SumK: sumK, Fittings: ks}
 	res.Velocity, res.Reynolds, res.Regime = v, re, RegimeOf(re)
 	if (r.Diameter < KDiameterMin || r.Diameter > KDiameterMax) && r.anyFitting(func(f Fitting) bool { return f.Method != KFixed }) {
-		res.Warnings = append(res.Warnings, fmt.Sprintf("inside diameter %.4g m is outside the sizes the fitting methods were published for (about %.4g–%.3g m): their K values are extrapolated", r.Diameter, KDiameterMin, KDiameterMax))
+		res.Warnings = append(res.Warnings, warnf("d", "inside diameter %v is outside the sizes the fitting methods were published for (about %v–%v): their K values are extrapolated", Fig(r.Diameter, Length), Fig(KDiameterMin, Length), Fig(KDiameterMax, Length)))
 	}
 	if q == 0 {
 		res.Alpha = AlphaLaminar()
-		res.Warnings = append(res.Warnings, "no flow: all losses are zero")
+		res.Warnings = append(res.Warnings, warnf("q", "no flow: all losses are zero"))
 		return res, nil
 	}
 	hv := v * v / (2 * StandardGravity)
@@ -312,10 +312,10 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		res.Alpha = AlphaLaminar()
 		res.Friction, res.FrictionLow, res.FrictionHigh = f, f, f
 		if r.Method == MethodHazenWilliams {
-			res.Warnings = append(res.Warnings, "laminar flow: friction from 64/Re; Hazen–Williams does not apply")
+			res.Warnings = append(res.Warnings, warnf("", "laminar flow: friction from 64/Re; Hazen–Williams does not apply"))
 		}
 		if sumK > r.ExtraK && r.anyFitting(func(f Fitting) bool { return !f.ReDependent() }) {
-			res.Warnings = append(res.Warnings, "laminar flow: the fitting K values (Crane TP-410 and fixed ones) are turbulent-flow figures; real fitting losses are higher")
+			res.Warnings = append(res.Warnings, warnf("", "laminar flow: the fitting K values (Crane TP-410 and fixed ones) are turbulent-flow figures; real fitting losses are higher"))
 		}
 	case Transitional:
 		fLam := 64 / re
@@ -324,7 +324,7 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 			return RunResult{}, err
 		}
 		if w != "" {
-			res.Warnings = append(res.Warnings, w)
+			res.Warnings = append(res.Warnings, warnf("", "%s", w))
 		}
 		res.FrictionLow, res.FrictionHigh = math.Min(fLam, fTurb), math.Max(fLam, fTurb)
 		res.Friction = res.FrictionHigh
@@ -332,20 +332,20 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		if fLam > fTurb {
 			res.Alpha = AlphaLaminar()
 		}
-		res.Warnings = append(res.Warnings, fmt.Sprintf("transitional flow (Re %.0f, between 2300 and 4000): the loss lies between the laminar (64/Re) and turbulent bounds; the larger is used", re))
+		res.Warnings = append(res.Warnings, warnf("", "transitional flow (Re %.0f, between 2300 and 4000): the loss lies between the laminar (64/Re) and turbulent bounds; the larger is used", re))
 	default:
 		f, w, err := r.turbulentFriction(re, v, q)
 		if err != nil {
 			return RunResult{}, err
 		}
 		if w != "" {
-			res.Warnings = append(res.Warnings, w)
+			res.Warnings = append(res.Warnings, warnf("", "%s", w))
 		}
 		res.Alpha = AlphaTurbulent()
 		res.Friction, res.FrictionLow, res.FrictionHigh = f, f, f
 	}
 	if r.Method == MethodHazenWilliams && r.Diameter < hazenDMin && res.Regime != Laminar {
-		res.Warnings = append(res.Warnings, "Hazen–Williams is meant for pipes of about 50 mm and larger: prefer Colebrook")
+		res.Warnings = append(res.Warnings, warnf("d", "Hazen–Williams is meant for pipes of about %v and larger: prefer Colebrook", Fig(hazenDMin, Length)))
 	}
 	res.MajorLoss = res.Friction * ld * hv
 	res.TotalLoss = res.MajorLoss + res.MinorLoss
@@ -353,9 +353,9 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	res.TotalLossHigh = res.FrictionHigh*ld*hv + res.MinorLoss
 	switch {
 	case v < RunVelocityLow:
-		res.Warnings = append(res.Warnings, fmt.Sprintf("velocity %.2f m/s is low for a liquid line (usual range 0.3–3 m/s)", v))
+		res.Warnings = append(res.Warnings, warnf("q", "velocity %v is low for a liquid line (usual range %v–%v, common practice)", Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
 	case v > RunVelocityHigh:
-		res.Warnings = append(res.Warnings, fmt.Sprintf("velocity %.2f m/s is high for a liquid line (usual range 0.3–3 m/s)", v))
+		res.Warnings = append(res.Warnings, warnf("q", "velocity %v is high for a liquid line (usual range %v–%v, common practice)", Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
 	}
 	return res, nil
 }

@@ -8,9 +8,9 @@ import (
 )
 
 // frHasWarning reports whether any warning contains sub.
-func frHasWarning(ws []string, sub string) bool {
+func frHasWarning(ws []Warning, sub string) bool {
 	for _, w := range ws {
-		if strings.Contains(w, sub) {
+		if strings.Contains(w.String(), sub) {
 			return true
 		}
 	}

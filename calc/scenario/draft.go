@@ -367,11 +367,11 @@ func (d *Draft) StepFitting(param, key string, delta int) {
 	if !found && delta > 0 {
 		list = append(list, calc.FittingCount{Key: key, Count: delta})
 	}
-	parts := make([]string, 0, len(list))
+	kept := list[:0]
 	for _, f := range list {
 		if f.Count > 0 {
-			parts = append(parts, f.Key+":"+strconv.Itoa(f.Count))
+			kept = append(kept, f)
 		}
 	}
-	d.set(param, strings.Join(parts, ","))
+	d.set(param, FormatFittings(kept)) // a K given with "@" stays
 }

@@ -266,7 +266,10 @@ func (e *eval) evalRun(r *RunResult, q float64) {
 	r.RunResult, r.Flow = rr, q
 	e.res.Run = r
 	for _, w := range rr.Warnings {
-		e.warn("l", "run", w)
+		if w.Field == "" {
+			w.Field = "l"
+		}
+		e.warnCalc("run", w)
 	}
 }
 

@@ -177,16 +177,37 @@ func npsChoices() []Choice {
 	return out
 }
 
+// schChoices are the classes of every pipe catalogue, each named with its
+// catalogue and standard, so that one list never mixes notations unsaid.
 func schChoices() []Choice {
 	var out []Choice
-	seen := map[string]bool{}
-	for _, p := range calc.PipeSizes() {
-		if !seen[p.Schedule] {
-			seen[p.Schedule] = true
-			out = append(out, Choice{p.Schedule, p.Schedule})
+	for _, c := range calc.Catalogues() {
+		for _, class := range c.Classes {
+			out = append(out, Choice{class, c.Name + ", " + ClassName(c.Key, class) + " (" + c.Standard + ")"})
 		}
 	}
 	return out
+}
+
+// ClassName writes a catalogue's class as its trade writes it:
+// "schedule 40", "type L", "SDR 11", "class K9".
+func ClassName(catalogue, class string) string {
+	switch catalogue {
+	case "steel", "ss":
+		return "schedule " + class
+	case "copper":
+		return "type " + class
+	case "pe":
+		return strings.Replace(class, "SDR", "SDR ", 1)
+	case "di":
+		return "class " + class
+	case "pvc":
+		if strings.HasPrefix(class, "PVC-SDR") {
+			return "SDR " + strings.TrimPrefix(class, "PVC-SDR")
+		}
+		return "schedule " + strings.TrimPrefix(class, "PVC")
+	}
+	return class
 }
 
 func matChoices() []Choice {

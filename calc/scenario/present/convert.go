@@ -1,9 +1,11 @@
 package present
 
 import (
+	"strconv"
 	"strings"
 
 	"fieldhead/calc"
+	"fieldhead/calc/scenario"
 )
 
 // liquidCard is the liquid, its temperature and the site pressure.
@@ -64,7 +66,7 @@ func (b *builder) runInputs(withFlow bool) []Block {
 	if b.d.SideOf("pipe") == "d" {
 		out = append(out, fields(b.quantity("d", "", "")))
 	} else {
-		out = append(out, fields(b.picker("nps", "", "choose…"), b.picker("sch", "", "choose…")))
+		out = append(out, b.pipePickers(""))
 	}
 	out = append(out, b.toggle("rough"))
 	if b.d.SideOf("rough") == "eps" {
@@ -105,7 +107,7 @@ func (b *builder) regimeCard() Card {
 	}
 	pipe := b.param("d", r.Diameter) + " inside"
 	if r.Pipe != nil {
-		pipe = "NPS " + r.Pipe.NPS + " " + r.Pipe.Schedule + " (" + r.Pipe.Standard + "): " + pipe
+		pipe = sizeName(*r.Pipe) + ", " + scenario.ClassName(r.Pipe.Catalogue, r.Pipe.Schedule) + " (" + r.Pipe.Standard + "): " + pipe
 	}
 	rough := b.param("eps", r.Roughness)
 	if r.Material != nil {
@@ -187,4 +189,42 @@ func (b *builder) convertCard() Card {
 	}
 	c.Blocks = []Block{{Kind: BlockTable, Table: t}, b.warnings(nil, "convert", "site", "liquid")}
 	return c
+}
+
+// pipePickers are the class and size pickers of a run or segment (pre ""
+// or "s2."): the class first, the sizes of that class in its catalogue's
+// own notation.
+func (b *builder) pipePickers(pre string) Block {
+	sch := b.picker(pre+"sch", "Pipe class", "choose…")
+	nps := b.picker(pre+"nps", "Size", "choose…")
+	class := strings.TrimSpace(b.s.Get(pre + "sch"))
+	for _, c := range calc.Catalogues() {
+		sizes, err := c.Sizes(class)
+		if err != nil {
+			continue
+		}
+		var choices []scenario.Choice
+		for _, p := range sizes {
+			choices = append(choices, scenario.Choice{Value: p.NPS, Label: sizeName(p)})
+		}
+		nps.Options = choiceOptions(choices, b.s.Get(pre+"nps"), "choose…")
+	}
+	return fields(sch, nps)
+}
+
+// sizeName writes a size in its catalogue's notation: "NPS 8 (DN 200)",
+// "OD 160 mm", "DN 200", "1/2 in".
+func sizeName(p calc.PipeSize) string {
+	switch p.Catalogue {
+	case "copper":
+		return p.NPS + " in"
+	case "pe":
+		return "OD " + p.NPS + " mm"
+	case "di":
+		return "DN " + p.NPS
+	}
+	if p.DN > 0 {
+		return "NPS " + p.NPS + " (DN " + strconv.Itoa(p.DN) + ")"
+	}
+	return "NPS " + p.NPS
 }

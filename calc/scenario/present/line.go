@@ -296,7 +296,7 @@ func (b *builder) segmentCard(n, count int) Card {
 	if b.d.SideOf(p("pipe")) == "d" {
 		blocks = append(blocks, fields(b.quantity(p("d"), "", "")))
 	} else {
-		blocks = append(blocks, fields(b.picker(p("nps"), "", "choose…"), b.picker(p("sch"), "", "choose…")))
+		blocks = append(blocks, b.pipePickers(scenario.SegmentParam(n, "")))
 	}
 	blocks = append(blocks, b.toggle(p("rough")))
 	if b.d.SideOf(p("rough")) == "eps" {
@@ -343,9 +343,21 @@ func (b *builder) fittings(p string) Block {
 	if p != "fit" {
 		f.AddID = "add-" + DomID(p)
 	}
+	used := map[string]calc.FittingK{}
+	for _, k := range b.fittingKs(p) {
+		used[k.Key] = k
+	}
 	for _, fc := range list {
 		name := fittingName(fc.Key)
-		f.Items = append(f.Items, Fitting{Key: fc.Key, Name: name, Count: fc.Count,
+		k := ""
+		if u, ok := used[fc.Key]; ok {
+			k = "K " + calc.FormatNumber(u.K, 3) + " each (" + u.Method
+			if u.Formula != "" && u.Method != "given" {
+				k += ", " + u.Formula
+			}
+			k += ")"
+		}
+		f.Items = append(f.Items, Fitting{Key: fc.Key, Name: name, Count: fc.Count, K: k,
 			Less: Button{Text: "−", Label: "one fewer " + name, Class: "step", Act: Action{Do: "fit-step", Param: p, Value: fc.Key, N: -1}},
 			More: Button{Text: "+", Label: "one more " + name, Class: "step", Act: Action{Do: "fit-step", Param: p, Value: fc.Key, N: +1}},
 		})
@@ -382,4 +394,24 @@ func (b *builder) asEntered(p string) string {
 		return num + " " + scenario.DefaultUnit(p, b.us) + " (default unit)"
 	}
 	return num + " " + unit
+}
+
+// fittingKs are the loss coefficients the result used for the fittings of
+// p ("fit" of the single run, "s2.fit" of a segment), none before there is
+// a result.
+func (b *builder) fittingKs(p string) []calc.FittingK {
+	if p == "fit" {
+		if r := b.r.Run; r != nil {
+			return r.Fittings
+		}
+		return nil
+	}
+	n, _ := splitSegment(p)
+	if br := b.r.Balance; br != nil && br.Line != nil && n >= 1 && n <= len(br.Line.Segments) {
+		return br.Line.Segments[n-1].Fittings
+	}
+	if l := b.r.Line; l != nil && n >= 1 && n <= len(l.Segments) {
+		return l.Segments[n-1].Fittings
+	}
+	return nil
 }

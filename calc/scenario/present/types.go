@@ -248,6 +248,7 @@ type Fittings struct {
 type Fitting struct {
 	Key, Name string
 	Count     int
+	K         string // the loss coefficient used for one, with its method, once computed
 	Less      Button
 	More      Button
 }
