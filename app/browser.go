@@ -134,6 +134,7 @@ func (s *sheet) onDemo(ctx app.Context, e app.Event) {
 		return
 	}
 	s.adopt(scenario.Demo(), "")
+	s.syncBoxes(ctx)
 }
 
 // onBlank starts an empty sheet on the same view and unit system.
@@ -147,4 +148,5 @@ func (s *sheet) onBlank(ctx app.Context, e app.Event) {
 		_ = sc.Set(p, s.d.Scen.Get(p))
 	}
 	s.adopt(sc, "")
+	s.syncBoxes(ctx)
 }

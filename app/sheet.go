@@ -2,6 +2,7 @@ package main
 
 import (
 	"strconv"
+	"strings"
 
 	"fieldhead/calc/scenario"
 	"fieldhead/calc/scenario/present"
@@ -25,13 +26,14 @@ type sheet struct {
 	linkErr string // a problem with the link as a whole (unknown parameter, …)
 	loaded  bool   // false while pre-rendered on the server, before the wasm runs
 
-	base     string // page URL without the query
-	query    string // the scenario's link, also in the URL and in localStorage
-	copyNote string // result of the last "Copy link"
-	showLink bool   // show the link as selectable text
-	fault    *fault // the last contained panic, shown in a banner (guard.go)
-	update   bool   // a newer version of the site is installed (update.go)
-	wide     int    // chart width drawn last (see chartWidth)
+	base     string      // page URL without the query
+	query    string      // the scenario's link, also in the URL and in localStorage
+	copyNote string      // result of the last "Copy link"
+	showLink bool        // show the link as selectable text
+	fault    *fault      // the last contained panic, shown in a banner (guard.go)
+	update   bool        // a newer version of the site is installed (update.go)
+	wide     int         // chart width drawn last (see chartWidth)
+	mounted  app.Context // the sheet's own context, from OnMount
 }
 
 // newSheet is the route's component. In the browser it restores the
@@ -68,6 +70,7 @@ func newSheet() app.Composer {
 // OnMount records when the first result reached the screen, for the
 // browser test and for anyone timing the page.
 func (s *sheet) OnMount(ctx app.Context) {
+	s.mounted = ctx
 	s.watchUpdates(ctx)
 	if app.IsClient && s.loaded {
 		if perf := app.Window().Get("performance"); perf.Truthy() {
@@ -116,6 +119,30 @@ func (s *sheet) build() {
 	}
 }
 
+// syncBoxes empties every box the view model shows empty. go-app leaves
+// the attribute out for an empty value (pkg/app/attribute.go, v10.1.11)
+// and so only removes it, which does not clear a box the person typed in:
+// after New sheet or a segment moved, the old text would stay. Run after
+// the frame of every edit but typing (typing changes only its own box).
+func (s *sheet) syncBoxes(ctx app.Context) {
+	if s.mounted.Src() != nil {
+		// The sheet's own context: a deferred call of the event's is
+		// dropped when the element clicked is gone (a segment removed).
+		ctx = s.mounted
+	}
+	ctx.Defer(func(app.Context) {
+		defer func() { _ = recover() }() // a missing element is no fault
+		for id, v := range s.vm.Boxes() {
+			if v != "" {
+				continue // go-app sets a non-empty value itself
+			}
+			if el := app.Window().GetElementByID(id); el.Truthy() && el.Get("value").String() != "" {
+				el.Set("value", "")
+			}
+		}
+	})
+}
+
 // link is the full share link.
 func (s *sheet) link() string {
 	if s.query == "" {
@@ -146,7 +173,7 @@ func (s *sheet) onBox(p string) app.EventHandler {
 func (s *sheet) onPicked(p, kind string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
 		defer s.contain("changing " + scenario.Label(p))
-		v := ctx.JSSrc().Get("value").String()
+		v := strings.TrimSpace(ctx.JSSrc().Get("value").String()) // a blank option's value is " " (selectBox)
 		switch kind {
 		case "unit":
 			if v == "" {
@@ -165,6 +192,7 @@ func (s *sheet) onPicked(p, kind string) app.EventHandler {
 		}
 		s.copyNote = ""
 		s.evaluate()
+		s.syncBoxes(ctx)
 	}
 }
 
@@ -211,6 +239,7 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 		}
 		s.copyNote = ""
 		s.evaluate()
+		s.syncBoxes(ctx)
 	}
 }
 

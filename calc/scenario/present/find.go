@@ -79,3 +79,44 @@ func (c *Card) setText(id, text string) {
 		}
 	}
 }
+
+// Boxes returns the text of every box of the sheet (its inputs and the
+// data sheet's cells), by element id: what each box must show.
+func (sh Sheet) Boxes() map[string]string {
+	out := map[string]string{}
+	add := func(f Field) {
+		if f.Kind == FieldQuantity || f.Kind == FieldPlain {
+			out[f.ID] = f.Box
+		}
+	}
+	add(sh.Title)
+	var walk func(c *Card)
+	walk = func(c *Card) {
+		for i := range c.Blocks {
+			b := &c.Blocks[i]
+			for _, f := range b.Fields {
+				add(f)
+			}
+			if b.Fittings != nil {
+				add(b.Fittings.AsText)
+			}
+			if d := b.DataSheet; d != nil {
+				for _, r := range d.Rows {
+					for _, cl := range r.Cells {
+						out[cl.ID] = cl.Text
+					}
+				}
+				for _, f := range d.AsText {
+					add(f)
+				}
+			}
+			if b.Card != nil {
+				walk(b.Card)
+			}
+		}
+	}
+	for i := range sh.Cards {
+		walk(&sh.Cards[i])
+	}
+	return out
+}
