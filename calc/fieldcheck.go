@@ -28,6 +28,9 @@ type FieldReadings struct {
 	Ds, Dd  float64 // inside diameters at the gauges, m
 	Q       float64 // measured flow, m³/s
 	PowerIn float64 // measured electrical input to the motor, W; 0 = not measured
+	// MotorEff is the motor's efficiency (from its nameplate or data
+	// sheet, a share, 0 < η ≤ 1); 0 = not known.
+	MotorEff float64
 }
 
 // FieldCheck is a running pump's performance worked out from readings.
@@ -51,6 +54,11 @@ type FieldCheck struct {
 	// CurveEfficiency is the data-sheet pump efficiency at Q (pump alone,
 	// without the motor), 0 when not available.
 	CurveEfficiency float64
+	// ShaftPower is the power the motor gives the pump's shaft,
+	// PowerIn·MotorEff, and PumpEfficiency the pump's own efficiency,
+	// HydraulicPower/ShaftPower; both 0 unless PowerIn and MotorEff are
+	// given.
+	ShaftPower, PumpEfficiency float64
 	Warnings        []Warning
 }
 
@@ -66,9 +74,15 @@ type FieldCheck struct {
 // head is compared with the data sheet at Q; beyond the sheet's flows a
 // warning says there is nothing to compare with.
 //
+// With the motor's efficiency as well, the shaft power PowerIn·MotorEff and
+// the pump's own efficiency hydraulic power / shaft power (the usual split
+// of a wire-to-water test, common practice).
+//
 // Warnings flag an efficiency above 1 (the readings cannot all be right),
-// one below 0.3, and a head at or below zero. Errors name the fields "ps",
-// "pd", "zs", "zd", "ds", "dd", "qm", "pin" and "rho".
+// one below 0.3, a wire-to-water efficiency above the data sheet's pump
+// efficiency at Q (the motor's losses make it lower, so a reading or a
+// unit is wrong), a pump efficiency above 1, and a head at or below zero. Errors name the fields "ps", "pd",
+// "zs", "zd", "ds", "dd", "qm", "pin", "etam" and "rho".
 func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	finite := func(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 	switch {
@@ -90,6 +104,8 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 		return FieldCheck{}, fieldErrorf("qm", "give the measured flow (above zero)")
 	case !finite(r.PowerIn) || r.PowerIn < 0:
 		return FieldCheck{}, fieldErrorf("pin", "the measured electrical input must be zero (not measured) or positive, got %v", Fig(r.PowerIn, Power))
+	case !finite(r.MotorEff) || r.MotorEff < 0 || r.MotorEff > 1:
+		return FieldCheck{}, fieldErrorf("etam", "the motor's efficiency must be above 0 and at most 100 %%, got %.4g %%", r.MotorEff*100)
 	}
 	g := StandardGravity
 	rhog := fl.Density * g
@@ -122,9 +138,19 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 			}
 			if e, ok := c.Efficiency(r.Q); ok {
 				fc.CurveEfficiency = e
+				if fc.Efficiency > e {
+					fc.Warnings = append(fc.Warnings, warnf("pin", "the wire-to-water efficiency (%.0f %%) is above the data sheet's efficiency of the pump alone at this flow (%.0f %%), which the motor's losses make impossible: check the power reading and its unit (kW or hp), the flow and the gauges", fc.Efficiency*100, e*100))
+				}
 			}
 		} else {
 			fc.Warnings = append(fc.Warnings, warnf("qm", "the measured flow (%v) lies outside the data sheet's flows (%v to %v): no curve head to compare with", Fig(r.Q, Flow), Fig(c.MinFlow(), Flow), Fig(c.MaxFlow(), Flow)))
+		}
+	}
+	if r.PowerIn > 0 && r.MotorEff > 0 {
+		fc.ShaftPower = r.PowerIn * r.MotorEff
+		fc.PumpEfficiency = fc.HydraulicPower / fc.ShaftPower
+		if fc.PumpEfficiency > 1 {
+			fc.Warnings = append(fc.Warnings, warnf("etam", "the pump's own efficiency comes out at %.0f %%, above 100 %%: the readings or the motor efficiency are wrong", fc.PumpEfficiency*100))
 		}
 	}
 	return fc, nil

@@ -183,6 +183,10 @@ func observable(r Result, key string) (float64, string, error) {
 			return f.HydraulicPower, "", nil
 		case "eff":
 			return f.Efficiency, "", nil
+		case "shaft":
+			return f.ShaftPower, "", nil
+		case "pumpeff":
+			return f.PumpEfficiency, "", nil
 		case "dev":
 			return f.Deviation, "", nil
 		}

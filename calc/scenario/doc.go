@@ -57,10 +57,15 @@
 //
 //	l       length of the run, e.g. 640m
 //	d       inside diameter, or
-//	nps,sch nominal size and schedule from the pipe tables, e.g. nps=8&sch=40
+//	nps,sch a size and a class of a pipe catalogue, e.g. nps=8&sch=40 (steel,
+//	        NPS 8 schedule 40), nps=160&sch=SDR11 (PE, OD 160 mm),
+//	        nps=200&sch=K9 (ductile iron, DN 200); Choices("sch") lists
+//	        the classes with their catalogue
 //	mat     material key (roughness and Hazen–Williams C), or
 //	eps     absolute roughness, e.g. 0.045mm
-//	fit     fittings as key:count, comma separated, e.g. gate:2,elbow90lr:6,exit:1
+//	fit     fittings as key:count, comma separated, e.g. gate:2,elbow90lr:6,exit:1;
+//	        a K from the maker's data sheet follows an @, per fitting:
+//	        gate:2@0.12 (otherwise K is worked out for the pipe's size)
 //	k       extra loss coefficient ΣK added to the fittings
 //	fm      colebrook | swamee-jain | haaland | hazen-williams   (default colebrook)
 //	chw     Hazen–Williams C (default from mat)
@@ -103,6 +108,8 @@
 //	ds, dd  inside diameters of the pipe at the gauges
 //	qm      measured flow
 //	pin     measured electrical input to the motor, e.g. 31kW
+//	etam    the motor's efficiency (nameplate), e.g. 93%: with pin, the
+//	        shaft power and the pump's own efficiency
 //
 // The turbine side (with solve=ht):
 //

@@ -140,6 +140,7 @@ var Table = []Param{
 	q("dd", "pipe diameter at the discharge gauge", "Pipe inside diameter at the discharge gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the discharge gauge"),
 	q("qm", "measured flow", "Measured flow", "", calc.Flow, "L/s", "gpm", "enter the measured flow"),
 	q("pin", "motor electrical input", "Motor electrical input", "(optional)", calc.Power, "kW", "hp", "enter the motor's electrical input"),
+	q("etam", "motor efficiency", "Motor efficiency", "(nameplate; optional)", calc.Dimensionless, "%", "%", "enter the motor's efficiency"),
 	q("etat", "turbine-and-generator efficiency", "Turbine-and-generator efficiency", "", calc.Dimensionless, "%", "%", "enter the turbine-and-generator efficiency"),
 }
 

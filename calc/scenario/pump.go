@@ -228,6 +228,9 @@ func (e *eval) field() {
 	if e.s.Has("pin") {
 		r.PowerIn = get("pin")
 	}
+	if e.s.Has("etam") {
+		r.MotorEff = get("etam")
+	}
 	if !ok {
 		return
 	}

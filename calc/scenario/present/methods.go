@@ -4,7 +4,8 @@ import "fieldhead/calc"
 
 // Methods name the methods behind the figures and their sources, figures
 // in SI: the one list the page, the printed sheet and the README's
-// "Methods and sources" use (a test checks the README names each).
+// "Methods and sources" use (TestREADMEMethods checks the README holds
+// each line as it is here).
 var Methods = methodsFor(false)
 
 // methodsFor is the list with its figures in the sheet's units.
@@ -14,14 +15,15 @@ func methodsFor(us bool) []Method {
 		margin = calc.FormatValue(calc.NPSHMarginMin, "ft", 1)
 	}
 	return []Method{
-		{"Energy balance", "steady-flow energy equation between the two points in head form (metres or feet of the flowing liquid), kinetic-energy factor α 2 in laminar and 1 in turbulent flow; Reynolds number bands 2300 and 4000 (common practice)."},
-		{"Friction factor", "Colebrook–White equation, solved as in Clamond (2009); the explicit Swamee–Jain (1976) and Haaland (1983) formulas, or Hazen–Williams for water, when chosen; 64/Re in laminar flow."},
-		{"Head losses", "Darcy–Weisbach for pipe friction; fittings by loss coefficients K on the velocity head; sudden changes of diameter by Borda–Carnot."},
-		{"Water", "density from IAPWS-IF97 region 1, vapour pressure from IF97 eq. 30 (saturation line), viscosity from the IAPWS 2008 release; seawater of 35 g/kg from Sharqawy, Lienhard & Zubair (2010)."},
-		{"Site pressure", "ISO 2533 standard atmosphere at the site altitude, or the barometer reading."},
-		{"Units", "conversion factors of NIST SP 811 (2008), Appendix B."},
-		{"Pipe sizes", "inside diameters from the ASME B36.10M and B36.19M dimension tables."},
-		{"Pump curve", "monotone piecewise cubic interpolation through the data-sheet points (Fritsch–Carlson 1980), never beyond them; the operating point is where it meets the system curve, each flow of which is solved in full."},
+		{"Energy balance", "the steady-flow energy equation between the two points in head form (metres or feet of the flowing liquid); kinetic-energy factor α 2 in laminar and 1 in turbulent flow, or a power-law profile estimate on request; laminar below Re 2300, turbulent above 4000 (common practice), transitional flow flagged and bounded by both assumptions."},
+		{"Friction factor", "Colebrook–White (1939), solved to a relative residual below 1e-13 by the method of Clamond (2009) and checked against the Lambert-W closed form (python3-mpmath) and python3-fluids; the explicit approximations of Swamee & Jain (1976; up to 2.83 % above Colebrook in its fitted range) and Haaland (1983); 64/Re in laminar flow; Hazen–Williams for water."},
+		{"Fitting losses", "Darcy–Weisbach for pipe friction; fittings by loss coefficients K on the velocity head, by the pipe's size: valves, elbows, bends and tees by Crane TP-410 (K = n·f_T, f_T the fully turbulent friction factor of clean commercial steel of that size); threaded and mitred fittings and reduced-trim valves by the 2-K method of Hooper (1981); entrances and the exit by fixed values; sudden changes of diameter by Borda–Carnot; a K from the maker's data sheet may be given per fitting. Checked against python3-fluids."},
+		{"Pipe roughness", "per material with its source: Farshad & Rieke (2006) for stainless steel and cement-mortar lining; the Moody (1944) chart values as python3-fluids tabulates them for cast iron, galvanized steel and drawn tubing; commercial steel, PE, PVC and concrete from memory."},
+		{"Water", "density from IAPWS-IF97 (2007 revision) region 1, vapour pressure from the IF97 saturation line, viscosity from the IAPWS 2008 release, checked against the releases' verification tables and python3-iapws; seawater of 35 g/kg from Sharqawy, Lienhard & Zubair (2010), checked against the IAPWS 2008 seawater release (python3-iapws) and TEOS-10 (python3-gsw)."},
+		{"Site pressure", "the ISO 2533 standard atmosphere at the site altitude, or the barometer reading."},
+		{"Units", "conversion factors of NIST SP 811 (2008), Appendix B, checked against GNU units; conventional water-column units at their SP 811 values, kept apart from the head of the actual liquid."},
+		{"Pipe dimensions", "each catalogue in its own notation: ASME B36.10M carbon steel and ASME B36.19M stainless (NPS, with DN), PVC to ASTM D1785 and D2241, checked row by row against python3-fluids; copper tube to ASTM B88, PE to ISO 4427 and cement-lined ductile iron to ISO 2531 with ISO 4179 linings from memory."},
+		{"Pump curve", "monotone piecewise cubic interpolation through the data-sheet points (Fritsch & Carlson 1980), never beyond them; the operating point is where it meets the system curve, each flow of which is solved in full."},
 		{"Speed and arrangement", "the pump affinity laws; identical pumps in parallel add flow, in series add head."},
 		{"NPSH margin", "NPSH available from the surface pressure, vapour pressure, suction height and suction losses; margin guidance after ANSI/HI 9.6.1 (from memory): ratio at least 1.1 and at least " + margin + "."},
 		{"Field check", "pump total head from the gauge readings, the gauges' heights and the velocity heads at the gauges; wire-to-water efficiency is the hydraulic power over the measured electrical input."},

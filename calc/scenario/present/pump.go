@@ -352,7 +352,7 @@ func (b *builder) fieldCard() Card {
 		fields(b.quantity("ps", "", ""), b.quantity("pd", "", "")),
 		fields(b.quantity("zs", "", ""), b.quantity("zd", "", "")),
 		fields(b.quantity("ds", "", ""), b.quantity("dd", "", "")),
-		fields(b.quantity("qm", "", ""), b.quantity("pin", "", "")),
+		fields(b.quantity("qm", "", ""), b.quantity("pin", "", ""), b.quantity("etam", "", "")),
 		maybe(facts != nil, Block{Kind: BlockFacts, ID: "field-results", Class: "facts", Facts: facts}),
 		b.warnings(nil, "field"),
 	}}
@@ -373,6 +373,11 @@ func (b *builder) fieldFacts() []Fact {
 	}
 	if f.Efficiency > 0 {
 		out = append(out, Fact{ID: "field-eff", Label: "wire-to-water efficiency", Value: percent(f.Efficiency), Key: true})
+	}
+	if f.PumpEfficiency > 0 {
+		out = append(out,
+			Fact{ID: "field-shaft", Label: "power at the pump shaft (input × motor efficiency)", Value: b.show(f.ShaftPower, calc.Power)},
+			Fact{ID: "field-pump-eff", Label: "efficiency of the pump alone", Value: percent(f.PumpEfficiency), Key: true})
 	}
 	if f.HasCurve {
 		out = append(out,
