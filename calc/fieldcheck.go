@@ -59,7 +59,7 @@ type FieldCheck struct {
 	// HydraulicPower/ShaftPower; both 0 unless PowerIn and MotorEff are
 	// given.
 	ShaftPower, PumpEfficiency float64
-	Warnings        []Warning
+	Warnings                   []Warning
 }
 
 // CheckPump works out the head and efficiency a running pump delivers from
