@@ -64,7 +64,7 @@ browser: site
 # Each fuzz target for a bounded time. A failing input is written under the
 # package's testdata/fuzz/<target>/, where a plain go test replays it.
 FUZZTIME ?= 10s
-FUZZ     := ./calc:FuzzParse ./calc:FuzzBalance ./calc/scenario:FuzzScenario
+FUZZ     := ./calc:FuzzParse ./calc:FuzzBalance ./calc/scenario:FuzzScenario ./calc/scenario:FuzzSheets
 
 fuzz:
 	@failed=""; for t in $(FUZZ); do \

@@ -47,7 +47,7 @@ func TestBadLinks(t *testing.T) {
 		{"a UTF-8 sequence cut short", base + "&name=%E2%82", "not valid UTF-8", "", "", "z1=212m", true},
 		{"a bad percent escape in a value", base + "&name=%zzAlder", "", "", "", "name=%zzAlder", true},
 		{"a link cut inside a fitting list", with("fit=gate:2,elb"), "", "fit", "", "fit=gate:2,elb", false},
-		{"a link cut after a parameter name", base + "&k", "", "", "", "z1=212m", true},
+		{"a link cut after a parameter name", base + "&k", "arrived damaged", "", "", "z1=212m", true},
 		{"a link cut after the =", strings.Replace(base, "q=45L/s", "q=", 1), "", "q", "flow", "z1=212m", false},
 		{"a link cut inside a unit", strings.Replace(base, "q=45L/s", "q=45L/", 1), "", "q", "", "q=45L/", false},
 		{"a link cut inside a number", strings.Replace(base, "z2=251m", "z2=2.5e", 1), "", "z2", "", "z2=2.5e", false},

@@ -115,6 +115,18 @@
 //
 //	etat    turbine-and-generator efficiency, e.g. 82%
 //
+// The link's integrity field (see CheckParam, Sign):
+//
+//	ck      eight hex digits, the CRC-32 of the canonical query, written
+//	        first by "Copy link"; a link whose ck does not match what
+//	        arrived (cut or altered on the way) is reported as damaged,
+//	        with what was read. Links typed by hand may leave it out.
+//
+// A mail program's "&amp;" in place of "&" reads as "&".
+//
+// Sheets kept on a device are exported to a sheets file, one line per
+// sheet (title, a tab, the link); see sheets.go.
+//
 // Every parameter is optional in the link; a computation that needs a
 // missing one reports it by name ("t: enter the liquid temperature").
 package scenario

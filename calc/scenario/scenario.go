@@ -2,6 +2,7 @@ package scenario
 
 import (
 	"fmt"
+	"hash/crc32"
 	"net/url"
 	"sort"
 	"strings"
@@ -57,7 +58,7 @@ type Scenario struct {
 // error names the parameter where there is one.
 func Parse(query string) (Scenario, error) {
 	s := Scenario{raw: map[string]string{}}
-	query = strings.TrimPrefix(query, "?")
+	query = strings.ReplaceAll(strings.TrimPrefix(query, "?"), "&amp;", "&") // as a mail program may write "&"
 	if len(query) > MaxQueryBytes {
 		return s, fmt.Errorf("link: the scenario is %d bytes, longer than the %d accepted", len(query), MaxQueryBytes)
 	}
@@ -65,11 +66,20 @@ func Parse(query string) (Scenario, error) {
 		return s, nil
 	}
 	var errs []string
-	for _, part := range strings.Split(query, "&") {
+	check, cut := "", ""
+	parts := strings.Split(query, "&")
+	for i, part := range parts {
 		if part == "" {
 			continue
 		}
-		k, v, _ := strings.Cut(part, "=")
+		k, v, hasValue := strings.Cut(part, "=")
+		if k == CheckParam {
+			check = v
+			continue
+		}
+		if i == len(parts)-1 && (!hasValue || cutName(k)) {
+			cut = part // the last part is not a whole parameter: the link ends inside one
+		}
 		k, v = lenientPercent(k), lenientPercent(v)
 		key, err := url.QueryUnescape(k)
 		if err != nil {
@@ -103,6 +113,9 @@ func Parse(query string) (Scenario, error) {
 	// reads back (escaping can triple the length of non-ASCII text).
 	if n := len(s.Encode()); n > MaxQueryBytes {
 		return Scenario{raw: map[string]string{}}, fmt.Errorf("link: the scenario is %d bytes once written out, longer than the %d accepted", n, MaxQueryBytes)
+	}
+	if d := s.damage(check, cut); d != nil {
+		return s, d
 	}
 	if len(errs) > 0 {
 		return s, fmt.Errorf("%s", strings.Join(errs, "; "))
@@ -215,4 +228,78 @@ func safeName(k string) string {
 		return "link"
 	}
 	return fmt.Sprintf("%q", truncate(k))
+}
+
+// CheckParam is the link's integrity field: a short checksum of the
+// canonical query. Sign writes it first, so that a link cut anywhere by a
+// mail or chat program still carries it and no longer matches. A link
+// that carries it and does not match, or that ends inside a parameter
+// name, arrived damaged; a link typed by hand without it reads as it is.
+const CheckParam = "ck"
+
+// Sign returns the canonical query with its integrity field before it:
+// ck=, the CRC-32 (IEEE) of the canonical query in eight hex digits, then
+// the query.
+func (s Scenario) Sign() string {
+	q := s.Encode()
+	if q == "" {
+		return ""
+	}
+	return CheckParam + "=" + checksum(q) + "&" + q
+}
+
+func checksum(q string) string { return fmt.Sprintf("%08x", crc32.ChecksumIEEE([]byte(q))) }
+
+// DamagedLink is the error of a link that arrived damaged. What was read
+// is kept in the Scenario Parse returns; Read counts its values.
+type DamagedLink struct {
+	Cut      string // the part the link ends in when it ends inside a parameter
+	Mismatch bool   // the integrity field does not match what was read
+	Read     int    // values read
+	Last     string // the last parameter read, in link order
+}
+
+func (d *DamagedLink) Error() string {
+	why := "its check does not match what arrived"
+	if d.Cut != "" {
+		why = "it ends in the middle of a value (" + truncate(d.Cut) + ")"
+	}
+	read := "nothing could be read"
+	if d.Read > 0 {
+		read = fmt.Sprintf("%d values were read, the last %s (%s); what followed it is missing or altered", d.Read, Label(d.Last), d.Last)
+	}
+	return "link: the link arrived damaged — " + why + ": " + read + ". Ask for the link again, or copy it whole."
+}
+
+// damage reports a damaged link: a check that does not match, or an end
+// inside a parameter.
+func (s Scenario) damage(check, cut string) *DamagedLink {
+	mismatch := check != "" && check != checksum(s.Encode())
+	if !mismatch && cut == "" {
+		return nil
+	}
+	keys := make([]string, 0, len(s.raw))
+	for k := range s.raw {
+		keys = append(keys, k)
+	}
+	sortByLink(keys)
+	d := &DamagedLink{Cut: cut, Mismatch: mismatch, Read: len(keys)}
+	if len(keys) > 0 {
+		d.Last = keys[len(keys)-1]
+	}
+	return d
+}
+
+// cutName reports whether k is not a parameter but the start of one (a
+// link cut inside a name: "s11." of "s11.l", "pns" of "pnpsh").
+func cutName(k string) bool {
+	if _, ok := known[k]; ok || k == "" {
+		return false
+	}
+	for name := range known {
+		if strings.HasPrefix(name, k) {
+			return true
+		}
+	}
+	return false
 }
