@@ -208,7 +208,7 @@ func TestBrowser(t *testing.T) {
 	if got := text("#solved-hp"); !strings.Contains(got, wantHead) {
 		t.Errorf("the pump-head field should be marked as the unknown with %q, shows %q", wantHead, got)
 	}
-	if got := js("location.search"); got != "?"+demo.Encode() {
+	if got := js("location.search"); got != "?"+demo.Sign() {
 		t.Errorf("URL query %q, want the scenario %q", got, demo.Encode())
 	}
 	shot("balance-1024x768")
@@ -421,7 +421,7 @@ func TestBrowser(t *testing.T) {
 		t.Fatal(err)
 	}
 	shot("print-sheet")
-	if got := text(".printfoot .linktext"); !strings.Contains(got, "?"+demo.Encode()) {
+	if got := text(".printfoot .linktext"); !strings.Contains(got, "?"+demo.Sign()) {
 		t.Errorf("the printed sheet should carry the link, has %q", got)
 	}
 	if _, err := chromedp.Call(ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{}); err != nil {

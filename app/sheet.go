@@ -1,6 +1,7 @@
 package main
 
 import (
+	"errors"
 	"strconv"
 	"strings"
 
@@ -27,7 +28,8 @@ type sheet struct {
 	loaded  bool   // false while pre-rendered on the server, before the wasm runs
 
 	base     string      // page URL without the query
-	query    string      // the scenario's link, also in the URL and in localStorage
+	query    string      // the scenario's signed link, also in the URL and in localStorage
+	damaged  bool        // opened from a link that arrived damaged, not yet edited
 	copyNote string      // result of the last "Copy link"
 	showLink bool        // show the link as selectable text
 	fault    *fault      // the last contained panic, shown in a banner (guard.go)
@@ -59,6 +61,8 @@ func newSheet() app.Composer {
 		if err != nil {
 			msg = err.Error()
 		}
+		var d *scenario.DamagedLink
+		s.damaged = errors.As(err, &d) && u.RawQuery != ""
 		sc, msg = keepSavedSheet(sc, msg, u.RawQuery != "")
 		s.adopt(sc, msg)
 	}
@@ -90,6 +94,9 @@ func (s *sheet) OnResize(ctx app.Context) {
 
 // adopt makes sc the sheet, with nothing of the previous one held aside.
 func (s *sheet) adopt(sc scenario.Scenario, linkErr string) {
+	if linkErr == "" {
+		s.damaged = false
+	}
 	s.d.Reset(sc)
 	s.linkErr = linkErr
 	s.copyNote, s.showLink = "", false
@@ -101,11 +108,13 @@ func (s *sheet) adopt(sc scenario.Scenario, linkErr string) {
 func (s *sheet) evaluate() {
 	s.testPanic("evaluate")
 	s.res = scenario.Evaluate(s.d.Scen)
-	s.query = s.d.Scen.Encode()
+	s.query = s.d.Scen.Sign()
 	s.build()
 	if app.IsClient {
 		replaceQuery(s.query)
-		storageSet(storageKey, s.query)
+		if !s.damaged { // a damaged link never replaces the sheet kept on the device
+			storageSet(storageKey, s.query)
+		}
 	}
 }
 
@@ -158,7 +167,7 @@ func (s *sheet) onBox(p string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
 		defer s.contain("recalculating after an edit to " + scenario.Label(p))
 		if s.d.Type(p, ctx.JSSrc().Get("value").String()) {
-			s.copyNote = ""
+			s.copyNote, s.damaged = "", false
 			s.evaluate()
 			return
 		}
