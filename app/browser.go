@@ -126,27 +126,21 @@ func (s *sheet) onPrint(ctx app.Context, e app.Event) {
 	app.Window().Call("print")
 }
 
-// onDemo loads the demo scenario, after asking when the sheet has content.
+// onDemo opens the demo as a sheet of its own.
 func (s *sheet) onDemo(ctx app.Context, e app.Event) {
 	defer s.contain("loading the demo")
-	if s.query != "" && s.query != scenario.Demo().Encode() &&
-		!app.Window().Call("confirm", "Replace this sheet with the demo? Copy its link first if you need it.").Bool() {
-		return
-	}
-	s.adopt(scenario.Demo(), "")
+	s.openNew(scenario.Demo()) // the open sheet stays in the site book
 	s.syncBoxes(ctx)
 }
 
-// onBlank starts an empty sheet on the same view and unit system.
+// onBlank starts an empty sheet on the same view and unit system; the open
+// one stays kept.
 func (s *sheet) onBlank(ctx app.Context, e app.Event) {
 	defer s.contain("starting a new sheet")
-	if s.query != "" && !app.Window().Call("confirm", "Start a new, empty sheet? Copy this sheet's link first if you need it.").Bool() {
-		return
-	}
 	var sc scenario.Scenario
 	for _, p := range []string{"view", "units"} {
 		_ = sc.Set(p, s.d.Scen.Get(p))
 	}
-	s.adopt(sc, "")
+	s.openNew(sc) // the open sheet stays in the site book
 	s.syncBoxes(ctx)
 }

@@ -111,6 +111,10 @@ func (c *card) block(b *present.Block) app.UI {
 			app.Span().Class("num").Text(n.Num), app.Strong().Text(" "+n.Title), app.Span().Class("muted").Text(" "+n.Detail))
 	case present.BlockCard:
 		return &card{S: c.S, C: *b.Card}
+	case present.BlockImport:
+		return app.Div().Class("field").Body(
+			app.Label().For(b.ID).Class("lbl").Text(b.Text),
+			app.Input().Type("file").ID(b.ID).Class("file").Accept(".txt,text/plain").OnChange(c.S.onImport))
 	case present.BlockList:
 		items := make([]app.UI, len(b.Items))
 		for i, t := range b.Items {

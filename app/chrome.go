@@ -77,6 +77,16 @@ func (s *sheet) linkProblem() app.UI {
 	)
 }
 
+// storeBanner says when sheets cannot be kept on this device.
+func (s *sheet) storeBanner() app.UI {
+	if s.bk.problem == "" || s.vm.View == "book" {
+		return nil
+	}
+	return app.Div().Class("banner").ID("store-problem").Attr("role", "status").Body(
+		app.Span().Class("tag").Text("Device"),
+		app.Text(" Sheets cannot be kept on this device ("+s.bk.problem+"). This sheet still works from its link: copy the link to keep it."))
+}
+
 // others lists problems with inputs that this view uses but does not draw.
 func others(items []string) app.UI {
 	if len(items) == 0 {

@@ -36,6 +36,7 @@ type sheet struct {
 	update   bool        // a newer version of the site is installed (update.go)
 	wide     int         // chart width drawn last (see chartWidth)
 	mounted  app.Context // the sheet's own context, from OnMount
+	bk       book        // the sheets kept on this device (book.go)
 }
 
 // newSheet is the route's component. In the browser it restores the
@@ -77,6 +78,9 @@ func (s *sheet) OnMount(ctx app.Context) {
 	s.mounted = ctx
 	s.watchUpdates(ctx)
 	if app.IsClient && s.loaded {
+		s.startBook(ctx)
+	}
+	if app.IsClient && s.loaded {
 		if perf := app.Window().Get("performance"); perf.Truthy() {
 			app.Window().Set("fieldheadFirstResult", perf.Call("now").Float())
 		}
@@ -90,6 +94,34 @@ func (s *sheet) OnResize(ctx app.Context) {
 		return
 	}
 	ctx.PreventUpdate()
+}
+
+// openNew makes sc a new sheet (New sheet, Demo): the open one stays kept.
+func (s *sheet) openNew(sc scenario.Scenario) {
+	s.bk.id, s.bk.created = newID(), nowMs()
+	for _, r := range s.bk.kept {
+		if sameSheet(r.Link, sc) { // the demo kept before, unchanged
+			s.bk.id, s.bk.created = r.ID, r.Created
+		}
+	}
+	s.adopt(sc, "")
+}
+
+// onImport reads a sheets file chosen in the site book.
+func (s *sheet) onImport(ctx app.Context, e app.Event) {
+	defer s.contain("reading a sheets file")
+	files := ctx.JSSrc().Get("files")
+	if !files.Truthy() || files.Length() == 0 {
+		return
+	}
+	files.Index(0).Call("text").Call("then", once(func(v app.Value) {
+		text := v.String()
+		ctx.Dispatch(func(ctx app.Context) {
+			defer s.contain("adding the sheets of a sheets file")
+			s.bk.importSheets(text)
+			s.build()
+		})
+	}))
 }
 
 // adopt makes sc the sheet, with nothing of the previous one held aside.
@@ -109,19 +141,23 @@ func (s *sheet) evaluate() {
 	s.testPanic("evaluate")
 	s.res = scenario.Evaluate(s.d.Scen)
 	s.query = s.d.Scen.Sign()
-	s.build()
 	if app.IsClient {
 		replaceQuery(s.query)
-		if !s.damaged { // a damaged link never replaces the sheet kept on the device
+		if !s.damaged { // a damaged link never replaces a kept sheet
 			storageSet(storageKey, s.query)
+			s.bk.keep(s.d.Scen, s.res, s.damaged)
 		}
 	}
+	s.build() // after keep: the site book lists the sheet as kept
 }
 
 // build makes the view model, with what only the page knows: the link
 // and the time on the printed sheet.
 func (s *sheet) build() {
 	s.vm = present.Build(&s.d, s.res)
+	if s.vm.View == "book" {
+		s.vm.Cards = []present.Card{s.bk.card()}
+	}
 	if s.vm.View == "report" {
 		s.vm.SetText("report-url", s.link())
 		s.vm.SetText("report-date", nowText())
@@ -166,6 +202,11 @@ func (s *sheet) link() string {
 func (s *sheet) onBox(p string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
 		defer s.contain("recalculating after an edit to " + scenario.Label(p))
+		if p == "book-search" {
+			s.bk.state.Search = ctx.JSSrc().Get("value").String()
+			s.build()
+			return
+		}
 		if s.d.Type(p, ctx.JSSrc().Get("value").String()) {
 			s.copyNote, s.damaged = "", false
 			s.evaluate()
@@ -244,6 +285,15 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 		case "fit-step":
 			s.d.StepFitting(a.Param, a.Value, a.N)
 		default:
+			if !strings.HasPrefix(a.Do, "book-") {
+				return
+			}
+			if sc := s.bk.act(a, s.d.US()); sc != nil {
+				s.adopt(*sc, "")
+				s.syncBoxes(ctx)
+				return
+			}
+			s.build()
 			return
 		}
 		s.copyNote = ""
@@ -267,7 +317,7 @@ func (s *sheet) Render() (ui app.UI) {
 	return app.Div().ID("sheet").Class("sheet view-"+vm.View).Body(
 		s.printHead(),
 		&topBar{S: s, Tabs: vm.Tabs, Units: vm.Units},
-		app.Div().Class("notices").Body(s.faultBanner(), s.updateBanner()), // always there: a notice must not move the inputs
+		app.Div().Class("notices").Body(s.faultBanner(), s.updateBanner(), s.storeBanner()), // always there: a notice must not move the inputs
 		app.Div().Class("titlerow").Attr("role", "region").Aria("label", "sheet").Body(&field{S: s, F: vm.Title}, s.shareRow()),
 		s.linkProblem(),
 		app.Main().Body(

@@ -54,7 +54,7 @@ type Param struct {
 var Table = []Param{
 	{Name: "view", Label: "view", Kind: KindChoice, choices: func() []Choice {
 		return []Choice{{"balance", "Balance"}, {"convert", "Convert"}, {"regime", "Regime"},
-			{"line", "Line"}, {"pump", "Pump"}, {"report", "Report"}}
+			{"line", "Line"}, {"pump", "Pump"}, {"report", "Report"}, {"book", "Site book"}}
 	}},
 	{Name: "units", Label: "unit system", Kind: KindChoice, choices: func() []Choice { return []Choice{{"si", "SI"}, {"us", "US"}} }},
 	{Name: "name", Label: "sheet title", Box: "Sheet title", Hint: "(site, equipment, date)", Kind: KindText},

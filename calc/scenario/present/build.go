@@ -34,6 +34,7 @@ var Views = []struct{ Key, Hint string }{
 	{"line", "segments, EGL/HGL"},
 	{"pump", "duty, NPSH, readings"},
 	{"report", "the printed sheet"},
+	{"book", "sheets on this device"},
 }
 
 // Build makes the view model of a sheet: d is the sheet being edited and r
@@ -71,6 +72,8 @@ func Build(d *scenario.Draft, r scenario.Result) Sheet {
 		sh.Cards = b.pumpView()
 	case "report":
 		sh.Cards = b.reportView()
+	case "book":
+		// The page adds the book's card (Book): the kept sheets are its own.
 	default:
 		sh.Cards = b.balanceView()
 	}
@@ -270,6 +273,8 @@ func uses(view, p string) bool {
 		return oneOf(p, "view", "units", "name", "liq", "t", "rho", "mu", "pv", "q", "l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw")
 	case "balance", "line", "pump":
 		return p != "cv" && p != "cvref"
+	case "book":
+		return false
 	}
 	return true
 }

@@ -54,6 +54,7 @@ const (
 	BlockHeading                    // Text as a subheading
 	BlockList                       // Items as a plain list (methods, cautions)
 	BlockEmpty                      // nothing: keeps the place of a block that comes and goes
+	BlockImport                     // a file picker that imports a sheets file (Text: its label)
 )
 
 // Block is one part of a card; Kind says which of its fields apply. A
