@@ -1,0 +1,38 @@
+//go:build !wasm
+
+package main
+
+import (
+	"fmt"
+	"io"
+	"os"
+
+	"fieldhead/calc/scenario"
+	"fieldhead/calc/scenario/present"
+)
+
+// evalCSV reads a sheets file (or any file of links, one per line) and
+// writes the results table the site book saves: one row per sheet, units
+// in the header. Lines that hold no sheet are reported on stderr by their
+// number; the others are written. It is the office's batch run:
+//
+//	go run ./app -eval sheets.txt [-us] > results.csv
+func evalCSV(path string, us bool, out, errs io.Writer) error {
+	data, err := os.ReadFile(path)
+	if err != nil {
+		return err
+	}
+	lines, bad := scenario.ReadSheets(string(data))
+	for _, b := range bad {
+		fmt.Fprintf(errs, "%s:%d: not read: %v\n", path, b.Line, b.Err)
+	}
+	var sheets []scenario.Scenario
+	for _, l := range lines {
+		if l.Note != "" {
+			fmt.Fprintf(errs, "%s:%d: read in part: %s\n", path, l.Line, l.Note)
+		}
+		sheets = append(sheets, l.Scen)
+	}
+	_, err = io.WriteString(out, present.ResultsCSV(sheets, us))
+	return err
+}
