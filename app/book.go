@@ -31,6 +31,7 @@ type book struct {
 func (s *sheet) startBook(ctx app.Context) {
 	openStore(func(db app.Value, problem string) {
 		ctx.Dispatch(func(ctx app.Context) {
+			defer s.contain("opening the store of kept sheets")
 			if problem != "" {
 				s.bk.problem = problem
 				s.evaluate()
@@ -39,6 +40,7 @@ func (s *sheet) startBook(ctx app.Context) {
 			s.bk.db = db
 			storeAll(db, func(recs []record, problem string) {
 				ctx.Dispatch(func(ctx app.Context) {
+					defer s.contain("reading the sheets kept on this device")
 					// Sheets made before the store was read (an import, a
 					// duplicate) join the kept ones.
 					for _, r := range s.bk.kept {
