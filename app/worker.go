@@ -69,7 +69,10 @@ async function installedPage() {
 self.addEventListener("install", (event) => {
   event.waitUntil((async () => {
     const cache = await caches.open(cacheName);
-    const files = resourcesToCache.filter((url) => new URL(url, self.location).href !== pageURL);
+    // The page is cached below; go-app lists it as "/" or, under a
+    // sub-path, as the folder without its trailing slash.
+    const isPage = (url) => [pageURL, pageURL.slice(0, -1)].includes(new URL(url, self.location).href);
+    const files = resourcesToCache.filter((url) => !isPage(url));
     await Promise.all(files.map(async (url) => {
       const r = await fetchOK(url, hashed.test(url) ? "force-cache" : "no-cache");
       await cache.put(url, r);
