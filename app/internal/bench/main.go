@@ -118,6 +118,7 @@ var (
 	count     = flag.Int("count", 5, "go test -count for the calc benchmarks")
 	benchtime = flag.String("benchtime", "1s", "go test -benchtime for the calc benchmarks")
 	wasmSrc   = flag.String("app", "./app", "the app package, built unstripped to read the wasm's composition")
+	phoneOnly = flag.Bool("phone-only", false, "only the phone-class figures and the sizes (to compare builds quickly)")
 )
 
 func main() {
@@ -132,17 +133,18 @@ func main() {
 	}
 	r := &report{JSON: map[string]any{}}
 
-	log.Print("calc benchmarks (go test -bench) …")
-	r.calcBenchmarks()
-
-	log.Print("browser: cold loads, offline reloads, edits …")
 	srv, origin, wire, err := serve(*siteDir)
 	if err != nil {
 		log.Fatal(err)
 	}
 	defer srv.Close()
-	link := origin + "/?" + scenario.Demo().Encode()
-	fetched := r.browser(link, origin)
+	var fetched []string
+	if !*phoneOnly {
+		log.Print("calc benchmarks (go test -bench) …")
+		r.calcBenchmarks()
+		log.Print("browser: cold loads, offline reloads, edits …")
+		fetched = r.browser(origin+"/?"+scenario.Demo().Encode(), origin)
+	}
 
 	log.Print("browser: first and repeat visit on a phone-class link …")
 	r.phone(origin, wire)
@@ -395,6 +397,7 @@ const editJS = `(() => {
 
 // browserSession is one Chromium with a fresh profile and one tab.
 type browserSession struct {
+	profile  string
 	ctx      context.Context
 	cancel   func()
 	mu       sync.Mutex
@@ -424,7 +427,7 @@ func newSession() (*browserSession, error) {
 	alloc, cancelAlloc := chromedp.NewExecAllocator(context.Background(),
 		headless.Options(path, profile, 1024, 768)...)
 	tab, cancelTab := chromedp.NewContext(alloc)
-	s := &browserSession{ctx: tab}
+	s := &browserSession{ctx: tab, profile: profile}
 	s.cancel = func() {
 		cancelTab()
 		cancelAlloc()
@@ -456,11 +459,30 @@ func newSession() (*browserSession, error) {
 	return s, nil
 }
 
+// wasmCodeCache is the size of the compiled wasm Chromium keeps in the
+// profile (its code cache for WebAssembly): more than nothing once a
+// module compiled from a streamed response has been kept for the next
+// load.
+func (s *browserSession) wasmCodeCache() int {
+	n := 0
+	filepath.WalkDir(filepath.Join(s.profile, "Default", "Code Cache", "wasm"), func(p string, d fs.DirEntry, err error) error {
+		if err == nil && d.Type().IsRegular() {
+			if info, err := d.Info(); err == nil {
+				n += int(info.Size())
+			}
+		}
+		return nil
+	})
+	return n
+}
+
 // waitShown waits for the answer on screen and returns the time.
 func (s *browserSession) waitShown() (float64, error) {
-	ctx, cancel := context.WithTimeout(s.ctx, 2*time.Minute)
+	// Long enough for a build of several MB over the phone-class link.
+	ctx, cancel := context.WithTimeout(s.ctx, 5*time.Minute)
 	defer cancel()
-	return chromedp.Run(ctx, chromedp.Poll[float64]("window.fieldheadShown || 0", chromedp.WithPollingInterval(20*time.Millisecond)))
+	return chromedp.Run(ctx, chromedp.Poll[float64]("window.fieldheadShown || 0", chromedp.WithPollingInterval(20*time.Millisecond),
+		chromedp.WithPollingTimeout(0))) // the context's limit, not Poll's default 30 s
 }
 
 // offline takes the page and its service worker off the network.
@@ -718,6 +740,10 @@ func (r *report) browser(link, origin string) []string {
 	r.JSON["edit_p95_ms"] = round1(p95)
 	r.JSON["cold_load_runs_ms"] = roundAll(cold)
 	r.JSON["offline_reload_runs_ms"] = roundAll(off)
+	cached := s.wasmCodeCache()
+	r.JSON["wasm_code_cache_bytes"] = cached
+	r.notes = append(r.notes, fmt.Sprintf("after the repeat visits Chromium's code cache for WebAssembly holds %d bytes "+
+		"(0 would mean the wasm is compiled again on every load)", cached))
 	repMed := median(repeat)
 	r.JSON["repeat_visit_ms"] = round1(repMed)
 	r.JSON["repeat_visit_runs_ms"] = roundAll(repeat)
