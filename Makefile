@@ -36,7 +36,7 @@ run: wasm
 	$(GO) run ./app -out $(SITE) -wasm $(WASM) -serve $(ADDR)
 
 dist: wasm
-	$(GO) run ./app -out $(DIST) -wasm $(WASM) -prefix "$(PREFIX)"
+	$(GO) run ./app -out $(DIST) -wasm $(WASM) -prefix "$(PREFIX)" -wasm-alias=false
 	@echo "Fieldhead: copy the contents of $(DIST)/ to the folder your web server serves at $(if $(PREFIX),$(PREFIX)/,/)"
 
 deps:

@@ -17,6 +17,8 @@ import (
 	"strconv"
 	"strings"
 
+	"fieldhead/app/internal/static"
+
 	"github.com/maxence-charriere/go-app/v10/pkg/app"
 )
 
@@ -29,6 +31,8 @@ func native() {
 	prefix := flag.String("prefix", "", "URL path the site is deployed under, e.g. /tools/fieldhead")
 	serve := flag.String("serve", "", "after writing, serve the site on this address, e.g. :8000")
 	flag.StringVar(&buildStamp, "stamp", "", "extra text mixed into the version, to make open pages offer an update without a code change")
+	flag.BoolVar(&wasmAlias, "wasm-alias", wasmAlias, "also name the wasm web/app.wasm (a symbolic link; for the tests, not for deployment)")
+	flag.StringVar(&compressCache, "cache", compressCache, "folder keeping the compressed copies between builds (\"\" for none)")
 	flag.Parse()
 
 	p, err := cleanPrefix(*prefix)
@@ -75,26 +79,11 @@ func siteURL(addr net.Addr, asked, prefix string) string {
 	return "http://" + net.JoinHostPort(host, port) + prefix + "/"
 }
 
-// siteHandler serves a written site folder, under prefix when given, with
-// the content types a PWA needs.
+// siteHandler serves a written site folder, under prefix when given, as a
+// well-set static host does (internal/static): the compressed copy the
+// browser accepts, hashed names cached for good, the rest revalidated.
 func siteHandler(dir, prefix string) http.Handler {
-	files := http.FileServer(http.Dir(dir))
-	h := http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
-		switch {
-		case strings.HasSuffix(r.URL.Path, ".wasm"):
-			w.Header().Set("Content-Type", "application/wasm")
-		case strings.HasSuffix(r.URL.Path, ".webmanifest"):
-			w.Header().Set("Content-Type", "application/manifest+json")
-		}
-		files.ServeHTTP(w, r)
-	})
-	if prefix == "" {
-		return h
-	}
-	mux := http.NewServeMux()
-	mux.Handle(prefix+"/", http.StripPrefix(prefix, h))
-	mux.Handle("/", http.RedirectHandler(prefix+"/", http.StatusFound))
-	return mux
+	return static.Handler(dir, prefix)
 }
 
 // newHandler describes the page for go-app. version changes whenever the
@@ -109,7 +98,7 @@ func newHandler(prefix, version string, wasmSize int64) *app.Handler {
 		Author:          "Fieldhead contributors",
 		BackgroundColor: colourPaper,
 		ThemeColor:      colourAccent,
-		LoadingLabel:    "Fieldhead is starting… {progress}%",
+		LoadingLabel:    "Fieldhead is starting…", // no percentage: loader.go
 		Icon: app.Icon{
 			Default:  "/web/icon-192.png",
 			Large:    "/web/icon-512.png",
@@ -119,6 +108,7 @@ func newHandler(prefix, version string, wasmSize int64) *app.Handler {
 		Styles:             []string{"/web/fieldhead.css"},
 		CacheableResources: []string{"/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
 		RawHeaders: []string{
+			preloadWasm(prefix),
 			`<meta name="color-scheme" content="light">`,
 			`<meta name="format-detection" content="telephone=no">`,
 		},
@@ -193,6 +183,9 @@ func writeSite(out, wasmPath, assets, prefix string) error {
 	if err := addCSP(out); err != nil {
 		return err
 	}
+	if err := patchSiteLoader(out); err != nil {
+		return err
+	}
 	files = append(files, file{"app.wasm", wasm})
 	for _, f := range files {
 		dst := filepath.Join(out, "web", f.name)
@@ -206,5 +199,36 @@ func writeSite(out, wasmPath, assets, prefix string) error {
 	if _, err := os.Stat(filepath.Join(out, "index.html")); err != nil {
 		return errors.New("the generated site has no index.html")
 	}
-	return nil
+	// For transfer: content-hashed names, then a brotli and a gzip copy
+	// of each text and wasm file (internal/static).
+	renames, err := static.Fingerprint(out, prefix)
+	if err != nil {
+		return err
+	}
+	if err := static.Compress(out, compressCache); err != nil {
+		return err
+	}
+	if !wasmAlias {
+		return nil
+	}
+	hashedWasm := strings.TrimPrefix(renames[prefix+"/web/app.wasm"], prefix+"/web/")
+	if hashedWasm == "" {
+		return errors.New("the wasm was not given a hashed name")
+	}
+	return os.Symlink(hashedWasm, filepath.Join(out, "web", "app.wasm"))
 }
+
+// wasmAlias (flag -wasm-alias) keeps the wasm's build name, web/app.wasm,
+// in a written site as a symbolic link to its hashed name: the browser
+// tests find the wasm of a built site by that name. No page requests it;
+// `make dist` leaves it out.
+var wasmAlias = true
+
+// compressCache keeps the compressed copies between builds (flag -cache):
+// brotli's best quality takes most of a minute on the wasm.
+var compressCache = func() string {
+	if d, err := os.UserCacheDir(); err == nil {
+		return filepath.Join(d, "fieldhead", "compressed")
+	}
+	return ""
+}()

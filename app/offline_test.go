@@ -118,7 +118,7 @@ func TestOfflineAndUpdate(t *testing.T) {
 	if err != nil {
 		t.Fatalf("deploying the changed build: %v", err)
 	}
-	appJS, err := os.ReadFile(filepath.Join(site, "app.js"))
+	appJS, err := os.ReadFile(siteAsset(t, site, "app.js"))
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -82,8 +82,8 @@ func TestSitePolicy(t *testing.T) {
 			t.Errorf("%s: a style attribute: %.60s", p, m)
 		}
 	}
-	for _, css := range []string{"app.css", filepath.Join("web", "fieldhead.css")} {
-		b, err := os.ReadFile(filepath.Join(site, css))
+	for _, css := range []string{siteAsset(t, site, "app.css"), siteAsset(t, site, "web/fieldhead.css")} {
+		b, err := os.ReadFile(css)
 		if err != nil {
 			t.Fatal(err)
 		}

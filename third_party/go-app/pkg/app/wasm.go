@@ -1,0 +1,8 @@
+//go:build wasm
+// +build wasm
+
+package app
+
+func wasmExecJS() string {
+	return ""
+}
