@@ -39,7 +39,7 @@ func openBook(t *testing.T, b *tab, atLeast int) []string {
 	return keptTitles(b)
 }
 
-func contains(list []string, s string) bool {
+func hasString(list []string, s string) bool {
 	for _, x := range list {
 		if x == s {
 			return true
@@ -72,7 +72,7 @@ func TestSiteBook(t *testing.T) {
 	_ = tb.Set("name", "Sheet B")
 	b.navigate(srv.URL + "/?" + tb.Sign())
 	titles := openBook(t, b, 2)
-	if !contains(titles, "Sheet A") || !contains(titles, "Sheet B") || titles[0] != "Sheet B" {
+	if !hasString(titles, "Sheet A") || !hasString(titles, "Sheet B") || titles[0] != "Sheet B" {
 		t.Errorf("the book holds %v, want Sheet B then Sheet A", titles)
 	}
 	// A kept with its edit: open it and read the box.
@@ -87,7 +87,7 @@ func TestSiteBook(t *testing.T) {
 	b.js(`(document.querySelector("#demo").click(), "")`)
 	time.Sleep(500 * time.Millisecond)
 	titles = openBook(t, b, 3)
-	if !contains(titles, "Sheet A") || !contains(titles, "Sheet B") || !contains(titles, scenario.Demo().Get("name")) {
+	if !hasString(titles, "Sheet A") || !hasString(titles, "Sheet B") || !hasString(titles, scenario.Demo().Get("name")) {
 		t.Errorf("after New sheet and Demo the book holds %v", titles)
 	}
 
@@ -95,12 +95,12 @@ func TestSiteBook(t *testing.T) {
 	idB := b.js(`[...document.querySelectorAll("section.kept")].find(e => e.querySelector("h2").textContent.trim() == "Sheet B").id.slice(5)`)
 	b.js(fmt.Sprintf(`(document.querySelector("#book-del-%s").click(), "")`, idB))
 	time.Sleep(300 * time.Millisecond)
-	if contains(keptTitles(b), "Sheet B") || !b.jsBool(`document.querySelector("#book-undo") !== null`) {
+	if hasString(keptTitles(b), "Sheet B") || !b.jsBool(`document.querySelector("#book-undo") !== null`) {
 		t.Errorf("after deleting B: %v, undo offered %v", keptTitles(b), b.jsBool(`document.querySelector("#book-undo") !== null`))
 	}
 	b.js(`(document.querySelector("#book-undo").click(), "")`)
 	time.Sleep(300 * time.Millisecond)
-	if !contains(keptTitles(b), "Sheet B") {
+	if !hasString(keptTitles(b), "Sheet B") {
 		t.Errorf("after undo: %v", keptTitles(b))
 	}
 	before := keptTitles(b)
@@ -143,7 +143,7 @@ func TestSiteBook(t *testing.T) {
 		t.Fatalf("after adding the file the fresh book holds %v", keptTitles(c))
 	}
 	for _, title := range before {
-		if !contains(keptTitles(c), title) {
+		if !hasString(keptTitles(c), title) {
 			t.Errorf("the fresh book lacks %q: %v", title, keptTitles(c))
 		}
 	}
