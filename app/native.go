@@ -33,7 +33,16 @@ func native() {
 	flag.StringVar(&buildStamp, "stamp", "", "extra text mixed into the version, to make open pages offer an update without a code change")
 	flag.BoolVar(&wasmAlias, "wasm-alias", wasmAlias, "also name the wasm web/app.wasm (a symbolic link; for the tests, not for deployment)")
 	flag.StringVar(&compressCache, "cache", compressCache, "folder keeping the compressed copies between builds (\"\" for none)")
+	eval := flag.String("eval", "", "instead of writing the site, read this sheets file and write its results table (CSV) to standard output")
+	evalUS := flag.Bool("us", false, "with -eval: figures in US customary units (default SI)")
 	flag.Parse()
+
+	if *eval != "" {
+		if err := evalCSV(*eval, *evalUS, os.Stdout, os.Stderr); err != nil {
+			log.Fatal(err)
+		}
+		return
+	}
 
 	p, err := cleanPrefix(*prefix)
 	if err != nil {
