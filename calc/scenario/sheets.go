@@ -16,7 +16,8 @@ import (
 // or a whole share link (https://…/?…) from which the query is taken. A
 // line without a tab is a link alone. Lines that start with # are notes,
 // and blank lines are skipped. The title is for the reader: the sheet's
-// own title is the name parameter of its link. Text is UTF-8; a title
+// own title is the name parameter of its link (a link without one takes
+// the line's title). Text is UTF-8; a title
 // holds no tab (a link cannot hold one either).
 
 // SheetLine is one sheet of a sheets file.
@@ -66,6 +67,9 @@ func ReadSheets(text string) ([]SheetLine, []LineError) {
 			continue
 		}
 		sl := SheetLine{Line: n, Title: strings.TrimSpace(title), Scen: sc}
+		if !sc.Has("name") && sl.Title != "" && printable(sl.Title) {
+			_ = sl.Scen.Set("name", sl.Title) // a link without a title takes the line's
+		}
 		if err != nil {
 			sl.Note = err.Error()
 		}
