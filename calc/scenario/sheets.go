@@ -104,10 +104,7 @@ func WriteSheets(note string, sheets []Scenario) string {
 			}
 			return r
 		}, strings.TrimSpace(s.Get("name")))
-		if title == "" {
-			title = "Untitled sheet"
-		}
-		b.WriteString(title + "\t" + s.Sign() + "\n")
+		b.WriteString(title + "\t" + s.Sign() + "\n") // an untitled sheet's line starts with the tab
 	}
 	return b.String()
 }
