@@ -130,7 +130,6 @@ func (s *sheet) onPrint(ctx app.Context, e app.Event) {
 func (s *sheet) onDemo(ctx app.Context, e app.Event) {
 	defer s.contain("loading the demo")
 	s.openNew(scenario.Demo()) // the open sheet stays in the site book
-	s.syncBoxes(ctx)
 }
 
 // onBlank starts an empty sheet on the same view and unit system; the open
@@ -142,5 +141,4 @@ func (s *sheet) onBlank(ctx app.Context, e app.Event) {
 		_ = sc.Set(p, s.d.Scen.Get(p))
 	}
 	s.openNew(sc) // the open sheet stays in the site book
-	s.syncBoxes(ctx)
 }

@@ -114,14 +114,7 @@ type selectBox struct {
 func (b *selectBox) Render() app.UI {
 	opts := make([]app.UI, len(b.Options))
 	for i, o := range b.Options {
-		v := o.Value
-		if v == "" {
-			// go-app leaves an empty value out (pkg/app/attribute.go,
-			// v10.1.11) and the option's value becomes its text: a blank
-			// option is " ", which the handler trims.
-			v = " "
-		}
-		opts[i] = app.Option().Value(v).Selected(o.Selected).Text(o.Text)
+		opts[i] = app.Option().Value(o.Value).Selected(o.Selected).Text(o.Text)
 	}
 	var h app.EventHandler
 	switch {

@@ -27,16 +27,15 @@ type sheet struct {
 	linkErr string // a problem with the link as a whole (unknown parameter, …)
 	loaded  bool   // false while pre-rendered on the server, before the wasm runs
 
-	base     string      // page URL without the query
-	query    string      // the scenario's signed link, also in the URL and in localStorage
-	damaged  bool        // opened from a link that arrived damaged, not yet edited
-	copyNote string      // result of the last "Copy link"
-	showLink bool        // show the link as selectable text
-	fault    *fault      // the last contained panic, shown in a banner (guard.go)
-	update   bool        // a newer version of the site is installed (update.go)
-	wide     int         // chart width drawn last (see chartWidth)
-	mounted  app.Context // the sheet's own context, from OnMount
-	bk       book        // the sheets kept on this device (book.go)
+	base     string // page URL without the query
+	query    string // the scenario's signed link, also in the URL and in localStorage
+	damaged  bool   // opened from a link that arrived damaged, not yet edited
+	copyNote string // result of the last "Copy link"
+	showLink bool   // show the link as selectable text
+	fault    *fault // the last contained panic, shown in a banner (guard.go)
+	update   bool   // a newer version of the site is installed (update.go)
+	wide     int    // chart width drawn last (see chartWidth)
+	bk       book   // the sheets kept on this device (book.go)
 }
 
 // newSheet is the route's component. In the browser it restores the
@@ -75,7 +74,6 @@ func newSheet() app.Composer {
 // OnMount records when the first result reached the screen, for the
 // browser test and for anyone timing the page.
 func (s *sheet) OnMount(ctx app.Context) {
-	s.mounted = ctx
 	s.watchUpdates(ctx)
 	if app.IsClient && s.loaded {
 		s.startBook(ctx)
@@ -164,30 +162,6 @@ func (s *sheet) build() {
 	}
 }
 
-// syncBoxes empties every box the view model shows empty. go-app leaves
-// the attribute out for an empty value (pkg/app/attribute.go, v10.1.11)
-// and so only removes it, which does not clear a box the person typed in:
-// after New sheet or a segment moved, the old text would stay. Run after
-// the frame of every edit but typing (typing changes only its own box).
-func (s *sheet) syncBoxes(ctx app.Context) {
-	if s.mounted.Src() != nil {
-		// The sheet's own context: a deferred call of the event's is
-		// dropped when the element clicked is gone (a segment removed).
-		ctx = s.mounted
-	}
-	ctx.Defer(func(app.Context) {
-		defer func() { _ = recover() }() // a missing element is no fault
-		for id, v := range s.vm.Boxes() {
-			if v != "" {
-				continue // go-app sets a non-empty value itself
-			}
-			if el := app.Window().GetElementByID(id); el.Truthy() && el.Get("value").String() != "" {
-				el.Set("value", "")
-			}
-		}
-	})
-}
-
 // link is the full share link.
 func (s *sheet) link() string {
 	if s.query == "" {
@@ -223,7 +197,7 @@ func (s *sheet) onBox(p string) app.EventHandler {
 func (s *sheet) onPicked(p, kind string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
 		defer s.contain("changing " + scenario.Label(p))
-		v := strings.TrimSpace(ctx.JSSrc().Get("value").String()) // a blank option's value is " " (selectBox)
+		v := ctx.JSSrc().Get("value").String()
 		switch kind {
 		case "unit":
 			if v == "" {
@@ -242,7 +216,6 @@ func (s *sheet) onPicked(p, kind string) app.EventHandler {
 		}
 		s.copyNote = ""
 		s.evaluate()
-		s.syncBoxes(ctx)
 	}
 }
 
@@ -290,7 +263,6 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 			}
 			if sc := s.bk.act(a, s.d.US()); sc != nil {
 				s.adopt(*sc, "")
-				s.syncBoxes(ctx)
 				return
 			}
 			s.build()
@@ -298,7 +270,6 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 		}
 		s.copyNote = ""
 		s.evaluate()
-		s.syncBoxes(ctx)
 	}
 }
 

@@ -26,7 +26,7 @@ func (a attributes) Set(name string, value any) {
 		v = toAttributeValue(value)
 	}
 
-	switch v {
+	switch name { // upstream switches on v: an empty value was left out, and a typed-in box never cleared
 	case "cite",
 		"data",
 		"download",
