@@ -123,7 +123,11 @@ var Table = []Param{
 	list("ph", "data-sheet heads", calc.Length, "m", "ft", "enter the data-sheet heads, one per flow, e.g. 62,59,52,44,33m"),
 	list("peff", "data-sheet efficiencies", calc.Dimensionless, "%", "%", "enter the data-sheet efficiencies, one per flow"),
 	grp(list("pnpsh", "data-sheet NPSH required", calc.Length, "m", "ft", "enter the data-sheet NPSH required, one per flow"), "npsh"),
-	q("spd", "speed", "Speed", "(share of the data sheet's; blank: 100 %)", calc.Dimensionless, "%", "%", "enter the speed as a share of the data sheet's"),
+	{Name: "spd", Label: "speed", Box: "Speed", Hint: "(% of the data sheet's, rpm, or drive Hz; blank: 100 %)", Kind: KindQuantity,
+		Dim: calc.Dimensionless, SI: "%", US: "%", ExtraUnits: []string{"rpm", "Hz"}, Missing: "enter the speed as a share of the data sheet's, in rpm, or as the drive's frequency in Hz"},
+	q("nrat", "rated speed", "Rated speed", "(the data sheet's; optional)", calc.Frequency, "rpm", "rpm", "enter the data sheet's speed in rpm"),
+	q("fmains", "mains frequency", "Mains frequency", "(the rated speed's supply; optional)", calc.Frequency, "Hz", "Hz", "enter the mains frequency the rated speed is given at (50 or 60 Hz)"),
+	q("qsp", "flow to reach by speed", "Flow to reach by a speed change", "(on this line; optional)", calc.Flow, "L/s", "gpm", "enter the flow the speed should give"),
 	{Name: "pumps", Label: "pumps working together", Box: "Pumps working together", Kind: KindChoice, choices: func() []Choice {
 		return []Choice{{"1", "one pump"}, {"2p", "two in parallel"}, {"2s", "two in series"},
 			{"3p", "three in parallel"}, {"3s", "three in series"}}
@@ -139,8 +143,10 @@ var Table = []Param{
 	q("ds", "pipe diameter at the suction gauge", "Pipe inside diameter at the suction gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the suction gauge"),
 	q("dd", "pipe diameter at the discharge gauge", "Pipe inside diameter at the discharge gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the discharge gauge"),
 	q("qm", "measured flow", "Measured flow", "", calc.Flow, "L/s", "gpm", "enter the measured flow"),
-	q("pin", "motor electrical input", "Motor electrical input", "(optional)", calc.Power, "kW", "hp", "enter the motor's electrical input"),
+	q("pin", "motor electrical input", "Motor electrical input", "(power meter; optional)", calc.Power, "kW", "kW", "enter the motor's electrical input"),
 	q("etam", "motor efficiency", "Motor efficiency", "(nameplate; optional)", calc.Dimensionless, "%", "%", "enter the motor's efficiency"),
+	{Name: "hours", Label: "running hours per year", Box: "Running hours per year", Hint: "(optional, for a yearly cost)", Kind: KindNumber},
+	{Name: "tariff", Label: "energy tariff per kWh", Box: "Energy tariff per kWh", Hint: "(any currency; optional)", Kind: KindNumber},
 	q("etat", "turbine-and-generator efficiency", "Turbine-and-generator efficiency", "", calc.Dimensionless, "%", "%", "enter the turbine-and-generator efficiency"),
 }
 

@@ -24,6 +24,12 @@ type PumpResult struct {
 	// Operating is where Curve meets the system curve, nil when they do
 	// not meet (Result.Errors says why) or the line is not described.
 	Operating *calc.OperatingResult
+	// BEP is the best-efficiency point of Curve, SingleBEP that of one
+	// pump at its speed (Single); nil without data-sheet efficiencies.
+	BEP, SingleBEP *calc.BEP
+	// SpeedFor is the speed that meets the flow qsp on the line, nil
+	// when not asked for or not found (Result.Errors says why).
+	SpeedFor *SpeedSolution
 }
 
 // pump reads the data sheet, speed and arrangement, then finds the
@@ -58,6 +64,9 @@ func (e *eval) pump() {
 			e.fail(opt, fmt.Sprintf("%s: %d values for %d flows; give one per data-sheet flow", opt, len(vs), len(qs)))
 			return
 		}
+		if opt == "peff" && !e.sheetEfficiencies(vs) {
+			return
+		}
 		for i, v := range vs {
 			if opt == "peff" {
 				pts[i].Eff = v
@@ -72,13 +81,11 @@ func (e *eval) pump() {
 		return
 	}
 	pr.Base = base
-	if e.s.Has("spd") {
-		v, ok := e.quantity("spd")
-		if !ok {
-			return
-		}
-		pr.Speed = v
+	spd, ok := e.speed()
+	if !ok {
+		return
 	}
+	pr.Speed = spd
 	single, err := base.AtSpeed(pr.Speed)
 	if err != nil {
 		e.failErr("spd", err)
@@ -101,6 +108,7 @@ func (e *eval) pump() {
 		pr.Curve = c
 	}
 	e.res.Pump = pr
+	e.bep(pr)
 	b := e.bal
 	if b == nil {
 		return // the balance's own errors say what is missing
@@ -122,6 +130,8 @@ func (e *eval) pump() {
 		return
 	}
 	pr.Operating = &op
+	e.regionCheck(pr.BEP, op.Q, "q", "pump", "the operating point")
+	e.speedFor(pr)
 }
 
 // npsh works out the NPSH available at the pump, at the operating point
@@ -229,7 +239,12 @@ func (e *eval) field() {
 		r.PowerIn = get("pin")
 	}
 	if e.s.Has("etam") {
-		r.MotorEff = get("etam")
+		v, good := e.share("etam")
+		ok = ok && good
+		r.MotorEff = v
+		if v > calc.MotorEfficiencyHigh && v <= 1 {
+			e.warn("etam", "field", fmt.Sprintf("a motor efficiency of %s %% is above the %s %% that even the best large motors hardly reach: check the nameplate", calc.FormatNumber(v*100, 4), calc.FormatNumber(calc.MotorEfficiencyHigh*100, 3)))
+		}
 	}
 	if !ok {
 		return
@@ -247,6 +262,9 @@ func (e *eval) field() {
 	for _, w := range fc.Warnings {
 		e.warnCalc("field", w)
 	}
+	if e.res.Pump != nil {
+		e.regionCheck(e.res.Pump.SingleBEP, r.Q, "qm", "field", "the measured flow")
+	}
 }
 
 // turbine works out the turbine's output at the flow and the flow that
@@ -256,7 +274,7 @@ func (e *eval) turbine() {
 	if !e.s.Has("etat") || e.bal == nil {
 		return
 	}
-	eff, ok := e.quantity("etat")
+	eff, ok := e.share("etat")
 	if !ok {
 		return
 	}

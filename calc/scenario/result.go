@@ -32,6 +32,7 @@ type Result struct {
 	NPSH        *calc.NPSHResult    // NPSH at the pump
 	NPSHFlow    float64             // the flow NPSH was worked out at, m³/s
 	Field       *calc.FieldCheck    // the pump's performance from gauge readings
+	Energy      *EnergyResult       // energy per volume pumped (measured, else at the operating point)
 	Turbine     *calc.TurbineResult // the turbine's output at the flow
 	BestTurbine *calc.TurbineResult // at the flow that gives the most output
 }
