@@ -35,6 +35,7 @@ type FieldReadings struct {
 
 // FieldCheck is a running pump's performance worked out from readings.
 type FieldCheck struct {
+	Q             float64 // the measured flow, m³/s
 	Head          float64 // pump total head, m
 	PressureHead  float64 // (pd − ps)/(ρg), m
 	ElevationHead float64 // zd − zs, m
@@ -115,7 +116,7 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	}
 	g := StandardGravity
 	rhog := fl.Density * g
-	var fc FieldCheck
+	fc := FieldCheck{Q: r.Q}
 	fc.Vs = r.Q / (math.Pi * r.Ds * r.Ds / 4)
 	fc.Vd = r.Q / (math.Pi * r.Dd * r.Dd / 4)
 	fc.PressureHead = (r.Pd - r.Ps) / rhog

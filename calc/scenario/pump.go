@@ -30,6 +30,9 @@ type PumpResult struct {
 	// SpeedFor is the speed that meets the flow qsp on the line, nil
 	// when not asked for or not found (Result.Errors says why).
 	SpeedFor *SpeedSolution
+	// Rated is the data sheet's speed, Hz (nrat), and Mains the supply
+	// frequency it is given at, Hz (fmains); 0 when not given.
+	Rated, Mains float64
 }
 
 // pump reads the data sheet, speed and arrangement, then finds the
@@ -81,6 +84,18 @@ func (e *eval) pump() {
 		return
 	}
 	pr.Base = base
+	for _, ref := range []struct {
+		name string
+		v    *float64
+	}{{"nrat", &pr.Rated}, {"fmains", &pr.Mains}} {
+		if e.s.Has(ref.name) {
+			if v, ok := e.quantity(ref.name); ok && v > 0 {
+				*ref.v = v
+			} else if ok {
+				e.fail(ref.name, Label(ref.name)+" must be above zero")
+			}
+		}
+	}
 	spd, ok := e.speed()
 	if !ok {
 		return

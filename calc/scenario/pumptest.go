@@ -102,12 +102,8 @@ func (e *eval) speed() (float64, bool) {
 			return 0, false
 		}
 		base, ok := e.quantity(ref)
-		if !ok {
-			return 0, false
-		}
-		if !(base > 0) {
-			e.fail(ref, Label(ref)+" must be above zero")
-			return 0, false
+		if !ok || !(base > 0) {
+			return 0, false // pump() reported it
 		}
 		ratio = v / base
 	} else {
@@ -210,7 +206,7 @@ func (e *eval) energy() {
 	var er EnergyResult
 	switch f := e.res.Field; {
 	case f != nil && f.Efficiency > 0 && f.Head > 0:
-		er = EnergyResult{Measured: true, Power: f.HydraulicPower / f.Efficiency, Q: f.HydraulicPower / (f.Head * e.res.Fluid.Density * calc.StandardGravity), H: f.Head}
+		er = EnergyResult{Measured: true, Power: f.HydraulicPower / f.Efficiency, Q: f.Q, H: f.Head}
 	case e.res.Pump != nil && e.res.Pump.Operating != nil && e.res.Pump.Operating.ShaftPower > 0:
 		op := e.res.Pump.Operating
 		er = EnergyResult{Power: op.ShaftPower, Shaft: true, Q: op.Q, H: op.H}

@@ -2,6 +2,7 @@ package present
 
 import (
 	"strconv"
+	"strings"
 
 	"fieldhead/calc"
 	"fieldhead/calc/scenario"
@@ -22,7 +23,8 @@ func (b *builder) pumpView() []Card {
 				Act: Action{Do: "choose", Param: "solve", Value: "hp"}}}},
 		}}}
 	}
-	cards := []Card{b.operatingCard(), b.npshCard(), b.pumpChartCard(), b.dataSheetCard(), b.pumpSetupCard(), b.fieldCard()}
+	cards := []Card{b.operatingCard(), b.npshCard(), b.pumpChartCard(), b.dataSheetCard(), b.pumpSetupCard(),
+		b.liquidCard(), b.fieldCard(), b.energyCard()}
 	if b.s.Has("etat") {
 		cards = append(cards, b.turbineCard())
 	}
@@ -253,6 +255,22 @@ func (b *builder) pumpChart(id, caption string) Block {
 		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(op.Q), Y: hu.FromSI(op.H),
 			Label: "operating point\n" + b.param("q", op.Q) + ", " + b.head(op.H)})
 	}
+	if bep := pr.BEP; bep != nil {
+		lo, hi := bep.Region()
+		ch.Bands = append(ch.Bands, Band{X0: qu.FromSI(lo), X1: qu.FromSI(hi),
+			Label: "preferred region, " + strconv.FormatFloat(calc.PreferredRegionLow*100, 'g', -1, 64) + "–" +
+				strconv.FormatFloat(calc.PreferredRegionHigh*100, 'g', -1, 64) + " % of best-efficiency flow"})
+		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(bep.Q), Y: hu.FromSI(bep.H),
+			Label: "best efficiency\n" + b.param("q", bep.Q) + ", " + percent(bep.Eff)})
+	}
+	if f := b.r.Field; f != nil && f.Head > 0 {
+		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(f.Q), Y: hu.FromSI(f.Head),
+			Label: "measured\n" + b.param("qm", f.Q) + ", " + b.head(f.Head)})
+	}
+	if sf := pr.SpeedFor; sf != nil {
+		xs, ys = sampleCurve(sf.Curve.MinFlow(), sf.Curve.MaxFlow(), sf.Curve.Head, qu, hu)
+		add(RolePumpBase, "at "+percent(sf.Ratio)+" speed for "+b.param("qsp", sf.Q), xs, ys)
+	}
 	if c.HasEfficiency() {
 		pct := displayUnit("peff", b.us)
 		xs, ys = sampleCurve(c.MinFlow(), c.MaxFlow(), c.Efficiency, qu, pct)
@@ -338,10 +356,48 @@ func (b *builder) pumpSetupCard() Card {
 	}
 	return Card{ID: "pump-setup", Title: "Pump as installed", Blocks: []Block{
 		fields(b.quantity("spd", "", ""), b.picker("pumps", "", "")),
+		fields(b.quantity("nrat", "", ""), b.quantity("fmains", "", "")),
+		fields(b.quantity("qsp", "", "")),
+		b.speedFacts(),
 		fields(b.quantity("zp", "", "")),
 		b.toggle("npsh"),
 		maybe(typed, npshr),
 	}}
+}
+
+// speedFacts are the running speed in rpm or Hz and the speed solved for
+// a flow; an empty block without them.
+func (b *builder) speedFacts() Block {
+	pr := b.r.Pump
+	if pr == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	inUnits := func(r float64) string {
+		var parts []string
+		if pr.Rated > 0 {
+			parts = append(parts, b.show(r*pr.Rated, calc.Frequency))
+		}
+		if pr.Mains > 0 {
+			parts = append(parts, "drive at "+b.param("fmains", r*pr.Mains))
+		}
+		if len(parts) == 0 {
+			return ""
+		}
+		return " (" + strings.Join(parts, ", ") + ")"
+	}
+	var fs []Fact
+	if pr.Speed != 1 || pr.Rated > 0 {
+		fs = append(fs, Fact{ID: "speed-now", Label: "speed used", Value: percent(pr.Speed) + " of the data sheet's" + inUnits(pr.Speed)})
+	}
+	if sf := pr.SpeedFor; sf != nil {
+		fs = append(fs, Fact{ID: "speed-for", Label: "speed for " + b.param("qsp", sf.Q) + " on this line (affinity laws)",
+			Value: percent(sf.Ratio) + inUnits(sf.Ratio), Key: true},
+			Fact{Label: "head the line needs at that flow", Value: b.head(sf.H)})
+	}
+	if fs == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	return Block{Kind: BlockFacts, ID: "speed-results", Class: "facts", Facts: fs}
 }
 
 // fieldCard is the field check: gauge readings in, the pump's real
@@ -388,6 +444,61 @@ func (b *builder) fieldFacts() []Fact {
 		if f.CurveEfficiency > 0 {
 			out = append(out, Fact{Label: "data-sheet pump efficiency here (pump alone)", Value: percent(f.CurveEfficiency)})
 		}
+		if f.HasEffDeviation {
+			out = append(out, Fact{ID: "field-eff-dev", Label: "pump efficiency below (−) or above the data sheet",
+				Value: signed(f.EffDeviation*100) + " percentage points"})
+		}
+	}
+	if pr := b.r.Pump; pr != nil && pr.SingleBEP != nil {
+		bep := pr.SingleBEP
+		lo, hi := bep.Region()
+		out = append(out,
+			Fact{ID: "field-bep", Label: "measured flow as a share of the best-efficiency flow (" + b.param("q", bep.Q) + ")", Value: percent(f.Q / bep.Q)},
+			Fact{Label: "preferred operating region (ANSI/HI 9.6.3, from memory)", Value: b.param("q", lo) + " to " + b.param("q", hi)})
+	}
+	return out
+}
+
+// signed writes a number with its sign, three significant digits: "+2.1",
+// "−5.72".
+func signed(v float64) string {
+	if v > 0 {
+		return "+" + calc.FormatNumber(v, 3)
+	}
+	return calc.FormatNumber(v, 3)
+}
+
+// energyCard is the energy used per volume pumped and its yearly cost.
+func (b *builder) energyCard() Card {
+	facts := b.energyFacts()
+	return Card{ID: "energy", Title: "Energy per volume pumped", Blocks: []Block{
+		maybe(facts == nil, text("muted", "", "Worked out from the field check's measured input, or from the operating point when the data sheet has efficiencies.")),
+		maybe(facts != nil, Block{Kind: BlockFacts, ID: "energy-results", Class: "facts", Facts: facts}),
+		fields(b.plain("hours", "", "", true), b.plain("tariff", "", "", true)),
+	}}
+}
+
+// energyFacts are the specific energy figures, nil without them.
+func (b *builder) energyFacts() []Fact {
+	en := b.r.Energy
+	if en == nil {
+		return nil
+	}
+	basis := "the measured electrical input (" + b.show(en.Power, calc.Power) + ")"
+	switch {
+	case !en.Measured && en.Shaft:
+		basis = "the shaft power at the operating point (" + b.show(en.Power, calc.Power) + "; motor losses not included: give the motor efficiency)"
+	case !en.Measured:
+		basis = "the operating point's shaft power over the motor efficiency (" + b.show(en.Power, calc.Power) + ")"
+	}
+	out := []Fact{
+		{ID: "energy-vol", Label: "energy per volume", Value: b.show(en.PerVolume, calc.SpecificEnergy), Key: true},
+		{ID: "energy-head", Label: "per volume and head", Value: b.show(en.PerVolumeHead, calc.SpecificEnergyHead)},
+		{ID: "energy-ideal", Label: "least possible (ρ·g·H, a loss-free set)", Value: b.show(en.Ideal, calc.SpecificEnergy) + " · " + b.show(en.IdealHead, calc.SpecificEnergyHead)},
+		{Label: "worked out from", Value: basis + " at " + b.param("q", en.Q) + " and " + b.head(en.H)},
+	}
+	if en.YearCost > 0 {
+		out = append(out, Fact{ID: "energy-cost", Label: "cost per year (running hours × input power × tariff)", Value: plainNumber(en.YearCost) + " in the tariff's currency", Key: true})
 	}
 	return out
 }
