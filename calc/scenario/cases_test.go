@@ -154,6 +154,42 @@ func observable(r Result, key string) (float64, string, error) {
 		case "npshr":
 			return o.NPSHr, "", nil
 		}
+	case "speed", "speedfor", "bep":
+		if r.Pump == nil {
+			return miss()
+		}
+		pr := r.Pump
+		switch {
+		case part == "speed" && name == "ratio":
+			return pr.Speed, "", nil
+		case part == "speedfor" && pr.SpeedFor == nil, part == "bep" && pr.BEP == nil:
+			return miss()
+		case part == "speedfor" && name == "ratio":
+			return pr.SpeedFor.Ratio, "", nil
+		case part == "speedfor" && name == "h":
+			return pr.SpeedFor.H, "", nil
+		case part == "bep" && name == "q":
+			return pr.BEP.Q, "", nil
+		case part == "bep" && name == "eff":
+			return pr.BEP.Eff, "", nil
+		case part == "bep" && name == "h":
+			return pr.BEP.H, "", nil
+		}
+	case "energy":
+		en := r.Energy
+		if en == nil {
+			return miss()
+		}
+		switch name {
+		case "vol":
+			return en.PerVolume, "", nil
+		case "head":
+			return en.PerVolumeHead, "", nil
+		case "ideal":
+			return en.Ideal, "", nil
+		case "cost":
+			return en.YearCost, "", nil
+		}
 	case "npsh":
 		n := r.NPSH
 		if n == nil {
@@ -189,6 +225,11 @@ func observable(r Result, key string) (float64, string, error) {
 			return f.PumpEfficiency, "", nil
 		case "dev":
 			return f.Deviation, "", nil
+		case "effdev":
+			if !f.HasEffDeviation {
+				return miss()
+			}
+			return f.EffDeviation, "", nil
 		}
 	case "turbine", "best":
 		t := r.Turbine

@@ -258,7 +258,7 @@ func (e *eval) field() {
 		ok = ok && good
 		r.MotorEff = v
 		if v > calc.MotorEfficiencyHigh && v <= 1 {
-			e.warn("etam", "field", fmt.Sprintf("a motor efficiency of %s %% is above the %s %% that even the best large motors hardly reach: check the nameplate", calc.FormatNumber(v*100, 4), calc.FormatNumber(calc.MotorEfficiencyHigh*100, 3)))
+			e.warn("etam", "field", fmt.Sprintf("a motor efficiency of %s %% is above the %s %% that even the best large motors hardly reach: check the nameplate", pct(v*100), pct(calc.MotorEfficiencyHigh*100)))
 		}
 	}
 	if !ok {

@@ -2,6 +2,7 @@ package scenario
 
 import (
 	"fmt"
+	"strconv"
 	"strings"
 
 	"fieldhead/calc"
@@ -28,6 +29,9 @@ type EnergyResult struct {
 	Q, H     float64 // flow, m³/s, and head, m
 }
 
+// pct writes a percentage as typed: "90", "0.9", "52", "97.5".
+func pct(v float64) string { return strconv.FormatFloat(v, 'g', 4, 64) }
+
 // isFrequency reports whether unit text names a speed or frequency unit
 // (rpm, Hz).
 func isFrequency(u string) bool {
@@ -48,7 +52,7 @@ func (e *eval) share(param string) (float64, bool) {
 	}
 	if meant, slip := calc.FractionSlip(v); slip {
 		e.fail(param, fmt.Sprintf("a %s of %s %% is not plausible; a fraction was probably typed into a percentage box: did you mean %s %%?",
-			Label(param), calc.FormatNumber(v*100, 4), calc.FormatNumber(meant, 4)))
+			Label(param), pct(v*100), pct(meant)))
 		return 0, false
 	}
 	return v, true
@@ -60,14 +64,14 @@ func (e *eval) sheetEfficiencies(vs []float64) bool {
 	for i, v := range vs {
 		if meant, slip := calc.FractionSlip(v); slip {
 			e.fail("peff", fmt.Sprintf("point %d: %s %% looks like a fraction typed into the percentage list: did you mean %s %%? (give every efficiency in %%, e.g. 0,52,71,76,72%%)",
-				i+1, calc.FormatNumber(v*100, 4), calc.FormatNumber(meant, 4)))
+				i+1, pct(v*100), pct(meant)))
 			return false
 		}
 	}
 	for i, v := range vs {
 		if v > calc.PumpEfficiencyHigh && v <= 1 {
 			e.warn("peff", "pump", fmt.Sprintf("point %d: a data-sheet efficiency of %s %% is above the %s %% that even the largest pumps hardly reach: check the list",
-				i+1, calc.FormatNumber(v*100, 4), calc.FormatNumber(calc.PumpEfficiencyHigh*100, 3)))
+				i+1, pct(v*100), pct(calc.PumpEfficiencyHigh*100)))
 			break
 		}
 	}
@@ -114,7 +118,7 @@ func (e *eval) speed() (float64, bool) {
 		ratio = v
 	}
 	if ratio > 1 && ratio <= calc.PumpSpeedRatioMax {
-		e.warn("spd", "pump", fmt.Sprintf("a speed of %s %% of the data sheet's overspeeds the pump: the maker must confirm the pump, its bearings, seal and motor are fit for it (the power rises with the cube of the speed)", calc.FormatNumber(ratio*100, 4)))
+		e.warn("spd", "pump", fmt.Sprintf("a speed of %s %% of the data sheet's overspeeds the pump: the maker must confirm the pump, its bearings, seal and motor are fit for it (the power rises with the cube of the speed)", pct(ratio*100)))
 	}
 	return ratio, true
 }
@@ -147,7 +151,7 @@ func (e *eval) regionCheck(b *calc.BEP, q float64, param, topic, what string) {
 	}
 	e.warnCalc(topic, calc.Warnf(param, "%s (%v) lies %s the preferred operating region (%v to %v, %s–%s %% of the best-efficiency flow, after ANSI/HI 9.6.3 from memory): expect more vibration, recirculation or wear; ask the maker about the allowable region",
 		what, calc.Fig(q, calc.Flow), side, calc.Fig(lo, calc.Flow), calc.Fig(hi, calc.Flow),
-		calc.FormatNumber(calc.PreferredRegionLow*100, 3), calc.FormatNumber(calc.PreferredRegionHigh*100, 3)))
+		pct(calc.PreferredRegionLow*100), pct(calc.PreferredRegionHigh*100)))
 }
 
 // speedFor solves for the speed at which the pumps deliver the flow qsp on
@@ -181,7 +185,7 @@ func (e *eval) speedFor(pr *PumpResult) {
 	}
 	pr.SpeedFor = &SpeedSolution{Q: q, H: h, Ratio: r, Curve: c}
 	if r > 1 {
-		e.warn("qsp", "pump", fmt.Sprintf("this flow needs %s %% of the data sheet's speed: overspeed, which the maker must approve", calc.FormatNumber(r*100, 4)))
+		e.warn("qsp", "pump", fmt.Sprintf("this flow needs %s %% of the data sheet's speed: overspeed, which the maker must approve", pct(r*100)))
 	}
 }
 
