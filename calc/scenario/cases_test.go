@@ -225,6 +225,22 @@ func observable(r Result, key string) (float64, string, error) {
 			return f.PumpEfficiency, "", nil
 		case "dev":
 			return f.Deviation, "", nil
+		case "uhead", "upower", "uwire", "upump", "dominant":
+			b := r.FieldBands
+			if b == nil {
+				return miss()
+			}
+			switch name {
+			case "uhead":
+				return b.Head.U, "", nil
+			case "upower":
+				return b.Power.U, "", nil
+			case "uwire":
+				return b.Wire.U, "", nil
+			case "upump":
+				return b.Pump.U, "", nil
+			}
+			return 0, b.Head.Dominant() + " " + b.Power.Dominant() + " " + b.Wire.Dominant(), nil
 		case "effdev":
 			if !f.HasEffDeviation {
 				return miss()

@@ -280,6 +280,7 @@ func (e *eval) field() {
 	if e.res.Pump != nil {
 		e.regionCheck(e.res.Pump.SingleBEP, r.Q, "qm", "field", "the measured flow")
 	}
+	e.bands(fc)
 }
 
 // turbine works out the turbine's output at the flow and the flow that

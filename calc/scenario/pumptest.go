@@ -230,3 +230,56 @@ func (e *eval) energy() {
 	er.Energy = en
 	e.res.Energy = &er
 }
+
+// accuracyParams are the instruments' accuracies of a field check.
+var accuracyParams = []string{"gcs", "gss", "gcd", "gsd", "uqm", "upin", "uz"}
+
+// bands propagates the instruments' accuracy to the field check's
+// results, when any accuracy is given. A gauge class needs its span and a
+// span its class.
+func (e *eval) bands(fc calc.FieldCheck) {
+	given := false
+	for _, p := range accuracyParams {
+		given = given || e.s.Has(p)
+	}
+	if !given {
+		return
+	}
+	var a calc.Accuracy
+	ok := true
+	read := func(p string, v *float64) {
+		if !e.s.Has(p) {
+			return
+		}
+		x, good := e.quantity(p)
+		ok = ok && good
+		*v = x
+	}
+	read("gcs", &a.ClassS)
+	read("gss", &a.SpanS)
+	read("gcd", &a.ClassD)
+	read("gsd", &a.SpanD)
+	read("uqm", &a.Flow)
+	read("upin", &a.Power)
+	read("uz", &a.Height)
+	for _, pair := range [][2]string{{"gcs", "gss"}, {"gcd", "gsd"}} {
+		for i, p := range pair {
+			if e.s.Has(p) && !e.s.Has(pair[1-i]) {
+				e.fail(pair[1-i], missingMsg(pair[1-i])+": a gauge's accuracy class and span go together")
+				ok = false
+			}
+		}
+	}
+	if a.Power > 0 && !e.s.Has("pin") {
+		e.warn("upin", "field", "a power meter's accuracy without its reading (motor electrical input) is not used")
+	}
+	if !ok {
+		return
+	}
+	tu, err := fc.Uncertainty(*e.res.Fluid, a)
+	if err != nil {
+		e.failErr("uqm", err)
+		return
+	}
+	e.res.FieldBands = &tu
+}
