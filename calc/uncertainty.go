@@ -10,9 +10,9 @@ type Accuracy struct {
 	// for class 1.6), SpanS and SpanD their spans, Pa (full scale less the
 	// scale's start: 600 kPa for a −100 … 500 kPa gauge).
 	ClassS, SpanS, ClassD, SpanD float64
-	Flow   float64 // flow meter, share of the reading (0.02 for ±2 %)
-	Power  float64 // power meter, share of the reading
-	Height float64 // each gauge's height, ± m
+	Flow                         float64 // flow meter, share of the reading (0.02 for ±2 %)
+	Power                        float64 // power meter, share of the reading
+	Height                       float64 // each gauge's height, ± m
 }
 
 // Term is one reading's part of a result's uncertainty: Field names the
@@ -38,11 +38,11 @@ func (b Band) Dominant() string {
 	return b.Terms[0].Field
 }
 
-// TestUncertainty holds the bands of a field check's results: pump head
+// FieldBands holds the bands of a field check's results: pump head
 // (m), hydraulic power (W), wire-to-water and pump efficiency (shares).
 // Wire and Pump are empty without a measured input (and, for Pump, a
 // motor efficiency, which is taken as exact).
-type TestUncertainty struct {
+type FieldBands struct {
 	Head, Power, Wire, Pump Band
 }
 
@@ -65,18 +65,18 @@ type TestUncertainty struct {
 // efficiency are taken as exact. Validity: small limits (a few per cent),
 // where the first-order terms dominate. Errors name the field whose
 // accuracy is not a finite share or length at or above zero.
-func (fc FieldCheck) Uncertainty(fl Fluid, a Accuracy) (TestUncertainty, error) {
+func (fc FieldCheck) Uncertainty(fl Fluid, a Accuracy) (FieldBands, error) {
 	for _, c := range []struct {
 		field string
 		v     float64
 	}{{"gcs", a.ClassS}, {"gss", a.SpanS}, {"gcd", a.ClassD}, {"gsd", a.SpanD},
 		{"uqm", a.Flow}, {"upin", a.Power}, {"uz", a.Height}} {
 		if math.IsNaN(c.v) || math.IsInf(c.v, 0) || c.v < 0 {
-			return TestUncertainty{}, fieldErrorf(c.field, "an accuracy must be zero or positive, got %g", c.v)
+			return FieldBands{}, fieldErrorf(c.field, "an accuracy must be zero or positive, got %g", c.v)
 		}
 	}
 	if !(fl.Density > 0) || !(fc.Q > 0) {
-		return TestUncertainty{}, fieldErrorf("qm", "the field check has no flow to work from")
+		return FieldBands{}, fieldErrorf("qm", "the field check has no flow to work from")
 	}
 	rhog := fl.Density * StandardGravity
 	up := func(class, span float64) float64 { return class * span / rhog }
@@ -95,7 +95,7 @@ func (fc FieldCheck) Uncertainty(fl Fluid, a Accuracy) (TestUncertainty, error) 
 		Term{"zd", rhog * fc.Q * a.Height},
 		Term{"qm", rhog * (fc.Head + 2*fc.VelocityHead) * uq},
 	)
-	out := TestUncertainty{Head: head, Power: power}
+	out := FieldBands{Head: head, Power: power}
 	if fc.Efficiency > 0 {
 		share := func(eta float64) Band {
 			terms := make([]Term, 0, len(power.Terms)+1)

@@ -28,13 +28,13 @@ type Result struct {
 	// or a broken column.
 	VapourLine []float64
 
-	Pump        *PumpResult         // the pump curve, system curve and operating point
-	NPSH        *calc.NPSHResult    // NPSH at the pump
-	NPSHFlow    float64             // the flow NPSH was worked out at, m³/s
-	Field       *calc.FieldCheck    // the pump's performance from gauge readings
+	Pump     *PumpResult      // the pump curve, system curve and operating point
+	NPSH     *calc.NPSHResult // NPSH at the pump
+	NPSHFlow float64          // the flow NPSH was worked out at, m³/s
+	Field    *calc.FieldCheck // the pump's performance from gauge readings
 	// FieldBands are the field check's uncertainty bands from the
 	// instruments' accuracy, nil when no accuracy is given.
-	FieldBands *calc.TestUncertainty
+	FieldBands  *calc.FieldBands
 	Energy      *EnergyResult       // energy per volume pumped (measured, else at the operating point)
 	Turbine     *calc.TurbineResult // the turbine's output at the flow
 	BestTurbine *calc.TurbineResult // at the flow that gives the most output
