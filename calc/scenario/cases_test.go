@@ -175,6 +175,25 @@ func observable(r Result, key string) (float64, string, error) {
 		case part == "bep" && name == "h":
 			return pr.BEP.H, "", nil
 		}
+	case "accept":
+		a := r.Acceptance
+		if a == nil {
+			return miss()
+		}
+		switch name {
+		case "verdict":
+			return 0, a.Verdict.String(), nil
+		case "head":
+			return 0, a.Head.Verdict.String(), nil
+		case "eff":
+			return 0, a.Efficiency.Verdict.String(), nil
+		case "improve":
+			return 0, a.Improve, nil
+		case "hlow":
+			return a.Head.Low, "", nil
+		case "hhigh":
+			return a.Head.High, "", nil
+		}
 	case "energy":
 		en := r.Energy
 		if en == nil {

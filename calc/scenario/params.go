@@ -152,6 +152,7 @@ var Table = []Param{
 	q("uqm", "flow meter accuracy", "Flow meter accuracy", "(± % of reading; optional)", calc.Dimensionless, "%", "%", "enter the flow meter's accuracy in % of reading"),
 	q("upin", "power meter accuracy", "Power meter accuracy", "(± % of reading; optional)", calc.Dimensionless, "%", "%", "enter the power meter's accuracy in % of reading"),
 	q("uz", "gauge height accuracy", "Gauge heights known to", "(± each; optional)", calc.Length, "mm", "in", "enter how well each gauge's height is known"),
+	{Name: "grade", Label: "acceptance grade", Box: "Acceptance grade", Hint: "(ISO 9906; factors from memory)", Kind: KindChoice, choices: gradeChoices},
 	{Name: "hours", Label: "running hours per year", Box: "Running hours per year", Hint: "(optional, for a yearly cost)", Kind: KindNumber},
 	{Name: "tariff", Label: "energy tariff per kWh", Box: "Energy tariff per kWh", Hint: "(any currency; optional)", Kind: KindNumber},
 	q("etat", "turbine-and-generator efficiency", "Turbine-and-generator efficiency", "", calc.Dimensionless, "%", "%", "enter the turbine-and-generator efficiency"),
@@ -222,6 +223,24 @@ func ClassName(catalogue, class string) string {
 		return "schedule " + strings.TrimPrefix(class, "PVC")
 	}
 	return class
+}
+
+// gradeChoices are ISO 9906's acceptance grades with their head and
+// efficiency tolerances (from memory).
+func gradeChoices() []Choice {
+	var out []Choice
+	for _, g := range calc.Grades {
+		eff := "η not below the guarantee"
+		if g.EffLow < 0 {
+			eff = "η " + strconv.FormatFloat(g.EffLow*100, 'g', -1, 64) + " %"
+		}
+		head := "H ±" + strconv.FormatFloat(g.HeadHigh*100, 'g', -1, 64) + " %"
+		if g.HeadLow == 0 {
+			head = "H 0 to +" + strconv.FormatFloat(g.HeadHigh*100, 'g', -1, 64) + " %"
+		}
+		out = append(out, Choice{g.Name, "grade " + g.Name + ": " + head + ", " + eff + " (" + g.Use + ")"})
+	}
+	return out
 }
 
 func matChoices() []Choice {

@@ -281,6 +281,7 @@ func (e *eval) field() {
 		e.regionCheck(e.res.Pump.SingleBEP, r.Q, "qm", "field", "the measured flow")
 	}
 	e.bands(fc)
+	e.accept(fc)
 }
 
 // turbine works out the turbine's output at the flow and the flow that

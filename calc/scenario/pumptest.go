@@ -283,3 +283,26 @@ func (e *eval) bands(fc calc.FieldCheck) {
 	}
 	e.res.FieldBands = &tu
 }
+
+// accept judges the field check under the chosen grade.
+func (e *eval) accept(fc calc.FieldCheck) {
+	if !e.s.Has("grade") {
+		return
+	}
+	g, ok := calc.LookupGrade(e.s.Get("grade"))
+	if !ok {
+		return // checkAll reported it
+	}
+	var bands calc.FieldBands
+	if e.res.FieldBands != nil {
+		bands = *e.res.FieldBands
+	} else {
+		e.warn("grade", "field", "no instrument accuracy is given: the verdict takes every reading as exact, which no field test is; give the gauges' classes and spans and the meters' accuracies")
+	}
+	a, ok := calc.Accept(fc, bands, g)
+	if !ok {
+		e.warn("grade", "field", "the acceptance grade needs the data sheet's head at the measured flow: give the data sheet, covering that flow")
+		return
+	}
+	e.res.Acceptance = &a
+}
