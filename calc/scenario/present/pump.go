@@ -264,8 +264,11 @@ func (b *builder) pumpChart(id, caption string) Block {
 			Label: "best efficiency\n" + b.param("q", bep.Q) + ", " + percent(bep.Eff)})
 	}
 	if f := b.r.Field; f != nil && f.Head > 0 {
-		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(f.Q), Y: hu.FromSI(f.Head),
-			Label: "measured\n" + b.param("qm", f.Q) + ", " + b.head(f.Head)})
+		label := "measured\n" + b.param("qm", f.Q) + ", " + b.head(f.Head)
+		if u := b.r.FieldBands; u != nil {
+			label += " ± " + b.head(u.Head.U)
+		}
+		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(f.Q), Y: hu.FromSI(f.Head), Label: label})
 	}
 	if sf := pr.SpeedFor; sf != nil {
 		xs, ys = sampleCurve(sf.Curve.MinFlow(), sf.Curve.MaxFlow(), sf.Curve.Head, qu, hu)
@@ -410,8 +413,93 @@ func (b *builder) fieldCard() Card {
 		fields(b.quantity("ds", "", ""), b.quantity("dd", "", "")),
 		fields(b.quantity("qm", "", ""), b.quantity("pin", "", ""), b.quantity("etam", "", "")),
 		maybe(facts != nil, Block{Kind: BlockFacts, ID: "field-results", Class: "facts", Facts: facts}),
+		{Kind: BlockHeading, Text: "How sure the test is: each instrument's accuracy"},
+		fields(b.quantity("gcs", "", ""), b.quantity("gss", "", "")),
+		fields(b.quantity("gcd", "", ""), b.quantity("gsd", "", "")),
+		fields(b.quantity("uqm", "", ""), b.quantity("upin", "", ""), b.quantity("uz", "", "")),
+		b.bandBlock(),
+		fields(b.picker("grade", "", "no grade: no verdict")),
+		b.verdictBlock(),
+		b.verdictFacts(),
 		b.warnings(nil, "field"),
 	}}
+}
+
+// readingName names a reading for the sentence "improve …".
+func readingName(p string) string {
+	switch p {
+	case "ps", "pd":
+		return "the " + strings.TrimSuffix(scenario.Label(p), " reading") + " (a finer class or a span closer to the reading)"
+	case "qm":
+		return "the flow meter"
+	case "pin":
+		return "the power meter"
+	case "zs", "zd":
+		return "the gauges' heights (measure them, e.g. with a level)"
+	}
+	return scenario.Label(p)
+}
+
+// bandBlock shows each result of the field check as value ± band and the
+// reading that dominates it; an empty block without accuracies.
+func (b *builder) bandBlock() Block {
+	f, u := b.r.Field, b.r.FieldBands
+	if f == nil || u == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	most := func(bd calc.Band) string {
+		if d := bd.Dominant(); d != "" {
+			return "; mostly from " + readingName(d)
+		}
+		return ""
+	}
+	fs := []Fact{
+		{ID: "band-head", Label: "pump head", Value: b.head(f.Head) + " ± " + b.head(u.Head.U) + most(u.Head), Key: true},
+		{ID: "band-power", Label: "hydraulic power", Value: b.show(f.HydraulicPower, calc.Power) + " ± " + b.show(u.Power.U, calc.Power) + most(u.Power)},
+	}
+	if f.Efficiency > 0 {
+		fs = append(fs, Fact{ID: "band-wire", Label: "wire-to-water efficiency", Value: percent(f.Efficiency) + " ± " + percent(u.Wire.U) + most(u.Wire)})
+	}
+	if f.PumpEfficiency > 0 {
+		fs = append(fs, Fact{ID: "band-pump", Label: "efficiency of the pump alone", Value: percent(f.PumpEfficiency) + " ± " + percent(u.Pump.U) + most(u.Pump), Key: true})
+	}
+	fs = append(fs, Fact{Label: "how the bands are found", Value: "each accuracy taken as a limit (±); the limits added in quadrature, first order (the GUM's law of propagation); density, pipe sizes and motor efficiency taken as exact"})
+	return Block{Kind: BlockFacts, ID: "field-bands", Class: "facts", Facts: fs}
+}
+
+// verdictBlock is the acceptance verdict's badge; empty without one.
+func (b *builder) verdictBlock() Block {
+	a := b.r.Acceptance
+	if a == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	g := "grade " + a.Grade.Name
+	switch a.Verdict {
+	case calc.Within:
+		return Block{Kind: BlockLevel, ID: "accept-level", Class: "lvl-ok", Text: "✓ Within " + g + " at this flow"}
+	case calc.Outside:
+		return Block{Kind: BlockLevel, ID: "accept-level", Class: "lvl-danger", Text: "✕ Outside " + g + " at this flow"}
+	}
+	return Block{Kind: BlockLevel, ID: "accept-level", Class: "lvl-caution", Text: "? This test cannot tell: the readings' band is wider than " + g + " allows; improve " + readingName(a.Improve)}
+}
+
+// verdictFacts are what the verdict compares; nil block without one.
+func (b *builder) verdictFacts() Block {
+	a, f := b.r.Acceptance, b.r.Field
+	if a == nil || f == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	word := map[calc.Verdict]string{calc.Within: "within", calc.Outside: "outside", calc.CannotTell: "cannot tell"}
+	fs := []Fact{{ID: "accept-head", Label: "head allowed at this flow (data sheet's " + b.head(f.CurveHead) + ")",
+		Value: b.head(a.Head.Low) + " to " + b.head(a.Head.High) + ": " + word[a.Head.Verdict]}}
+	if a.Efficiency.Verdict != calc.VerdictNone {
+		fs = append(fs, Fact{ID: "accept-eff", Label: "pump efficiency allowed (data sheet's " + percent(f.CurveEfficiency) + ")",
+			Value: "at least " + percent(a.Efficiency.Low) + ": " + word[a.Efficiency.Verdict]})
+	} else {
+		fs = append(fs, Fact{Label: "pump efficiency", Value: "not judged (needs the electrical input and the motor efficiency)"})
+	}
+	fs = append(fs, Fact{Label: "tolerances", Value: "ISO 9906 grade " + a.Grade.Name + ", quoted from memory; the flow tolerance is not used for a single point, so the verdict is the stricter"})
+	return Block{Kind: BlockFacts, ID: "accept-facts", Class: "facts", Facts: fs}
 }
 
 // fieldFacts are the field check's figures, nil without a field check.
