@@ -176,6 +176,15 @@ func (b *builder) pumpChartCard() Card {
 	if pr != nil && len(pr.System) > 0 {
 		caption += " At zero flow the line needs " + b.head(pr.System[0].H) + " (levels and pressures alone); the rest is friction, fittings and velocity head."
 	}
+	if pr != nil && pr.BEP != nil {
+		caption += " The shaded band is the preferred operating region, 70–120 % of the best-efficiency flow (ANSI/HI 9.6.3, from memory), around the marked best-efficiency point."
+	}
+	if b.r.Field != nil {
+		caption += " The point marked measured is the field check's flow and head."
+	}
+	if pr != nil && pr.SpeedFor != nil {
+		caption += " A second pump curve shows the speed that meets the flow asked for."
+	}
 	if pr != nil && (pr.Curve.HasNPSHr() || len(pr.NPSHa) > 0) {
 		caption += " Lower panel: NPSH the pump requires (solid) and NPSH available at its inlet (dashed); available must stay above required."
 	}
