@@ -84,6 +84,9 @@ func (e *eval) pump() {
 		return
 	}
 	pr.Base = base
+	if _, top, drooping := base.Unstable(); drooping {
+		e.warnCalc("pump", calc.Warnf("ph", "the data sheet's head rises with flow up to %v (a drooping curve): below that flow the pump can run unstably, hunting between two points where a line of high static head crosses the curve twice; pumps of such curves in parallel may not share the flow", calc.Fig(top, calc.Flow)))
+	}
 	for _, ref := range []struct {
 		name string
 		v    *float64
@@ -145,6 +148,9 @@ func (e *eval) pump() {
 		return
 	}
 	pr.Operating = &op
+	if _, top, drooping := pr.Curve.Unstable(); drooping && op.Q <= top {
+		e.warnCalc("pump", calc.Warnf("q", "the operating point (%v) lies where the head rises with flow (up to %v): expect unstable running", calc.Fig(op.Q, calc.Flow), calc.Fig(top, calc.Flow)))
+	}
 	e.regionCheck(pr.BEP, op.Q, "q", "pump", "the operating point")
 	e.speedFor(pr)
 }

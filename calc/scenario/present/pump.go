@@ -264,6 +264,9 @@ func (b *builder) pumpChart(id, caption string) Block {
 		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(op.Q), Y: hu.FromSI(op.H),
 			Label: "operating point\n" + b.param("q", op.Q) + ", " + b.head(op.H)})
 	}
+	if lo, hi, drooping := c.Unstable(); drooping {
+		ch.Bands = append(ch.Bands, Band{X0: qu.FromSI(lo), X1: qu.FromSI(hi), Label: "head rises with flow: unstable"})
+	}
 	if bep := pr.BEP; bep != nil {
 		lo, hi := bep.Region()
 		ch.Bands = append(ch.Bands, Band{X0: qu.FromSI(lo), X1: qu.FromSI(hi),
