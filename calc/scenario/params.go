@@ -140,8 +140,12 @@ var Table = []Param{
 	q("pd", "discharge gauge reading", "Discharge gauge", "(reading)", calc.Pressure, "kPa", "psi", "enter the gauge reading"),
 	q("zs", "suction gauge height", "Suction gauge height", "", calc.Length, "m", "ft", "enter the suction gauge's height"),
 	q("zd", "discharge gauge height", "Discharge gauge height", "(same datum)", calc.Length, "m", "ft", "enter the discharge gauge's height"),
-	q("ds", "pipe diameter at the suction gauge", "Pipe inside diameter at the suction gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the suction gauge"),
-	q("dd", "pipe diameter at the discharge gauge", "Pipe inside diameter at the discharge gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the discharge gauge"),
+	grp(q("ds", "pipe diameter at the suction gauge", "Pipe inside diameter at the suction gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the suction gauge"), "gsp"),
+	grp(Param{Name: "dsn", Label: "pipe size at the suction gauge", Box: "Nominal size at the suction gauge", Kind: KindChoice, choices: npsChoices}, "gsp"),
+	grp(Param{Name: "dss", Label: "pipe schedule at the suction gauge", Box: "Schedule or class", Kind: KindChoice, choices: schChoices}, "gsp"),
+	grp(q("dd", "pipe diameter at the discharge gauge", "Pipe inside diameter at the discharge gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the discharge gauge"), "gdp"),
+	grp(Param{Name: "ddn", Label: "pipe size at the discharge gauge", Box: "Nominal size at the discharge gauge", Kind: KindChoice, choices: npsChoices}, "gdp"),
+	grp(Param{Name: "dds", Label: "pipe schedule at the discharge gauge", Box: "Schedule or class", Kind: KindChoice, choices: schChoices}, "gdp"),
 	q("qm", "measured flow", "Measured flow", "", calc.Flow, "L/s", "gpm", "enter the measured flow"),
 	q("pin", "motor electrical input", "Motor electrical input", "(power meter; optional)", calc.Power, "kW", "kW", "enter the motor's electrical input"),
 	q("etam", "motor efficiency", "Motor efficiency", "(nameplate; optional)", calc.Dimensionless, "%", "%", "enter the motor's efficiency"),
@@ -385,6 +389,8 @@ var Groups = []Group{
 	{"pipe", "Pipe given by", []Side{{"nps", "nominal size", []string{"nps", "sch"}}, {"d", "inside diameter", []string{"d"}}}},
 	{"rough", "Wall roughness from", []Side{{"mat", "material", []string{"mat"}}, {"eps", "roughness", []string{"eps"}}}},
 	{"site", "Site pressure from", []Side{{"alt", "altitude", []string{"alt"}}, {"baro", "barometer", []string{"baro"}}}},
+	{"gsp", "Pipe at the suction gauge given by", []Side{{"d", "inside diameter", []string{"ds"}}, {"nps", "nominal size", []string{"dsn", "dss"}}}},
+	{"gdp", "Pipe at the discharge gauge given by", []Side{{"d", "inside diameter", []string{"dd"}}, {"nps", "nominal size", []string{"ddn", "dds"}}}},
 	{"npsh", "NPSH required", []Side{{"sheet", "from the data sheet", []string{"pnpsh"}}, {"typed", "typed in", []string{"npshr"}}}},
 }
 

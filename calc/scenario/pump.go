@@ -1,6 +1,7 @@
 package scenario
 
 import (
+	"errors"
 	"fmt"
 	"math"
 	"strings"
@@ -254,8 +255,25 @@ func (e *eval) field() {
 		ok = ok && good
 		return v
 	}
+	bore := func(d, nps, sch string) float64 {
+		if !e.s.Has(nps) && !e.s.Has(sch) {
+			return get(d)
+		}
+		ps, err := calc.LookupPipe(strings.TrimSpace(e.s.Get(nps)), strings.TrimSpace(e.s.Get(sch)))
+		if err != nil {
+			field := nps
+			var fe *calc.FieldError
+			if errors.As(err, &fe) && fe.Field == "sch" {
+				field = sch
+			}
+			e.failAt(field, err)
+			ok = false
+			return 0
+		}
+		return ps.ID
+	}
 	r := calc.FieldReadings{Ps: gauge("ps"), Pd: gauge("pd"), Zs: get("zs"), Zd: get("zd"),
-		Ds: get("ds"), Dd: get("dd"), Q: get("qm")}
+		Ds: bore("ds", "dsn", "dss"), Dd: bore("dd", "ddn", "dds"), Q: get("qm")}
 	if e.s.Has("pin") {
 		r.PowerIn = get("pin")
 	}

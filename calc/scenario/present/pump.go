@@ -422,7 +422,10 @@ func (b *builder) fieldCard() Card {
 	return Card{ID: "field", Title: "Field check from gauge readings", Blocks: []Block{
 		fields(b.quantity("ps", "", ""), b.quantity("pd", "", "")),
 		fields(b.quantity("zs", "", ""), b.quantity("zd", "", "")),
-		fields(b.quantity("ds", "", ""), b.quantity("dd", "", "")),
+		b.toggle("gsp"),
+		b.gaugePipe("gsp", "ds", "dsn", "dss"),
+		b.toggle("gdp"),
+		b.gaugePipe("gdp", "dd", "ddn", "dds"),
 		fields(b.quantity("qm", "", ""), b.quantity("pin", "", ""), b.quantity("etam", "", "")),
 		maybe(facts != nil, Block{Kind: BlockFacts, ID: "field-results", Class: "facts", Facts: facts}),
 		{Kind: BlockHeading, Text: "How sure the test is: each instrument's accuracy"},
@@ -435,6 +438,15 @@ func (b *builder) fieldCard() Card {
 		b.verdictFacts(),
 		b.warnings(nil, "field"),
 	}}
+}
+
+// gaugePipe is the pipe at a gauge: its inside diameter, or a nominal size
+// and schedule from the catalogues, as the group's switch says.
+func (b *builder) gaugePipe(group, d, nps, sch string) Block {
+	if b.d.SideOf(group) == "nps" {
+		return fields(b.picker(nps, "", "pick a size"), b.picker(sch, "", "pick a schedule or class"))
+	}
+	return fields(b.quantity(d, "", ""))
 }
 
 // readingName names a reading for the sentence "improve …".
