@@ -504,7 +504,7 @@ func (b *builder) verdictBlock() Block {
 	case calc.Outside:
 		return Block{Kind: BlockLevel, ID: "accept-level", Class: "lvl-danger", Text: "✕ Outside " + g + " at this flow"}
 	}
-	return Block{Kind: BlockLevel, ID: "accept-level", Class: "lvl-caution", Text: "? This test cannot tell: the readings' band is wider than " + g + " allows; improve " + readingName(a.Improve)}
+	return Block{Kind: BlockLevel, ID: "accept-level", Class: "lvl-caution", Text: "? This test cannot tell: the band of the readings reaches across a limit of " + g + "; improve " + readingName(a.Improve)}
 }
 
 // verdictFacts are what the verdict compares; nil block without one.
