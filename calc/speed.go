@@ -64,3 +64,58 @@ func SpeedForDuty(base PumpCurve, count int, parallel bool, q, h float64) (float
 	}
 	return r, nil
 }
+
+// FlowForHead returns the flow (m³/s) at which the system curve of balance
+// b needs head h (m): the duty a pump giving h would run at on this line.
+// The system curve rises with flow (friction and fittings only add), so
+// the flow is found by Brent's method from zero upwards, the search range
+// widened from qGuess (a flow of the right order, such as the data
+// sheet's last) by doubling, up to 2¹⁰ times it. Errors (field "hsp"): the
+// line needs more than h at zero flow (no flow at that head), or no flow
+// in range needs as much.
+func FlowForHead(b Balance, h, qGuess float64) (float64, error) {
+	if math.IsNaN(h) || math.IsInf(h, 0) {
+		return 0, fieldErrorf("hsp", "give the head to reach as a finite length")
+	}
+	if !(qGuess > 0) || math.IsInf(qGuess, 0) {
+		return 0, fieldErrorf("hsp", "no flow scale to search from: give the data sheet")
+	}
+	b, err := b.forSystem()
+	if err != nil {
+		return 0, err
+	}
+	var evalErr error
+	f := func(q float64) float64 {
+		s, _, err := b.systemHead(q)
+		if err != nil {
+			evalErr = err
+			return math.NaN()
+		}
+		return s - h
+	}
+	if f0 := f(0); evalErr != nil {
+		return 0, evalErr
+	} else if f0 > 0 {
+		return 0, fieldErrorf("hsp", "the line needs %v even at zero flow (levels and pressures alone): a head of %v moves no liquid", Fig(f0+h, Length), Fig(h, Length))
+	}
+	hi := qGuess
+	for i := 0; f(hi) < 0 || evalErr != nil; i++ {
+		if evalErr != nil {
+			// The line cannot be worked out at such a flow (beyond the
+			// friction formulas' range): no duty in range.
+			return 0, fieldErrorf("hsp", "the line needs less than %v at every flow it can be worked out for (up to %v): no duty at that head in range", Fig(h, Length), Fig(hi, Flow))
+		}
+		if i == 10 {
+			return 0, fieldErrorf("hsp", "the line needs less than %v at every flow up to %v: no duty at that head in range", Fig(h, Length), Fig(hi, Flow))
+		}
+		hi *= 2
+	}
+	q, err := brent(f, 0, hi, 1e-13*hi)
+	if evalErr != nil {
+		return 0, evalErr
+	}
+	if err != nil {
+		return 0, fieldErrorf("hsp", "the flow at that head could not be found: %v", err)
+	}
+	return q, nil
+}

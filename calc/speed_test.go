@@ -70,6 +70,39 @@ func TestSpeedForDuty(t *testing.T) {
 	}
 }
 
+func TestFlowForHead(t *testing.T) {
+	// Source: the system curve (SystemCurve, solved in full) read
+	// backwards: the flow found for the head the line needs at a flow is
+	// that flow. Below the static head there is no flow, said plainly.
+	b := Balance{Fluid: testLiquid, SitePressure: 101325, In: Point{P: 101325}, Out: Point{P: 101325, Z: 20}, Line: pmKLine(10, 0.1)}
+	for _, q := range []float64{0.001, 0.01, 0.03, 0.2} {
+		sys, err := SystemCurve(b, []float64{q})
+		if err != nil {
+			t.Fatal(err)
+		}
+		got, err := FlowForHead(b, sys[0].H, 0.04)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if math.Abs(got-q) > 1e-9*q {
+			t.Errorf("flow %.12g for the head at %g m³/s", got, q)
+		}
+	}
+	for _, tc := range []struct {
+		h, guess float64
+		msg      string
+	}{
+		{15, 0.04, "moves no liquid"},
+		{1e9, 0.04, "no duty at that head"},
+		{math.NaN(), 0.04, "finite"},
+		{30, 0, "no flow scale"},
+	} {
+		if _, err := FlowForHead(b, tc.h, tc.guess); err == nil || !strings.Contains(err.Error(), tc.msg) || !strings.HasPrefix(err.Error(), "hsp:") {
+			t.Errorf("h %g: error %v, want %q on hsp", tc.h, err, tc.msg)
+		}
+	}
+}
+
 func ExampleSpeedForDuty() {
 	c, _ := FitPump([]PumpPoint{{Q: 0, H: 48}, {Q: 0.01, H: 46.5}, {Q: 0.02, H: 42}, {Q: 0.03, H: 35}, {Q: 0.04, H: 25}})
 	r, err := SpeedForDuty(c, 1, false, 0.025, 30)

@@ -75,6 +75,8 @@ func TestBadLinks(t *testing.T) {
 		{"a speed in a unit of neither", demo("spd", "45kPa"), "", "spd", "", "spd=45kPa", true},
 		{"a rated speed of zero", demo("nrat", "0rpm"), "", "nrat", "above zero", "nrat=0rpm", true},
 		{"a flow no speed in range can reach", demo("qsp", "500L/s"), "", "qsp", "no speed in range", "qsp=500L/s", true},
+		{"a head to reach below the line's static head", demo("hsp", "20m"), "", "hsp", "moves no liquid", "hsp=20m", true},
+		{"a head no speed in range can give", demo("hsp", "900m"), "", "hsp", "no speed in range", "hsp=900m", true},
 		{"running hours beyond a year", demo("hours", "9000"), "", "hours", "8784", "hours=9000", true},
 		{"running hours as a word", demo("hours", "many"), "", "hours", "plain number", "hours=many", true},
 		{"a negative tariff", demo("tariff", "-0.2"), "", "tariff", "zero or positive", "tariff=-0.2", true},

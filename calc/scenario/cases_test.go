@@ -168,6 +168,8 @@ func observable(r Result, key string) (float64, string, error) {
 			return pr.SpeedFor.Ratio, "", nil
 		case part == "speedfor" && name == "h":
 			return pr.SpeedFor.H, "", nil
+		case part == "speedfor" && name == "q":
+			return pr.SpeedFor.Q, "", nil
 		case part == "bep" && name == "q":
 			return pr.BEP.Q, "", nil
 		case part == "bep" && name == "eff":

@@ -100,6 +100,8 @@
 //	qsp     a flow to reach by a speed change, e.g. 55L/s: the speed at which
 //	        the pumps meet the system curve there (affinity laws, Brent's
 //	        method), or "no speed in range" (10 % to 200 %)
+//	hsp     or a head to reach, e.g. 50m: the flow where the line needs it,
+//	        then the speed for that duty (either qsp or hsp)
 //	pumps   1 | 2p | 2s | 3p | 3s            identical pumps, in parallel (p) or series (s)
 //	zp      pump centreline elevation (for NPSH), e.g. 214.5m
 //	pafter  the pump sits after segment N (default 1 with segments, else at point 1)

@@ -127,7 +127,8 @@ var Table = []Param{
 		Dim: calc.Dimensionless, SI: "%", US: "%", ExtraUnits: []string{"rpm", "Hz"}, Missing: "enter the speed as a share of the data sheet's, in rpm, or as the drive's frequency in Hz"},
 	q("nrat", "rated speed", "Rated speed", "(the data sheet's; optional)", calc.Frequency, "rpm", "rpm", "enter the data sheet's speed in rpm"),
 	q("fmains", "mains frequency", "Mains frequency", "(the rated speed's supply; optional)", calc.Frequency, "Hz", "Hz", "enter the mains frequency the rated speed is given at (50 or 60 Hz)"),
-	q("qsp", "flow to reach by speed", "Flow to reach by a speed change", "(on this line; optional)", calc.Flow, "L/s", "gpm", "enter the flow the speed should give"),
+	grp(q("qsp", "flow to reach by speed", "Flow to reach by a speed change", "(on this line; optional)", calc.Flow, "L/s", "gpm", "enter the flow the speed should give"), "spfor"),
+	grp(q("hsp", "head to reach by speed", "Head to reach by a speed change", "(on this line; optional)", calc.Length, "m", "ft", "enter the head the speed should give"), "spfor"),
 	{Name: "pumps", Label: "pumps working together", Box: "Pumps working together", Kind: KindChoice, choices: func() []Choice {
 		return []Choice{{"1", "one pump"}, {"2p", "two in parallel"}, {"2s", "two in series"},
 			{"3p", "three in parallel"}, {"3s", "three in series"}}
@@ -391,6 +392,7 @@ var Groups = []Group{
 	{"site", "Site pressure from", []Side{{"alt", "altitude", []string{"alt"}}, {"baro", "barometer", []string{"baro"}}}},
 	{"gsp", "Pipe at the suction gauge given by", []Side{{"d", "inside diameter", []string{"ds"}}, {"nps", "nominal size", []string{"dsn", "dss"}}}},
 	{"gdp", "Pipe at the discharge gauge given by", []Side{{"d", "inside diameter", []string{"dd"}}, {"nps", "nominal size", []string{"ddn", "dds"}}}},
+	{"spfor", "Speed change to reach", []Side{{"q", "a flow", []string{"qsp"}}, {"h", "a head", []string{"hsp"}}}},
 	{"npsh", "NPSH required", []Side{{"sheet", "from the data sheet", []string{"pnpsh"}}, {"typed", "typed in", []string{"npshr"}}}},
 }
 

@@ -18,6 +18,9 @@ type SpeedSolution struct {
 	Q, H  float64        // the flow asked for, m³/s, and the line's head there, m
 	Ratio float64        // the speed, a share of the data sheet's
 	Curve calc.PumpCurve // the pumps' curve at that speed, in their arrangement
+	// ByHead is true when a head (hsp) was asked for, Q being the flow
+	// at which the line needs it.
+	ByHead bool
 }
 
 // EnergyResult is the energy per volume pumped and its basis.
@@ -154,25 +157,40 @@ func (e *eval) regionCheck(b *calc.BEP, q float64, param, topic, what string) {
 		pct(calc.PreferredRegionLow*100), pct(calc.PreferredRegionHigh*100)))
 }
 
-// speedFor solves for the speed at which the pumps deliver the flow qsp on
-// the line.
+// speedFor solves for the speed at which the pumps deliver the flow qsp,
+// or the head hsp, on the line.
 func (e *eval) speedFor(pr *PumpResult) {
-	if !e.s.Has("qsp") || e.bal == nil || e.bal.Unknown != calc.SolvePumpHead {
+	byHead := e.s.Has("hsp")
+	if (!e.s.Has("qsp") && !byHead) || e.bal == nil || e.bal.Unknown != calc.SolvePumpHead {
 		return
 	}
-	q, ok := e.quantity("qsp")
-	if !ok {
-		return
+	var q float64
+	if byHead {
+		h, ok := e.quantity("hsp")
+		if !ok {
+			return
+		}
+		var err error
+		if q, err = calc.FlowForHead(*e.bal, h, pr.Curve.MaxFlow()); err != nil {
+			e.failErr("hsp", err)
+			return
+		}
+	} else {
+		var ok bool
+		if q, ok = e.quantity("qsp"); !ok {
+			return
+		}
 	}
+	param := map[bool]string{false: "qsp", true: "hsp"}[byHead]
 	sys, err := calc.SystemCurve(*e.bal, []float64{q})
 	if err != nil || len(sys) != 1 {
-		e.failErr("qsp", err)
+		e.failErr(param, err)
 		return
 	}
 	h := sys[0].H
 	r, err := calc.SpeedForDuty(pr.Base, pr.Count, pr.Parallel, q, h)
 	if err != nil {
-		e.failErr("qsp", err)
+		e.failAt(param, err)
 		return
 	}
 	c, err := pr.Base.AtSpeed(r)
@@ -180,12 +198,12 @@ func (e *eval) speedFor(pr *PumpResult) {
 		c, err = c.Combine(pr.Count, pr.Parallel)
 	}
 	if err != nil {
-		e.failErr("qsp", err)
+		e.failAt(param, err)
 		return
 	}
-	pr.SpeedFor = &SpeedSolution{Q: q, H: h, Ratio: r, Curve: c}
+	pr.SpeedFor = &SpeedSolution{Q: q, H: h, Ratio: r, Curve: c, ByHead: byHead}
 	if r > 1 {
-		e.warn("qsp", "pump", fmt.Sprintf("this flow needs %s %% of the data sheet's speed: overspeed, which the maker must approve", pct(r*100)))
+		e.warn(param, "pump", fmt.Sprintf("this flow needs %s %% of the data sheet's speed: overspeed, which the maker must approve", pct(r*100)))
 	}
 }
 

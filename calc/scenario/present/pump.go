@@ -284,7 +284,11 @@ func (b *builder) pumpChart(id, caption string) Block {
 	}
 	if sf := pr.SpeedFor; sf != nil {
 		xs, ys = sampleCurve(sf.Curve.MinFlow(), sf.Curve.MaxFlow(), sf.Curve.Head, qu, hu)
-		add(RolePumpBase, "at "+percent(sf.Ratio)+" speed for "+b.param("qsp", sf.Q), xs, ys)
+		goal := b.param("qsp", sf.Q)
+		if sf.ByHead {
+			goal = b.head(sf.H)
+		}
+		add(RolePumpBase, "at "+percent(sf.Ratio)+" speed for "+goal, xs, ys)
 	}
 	if c.HasEfficiency() {
 		pct := displayUnit("peff", b.us)
@@ -372,7 +376,9 @@ func (b *builder) pumpSetupCard() Card {
 	return Card{ID: "pump-setup", Title: "Pump as installed", Blocks: []Block{
 		fields(b.quantity("spd", "", ""), b.picker("pumps", "", "")),
 		fields(b.quantity("nrat", "", ""), b.quantity("fmains", "", "")),
-		fields(b.quantity("qsp", "", "")),
+		b.toggle("spfor"),
+		maybe(b.d.SideOf("spfor") != "h", fields(b.quantity("qsp", "", ""))),
+		maybe(b.d.SideOf("spfor") == "h", fields(b.quantity("hsp", "", ""))),
 		b.speedFacts(),
 		fields(b.quantity("zp", "", "")),
 		b.toggle("npsh"),
@@ -405,7 +411,11 @@ func (b *builder) speedFacts() Block {
 		fs = append(fs, Fact{ID: "speed-now", Label: "speed used", Value: percent(pr.Speed) + " of the data sheet's" + inUnits(pr.Speed)})
 	}
 	if sf := pr.SpeedFor; sf != nil {
-		fs = append(fs, Fact{ID: "speed-for", Label: "speed for " + b.param("qsp", sf.Q) + " on this line (affinity laws)",
+		what := b.param("qsp", sf.Q)
+		if sf.ByHead {
+			what = "a head of " + b.head(sf.H) + " (at " + b.param("qsp", sf.Q) + ")"
+		}
+		fs = append(fs, Fact{ID: "speed-for", Label: "speed for " + what + " on this line (affinity laws)",
 			Value: percent(sf.Ratio) + inUnits(sf.Ratio), Key: true},
 			Fact{Label: "head the line needs at that flow", Value: b.head(sf.H)})
 	}

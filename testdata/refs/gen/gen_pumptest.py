@@ -64,6 +64,20 @@ def speed_cases(w):
             "speedfor.h = %s m ± 1e-9 rel" % sig(need),
         ])
 
+    # A head to reach: the flow where the system curve needs it (brentq on
+    # the mpmath system curve), then the speed for that duty.
+    for name, hsp in [("speed for a head of 30 m, one pump", 30.0),
+                      ("speed for a head of 45 m, one pump", 45.0)]:
+        q = brentq(lambda qq: system(qq) - hsp, 1e-9, 0.2, xtol=1e-16, rtol=1e-15)
+
+        def g(r):
+            return r * r * float(h0(q / r)) - hsp
+        r = brentq(g, max(0.1, q / qs[-1]), 2.0, xtol=1e-15, rtol=1e-15)
+        w.case(name, base + "&hsp=%gm" % hsp, [
+            "speedfor.ratio = %s ± 1e-9 rel" % sig(r),
+            "speedfor.q = %s m3/s ± 1e-9 rel" % sig(q),
+        ])
+
 
 def band_cases(w):
     rho = 1000.0
