@@ -18,7 +18,7 @@ ADDR   ?= :8000
 
 # Debian packages the checks need: the browser for the page test, the
 # reference libraries for make refs and the reference checks.
-APT_PKGS := chromium python3-iapws python3-mpmath python3-scipy python3-fluids python3-gsw units
+APT_PKGS := chromium python3-iapws python3-mpmath python3-scipy python3-fluids python3-gsw python3-uncertainties units
 
 .PHONY: all run site wasm dist test deps fmt vet unit fuzz browser bench refs refs-check clean
 

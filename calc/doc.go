@@ -73,6 +73,22 @@
 // BestTurbineFlow give a turbine's net head and output, and the flow that
 // maximises it.
 //
+// # Pump tests
+//
+// A data sheet may droop (its head rising once, up to its highest point);
+// Unstable gives that rising part and OperatingPoint looks for the stable
+// crossing. BestEfficiency finds the best-efficiency point by three-point
+// peak interpolation and its preferred region (70–120 % of its flow, after
+// ANSI/HI 9.6.3, from memory). SpeedForDuty finds, by the affinity laws and
+// Brent's method, the speed that meets a duty on the system curve.
+// FieldCheck.Uncertainty propagates the instruments' limits (EN 837-1 gauge
+// classes, meters in % of reading, heights in ±m) to first order (the
+// GUM's law of propagation), naming the reading that dominates each band;
+// Accept judges the result under an ISO 9906 grade (Grades, factors from
+// memory): within, outside, or cannot tell. EnergyUse gives the energy per
+// volume pumped beside its ideal ρ·g·H. FractionSlip and the efficiency
+// limits catch values typed a hundred times too small.
+//
 // # Liquids
 //
 // Water from 0 °C to 100 °C, compressed liquid up to 10 MPa: density from

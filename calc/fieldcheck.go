@@ -35,6 +35,7 @@ type FieldReadings struct {
 
 // FieldCheck is a running pump's performance worked out from readings.
 type FieldCheck struct {
+	Q             float64 // the measured flow, m³/s
 	Head          float64 // pump total head, m
 	PressureHead  float64 // (pd − ps)/(ρg), m
 	ElevationHead float64 // zd − zs, m
@@ -59,7 +60,13 @@ type FieldCheck struct {
 	// HydraulicPower/ShaftPower; both 0 unless PowerIn and MotorEff are
 	// given.
 	ShaftPower, PumpEfficiency float64
-	Warnings                   []Warning
+	// HasEffDeviation is true when both PumpEfficiency and
+	// CurveEfficiency are known; EffDeviation is then their difference,
+	// PumpEfficiency − CurveEfficiency (a share: −0.05 is 5 points below
+	// the data sheet).
+	HasEffDeviation bool
+	EffDeviation    float64
+	Warnings        []Warning
 }
 
 // CheckPump works out the head and efficiency a running pump delivers from
@@ -109,7 +116,7 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	}
 	g := StandardGravity
 	rhog := fl.Density * g
-	var fc FieldCheck
+	fc := FieldCheck{Q: r.Q}
 	fc.Vs = r.Q / (math.Pi * r.Ds * r.Ds / 4)
 	fc.Vd = r.Q / (math.Pi * r.Dd * r.Dd / 4)
 	fc.PressureHead = (r.Pd - r.Ps) / rhog
@@ -149,8 +156,14 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	if r.PowerIn > 0 && r.MotorEff > 0 {
 		fc.ShaftPower = r.PowerIn * r.MotorEff
 		fc.PumpEfficiency = fc.HydraulicPower / fc.ShaftPower
-		if fc.PumpEfficiency > 1 {
+		switch {
+		case fc.PumpEfficiency > 1:
 			fc.Warnings = append(fc.Warnings, warnf("etam", "the pump's own efficiency comes out at %.0f %%, above 100 %%: the readings or the motor efficiency are wrong", fc.PumpEfficiency*100))
+		case fc.PumpEfficiency > PumpEfficiencyHigh:
+			fc.Warnings = append(fc.Warnings, warnf("etam", "the pump's own efficiency comes out at %.0f %%, above the %.0f %% that even the largest pumps hardly reach: check the power reading, the motor efficiency, the flow and the gauges", fc.PumpEfficiency*100, PumpEfficiencyHigh*100))
+		}
+		if fc.CurveEfficiency > 0 {
+			fc.HasEffDeviation, fc.EffDeviation = true, fc.PumpEfficiency-fc.CurveEfficiency
 		}
 	}
 	return fc, nil

@@ -35,8 +35,11 @@ type PumpCurve struct {
 // FitPump fits a pump curve to 3 to 8 data-sheet points.
 //
 // The flows must start at zero or above and rise strictly from point to
-// point, the heads must fall strictly (a curve that rises or stays level
-// anywhere is refused; field "pq" or "ph", the message names the point).
+// point. The heads must fall strictly from the highest point to the last;
+// before the highest point they may rise strictly (a drooping curve, whose
+// head rises at low flow: see Unstable). A curve that stays level, or
+// rises again after falling, or ends on its highest point, is refused
+// (field "pq" or "ph", the message names the point).
 // Efficiencies are optional but all-or-none (field "peff"): when given,
 // every point with a flow above zero needs one above 0 and at most 1, and
 // a point at zero flow must have 0, its value by definition. NPSHr values
@@ -58,7 +61,7 @@ func FitPump(points []PumpPoint) (PumpCurve, error) {
 		return PumpCurve{}, fieldErrorf("pq", "give %d to %d data-sheet points, got %d", PumpMinPoints, PumpMaxPoints, n)
 	}
 	finite := func(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
-	effGiven, npshGiven := false, false
+	effGiven, npshGiven, falling := false, false, false
 	for i, p := range points {
 		k := i + 1
 		switch {
@@ -68,11 +71,18 @@ func FitPump(points []PumpPoint) (PumpCurve, error) {
 			return PumpCurve{}, fieldErrorf("pq", "point %d: the flow (%v) must be above the previous point's (%v); list the points in order of rising flow, each flow once", k, Fig(p.Q, Flow), Fig(points[i-1].Q, Flow))
 		case !finite(p.H) || p.H < 0:
 			return PumpCurve{}, fieldErrorf("ph", "point %d: the head must be zero or positive, got %v", k, Fig(p.H, Length))
-		case i > 0 && !(p.H < points[i-1].H):
-			return PumpCurve{}, fieldErrorf("ph", "point %d: the head (%v) must be below the previous point's (%v): the curve must fall with rising flow; a curve that rises or stays level is not accepted", k, Fig(p.H, Length), Fig(points[i-1].H, Length))
+		case i > 0 && p.H == points[i-1].H:
+			return PumpCurve{}, fieldErrorf("ph", "point %d: the head (%v) equals the previous point's: a data-sheet curve that stays level is not accepted; read the heads off the curve again", k, Fig(p.H, Length))
+		case i > 0 && p.H > points[i-1].H && falling:
+			return PumpCurve{}, fieldErrorf("ph", "point %d: the head (%v) must be below the previous point's (%v): past its highest point the curve must fall with rising flow", k, Fig(p.H, Length), Fig(points[i-1].H, Length))
+		case i > 0 && p.H < points[i-1].H:
+			falling = true
 		}
 		effGiven = effGiven || p.Eff != 0
 		npshGiven = npshGiven || p.NPSHr != 0
+	}
+	if !falling || points[n-1].H > points[n-2].H {
+		return PumpCurve{}, fieldErrorf("ph", "point %d: the curve ends on its highest head; the data sheet must reach the falling part of the curve", n)
 	}
 	c := PumpCurve{points: append([]PumpPoint(nil), points...)}
 	x := make([]float64, n)
@@ -178,4 +188,30 @@ func (c PumpCurve) NPSHr(q float64) (float64, bool) {
 		return 0, false
 	}
 	return c.npsh.eval(q), true
+}
+
+// Unstable returns the flows over which the head rises with flow, from
+// the first data-sheet point to the highest head (a drooping curve), and
+// true; false for a curve that falls everywhere. A line whose static head
+// lies between the shut-off head and the highest head can meet such a
+// curve twice, and a pump run there may hunt between the two points
+// (common practice); pumps in parallel with such curves may not share the
+// flow.
+func (c PumpCurve) Unstable() (lo, hi float64, ok bool) {
+	k := c.peak()
+	if k == 0 {
+		return 0, 0, false
+	}
+	return c.points[0].Q, c.points[k].Q, true
+}
+
+// peak returns the index of the highest head (0 for a falling curve).
+func (c PumpCurve) peak() int {
+	k := 0
+	for i, p := range c.points {
+		if p.H > c.points[k].H {
+			k = i
+		}
+	}
+	return k
 }

@@ -24,6 +24,10 @@ type OperatingResult struct {
 // [MinFlow, MaxFlow]. b's Unknown, Q and PumpHead are ignored; its turbine
 // head is kept.
 //
+// For a drooping curve (Unstable) whose shut-off head is below the line's
+// need, the search starts at the highest head, so the crossing found is
+// the stable one on the falling part.
+//
 // When the curves do not meet within the data sheet the error says why:
 // the pump's shut-off head is below what the line needs at zero flow (field
 // "ph"), or at the last data-sheet point the pump still gives more than
@@ -42,6 +46,19 @@ func OperatingPoint(c PumpCurve, b Balance) (OperatingResult, error) {
 	sa, _, err := b.systemHead(qa)
 	if err != nil {
 		return OperatingResult{}, err
+	}
+	if _, top, drooping := c.Unstable(); drooping && ha < sa {
+		// A drooping curve may still meet the line past its highest
+		// head: search from there (the stable crossing).
+		ht, _ := c.Head(top)
+		st, _, err := b.systemHead(top)
+		if err != nil {
+			return OperatingResult{}, err
+		}
+		if ht < st {
+			return OperatingResult{}, fieldErrorf("ph", "the curves do not meet: the pump's highest head %v (at %v) is below the %v the line needs there", Fig(ht, Length), Fig(top, Flow), Fig(st, Length))
+		}
+		qa, ha, sa = top, ht, st
 	}
 	if ha < sa {
 		if qa == 0 {

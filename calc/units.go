@@ -26,6 +26,14 @@ const (
 	Area                                // m²
 	Mass                                // kg
 	Duration                            // s
+	// SpecificEnergy is energy per volume pumped, J/m³ (reported in
+	// kWh/m³ by water utilities).
+	SpecificEnergy
+	// SpecificEnergyHead is specific energy per unit of head, J/m⁴
+	// (reported in kWh/(m³·100 m)).
+	SpecificEnergyHead
+	// Frequency is a rotational speed or a supply frequency, Hz (1/s).
+	Frequency
 )
 
 // dimInfo describes one dimension for messages.
@@ -49,6 +57,9 @@ var dimInfos = [...]dimInfo{
 	Area:               {"area", "an", "0.03 m²"},
 	Mass:               {"mass", "a", "12 kg"},
 	Duration:           {"duration", "a", "30 s"},
+	SpecificEnergy:     {"specific energy", "a", "0.45 kWh/m³"},
+	SpecificEnergyHead: {"specific energy per head", "a", "0.4 kWh/(m³·100m)"},
+	Frequency:          {"speed or frequency", "a", "1450 rpm"},
 }
 
 func (d Dimension) valid() bool { return d >= 0 && int(d) < len(dimInfos) }

@@ -15,6 +15,7 @@ var gnuSI = map[Dimension]string{
 	Dimensionless: "1", Length: "m", Pressure: "Pa", Velocity: "m/s", Flow: "m^3/s",
 	Temperature: "K", Density: "kg/m^3", DynamicViscosity: "Pa s", KinematicViscosity: "m^2/s",
 	Power: "W", Area: "m^2", Mass: "kg", Duration: "s",
+	SpecificEnergy: "J/m^3", SpecificEnergyHead: "J/m^4", Frequency: "Hz",
 }
 
 // TestUnitGNU checks every factor and offset against GNU units (Debian

@@ -15,6 +15,7 @@ const (
 	cvMinute   = float64(unit.Minute)           // 60 s
 	cvHour     = float64(unit.Hour)             // 3600 s
 	cvDay      = float64(unit.Day)              // 86 400 s
+	cvKWh      = 3.6e6                          // J per kWh, exact
 
 	// Conventional densities of the manometer liquids (ISO 31-3, as used
 	// by NIST SP 811 for the "conventional" water and mercury units).
@@ -121,4 +122,13 @@ var unitTable = []unitEntry{
 	{Unit: Unit{"min", Duration, cvMinute, 0, "minute"}},
 	{Unit: Unit{"h", Duration, cvHour, 0, "hour"}, aliases: []string{"hr"}},
 	{Unit: Unit{"d", Duration, cvDay, 0, "day"}, aliases: []string{"day"}},
+
+	{Unit: Unit{"kWh/m³", SpecificEnergy, cvKWh, 0, "kilowatt-hour per cubic metre"}, defSI: true},
+	{Unit: Unit{"kWh/kgal", SpecificEnergy, cvKWh / (1000 * cvUSGallon), 0, "kilowatt-hour per thousand US gallons"}, defUS: true},
+
+	{Unit: Unit{"kWh/(m³·100m)", SpecificEnergyHead, cvKWh / 100, 0, "kilowatt-hour per cubic metre and 100 m of head"}, defSI: true},
+	{Unit: Unit{"kWh/(kgal·100ft)", SpecificEnergyHead, cvKWh / (1000 * cvUSGallon * 100 * cvFoot), 0, "kilowatt-hour per thousand US gallons and 100 ft of head"}, defUS: true},
+
+	{Unit: Unit{"rpm", Frequency, 1 / cvMinute, 0, "revolutions per minute"}, aliases: []string{"r/min", "rev/min", "min-1"}, defSI: true, defUS: true},
+	{Unit: Unit{"Hz", Frequency, 1, 0, "hertz"}, aliases: []string{"hz"}},
 }

@@ -64,6 +64,22 @@ func TestBadLinks(t *testing.T) {
 		{"zero motor input: no efficiency, no division", demo("pin", "0kW"), "", "", "", "pin=0kW", true},
 		{"zero pump speed in the affinity laws", demo("spd", "0%"), "", "spd", "between", "spd=0%", true},
 		{"zero diameter at a point", with("d1=0mm"), "", "d1", "", "d1=0mm", false},
+		// Guards against 100× slips and impossible speeds (issue 11).
+		{"a motor efficiency typed as a fraction", demo("etam", "0.9"), "", "etam", "did you mean 90 %?", "etam=0.9", true},
+		{"a motor efficiency typed as a fraction with %", demo("etam", "0.92%"), "", "etam", "did you mean 92 %?", "etam=0.92%", true},
+		{"a turbine efficiency typed as a fraction", with("solve=ht", "etat=0.78"), "", "etat", "did you mean 78 %?", "etat=0.78", true},
+		{"data-sheet efficiencies typed as fractions", demo("peff", "0,0.52,0.71,0.76,0.72"), "", "peff", "did you mean 52 %?", "peff=0,0.52,0.71,0.76,0.72", true},
+		{"one data-sheet efficiency typed as a fraction", demo("peff", "0,52,0.71,76,72%"), "", "peff", "point 3", "peff=0,52,0.71,76,72%", true},
+		{"a speed in rpm without the rated speed", demo("spd", "1305rpm"), "", "spd", "rated speed", "spd=1305rpm", true},
+		{"a speed in Hz without the mains frequency", demo("spd", "45Hz"), "", "spd", "mains frequency", "spd=45Hz", true},
+		{"a speed in a unit of neither", demo("spd", "45kPa"), "", "spd", "", "spd=45kPa", true},
+		{"a rated speed of zero", demo("nrat", "0rpm"), "", "nrat", "above zero", "nrat=0rpm", true},
+		{"a flow no speed in range can reach", demo("qsp", "500L/s"), "", "qsp", "no speed in range", "qsp=500L/s", true},
+		{"a head to reach below the line's static head", demo("hsp", "20m"), "", "hsp", "moves no liquid", "hsp=20m", true},
+		{"a head no speed in range can give", demo("hsp", "900m"), "", "hsp", "no speed in range", "hsp=900m", true},
+		{"running hours beyond a year", demo("hours", "9000"), "", "hours", "8784", "hours=9000", true},
+		{"running hours as a word", demo("hours", "many"), "", "hours", "plain number", "hours=many", true},
+		{"a negative tariff", demo("tariff", "-0.2"), "", "tariff", "zero or positive", "tariff=-0.2", true},
 		{"a velocity so large the head overflows", with("v1=1e200m/s"), "", "", "", "v1=1e200m/s", false},
 		{"a pressure so large the head overflows", with("p1=1e300kPa", "p2=-1e300kPa", "solve=ht"), "", "", "", "p1=1e300kPa", false},
 	}
@@ -145,5 +161,46 @@ func deepFinite(t *testing.T, path string, v reflect.Value) {
 		for _, k := range v.MapKeys() {
 			deepFinite(t, fmt.Sprintf("%s[%v]", path, k), v.MapIndex(k))
 		}
+	}
+}
+
+// TestSlipWarnings: values that can be right but rarely are get a warning
+// naming their field, never a silent result (issue 11). Sources: common
+// practice, from memory — no pump reaches 95 % nor motor 98 %; a speed
+// above the data sheet's overspeeds the pump.
+func TestSlipWarnings(t *testing.T) {
+	demo := func(kv ...string) Scenario {
+		s := Demo()
+		for i := 0; i < len(kv); i += 2 {
+			_ = s.Set(kv[i], kv[i+1])
+		}
+		return s
+	}
+	for _, tc := range []struct {
+		name, param, msg string
+		s                Scenario
+	}{
+		{"overspeed", "spd", "overspeeds the pump", demo("spd", "110%")},
+		{"overspeed in rpm", "spd", "overspeeds the pump", demo("spd", "1600rpm", "nrat", "1450rpm")},
+		{"a speed for a flow above full speed", "qsp", "overspeed", demo("qsp", "70L/s")},
+		{"a motor efficiency of 99 %", "etam", "hardly reach", demo("etam", "99%")},
+		{"a pump efficiency above 95 %", "etam", "hardly reach", demo("pin", "21kW", "etam", "93%")},
+		{"a data-sheet efficiency of 97 %", "peff", "hardly reach", demo("peff", "0,52,71,97,72%")},
+		{"a measured flow below the preferred region", "qm", "below the preferred operating region", demo("qm", "30L/s")},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			r := Evaluate(tc.s)
+			if len(r.Errors) > 0 {
+				t.Fatalf("errors %v", r.Errors)
+			}
+			found := false
+			for _, w := range r.Warnings {
+				found = found || (w.Param == tc.param && strings.Contains(w.String(), tc.msg))
+			}
+			if !found {
+				t.Errorf("no warning on %s saying %q: %v", tc.param, tc.msg, r.Warnings)
+			}
+			deepFinite(t, "Result", reflect.ValueOf(r))
+		})
 	}
 }

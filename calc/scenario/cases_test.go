@@ -154,6 +154,63 @@ func observable(r Result, key string) (float64, string, error) {
 		case "npshr":
 			return o.NPSHr, "", nil
 		}
+	case "speed", "speedfor", "bep":
+		if r.Pump == nil {
+			return miss()
+		}
+		pr := r.Pump
+		switch {
+		case part == "speed" && name == "ratio":
+			return pr.Speed, "", nil
+		case part == "speedfor" && pr.SpeedFor == nil, part == "bep" && pr.BEP == nil:
+			return miss()
+		case part == "speedfor" && name == "ratio":
+			return pr.SpeedFor.Ratio, "", nil
+		case part == "speedfor" && name == "h":
+			return pr.SpeedFor.H, "", nil
+		case part == "speedfor" && name == "q":
+			return pr.SpeedFor.Q, "", nil
+		case part == "bep" && name == "q":
+			return pr.BEP.Q, "", nil
+		case part == "bep" && name == "eff":
+			return pr.BEP.Eff, "", nil
+		case part == "bep" && name == "h":
+			return pr.BEP.H, "", nil
+		}
+	case "accept":
+		a := r.Acceptance
+		if a == nil {
+			return miss()
+		}
+		switch name {
+		case "verdict":
+			return 0, a.Verdict.String(), nil
+		case "head":
+			return 0, a.Head.Verdict.String(), nil
+		case "eff":
+			return 0, a.Efficiency.Verdict.String(), nil
+		case "improve":
+			return 0, a.Improve, nil
+		case "hlow":
+			return a.Head.Low, "", nil
+		case "hhigh":
+			return a.Head.High, "", nil
+		}
+	case "energy":
+		en := r.Energy
+		if en == nil {
+			return miss()
+		}
+		switch name {
+		case "vol":
+			return en.PerVolume, "", nil
+		case "head":
+			return en.PerVolumeHead, "", nil
+		case "ideal":
+			return en.Ideal, "", nil
+		case "cost":
+			return en.YearCost, "", nil
+		}
 	case "npsh":
 		n := r.NPSH
 		if n == nil {
@@ -189,6 +246,27 @@ func observable(r Result, key string) (float64, string, error) {
 			return f.PumpEfficiency, "", nil
 		case "dev":
 			return f.Deviation, "", nil
+		case "uhead", "upower", "uwire", "upump", "dominant":
+			b := r.FieldBands
+			if b == nil {
+				return miss()
+			}
+			switch name {
+			case "uhead":
+				return b.Head.U, "", nil
+			case "upower":
+				return b.Power.U, "", nil
+			case "uwire":
+				return b.Wire.U, "", nil
+			case "upump":
+				return b.Pump.U, "", nil
+			}
+			return 0, b.Head.Dominant() + " " + b.Power.Dominant() + " " + b.Wire.Dominant(), nil
+		case "effdev":
+			if !f.HasEffDeviation {
+				return miss()
+			}
+			return f.EffDeviation, "", nil
 		}
 	case "turbine", "best":
 		t := r.Turbine

@@ -52,6 +52,8 @@ func (e *eval) checkQuantity(name, text string, p Param) {
 				return
 			}
 		}
+	} else if _, u := Split(text); name == "spd" && isFrequency(u) {
+		_, err = calc.Parse(name, text, calc.Frequency, "")
 	} else {
 		_, err = calc.Parse(name, text, p.Dim, DefaultUnit(name, e.us))
 	}

@@ -92,7 +92,16 @@
 //	ph      data-sheet heads, e.g. 62,59,52,44,33m
 //	peff    data-sheet efficiencies (optional), e.g. 0,55,72,76,70%
 //	pnpsh   data-sheet NPSH required (optional), e.g. 2,2.2,2.8,3.6,4.9m
-//	spd     speed as a share of the data sheet's, e.g. 95% (affinity laws)
+//	spd     speed as a share of the data sheet's, e.g. 95% (affinity laws);
+//	        or in rpm (over nrat), e.g. 1380rpm; or a drive's frequency in
+//	        Hz (over fmains), e.g. 47.5Hz. Above 100 % is flagged as overspeed
+//	nrat    the data sheet's (rated) speed, e.g. 1450rpm (optional)
+//	fmains  the mains frequency the rated speed is given at, e.g. 50Hz (optional)
+//	qsp     a flow to reach by a speed change, e.g. 55L/s: the speed at which
+//	        the pumps meet the system curve there (affinity laws, Brent's
+//	        method), or "no speed in range" (10 % to 200 %)
+//	hsp     or a head to reach, e.g. 50m: the flow where the line needs it,
+//	        then the speed for that duty (either qsp or hsp)
 //	pumps   1 | 2p | 2s | 3p | 3s            identical pumps, in parallel (p) or series (s)
 //	zp      pump centreline elevation (for NPSH), e.g. 214.5m
 //	pafter  the pump sits after segment N (default 1 with segments, else at point 1)
@@ -110,6 +119,28 @@
 //	pin     measured electrical input to the motor, e.g. 31kW
 //	etam    the motor's efficiency (nameplate), e.g. 93%: with pin, the
 //	        shaft power and the pump's own efficiency
+//
+// Efficiencies (etam, etat, peff) are percentages: 1.5 % or less is
+// refused as a fraction typed into a percentage box ("did you mean 78 %?").
+// The electrical input is in kW on US sheets too (power meters read kW).
+//
+// How sure the test is (optional; each a limit, ±), and the verdict:
+//
+//	gcs, gss  suction gauge accuracy class (EN 837-1, % of span), e.g. 1.6%,
+//	          and its span (full scale less the scale's start), e.g. 250kPa
+//	gcd, gsd  the discharge gauge's, e.g. 1%, 1000kPa
+//	uqm       flow meter accuracy, % of reading, e.g. 2%
+//	upin      power meter accuracy, % of reading, e.g. 1.5%
+//	uz        how well each gauge's height is known, e.g. 10mm
+//	grade     ISO 9906 acceptance grade: 1B | 1E | 1U | 2B | 2U | 3B
+//	          (tolerance factors from memory); the verdict is within,
+//	          outside, or "this test cannot tell" with the reading to improve
+//
+// Energy per volume pumped (from the measured input, else the operating
+// point), with an optional yearly cost:
+//
+//	hours   running hours per year, e.g. 3000 (a plain number)
+//	tariff  energy tariff per kWh in any currency, e.g. 0.18
 //
 // The turbine side (with solve=ht):
 //

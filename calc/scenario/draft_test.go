@@ -162,3 +162,31 @@ func TestEveryErrorAtOnce(t *testing.T) {
 		}
 	}
 }
+
+func TestDraftGaugePipeBySize(t *testing.T) {
+	// The pipe at a gauge given by size and schedule instead of its inside
+	// diameter: switching sides keeps the diameter aside, and the size's
+	// inside diameter is the catalogue's (ASME B36.10M, NPS 8 schedule 40:
+	// OD 219.1 mm, wall 8.18 mm), giving the same head as the diameter typed.
+	d := NewDraft(Demo())
+	before := Evaluate(d.Scen).Field
+	d.Switch("gsp", "nps")
+	if d.Scen.Has("ds") || d.SideOf("gsp") != "nps" {
+		t.Fatalf("switched: ds %q, side %q", d.Scen.Get("ds"), d.SideOf("gsp"))
+	}
+	d.Choose("dsn", "8")
+	d.Choose("dss", "40")
+	after := Evaluate(d.Scen)
+	if after.Field == nil || before == nil {
+		t.Fatalf("no field check: %v", after.Errors)
+	}
+	// The demo types 202.7 mm; the catalogue's is 202.74 mm: heads agree
+	// to the velocity-head change that 0.04 mm makes.
+	if diff := after.Field.Head - before.Head; diff < 0 || diff > 1e-4 {
+		t.Errorf("head %g by size, %g by diameter", after.Field.Head, before.Head)
+	}
+	d.Switch("gsp", "d")
+	if d.Scen.Get("ds") != "202.7mm" || d.Scen.Has("dsn") {
+		t.Errorf("switched back: ds %q, dsn %q", d.Scen.Get("ds"), d.Scen.Get("dsn"))
+	}
+}

@@ -68,6 +68,9 @@ func Evaluate(s Scenario) Result {
 	e.pump()
 	e.npsh()
 	e.field()
+	if e.res.Fluid != nil {
+		e.energy()
+	}
 	e.turbine()
 	if s.Has("cv") {
 		e.convert()

@@ -123,7 +123,12 @@ var Table = []Param{
 	list("ph", "data-sheet heads", calc.Length, "m", "ft", "enter the data-sheet heads, one per flow, e.g. 62,59,52,44,33m"),
 	list("peff", "data-sheet efficiencies", calc.Dimensionless, "%", "%", "enter the data-sheet efficiencies, one per flow"),
 	grp(list("pnpsh", "data-sheet NPSH required", calc.Length, "m", "ft", "enter the data-sheet NPSH required, one per flow"), "npsh"),
-	q("spd", "speed", "Speed", "(share of the data sheet's; blank: 100 %)", calc.Dimensionless, "%", "%", "enter the speed as a share of the data sheet's"),
+	{Name: "spd", Label: "speed", Box: "Speed", Hint: "(% of the data sheet's, rpm, or drive Hz; blank: 100 %)", Kind: KindQuantity,
+		Dim: calc.Dimensionless, SI: "%", US: "%", ExtraUnits: []string{"rpm", "Hz"}, Missing: "enter the speed as a share of the data sheet's, in rpm, or as the drive's frequency in Hz"},
+	q("nrat", "rated speed", "Rated speed", "(the data sheet's; optional)", calc.Frequency, "rpm", "rpm", "enter the data sheet's speed in rpm"),
+	q("fmains", "mains frequency", "Mains frequency", "(the rated speed's supply; optional)", calc.Frequency, "Hz", "Hz", "enter the mains frequency the rated speed is given at (50 or 60 Hz)"),
+	grp(q("qsp", "flow to reach by speed", "Flow to reach by a speed change", "(on this line; optional)", calc.Flow, "L/s", "gpm", "enter the flow the speed should give"), "spfor"),
+	grp(q("hsp", "head to reach by speed", "Head to reach by a speed change", "(on this line; optional)", calc.Length, "m", "ft", "enter the head the speed should give"), "spfor"),
 	{Name: "pumps", Label: "pumps working together", Box: "Pumps working together", Kind: KindChoice, choices: func() []Choice {
 		return []Choice{{"1", "one pump"}, {"2p", "two in parallel"}, {"2s", "two in series"},
 			{"3p", "three in parallel"}, {"3s", "three in series"}}
@@ -136,11 +141,25 @@ var Table = []Param{
 	q("pd", "discharge gauge reading", "Discharge gauge", "(reading)", calc.Pressure, "kPa", "psi", "enter the gauge reading"),
 	q("zs", "suction gauge height", "Suction gauge height", "", calc.Length, "m", "ft", "enter the suction gauge's height"),
 	q("zd", "discharge gauge height", "Discharge gauge height", "(same datum)", calc.Length, "m", "ft", "enter the discharge gauge's height"),
-	q("ds", "pipe diameter at the suction gauge", "Pipe inside diameter at the suction gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the suction gauge"),
-	q("dd", "pipe diameter at the discharge gauge", "Pipe inside diameter at the discharge gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the discharge gauge"),
+	grp(q("ds", "pipe diameter at the suction gauge", "Pipe inside diameter at the suction gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the suction gauge"), "gsp"),
+	grp(Param{Name: "dsn", Label: "pipe size at the suction gauge", Box: "Nominal size at the suction gauge", Kind: KindChoice, choices: npsChoices}, "gsp"),
+	grp(Param{Name: "dss", Label: "pipe schedule at the suction gauge", Box: "Schedule or class", Kind: KindChoice, choices: schChoices}, "gsp"),
+	grp(q("dd", "pipe diameter at the discharge gauge", "Pipe inside diameter at the discharge gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the discharge gauge"), "gdp"),
+	grp(Param{Name: "ddn", Label: "pipe size at the discharge gauge", Box: "Nominal size at the discharge gauge", Kind: KindChoice, choices: npsChoices}, "gdp"),
+	grp(Param{Name: "dds", Label: "pipe schedule at the discharge gauge", Box: "Schedule or class", Kind: KindChoice, choices: schChoices}, "gdp"),
 	q("qm", "measured flow", "Measured flow", "", calc.Flow, "L/s", "gpm", "enter the measured flow"),
-	q("pin", "motor electrical input", "Motor electrical input", "(optional)", calc.Power, "kW", "hp", "enter the motor's electrical input"),
+	q("pin", "motor electrical input", "Motor electrical input", "(power meter; optional)", calc.Power, "kW", "kW", "enter the motor's electrical input"),
 	q("etam", "motor efficiency", "Motor efficiency", "(nameplate; optional)", calc.Dimensionless, "%", "%", "enter the motor's efficiency"),
+	q("gcs", "suction gauge accuracy class", "Suction gauge class", "(EN 837-1, ± % of span; optional)", calc.Dimensionless, "%", "%", "enter the suction gauge's accuracy class, e.g. 1.6%"),
+	q("gss", "suction gauge span", "Suction gauge span", "(full scale less the scale's start)", calc.Pressure, "kPa", "psi", "enter the suction gauge's span, e.g. 600kPa for −100 to 500 kPa"),
+	q("gcd", "discharge gauge accuracy class", "Discharge gauge class", "(EN 837-1, ± % of span; optional)", calc.Dimensionless, "%", "%", "enter the discharge gauge's accuracy class, e.g. 1.0%"),
+	q("gsd", "discharge gauge span", "Discharge gauge span", "(full scale less the scale's start)", calc.Pressure, "kPa", "psi", "enter the discharge gauge's span, e.g. 1000kPa for 0 to 10 bar"),
+	q("uqm", "flow meter accuracy", "Flow meter accuracy", "(± % of reading; optional)", calc.Dimensionless, "%", "%", "enter the flow meter's accuracy in % of reading"),
+	q("upin", "power meter accuracy", "Power meter accuracy", "(± % of reading; optional)", calc.Dimensionless, "%", "%", "enter the power meter's accuracy in % of reading"),
+	q("uz", "gauge height accuracy", "Gauge heights known to", "(± each; optional)", calc.Length, "mm", "in", "enter how well each gauge's height is known"),
+	{Name: "grade", Label: "acceptance grade", Box: "Acceptance grade", Hint: "(ISO 9906; factors from memory)", Kind: KindChoice, choices: gradeChoices},
+	{Name: "hours", Label: "running hours per year", Box: "Running hours per year", Hint: "(optional, for a yearly cost)", Kind: KindNumber},
+	{Name: "tariff", Label: "energy tariff per kWh", Box: "Energy tariff per kWh", Hint: "(any currency; optional)", Kind: KindNumber},
 	q("etat", "turbine-and-generator efficiency", "Turbine-and-generator efficiency", "", calc.Dimensionless, "%", "%", "enter the turbine-and-generator efficiency"),
 }
 
@@ -209,6 +228,24 @@ func ClassName(catalogue, class string) string {
 		return "schedule " + strings.TrimPrefix(class, "PVC")
 	}
 	return class
+}
+
+// gradeChoices are ISO 9906's acceptance grades with their head and
+// efficiency tolerances (from memory).
+func gradeChoices() []Choice {
+	var out []Choice
+	for _, g := range calc.Grades {
+		eff := "η not below the guarantee"
+		if g.EffLow < 0 {
+			eff = "η " + strconv.FormatFloat(g.EffLow*100, 'g', -1, 64) + " %"
+		}
+		head := "H ±" + strconv.FormatFloat(g.HeadHigh*100, 'g', -1, 64) + " %"
+		if g.HeadLow == 0 {
+			head = "H 0 to +" + strconv.FormatFloat(g.HeadHigh*100, 'g', -1, 64) + " %"
+		}
+		out = append(out, Choice{g.Name, "grade " + g.Name + ": " + head + ", " + eff + " (" + g.Use + ")"})
+	}
+	return out
 }
 
 func matChoices() []Choice {
@@ -353,6 +390,9 @@ var Groups = []Group{
 	{"pipe", "Pipe given by", []Side{{"nps", "nominal size", []string{"nps", "sch"}}, {"d", "inside diameter", []string{"d"}}}},
 	{"rough", "Wall roughness from", []Side{{"mat", "material", []string{"mat"}}, {"eps", "roughness", []string{"eps"}}}},
 	{"site", "Site pressure from", []Side{{"alt", "altitude", []string{"alt"}}, {"baro", "barometer", []string{"baro"}}}},
+	{"gsp", "Pipe at the suction gauge given by", []Side{{"d", "inside diameter", []string{"ds"}}, {"nps", "nominal size", []string{"dsn", "dss"}}}},
+	{"gdp", "Pipe at the discharge gauge given by", []Side{{"d", "inside diameter", []string{"dd"}}, {"nps", "nominal size", []string{"ddn", "dds"}}}},
+	{"spfor", "Speed change to reach", []Side{{"q", "a flow", []string{"qsp"}}, {"h", "a head", []string{"hsp"}}}},
 	{"npsh", "NPSH required", []Side{{"sheet", "from the data sheet", []string{"pnpsh"}}, {"typed", "typed in", []string{"npshr"}}}},
 }
 

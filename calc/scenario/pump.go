@@ -1,6 +1,7 @@
 package scenario
 
 import (
+	"errors"
 	"fmt"
 	"math"
 	"strings"
@@ -24,6 +25,15 @@ type PumpResult struct {
 	// Operating is where Curve meets the system curve, nil when they do
 	// not meet (Result.Errors says why) or the line is not described.
 	Operating *calc.OperatingResult
+	// BEP is the best-efficiency point of Curve, SingleBEP that of one
+	// pump at its speed (Single); nil without data-sheet efficiencies.
+	BEP, SingleBEP *calc.BEP
+	// SpeedFor is the speed that meets the flow qsp on the line, nil
+	// when not asked for or not found (Result.Errors says why).
+	SpeedFor *SpeedSolution
+	// Rated is the data sheet's speed, Hz (nrat), and Mains the supply
+	// frequency it is given at, Hz (fmains); 0 when not given.
+	Rated, Mains float64
 }
 
 // pump reads the data sheet, speed and arrangement, then finds the
@@ -58,6 +68,9 @@ func (e *eval) pump() {
 			e.fail(opt, fmt.Sprintf("%s: %d values for %d flows; give one per data-sheet flow", opt, len(vs), len(qs)))
 			return
 		}
+		if opt == "peff" && !e.sheetEfficiencies(vs) {
+			return
+		}
 		for i, v := range vs {
 			if opt == "peff" {
 				pts[i].Eff = v
@@ -72,13 +85,26 @@ func (e *eval) pump() {
 		return
 	}
 	pr.Base = base
-	if e.s.Has("spd") {
-		v, ok := e.quantity("spd")
-		if !ok {
-			return
-		}
-		pr.Speed = v
+	if _, top, drooping := base.Unstable(); drooping {
+		e.warnCalc("pump", calc.Warnf("ph", "the data sheet's head rises with flow up to %v (a drooping curve): below that flow the pump can run unstably, hunting between two points where a line of high static head crosses the curve twice; pumps of such curves in parallel may not share the flow", calc.Fig(top, calc.Flow)))
 	}
+	for _, ref := range []struct {
+		name string
+		v    *float64
+	}{{"nrat", &pr.Rated}, {"fmains", &pr.Mains}} {
+		if e.s.Has(ref.name) {
+			if v, ok := e.quantity(ref.name); ok && v > 0 {
+				*ref.v = v
+			} else if ok {
+				e.fail(ref.name, Label(ref.name)+" must be above zero")
+			}
+		}
+	}
+	spd, ok := e.speed()
+	if !ok {
+		return
+	}
+	pr.Speed = spd
 	single, err := base.AtSpeed(pr.Speed)
 	if err != nil {
 		e.failErr("spd", err)
@@ -101,6 +127,7 @@ func (e *eval) pump() {
 		pr.Curve = c
 	}
 	e.res.Pump = pr
+	e.bep(pr)
 	b := e.bal
 	if b == nil {
 		return // the balance's own errors say what is missing
@@ -122,6 +149,11 @@ func (e *eval) pump() {
 		return
 	}
 	pr.Operating = &op
+	if _, top, drooping := pr.Curve.Unstable(); drooping && op.Q <= top {
+		e.warnCalc("pump", calc.Warnf("q", "the operating point (%v) lies where the head rises with flow (up to %v): expect unstable running", calc.Fig(op.Q, calc.Flow), calc.Fig(top, calc.Flow)))
+	}
+	e.regionCheck(pr.BEP, op.Q, "q", "pump", "the operating point")
+	e.speedFor(pr)
 }
 
 // npsh works out the NPSH available at the pump, at the operating point
@@ -223,13 +255,35 @@ func (e *eval) field() {
 		ok = ok && good
 		return v
 	}
+	bore := func(d, nps, sch string) float64 {
+		if !e.s.Has(nps) && !e.s.Has(sch) {
+			return get(d)
+		}
+		ps, err := calc.LookupPipe(strings.TrimSpace(e.s.Get(nps)), strings.TrimSpace(e.s.Get(sch)))
+		if err != nil {
+			field := nps
+			var fe *calc.FieldError
+			if errors.As(err, &fe) && fe.Field == "sch" {
+				field = sch
+			}
+			e.failAt(field, err)
+			ok = false
+			return 0
+		}
+		return ps.ID
+	}
 	r := calc.FieldReadings{Ps: gauge("ps"), Pd: gauge("pd"), Zs: get("zs"), Zd: get("zd"),
-		Ds: get("ds"), Dd: get("dd"), Q: get("qm")}
+		Ds: bore("ds", "dsn", "dss"), Dd: bore("dd", "ddn", "dds"), Q: get("qm")}
 	if e.s.Has("pin") {
 		r.PowerIn = get("pin")
 	}
 	if e.s.Has("etam") {
-		r.MotorEff = get("etam")
+		v, good := e.share("etam")
+		ok = ok && good
+		r.MotorEff = v
+		if v > calc.MotorEfficiencyHigh && v <= 1 {
+			e.warn("etam", "field", fmt.Sprintf("a motor efficiency of %s %% is above the %s %% that even the best large motors hardly reach: check the nameplate", pct(v*100), pct(calc.MotorEfficiencyHigh*100)))
+		}
 	}
 	if !ok {
 		return
@@ -247,6 +301,11 @@ func (e *eval) field() {
 	for _, w := range fc.Warnings {
 		e.warnCalc("field", w)
 	}
+	if e.res.Pump != nil {
+		e.regionCheck(e.res.Pump.SingleBEP, r.Q, "qm", "field", "the measured flow")
+	}
+	e.bands(fc)
+	e.accept(fc)
 }
 
 // turbine works out the turbine's output at the flow and the flow that
@@ -256,7 +315,7 @@ func (e *eval) turbine() {
 	if !e.s.Has("etat") || e.bal == nil {
 		return
 	}
-	eff, ok := e.quantity("etat")
+	eff, ok := e.share("etat")
 	if !ok {
 		return
 	}

@@ -28,10 +28,17 @@ type Result struct {
 	// or a broken column.
 	VapourLine []float64
 
-	Pump        *PumpResult         // the pump curve, system curve and operating point
-	NPSH        *calc.NPSHResult    // NPSH at the pump
-	NPSHFlow    float64             // the flow NPSH was worked out at, m³/s
-	Field       *calc.FieldCheck    // the pump's performance from gauge readings
+	Pump     *PumpResult      // the pump curve, system curve and operating point
+	NPSH     *calc.NPSHResult // NPSH at the pump
+	NPSHFlow float64          // the flow NPSH was worked out at, m³/s
+	Field    *calc.FieldCheck // the pump's performance from gauge readings
+	// FieldBands are the field check's uncertainty bands from the
+	// instruments' accuracy, nil when no accuracy is given.
+	FieldBands *calc.FieldBands
+	// Acceptance is the field check judged under the chosen ISO 9906
+	// grade, nil without a grade or a data sheet to compare with.
+	Acceptance  *calc.Acceptance
+	Energy      *EnergyResult       // energy per volume pumped (measured, else at the operating point)
 	Turbine     *calc.TurbineResult // the turbine's output at the flow
 	BestTurbine *calc.TurbineResult // at the flow that gives the most output
 }

@@ -259,6 +259,9 @@ func FuzzScenario(f *testing.F) {
 	f.Add("solve=q&l=1m&d=1mm&eps=0&q=0&p1=0&p2=0&z1=0&z2=0&v1=0&v2=0&liq=water&t=20C")
 	f.Add("liq=custom&rho=1e-300kg/m3&mu=1e300Pa.s&pv=0&cv=1e308kPa")
 	f.Add("%zz&name=%3Cb%3E")
+	f.Add(Demo().Encode() + "&etam=92%&gcs=1.6%&gss=250kPa&gcd=1%&gsd=1000kPa&uqm=2%&upin=1.5%&uz=10mm&grade=2B" +
+		"&qsp=70L/s&nrat=1450rpm&fmains=50Hz&hours=3000&tariff=0.18")
+	f.Add("pq=0,10,20,30L/s&ph=40,44,42,30m&peff=0,0.5,0.7,0.6&spd=45Hz&fmains=0Hz&qsp=1e300L/s")
 	f.Fuzz(func(t *testing.T, q string) {
 		s, _ := Parse(q)
 		r := Evaluate(s)

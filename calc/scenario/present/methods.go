@@ -14,6 +14,7 @@ func methodsFor(us bool) []Method {
 	if us {
 		margin = calc.FormatValue(calc.NPSHMarginMin, "ft", 1)
 	}
+	energy := calc.DefaultUnit(calc.SpecificEnergy, us).Symbol + " and per 100 " + calc.DefaultUnit(calc.Length, us).Symbol + " of head"
 	return []Method{
 		{"Energy balance", "the steady-flow energy equation between the two points in head form (metres or feet of the flowing liquid); kinetic-energy factor α 2 in laminar and 1 in turbulent flow, or a power-law profile estimate on request; laminar below Re 2300, turbulent above 4000 (common practice), transitional flow flagged and bounded by both assumptions."},
 		{"Friction factor", "Colebrook–White (1939), solved to a relative residual below 1e-13 by the method of Clamond (2009) and checked against the Lambert-W closed form (python3-mpmath) and python3-fluids; the explicit approximations of Swamee & Jain (1976; up to 2.83 % above Colebrook in its fitted range) and Haaland (1983); 64/Re in laminar flow; Hazen–Williams for water."},
@@ -23,10 +24,15 @@ func methodsFor(us bool) []Method {
 		{"Site pressure", "the ISO 2533 standard atmosphere at the site altitude, or the barometer reading."},
 		{"Units", "conversion factors of NIST SP 811 (2008), Appendix B, checked against GNU units; conventional water-column units at their SP 811 values, kept apart from the head of the actual liquid."},
 		{"Pipe dimensions", "each catalogue in its own notation: ASME B36.10M carbon steel and ASME B36.19M stainless (NPS, with DN), PVC to ASTM D1785 and D2241, checked row by row against python3-fluids; copper tube to ASTM B88, PE to ISO 4427 and cement-lined ductile iron to ISO 2531 with ISO 4179 linings from memory."},
-		{"Pump curve", "monotone piecewise cubic interpolation through the data-sheet points (Fritsch & Carlson 1980), never beyond them; the operating point is where it meets the system curve, each flow of which is solved in full."},
+		{"Pump curve", "monotone piecewise cubic interpolation through the data-sheet points (Fritsch & Carlson 1980), never beyond them; a head that rises at low flow (a drooping curve) is accepted and its rising part flagged as unstable; the operating point is where it meets the system curve, each flow of which is solved in full."},
 		{"Speed and arrangement", "the pump affinity laws; identical pumps in parallel add flow, in series add head."},
 		{"NPSH margin", "NPSH available from the surface pressure, vapour pressure, suction height and suction losses; margin guidance after ANSI/HI 9.6.1 (from memory): ratio at least 1.1 and at least " + margin + "."},
-		{"Field check", "pump total head from the gauge readings, the gauges' heights and the velocity heads at the gauges; wire-to-water efficiency is the hydraulic power over the measured electrical input."},
+		{"Field check", "pump total head from the gauge readings, the gauges' heights and the velocity heads at the gauges; wire-to-water efficiency is the hydraulic power over the measured electrical input; the pump's own efficiency over the input times the motor's efficiency; an efficiency of 1.5 % or less is refused as a fraction typed into a percentage box, pump efficiencies above 95 % and motor efficiencies above 98 % are flagged (common practice, from memory)."},
+		{"Test uncertainty", "each instrument's accuracy taken as a limit: pressure gauges by accuracy class as a share of the span (EN 837-1), flow and power meters by a share of the reading, gauge heights by a length; propagated to first order and added in quadrature (the GUM's law of propagation, JCGM 100:2008, for independent inputs), checked against python3-uncertainties; the reading with the largest part is named."},
+		{"Acceptance", "ISO 9906 (2012) grades 1B, 1E, 1U, 2B, 2U and 3B with their tolerance factors quoted from memory (flow / head / power / efficiency: 1U +10/+6/+10/≥0 %, 1E ±5/±3/+4/≥0 %, 1B ±5/±3/+4/−3 %, 2B ±8/±5/+8/−5 %, 2U +16/+10/+16/−5 %, 3B ±9/±7/+9/−7 %); the data sheet at the measured flow stands for the guarantee, the flow tolerance is not used for a single point; within, outside, or this test cannot tell when the band straddles a limit."},
+		{"Best efficiency", "the best-efficiency point is the peak of the parabola through the data sheet's highest efficiency and its two neighbours; the preferred operating region 70–120 % of its flow after ANSI/HI 9.6.3 (from memory)."},
+		{"Speed for a flow", "the affinity laws (Q ∝ n, H ∝ n²) and Brent's method for the speed at which the pumps meet the system curve at the flow asked for (or at the flow where the line needs the head asked for), checked against python3-scipy (PchipInterpolator, brentq); speed in rpm over the rated speed, or a drive's frequency over the mains frequency (an induction motor's speed follows its supply nearly in proportion, common practice)."},
+		{"Energy", "energy per volume pumped, input power over flow, in " + energy + ", beside the least possible ρ·g·H (common practice); a yearly cost from running hours and a tariff."},
 		{"Turbine", "output ρ·g·Q·H_net·η after the line's losses; the flow of most output by golden-section search."},
 	}
 }

@@ -2,6 +2,7 @@ package present
 
 import (
 	"strconv"
+	"strings"
 
 	"fieldhead/calc"
 	"fieldhead/calc/scenario"
@@ -22,7 +23,8 @@ func (b *builder) pumpView() []Card {
 				Act: Action{Do: "choose", Param: "solve", Value: "hp"}}}},
 		}}}
 	}
-	cards := []Card{b.operatingCard(), b.npshCard(), b.pumpChartCard(), b.dataSheetCard(), b.pumpSetupCard(), b.fieldCard()}
+	cards := []Card{b.operatingCard(), b.npshCard(), b.pumpChartCard(), b.dataSheetCard(), b.pumpSetupCard(),
+		b.liquidCard(), b.fieldCard(), b.energyCard()}
 	if b.s.Has("etat") {
 		cards = append(cards, b.turbineCard())
 	}
@@ -174,6 +176,15 @@ func (b *builder) pumpChartCard() Card {
 	if pr != nil && len(pr.System) > 0 {
 		caption += " At zero flow the line needs " + b.head(pr.System[0].H) + " (levels and pressures alone); the rest is friction, fittings and velocity head."
 	}
+	if pr != nil && pr.BEP != nil {
+		caption += " The shaded band is the preferred operating region, 70–120 % of the best-efficiency flow (ANSI/HI 9.6.3, from memory), around the marked best-efficiency point."
+	}
+	if b.r.Field != nil {
+		caption += " The point marked measured is the field check's flow and head."
+	}
+	if pr != nil && pr.SpeedFor != nil {
+		caption += " A second pump curve shows the speed that meets the flow asked for."
+	}
 	if pr != nil && (pr.Curve.HasNPSHr() || len(pr.NPSHa) > 0) {
 		caption += " Lower panel: NPSH the pump requires (solid) and NPSH available at its inlet (dashed); available must stay above required."
 	}
@@ -252,6 +263,32 @@ func (b *builder) pumpChart(id, caption string) Block {
 	if op := pr.Operating; op != nil {
 		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(op.Q), Y: hu.FromSI(op.H),
 			Label: "operating point\n" + b.param("q", op.Q) + ", " + b.head(op.H)})
+	}
+	if lo, hi, drooping := c.Unstable(); drooping {
+		ch.Bands = append(ch.Bands, Band{X0: qu.FromSI(lo), X1: qu.FromSI(hi), Label: "head rises with flow: unstable"})
+	}
+	if bep := pr.BEP; bep != nil {
+		lo, hi := bep.Region()
+		ch.Bands = append(ch.Bands, Band{X0: qu.FromSI(lo), X1: qu.FromSI(hi),
+			Label: "preferred region, " + strconv.FormatFloat(calc.PreferredRegionLow*100, 'g', -1, 64) + "–" +
+				strconv.FormatFloat(calc.PreferredRegionHigh*100, 'g', -1, 64) + " % of best-efficiency flow"})
+		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(bep.Q), Y: hu.FromSI(bep.H),
+			Label: "best efficiency\n" + b.param("q", bep.Q) + ", " + percent(bep.Eff)})
+	}
+	if f := b.r.Field; f != nil && f.Head > 0 {
+		label := "measured\n" + b.param("qm", f.Q) + ", " + b.head(f.Head)
+		if u := b.r.FieldBands; u != nil {
+			label += " ± " + b.head(u.Head.U)
+		}
+		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(f.Q), Y: hu.FromSI(f.Head), Label: label})
+	}
+	if sf := pr.SpeedFor; sf != nil {
+		xs, ys = sampleCurve(sf.Curve.MinFlow(), sf.Curve.MaxFlow(), sf.Curve.Head, qu, hu)
+		goal := b.param("qsp", sf.Q)
+		if sf.ByHead {
+			goal = b.head(sf.H)
+		}
+		add(RolePumpBase, "at "+percent(sf.Ratio)+" speed for "+goal, xs, ys)
 	}
 	if c.HasEfficiency() {
 		pct := displayUnit("peff", b.us)
@@ -338,10 +375,54 @@ func (b *builder) pumpSetupCard() Card {
 	}
 	return Card{ID: "pump-setup", Title: "Pump as installed", Blocks: []Block{
 		fields(b.quantity("spd", "", ""), b.picker("pumps", "", "")),
+		fields(b.quantity("nrat", "", ""), b.quantity("fmains", "", "")),
+		b.toggle("spfor"),
+		maybe(b.d.SideOf("spfor") != "h", fields(b.quantity("qsp", "", ""))),
+		maybe(b.d.SideOf("spfor") == "h", fields(b.quantity("hsp", "", ""))),
+		b.speedFacts(),
 		fields(b.quantity("zp", "", "")),
 		b.toggle("npsh"),
 		maybe(typed, npshr),
 	}}
+}
+
+// speedFacts are the running speed in rpm or Hz and the speed solved for
+// a flow; an empty block without them.
+func (b *builder) speedFacts() Block {
+	pr := b.r.Pump
+	if pr == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	inUnits := func(r float64) string {
+		var parts []string
+		if pr.Rated > 0 {
+			parts = append(parts, b.show(r*pr.Rated, calc.Frequency))
+		}
+		if pr.Mains > 0 {
+			parts = append(parts, "drive at "+b.param("fmains", r*pr.Mains))
+		}
+		if len(parts) == 0 {
+			return ""
+		}
+		return " (" + strings.Join(parts, ", ") + ")"
+	}
+	var fs []Fact
+	if pr.Speed != 1 || pr.Rated > 0 {
+		fs = append(fs, Fact{ID: "speed-now", Label: "speed used", Value: percent(pr.Speed) + " of the data sheet's" + inUnits(pr.Speed)})
+	}
+	if sf := pr.SpeedFor; sf != nil {
+		what := b.param("qsp", sf.Q)
+		if sf.ByHead {
+			what = "a head of " + b.head(sf.H) + " (at " + b.param("qsp", sf.Q) + ")"
+		}
+		fs = append(fs, Fact{ID: "speed-for", Label: "speed for " + what + " on this line (affinity laws)",
+			Value: percent(sf.Ratio) + inUnits(sf.Ratio), Key: true},
+			Fact{Label: "head the line needs at that flow", Value: b.head(sf.H)})
+	}
+	if fs == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	return Block{Kind: BlockFacts, ID: "speed-results", Class: "facts", Facts: fs}
 }
 
 // fieldCard is the field check: gauge readings in, the pump's real
@@ -351,11 +432,108 @@ func (b *builder) fieldCard() Card {
 	return Card{ID: "field", Title: "Field check from gauge readings", Blocks: []Block{
 		fields(b.quantity("ps", "", ""), b.quantity("pd", "", "")),
 		fields(b.quantity("zs", "", ""), b.quantity("zd", "", "")),
-		fields(b.quantity("ds", "", ""), b.quantity("dd", "", "")),
+		b.toggle("gsp"),
+		b.gaugePipe("gsp", "ds", "dsn", "dss"),
+		b.toggle("gdp"),
+		b.gaugePipe("gdp", "dd", "ddn", "dds"),
 		fields(b.quantity("qm", "", ""), b.quantity("pin", "", ""), b.quantity("etam", "", "")),
 		maybe(facts != nil, Block{Kind: BlockFacts, ID: "field-results", Class: "facts", Facts: facts}),
+		{Kind: BlockHeading, Text: "How sure the test is: each instrument's accuracy"},
+		fields(b.quantity("gcs", "", ""), b.quantity("gss", "", "")),
+		fields(b.quantity("gcd", "", ""), b.quantity("gsd", "", "")),
+		fields(b.quantity("uqm", "", ""), b.quantity("upin", "", ""), b.quantity("uz", "", "")),
+		b.bandBlock(),
+		fields(b.picker("grade", "", "no grade: no verdict")),
+		b.verdictBlock(),
+		b.verdictFacts(),
 		b.warnings(nil, "field"),
 	}}
+}
+
+// gaugePipe is the pipe at a gauge: its inside diameter, or a nominal size
+// and schedule from the catalogues, as the group's switch says.
+func (b *builder) gaugePipe(group, d, nps, sch string) Block {
+	if b.d.SideOf(group) == "nps" {
+		return fields(b.picker(nps, "", "pick a size"), b.picker(sch, "", "pick a schedule or class"))
+	}
+	return fields(b.quantity(d, "", ""))
+}
+
+// readingName names a reading for the sentence "improve …".
+func readingName(p string) string {
+	switch p {
+	case "ps", "pd":
+		return "the " + strings.TrimSuffix(scenario.Label(p), " reading") + " (a finer class or a span closer to the reading)"
+	case "qm":
+		return "the flow meter"
+	case "pin":
+		return "the power meter"
+	case "zs", "zd":
+		return "the gauges' heights (measure them, e.g. with a level)"
+	}
+	return scenario.Label(p)
+}
+
+// bandBlock shows each result of the field check as value ± band and the
+// reading that dominates it; an empty block without accuracies.
+func (b *builder) bandBlock() Block {
+	f, u := b.r.Field, b.r.FieldBands
+	if f == nil || u == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	most := func(bd calc.Band) string {
+		if d := bd.Dominant(); d != "" {
+			return "; mostly from " + readingName(d)
+		}
+		return ""
+	}
+	fs := []Fact{
+		{ID: "band-head", Label: "pump head", Value: b.head(f.Head) + " ± " + b.head(u.Head.U) + most(u.Head), Key: true},
+		{ID: "band-power", Label: "hydraulic power", Value: b.show(f.HydraulicPower, calc.Power) + " ± " + b.show(u.Power.U, calc.Power) + most(u.Power)},
+	}
+	if f.Efficiency > 0 {
+		fs = append(fs, Fact{ID: "band-wire", Label: "wire-to-water efficiency", Value: percent(f.Efficiency) + " ± " + percent(u.Wire.U) + most(u.Wire)})
+	}
+	if f.PumpEfficiency > 0 {
+		fs = append(fs, Fact{ID: "band-pump", Label: "efficiency of the pump alone", Value: percent(f.PumpEfficiency) + " ± " + percent(u.Pump.U) + most(u.Pump), Key: true})
+	}
+	fs = append(fs, Fact{Label: "how the bands are found", Value: "each accuracy taken as a limit (±); the limits added in quadrature, first order (the GUM's law of propagation); density, pipe sizes and motor efficiency taken as exact"})
+	return Block{Kind: BlockFacts, ID: "field-bands", Class: "facts", Facts: fs}
+}
+
+// verdictBlock is the acceptance verdict's badge; empty without one.
+func (b *builder) verdictBlock() Block {
+	a := b.r.Acceptance
+	if a == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	g := "grade " + a.Grade.Name
+	switch a.Verdict {
+	case calc.Within:
+		return Block{Kind: BlockLevel, ID: "accept-level", Class: "lvl-ok", Text: "✓ Within " + g + " at this flow"}
+	case calc.Outside:
+		return Block{Kind: BlockLevel, ID: "accept-level", Class: "lvl-danger", Text: "✕ Outside " + g + " at this flow"}
+	}
+	return Block{Kind: BlockLevel, ID: "accept-level", Class: "lvl-caution", Text: "? This test cannot tell: the band of the readings reaches across a limit of " + g + "; improve " + readingName(a.Improve)}
+}
+
+// verdictFacts are what the verdict compares; nil block without one.
+func (b *builder) verdictFacts() Block {
+	a, f := b.r.Acceptance, b.r.Field
+	if a == nil || f == nil {
+		return Block{Kind: BlockEmpty}
+	}
+	word := map[calc.Verdict]string{calc.Within: "within", calc.Outside: "outside", calc.CannotTell: "cannot tell"}
+	fs := []Fact{{ID: "accept-head", Label: "head allowed at this flow (data sheet's " + b.head(f.CurveHead) + ")",
+		Value: b.head(a.Head.Low) + " to " + b.head(a.Head.High) + ": " + word[a.Head.Verdict]}}
+	if a.Efficiency.Verdict != calc.VerdictNone {
+		fs = append(fs, Fact{ID: "accept-eff", Label: "pump efficiency allowed (data sheet's " + percent(f.CurveEfficiency) + ")",
+			Value: "at least " + percent(a.Efficiency.Low) + ": " + word[a.Efficiency.Verdict]})
+	} else {
+		fs = append(fs, Fact{Label: "pump efficiency", Value: "not judged (needs the electrical input and the motor efficiency)"})
+	}
+	fs = append(fs, Fact{Label: "tolerances", Value: "ISO 9906 grade " + a.Grade.Name + ", quoted from memory; the flow tolerance is not used for a single point, so the verdict is the stricter"})
+	return Block{Kind: BlockFacts, ID: "accept-facts", Class: "facts", Facts: fs}
 }
 
 // fieldFacts are the field check's figures, nil without a field check.
@@ -388,6 +566,61 @@ func (b *builder) fieldFacts() []Fact {
 		if f.CurveEfficiency > 0 {
 			out = append(out, Fact{Label: "data-sheet pump efficiency here (pump alone)", Value: percent(f.CurveEfficiency)})
 		}
+		if f.HasEffDeviation {
+			out = append(out, Fact{ID: "field-eff-dev", Label: "pump efficiency below (−) or above the data sheet",
+				Value: signed(f.EffDeviation*100) + " percentage points"})
+		}
+	}
+	if pr := b.r.Pump; pr != nil && pr.SingleBEP != nil {
+		bep := pr.SingleBEP
+		lo, hi := bep.Region()
+		out = append(out,
+			Fact{ID: "field-bep", Label: "measured flow as a share of the best-efficiency flow (" + b.param("q", bep.Q) + ")", Value: percent(f.Q / bep.Q)},
+			Fact{Label: "preferred operating region (ANSI/HI 9.6.3, from memory)", Value: b.param("q", lo) + " to " + b.param("q", hi)})
+	}
+	return out
+}
+
+// signed writes a number with its sign, three significant digits: "+2.1",
+// "−5.72".
+func signed(v float64) string {
+	if v > 0 {
+		return "+" + calc.FormatNumber(v, 3)
+	}
+	return calc.FormatNumber(v, 3)
+}
+
+// energyCard is the energy used per volume pumped and its yearly cost.
+func (b *builder) energyCard() Card {
+	facts := b.energyFacts()
+	return Card{ID: "energy", Title: "Energy per volume pumped", Blocks: []Block{
+		maybe(facts == nil, text("muted", "", "Worked out from the field check's measured input, or from the operating point when the data sheet has efficiencies.")),
+		maybe(facts != nil, Block{Kind: BlockFacts, ID: "energy-results", Class: "facts", Facts: facts}),
+		fields(b.plain("hours", "", "", true), b.plain("tariff", "", "", true)),
+	}}
+}
+
+// energyFacts are the specific energy figures, nil without them.
+func (b *builder) energyFacts() []Fact {
+	en := b.r.Energy
+	if en == nil {
+		return nil
+	}
+	basis := "the measured electrical input (" + b.show(en.Power, calc.Power) + ")"
+	switch {
+	case !en.Measured && en.Shaft:
+		basis = "the shaft power at the operating point (" + b.show(en.Power, calc.Power) + "; motor losses not included: give the motor efficiency)"
+	case !en.Measured:
+		basis = "the operating point's shaft power over the motor efficiency (" + b.show(en.Power, calc.Power) + ")"
+	}
+	out := []Fact{
+		{ID: "energy-vol", Label: "energy per volume", Value: b.show(en.PerVolume, calc.SpecificEnergy), Key: true},
+		{ID: "energy-head", Label: "per volume and head", Value: b.show(en.PerVolumeHead, calc.SpecificEnergyHead)},
+		{ID: "energy-ideal", Label: "least possible (ρ·g·H, a loss-free set)", Value: b.show(en.Ideal, calc.SpecificEnergy) + " · " + b.show(en.IdealHead, calc.SpecificEnergyHead)},
+		{Label: "worked out from", Value: basis + " at " + b.param("q", en.Q) + " and " + b.head(en.H)},
+	}
+	if en.YearCost > 0 {
+		out = append(out, Fact{ID: "energy-cost", Label: "cost per year (running hours × input power × tariff)", Value: plainNumber(en.YearCost) + " in the tariff's currency", Key: true})
 	}
 	return out
 }

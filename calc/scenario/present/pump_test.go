@@ -274,15 +274,16 @@ func TestPumpViewIDs(t *testing.T) {
 		want  []string
 	}{
 		{"pump demo with a turbine efficiency", demoT,
-			[]string{"operating", "npsh", "pump-chart-card", "datasheet-card", "pump-setup", "field", "turbine"},
+			[]string{"operating", "npsh", "pump-chart-card", "datasheet-card", "pump-setup", "liquid", "field", "energy", "turbine"},
 			[]string{"op-q", "op-h", "op-eff", "op-shaft", "op-hyd", "answer", "npsh-level", "npsh-a", "npsh-r",
 				"npsh-margin", "npsh-ratio", "npsh-note", "field-results", "field-head", "field-power", "field-eff",
-				"field-dev", "to-ht", "datasheet", "row-add", "row-del-1", "in-pq-0", "pump-chart"}},
+				"field-dev", "field-bep", "energy-vol", "energy-head", "energy-ideal", "in-t", "in-hours", "in-tariff",
+				"in-nrat", "in-fmains", "in-qsp", "to-ht", "datasheet", "row-add", "row-del-1", "in-pq-0", "pump-chart"}},
 		{"pump demo without readings or pump elevation", with(t, scenario.Demo(), "zp", "", "qm", "", "ps", "", "pd", ""),
-			[]string{"operating", "npsh", "pump-chart-card", "datasheet-card", "pump-setup", "field"},
+			[]string{"operating", "npsh", "pump-chart-card", "datasheet-card", "pump-setup", "liquid", "field", "energy"},
 			[]string{"npsh-why", "op-q"}},
 		{"pump demo without a data sheet", with(t, scenario.Demo(), "pq", "", "ph", "", "peff", "", "pnpsh", ""),
-			[]string{"operating", "npsh", "pump-chart-card", "datasheet-card", "pump-setup", "field"},
+			[]string{"operating", "npsh", "pump-chart-card", "datasheet-card", "pump-setup", "liquid", "field", "energy"},
 			[]string{"op-q", "answer"}},
 		{"turbine demo", scenario.TurbineDemo(),
 			[]string{"turbine", "profile-card", "pump-side"},
@@ -403,9 +404,10 @@ func TestNoSIUnitsOnUSSheet(t *testing.T) {
 					t.Fatalf("the US %s has errors: %v", demo.name, r.Errors)
 				}
 				n := 0
+				entered := enteredInSI(sh)
 				walk(reflect.ValueOf(sh), "", func(name, s string) {
 					n++
-					if bad := siAfterDigit(s); len(bad) > 0 {
+					if bad := siAfterDigit(s); len(bad) > 0 && !entered[s] {
 						t.Errorf("%s %q has SI units %v", name, s, bad)
 					}
 				})
@@ -422,6 +424,36 @@ func TestNoSIUnitsOnUSSheet(t *testing.T) {
 	if !found {
 		t.Error("the SI demo shows no SI unit after a figure: the check finds nothing")
 	}
+}
+
+// enteredInSI are the report's "as entered" texts of the inputs whose US
+// default unit is an SI one by design: the motor's electrical input,
+// read off power meters in kW in both unit systems (issue 11). Their
+// value as entered may show kW on a US sheet; every figure worked out
+// from them is still worded in US units.
+func enteredInSI(sh Sheet) map[string]bool {
+	out := map[string]bool{}
+	labels := map[string]bool{}
+	for _, p := range scenario.Params {
+		if siTokens[scenario.DefaultUnit(p, true)] {
+			labels[scenario.Label(p)] = true
+		}
+	}
+	for _, c := range sh.Cards {
+		for _, bl := range c.Blocks {
+			if bl.Table == nil {
+				continue
+			}
+			for _, r := range bl.Table.Rows {
+				if labels[r.Head] {
+					for _, cell := range r.Cells {
+						out[cell.Text] = true
+					}
+				}
+			}
+		}
+	}
+	return out
 }
 
 func TestNPSHVerdictBeforeFacts(t *testing.T) {
@@ -552,18 +584,37 @@ func TestPumpChart(t *testing.T) {
 					t.Errorf("data point %d (%v, %v), want (%v, %v)", i, pts.X[i], pts.Y[i], qu.FromSI(p.Q), hu.FromSI(p.H))
 				}
 			}
-			op := r.Pump.Operating
-			if len(bl.Chart.Markers) != 1 || bl.Chart.Markers[0].X != qu.FromSI(op.Q) || bl.Chart.Markers[0].Y != hu.FromSI(op.H) {
-				t.Errorf("markers %+v, want the operating point", bl.Chart.Markers)
+			// Markers: the operating point first, then the best-efficiency
+			// point (calc.BEP, on the curve as drawn) and the measured
+			// point (the field check's flow and head).
+			op, bep, f := r.Pump.Operating, r.Pump.BEP, r.Field
+			ms := bl.Chart.Markers
+			if len(ms) != 3 || ms[0].X != qu.FromSI(op.Q) || ms[0].Y != hu.FromSI(op.H) ||
+				ms[1].X != qu.FromSI(bep.Q) || ms[1].Y != hu.FromSI(bep.H) || !strings.HasPrefix(ms[1].Label, "best efficiency") ||
+				ms[2].X != qu.FromSI(f.Q) || ms[2].Y != hu.FromSI(f.Head) || !strings.HasPrefix(ms[2].Label, "measured") {
+				t.Errorf("markers %+v, want the operating, best-efficiency and measured points", ms)
 			}
+			// Bands: beyond the data sheet (to the right edge) when the
+			// system curve runs past it, and the preferred region, 70–120 %
+			// of the best-efficiency flow (ANSI/HI 9.6.3, from memory).
 			sys := r.Pump.System
-			if beyond := sys[len(sys)-1].Q > r.Pump.Curve.MaxFlow(); beyond != (len(bl.Chart.Bands) == 1) {
-				t.Errorf("bands %+v, system beyond the data sheet %v", bl.Chart.Bands, beyond)
-			}
+			beyond := sys[len(sys)-1].Q > r.Pump.Curve.MaxFlow()
+			lo, hi := bep.Region()
+			region := 0
 			for _, band := range bl.Chart.Bands {
-				if band.X0 != qu.FromSI(r.Pump.Curve.MaxFlow()) || !(band.X1 < band.X0) {
-					t.Errorf("band %+v, want from the last data-sheet flow to the right edge", band)
+				switch {
+				case band.X1 < band.X0:
+					if !beyond || band.X0 != qu.FromSI(r.Pump.Curve.MaxFlow()) {
+						t.Errorf("band %+v, want from the last data-sheet flow to the right edge", band)
+					}
+				case band.X0 == qu.FromSI(lo) && band.X1 == qu.FromSI(hi):
+					region++
+				default:
+					t.Errorf("band %+v is neither", band)
 				}
+			}
+			if region != 1 || len(bl.Chart.Bands) != 1+map[bool]int{true: 1}[beyond] {
+				t.Errorf("bands %+v (system beyond the sheet %v), want the region once", bl.Chart.Bands, beyond)
 			}
 			if !strings.Contains(bl.Chart.XLabel, qu.Symbol) || !strings.Contains(bl.Chart.YLabel, hu.Symbol) {
 				t.Errorf("axes %q, %q lack %s, %s", bl.Chart.XLabel, bl.Chart.YLabel, qu.Symbol, hu.Symbol)

@@ -236,6 +236,7 @@ func (b *builder) reportResults() Card {
 	}
 	level, npsh, note := b.npshBlocks()
 	fieldFacts := b.fieldFacts()
+	energy := b.energyFacts()
 	t := b.r.Turbine
 	var turb Block
 	if t != nil {
@@ -257,6 +258,15 @@ func (b *builder) reportResults() Card {
 		level, npsh, note,
 		heading(fieldFacts != nil, "Field check from gauge readings"),
 		maybe(fieldFacts != nil, Block{Kind: BlockFacts, Class: "facts", Facts: fieldFacts}),
+		heading(b.r.FieldBands != nil, "How sure the field check is"),
+		b.bandBlock(),
+		heading(b.r.Acceptance != nil, "Acceptance"),
+		b.verdictBlock(),
+		b.verdictFacts(),
+		heading(b.r.Pump != nil && (b.r.Pump.SpeedFor != nil || b.r.Pump.Speed != 1 || b.r.Pump.Rated > 0), "Speed"),
+		b.speedFacts(),
+		heading(energy != nil, "Energy per volume pumped"),
+		maybe(energy != nil, Block{Kind: BlockFacts, Class: "facts", Facts: energy}),
 		heading(t != nil, "Turbine"),
 		maybe(t != nil, turb),
 	}}
@@ -264,7 +274,7 @@ func (b *builder) reportResults() Card {
 
 // reportCharts holds both charts; ok is false when there is neither.
 func (b *builder) reportCharts() (Card, bool) {
-	pump := b.pumpChart("pump-chart", "Pump head curve through the data-sheet points, the line's system curve and the operating point where they meet; below, NPSH required and available.")
+	pump := b.pumpChart("pump-chart", "Pump head curve through the data-sheet points, the line's system curve and the operating point where they meet, the best-efficiency point with the preferred region around it, the measured point and any speed asked for; below, NPSH required and available.")
 	profile := b.profileChart("profile-chart", "Pipe elevation, energy and hydraulic grade lines and the vapour-pressure line along the line, from point 1.")
 	hasPump, hasProfile := pump.Kind == BlockChart, profile.Kind == BlockChart
 	if profile.Text == "" && hasProfile {

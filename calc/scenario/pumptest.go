@@ -1,0 +1,326 @@
+package scenario
+
+import (
+	"fmt"
+	"strconv"
+	"strings"
+
+	"fieldhead/calc"
+)
+
+// The parts of the pump view that judge a test and a duty: efficiencies
+// guarded against 100× slips, speed in %, rpm or drive Hz, the
+// best-efficiency point and preferred region, the speed for a flow, and
+// the energy per volume pumped.
+
+// SpeedSolution is the speed at which the pumps meet a flow on the line.
+type SpeedSolution struct {
+	Q, H  float64        // the flow asked for, m³/s, and the line's head there, m
+	Ratio float64        // the speed, a share of the data sheet's
+	Curve calc.PumpCurve // the pumps' curve at that speed, in their arrangement
+	// ByHead is true when a head (hsp) was asked for, Q being the flow
+	// at which the line needs it.
+	ByHead bool
+}
+
+// EnergyResult is the energy per volume pumped and its basis.
+type EnergyResult struct {
+	calc.Energy
+	Measured bool    // from the field check's measured input (else the operating point)
+	Shaft    bool    // the power is the shaft power (no motor efficiency known)
+	Power    float64 // the power used, W
+	Q, H     float64 // flow, m³/s, and head, m
+}
+
+// pct writes a percentage as typed: "90", "0.9", "52", "97.5".
+func pct(v float64) string { return strconv.FormatFloat(v, 'g', 4, 64) }
+
+// isFrequency reports whether unit text names a speed or frequency unit
+// (rpm, Hz).
+func isFrequency(u string) bool {
+	if strings.TrimSpace(u) == "" {
+		return false
+	}
+	unit, err := calc.LookupUnit(u)
+	return err == nil && unit.Dim == calc.Frequency
+}
+
+// share reads an efficiency typed in %: a value of 1.5 % or less is
+// refused as a fraction typed into a percentage box (calc.FractionSlip),
+// with the percentage it probably meant.
+func (e *eval) share(param string) (float64, bool) {
+	v, ok := e.quantity(param)
+	if !ok {
+		return 0, false
+	}
+	if meant, slip := calc.FractionSlip(v); slip {
+		e.fail(param, fmt.Sprintf("a %s of %s %% is not plausible; a fraction was probably typed into a percentage box: did you mean %s %%?",
+			Label(param), pct(v*100), pct(meant)))
+		return 0, false
+	}
+	return v, true
+}
+
+// sheetEfficiencies checks the data sheet's efficiency list for slips and
+// implausible values.
+func (e *eval) sheetEfficiencies(vs []float64) bool {
+	for i, v := range vs {
+		if meant, slip := calc.FractionSlip(v); slip {
+			e.fail("peff", fmt.Sprintf("point %d: %s %% looks like a fraction typed into the percentage list: did you mean %s %%? (give every efficiency in %%, e.g. 0,52,71,76,72%%)",
+				i+1, pct(v*100), pct(meant)))
+			return false
+		}
+	}
+	for i, v := range vs {
+		if v > calc.PumpEfficiencyHigh && v <= 1 {
+			e.warn("peff", "pump", fmt.Sprintf("point %d: a data-sheet efficiency of %s %% is above the %s %% that even the largest pumps hardly reach: check the list",
+				i+1, pct(v*100), pct(calc.PumpEfficiencyHigh*100)))
+			break
+		}
+	}
+	return true
+}
+
+// speed reads the speed as a share of the data sheet's: typed in %, in
+// rpm (over the rated speed nrat) or as a drive's frequency in Hz (over
+// the mains frequency fmains, the rated speed's supply: an induction
+// motor's speed follows the supply frequency nearly in proportion, common
+// practice). Above 100 % it warns of overspeed.
+func (e *eval) speed() (float64, bool) {
+	if !e.s.Has("spd") {
+		return 1, true
+	}
+	text := e.s.Get("spd")
+	_, u := Split(text)
+	ratio := 0.0
+	if isFrequency(u) {
+		v, err := calc.Parse("spd", text, calc.Frequency, "")
+		if err != nil {
+			e.failErr("spd", err)
+			return 0, false
+		}
+		unit, _ := calc.LookupUnit(u)
+		ref, over := "nrat", "the rated speed"
+		if unit.Symbol == "Hz" {
+			ref, over = "fmains", "the mains frequency"
+		}
+		if !e.s.Has(ref) {
+			e.fail("spd", fmt.Sprintf("a speed in %s needs %s (%s) to compare with; or give the speed in %%", unit.Symbol, over, Label(ref)))
+			return 0, false
+		}
+		base, ok := e.quantity(ref)
+		if !ok || !(base > 0) {
+			return 0, false // pump() reported it
+		}
+		ratio = v / base
+	} else {
+		v, ok := e.quantity("spd")
+		if !ok {
+			return 0, false
+		}
+		ratio = v
+	}
+	if ratio > 1 && ratio <= calc.PumpSpeedRatioMax {
+		e.warn("spd", "pump", fmt.Sprintf("a speed of %s %% of the data sheet's overspeeds the pump: the maker must confirm the pump, its bearings, seal and motor are fit for it (the power rises with the cube of the speed)", pct(ratio*100)))
+	}
+	return ratio, true
+}
+
+// bep finds the best-efficiency point of the pumps as they run and of one
+// pump at its speed, and flags an operating point outside the preferred
+// region.
+func (e *eval) bep(pr *PumpResult) {
+	if b, ok := pr.Curve.BestEfficiency(); ok {
+		pr.BEP = &b
+	}
+	if b, ok := pr.Single.BestEfficiency(); ok {
+		pr.SingleBEP = &b
+	}
+	if pr.BEP != nil && pr.BEP.AtEdge {
+		e.warn("peff", "pump", "the data sheet's highest efficiency is at its first or last point: the best-efficiency point may lie beyond the sheet, and the region drawn from it is uncertain")
+	}
+}
+
+// regionCheck warns when flow q of the pumps lies outside the preferred
+// operating region.
+func (e *eval) regionCheck(b *calc.BEP, q float64, param, topic, what string) {
+	if b == nil || b.InRegion(q) {
+		return
+	}
+	lo, hi := b.Region()
+	side := "below"
+	if q > hi {
+		side = "above"
+	}
+	e.warnCalc(topic, calc.Warnf(param, "%s (%v) lies %s the preferred operating region (%v to %v, %s–%s %% of the best-efficiency flow, after ANSI/HI 9.6.3 from memory): expect more vibration, recirculation or wear; ask the maker about the allowable region",
+		what, calc.Fig(q, calc.Flow), side, calc.Fig(lo, calc.Flow), calc.Fig(hi, calc.Flow),
+		pct(calc.PreferredRegionLow*100), pct(calc.PreferredRegionHigh*100)))
+}
+
+// speedFor solves for the speed at which the pumps deliver the flow qsp,
+// or the head hsp, on the line.
+func (e *eval) speedFor(pr *PumpResult) {
+	byHead := e.s.Has("hsp")
+	if (!e.s.Has("qsp") && !byHead) || e.bal == nil || e.bal.Unknown != calc.SolvePumpHead {
+		return
+	}
+	var q float64
+	if byHead {
+		h, ok := e.quantity("hsp")
+		if !ok {
+			return
+		}
+		var err error
+		if q, err = calc.FlowForHead(*e.bal, h, pr.Curve.MaxFlow()); err != nil {
+			e.failErr("hsp", err)
+			return
+		}
+	} else {
+		var ok bool
+		if q, ok = e.quantity("qsp"); !ok {
+			return
+		}
+	}
+	param := map[bool]string{false: "qsp", true: "hsp"}[byHead]
+	sys, err := calc.SystemCurve(*e.bal, []float64{q})
+	if err != nil || len(sys) != 1 {
+		e.failErr(param, err)
+		return
+	}
+	h := sys[0].H
+	r, err := calc.SpeedForDuty(pr.Base, pr.Count, pr.Parallel, q, h)
+	if err != nil {
+		e.failAt(param, err)
+		return
+	}
+	c, err := pr.Base.AtSpeed(r)
+	if err == nil && pr.Count > 1 {
+		c, err = c.Combine(pr.Count, pr.Parallel)
+	}
+	if err != nil {
+		e.failAt(param, err)
+		return
+	}
+	pr.SpeedFor = &SpeedSolution{Q: q, H: h, Ratio: r, Curve: c, ByHead: byHead}
+	if r > 1 {
+		e.warn(param, "pump", fmt.Sprintf("this flow needs %s %% of the data sheet's speed: overspeed, which the maker must approve", pct(r*100)))
+	}
+}
+
+// energy works out the energy per volume pumped: from the field check's
+// measured input when there is one, else from the operating point (its
+// shaft power, over the motor efficiency when given).
+func (e *eval) energy() {
+	hours, tariff := 0.0, 0.0
+	for _, p := range []struct {
+		name string
+		v    *float64
+	}{{"hours", &hours}, {"tariff", &tariff}} {
+		if !e.s.Has(p.name) {
+			continue
+		}
+		v, err := number(p.name, e.s.Get(p.name))
+		if err != nil {
+			return // checkAll reported it
+		}
+		*p.v = v
+	}
+	var er EnergyResult
+	switch f := e.res.Field; {
+	case f != nil && f.Efficiency > 0 && f.Head > 0:
+		er = EnergyResult{Measured: true, Power: f.HydraulicPower / f.Efficiency, Q: f.Q, H: f.Head}
+	case e.res.Pump != nil && e.res.Pump.Operating != nil && e.res.Pump.Operating.ShaftPower > 0:
+		op := e.res.Pump.Operating
+		er = EnergyResult{Power: op.ShaftPower, Shaft: true, Q: op.Q, H: op.H}
+		if e.s.Has("etam") {
+			if m, ok := e.share("etam"); ok && m > 0 {
+				er.Power, er.Shaft = op.ShaftPower/m, false
+			}
+		}
+	default:
+		return
+	}
+	en, err := calc.EnergyUse(er.Power, er.Q, er.H, e.res.Fluid.Density, hours, tariff)
+	if err != nil {
+		e.failErr("hours", err)
+		return
+	}
+	er.Energy = en
+	e.res.Energy = &er
+}
+
+// accuracyParams are the instruments' accuracies of a field check.
+var accuracyParams = []string{"gcs", "gss", "gcd", "gsd", "uqm", "upin", "uz"}
+
+// bands propagates the instruments' accuracy to the field check's
+// results, when any accuracy is given. A gauge class needs its span and a
+// span its class.
+func (e *eval) bands(fc calc.FieldCheck) {
+	given := false
+	for _, p := range accuracyParams {
+		given = given || e.s.Has(p)
+	}
+	if !given {
+		return
+	}
+	var a calc.Accuracy
+	ok := true
+	read := func(p string, v *float64) {
+		if !e.s.Has(p) {
+			return
+		}
+		x, good := e.quantity(p)
+		ok = ok && good
+		*v = x
+	}
+	read("gcs", &a.ClassS)
+	read("gss", &a.SpanS)
+	read("gcd", &a.ClassD)
+	read("gsd", &a.SpanD)
+	read("uqm", &a.Flow)
+	read("upin", &a.Power)
+	read("uz", &a.Height)
+	for _, pair := range [][2]string{{"gcs", "gss"}, {"gcd", "gsd"}} {
+		for i, p := range pair {
+			if e.s.Has(p) && !e.s.Has(pair[1-i]) {
+				e.fail(pair[1-i], missingMsg(pair[1-i])+": a gauge's accuracy class and span go together")
+				ok = false
+			}
+		}
+	}
+	if a.Power > 0 && !e.s.Has("pin") {
+		e.warn("upin", "field", "a power meter's accuracy without its reading (motor electrical input) is not used")
+	}
+	if !ok {
+		return
+	}
+	tu, err := fc.Uncertainty(*e.res.Fluid, a)
+	if err != nil {
+		e.failErr("uqm", err)
+		return
+	}
+	e.res.FieldBands = &tu
+}
+
+// accept judges the field check under the chosen grade.
+func (e *eval) accept(fc calc.FieldCheck) {
+	if !e.s.Has("grade") {
+		return
+	}
+	g, ok := calc.LookupGrade(e.s.Get("grade"))
+	if !ok {
+		return // checkAll reported it
+	}
+	var bands calc.FieldBands
+	if e.res.FieldBands != nil {
+		bands = *e.res.FieldBands
+	} else {
+		e.warn("grade", "field", "no instrument accuracy is given: the verdict takes every reading as exact, which no field test is; give the gauges' classes and spans and the meters' accuracies")
+	}
+	a, ok := calc.Accept(fc, bands, g)
+	if !ok {
+		e.warn("grade", "field", "the acceptance grade needs the data sheet's head at the measured flow: give the data sheet, covering that flow")
+		return
+	}
+	e.res.Acceptance = &a
+}

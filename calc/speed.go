@@ -1,0 +1,121 @@
+package calc
+
+import (
+	"errors"
+	"math"
+)
+
+// SpeedForDuty returns the speed ratio n/n₀ at which count identical pumps
+// of data-sheet curve base (in parallel, or in series) deliver flow q
+// (m³/s) against head h (m): the duty point of a system curve. By the
+// affinity laws the pumps' head at q and ratio r is
+//
+//	H(r) = s·r²·H₀(q/(p·r))
+//
+// with p = count in parallel (else 1) and s = count in series (else 1);
+// the ratio solving H(r) = h is found by Brent's method on the speeds
+// where q/(p·r) lies on the data sheet, within PumpSpeedRatioMin to
+// PumpSpeedRatioMax. For a curve whose head falls with flow H(r) rises
+// with r, so the root is unique. When no speed in that range meets the
+// duty the error says so plainly (field "qsp"): the duty needs more head
+// than the pumps give at the highest speed, or less than they give at the
+// lowest speed that still reaches the flow on the data sheet.
+func SpeedForDuty(base PumpCurve, count int, parallel bool, q, h float64) (float64, error) {
+	if len(base.points) == 0 {
+		return 0, fieldErrorf("pq", "no pump curve: give the data-sheet points")
+	}
+	if count < 1 || count > PumpMaxCombined {
+		return 0, fieldErrorf("pumps", "the number of identical pumps must be 1 to %d, got %d", PumpMaxCombined, count)
+	}
+	if math.IsNaN(q) || math.IsInf(q, 0) || !(q > 0) {
+		return 0, fieldErrorf("qsp", "give the flow to reach (above zero)")
+	}
+	if math.IsNaN(h) || math.IsInf(h, 0) {
+		return 0, fieldErrorf("qsp", "the head the line needs at that flow is not a finite number")
+	}
+	p, s := 1.0, 1.0
+	if parallel {
+		p = float64(count)
+	} else {
+		s = float64(count)
+	}
+	lo, hi := PumpSpeedRatioMin, PumpSpeedRatioMax
+	// q/(p·r) must lie within the sheet's flows.
+	lo = math.Max(lo, q/(p*base.MaxFlow()))
+	if base.MinFlow() > 0 {
+		hi = math.Min(hi, q/(p*base.MinFlow()))
+	}
+	if !(lo <= hi) {
+		return 0, fieldErrorf("qsp", "no speed in range: %v is beyond what the data sheet covers between %g %% and %g %% speed", Fig(q, Flow), PumpSpeedRatioMin*100, PumpSpeedRatioMax*100)
+	}
+	f := func(r float64) float64 {
+		x := math.Min(math.Max(q/(p*r), base.MinFlow()), base.MaxFlow())
+		h0, _ := base.Head(x)
+		return s*r*r*h0 - h
+	}
+	r, err := brent(f, lo, hi, 1e-12)
+	switch {
+	case errors.Is(err, errNoBracket) && f(hi) < 0:
+		return 0, fieldErrorf("qsp", "no speed in range: even at %g %% speed the pumps give only %v at %v, and the line needs %v", hi*100, Fig(f(hi)+h, Length), Fig(q, Flow), Fig(h, Length))
+	case errors.Is(err, errNoBracket):
+		return 0, fieldErrorf("qsp", "no speed in range: at %.4g %% speed, the lowest at which the data sheet still reaches %v, the pumps already give %v and the line needs only %v (throttling or a smaller impeller, not speed, would meet this duty)", lo*100, Fig(q, Flow), Fig(f(lo)+h, Length), Fig(h, Length))
+	case err != nil:
+		return 0, fieldErrorf("qsp", "the speed for this duty could not be found: %v", err)
+	}
+	return r, nil
+}
+
+// FlowForHead returns the flow (m³/s) at which the system curve of balance
+// b needs head h (m): the duty a pump giving h would run at on this line.
+// The system curve rises with flow (friction and fittings only add), so
+// the flow is found by Brent's method from zero upwards, the search range
+// widened from qGuess (a flow of the right order, such as the data
+// sheet's last) by doubling, up to 2¹⁰ times it. Errors (field "hsp"): the
+// line needs more than h at zero flow (no flow at that head), or no flow
+// in range needs as much.
+func FlowForHead(b Balance, h, qGuess float64) (float64, error) {
+	if math.IsNaN(h) || math.IsInf(h, 0) {
+		return 0, fieldErrorf("hsp", "give the head to reach as a finite length")
+	}
+	if !(qGuess > 0) || math.IsInf(qGuess, 0) {
+		return 0, fieldErrorf("hsp", "no flow scale to search from: give the data sheet")
+	}
+	b, err := b.forSystem()
+	if err != nil {
+		return 0, err
+	}
+	var evalErr error
+	f := func(q float64) float64 {
+		s, _, err := b.systemHead(q)
+		if err != nil {
+			evalErr = err
+			return math.NaN()
+		}
+		return s - h
+	}
+	if f0 := f(0); evalErr != nil {
+		return 0, evalErr
+	} else if f0 > 0 {
+		return 0, fieldErrorf("hsp", "the line needs %v even at zero flow (levels and pressures alone): a head of %v moves no liquid", Fig(f0+h, Length), Fig(h, Length))
+	}
+	hi := qGuess
+	for i := 0; f(hi) < 0 || evalErr != nil; i++ {
+		if evalErr != nil {
+			// The line cannot be worked out at such a flow (beyond the
+			// friction formulas' range): no duty in range.
+			return 0, fieldErrorf("hsp", "the line needs less than %v at every flow it can be worked out for (up to %v): no duty at that head in range", Fig(h, Length), Fig(hi, Flow))
+		}
+		if i == 10 {
+			return 0, fieldErrorf("hsp", "the line needs less than %v at every flow up to %v: no duty at that head in range", Fig(h, Length), Fig(hi, Flow))
+		}
+		hi *= 2
+	}
+	q, err := brent(f, 0, hi, 1e-13*hi)
+	if evalErr != nil {
+		return 0, evalErr
+	}
+	if err != nil {
+		return 0, fieldErrorf("hsp", "the flow at that head could not be found: %v", err)
+	}
+	return q, nil
+}
