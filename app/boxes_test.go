@@ -204,7 +204,7 @@ func siAfterNumber(s string) []string {
 
 // TestUSSheetNoSI opens the demo and the turbine demo in US units on
 // every view and reads every text on the page but the pickers' option
-// lists (which offer every unit) and the report's inputs as entered (a
+// lists (which offer every unit), the link, and the report's inputs as entered (a
 // value is shown the way it was typed): no figure may be followed by an
 // SI unit.
 func TestUSSheetNoSI(t *testing.T) {
@@ -212,7 +212,7 @@ func TestUSSheetNoSI(t *testing.T) {
 	srv := httptest.NewServer(siteHandler(site, ""))
 	defer srv.Close()
 	b := newTab(t)
-	const visible = `(() => { const w = document.createTreeWalker(document.body, NodeFilter.SHOW_TEXT, {acceptNode: n => n.parentElement.closest("select, script, style, .print-only, #report-inputs td, #report-segments td") ? NodeFilter.FILTER_REJECT : NodeFilter.FILTER_ACCEPT}); let out = []; while (w.nextNode()) out.push(w.currentNode.nodeValue); return out.join("\n"); })()`
+	const visible = `(() => { const w = document.createTreeWalker(document.body, NodeFilter.SHOW_TEXT, {acceptNode: n => n.parentElement.closest("select, script, style, .print-only, .linktext, #report-inputs td, #report-segments td") ? NodeFilter.FILTER_REJECT : NodeFilter.FILTER_ACCEPT}); let out = []; while (w.nextNode()) out.push(w.currentNode.nodeValue); return out.join("\n"); })()`
 	for _, demo := range []struct {
 		name string
 		sc   scenario.Scenario
