@@ -4,6 +4,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"sync"
 )
 
 // Pipe standards named in PipeSize.Standard.
@@ -73,8 +74,29 @@ func PipeSizes() []PipeSize {
 	return out
 }
 
-// frClassPipes builds the pipes of one canonical class name.
+// frClassPipes returns the pipes of one canonical class name, a fresh
+// copy of the table built once (every look-up of a size reads it).
 func frClassPipes(sch string) []PipeSize {
+	frBuilt.Do(func() {
+		frByClass = make(map[string][]PipeSize, len(frClasses))
+		for _, c := range frClasses {
+			frByClass[c.name] = frBuildClass(c.name)
+		}
+	})
+	rows, ok := frByClass[sch]
+	if !ok {
+		return nil
+	}
+	return append([]PipeSize(nil), rows...)
+}
+
+var (
+	frBuilt   sync.Once
+	frByClass map[string][]PipeSize
+)
+
+// frBuildClass builds the pipes of one canonical class name.
+func frBuildClass(sch string) []PipeSize {
 	for _, c := range frClasses {
 		if c.name != sch {
 			continue
@@ -130,9 +152,12 @@ func frNormSchedule(s string) string {
 
 // frNPSValue reads a nominal size as a number: "1-1/2", "1 1/2", "1.5",
 // "1½", `8"`, "NPS 8", "8 in"; for PE also "160mm", "DN160", "d160".
+// frFractions spells out the fraction characters and drops inch marks.
+var frFractions = strings.NewReplacer("½", " 1/2", "¼", " 1/4", "¾", " 3/4", "\"", "", "”", "")
+
 func frNPSValue(s string) (float64, bool) {
 	t := strings.ToLower(strings.TrimSpace(s))
-	t = strings.NewReplacer("½", " 1/2", "¼", " 1/4", "¾", " 3/4", "\"", "", "”", "").Replace(t)
+	t = frFractions.Replace(t)
 	for _, p := range []string{"nps", "dn", "de", "d"} {
 		if strings.HasPrefix(t, p) {
 			t = t[len(p):]

@@ -357,14 +357,17 @@ func SegmentParam(n int, f string) string { return "s" + strconv.Itoa(n) + "." +
 
 // AllParams lists every parameter a sheet may hold, in link order: the
 // vocabulary's and every segment's.
-func AllParams() []string {
+func AllParams() []string { return append([]string(nil), allParams...) }
+
+// allParams is AllParams, built once.
+var allParams = func() []string {
 	out := make([]string, 0, len(known))
 	for k := range known {
 		out = append(out, k)
 	}
 	sortByLink(out)
 	return out
-}
+}()
 
 // Group is an either/or choice of inputs: a value given one way or
 // another. The link holds only the parameters of the side in use, so it

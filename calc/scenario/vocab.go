@@ -2,6 +2,7 @@ package scenario
 
 import (
 	"strings"
+	"sync"
 	"unicode"
 
 	"fieldhead/calc"
@@ -87,13 +88,32 @@ type Choice struct {
 // Choices lists the options of an enumerated parameter (view, units, liq,
 // solve, alpha, fm, mat, nps, sch, p1ref, p2ref, cvref, fit and the
 // segments' own), or nil.
+//
+// The lists depend on the parameter alone and are built once; callers must
+// not change the slice.
 func Choices(param string) []Choice {
 	p, _, ok := Lookup(param)
 	if !ok || p.choices == nil {
 		return nil
 	}
-	return p.choices()
+	base := param
+	if n, f := splitSegment(param); n > 0 {
+		base = f
+	}
+	choiceMu.Lock()
+	defer choiceMu.Unlock()
+	c, ok := choiceCache[base]
+	if !ok {
+		c = p.choices()
+		choiceCache[base] = c
+	}
+	return c
 }
+
+var (
+	choiceMu    sync.Mutex
+	choiceCache = map[string][]Choice{}
+)
 
 // printable reports whether s is short plain text (for the free-text name).
 func printable(s string) bool {
