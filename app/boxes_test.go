@@ -45,8 +45,9 @@ func pageScenario(b *tab) scenario.Scenario {
 // list's value. (The page's rule: a box is always the scenario.)
 func checkBoxes(t *testing.T, b *tab, after string) {
 	t.Helper()
-	// Let the page draw the action's result.
+	// Let the page draw the action's result and write its link.
 	time.Sleep(300 * time.Millisecond)
+	b.poll("!window.fieldheadPending", 5*time.Second)
 	sc := pageScenario(b)
 	got := pageInputs(b)
 	params := map[string]string{}

@@ -173,6 +173,8 @@ func TestBrowser(t *testing.T) {
 		if err != nil {
 			t.Fatalf("typing into %s: %v", sel, err)
 		}
+		// The link and the saved copy follow shortly (sheet.save).
+		_, _ = chromedp.Run(ctx, chromedp.Poll[bool]("!window.fieldheadPending", chromedp.WithPollingTimeout(5*time.Second)))
 	}
 	js := func(expr string) string {
 		t.Helper()

@@ -248,6 +248,8 @@ func (b *tab) typeInto(sel, v string) {
 	if err != nil {
 		b.t.Fatalf("typing into %s: %v", sel, err)
 	}
+	// The link and the saved copy follow shortly (sheet.save).
+	b.poll("!window.fieldheadPending", 5*time.Second)
 }
 
 // shot saves a screenshot of the viewport as name.png.

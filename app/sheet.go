@@ -27,15 +27,17 @@ type sheet struct {
 	linkErr string // a problem with the link as a whole (unknown parameter, …)
 	loaded  bool   // false while pre-rendered on the server, before the wasm runs
 
-	base     string // page URL without the query
-	query    string // the scenario's signed link, also in the URL and in localStorage
-	damaged  bool   // opened from a link that arrived damaged, not yet edited
-	copyNote string // result of the last "Copy link"
-	showLink bool   // show the link as selectable text
-	fault    *fault // the last contained panic, shown in a banner (guard.go)
-	update   bool   // a newer version of the site is installed (update.go)
-	wide     int    // chart width drawn last (see chartWidth)
-	bk       book   // the sheets kept on this device (book.go)
+	base     string      // page URL without the query
+	query    string      // the scenario's signed link, also in the URL and in localStorage
+	damaged  bool        // opened from a link that arrived damaged, not yet edited
+	copyNote string      // result of the last "Copy link"
+	showLink bool        // show the link as selectable text
+	fault    *fault      // the last contained panic, shown in a banner (guard.go)
+	update   bool        // a newer version of the site is installed (update.go)
+	wide     int         // chart width drawn last (see chartWidth)
+	bk       book        // the sheets kept on this device (book.go)
+	ctx      app.Context // the sheet's own context, from OnMount
+	pending  bool        // a write of the sheet is put off (save)
 }
 
 // newSheet is the route's component. In the browser it restores the
@@ -74,6 +76,15 @@ func newSheet() app.Composer {
 // OnMount records when the first result reached the screen, for the
 // browser test and for anyone timing the page.
 func (s *sheet) OnMount(ctx app.Context) {
+	s.ctx = ctx
+	if app.IsClient {
+		app.Window().Call("addEventListener", "pagehide", app.FuncOf(func(app.Value, []app.Value) any {
+			if s.pending {
+				s.flush()
+			}
+			return nil
+		}))
+	}
 	s.watchUpdates(ctx)
 	if app.IsClient && s.loaded {
 		s.startBook(ctx)
@@ -139,14 +150,52 @@ func (s *sheet) evaluate() {
 	s.testPanic("evaluate")
 	s.res = scenario.Evaluate(s.d.Scen)
 	s.query = s.d.Scen.Sign()
-	if app.IsClient {
-		replaceQuery(s.query)
-		if !s.damaged { // a damaged link never replaces a kept sheet
-			storageSet(storageKey, s.query)
-			s.bk.keep(s.d.Scen, s.res, s.damaged)
-		}
+	s.save()
+	s.build()
+}
+
+// save writes the sheet into the address bar, the saved copy and the site
+// book shortly after an edit, once its answer is on screen: the writes
+// cost an edit about as much as computing it, and a burst of typing needs
+// one write, not one per key. A page being left writes at once (pagehide).
+func (s *sheet) save() {
+	if !app.IsClient {
+		return
 	}
-	s.build() // after keep: the site book lists the sheet as kept
+	if s.ctx.Src() == nil { // before the page is mounted: no frame to wait for
+		s.flush()
+		return
+	}
+	if s.pending {
+		return
+	}
+	s.pending = true
+	app.Window().Set("fieldheadPending", true) // for the browser tests
+	ctx := s.ctx
+	app.Window().Call("setTimeout", once(func(app.Value) {
+		ctx.Dispatch(func(ctx app.Context) {
+			defer s.contain("keeping the sheet")
+			s.flush()
+			if s.vm.View != "book" {
+				ctx.PreventUpdate() // nothing on screen changes
+			} else {
+				s.build() // the book lists the sheet as kept now
+			}
+		})
+	}), 200)
+}
+
+// flush writes what save put off.
+func (s *sheet) flush() {
+	s.pending = false
+	if app.IsClient {
+		app.Window().Set("fieldheadPending", false)
+	}
+	replaceQuery(s.query)
+	if !s.damaged { // a damaged link never replaces a kept sheet
+		storageSet(storageKey, s.query)
+		s.bk.keep(s.d.Scen, s.res, s.damaged)
+	}
 }
 
 // build makes the view model, with what only the page knows: the link
