@@ -804,12 +804,12 @@ func (r *report) browser(link, origin string) []string {
 	r.row("edit → updated result p50, ms ("+th+", "+strconv.Itoa(len(times))+" edits)", f1(p50), "", nil)
 	r.row("edit → updated result p95, ms ("+th+")", f1(p95), "≤ 25", ptr(p95 <= budgetEditP95))
 	if p95 > budgetEditP95 {
-		r.notes = append(r.notes, "edit p95 over budget: an edit runs scenario.Evaluate of the whole sheet and writes the link "+
-			"(history.replaceState, localStorage) before go-app draws, no sooner than its fixed wait for its next frame (1/120 s) "+
-			"after the event; the inputs, pickers and top bar are components go-app skips when unchanged (app/parts.go, "+
-			"app/selectbox.go), the rest of the sheet ("+strconv.Itoa(elements)+" elements on the page) is compared again; "+
-			"the browser's input, frame and paint take about as long again at 4× throttle. The figure also moves with the "+
-			"machine's other load.")
+		r.notes = append(r.notes, "edit p95 over budget: an edit runs scenario.Evaluate of the whole sheet (the system and "+
+			"NPSH curves solve the line at 41 flows) and builds the view model, then go-app draws no sooner than its fixed "+
+			"wait for its next frame (1/120 s); cards and inputs are components go-app skips when their part of the view "+
+			"model is unchanged ("+strconv.Itoa(elements)+" elements on the page); the link, the saved copy and the site book "+
+			"are written 200 ms later; the browser's input, frame and paint take about as long again at 4× throttle. "+
+			"The figure also moves with the machine's other load.")
 	}
 	_ = origin
 	return fetched
