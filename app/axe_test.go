@@ -12,7 +12,6 @@ import (
 	"strings"
 	"testing"
 
-	"fieldhead/calc/scenario"
 	"fieldhead/calc/scenario/present"
 
 	"github.com/chromedp/cdproto/emulation"
@@ -115,24 +114,18 @@ func TestAxe(t *testing.T) {
 		if err := chromedp.Do(b.ctx, chromedp.EmulateViewport(size.w, size.h)); err != nil {
 			t.Fatal(err)
 		}
-		for _, demo := range []struct {
-			name string
-			sc   scenario.Scenario
-		}{{"demo", scenario.Demo()}, {"turbine demo", scenario.TurbineDemo()}} {
-			for _, v := range present.Views {
-				s := demo.sc.Clone()
-				_ = s.Set("view", v.Key)
-				b.navigate(srv.URL + "/?" + s.Encode())
-				where := fmt.Sprintf("%s, %s view, %d×%d", demo.name, v.Key, size.w, size.h)
-				check(where)
-				if v.Key == "report" {
-					if _, err := chromedp.Call(b.ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{Media: "print"}); err != nil {
-						t.Fatal(err)
-					}
-					check(where + ", print media")
-					if _, err := chromedp.Call(b.ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{}); err != nil {
-						t.Fatal(err)
-					}
+		for _, dv := range demoViews() {
+			demo, v := dv.demo, dv.view
+			b.navigate(srv.URL + "/?" + dv.link)
+			where := fmt.Sprintf("%s, %s view, %d×%d", demo, v.Key, size.w, size.h)
+			check(where)
+			if v.Key == "report" {
+				if _, err := chromedp.Call(b.ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{Media: "print"}); err != nil {
+					t.Fatal(err)
+				}
+				check(where + ", print media")
+				if _, err := chromedp.Call(b.ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{}); err != nil {
+					t.Fatal(err)
 				}
 			}
 		}

@@ -13,16 +13,35 @@ import (
 // their titles; this file only hands them to the SVG drawing of app/chart
 // at the width the window needs.
 
-// chartWidth is the width of a chart's viewBox: narrower on a phone, so
-// that its text (fixed in viewBox px) stays readable when the chart is
-// scaled down to the screen.
+// chartWidth is the width of a chart's viewBox for the window the page
+// has now (see chartWidthFor).
 func chartWidth() int {
+	w := 1024
 	if app.IsClient {
-		if w := app.Window().Get("innerWidth"); w.Truthy() && w.Int() < 640 {
-			return 440
+		if iw := app.Window().Get("innerWidth"); iw.Truthy() {
+			w = iw.Int()
 		}
 	}
-	return 720
+	return chartWidthFor(w)
+}
+
+// chartWidthFor is the width of a chart's viewBox in a window w CSS px
+// wide. Under 1000 px the cards stand in one column and a chart is drawn
+// about as wide as it is shown, so that its smallest text (14 viewBox px,
+// app/chart) is at least 12.5 CSS px on the screen: the viewBox is the
+// card's inner width (the window less the sheet's and the card's padding
+// and border, web/fieldhead.css) times 14/12.5, in steps of 20 px so that
+// a resize redraws the charts now and then rather than on every pixel.
+func chartWidthFor(w int) int {
+	if w >= 1000 {
+		return 720
+	}
+	inner := w - 64 // sheet padding 2×16, card border 2×2 and padding 2×14
+	if w <= 600 {
+		inner = w - 44 // phones: sheet padding 2×10, card padding 2×10
+	}
+	vb := inner * 14 * 10 / 125 / 20 * 20
+	return max(280, min(720, vb))
 }
 
 // chartFigure draws a chart with its caption.
