@@ -33,6 +33,7 @@ type sheet struct {
 	fault    *fault      // the last contained panic, shown in a banner (guard.go)
 	update   bool        // a newer version of the site is installed (update.go)
 	wide     int         // chart width drawn last (see chartWidth)
+	install  bool        // the browser offers to install the site (chrome.go)
 	mounted  app.Context // the sheet's own context, from OnMount
 }
 
@@ -72,6 +73,8 @@ func newSheet() app.Composer {
 func (s *sheet) OnMount(ctx app.Context) {
 	s.mounted = ctx
 	s.watchUpdates(ctx)
+	s.install = installable(ctx)
+	quietFirstInstall()
 	if app.IsClient && s.loaded {
 		if perf := app.Window().Get("performance"); perf.Truthy() {
 			app.Window().Set("fieldheadFirstResult", perf.Call("now").Float())
@@ -106,6 +109,7 @@ func (s *sheet) evaluate() {
 	if app.IsClient {
 		replaceQuery(s.query)
 		storageSet(storageKey, s.query)
+		app.Window().Get("document").Set("title", pageTitle(s.vm.Name))
 	}
 }
 
