@@ -26,21 +26,22 @@ func chartWidth() int {
 }
 
 // chartWidthFor is the width of a chart's viewBox in a window w CSS px
-// wide. Under 1000 px the cards stand in one column and a chart is drawn
-// about as wide as it is shown, so that its smallest text (14 viewBox px,
-// app/chart) is at least 12.5 CSS px on the screen: the viewBox is the
-// card's inner width (the window less the sheet's and the card's padding
-// and border, web/fieldhead.css) times 14/12.5, in steps of 20 px so that
-// a resize redraws the charts now and then rather than on every pixel.
+// wide: the width the chart is shown at (estimated from the layout of
+// web/fieldhead.css) times 14/12.5, so that its smallest text, 14 viewBox
+// px (app/chart), is at least 12.5 CSS px on the screen; in steps of 20 px
+// so that a resize redraws the charts now and then, not on every pixel;
+// between 280 and 720.
 func chartWidthFor(w int) int {
-	if w >= 1000 {
-		return 720
+	var shown float64
+	switch {
+	case w <= 600: // phones: sheet padding 2×10, card padding 2×10, borders 2×2
+		shown = float64(w - 44)
+	case w < 1000: // one column: sheet padding 2×16, card padding 2×14, borders
+		shown = float64(w - 64)
+	default: // two columns, the charts in the wider (1.45 : 1, gap 14) of a sheet at most 1400 wide
+		shown = float64(min(w, 1432)-32-14)*1.45/2.45 - 32
 	}
-	inner := w - 64 // sheet padding 2×16, card border 2×2 and padding 2×14
-	if w <= 600 {
-		inner = w - 44 // phones: sheet padding 2×10, card padding 2×10
-	}
-	vb := inner * 14 * 10 / 125 / 20 * 20
+	vb := int(shown*14/12.5) / 20 * 20
 	return max(280, min(720, vb))
 }
 

@@ -43,11 +43,11 @@ func (f *field) Render() (ui app.UI) {
 	bad := x.Error != ""
 	var body []app.UI
 	if x.Kind == present.FieldPicker {
-		// On a phone a choice can be longer than the picker is wide, and
-		// a <select> cannot wrap its text: the stylesheet then lays the
-		// picker, transparent, over a face that shows the choice whole on
-		// as many lines as it needs (the face is hidden from screen
-		// readers, which read the picker itself).
+		// A choice can be longer than the picker is wide (on a phone, in
+		// a segment's card), and a <select> cannot wrap its text: the
+		// stylesheet lays the picker, transparent, over a face that shows
+		// the choice whole on as many lines as it needs (the face is
+		// hidden from screen readers, which read the picker itself).
 		body = []app.UI{
 			app.Label().For(x.ID).Class("lbl").Text(x.Label),
 			app.Div().Class("pickwrap").Body(

@@ -117,7 +117,7 @@ const chartTextJS = `(() => {
 })()`
 
 // TestPhoneWidths opens every view of both demos at phone widths from
-// 320 CSS px: nothing may scroll sideways or be cut (WCAG 2.1 SC 1.4.10
+// 320 CSS px, and on a tablet in landscape (1024): nothing may scroll sideways or be cut (WCAG 2.1 SC 1.4.10
 // Reflow: content at 320 CSS px without scrolling in two directions;
 // data tables may scroll, ours fold into one block per row instead), no
 // picker may cut its text, and from 360 px the charts' smallest text is at
@@ -129,7 +129,7 @@ func TestPhoneWidths(t *testing.T) {
 	defer srv.Close()
 	b := newTab(t)
 	pages := 0
-	for _, w := range []int64{320, 360, 390, 412} {
+	for _, w := range []int64{320, 360, 390, 412, 1024} {
 		if err := chromedp.Do(b.ctx, chromedp.EmulateViewport(w, 740, chromedp.EmulatePortrait, chromedp.EmulateMobile, chromedp.EmulateTouch)); err != nil {
 			t.Fatal(err)
 		}
@@ -159,7 +159,7 @@ func TestPhoneWidths(t *testing.T) {
 					t.Errorf("%s: the charts' smallest text is %.1f CSS px, under 12", where, px)
 				}
 			}
-			if demo == "demo" && (w == 320 || w == 360) {
+			if demo == "demo" && (w == 320 || w == 360 || w == 1024) {
 				b.shot(fmt.Sprintf("phone-%s-%d", v.Key, w))
 			}
 		}
