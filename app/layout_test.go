@@ -3,10 +3,14 @@
 package main
 
 import (
+	"bytes"
 	"fmt"
+	"math"
 	"net/http/httptest"
 	"os"
 	"path/filepath"
+	"regexp"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -195,8 +199,9 @@ var papers = []struct {
 // what is beyond it); the cautions must print; the profile chart must
 // tell the energy and hydraulic grade lines apart without colour (WCAG
 // 2.1 SC 1.4.1 Use of Color: different dash patterns and a label on each
-// line). It then prints the Report to PDF on each paper into the
-// screenshots folder.
+// line). It then prints the Report to PDF on each paper, checks that every
+// page is of that paper (checkPDF) and writes the PDF to the screenshots
+// folder for a person to look at.
 func TestPrintFits(t *testing.T) {
 	site := testSite(t)
 	srv := httptest.NewServer(siteHandler(site, ""))
@@ -240,9 +245,7 @@ func TestPrintFits(t *testing.T) {
 				if err != nil {
 					t.Fatalf("%s: printing to PDF: %v", where, err)
 				}
-				if n := strings.Count(string(pdf), "/Type /Page\n") + strings.Count(string(pdf), "/Type /Page>>") + strings.Count(string(pdf), "/Type /Page\r"); n == 0 && len(pdf) < 1000 {
-					t.Errorf("%s: the PDF is empty", where)
-				}
+				checkPDF(t, where, pdf, paper.wMM, paper.hMM)
 				name := fmt.Sprintf("report-%s-%s.pdf", strings.ReplaceAll(demo, " ", "-"), paper.name)
 				if err := os.WriteFile(filepath.Join(b.shots, name), pdf, 0o644); err != nil {
 					t.Fatal(err)
@@ -263,3 +266,32 @@ const (
 	egl = `(() => { const p = document.querySelector("#report-charts svg [data-series=egl]"), h = document.querySelector("#report-charts svg [data-series=hgl]"); return !!p && !!h && (p.getAttribute("stroke-dasharray") || "") !== (h.getAttribute("stroke-dasharray") || ""); })()`
 	hgl = `(() => !!document.querySelector("#report-charts svg [data-line=egl] text") && !!document.querySelector("#report-charts svg [data-line=hgl] text"))()`
 )
+
+// checkPDF reads a printed PDF's pages (ISO 32000-1: the page tree's /Count
+// and each page's /MediaBox, in points of 1/72 in): at least one page, and
+// every page of the paper asked for, portrait, within a point.
+func checkPDF(t *testing.T, where string, pdf []byte, wMM, hMM float64) {
+	t.Helper()
+	if !bytes.HasPrefix(pdf, []byte("%PDF-")) {
+		t.Errorf("%s: not a PDF", where)
+		return
+	}
+	count := 0
+	for _, m := range regexp.MustCompile(`/Count (\d+)`).FindAllSubmatch(pdf, -1) {
+		n, _ := strconv.Atoi(string(m[1]))
+		count = max(count, n)
+	}
+	boxes := regexp.MustCompile(`/MediaBox \[0 0 ([0-9.]+) ([0-9.]+)\]`).FindAllSubmatch(pdf, -1)
+	if count == 0 || len(boxes) != count {
+		t.Errorf("%s: the PDF has %d pages and %d page sizes", where, count, len(boxes))
+	}
+	wPt, hPt := wMM/25.4*72, hMM/25.4*72
+	for i, m := range boxes {
+		w, _ := strconv.ParseFloat(string(m[1]), 64)
+		h, _ := strconv.ParseFloat(string(m[2]), 64)
+		if math.Abs(w-wPt) > 1 || math.Abs(h-hPt) > 1 {
+			t.Errorf("%s: page %d is %.1f × %.1f pt, want %.1f × %.1f", where, i+1, w, h, wPt, hPt)
+		}
+	}
+	t.Logf("%s: %d pages", where, count)
+}
