@@ -20,7 +20,7 @@ ADDR   ?= :8000
 # reference libraries for make refs and the reference checks.
 APT_PKGS := chromium python3-iapws python3-mpmath python3-scipy python3-fluids python3-gsw python3-uncertainties units
 
-.PHONY: all run site wasm dist test deps fmt vet unit fuzz browser bench refs refs-check clean
+.PHONY: all run site wasm dist test deps npm fmt vet unit fuzz browser bench refs refs-check clean
 
 all: site
 
@@ -42,6 +42,7 @@ dist: wasm
 deps:
 	@missing=""; \
 	for p in $(APT_PKGS); do dpkg -s $$p >/dev/null 2>&1 || missing="$$missing $$p"; done; \
+	command -v npm >/dev/null 2>&1 || missing="$$missing npm"; \
 	if [ -n "$$missing" ]; then \
 		echo "Installing Debian packages:$$missing"; \
 		sudo=""; [ "$$(id -u)" -eq 0 ] || sudo=sudo; \
@@ -58,7 +59,12 @@ vet:
 unit:
 	$(GO) test $$($(GO) list ./... | grep -v '^fieldhead/app$$')
 
-browser: site
+# The page checks' JavaScript tools (axe-core), exactly as package-lock.json
+# pins them, into node_modules/ (not in git).
+npm:
+	npm ci --no-audit --no-fund
+
+browser: site npm
 	FIELDHEAD_BROWSER=1 FIELDHEAD_SITE="$(abspath $(SITE))" $(GO) test -count=1 -v ./app
 
 # Each fuzz target for a bounded time. A failing input is written under the
@@ -84,7 +90,7 @@ bench: site
 refs-check: refs
 	git diff --exit-code -- testdata
 
-test: deps fmt vet unit refs-check fuzz browser
+test: deps npm fmt vet unit refs-check fuzz browser
 
 refs: deps
 	@set -e; for f in testdata/refs/gen/*; do \

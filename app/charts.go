@@ -13,16 +13,36 @@ import (
 // their titles; this file only hands them to the SVG drawing of app/chart
 // at the width the window needs.
 
-// chartWidth is the width of a chart's viewBox: narrower on a phone, so
-// that its text (fixed in viewBox px) stays readable when the chart is
-// scaled down to the screen.
+// chartWidth is the width of a chart's viewBox for the window the page
+// has now (see chartWidthFor).
 func chartWidth() int {
+	w := 1024
 	if app.IsClient {
-		if w := app.Window().Get("innerWidth"); w.Truthy() && w.Int() < 640 {
-			return 440
+		if iw := app.Window().Get("innerWidth"); iw.Truthy() {
+			w = iw.Int()
 		}
 	}
-	return 720
+	return chartWidthFor(w)
+}
+
+// chartWidthFor is the width of a chart's viewBox in a window w CSS px
+// wide: the width the chart is shown at (estimated from the layout of
+// web/fieldhead.css) times 14/12.5, so that its smallest text, 14 viewBox
+// px (app/chart), is at least 12.5 CSS px on the screen; in steps of 20 px
+// so that a resize redraws the charts now and then, not on every pixel;
+// between 280 and 720.
+func chartWidthFor(w int) int {
+	var shown float64
+	switch {
+	case w <= 600: // phones: sheet padding 2×10, card padding 2×10, borders 2×2
+		shown = float64(w - 44)
+	case w < 1000: // one column: sheet padding 2×16, card padding 2×14, borders
+		shown = float64(w - 64)
+	default: // two columns, the charts in the wider (1.45 : 1, gap 14) of a sheet at most 1400 wide
+		shown = float64(min(w, 1432)-32-14)*1.45/2.45 - 32
+	}
+	vb := int(shown*14/12.5) / 20 * 20
+	return max(280, min(720, vb))
 }
 
 // chartFigure draws a chart with its caption.

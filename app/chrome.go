@@ -42,7 +42,7 @@ func (t *topBar) Render() (ui app.UI) {
 }
 
 // brandMark is the icon, drawn inline so it needs no request.
-const brandMark = `<svg class="mark" viewBox="0 0 100 100" aria-hidden="true"><rect width="100" height="100" rx="14" fill="currentColor"/><g fill="#fbfaf4"><rect x="18" y="70" width="24" height="6"/><rect x="58" y="26" width="24" height="6"/><rect x="46.5" y="36" width="7" height="42"/><polygon points="50,18 62,40 38,40"/></g></svg>`
+const brandMark = `<svg class="mark" viewBox="0 0 100 100" aria-hidden="true"><rect width="100" height="100" rx="14" fill="currentColor"/><g fill="#fbfaf4" transform="translate(4 4) scale(.92)"><rect x="18" y="70" width="24" height="6"/><rect x="58" y="26" width="24" height="6"/><rect x="46.5" y="36" width="7" height="42"/><polygon points="50,18 62,40 38,40"/></g></svg>`
 
 // shareRow holds the actions on the whole sheet.
 func (s *sheet) shareRow() app.UI {
@@ -52,6 +52,9 @@ func (s *sheet) shareRow() app.UI {
 		app.Button().Type("button").ID("demo").Class("act").Text("Demo").OnClick(s.onDemo),
 		app.Button().Type("button").ID("blank").Class("act").Text("New sheet").OnClick(s.onBlank),
 	}
+	if s.install {
+		body = append(body, app.Button().Type("button").ID("install").Class("act").Text("Install on this device").OnClick(s.onInstall))
+	}
 	if s.copyNote != "" {
 		body = append(body, app.Span().Class("note").ID("copy-note").Attr("role", "status").Text(s.copyNote))
 	}
@@ -60,6 +63,66 @@ func (s *sheet) shareRow() app.UI {
 			ReadOnly(true).Aria("label", "share link").Value(s.link()))
 	}
 	return app.Div().Class("share").Body(body...)
+}
+
+// pageTitle is the document's title: the sheet's name, then ours, so that
+// a tab, a bookmark and a printed page's header name the sheet.
+func pageTitle(name string) string {
+	if name == "" {
+		return "Fieldhead"
+	}
+	return name + " — Fieldhead"
+}
+
+// Installing. go-app's app.js keeps the browser's beforeinstallprompt
+// event (and stops the browser's own banner); the sheet offers its own
+// button while the browser would install the site, and drops it once the
+// site is installed or the prompt is used. Apple's browsers have no prompt
+// (installing is "Add to Home Screen" in their share menu): no button.
+
+// installable reports whether the browser has offered installation.
+func installable(ctx app.Context) bool {
+	return app.IsClient && ctx.IsAppInstallable() && !ctx.IsAppleBrowser()
+}
+
+// OnAppInstallChange is go-app's signal that the offer changed: a
+// beforeinstallprompt event, or the site installed.
+func (s *sheet) OnAppInstallChange(ctx app.Context) {
+	defer s.contain("updating the install button")
+	s.install = installable(ctx)
+}
+
+// onInstall shows the browser's install prompt; the offer is used up
+// whatever the person answers.
+func (s *sheet) onInstall(ctx app.Context, e app.Event) {
+	defer s.contain("installing Fieldhead")
+	if installable(ctx) {
+		ctx.ShowAppInstallPrompt()
+	}
+	s.install = false
+}
+
+// quietFirstInstall stops go-app's "has been updated, reload" message on a
+// page that no service worker served: on a first visit our worker installs
+// and takes the page over (clients.claim, worker.go), which go-app's
+// app.js takes for an update. A real update still shows: update.go checks
+// the caches on the worker's controllerchange. (app.js signals through
+// window.goappOnUpdate; a signal before the program started is go-app's
+// to report and is not caught here.)
+func quietFirstInstall() {
+	if !app.IsClient {
+		return
+	}
+	win := app.Window()
+	perf := win.Get("performance")
+	if !perf.Truthy() || !perf.Get("getEntriesByType").Truthy() || !win.Get("goappOnUpdate").Truthy() {
+		return
+	}
+	nav := perf.Call("getEntriesByType", "navigation")
+	if nav.Length() > 0 && nav.Index(0).Get("workerStart").Float() > 0 {
+		return // a worker served this page: an installed worker is news
+	}
+	win.Set("goappOnUpdate", app.FuncOf(func(app.Value, []app.Value) any { return nil })) // kept for the page's life
 }
 
 // linkProblem reports a link that could not be read whole.

@@ -43,9 +43,16 @@ func (f *field) Render() (ui app.UI) {
 	bad := x.Error != ""
 	var body []app.UI
 	if x.Kind == present.FieldPicker {
+		// A choice can be longer than the picker is wide (on a phone, in
+		// a segment's card), and a <select> cannot wrap its text: the
+		// stylesheet lays the picker, transparent, over a face that shows
+		// the choice whole on as many lines as it needs (the face is
+		// hidden from screen readers, which read the picker itself).
 		body = []app.UI{
 			app.Label().For(x.ID).Class("lbl").Text(x.Label),
-			&selectBox{ID: x.ID, Class: classIf("pick", bad, "bad"), Options: x.Options, Param: x.Param, S: f.S},
+			app.Div().Class("pickwrap").Body(
+				&selectBox{ID: x.ID, Class: classIf("pick", bad, "bad"), Options: x.Options, Param: x.Param, S: f.S},
+				app.Div().Class("pickface").Aria("hidden", true).Text(chosen(x.Options))),
 		}
 	} else {
 		cls := "box"
@@ -131,6 +138,7 @@ func (b *selectBox) Render() app.UI {
 	if b.Label != "" {
 		sel = sel.Aria("label", b.Label)
 	}
+
 	return sel.Body(opts...)
 }
 
@@ -140,4 +148,17 @@ func classIf(base string, cond bool, extra string) string {
 		return base + " " + extra
 	}
 	return base
+}
+
+// chosen is the text of the selected option (the first when none is).
+func chosen(opts []present.Option) string {
+	for _, o := range opts {
+		if o.Selected {
+			return o.Text
+		}
+	}
+	if len(opts) > 0 {
+		return opts[0].Text
+	}
+	return ""
 }

@@ -19,8 +19,10 @@ const (
 
 // iconPNG draws the Fieldhead mark at size×size pixels: on the accent
 // ground, a low water level at the left, a high one at the right, and an
-// upward arrow between them, the head a pump adds. All shapes sit inside
-// the central 80 % so the icon survives a maskable crop.
+// upward arrow between them, the head a pump adds. The mark is drawn at
+// markScale about the centre so that all of it lies within the maskable
+// icon's safe zone, a circle of radius 40 % of the size (W3C Web App
+// Manifest, "purpose: maskable"); the same PNG serves as the plain icon.
 func iconPNG(size int) ([]byte, error) {
 	img := image.NewRGBA(image.Rect(0, 0, size, size))
 	ground := color.RGBA{0x0f, 0x5c, 0x7a, 0xff}
@@ -43,9 +45,15 @@ func iconPNG(size int) ([]byte, error) {
 	return buf.Bytes(), nil
 }
 
+// markScale shrinks the mark about the icon's centre: its farthest corner,
+// 41.2 % of the size from the centre at full scale, comes to 37.9 %.
+const markScale = 0.92
+
 // markAt reports whether the point (u, v) of the unit square, y downwards,
-// is paper-coloured. It matches web/icon.svg.
+// is paper-coloured. It matches web/icon.svg and the brand mark
+// (app/chrome.go), which draw the same shapes scaled by markScale.
 func markAt(u, v float64) bool {
+	u, v = 0.5+(u-0.5)/markScale, 0.5+(v-0.5)/markScale
 	in := func(x0, y0, x1, y1 float64) bool { return u >= x0 && u <= x1 && v >= y0 && v <= y1 }
 	switch {
 	case in(0.18, 0.70, 0.42, 0.76): // low level

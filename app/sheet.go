@@ -38,6 +38,7 @@ type sheet struct {
 	bk       book        // the sheets kept on this device (book.go)
 	ctx      app.Context // the sheet's own context, from OnMount
 	pending  bool        // a write of the sheet is put off (save)
+	install  bool        // the browser offers to install the site (chrome.go)
 }
 
 // newSheet is the route's component. In the browser it restores the
@@ -86,6 +87,8 @@ func (s *sheet) OnMount(ctx app.Context) {
 		}))
 	}
 	s.watchUpdates(ctx)
+	s.install = installable(ctx)
+	quietFirstInstall()
 	if app.IsClient && s.loaded {
 		s.startBook(ctx)
 	}
@@ -150,8 +153,8 @@ func (s *sheet) evaluate() {
 	s.testPanic("evaluate")
 	s.res = scenario.Evaluate(s.d.Scen)
 	s.query = s.d.Scen.Sign()
-	s.save()
 	s.build()
+	s.save()
 }
 
 // save writes the sheet into the address bar, the saved copy and the site
@@ -192,6 +195,7 @@ func (s *sheet) flush() {
 		app.Window().Set("fieldheadPending", false)
 	}
 	replaceQuery(s.query)
+	app.Window().Get("document").Set("title", pageTitle(s.vm.Name))
 	if !s.damaged { // a damaged link never replaces a kept sheet
 		storageSet(storageKey, s.query)
 		s.bk.keep(s.d.Scen, s.res, s.damaged)

@@ -93,11 +93,13 @@ func (r *renderer) drawAxes(b []byte, p *panel) []byte {
 	// Axis titles: the y titles stand level above their axes, so they read
 	// without turning the tablet; the x title sits under the axis end.
 	if p.yTitleY > 0 {
-		if p.c.YLabel != "" {
-			b = r.text(b, pad, p.yTitleY, p.c.YLabel, "start", fontText, true, Ink)
+		for i, l := range p.yTitleLeft {
+			b = r.text(b, pad, p.yTitleY+18*float64(i), l, "start", fontText, true, Ink)
 		}
 		if p.hasY2 && p.c.Y2 != nil && p.c.Y2.Label != "" {
-			b = r.text(b, r.w-pad, p.yTitleY, p.c.Y2.Label, "end", fontText, true, Ink)
+			for i, l := range p.yTitleRight {
+				b = r.text(b, r.w-pad, p.yTitleY+18*float64(i), l, "end", fontText, true, Ink)
+			}
 		}
 	}
 	if p.xTitleY > 0 {

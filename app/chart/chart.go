@@ -65,6 +65,14 @@ type Series struct {
 	Heavy bool
 	// Y2 plots the series against the chart's second (right) y axis.
 	Y2 bool
+	// Key names the series in the SVG (data-series), for tests and styles.
+	Key string
+	// Tag is a short name written on the line itself, at its last point in
+	// the plot: above the line, or below it when TagBelow is set. Two lines
+	// that run close together (the energy and hydraulic grade lines) are
+	// told apart by it in print and in greyscale.
+	Tag      string
+	TagBelow bool
 }
 
 // Marker is a single labelled point, for example an operating point.

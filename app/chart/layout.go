@@ -30,19 +30,21 @@ type legendItem struct {
 }
 
 type panel struct {
-	c          *Chart
-	top        float64
-	titleY     float64 // baseline of the chart title, 0 if none
-	legend     []legendItem
-	yTitleY    float64 // baseline of the y axis titles, 0 if none
-	plot       rect
-	y, y2      scale
-	hasY2      bool
-	xTicksY    float64 // baseline of x tick labels
-	xTitleY    float64 // baseline of the x title, 0 if none
-	bottom     float64
-	yExt, y2Ex extent
-	segs       [][4]float64 // drawn line pieces, obstacles for labels
+	c                       *Chart
+	top                     float64
+	titleY                  float64 // baseline of the chart title, 0 if none
+	legend                  []legendItem
+	yTitleY                 float64  // baseline of the y axis titles, 0 if none
+	titleLines              []string // the chart title, wrapped to the width
+	yTitleLeft, yTitleRight []string // the y axis titles, wrapped
+	plot                    rect
+	y, y2                   scale
+	hasY2                   bool
+	xTicksY                 float64 // baseline of x tick labels
+	xTitleY                 float64 // baseline of the x title, 0 if none
+	bottom                  float64
+	yExt, y2Ex              extent
+	segs                    [][4]float64 // drawn line pieces, obstacles for labels
 }
 
 type renderer struct {
@@ -180,12 +182,25 @@ func (r *renderer) render(b []byte) []byte {
 		y += pad
 		if i == 0 && c.Title != "" {
 			p.titleY = y + 18
-			y += 34
+			p.titleLines = wrapText(c.Title, fontTitle, r.w-2*pad)
+			y += 34 + 24*float64(len(p.titleLines)-1)
 		}
 		y = r.layoutLegend(p, y)
 		if p.c.YLabel != "" || (p.hasY2 && p.c.Y2 != nil && p.c.Y2.Label != "") {
+			// The axis titles share the width: each keeps to its half when
+			// there are two, and wraps onto more lines when it is longer.
+			room := r.w - 2*pad
+			var right string
+			if p.hasY2 && p.c.Y2 != nil {
+				right = p.c.Y2.Label
+			}
+			if right != "" && textWidth(p.c.YLabel, fontText)+textWidth(right, fontText)+16 > room {
+				room = (room - 16) / 2
+			}
+			p.yTitleLeft = wrapText(p.c.YLabel, fontText, room)
+			p.yTitleRight = wrapText(right, fontText, room)
 			p.yTitleY = y + 14
-			y += 26
+			y += 26 + 18*float64(max(len(p.yTitleLeft), len(p.yTitleRight))-1)
 		} else {
 			y += 10
 		}
@@ -318,4 +333,28 @@ func (r *renderer) yScale(p *panel, y2 bool) *scale {
 		return &p.y2
 	}
 	return &p.y
+}
+
+// wrapText breaks s at spaces into lines no wider than room (a single word
+// wider than room keeps a line of its own). The titles are bold, about a
+// tenth wider than textWidth's estimate: the room is taken 12 % narrower.
+func wrapText(s string, size, room float64) []string {
+	room /= 1.12
+	if s == "" {
+		return nil
+	}
+	var lines []string
+	line := ""
+	for _, w := range strings.Fields(s) {
+		if line != "" && textWidth(line+" "+w, size) > room {
+			lines = append(lines, line)
+			line = w
+			continue
+		}
+		if line != "" {
+			line += " "
+		}
+		line += w
+	}
+	return append(lines, line)
 }

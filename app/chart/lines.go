@@ -94,6 +94,11 @@ func (r *renderer) drawSeries(b []byte, p *panel) []byte {
 		if len(b) > start {
 			b = append(b, '"')
 			b = appendStroke(b, s, col)
+			if s.Key != "" {
+				b = append(b, ` data-series="`...)
+				b = appendText(b, s.Key)
+				b = append(b, '"')
+			}
 			b = append(b, "/>"...)
 		} else {
 			b = b[:mark]
@@ -108,6 +113,40 @@ func (r *renderer) drawSeries(b []byte, p *panel) []byte {
 			b = append(b, `" fill="`...)
 			b = append(b, col...)
 			b = append(b, `"/>`...)
+		}
+	}
+	return b
+}
+
+// drawTags writes each tagged series' short name at its last point inside
+// the plot, above the line or below it, with a paper halo.
+func (r *renderer) drawTags(b []byte, p *panel) []byte {
+	for i := range p.c.Series {
+		s := &p.c.Series[i]
+		if s.Tag == "" || s.Style == Points {
+			continue
+		}
+		ys := r.yScale(p, s.Y2)
+		for j := min(len(s.X), len(s.Y)) - 1; j >= 0; j-- {
+			if !finite(s.X[j]) || !finite(s.Y[j]) {
+				continue
+			}
+			x, y := r.x.px(s.X[j]), ys.px(s.Y[j])
+			if !p.plot.contains(x, y) {
+				continue
+			}
+			dy := -7.0
+			if s.TagBelow {
+				dy = fontSmall + 5
+			}
+			b = append(b, `<g data-line="`...)
+			b = appendText(b, s.Key)
+			b = append(b, `">`...)
+			b = r.haloText(b, x-4, y+dy, []string{s.Tag}, "end", fontSmall, true, r.colour(s.Accent))
+			w := textWidth(s.Tag, fontSmall)
+			r.placed = append(r.placed, rect{x - 4 - w, y + dy - fontSmall, x - 4, y + dy + 3})
+			b = append(b, "</g>"...)
+			break
 		}
 	}
 	return b

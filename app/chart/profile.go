@@ -67,8 +67,10 @@ func ProfileChart(in ProfileInput) Chart {
 		c.Series = append(c.Series, s)
 	}
 	add(in.Pipe, Series{Name: name(in.PipeName, "pipe"), Heavy: true})
-	add(in.EGL, Series{Name: name(in.EGLName, "energy grade line (EGL)"), Style: Dashed})
-	add(in.HGL, Series{Name: name(in.HGLName, "hydraulic grade line (HGL)"), Accent: true})
+	// The EGL lies a velocity head above the HGL, often less than a line's
+	// width at the chart's scale: each carries its tag, EGL above, HGL below.
+	add(in.EGL, Series{Name: name(in.EGLName, "energy grade line (EGL)"), Style: Dashed, Key: "egl", Tag: "EGL"})
+	add(in.HGL, Series{Name: name(in.HGLName, "hydraulic grade line (HGL)"), Accent: true, Key: "hgl", Tag: "HGL", TagBelow: true})
 	add(in.Vapour, Series{Name: name(in.VapourName, "vapour-pressure line"), Style: Dotted})
 	for _, m := range in.Nodes {
 		if m.Shape == AutoShape {

@@ -174,7 +174,9 @@ func (r *renderer) draw(b []byte) []byte {
 	b = r.header(b)
 	c := r.c
 	if c.Title != "" {
-		b = r.text(b, pad, r.panels[0].titleY, c.Title, "start", fontTitle, true, Ink)
+		for i, l := range r.panels[0].titleLines {
+			b = r.text(b, pad, r.panels[0].titleY+24*float64(i), l, "start", fontTitle, true, Ink)
+		}
 	}
 	var labels []pendingLabel
 	for _, p := range r.panels {
@@ -182,6 +184,7 @@ func (r *renderer) draw(b []byte) []byte {
 		b = r.drawAreas(b, p)
 		b = r.drawGrid(b, p)
 		b = r.drawSeries(b, p)
+		b = r.drawTags(b, p)
 		b, labels = r.drawMarkers(b, p, labels)
 		b = r.drawAxes(b, p)
 		b = r.drawLegend(b, p)
