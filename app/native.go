@@ -3,8 +3,10 @@
 package main
 
 import (
+	"bytes"
 	"crypto/sha256"
 	"encoding/hex"
+	"encoding/json"
 	"errors"
 	"flag"
 	"fmt"
@@ -192,6 +194,9 @@ func writeSite(out, wasmPath, assets, prefix string) error {
 	if err := addCSP(out); err != nil {
 		return err
 	}
+	if err := fixMetadata(out, prefix); err != nil {
+		return err
+	}
 	if err := patchSiteLoader(out); err != nil {
 		return err
 	}
@@ -241,3 +246,38 @@ var compressCache = func() string {
 	}
 	return ""
 }()
+
+// fixMetadata gives the manifest an id (the site's path, so an installed
+// app keeps its identity across versions) and drops go-app's placeholder
+// og:url and og:image, which name no address ("https://").
+func fixMetadata(out, prefix string) error {
+	mp := filepath.Join(out, "manifest.webmanifest")
+	b, err := os.ReadFile(mp)
+	if err != nil {
+		return err
+	}
+	var m map[string]any
+	if err := json.Unmarshal(b, &m); err != nil {
+		return err
+	}
+	m["id"] = prefix + "/"
+	if b, err = json.Marshal(m); err != nil {
+		return err
+	}
+	if err := os.WriteFile(mp, b, 0o644); err != nil {
+		return err
+	}
+	return filepath.WalkDir(out, func(p string, d fs.DirEntry, err error) error {
+		if err != nil || d.IsDir() || !strings.HasSuffix(p, ".html") {
+			return err
+		}
+		page, err := os.ReadFile(p)
+		if err != nil {
+			return err
+		}
+		for _, tag := range []string{`<meta property="og:url" content="https://">`, `<meta property="og:image" content="https://">`} {
+			page = bytes.ReplaceAll(page, []byte(tag), nil)
+		}
+		return os.WriteFile(p, page, 0o644)
+	})
+}

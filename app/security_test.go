@@ -238,3 +238,28 @@ func TestSecurity(t *testing.T) {
 		t.Errorf("the page threw: %s", strings.Join(ex, "\n"))
 	}
 }
+
+// TestSiteMetadata: the manifest names the app's id (W3C Web Application
+// Manifest, "id" member) and no page carries an Open Graph tag without an
+// address (the Open Graph protocol requires absolute URLs).
+func TestSiteMetadata(t *testing.T) {
+	site := testSite(t)
+	b, err := os.ReadFile(filepath.Join(site, "manifest.webmanifest"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var m map[string]any
+	if err := json.Unmarshal(b, &m); err != nil {
+		t.Fatal(err)
+	}
+	if id, _ := m["id"].(string); !strings.HasSuffix(id, "/") {
+		t.Errorf("the manifest's id is %q", m["id"])
+	}
+	page, err := os.ReadFile(filepath.Join(site, "index.html"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if strings.Contains(string(page), `content="https://"`) {
+		t.Error("index.html carries a placeholder address")
+	}
+}

@@ -4,13 +4,16 @@ import "math"
 
 // CustomLiquid builds a Fluid from properties the user supplies: density
 // rho (kg/m³), dynamic viscosity mu (Pa·s) and vapour pressure pv (Pa,
-// absolute). rho and mu must be positive and finite, pv finite and not
-// negative (0 for a liquid whose vapour pressure is negligible). Bad values
+// absolute). rho must lie in the range of liquids the balance accepts
+// (1 to 1e5 kg/m³, far beyond any real liquid either way, so that no head
+// computed from it overflows), mu must be positive and finite, pv finite
+// and not negative (0 for a liquid whose vapour pressure is negligible).
+// Bad values
 // are a *FieldError naming "rho", "mu" or "pv". Temperature is left 0
 // (unknown).
 func CustomLiquid(rho, mu, pv float64) (Fluid, error) {
-	if !(rho > 0) || math.IsInf(rho, 0) {
-		return Fluid{}, fieldErrorf("rho", "density must be a positive finite number in kg/m³; got %g", rho)
+	if !(rho >= minDensity && rho <= maxDensity) {
+		return Fluid{}, fieldErrorf("rho", "a liquid's density lies between %v and %v; got %v", Fig(minDensity, Density), Fig(maxDensity, Density), Fig(rho, Density))
 	}
 	if !(mu > 0) || math.IsInf(mu, 0) {
 		return Fluid{}, fieldErrorf("mu", "dynamic viscosity must be a positive finite number in Pa·s; got %g", mu)
