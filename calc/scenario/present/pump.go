@@ -270,8 +270,7 @@ func (b *builder) pumpChart(id, caption string) Block {
 	if bep := pr.BEP; bep != nil {
 		lo, hi := bep.Region()
 		ch.Bands = append(ch.Bands, Band{X0: qu.FromSI(lo), X1: qu.FromSI(hi),
-			Label: "preferred region, " + strconv.FormatFloat(calc.PreferredRegionLow*100, 'g', -1, 64) + "–" +
-				strconv.FormatFloat(calc.PreferredRegionHigh*100, 'g', -1, 64) + " % of best-efficiency flow"})
+			Label: "preferred region"}) // its bounds are in the caption and the facts: a band's label must fit a phone's chart
 		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(bep.Q), Y: hu.FromSI(bep.H),
 			Label: "best efficiency\n" + b.param("q", bep.Q) + ", " + percent(bep.Eff)})
 	}
