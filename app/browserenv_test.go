@@ -158,8 +158,18 @@ func (b *tab) navigate(u string) {
 // waitResult waits until the page has drawn its first result.
 func (b *tab) waitResult() {
 	b.t.Helper()
-	if _, err := chromedp.Run(b.ctx, chromedp.Poll[bool]("window.fieldheadFirstResult > 0",
-		chromedp.WithPollingTimeout(90*time.Second))); err != nil {
+	var err error
+	for try := 0; try < 3; try++ {
+		_, err = chromedp.Run(b.ctx, chromedp.Poll[bool]("window.fieldheadFirstResult > 0",
+			chromedp.WithPollingTimeout(90*time.Second)))
+		// A navigation that ends while the poll runs takes its JavaScript
+		// context with it: poll again in the new one.
+		if err == nil || !strings.Contains(err.Error(), "Cannot find context") {
+			break
+		}
+		time.Sleep(100 * time.Millisecond)
+	}
+	if err != nil {
 		page, _ := chromedp.Run(b.ctx, chromedp.Evaluate[string]("location.href + '\\n' + document.body.innerText.slice(0, 400)"))
 		b.t.Fatalf("the page never showed a result: %v\npage: %s\nexceptions: %s", err, page, strings.Join(b.thrown(), "\n"))
 	}

@@ -20,6 +20,8 @@ type PumpResult struct {
 
 	// System is the system curve over the flows of the chart; NPSHa the
 	// NPSH available over the same flows when the pump's elevation is known.
+	// Both are worked out only for the views that draw them (Pump, Report,
+	// or no view named).
 	System []calc.CurvePoint
 	NPSHa  []calc.CurvePoint
 	// Operating is where Curve meets the system curve, nil when they do
@@ -136,13 +138,15 @@ func (e *eval) pump() {
 		e.warn("solve", "pump", "the operating point needs the balance solved for the pump head (solve=hp)")
 		return
 	}
-	qmax := math.Max(pr.Curve.MaxFlow(), b.Q)
-	sys, err := calc.SystemCurve(*b, calc.Flows(qmax, 41))
-	if err != nil {
-		e.failErr("q", err)
-		return
+	if e.drawsCurves() {
+		qmax := math.Max(pr.Curve.MaxFlow(), b.Q)
+		sys, err := calc.SystemCurve(*b, calc.Flows(qmax, 41))
+		if err != nil {
+			e.failErr("q", err)
+			return
+		}
+		pr.System = sys
 	}
-	pr.System = sys
 	op, err := calc.OperatingPoint(pr.Curve, *b)
 	if err != nil {
 		e.failErr("pq", err)
@@ -338,4 +342,16 @@ func (e *eval) turbine() {
 	for _, w := range t.Warnings {
 		e.warnCalc("turbine", w)
 	}
+}
+
+// drawsCurves reports whether the scenario's view draws the system and
+// NPSH curves (the Pump and Report views, and a scenario that names no
+// view): solving the line at 41 flows for each is most of an evaluation,
+// and an edit on another view need not wait for it.
+func (e *eval) drawsCurves() bool {
+	switch e.s.Get("view") {
+	case "", "pump", "report":
+		return true
+	}
+	return false
 }

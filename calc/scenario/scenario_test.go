@@ -71,8 +71,14 @@ func TestDemo(t *testing.T) {
 		t.Fatalf("the demo has errors: %v", r.Errors)
 	}
 	if r.Balance == nil || r.Balance.Line == nil || len(r.Balance.Profile) == 0 || r.Convert == nil ||
-		r.Pump == nil || r.Pump.Operating == nil || len(r.Pump.System) == 0 || r.NPSH == nil || r.Field == nil {
+		r.Pump == nil || r.Pump.Operating == nil || r.NPSH == nil || r.Field == nil {
 		t.Fatalf("the demo must fill the balance, line, profile, conversion, pump, NPSH and field check: %+v", r)
+	}
+	// The curves are worked out for the views that draw them (drawsCurves).
+	pumpView := Demo()
+	_ = pumpView.Set("view", "pump")
+	if len(r.Pump.System) != 0 || len(Evaluate(pumpView).Pump.System) == 0 {
+		t.Errorf("the system curve: %d points on the Balance view, want none; none on the Pump view", len(r.Pump.System))
 	}
 	if t2 := Evaluate(TurbineDemo()); len(t2.Errors) > 0 || t2.Turbine == nil || t2.BestTurbine == nil {
 		t.Errorf("the turbine demo: errors %v, turbine %v", t2.Errors, t2.Turbine)
