@@ -16,6 +16,7 @@ import (
 	"net/http"
 	"os"
 	"path/filepath"
+	"regexp"
 	"strconv"
 	"strings"
 
@@ -275,9 +276,18 @@ func fixMetadata(out, prefix string) error {
 		if err != nil {
 			return err
 		}
-		for _, tag := range []string{`<meta property="og:url" content="https://">`, `<meta property="og:image" content="https://">`} {
-			page = bytes.ReplaceAll(page, []byte(tag), nil)
-		}
+		// go-app writes a tag's attributes in map order: match each meta
+		// tag whole, whatever the order.
+		page = metaTag.ReplaceAllFunc(page, func(tag []byte) []byte {
+			if bytes.Contains(tag, []byte(`content="https://"`)) &&
+				(bytes.Contains(tag, []byte(`property="og:url"`)) || bytes.Contains(tag, []byte(`property="og:image"`))) {
+				return nil
+			}
+			return tag
+		})
 		return os.WriteFile(p, page, 0o644)
 	})
 }
+
+// metaTag matches one <meta …> tag.
+var metaTag = regexp.MustCompile(`<meta\s[^>]*>`)
