@@ -3,6 +3,7 @@ package scenario
 import (
 	"fmt"
 	"strings"
+	"unicode/utf8"
 )
 
 // The sheets file: sheets kept on a device, exported to one text file a
@@ -67,7 +68,7 @@ func ReadSheets(text string) ([]SheetLine, []LineError) {
 			continue
 		}
 		sl := SheetLine{Line: n, Title: strings.TrimSpace(title), Scen: sc}
-		if !sc.Has("name") && sl.Title != "" && printable(sl.Title) {
+		if !sc.Has("name") && sl.Title != "" && utf8.ValidString(sl.Title) && printable(sl.Title) {
 			_ = sl.Scen.Set("name", sl.Title) // a link without a title takes the line's
 		}
 		if err != nil {
