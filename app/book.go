@@ -1,6 +1,7 @@
 package main
 
 import (
+	"sort"
 	"strconv"
 	"strings"
 	"time"
@@ -222,12 +223,9 @@ func noneSelected(bk *book) bool {
 	return true
 }
 
+// sortKept puts the kept sheets newest first.
 func sortKept(rs []record) {
-	for i := 1; i < len(rs); i++ {
-		for j := i; j > 0 && rs[j].Edited > rs[j-1].Edited; j-- {
-			rs[j], rs[j-1] = rs[j-1], rs[j]
-		}
-	}
+	sort.Slice(rs, func(i, j int) bool { return rs[i].Edited > rs[j].Edited })
 }
 
 // importSheets adds the sheets of a sheets file: a sheet already kept

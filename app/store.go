@@ -2,7 +2,6 @@ package main
 
 import (
 	"math/rand/v2"
-	"sort"
 	"strconv"
 	"time"
 
@@ -123,7 +122,7 @@ func storeAll(db app.Value, done func([]record, string)) {
 		for i := 0; i < res.Length(); i++ {
 			out = append(out, recordOf(res.Index(i)))
 		}
-		sort.Slice(out, func(i, j int) bool { return out[i].Edited > out[j].Edited })
+		sortKept(out)
 		done(out, "")
 	}))
 	req.Set("onerror", once(func(app.Value) { done(nil, "reading the kept sheets failed: "+errorName(req)) }))

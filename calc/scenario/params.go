@@ -296,6 +296,10 @@ func Lookup(name string) (p Param, seg int, ok bool) {
 	return *r, 0, true
 }
 
+// SegmentOf splits a segment's parameter "s3.d" into 3 and "d"; n is 0
+// for any other name.
+func SegmentOf(name string) (n int, field string) { return splitSegment(name) }
+
 // splitSegment splits "s3.d" into 3 and "d"; n is 0 for any other name.
 func splitSegment(name string) (n int, field string) {
 	if len(name) < 4 || name[0] != 's' {

@@ -45,25 +45,12 @@ func (b *builder) lineCard() Card {
 		}}
 	}
 	isLine := func(w scenario.Warning) bool {
-		n, _ := splitSegment(w.Param)
+		n, _ := scenario.SegmentOf(w.Param)
 		return w.Topic == "line" || n > 0 || w.Segment > 0
 	}
 	return Card{ID: "line-card", Class: "answer-card", Title: "Line, point 1 to point 2", Blocks: []Block{
 		{Kind: BlockAnswer, ID: "answer", Answer: a}, facts, fields(b.pumpPlace(n)), b.warnings(isLine),
 	}}
-}
-
-// splitSegment reads "s3.d" as 3 and "d"; 0 for another name.
-func splitSegment(p string) (int, string) {
-	if !strings.HasPrefix(p, "s") {
-		return 0, ""
-	}
-	num, f, ok := strings.Cut(p[1:], ".")
-	n, err := strconv.Atoi(num)
-	if !ok || err != nil || n < 1 {
-		return 0, ""
-	}
-	return n, f
 }
 
 // lineInputs are the parameters the line's result depends on.
@@ -406,7 +393,7 @@ func (b *builder) fittingKs(p string) []calc.FittingK {
 		}
 		return nil
 	}
-	n, _ := splitSegment(p)
+	n, _ := scenario.SegmentOf(p)
 	if br := b.r.Balance; br != nil && br.Line != nil && n >= 1 && n <= len(br.Line.Segments) {
 		return br.Line.Segments[n-1].Fittings
 	}

@@ -69,7 +69,7 @@ func (b *builder) methodLines() []string {
 func (b *builder) inputValue(p string) string {
 	raw := strings.TrimSpace(b.s.Get(p))
 	base := p
-	if _, f := splitSegment(p); f != "" {
+	if _, f := scenario.SegmentOf(p); f != "" {
 		base = f
 	}
 	switch base {

@@ -235,14 +235,13 @@ type Band struct {
 
 // Fittings is the fitting editor of one run or segment.
 type Fittings struct {
-	Param   string
-	AddID   string
-	Items   []Fitting
-	Add     []Option // the picker that adds a kind
-	Usable  bool     // the list can be read (else only the text box is offered)
-	Open    bool     // show the list as text
-	AsText  Field
-	StepFew string // accessible-name prefixes of the − and + buttons
+	Param  string
+	AddID  string
+	Items  []Fitting
+	Add    []Option // the picker that adds a kind
+	Usable bool     // the list can be read (else only the text box is offered)
+	Open   bool     // show the list as text
+	AsText Field
 }
 
 // Fitting is one kind of fitting in a list.
