@@ -9,6 +9,9 @@ type Fluid struct {
 	Viscosity      float64 // dynamic viscosity μ, Pa·s
 	VapourPressure float64 // saturation pressure at the liquid's temperature, Pa (absolute)
 	Temperature    float64 // K; 0 when not known (custom liquid)
+	// Pressure is the absolute pressure, Pa, the properties were taken at
+	// (the line pressure); 0 for a liquid of typed properties.
+	Pressure float64
 }
 
 // KinematicViscosity returns ν = μ/ρ in m²/s.

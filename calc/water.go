@@ -56,6 +56,7 @@ func Water(tK, pPa float64) (Fluid, error) {
 		Viscosity:      waterViscosityCore(tK, rho),
 		VapourPressure: ps,
 		Temperature:    tK,
+		Pressure:       pPa,
 	}, nil
 }
 

@@ -72,6 +72,8 @@ func observable(r Result, key string) (float64, string, error) {
 			return r.Fluid.Viscosity, "", nil
 		case "pv":
 			return r.Fluid.VapourPressure, "", nil
+		case "p":
+			return r.Fluid.Pressure, "", nil
 		}
 	case "site":
 		if name == "p" && r.SitePressure > 0 {

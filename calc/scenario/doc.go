@@ -32,6 +32,22 @@
 // When neither alt nor baro is given the standard sea-level pressure
 // 101.325 kPa is used and a warning says so.
 //
+//	pl      line pressure, e.g. 1.8MPa, 250psig  the pressure water and seawater
+//	                                          properties are taken at
+//	plref   g | a                            gauge (default) or absolute, as pnref
+//
+// Water's and seawater's density and viscosity depend on the absolute
+// pressure in the line (their vapour pressure is the saturation pressure,
+// whatever the line's). That pressure is, in this order: pl when given
+// (gauge on the site pressure unless absolute); else the mean of the
+// absolute pressures of the points whose pressure is typed (p1 and p2, but
+// not the one being solved for); else the site pressure. A stated pl below
+// the vapour pressure or above the formulation's range (10 MPa for both
+// liquids) is an error on pl; a mean of the points outside the range is an
+// error on pl asking for it; one below the vapour pressure takes the
+// vapour pressure with a warning. Result.Fluid.Pressure and
+// Result.LiquidFrom say which was used.
+//
 // The two points of the energy balance (n = 1 in, 2 out):
 //
 //	pn      pressure, e.g. -18kPa, 430kPa, 14.7psia

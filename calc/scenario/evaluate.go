@@ -218,9 +218,9 @@ func (e *eval) liquid() {
 		if !ok {
 			return
 		}
-		p := e.res.SitePressure
-		if p == 0 {
-			p = seaLevel
+		p, from, ok := e.linePressure()
+		if !ok {
+			return
 		}
 		psat, err := calc.SaturationPressure(t)
 		if err != nil {
@@ -228,8 +228,12 @@ func (e *eval) liquid() {
 			return
 		}
 		if p < psat {
-			e.warn("t", "liquid", "the water is at or above its boiling point at the site pressure; its properties are taken at the saturation pressure")
-			p = psat
+			if from == LiquidTyped {
+				e.record(calc.FieldErrorf("pl", "the line pressure %v absolute is below the vapour pressure of the liquid at %v (%v): it would boil", calc.Fig(p, calc.Pressure), calc.Fig(t, calc.Temperature), calc.Fig(psat, calc.Pressure)))
+				return
+			}
+			e.warn("t", "liquid", "the water is at or above its boiling point at the pressure taken for its properties; they are taken at the saturation pressure")
+			p, from = psat, LiquidSaturation
 		}
 		props := calc.Water
 		if liq == "seawater" {
@@ -237,10 +241,20 @@ func (e *eval) liquid() {
 		}
 		fl, err := props(t, p)
 		if err != nil {
+			var fe *calc.FieldError
+			if errors.As(err, &fe) && fe.Field == "p" {
+				c := *fe
+				c.Field = "pl"
+				if from != LiquidTyped {
+					c.Msg += "; this is the mean of the points' pressures: state the line pressure"
+				}
+				e.record(&c)
+				return
+			}
 			e.failErr("t", err)
 			return
 		}
-		e.res.Fluid = &fl
+		e.res.Fluid, e.res.LiquidFrom = &fl, from
 	case "custom":
 		rho, ok1 := e.quantity("rho")
 		mu, ok2 := e.quantity("mu")
@@ -253,10 +267,70 @@ func (e *eval) liquid() {
 			e.failErr("rho", err)
 			return
 		}
-		e.res.Fluid = &fl
+		e.res.Fluid, e.res.LiquidFrom = &fl, LiquidTypedProps
 	default:
 		e.fail("liq", fmt.Sprintf("liq: %q is not a liquid Fieldhead knows; use water, seawater or custom", liq))
 	}
+}
+
+// linePressure is the absolute pressure water's and seawater's properties
+// are taken at: pl when given, else the mean of the points' typed
+// pressures, else the site pressure (doc.go). A bad pl is an error on pl;
+// a point's bad pressure is left to the balance to report, and the mean is
+// then of the others.
+func (e *eval) linePressure() (float64, LiquidSource, bool) {
+	site := e.res.SitePressure
+	if site == 0 {
+		site = seaLevel
+	}
+	if e.s.Has("pl") {
+		p, ref, err := calc.ParsePressure("pl", e.s.Get("pl"), DefaultUnit("pl", e.us))
+		if err != nil {
+			e.failErr("pl", err)
+			return 0, 0, false
+		}
+		abs, good := e.absolute("plref", ref)
+		if !good {
+			return 0, 0, false
+		}
+		if !abs {
+			p += site
+		}
+		if !(p > 0) {
+			e.fail("pl", "pl: the line pressure must be above zero absolute")
+			return 0, 0, false
+		}
+		return p, LiquidTyped, true
+	}
+	solve := strings.TrimSpace(e.s.Get("solve"))
+	sum, n := 0.0, 0
+	for _, pt := range []string{"p1", "p2"} {
+		if solve == pt || strings.TrimSpace(e.s.Get(pt)) == "" {
+			continue
+		}
+		p, ref, err := calc.ParsePressure(pt, e.s.Get(pt), DefaultUnit(pt, e.us))
+		if err != nil {
+			continue
+		}
+		switch strings.TrimSpace(e.s.Get(pt + "ref")) {
+		case "a":
+			if ref == calc.RefUnspecified {
+				ref = calc.Absolute
+			}
+		case "", "g":
+		default:
+			continue
+		}
+		if ref != calc.Absolute {
+			p += site
+		}
+		sum += p
+		n++
+	}
+	if n > 0 {
+		return sum / float64(n), LiquidPoints, true
+	}
+	return site, LiquidSite, true
 }
 
 // evalRun evaluates the pipe run at flow q for the Regime view.

@@ -15,6 +15,9 @@ type Result struct {
 	Fluid        *calc.Fluid // the liquid at its temperature
 	SitePressure float64     // Pa absolute
 	SiteFrom     SiteSource  // how the site pressure was found
+	// LiquidFrom says where the pressure the liquid's properties were
+	// taken at (Fluid.Pressure) came from.
+	LiquidFrom LiquidSource
 
 	Run     *RunResult          // the pipe run (Regime view; friction in the balance)
 	Line    *calc.LineResult    // the line of segments at the flow (also when the balance cannot be solved)
@@ -96,4 +99,16 @@ const (
 	SiteStandard  SiteSource = iota // the standard sea-level pressure: neither altitude nor barometer given
 	SiteAltitude                    // the ISO 2533 standard atmosphere at the site altitude
 	SiteBarometer                   // the barometer reading
+)
+
+// LiquidSource says which pressure water's and seawater's properties were
+// taken at (doc.go, "pl").
+type LiquidSource uint8
+
+const (
+	LiquidTyped      LiquidSource = iota // pl, the line pressure stated
+	LiquidPoints                         // the mean of the points' typed pressures
+	LiquidSite                           // the site pressure: no pl and no point pressure
+	LiquidSaturation                     // the vapour pressure: the points' mean or the site pressure lay below it
+	LiquidTypedProps                     // a liquid of typed properties: no pressure
 )

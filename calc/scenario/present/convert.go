@@ -14,7 +14,7 @@ func (b *builder) liquidCard() Card {
 	if b.s.Get("liq") == "custom" {
 		blocks = append(blocks, fields(b.quantity("rho", "", ""), b.quantity("mu", "", ""), b.quantity("pv", "", "")))
 	} else {
-		blocks = append(blocks, fields(b.quantity("t", "", "")))
+		blocks = append(blocks, fields(b.quantity("t", "", "")), fields(b.quantity("pl", "", ""), b.ref("plref")))
 	}
 	fluid := ""
 	if f := b.r.Fluid; f != nil {
@@ -42,16 +42,29 @@ var siteNotes = []string{
 	"barometer reading",
 }
 
-// fluidName names the liquid at its temperature in the sheet's units.
+// fluidName names the liquid at its temperature and the pressure its
+// properties were taken at, in the sheet's units, and says where that
+// pressure came from.
 func (b *builder) fluidName() string {
 	f := b.r.Fluid
+	at := " at " + b.show(f.Temperature, calc.Temperature) + " and " + b.absolute(f.Pressure) + " (" + liquidNotes[b.r.LiquidFrom] + ")"
 	switch strings.TrimSpace(b.s.Get("liq")) {
 	case "custom":
 		return "liquid of the typed properties"
 	case "seawater":
-		return "seawater (35 g/kg) at " + b.show(f.Temperature, calc.Temperature)
+		return "seawater (35 g/kg)" + at
 	}
-	return "water at " + b.show(f.Temperature, calc.Temperature)
+	return "water" + at
+}
+
+// liquidNotes say where the pressure of the liquid's properties came from,
+// by scenario.LiquidSource.
+var liquidNotes = []string{
+	"the line pressure",
+	"mean of the points' pressures",
+	"site pressure",
+	"vapour pressure: the line would boil",
+	"",
 }
 
 // runInputs are the inputs of one pipe run; withFlow adds the flow (the

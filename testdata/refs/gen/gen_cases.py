@@ -109,6 +109,45 @@ def water_cases():
     w.close()
 
 
+def water_line_cases():
+    w = Writer("ref-iapws-water-line.case",
+               "liquid water at the line pressure: stated (pl, gauge or absolute), or the mean of the points",
+               "python3-iapws (IF97 region 1, IAPWS 2008 viscosity, IF97 eq. 30) at the pressure named")
+    # (t degC, barometer kPa, link's pressure part, absolute pressure Pa).
+    for tc, baro, part, pa in [
+            ("20", "101.325", "pl=1.8MPa&plref=a", "1800000"),
+            ("20", "101.325", "pl=1.8MPa", "1901325"),
+            ("10", "98", "pl=650kPa(a)", "650000"),
+            ("45", "101.325", "pl=9.5MPa&plref=a", "9500000"),
+            ("80", "101.325", "pl=4bar", "501325"),
+            ("2", "90", "pl=95psi", None),
+            ("60", "100", "pl=0.2MPa&plref=a", "200000"),
+            # No pl: the mean of the points' absolute pressures.
+            ("15", "101.325", "p1=0kPa&p2=1.2MPa&z1=0m&z2=10m&v1=0m/s&v2=0m/s&q=10L/s&hf=5m",
+             "701325"),
+            ("25", "100", "p1=300kPa&p1ref=a&p2=2MPa&z1=0m&z2=0m&v1=0m/s&v2=0m/s&q=10L/s&hf=5m",
+             "1200000"),
+            # Solving for p2: only p1 is known.
+            ("30", "101.325", "p1=800kPa&z1=0m&z2=0m&v1=0m/s&v2=0m/s&q=10L/s&hf=5m&hp=0m&solve=p2",
+             "901325"),
+            # No pl, no points: the barometer.
+            ("18", "98.8", "", "98800")]:
+        if pa is None:
+            # psi by NIST SP 811: 6894.757293168361 Pa (1 lbf/in2, exact
+            # from the pound and the inch); gauge on the barometer.
+            pa = mp.mpf(95) * mp.mpf("0.45359237") * mp.mpf("9.80665") / mp.mpf("0.0254") ** 2 + mp.mpf(baro) * 1000
+        t = mp.mpf(tc) + mp.mpf("273.15")
+        rho, mu, psat = water(t, float(pa))
+        q = "liq=water&t=%sC&baro=%skPa" % (tc, baro) + ("&" + part if part else "")
+        w.case("water %s C, %s" % (tc, part or "site pressure"), q, [
+            "fluid.p = %s Pa ± 1e-12 rel" % sig(mp.mpf(pa)),
+            "fluid.rho = %s kg/m3 ± 1e-6 rel" % sig(rho),
+            "fluid.mu = %s Pa.s ± 1e-5 rel" % sig(mu),
+            "fluid.pv = %s Pa ± 1e-6 rel" % sig(psat),
+        ])
+    w.close()
+
+
 def seawater_cases():
     from iapws.iapws08 import SeaWater
     w = Writer("ref-iapws-seawater.case",
@@ -184,8 +223,9 @@ def balance_cases():
         return (f * length / d + k) * v * v / (2 * G), v, re
 
     # 1. Lift with a pressurised delivery: solve for the pump head.
+    # Water at the mean of the points' absolute pressures (no pl given).
     t, baro = mp.mpf("288.15"), mp.mpf("100000")
-    rho, mu, _ = water(t, baro)
+    rho, mu, _ = water(t, baro + mp.mpf("250000") / 2)
     q, d, length, eps, k = mp.mpf("0.030"), mp.mpf("0.150"), mp.mpf("800"), mp.mpf("0.05e-3"), mp.mpf("3.5")
     hf, v, _ = run_loss(rho, mu, q, d, length, eps, k)
     v2 = q / (PI * d * d / 4)
@@ -237,8 +277,9 @@ def balance_cases():
            ])
 
     # 5. Pressure downstream of a pipe: solve for p2 (gauge shown as absolute in SI).
+    # Water at p1's absolute pressure: p2 is the unknown.
     t, baro = mp.mpf("293.15"), mp.mpf("101325")
-    rho, mu, _ = water(t, baro)
+    rho, mu, _ = water(t, baro + 400000)
     q, d, length, eps = mp.mpf("0.010"), mp.mpf("0.08"), mp.mpf("120"), mp.mpf("0.045e-3")
     hf, v, _ = run_loss(rho, mu, q, d, length, eps, mp.mpf(0))
     p2 = baro + 400000 + rho * G * (0 - 4 - hf)
@@ -356,7 +397,9 @@ def npsh_cases():
             ("suction lift near the limit, 80 C water", "80", "500", "100", "102", "20", "3")]:
         t = mp.mpf(tc) + mp.mpf("273.15")
         patm = iso2533(alt)
-        rho, mu, psat = water(t, max(patm, mp.mpf(_PSat_T(float(t)) * 1e6)))
+        # Water at the mean of the points' absolute pressures: p1 = 0 and
+        # p2 = 200 kPa gauge.
+        rho, mu, psat = water(t, max(patm + 100000, mp.mpf(_PSat_T(float(t)) * 1e6)))
         qq = mp.mpf(q) / 1000
         hf, _ = darcy_loss(rho, mu, qq, mp.mpf("0.15"), mp.mpf(12), mp.mpf("0.045e-3"), mp.mpf("1.5"))
         a = (patm - psat) / (rho * G) + mp.mpf(z1) - mp.mpf(zp) - hf
@@ -420,6 +463,7 @@ def turbine_cases():
 
 if __name__ == "__main__":
     water_cases()
+    water_line_cases()
     seawater_cases()
     colebrook_cases()
     units_cases()

@@ -14,6 +14,8 @@ code:
                                 exit)
   testdata/refs/roughness.tsv   absolute roughness by material, fluids.friction
                                 (_roughness, _Farshad_roughness, HHR_roughness)
+  testdata/refs/seawater_gsw.tsv
+                                seawater density at pressure, gsw.rho
   testdata/cases/ref-fluids-*.case, ref-gsw-seawater.case
                                 share-link cases with the values these give
 
@@ -359,7 +361,36 @@ def seawater():
         rho = float(gsw.rho(35.0, ct, 0.0))
         w.case("seawater %d C" % tc, "liq=seawater&t=%dC&baro=101.325kPa" % tc,
                ["fluid.rho = %s kg/m3 ± 0.1%%" % g(rho, 10)])
+    # At the line pressure (pl, absolute or gauge on the barometer): gsw
+    # takes the sea pressure, absolute less 101 325 Pa, in dbar.
+    for tc, pl, absolute in ((5, "2MPa", True), (15, "5500kPa", True), (25, "6.9MPa", False),
+                             (35, "800kPa", False), (20, "10MPa", True), (10, "350kPa", False)):
+        pa = float(pl[:-3]) * (1e6 if pl.endswith("MPa") else 1e3)
+        if not absolute:
+            pa += 101325.0
+        sp = (pa - 101325.0) / 1e4
+        ct = gsw.CT_from_t(35.0, float(tc), sp)
+        rho = float(gsw.rho(35.0, ct, sp))
+        ref = "&plref=a" if absolute else ""
+        w.case("seawater %d C at %s %s" % (tc, pl, "absolute" if absolute else "gauge"),
+               "liq=seawater&t=%dC&baro=101.325kPa&pl=%s%s" % (tc, pl, ref),
+               ["fluid.rho = %s kg/m3 ± 0.1%%" % g(rho, 10), "fluid.p = %s Pa ± 1e-12 rel" % g(pa)],
+               source="TEOS-10 via python3-gsw %s gsw.rho(SA=35 g/kg, CT from gsw.CT_from_t, p=%s dbar)"
+               % (gsw.__version__, g(sp, 10)))
     w.close()
+    rows = []
+    for tc in range(0, 45, 5):
+        for pm in (0.101325, 0.5, 1.0, 2.0, 3.5, 5.0, 6.5, 8.0, 10.0):
+            sp = (pm - 0.101325) * 100
+            ct = gsw.CT_from_t(35.0, float(tc), sp)
+            rows.append([repr(round(tc + 273.15, 6)), repr(pm * 1e6), g(float(gsw.rho(35.0, ct, sp)), 12)])
+    with open(os.path.join(REFS, "seawater_gsw.tsv"), "w", encoding="utf-8", newline="\n") as out:
+        out.write("# seawater, SA = 35 g/kg: TEOS-10 density gsw.rho(SA, CT_from_t(SA, t, p), p), "
+                  "p the sea pressure (absolute less 101325 Pa)\n")
+        out.write("# %s with python3-gsw %s\n" % (GEN, gsw.__version__))
+        out.write("t_K\tp_Pa\trho_kg_m3\n")
+        for r in rows:
+            out.write("\t".join(r) + "\n")
 
 
 def main():

@@ -99,7 +99,7 @@ def seawater_points(path):
                ["t_K", "p_Pa", "rho_kg_m3", "a_w"])
         for tc in range(0, 45, 5):
             t = round(tc + 273.15, 6)
-            for p in [0.101325, 0.5, 1.0]:
+            for p in [0.101325, 0.5, 1.0, 2.0, 5.0, 10.0]:
                 sea = SeaWater(T=t, P=p, S=0.035)
                 pure = SeaWater(T=t, P=p, S=0.0)
                 aw = math.exp((sea.muw - pure.g) / (r * t))
