@@ -225,6 +225,7 @@ func (b *builder) reportResults() Card {
 		answer = text("muted", "", "The energy balance has no answer: "+b.toCheck(balanceInputs()...))
 	}
 	line := br != nil && br.Line != nil
+	kt := b.fittingKTable()
 
 	opFacts := b.operatingFacts()
 	var op Block
@@ -252,6 +253,8 @@ func (b *builder) reportResults() Card {
 		maybe(br != nil, budget),
 		heading(line, "Losses by segment"),
 		b.segmentTable(),
+		heading(kt.Kind == BlockTable, "Loss coefficients of the fittings"),
+		kt,
 		heading(opFacts != nil, "Operating point"),
 		maybe(opFacts != nil, op),
 		heading(b.r.NPSH != nil, "Cavitation check (NPSH)"),
@@ -286,4 +289,42 @@ func (b *builder) reportCharts() (Card, bool) {
 		maybe(hasProfile, Block{Kind: BlockHeading, Text: "Energy and hydraulic grade lines"}),
 		profile,
 	}}, hasPump || hasProfile
+}
+
+// fittingKTable lists, for the report, the loss coefficient used for each
+// fitting of the line's segments (or of the single run) and the method
+// that gave it; an empty block when no fitting was computed.
+func (b *builder) fittingKTable() Block {
+	type where struct {
+		name string
+		ks   []calc.FittingK
+	}
+	var all []where
+	if br := b.r.Balance; br != nil && br.Line != nil {
+		for i, sg := range br.Line.Segments {
+			all = append(all, where{"segment " + strconv.Itoa(i+1), sg.Fittings})
+		}
+	} else if r := b.r.Run; r != nil && b.s.SegmentCount() == 0 {
+		all = append(all, where{"pipe run", r.Fittings})
+	}
+	cols := []string{"where", "fitting", "count", "K each", "method"}
+	t := &Table{ID: "report-fitting-k", Class: "grid figures", Head: cols}
+	for _, w := range all {
+		for _, k := range w.ks {
+			method := k.Method
+			if k.Formula != "" && k.Method != "given" {
+				method += ", " + k.Formula
+			}
+			t.Rows = append(t.Rows, Row{Head: w.name, Cells: []Cell{
+				{Text: fittingName(k.Key), Label: cols[1]},
+				{Text: strconv.Itoa(k.Count), Label: cols[2]},
+				{Text: calc.FormatNumber(k.K, 3), Label: cols[3]},
+				{Text: method, Label: cols[4]},
+			}})
+		}
+	}
+	if len(t.Rows) == 0 {
+		return Block{Kind: BlockEmpty}
+	}
+	return Block{Kind: BlockTable, Table: t}
 }

@@ -271,3 +271,53 @@ func TestReportResultsKeepTheirPlace(t *testing.T) {
 		}
 	}
 }
+
+func TestReportFittingK(t *testing.T) {
+	// Source: the result's own loss coefficients (calc.FittingK, which
+	// calc's tests and testdata/cases/ref-fluids-fittings.case check
+	// against Crane TP-410 and Hooper's 2-K via python3-fluids): the report
+	// lists each fitting of each segment with the K used and its method,
+	// and the single run's fittings when there are no segments.
+	for _, q := range []string{
+		scenario.Demo().Encode(),
+		"liq=water&t=15C&alt=0m&q=5L/s&l=20m&nps=2&sch=40&mat=steel&fit=elbow90_thr:3,gate:1,exit:1@0.9",
+	} {
+		sc, err := scenario.Parse(q)
+		if err != nil {
+			t.Fatal(err)
+		}
+		sh, r := sheetOf(t, sc, "report")
+		var want []calc.FittingK
+		var where []string
+		if r.Balance != nil && r.Balance.Line != nil {
+			for i, sg := range r.Balance.Line.Segments {
+				for _, k := range sg.Fittings {
+					want = append(want, k)
+					where = append(where, "segment "+strconv.Itoa(i+1))
+				}
+			}
+		} else if r.Run != nil {
+			for _, k := range r.Run.Fittings {
+				want = append(want, k)
+				where = append(where, "pipe run")
+			}
+		}
+		if len(want) < 3 {
+			t.Fatalf("%s: only %d fittings in the result", q, len(want))
+		}
+		tb := table(t, sh.Cards, "report-results", "report-fitting-k")
+		if len(tb.Rows) != len(want) {
+			t.Fatalf("%s: %d rows, want %d", q, len(tb.Rows), len(want))
+		}
+		methods := map[string]bool{}
+		for i, row := range tb.Rows {
+			k := want[i]
+			if row.Head != where[i] || row.Cells[0].Text != fittingName(k.Key) || row.Cells[1].Text != strconv.Itoa(k.Count) ||
+				row.Cells[2].Text != calc.FormatNumber(k.K, 3) || !strings.HasPrefix(row.Cells[3].Text, k.Method) {
+				t.Errorf("%s row %d: %s %+v, want %s %+v", q, i, row.Head, row.Cells, where[i], k)
+			}
+			methods[k.Method] = true
+		}
+		t.Logf("%d fittings, methods %v", len(want), methods)
+	}
+}
