@@ -44,8 +44,9 @@
 //
 // A fitting's K depends on the pipe's inside diameter: Crane TP-410's
 // K = n·f_T (CraneFT) for valves, elbows, bends and tees, Hooper's 2-K
-// K = K1/Re + K∞(1 + 1 in/D) for the kinds Crane does not give, fixed
-// values for entrances and the exit (Fitting.KAt). A run reports the K it
+// K = K1/Re + K∞(1 + 1 in/D) and Darby's 3-K K = K1/Re + Ki(1 + Kd/Dn^0.3)
+// (DarbyNominalSize) for the kinds Crane does not give, fixed values for
+// entrances and the exit (Fitting.KAt). A run reports the K it
 // used for each fitting (RunResult.Fittings); a FittingCount may give its
 // own K instead. Pipe sizes come in catalogues, each with its notation
 // (Catalogues, LookupPipe); materials carry their roughness with its

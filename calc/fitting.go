@@ -22,10 +22,14 @@ const (
 	// KHooper is the 2-K method of Hooper (1981): K = K1/Re +
 	// K∞·(1 + 1 in/D), D the inside diameter in inches.
 	KHooper
+	// KDarby is the 3-K method of Darby (1999, 2001): K = K1/Re +
+	// Ki·(1 + Kd/Dn^0.3), Dn the nominal size in inches
+	// (DarbyNominalSize). Ki is held in KInf.
+	KDarby
 )
 
-// String returns the method's name: "fixed", "Crane TP-410" or
-// "Hooper 2-K".
+// String returns the method's name: "fixed", "Crane TP-410",
+// "Hooper 2-K" or "Darby 3-K".
 func (m KMethod) String() string {
 	switch m {
 	case KFixed:
@@ -34,6 +38,8 @@ func (m KMethod) String() string {
 		return "Crane TP-410"
 	case KHooper:
 		return "Hooper 2-K"
+	case KDarby:
+		return "Darby 3-K"
 	}
 	return "unknown"
 }
@@ -51,8 +57,9 @@ type Fitting struct {
 	// butterfly valve), lists further multiples: Bands[i].N applies
 	// above inside diameter Bands[i].AboveD (m). Ordered by AboveD.
 	Bands  []CraneBand
-	K1     float64 // KHooper: the laminar term's constant (K1/Re)
-	KInf   float64 // KHooper: K at large Re in a 1-inch pipe is 2·KInf
+	K1     float64 // KHooper, KDarby: the laminar term's constant (K1/Re)
+	KInf   float64 // KHooper: K at large Re in a 1-inch pipe is 2·KInf; KDarby: Ki
+	Kd     float64 // KDarby: the size term's constant, K∞ = Ki·(1 + Kd/Dn^0.3)
 	Source string  // where the figures come from
 }
 
@@ -81,12 +88,19 @@ const (
 	srcCrane  = "Crane TP-410 (2009), K = n·f_T, n as python3-fluids fluids.fittings."
 	srcHooper = "Hooper (1981), Chem. Eng. Aug. 24 p. 97, 2-K constants as python3-fluids fluids.fittings.Hooper["
 	srcMemo   = "from memory (typical handbook range "
+	srcDarby  = "Darby (1999, 2001), Chem. Eng. 106(7) p. 101, 3-K constants as python3-fluids fluids.fittings.Darby["
 )
 
 // butterflyBands: Crane TP-410 centric butterfly valve, 45·f_T for 2–8 in,
 // 35·f_T for 10–14 in, 25·f_T for 16–24 in; python3-fluids splits the
 // bands at inside diameters 0.2286 m (9 in) and 0.381 m (15 in).
 var butterflyBands = []CraneBand{{0.2286, 35}, {0.381, 25}}
+
+// darby is a row of Darby's 3-K method: constants K1, Ki, Kd as
+// python3-fluids' table names them under fluidsName.
+func darby(key, name string, k1, ki, kd float64, fluidsName string) Fitting {
+	return Fitting{Key: key, Name: name, Method: KDarby, K1: k1, KInf: ki, Kd: kd, Source: srcDarby + "'" + fluidsName + "']"}
+}
 
 // fittingTable holds the fittings.
 var fittingTable = [...]Fitting{
@@ -139,6 +153,15 @@ var fittingTable = [...]Fitting{
 		Source: srcHooper + "'Valve, Ball, Reduced trim, Beta = 0.9']"},
 	{Key: "globe_y", Name: "globe valve, angle or Y pattern", Method: KHooper, K1: 1000, KInf: 2,
 		Source: srcHooper + "'Valve, Globe, Angle or Y-type']"},
+	darby("bend90_r2", "90° bend, r/d 2", 800, 0.056, 3.9, "Elbow, 90°, (r/D = 2)"),
+	darby("bend90_r4", "90° bend, r/d 4", 800, 0.066, 3.9, "Elbow, 90°, (r/D = 4)"),
+	darby("bend90_r6", "90° bend, r/d 6", 800, 0.075, 4.2, "Elbow, 90°, (r/D = 6)"),
+	darby("mitre90_2w", "90° mitre bend, two welds (45° each)", 800, 0.068, 4.1, "Elbow, 90°, 2 welds, (45°)"),
+	darby("mitre90_3w", "90° mitre bend, three welds (30° each)", 800, 0.035, 4.2, "Elbow, 90°, 3 welds, (30°)"),
+	darby("elbow45lr", "45° elbow, long radius (r/d 1.5)", 500, 0.052, 4.0, "Elbow, 45°, long radius, (r/D = 1.5)"),
+	darby("mitre45", "45° mitre bend, one weld", 500, 0.086, 4.0, "Elbow, 45°, mitered, 1 weld, (45°)"),
+	darby("tee_branch_stub", "tee, flow through a stub-in branch", 1000, 0.34, 4.0, "Tee, Through-branch, (as elbow), stub-in branch"),
+	darby("plug_branch", "plug valve, three-way, branch flow", 500, 0.41, 4.0, "Valve, Plug valve, branch flow"),
 	{Key: "strainer", Name: "strainer, clean", Method: KFixed, K: 2.0, Source: srcMemo + "1–3; neither Crane TP-410 nor Hooper gives one)"},
 	{Key: "entry_sharp", Name: "entrance, sharp-edged (flush)", Method: KFixed, K: 0.5,
 		Source: "common practice (sharp-edged entrance 0.5; python3-fluids entrance_sharp(method='Crane') gives 0.5)"},
@@ -214,8 +237,8 @@ func CraneFT(d float64) (float64, error) {
 }
 
 // ReDependent reports whether the fitting's K changes with the Reynolds
-// number (Hooper's 2-K kinds).
-func (f Fitting) ReDependent() bool { return f.Method == KHooper }
+// number (Hooper's 2-K and Darby's 3-K kinds).
+func (f Fitting) ReDependent() bool { return f.Method == KHooper || f.Method == KDarby }
 
 // crane returns the multiple of f_T for inside diameter d.
 func (f Fitting) crane(d float64) float64 {
@@ -234,11 +257,12 @@ func (f Fitting) crane(d float64) float64 {
 //   - KFixed: K, whatever d and re;
 //   - KCrane: N·CraneFT(d), N from the size band of d; turbulent-flow
 //     figures, independent of re;
-//   - KHooper: K1/re + KInf·(1 + 0.0254/d).
+//   - KHooper: K1/re + KInf·(1 + 0.0254/d);
+//   - KDarby: K1/re + KInf·(1 + Kd/Dn^0.3), Dn = DarbyNominalSize(d).
 //
-// re = +Inf asks for the fully turbulent value (Hooper's first term
-// vanishes). d must be finite and positive, within 1 mm–10 m for Crane
-// (field "d"); re must be positive (field "re").
+// re = +Inf asks for the fully turbulent value (the K1 term vanishes).
+// d must be finite and positive, within 1 mm–10 m for Crane and at least
+// 6.84 mm for Darby (field "d"); re must be positive (field "re").
 func (f Fitting) KAt(d, re float64) (float64, error) {
 	if err := frCheckKInputs(d, re); err != nil {
 		return 0, err
@@ -273,18 +297,27 @@ func (f *Fitting) kAt(d, re, ft float64) (float64, error) {
 		return f.crane(d) * ft, nil
 	case KHooper:
 		return f.K1/re + f.KInf*(1+0.0254/d), nil
+	case KDarby:
+		return f.darbyK(d, re)
 	}
 	return 0, fieldErrorf("fit", "fitting %q has an unknown method", f.Key)
 }
 
 // Formula returns the fitting's K formula at inside diameter d (m), as
-// "K = 8·f_T", "K = 800/Re + 0.4·(1 + 1 in/D)" or "K = 0.5".
+// "K = 8·f_T", "K = 800/Re + 0.4·(1 + 1 in/D)",
+// "K = 800/Re + 0.056·(1 + 3.9/Dn^0.3), Dn 4.02 in" or "K = 0.5".
 func (f Fitting) Formula(d float64) string {
 	switch f.Method {
 	case KCrane:
 		return "K = " + frG(f.crane(d)) + "·f_T"
 	case KHooper:
 		return "K = " + frG(f.K1) + "/Re + " + frG(f.KInf) + "·(1 + 1 in/D)"
+	case KDarby:
+		out := "K = " + frG(f.K1) + "/Re + " + frG(f.KInf) + "·(1 + " + frG(f.Kd) + "/Dn^0.3)"
+		if dn, err := DarbyNominalSize(d); err == nil {
+			out += ", Dn " + strconv.FormatFloat(dn, 'f', 2, 64) + " in"
+		}
+		return out
 	}
 	return "K = " + frG(f.K)
 }

@@ -28,7 +28,9 @@ func TestFittingTable(t *testing.T) {
 		case KCrane:
 			complete = f.N > 0 && f.K == 0 && f.K1 == 0
 		case KHooper:
-			complete = f.K1 > 0 && f.KInf > 0 && f.K == 0 && f.N == 0
+			complete = f.K1 > 0 && f.KInf > 0 && f.K == 0 && f.N == 0 && f.Kd == 0
+		case KDarby:
+			complete = f.K1 > 0 && f.KInf > 0 && f.Kd > 0 && f.K == 0 && f.N == 0
 		}
 		if !complete || f.Name == "" || f.Source == "" || !strings.Contains(f.Source, f.Method.String()[:5]) && f.Method != KFixed {
 			t.Errorf("incomplete row %+v", f)
@@ -242,5 +244,52 @@ func TestFittingAreaChangeValidation(t *testing.T) {
 	}
 	if _, err := SuddenContractionK(0.1, 0.2); !errors.As(err, &fe) || fe.Field != "d2" {
 		t.Errorf("SuddenContractionK(0.1, 0.2): %v, want *FieldError for \"d2\"", err)
+	}
+}
+
+func TestDarbyBores(t *testing.T) {
+	// Source: ASME B36.10M schedule 40 (this package's table, checked row
+	// by row against python3-fluids by TestPipeTablesAgainstFluids): the
+	// bores Darby's nominal size is interpolated along (python3-fluids
+	// fluids.fittings.S40i) equal it for NPS 1/2–24, and the interpolation
+	// returns each tabulated size exactly at its bore.
+	var sch40 *frClass
+	for i := range frClasses {
+		if frClasses[i].cat == "steel" && frClasses[i].name == "40" {
+			sch40 = &frClasses[i]
+		}
+	}
+	if sch40 == nil {
+		t.Fatal("no schedule 40 class")
+	}
+	for _, r := range sch40.rows {
+		nps, _ := frNPSValue(r.size)
+		id := r.od - 2*r.wall
+		found := false
+		for i, n := range darbyNPS {
+			if n == nps {
+				found = true
+				if math.Abs(darbyBore[i]-id) > 1e-9 {
+					t.Errorf("NPS %s: Darby bore %g mm, B36.10M schedule 40 %g mm", r.size, darbyBore[i], id)
+				}
+			}
+		}
+		if !found {
+			t.Errorf("NPS %s missing from the Darby sizes", r.size)
+		}
+	}
+	for i, b := range darbyBore {
+		if dn, err := DarbyNominalSize(b / 1e3); err != nil || math.Abs(dn-darbyNPS[i]) > 1e-12 {
+			t.Errorf("DarbyNominalSize(%g mm) = %g, %v; want %g", b, dn, err, darbyNPS[i])
+		}
+	}
+	for _, d := range []float64{6.8e-3, 0, -1, math.NaN(), math.Inf(1)} {
+		if _, err := DarbyNominalSize(d); wtFieldOf(err) != "d" {
+			t.Errorf("DarbyNominalSize(%g): %v; want an error on d", d, err)
+		}
+		f, _ := LookupFitting("bend90_r2")
+		if _, err := f.KAt(d, 1e5); err == nil {
+			t.Errorf("bend90_r2 KAt(%g): no error", d)
+		}
 	}
 }

@@ -280,7 +280,7 @@ func TestReportFittingK(t *testing.T) {
 	// and the single run's fittings when there are no segments.
 	for _, q := range []string{
 		scenario.Demo().Encode(),
-		"liq=water&t=15C&alt=0m&q=5L/s&l=20m&nps=2&sch=40&mat=steel&fit=elbow90_thr:3,gate:1,exit:1@0.9",
+		"liq=water&t=15C&alt=0m&q=5L/s&l=20m&nps=2&sch=40&mat=steel&fit=elbow90_thr:3,gate:1,bend90_r2:2,exit:1@0.9",
 	} {
 		sc, err := scenario.Parse(q)
 		if err != nil {

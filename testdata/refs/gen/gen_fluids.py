@@ -10,8 +10,8 @@ code:
                                 copper tube outside diameters from the D2241
                                 copper-tube-size table)
   testdata/refs/fittings.tsv    K by size and Reynolds number, fluids.fittings
-                                (Crane TP-410 functions, Hooper2K, entrances,
-                                exit)
+                                (Crane TP-410 functions, Hooper2K, Darby3K,
+                                entrances, exit)
   testdata/refs/roughness.tsv   absolute roughness by material, fluids.friction
                                 (_roughness, _Farshad_roughness, HHR_roughness)
   testdata/refs/seawater_gsw.tsv
@@ -204,6 +204,15 @@ HOOPER = [("elbow90_thr", "Elbow, 90°, Standard (R/D = 1), Screwed"),
           ("tee_run_thr", "Tee, Run, Screwed"),
           ("ball_rt", "Valve, Ball, Reduced trim, Beta = 0.9"),
           ("globe_y", "Valve, Globe, Angle or Y-type")]
+DARBY = [("bend90_r2", "Elbow, 90°, (r/D = 2)"),
+         ("bend90_r4", "Elbow, 90°, (r/D = 4)"),
+         ("bend90_r6", "Elbow, 90°, (r/D = 6)"),
+         ("mitre90_2w", "Elbow, 90°, 2 welds, (45°)"),
+         ("mitre90_3w", "Elbow, 90°, 3 welds, (30°)"),
+         ("elbow45lr", "Elbow, 45°, long radius, (r/D = 1.5)"),
+         ("mitre45", "Elbow, 45°, mitered, 1 weld, (45°)"),
+         ("tee_branch_stub", "Tee, Through-branch, (as elbow), stub-in branch"),
+         ("plug_branch", "Valve, Plug valve, branch flow")]
 # Sizes for the K cases: schedule 40 bores (fluids' table).
 K_NPS = ["1/2", "2", "4", "8", "12", "24"]
 
@@ -234,6 +243,24 @@ def fittings():
                    CUSTOM + "&l=1m&nps=%s&sch=40&eps=0mm&q=%sL/s&fit=%s:2" % (nps, q, key),
                    ["run.sumk = %s ± 1e-12 rel" % g(2 * k), "run.re = %s ± 1e-12 rel" % g(re_w)],
                    source="Hooper (1981) 2-K via %s fluids.fittings.Hooper2K(name='%s')" % (FLUIDS, name))
+    # Darby's 3-K: fluids finds the nominal size from Di along its
+    # schedule 40 bores (NPS40, S40i); the table adds bores between and
+    # beyond them (8 mm, 30 mm, 750 mm, 900 mm) to check that.
+    for key, name in DARBY:
+        for d, re in ((0.008, 2e3), (0.030, 5e4), (pipe("40", "2")[2] / 1000, 1e4),
+                      (pipe("40", "6")[2] / 1000, 3e5), (pipe("40", "12")[2] / 1000, 1e6),
+                      (pipe("40", "24")[2] / 1000, 2e6), (0.75, 5e6), (0.9, 8e6)):
+            k = fit.Darby3K(Di=d, Re=re, name=name)
+            rows.append([key, repr(d), repr(re), repr(k), repr(k)])
+        for nps, re in (("1", 3e3), ("4", 1e5), ("10", 2e6)):
+            d = pipe("40", nps)[2] / 1000
+            q, re_w = flow_for(re, d)
+            k = fit.Darby3K(Di=d, Re=re_w, name=name)
+            w.case("%s in NPS %s sch 40 at Re %g" % (key, nps, re),
+                   CUSTOM + "&l=1m&nps=%s&sch=40&eps=0mm&q=%sL/s&fit=%s:3" % (nps, q, key),
+                   ["run.sumk = %s ± 1e-12 rel" % g(3 * k), "run.re = %s ± 1e-12 rel" % g(re_w)],
+                   source="Darby (1999) 3-K via %s fluids.fittings.Darby3K(Di=%s, name='%s')"
+                   % (FLUIDS, g(d), name))
     ent = [("entry_sharp", fit.entrance_sharp(method="Crane"), "entrance_sharp(method='Crane')"),
            ("entry_reentrant", fit.entrance_distance(0.1, t=1e-4, method="Crane"),
             "entrance_distance(t=0.1 mm, method='Crane')"),
