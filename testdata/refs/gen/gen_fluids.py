@@ -261,7 +261,23 @@ def fittings():
                    ["run.sumk = %s ± 1e-12 rel" % g(3 * k), "run.re = %s ± 1e-12 rel" % g(re_w)],
                    source="Darby (1999) 3-K via %s fluids.fittings.Darby3K(Di=%s, name='%s')"
                    % (FLUIDS, g(d), name))
+    # Crane's standard tee (flow through the run 20 f_T, through the
+    # branch 60 f_T) is recalled, not a fluids function: the multiple is
+    # from memory, f_T is fluids' (Colebrook as ft_Crane's docstring).
+    for key, n in (("tee_run", 20), ("tee_branch", 60)):
+        for nps in ("1", "6", "16"):
+            d = pipe("40", nps)[2] / 1000
+            k = n * ft_exact(d)
+            rows.append([key, repr(d), "inf", repr(k), repr(n * ft_Crane(d))])
+            q, _ = flow_for(1e6, d)
+            w.case("%s in NPS %s sch 40" % (key, nps),
+                   CUSTOM + "&l=1m&nps=%s&sch=40&eps=0mm&q=%sL/s&fit=%s:1" % (nps, q, key),
+                   ["run.sumk = %s ± 1e-9 rel" % g(k)],
+                   source="Crane TP-410 standard tee %d f_T (from memory), f_T via %s "
+                   "fluids.friction.Colebrook as ft_Crane" % (n, FLUIDS))
     ent = [("entry_sharp", fit.entrance_sharp(method="Crane"), "entrance_sharp(method='Crane')"),
+           ("entry_round", fit.entrance_rounded(Di=0.1, rc=0.015, method="Crane"),
+            "entrance_rounded(rc/Di=0.15, method='Crane')"),
            ("entry_reentrant", fit.entrance_distance(0.1, t=1e-4, method="Crane"),
             "entrance_distance(t=0.1 mm, method='Crane')"),
            ("exit", fit.exit_normal(), "exit_normal()")]
