@@ -484,9 +484,10 @@ func TestCases(t *testing.T) {
 			}
 		})
 	}
-	// The bar the project set itself: at least 40 cases from at least 6 sources.
-	if len(cases) < 40 || len(distinctSources(cases)) < 6 {
-		t.Errorf("%d cases from %d distinct sources; want at least 40 from 6", len(cases), len(distinctSources(cases)))
+	// The bar the project set itself (issue 10): at least 250 cases from at
+	// least 25 distinct sources.
+	if len(cases) < 250 || len(distinctSources(cases)) < 25 {
+		t.Errorf("%d cases from %d distinct sources; want at least 250 from 25", len(cases), len(distinctSources(cases)))
 	}
 }
 
