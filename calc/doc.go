@@ -94,9 +94,12 @@
 //
 // Water from 0 °C to 100 °C, compressed liquid up to 10 MPa: density from
 // IAPWS-IF97 region 1, viscosity from the IAPWS 2008 release, vapour
-// pressure from the IF97 saturation line. Outside a formulation's range the
-// functions return an error; they never extrapolate. A custom liquid takes
-// typed properties.
+// pressure from the IF97 saturation line. Seawater of 35 g/kg from 0 °C to
+// 40 °C up to 10 MPa: Sharqawy et al. (2010), compressed in the ratio of
+// pure water's IF97 densities. Both take the absolute pressure in the line
+// (Fluid.Pressure records it). Outside a formulation's range the functions
+// return an error; they never extrapolate. A custom liquid takes typed
+// properties.
 //
 // # Errors
 //
