@@ -16,12 +16,7 @@ func (b *builder) liquidCard() Card {
 	} else {
 		blocks = append(blocks, fields(b.quantity("t", "", "")), fields(b.quantity("pl", "", ""), b.ref("plref")))
 	}
-	fluid := ""
-	if f := b.r.Fluid; f != nil {
-		fluid = b.fluidName() + ": density " + b.show(f.Density, calc.Density) + " · viscosity " +
-			b.show(f.Viscosity, calc.DynamicViscosity) + " · vapour pressure " + b.absolute(f.VapourPressure)
-	}
-	blocks = append(blocks, text("computed", "fluid", fluid), b.toggle("site"))
+	blocks = append(blocks, text("computed", "fluid", b.fluidLine()), b.toggle("site"))
 	if b.d.SideOf("site") == "baro" {
 		blocks = append(blocks, fields(b.quantity("baro", "", "")))
 	} else {
@@ -40,6 +35,16 @@ var siteNotes = []string{
 	"standard sea-level pressure (no altitude or barometer given)",
 	"ISO 2533 standard atmosphere at the site altitude",
 	"barometer reading",
+}
+
+// fluidLine is the liquid with the properties used, "" without a liquid.
+func (b *builder) fluidLine() string {
+	f := b.r.Fluid
+	if f == nil {
+		return ""
+	}
+	return b.fluidName() + ": density " + b.show(f.Density, calc.Density) + " · viscosity " +
+		b.show(f.Viscosity, calc.DynamicViscosity) + " · vapour pressure " + b.absolute(f.VapourPressure)
 }
 
 // fluidName names the liquid at its temperature and the pressure its

@@ -247,6 +247,8 @@ func (b *builder) reportResults() Card {
 	}
 	heading := func(ok bool, s string) Block { return maybe(ok, Block{Kind: BlockHeading, Text: s}) }
 	return Card{ID: "report-results", Class: "rsec", Title: "Results", Blocks: []Block{
+		heading(b.r.Fluid != nil, "Liquid"),
+		maybe(b.r.Fluid != nil, text("", "report-fluid", b.fluidLine())),
 		heading(br != nil, "Energy balance"),
 		answer,
 		heading(br != nil, "Where the head goes"),

@@ -321,3 +321,29 @@ func TestReportFittingK(t *testing.T) {
 		t.Logf("%d fittings, methods %v", len(want), methods)
 	}
 }
+
+func TestReportLiquidPressure(t *testing.T) {
+	// Source: the rule of calc/scenario/doc.go (pl): the report and the
+	// liquid card say which pressure the water's properties were taken
+	// at — the stated line pressure, the points' mean, else the site's.
+	for _, tc := range []struct{ q, want string }{
+		{"liq=water&t=20C&baro=101.325kPa&pl=1.8MPa&plref=a&l=10m&d=50mm&q=2L/s", "water at 20.00 °C and 1800 kPa absolute (the line pressure)"},
+		{"liq=water&t=20C&baro=100kPa&p1=0kPa&p2=300kPa&z1=0m&z2=0m&v1=0m/s&v2=0m/s&q=1L/s&hf=1m", "water at 20.00 °C and 250.0 kPa absolute (mean of the points' pressures)"},
+		{"liq=seawater&t=15C&baro=98kPa&l=10m&d=50mm&q=2L/s", "seawater (35 g/kg) at 15.00 °C and 98.00 kPa absolute (site pressure)"},
+	} {
+		sc, err := scenario.Parse(tc.q)
+		if err != nil {
+			t.Fatal(err)
+		}
+		sh, _ := sheetOf(t, sc, "report")
+		var got string
+		for _, bl := range card(t, sh.Cards, "report-results").Blocks {
+			if bl.ID == "report-fluid" {
+				got = bl.Text
+			}
+		}
+		if !strings.HasPrefix(got, tc.want) {
+			t.Errorf("%s: report says %q, want it to start %q", tc.q, got, tc.want)
+		}
+	}
+}
