@@ -68,7 +68,7 @@ var Table = []Param{
 	q("pv", "vapour pressure", "Vapour pressure", "(absolute)", calc.Pressure, "kPa", "psi", "enter the liquid's vapour pressure (absolute; 0 if negligible)"),
 	grp(q("alt", "site altitude", "Site altitude", "(above sea level)", calc.Length, "m", "ft", "enter the site altitude"), "site"),
 	grp(q("baro", "barometer", "Barometer", "(absolute)", calc.Pressure, "kPa", "psi", "enter the barometer reading"), "site"),
-	q("pl", "line pressure", "Line pressure", "(for the liquid's properties; blank: the points' mean, else the site's)", calc.Pressure, "kPa", "psi", "enter the pressure in the line"),
+	q("pl", "line pressure", "Line pressure", "(blank: mean of the points, else the site)", calc.Pressure, "kPa", "psi", "enter the pressure in the line"),
 	ref("plref", "gauge/absolute of the line pressure"),
 
 	q("p1", "pressure at 1", "Pressure", "", calc.Pressure, "kPa", "psi", "enter the pressure at point 1 (0 for a surface open to the air)"),

@@ -14,7 +14,7 @@ func (b *builder) liquidCard() Card {
 	if b.s.Get("liq") == "custom" {
 		blocks = append(blocks, fields(b.quantity("rho", "", ""), b.quantity("mu", "", ""), b.quantity("pv", "", "")))
 	} else {
-		blocks = append(blocks, fields(b.quantity("t", "", "")), fields(b.quantity("pl", "", ""), b.ref("plref")))
+		blocks = append(blocks, fields(b.quantity("t", "", "")), fields(b.quantity("pl", "", "")), fields(b.ref("plref")))
 	}
 	blocks = append(blocks, text("computed", "fluid", b.fluidLine()), b.toggle("site"))
 	if b.d.SideOf("site") == "baro" {
