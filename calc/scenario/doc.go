@@ -21,8 +21,15 @@
 //
 // Liquid and site:
 //
-//	liq     water | seawater | custom        the liquid (default water; seawater is 35 g/kg, 0–40 °C)
-//	t       temperature, e.g. 18C, 64F       required for water and seawater
+//	liq     water | seawater | eg | pg | custom   the liquid (default water; seawater is 35 g/kg,
+//	                                         0–40 °C; eg and pg are ethylene and propylene glycol
+//	                                         in water, from the mix's freezing point to 100 °C)
+//	gly     glycol share by mass, e.g. 30%   eg and pg: 0 to 60 % by mass
+//	glyv    glycol share by volume, e.g. 30% eg and pg, instead of gly: the glycol's volume over the
+//	                                         glycol's and the water's measured apart at 20 °C
+//	                                         (0 to about 57 % for eg, 59 % for pg); converted
+//	                                         to the share by mass, which the sheet shows too
+//	t       temperature, e.g. 18C, 64F       required for water, seawater and glycol mixes
 //	rho     density, e.g. 998kg/m3           custom liquid only
 //	mu      dynamic viscosity, e.g. 1.0mPa.s custom liquid only
 //	pv      vapour pressure (absolute)       custom liquid only

@@ -241,6 +241,8 @@ func (e *eval) liquid() {
 			return
 		}
 		e.res.Fluid = &fl
+	case "eg", "pg":
+		e.glycol(liq)
 	case "custom":
 		rho, ok1 := e.quantity("rho")
 		mu, ok2 := e.quantity("mu")
@@ -255,7 +257,7 @@ func (e *eval) liquid() {
 		}
 		e.res.Fluid = &fl
 	default:
-		e.fail("liq", fmt.Sprintf("liq: %q is not a liquid Fieldhead knows; use water, seawater or custom", liq))
+		e.fail("liq", fmt.Sprintf("liq: %q is not a liquid Fieldhead knows; use water, seawater, eg, pg or custom", liq))
 	}
 }
 

@@ -12,9 +12,11 @@ type Result struct {
 
 	US bool // the scenario asks for US customary units
 
-	Fluid        *calc.Fluid // the liquid at its temperature
-	SitePressure float64     // Pa absolute
-	SiteFrom     SiteSource  // how the site pressure was found
+	Fluid *calc.Fluid // the liquid at its temperature
+	// Glycol is the glycol mix's make-up (liq=eg or pg), nil for other liquids.
+	Glycol       *GlycolMix
+	SitePressure float64    // Pa absolute
+	SiteFrom     SiteSource // how the site pressure was found
 
 	Run     *RunResult          // the pipe run (Regime view; friction in the balance)
 	Line    *calc.LineResult    // the line of segments at the flow (also when the balance cannot be solved)
@@ -97,3 +99,12 @@ const (
 	SiteAltitude                    // the ISO 2533 standard atmosphere at the site altitude
 	SiteBarometer                   // the barometer reading
 )
+
+// GlycolMix is the make-up of a glycol–water mix and its freezing point.
+type GlycolMix struct {
+	Glycol         calc.Glycol
+	MassFraction   float64 // kg of glycol per kg of mix
+	VolumeFraction float64 // glycol's share of the unmixed volumes at 20 °C
+	ByVolume       bool    // the share was given by volume (glyv)
+	FreezingPoint  float64 // K
+}
