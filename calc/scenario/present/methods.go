@@ -14,6 +14,10 @@ func methodsFor(us bool) []Method {
 	if us {
 		margin = calc.FormatValue(calc.NPSHMarginMin, "ft", 1)
 	}
+	mixTemp, mixTop := "20 °C", "100 °C"
+	if us {
+		mixTemp, mixTop = "68 °F", "212 °F"
+	}
 	energy := calc.DefaultUnit(calc.SpecificEnergy, us).Symbol + " and per 100 " + calc.DefaultUnit(calc.Length, us).Symbol + " of head"
 	return []Method{
 		{"Energy balance", "the steady-flow energy equation between the two points in head form (metres or feet of the flowing liquid); kinetic-energy factor α 2 in laminar and 1 in turbulent flow, or a power-law profile estimate on request; laminar below Re 2300, turbulent above 4000 (common practice), transitional flow flagged and bounded by both assumptions."},
@@ -21,6 +25,7 @@ func methodsFor(us bool) []Method {
 		{"Fitting losses", "Darcy–Weisbach for pipe friction; fittings by loss coefficients K on the velocity head, by the pipe's size: valves, elbows, bends and tees by Crane TP-410 (K = n·f_T, f_T the fully turbulent friction factor of clean commercial steel of that size); threaded and mitred fittings and reduced-trim valves by the 2-K method of Hooper (1981); entrances and the exit by fixed values; sudden changes of diameter by Borda–Carnot; a K from the maker's data sheet may be given per fitting. Checked against python3-fluids."},
 		{"Pipe roughness", "per material with its source: Farshad & Rieke (2006) for stainless steel and cement-mortar lining; the Moody (1944) chart values as python3-fluids tabulates them for cast iron, galvanized steel and drawn tubing; commercial steel, PE, PVC and concrete from memory."},
 		{"Water", "density from IAPWS-IF97 (2007 revision) region 1, vapour pressure from the IF97 saturation line, viscosity from the IAPWS 2008 release, checked against the releases' verification tables and python3-iapws; seawater of 35 g/kg from Sharqawy, Lienhard & Zubair (2010), checked against the IAPWS 2008 seawater release (python3-iapws) and TEOS-10 (python3-gsw)."},
+		{"Glycol mixes", "ethylene and propylene glycol in water, 0–60 % by mass (a share by volume is converted: the glycol's volume over the glycol's and the water's measured apart at " + mixTemp + "), from the mix's freezing point to " + mixTop + ": density from the pure liquids' volumes added with an excess volume, viscosity by the Vogel equation through three recalled values every 10 % by mass, freezing point by monotone cubic interpolation, all of these constants from memory (Melinder's 2010 coefficient sets could not be consulted); exactly water at 0 %; vapour pressure by Raoult's law, the water's mole fraction times its IF97 saturation pressure (an approximation); the water limit, Raoult's law, the ideal-dilute freezing point and the share by volume checked with python3-iapws and GNU units. Commercial inhibited glycols differ from these pure mixes: the maker's data sheet governs."},
 		{"Site pressure", "the ISO 2533 standard atmosphere at the site altitude, or the barometer reading."},
 		{"Units", "conversion factors of NIST SP 811 (2008), Appendix B, checked against GNU units; conventional water-column units at their SP 811 values, kept apart from the head of the actual liquid."},
 		{"Pipe dimensions", "each catalogue in its own notation: ASME B36.10M carbon steel and ASME B36.19M stainless (NPS, with DN), PVC to ASTM D1785 and D2241, checked row by row against python3-fluids; copper tube to ASTM B88, PE to ISO 4427 and cement-lined ductile iron to ISO 2531 with ISO 4179 linings from memory."},
