@@ -249,6 +249,30 @@ func sizeName(p calc.PipeSize) string {
 	return "NPS " + p.NPS
 }
 
+// liquidFacts are the liquid's properties for the printed sheet: nil
+// when the liquid could not be worked out.
+func (b *builder) liquidFacts() []Fact {
+	f := b.r.Fluid
+	if f == nil {
+		return nil
+	}
+	pv := b.absolute(f.VapourPressure)
+	if b.r.Glycol != nil {
+		pv += " (Raoult's law)"
+	}
+	fs := []Fact{
+		{ID: "report-liquid", Label: "liquid", Value: b.fluidName(), Key: true},
+		{Label: "density", Value: b.show(f.Density, calc.Density)},
+		{Label: "viscosity", Value: b.show(f.Viscosity, calc.DynamicViscosity)},
+		{Label: "vapour pressure", Value: pv},
+	}
+	if g := b.r.Glycol; g != nil {
+		fs = append(fs, Fact{Label: "freezes at", Value: b.show(g.FreezingPoint, calc.Temperature) + " (from memory)"},
+			Fact{Label: "glycol share", Value: glycolShare(g)})
+	}
+	return fs
+}
+
 // glycolShare gives a glycol mix's share both ways, the one typed first.
 func glycolShare(g *scenario.GlycolMix) string {
 	mass, vol := glyPercent(g.MassFraction)+" by mass", glyPercent(g.VolumeFraction)+" by volume"

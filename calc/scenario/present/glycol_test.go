@@ -93,3 +93,28 @@ func TestGlycolLiquidCard(t *testing.T) {
 		}
 	}
 }
+
+// The printed sheet lists the liquid's properties, for a glycol mix with
+// its freezing point (from memory) and its share both ways.
+func TestGlycolReport(t *testing.T) {
+	sc, err := scenario.Parse("liq=eg&gly=30%&t=7C&alt=100m")
+	if err != nil {
+		t.Fatal(err)
+	}
+	sh, _ := sheetOf(t, sc, "report")
+	var got []string
+	for _, c := range sh.Cards {
+		for _, b := range c.Blocks {
+			for _, f := range b.Facts {
+				got = append(got, f.Label+": "+f.Value)
+			}
+		}
+	}
+	all := strings.Join(got, " | ")
+	for _, want := range []string{"liquid: ethylene glycol 30 % by mass at 7.000 °C", "freezes at: -14.10 °C (from memory)",
+		"glycol share: 30 % by mass = 27.8 % by volume", "vapour pressure: 0.8912 kPa absolute (Raoult's law)"} {
+		if !strings.Contains(all, want) {
+			t.Errorf("the report lacks %q: %s", want, all)
+		}
+	}
+}

@@ -245,7 +245,10 @@ func (b *builder) reportResults() Card {
 		}, b.turbineFacts()...)}
 	}
 	heading := func(ok bool, s string) Block { return maybe(ok, Block{Kind: BlockHeading, Text: s}) }
+	liquid := b.liquidFacts()
 	return Card{ID: "report-results", Class: "rsec", Title: "Results", Blocks: []Block{
+		heading(liquid != nil, "Liquid"),
+		maybe(liquid != nil, Block{Kind: BlockFacts, Class: "facts", Facts: liquid}),
 		heading(br != nil, "Energy balance"),
 		answer,
 		heading(br != nil, "Where the head goes"),
