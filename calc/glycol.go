@@ -96,9 +96,9 @@ var glycols = [...]glycolData{
 	},
 }
 
-// waterMolarMass is the molar mass of ordinary water, 18.015 268 g/mol
+// glycolWaterMolar is the molar mass of ordinary water, 18.015 268 g/mol
 // (IAPWS-IF97).
-const waterMolarMass = 18.015268e-3
+const glycolWaterMolar = 18.015268e-3
 
 func (g Glycol) data() (glycolData, error) {
 	if g != EthyleneGlycol && g != PropyleneGlycol {
@@ -107,14 +107,14 @@ func (g Glycol) data() (glycolData, error) {
 	return glycols[g], nil
 }
 
-// percent writes a fraction as a percentage, "30 %".
-func percent(f float64) string {
+// glycolPercent writes a fraction as a percentage, "30 %".
+func glycolPercent(f float64) string {
 	return strconv.FormatFloat(f*100, 'g', 4, 64) + " %"
 }
 
-func checkMassFraction(w float64) error {
+func glycolCheckShare(w float64) error {
 	if !(w >= 0 && w <= GlycolMaxMassFraction) {
-		return fieldErrorf("w", "the glycol share must be between 0 and %s by mass; got %s", percent(GlycolMaxMassFraction), percent(w))
+		return fieldErrorf("w", "the glycol share must be between 0 and %s by mass; got %s", glycolPercent(GlycolMaxMassFraction), glycolPercent(w))
 	}
 	return nil
 }
@@ -128,7 +128,7 @@ func GlycolFreezingPoint(g Glycol, w float64) (float64, error) {
 	if err != nil {
 		return 0, err
 	}
-	if err := checkMassFraction(w); err != nil {
+	if err := glycolCheckShare(w); err != nil {
 		return 0, err
 	}
 	return 273.15 + glycolFreeze(d, w), nil
@@ -150,7 +150,7 @@ func GlycolVolumeFraction(g Glycol, w float64) (float64, error) {
 	if err != nil {
 		return 0, err
 	}
-	if err := checkMassFraction(w); err != nil {
+	if err := glycolCheckShare(w); err != nil {
 		return 0, err
 	}
 	vg := w / d.rho20
@@ -169,7 +169,7 @@ func GlycolMassFraction(g Glycol, phi float64) (float64, error) {
 	}
 	maxPhi, _ := GlycolVolumeFraction(g, GlycolMaxMassFraction)
 	if !(phi >= 0 && phi <= maxPhi*(1+1e-12)) {
-		return 0, fieldErrorf("phi", "the glycol share must be between 0 and %s by volume (%s by mass); got %s", percent(maxPhi), percent(GlycolMaxMassFraction), percent(phi))
+		return 0, fieldErrorf("phi", "the glycol share must be between 0 and %s by volume (%s by mass); got %s", glycolPercent(maxPhi), glycolPercent(GlycolMaxMassFraction), glycolPercent(phi))
 	}
 	mg := phi * d.rho20
 	return math.Min(mg/(mg+(1-phi)*glycolWater20()), GlycolMaxMassFraction), nil
@@ -202,7 +202,7 @@ func GlycolMix(g Glycol, w, tK, pPa float64) (Fluid, error) {
 	if err != nil {
 		return Fluid{}, err
 	}
-	if err := checkMassFraction(w); err != nil {
+	if err := glycolCheckShare(w); err != nil {
 		return Fluid{}, err
 	}
 	tf := 273.15 + glycolFreeze(d, w)
@@ -210,7 +210,7 @@ func GlycolMix(g Glycol, w, tK, pPa float64) (Fluid, error) {
 	case math.IsNaN(tK) || tK > GlycolMaxTemperature+waterTempSlack:
 		return Fluid{}, fieldErrorf("t", "a glycol mix's temperature must be between its freezing point and %v; got %v", Fig(GlycolMaxTemperature, Temperature), Fig(tK, Temperature))
 	case tK < tf-1e-9:
-		return Fluid{}, fieldErrorf("t", "%s %s by mass freezes at %v: the temperature %v is below it (a stronger mix, or a warmer liquid, is needed)", percent(w), g, Fig(tf, Temperature), Fig(tK, Temperature))
+		return Fluid{}, fieldErrorf("t", "%s %s by mass freezes at %v: the temperature %v is below it (a stronger mix, or a warmer liquid, is needed)", glycolPercent(w), g, Fig(tf, Temperature), Fig(tK, Temperature))
 	case tK > GlycolMaxTemperature:
 		tK = GlycolMaxTemperature
 	}
@@ -224,7 +224,7 @@ func GlycolMix(g Glycol, w, tK, pPa float64) (Fluid, error) {
 	rhoG := d.rho20 + d.drho*(tK-293.15)
 	rho := 1 / (w/rhoG + (1-w)/rhoW + w*(1-w)*d.excess)
 	return Fluid{
-		Name:           percent(w) + " " + g.String() + " by mass at " + formatCelsius(tK),
+		Name:           glycolPercent(w) + " " + g.String() + " by mass at " + formatCelsius(tK),
 		Density:        rho,
 		Viscosity:      glycolViscosity(d, w, tK, waterViscosityCore(tw, rhoW)),
 		VapourPressure: pv,
@@ -235,7 +235,7 @@ func GlycolMix(g Glycol, w, tK, pPa float64) (Fluid, error) {
 // glycolWaterMoleFraction is the water's mole fraction at glycol mass
 // fraction w.
 func glycolWaterMoleFraction(d glycolData, w float64) float64 {
-	nw := (1 - w) / waterMolarMass
+	nw := (1 - w) / glycolWaterMolar
 	return nw / (nw + w/d.molarMass)
 }
 
