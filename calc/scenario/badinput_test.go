@@ -80,6 +80,15 @@ func TestBadLinks(t *testing.T) {
 		{"running hours beyond a year", demo("hours", "9000"), "", "hours", "8784", "hours=9000", true},
 		{"running hours as a word", demo("hours", "many"), "", "hours", "plain number", "hours=many", true},
 		{"a negative tariff", demo("tariff", "-0.2"), "", "tariff", "zero or positive", "tariff=-0.2", true},
+		// Glycol mixes (issue 12).
+		{"a glycol share above 60 % by mass", with("liq=pg", "gly=70%"), "", "gly", "between 0 and 60 % by mass", "gly=70%", false},
+		{"a negative glycol share", with("liq=eg", "gly=-5%"), "", "gly", "between 0 and 60 %", "gly=-5%", false},
+		{"a glycol share by volume above the range", with("liq=eg", "glyv=65%"), "", "glyv", "by volume", "glyv=65%", false},
+		{"a glycol share in a unit of its own", with("liq=eg", "gly=30kg"), "", "gly", "", "gly=30kg", false},
+		{"a glycol mix with no share", with("liq=pg"), "", "gly", "glycol share", "liq=pg", false},
+		{"a glycol mix below its freezing point", with("liq=pg", "gly=30%", "t=-20C"), "", "t", "freezes at -12.70 °C", "t=-20C", false},
+		{"a glycol mix above 100 °C", with("liq=eg", "gly=30%", "t=120C"), "", "t", "freezing point", "t=120C", false},
+		{"a glycol share typed as a fraction", with("liq=pg", "gly=0.3"), "", "", "", "gly=0.3", true},
 		{"a velocity so large the head overflows", with("v1=1e200m/s"), "", "", "", "v1=1e200m/s", false},
 		{"a pressure so large the head overflows", with("p1=1e300kPa", "p2=-1e300kPa", "solve=ht"), "", "", "", "p1=1e300kPa", false},
 	}

@@ -75,6 +75,18 @@ func observable(r Result, key string) (float64, string, error) {
 		case "p":
 			return r.Fluid.Pressure, "", nil
 		}
+	case "glycol":
+		if r.Glycol == nil {
+			return miss()
+		}
+		switch name {
+		case "tf":
+			return r.Glycol.FreezingPoint, "", nil
+		case "w":
+			return r.Glycol.MassFraction, "", nil
+		case "phi":
+			return r.Glycol.VolumeFraction, "", nil
+		}
 	case "site":
 		if name == "p" && r.SitePressure > 0 {
 			return r.SitePressure, "", nil

@@ -21,8 +21,15 @@
 //
 // Liquid and site:
 //
-//	liq     water | seawater | custom        the liquid (default water; seawater is 35 g/kg, 0–40 °C)
-//	t       temperature, e.g. 18C, 64F       required for water and seawater
+//	liq     water | seawater | eg | pg | custom   the liquid (default water; seawater is 35 g/kg,
+//	                                         0–40 °C; eg and pg are ethylene and propylene glycol
+//	                                         in water, from the mix's freezing point to 100 °C)
+//	gly     glycol share by mass, e.g. 30%   eg and pg: 0 to 60 % by mass
+//	glyv    glycol share by volume, e.g. 30% eg and pg, instead of gly: the glycol's volume over the
+//	                                         glycol's and the water's measured apart at 20 °C
+//	                                         (0 to about 57 % for eg, 59 % for pg); converted
+//	                                         to the share by mass, which the sheet shows too
+//	t       temperature, e.g. 18C, 64F       required for water, seawater and glycol mixes
 //	rho     density, e.g. 998kg/m3           custom liquid only
 //	mu      dynamic viscosity, e.g. 1.0mPa.s custom liquid only
 //	pv      vapour pressure (absolute)       custom liquid only
@@ -47,6 +54,13 @@
 // error on pl asking for it; one below the vapour pressure takes the
 // vapour pressure with a warning. Result.Fluid.Pressure and
 // Result.LiquidFrom say which was used.
+// A glycol mix (liq=eg or pg) below its freezing point, or with a share
+// outside the range, is an error on t, gly or glyv. Every glycol mix
+// carries a warning on liq that a commercial (inhibited) glycol differs and
+// that its maker's data sheet governs; the mix's properties are recalled
+// constants (from memory), its vapour pressure Raoult's law. A share of
+// 1.5 % or less draws a warning naming the share probably meant (0.3 typed
+// for 30 %). Result.Glycol holds the share both ways and the freezing point.
 //
 // The two points of the energy balance (n = 1 in, 2 out):
 //

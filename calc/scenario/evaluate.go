@@ -255,6 +255,8 @@ func (e *eval) liquid() {
 			return
 		}
 		e.res.Fluid, e.res.LiquidFrom = &fl, from
+	case "eg", "pg":
+		e.glycol(liq)
 	case "custom":
 		rho, ok1 := e.quantity("rho")
 		mu, ok2 := e.quantity("mu")
@@ -269,7 +271,7 @@ func (e *eval) liquid() {
 		}
 		e.res.Fluid, e.res.LiquidFrom = &fl, LiquidTypedProps
 	default:
-		e.fail("liq", fmt.Sprintf("liq: %q is not a liquid Fieldhead knows; use water, seawater or custom", liq))
+		e.fail("liq", fmt.Sprintf("liq: %q is not a liquid Fieldhead knows; use water, seawater, eg, pg or custom", liq))
 	}
 }
 

@@ -60,8 +60,11 @@ var Table = []Param{
 	{Name: "name", Label: "sheet title", Box: "Sheet title", Hint: "(site, equipment, date)", Kind: KindText},
 
 	{Name: "liq", Label: "liquid", Box: "Liquid", Kind: KindChoice, choices: func() []Choice {
-		return []Choice{{"water", "Water"}, {"seawater", "Seawater, 35 g/kg"}, {"custom", "Other liquid (typed properties)"}}
+		return []Choice{{"water", "Water"}, {"seawater", "Seawater, 35 g/kg"}, {"eg", "Ethylene glycol in water"},
+			{"pg", "Propylene glycol in water"}, {"custom", "Other liquid (typed properties)"}}
 	}},
+	grp(q("gly", "glycol share by mass", "Glycol share", "(% by mass)", calc.Dimensionless, "%", "%", "enter the glycol share of the mix, e.g. 30 % by mass"), "gly"),
+	grp(q("glyv", "glycol share by volume", "Glycol share", "(% by volume, glycol and water measured apart)", calc.Dimensionless, "%", "%", "enter the glycol share of the mix by volume, e.g. 30 %"), "gly"),
 	q("t", "temperature", "Temperature", "", calc.Temperature, "°C", "°F", "enter the liquid temperature"),
 	q("rho", "density", "Density", "", calc.Density, "kg/m³", "lb/ft³", "enter the liquid's density"),
 	q("mu", "viscosity", "Viscosity", "(dynamic)", calc.DynamicViscosity, "mPa·s", "cP", "enter the liquid's dynamic viscosity"),
@@ -398,6 +401,7 @@ var Groups = []Group{
 	{"fric", "Friction head between the points", []Side{{"run", "from the pipe run", []string{"l"}}, {"hf", "typed in", []string{"hf"}}}},
 	{"pipe", "Pipe given by", []Side{{"nps", "nominal size", []string{"nps", "sch"}}, {"d", "inside diameter", []string{"d"}}}},
 	{"rough", "Wall roughness from", []Side{{"mat", "material", []string{"mat"}}, {"eps", "roughness", []string{"eps"}}}},
+	{"gly", "Glycol share given", []Side{{"m", "by mass", []string{"gly"}}, {"v", "by volume", []string{"glyv"}}}},
 	{"site", "Site pressure from", []Side{{"alt", "altitude", []string{"alt"}}, {"baro", "barometer", []string{"baro"}}}},
 	{"gsp", "Pipe at the suction gauge given by", []Side{{"d", "inside diameter", []string{"ds"}}, {"nps", "nominal size", []string{"dsn", "dss"}}}},
 	{"gdp", "Pipe at the discharge gauge given by", []Side{{"d", "inside diameter", []string{"dd"}}, {"nps", "nominal size", []string{"ddn", "dds"}}}},

@@ -18,6 +18,8 @@ type Result struct {
 	// LiquidFrom says where the pressure the liquid's properties were
 	// taken at (Fluid.Pressure) came from.
 	LiquidFrom LiquidSource
+	// Glycol is the glycol mix's make-up (liq=eg or pg), nil for other liquids.
+	Glycol *GlycolMix
 
 	Run     *RunResult          // the pipe run (Regime view; friction in the balance)
 	Line    *calc.LineResult    // the line of segments at the flow (also when the balance cannot be solved)
@@ -112,3 +114,12 @@ const (
 	LiquidSaturation                     // the vapour pressure: the points' mean or the site pressure lay below it
 	LiquidTypedProps                     // a liquid of typed properties: no pressure
 )
+
+// GlycolMix is the make-up of a glycol–water mix and its freezing point.
+type GlycolMix struct {
+	Glycol         calc.Glycol
+	MassFraction   float64 // kg of glycol per kg of mix
+	VolumeFraction float64 // glycol's share of the unmixed volumes at 20 °C
+	ByVolume       bool    // the share was given by volume (glyv)
+	FreezingPoint  float64 // K
+}

@@ -268,9 +268,9 @@ func (b *builder) others(view string) []string {
 func uses(view, p string) bool {
 	switch view {
 	case "convert":
-		return oneOf(p, "view", "units", "name", "liq", "t", "rho", "mu", "pv", "alt", "baro", "pl", "plref", "cv", "cvref")
+		return oneOf(p, "view", "units", "name", "liq", "gly", "glyv", "t", "rho", "mu", "pv", "alt", "baro", "pl", "plref", "cv", "cvref")
 	case "regime":
-		return oneOf(p, "view", "units", "name", "liq", "t", "rho", "mu", "pv", "pl", "plref", "q", "l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw")
+		return oneOf(p, "view", "units", "name", "liq", "gly", "glyv", "t", "rho", "mu", "pv", "pl", "plref", "q", "l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw")
 	case "balance", "line", "pump":
 		return p != "cv" && p != "cvref"
 	case "book":

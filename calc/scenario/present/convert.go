@@ -11,12 +11,26 @@ import (
 // liquidCard is the liquid, its temperature and the site pressure.
 func (b *builder) liquidCard() Card {
 	blocks := []Block{fields(b.picker("liq", "", ""))}
-	if b.s.Get("liq") == "custom" {
+	switch strings.TrimSpace(b.s.Get("liq")) {
+	case "custom":
 		blocks = append(blocks, fields(b.quantity("rho", "", ""), b.quantity("mu", "", ""), b.quantity("pv", "", "")))
-	} else {
+	case "eg", "pg":
+		share := "gly"
+		if b.d.SideOf("gly") == "v" {
+			share = "glyv"
+		}
+		blocks = append(blocks, b.toggle("gly"), fields(b.quantity(share, "", ""), b.quantity("t", "", "")))
+	default:
 		blocks = append(blocks, fields(b.quantity("t", "", "")), fields(b.quantity("pl", "", "")), fields(b.ref("plref")))
 	}
-	blocks = append(blocks, text("computed", "fluid", b.fluidLine()), b.toggle("site"))
+	blocks = append(blocks, text("computed", "fluid", b.fluidLine()))
+	if g := b.r.Glycol; g != nil {
+		blocks = append(blocks, Block{Kind: BlockFacts, ID: "glycol-facts", Class: "facts", Facts: []Fact{
+			{ID: "glycol-freezing", Label: "freezes at", Value: b.show(g.FreezingPoint, calc.Temperature) + " (from memory)", Key: true},
+			{ID: "glycol-share", Label: "glycol share", Value: glycolShare(g)},
+		}})
+	}
+	blocks = append(blocks, b.toggle("site"))
 	if b.d.SideOf("site") == "baro" {
 		blocks = append(blocks, fields(b.quantity("baro", "", "")))
 	} else {
@@ -43,8 +57,12 @@ func (b *builder) fluidLine() string {
 	if f == nil {
 		return ""
 	}
-	return b.fluidName() + ": density " + b.show(f.Density, calc.Density) + " · viscosity " +
+	line := b.fluidName() + ": density " + b.show(f.Density, calc.Density) + " · viscosity " +
 		b.show(f.Viscosity, calc.DynamicViscosity) + " · vapour pressure " + b.absolute(f.VapourPressure)
+	if b.r.Glycol != nil {
+		line += " (Raoult's law)"
+	}
+	return line
 }
 
 // fluidName names the liquid at its temperature and the pressure its
@@ -58,6 +76,9 @@ func (b *builder) fluidName() string {
 		return "liquid of the typed properties"
 	case "seawater":
 		return "seawater (35 g/kg)" + at
+	}
+	if g := b.r.Glycol; g != nil {
+		return g.Glycol.String() + " " + glyPercent(g.MassFraction) + " by mass at " + b.show(f.Temperature, calc.Temperature)
 	}
 	return "water" + at
 }
@@ -246,3 +267,39 @@ func sizeName(p calc.PipeSize) string {
 	}
 	return "NPS " + p.NPS
 }
+
+// liquidFacts are the liquid's properties for the printed sheet: nil
+// when the liquid could not be worked out.
+func (b *builder) liquidFacts() []Fact {
+	f := b.r.Fluid
+	if f == nil {
+		return nil
+	}
+	pv := b.absolute(f.VapourPressure)
+	if b.r.Glycol != nil {
+		pv += " (Raoult's law)"
+	}
+	fs := []Fact{
+		{ID: "report-liquid", Label: "liquid", Value: b.fluidName(), Key: true},
+		{Label: "density", Value: b.show(f.Density, calc.Density)},
+		{Label: "viscosity", Value: b.show(f.Viscosity, calc.DynamicViscosity)},
+		{Label: "vapour pressure", Value: pv},
+	}
+	if g := b.r.Glycol; g != nil {
+		fs = append(fs, Fact{Label: "freezes at", Value: b.show(g.FreezingPoint, calc.Temperature) + " (from memory)"},
+			Fact{Label: "glycol share", Value: glycolShare(g)})
+	}
+	return fs
+}
+
+// glycolShare gives a glycol mix's share both ways, the one typed first.
+func glycolShare(g *scenario.GlycolMix) string {
+	mass, vol := glyPercent(g.MassFraction)+" by mass", glyPercent(g.VolumeFraction)+" by volume"
+	if g.ByVolume {
+		return vol + " = " + mass
+	}
+	return mass + " = " + vol + " (glycol and water measured apart, before mixing)"
+}
+
+// glyPercent writes a share as a percentage to three figures: "29.2 %".
+func glyPercent(f float64) string { return strconv.FormatFloat(f*100, 'g', 3, 64) + " %" }

@@ -29,6 +29,9 @@ var csvColumns = []csvColumn{
 		if l == "" {
 			l = "water"
 		}
+		if g := r.Glycol; g != nil {
+			l = g.Glycol.String() + " " + glyPercent(g.MassFraction) + " by mass"
+		}
 		return 0, l, true
 	}},
 	{head: "temperature", param: "t", value: func(_ scenario.Scenario, r scenario.Result) (float64, string, bool) {

@@ -246,9 +246,10 @@ func (b *builder) reportResults() Card {
 		}, b.turbineFacts()...)}
 	}
 	heading := func(ok bool, s string) Block { return maybe(ok, Block{Kind: BlockHeading, Text: s}) }
+	liquid := b.liquidFacts()
 	return Card{ID: "report-results", Class: "rsec", Title: "Results", Blocks: []Block{
-		heading(b.r.Fluid != nil, "Liquid"),
-		maybe(b.r.Fluid != nil, text("", "report-fluid", b.fluidLine())),
+		heading(liquid != nil, "Liquid"),
+		maybe(liquid != nil, Block{Kind: BlockFacts, Class: "facts", Facts: liquid}),
 		heading(br != nil, "Energy balance"),
 		answer,
 		heading(br != nil, "Where the head goes"),

@@ -338,8 +338,10 @@ func TestReportLiquidPressure(t *testing.T) {
 		sh, _ := sheetOf(t, sc, "report")
 		var got string
 		for _, bl := range card(t, sh.Cards, "report-results").Blocks {
-			if bl.ID == "report-fluid" {
-				got = bl.Text
+			for _, f := range bl.Facts {
+				if f.ID == "report-liquid" {
+					got = f.Value
+				}
 			}
 		}
 		if !strings.HasPrefix(got, tc.want) {

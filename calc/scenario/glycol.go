@@ -1,0 +1,66 @@
+package scenario
+
+import (
+	"errors"
+	"strconv"
+
+	"fieldhead/calc"
+)
+
+// glycol builds a glycol–water mix (liq=eg or pg) from its share, by mass
+// (gly) or by volume (glyv), and its temperature.
+func (e *eval) glycol(liq string) {
+	g := calc.EthyleneGlycol
+	if liq == "pg" {
+		g = calc.PropyleneGlycol
+	}
+	mix := &GlycolMix{Glycol: g, ByVolume: e.s.Has("glyv")}
+	share := "gly"
+	if mix.ByVolume {
+		share = "glyv"
+	}
+	v, okShare := e.quantity(share)
+	t, okT := e.quantity("t")
+	if !okShare {
+		return
+	}
+	var err error
+	if mix.ByVolume {
+		mix.VolumeFraction = v
+		mix.MassFraction, err = calc.GlycolMassFraction(g, v)
+	} else {
+		mix.MassFraction = v
+		mix.VolumeFraction, err = calc.GlycolVolumeFraction(g, v)
+	}
+	if err != nil {
+		e.failAt(share, err)
+		return
+	}
+	if meant, slip := calc.FractionSlip(v); slip {
+		e.warn(share, "liquid", "a glycol share of "+strconv.FormatFloat(v*100, 'g', 3, 64)+" % protects against almost no frost: if a fraction was typed, the share meant is probably "+strconv.FormatFloat(meant, 'g', 3, 64)+" %")
+	}
+	mix.FreezingPoint, _ = calc.GlycolFreezingPoint(g, mix.MassFraction)
+	e.res.Glycol = mix
+	if !okT {
+		return
+	}
+	p := e.res.SitePressure
+	if p == 0 {
+		p = seaLevel
+	}
+	fl, err := calc.GlycolMix(g, mix.MassFraction, t, p)
+	var fe *calc.FieldError
+	if errors.As(err, &fe) && fe.Field == "p" {
+		// boiling at the site pressure: as for water, the properties are
+		// taken at the mix's vapour pressure, with a warning
+		pv, _ := calc.GlycolMix(g, mix.MassFraction, t, calc.GlycolMaxPressure)
+		e.warn("t", "liquid", "the glycol mix is at or above its boiling point at the site pressure; its properties are taken at its vapour pressure")
+		fl, err = calc.GlycolMix(g, mix.MassFraction, t, pv.VapourPressure)
+	}
+	if err != nil {
+		e.failAt("t", err)
+		return
+	}
+	e.res.Fluid, e.res.LiquidFrom = &fl, LiquidSite
+	e.warn("liq", "liquid", "commercial glycols carry inhibitors and dyes and differ from the pure mixes computed here, whose constants are recalled values (from memory): the maker's data sheet governs density, viscosity and freezing point")
+}
