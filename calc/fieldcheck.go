@@ -94,25 +94,25 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	finite := func(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 	switch {
 	case !finite(fl.Density) || !(fl.Density > 0):
-		return FieldCheck{}, fieldErrorf("rho", "the liquid density must be a positive number")
+		return FieldCheck{}, NewFieldError("rho", NotPositive).Got(Fig(fl.Density, Density))
 	case !finite(r.Ps) || r.Ps < fieldVacuum:
-		return FieldCheck{}, fieldErrorf("ps", "the suction gauge reading must be a finite gauge pressure not below full vacuum, got %v", Fig(r.Ps, Pressure))
+		return FieldCheck{}, NewFieldError("ps", BelowLimit).Got(Fig(r.Ps, Pressure)).Because(ReasonBelowVacuum)
 	case !finite(r.Pd) || r.Pd < fieldVacuum:
-		return FieldCheck{}, fieldErrorf("pd", "the discharge gauge reading must be a finite gauge pressure not below full vacuum, got %v", Fig(r.Pd, Pressure))
+		return FieldCheck{}, NewFieldError("pd", BelowLimit).Got(Fig(r.Pd, Pressure)).Because(ReasonBelowVacuum)
 	case !finite(r.Zs):
-		return FieldCheck{}, fieldErrorf("zs", "the suction gauge's height must be a finite number")
+		return FieldCheck{}, NewFieldError("zs", NotFinite)
 	case !finite(r.Zd):
-		return FieldCheck{}, fieldErrorf("zd", "the discharge gauge's height must be a finite number")
+		return FieldCheck{}, NewFieldError("zd", NotFinite)
 	case !finite(r.Ds) || !(r.Ds > 0):
-		return FieldCheck{}, fieldErrorf("ds", "give the inside diameter of the pipe at the suction gauge")
+		return FieldCheck{}, NewFieldError("ds", Missing)
 	case !finite(r.Dd) || !(r.Dd > 0):
-		return FieldCheck{}, fieldErrorf("dd", "give the inside diameter of the pipe at the discharge gauge")
+		return FieldCheck{}, NewFieldError("dd", Missing)
 	case !finite(r.Q) || !(r.Q > 0):
-		return FieldCheck{}, fieldErrorf("qm", "give the measured flow (above zero)")
+		return FieldCheck{}, NewFieldError("qm", NotPositive).Got(Fig(r.Q, Flow))
 	case !finite(r.PowerIn) || r.PowerIn < 0:
-		return FieldCheck{}, fieldErrorf("pin", "the measured electrical input must be zero (not measured) or positive, got %v", Fig(r.PowerIn, Power))
+		return FieldCheck{}, NewFieldError("pin", Negative).Got(Fig(r.PowerIn, Power))
 	case !finite(r.MotorEff) || r.MotorEff < 0 || r.MotorEff > 1:
-		return FieldCheck{}, fieldErrorf("etam", "the motor's efficiency must be above 0 and at most 100 %%, got %.4g %%", r.MotorEff*100)
+		return FieldCheck{}, NewFieldError("etam", OutOfRange).Got(Num(r.MotorEff)).Within(Num(0), Num(1)).Because(ReasonEfficiency)
 	}
 	g := StandardGravity
 	rhog := fl.Density * g

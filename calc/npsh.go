@@ -82,19 +82,19 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 	finite := func(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 	switch {
 	case !finite(fl.Density) || !(fl.Density > 0):
-		return NPSHResult{}, fieldErrorf("rho", "the liquid density must be a positive number")
+		return NPSHResult{}, NewFieldError("rho", NotPositive).Got(Fig(fl.Density, Density))
 	case !finite(fl.VapourPressure) || fl.VapourPressure < 0:
-		return NPSHResult{}, fieldErrorf("pv", "the liquid's vapour pressure must be zero or positive (absolute)")
+		return NPSHResult{}, NewFieldError("pv", Negative).Got(Fig(fl.VapourPressure, Pressure)).Because(ReasonAbsolutePressure)
 	case !finite(in.SurfacePressure) || !(in.SurfacePressure > 0):
-		return NPSHResult{}, fieldErrorf("p1", "the pressure on the source surface must be a positive absolute pressure, got %v absolute", Fig(in.SurfacePressure, Pressure))
+		return NPSHResult{}, NewFieldError("p1", NotPositive).Got(Fig(in.SurfacePressure, Pressure)).Because(ReasonAbsolutePressure)
 	case !finite(in.SurfaceZ):
-		return NPSHResult{}, fieldErrorf("z1", "the source surface's elevation must be a finite number")
+		return NPSHResult{}, NewFieldError("z1", NotFinite)
 	case !finite(in.PumpZ):
-		return NPSHResult{}, fieldErrorf("zp", "the pump's elevation must be a finite number")
+		return NPSHResult{}, NewFieldError("zp", NotFinite)
 	case !finite(in.SuctionLoss) || in.SuctionLoss < 0:
-		return NPSHResult{}, fieldErrorf("hs", "the suction-line loss must be zero or positive, got %v", Fig(in.SuctionLoss, Length))
+		return NPSHResult{}, NewFieldError("hs", Negative).Got(Fig(in.SuctionLoss, Length))
 	case !finite(in.NPSHr) || in.NPSHr < 0:
-		return NPSHResult{}, fieldErrorf("npshr", "the NPSH required must be zero (not given) or positive, got %v", Fig(in.NPSHr, Length))
+		return NPSHResult{}, NewFieldError("npshr", Negative).Got(Fig(in.NPSHr, Length))
 	}
 	r := NPSHResult{Required: in.NPSHr}
 	r.Available = (in.SurfacePressure-fl.VapourPressure)/(fl.Density*StandardGravity) + in.SurfaceZ - in.PumpZ - in.SuctionLoss
@@ -134,13 +134,13 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 // 0) has none. Without a line the error names "pafter".
 func SuctionLoss(b Balance, q float64) (float64, error) {
 	if b.Line == nil {
-		return 0, fieldErrorf("pafter", "the suction losses come from a line of segments with the pump after one of them; give the segments, or type the suction loss")
+		return 0, NewFieldError("pafter", Missing).With("line").Because(ReasonSuctionSegments)
 	}
 	if err := b.Line.check(); err != nil {
 		return 0, err
 	}
 	if b.PumpAfter < 0 || b.PumpAfter > len(b.Line.Segments) {
-		return 0, fieldErrorf("pafter", "the pump sits after segment 0 (at point 1) to %d (the last), got %d", len(b.Line.Segments), b.PumpAfter)
+		return 0, NewFieldError("pafter", OutOfRange).Got(Num(float64(b.PumpAfter))).Within(Num(0), Num(float64(len(b.Line.Segments)))).Because(ReasonPumpAfter)
 	}
 	if b.PumpAfter == 0 {
 		return 0, nil

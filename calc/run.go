@@ -133,7 +133,7 @@ func (r Run) lumped() Run {
 // method's range, re not positive) or "k" (bad ExtraK).
 func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 	if !frCheckNonNeg(r.ExtraK) {
-		return nil, 0, fieldErrorf("k", "extra loss coefficient must be zero or positive, got %g", r.ExtraK)
+		return nil, 0, NewFieldError("k", Negative).Got(Num(r.ExtraK))
 	}
 	sum := r.ExtraK
 	if r.extraK1 > 0 && !math.IsInf(re, 1) {
@@ -148,12 +148,12 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 			return nil, 0, err
 		}
 		if fc.Count < 0 {
-			return nil, 0, fieldErrorf("fit", "number of %q fittings must not be negative, got %d", fc.Key, fc.Count)
+			return nil, 0, NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(float64(fc.Count))).Because(ReasonFittingCount)
 		}
 		fk := FittingK{Key: f.Key, Count: fc.Count}
 		if fc.Override {
 			if !frCheckNonNeg(fc.K) {
-				return nil, 0, fieldErrorf("fit", "the K given for %q must be zero or positive, got %g", fc.Key, fc.K)
+				return nil, 0, NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(fc.K)).Because(ReasonFittingK)
 			}
 			fk.K, fk.Method, fk.Formula = fc.K, "given", "K = "+frG(fc.K)
 		} else {
@@ -166,7 +166,7 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 				k, err = f.kAt(r.Diameter, re, ft)
 			}
 			if err != nil {
-				return nil, 0, fieldErrorf("fit", "%s: %v", fc.Key, err)
+				return nil, 0, fittingErr(fc.Key, err)
 			}
 			fk.K, fk.Method, fk.Formula, fk.Source = k, f.Method.String(), f.Formula(r.Diameter), f.Source
 		}
@@ -190,37 +190,37 @@ func (r Run) anyFitting(ok func(Fitting) bool) bool {
 // validate checks the run and the liquid.
 func (r Run) validate(fl Fluid) error {
 	if !frCheckPositive(fl.Density) {
-		return fieldErrorf("rho", "liquid density must be positive, got %g", fl.Density)
+		return NewFieldError("rho", NotPositive).Got(Fig(fl.Density, Density))
 	}
 	if !frCheckPositive(fl.Viscosity) {
-		return fieldErrorf("mu", "liquid viscosity must be positive, got %g", fl.Viscosity)
+		return NewFieldError("mu", NotPositive).Got(Fig(fl.Viscosity, DynamicViscosity))
 	}
 	if !frCheckNonNeg(r.Length) {
-		return fieldErrorf("length", "pipe length must be zero or positive, got %g", r.Length)
+		return NewFieldError("length", Negative).Got(Fig(r.Length, Length))
 	}
 	if !frCheckPositive(r.Diameter) {
-		return fieldErrorf("d", "inside diameter must be positive, got %g", r.Diameter)
+		return NewFieldError("d", NotPositive).Got(Fig(r.Diameter, Length))
 	}
 	switch r.Method {
 	case MethodColebrook, MethodSwameeJain, MethodHaaland:
 		if !frCheckNonNeg(r.Roughness) {
-			return fieldErrorf("eps", "roughness must be zero or positive, got %g", r.Roughness)
+			return NewFieldError("eps", Negative).Got(Fig(r.Roughness, Length))
 		}
 		if rr := r.Roughness / r.Diameter; rr > FrictionRelRoughMax {
-			return fieldErrorf("eps", "relative roughness ε/D = %.3g is above %g, the edge of the Moody chart", rr, FrictionRelRoughMax)
+			return NewFieldError("eps", AboveLimit).Got(Num(rr)).AtMost(Num(FrictionRelRoughMax)).Because(ReasonRelativeRoughness)
 		}
 	case MethodHazenWilliams:
 		if r.HazenC == 0 {
-			return fieldErrorf("chw", "give the Hazen–Williams C factor (for example from the pipe material)")
+			return NewFieldError("chw", Missing)
 		}
 		if math.IsNaN(r.HazenC) || r.HazenC < HazenCMin || r.HazenC > HazenCMax {
-			return fieldErrorf("chw", "Hazen–Williams C must be between %g and %g, got %g", HazenCMin, HazenCMax, r.HazenC)
+			return NewFieldError("chw", OutOfRange).Got(Num(r.HazenC)).Within(Num(HazenCMin), Num(HazenCMax))
 		}
 		if nu := fl.KinematicViscosity(); nu < hazenNuMin || nu > hazenNuMax {
-			return fieldErrorf("method", "Hazen–Williams holds for water near ordinary temperatures (kinematic viscosity %g–%g mm²/s); this liquid has %.3g mm²/s: use Colebrook", hazenNuMin*1e6, hazenNuMax*1e6, nu*1e6)
+			return NewFieldError("method", OutsideValidity).Got(Fig(nu, KinematicViscosity)).Within(Fig(hazenNuMin, KinematicViscosity), Fig(hazenNuMax, KinematicViscosity)).Because(ReasonHazenViscosity)
 		}
 	default:
-		return fieldErrorf("method", "unknown friction method %d", int(r.Method))
+		return NewFieldError("method", UnknownChoice).Given(int(r.Method))
 	}
 	return nil
 }
@@ -248,11 +248,11 @@ func (r Run) turbulentFriction(re, v, q float64) (float64, string, error) {
 		hl, err = HazenWilliamsHeadLoss(q, r.Diameter, 1, r.HazenC)
 		f = hl * r.Diameter * 2 * StandardGravity / (v * v)
 		if err == nil && re > FrictionReMax {
-			err = fieldErrorf("re", "Reynolds number %.3g is above %g", re, FrictionReMax)
+			err = NewFieldError("re", AboveLimit).Got(Num(re)).AtMost(Num(FrictionReMax))
 		}
 	}
 	if err != nil {
-		return 0, "", fieldErrorf("q", "at this flow the Reynolds number is %.3g, outside the friction formula's range (%v)", re, err)
+		return 0, "", frictionRangeErr(re, err)
 	}
 	return f, warn, nil
 }
@@ -282,7 +282,7 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		return RunResult{}, err
 	}
 	if math.IsNaN(q) || math.IsInf(q, 0) || q < 0 {
-		return RunResult{}, fieldErrorf("q", "flow must be zero or positive, got %g", q)
+		return RunResult{}, NewFieldError("q", Negative).Got(Fig(q, Flow))
 	}
 	area := math.Pi * r.Diameter * r.Diameter / 4
 	v := q / area

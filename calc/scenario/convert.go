@@ -18,7 +18,7 @@ func (e *eval) convert() {
 		if herr != nil {
 			var fe *calc.FieldError
 			if errors.As(err, &fe) {
-				fe.Msg += " — or a head of the liquid in m or ft"
+				fe.Reason = calc.ReasonOrHead
 			}
 			e.failErr("cv", err)
 			return

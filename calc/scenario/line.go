@@ -16,7 +16,7 @@ func (e *eval) line() *calc.Line {
 		return nil
 	}
 	if e.s.Has("l") {
-		e.fail("l", "l: give either a single pipe run (l, d…) or a line of segments (s1.l, s2.l…), not both")
+		e.fail("l", calc.Inconsistent).With("s1.l").Because(calc.ReasonRunOrSegments)
 		return nil
 	}
 	ln := &calc.Line{}
@@ -24,7 +24,7 @@ func (e *eval) line() *calc.Line {
 	for i := 1; i <= n; i++ {
 		pre := fmt.Sprintf("s%d.", i)
 		if !e.s.Has(pre + "l") {
-			e.fail(pre+"l", fmt.Sprintf("%sl: segment %d needs its length (segments are numbered from point 1 without gaps)", pre, i))
+			e.fail(pre+"l", calc.Missing).Because(calc.ReasonSegmentGap)
 			ok = false
 			continue
 		}
@@ -41,7 +41,7 @@ func (e *eval) line() *calc.Line {
 			good = good && g
 			seg.EndZ = z
 		default:
-			e.fail(zp, fmt.Sprintf("%s: enter the elevation of the end of segment %d", zp, i))
+			e.fail(zp, calc.Missing)
 			good = false
 		}
 		ok = ok && good

@@ -51,7 +51,7 @@ func (e *eval) pump() {
 		return
 	}
 	if len(qs) != len(hs) {
-		e.fail("ph", fmt.Sprintf("ph: %d heads for %d flows; give one head per data-sheet flow", len(hs), len(qs)))
+		e.fail("ph", calc.WrongCount).Given(len(hs)).AtMost(calc.Num(float64(len(qs)))).With("pq")
 		return
 	}
 	pts := make([]calc.PumpPoint, len(qs))
@@ -67,7 +67,7 @@ func (e *eval) pump() {
 			return
 		}
 		if len(vs) != len(qs) {
-			e.fail(opt, fmt.Sprintf("%s: %d values for %d flows; give one per data-sheet flow", opt, len(vs), len(qs)))
+			e.fail(opt, calc.WrongCount).Given(len(vs)).AtMost(calc.Num(float64(len(qs)))).With("pq")
 			return
 		}
 		if opt == "peff" && !e.sheetEfficiencies(vs) {
@@ -98,7 +98,7 @@ func (e *eval) pump() {
 			if v, ok := e.quantity(ref.name); ok && v > 0 {
 				*ref.v = v
 			} else if ok {
-				e.fail(ref.name, Label(ref.name)+" must be above zero")
+				e.fail(ref.name, calc.NotPositive)
 			}
 		}
 	}
@@ -117,7 +117,7 @@ func (e *eval) pump() {
 	case "", "1":
 	default:
 		if len(a) != 2 || a[0] < '2' || a[0] > '8' || (a[1] != 'p' && a[1] != 's') {
-			e.fail("pumps", "pumps: use 1, or a count and p or s, e.g. 2p for two in parallel, 2s for two in series")
+			e.fail("pumps", calc.UnknownChoice).Typed(a).Because(calc.ReasonPumpsCount)
 			return
 		}
 		pr.Count, pr.Parallel = int(a[0]-'0'), a[1] == 'p'
@@ -239,7 +239,7 @@ func (e *eval) field() {
 	gauge := func(param string) float64 {
 		text := e.s.Get(param)
 		if strings.TrimSpace(text) == "" {
-			e.fail(param, param+": enter the gauge reading")
+			e.fail(param, calc.Missing)
 			ok = false
 			return 0
 		}

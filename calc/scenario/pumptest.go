@@ -54,8 +54,7 @@ func (e *eval) share(param string) (float64, bool) {
 		return 0, false
 	}
 	if meant, slip := calc.FractionSlip(v); slip {
-		e.fail(param, fmt.Sprintf("a %s of %s %% is not plausible; a fraction was probably typed into a percentage box: did you mean %s %%?",
-			Label(param), pct(v*100), pct(meant)))
+		e.fail(param, calc.OutOfRange).Got(calc.Num(v)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
 		return 0, false
 	}
 	return v, true
@@ -66,8 +65,7 @@ func (e *eval) share(param string) (float64, bool) {
 func (e *eval) sheetEfficiencies(vs []float64) bool {
 	for i, v := range vs {
 		if meant, slip := calc.FractionSlip(v); slip {
-			e.fail("peff", fmt.Sprintf("point %d: %s %% looks like a fraction typed into the percentage list: did you mean %s %%? (give every efficiency in %%, e.g. 0,52,71,76,72%%)",
-				i+1, pct(v*100), pct(meant)))
+			e.fail("peff", calc.OutOfRange).At(i+1).Got(calc.Num(v)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
 			return false
 		}
 	}
@@ -100,12 +98,12 @@ func (e *eval) speed() (float64, bool) {
 			return 0, false
 		}
 		unit, _ := calc.LookupUnit(u)
-		ref, over := "nrat", "the rated speed"
+		ref := "nrat"
 		if unit.Symbol == "Hz" {
-			ref, over = "fmains", "the mains frequency"
+			ref = "fmains"
 		}
 		if !e.s.Has(ref) {
-			e.fail("spd", fmt.Sprintf("a speed in %s needs %s (%s) to compare with; or give the speed in %%", unit.Symbol, over, Label(ref)))
+			e.fail("spd", calc.Missing).With(ref).Typed(unit.Symbol).Because(calc.ReasonSpeedReference)
 			return 0, false
 		}
 		base, ok := e.quantity(ref)
@@ -283,7 +281,7 @@ func (e *eval) bands(fc calc.FieldCheck) {
 	for _, pair := range [][2]string{{"gcs", "gss"}, {"gcd", "gsd"}} {
 		for i, p := range pair {
 			if e.s.Has(p) && !e.s.Has(pair[1-i]) {
-				e.fail(pair[1-i], missingMsg(pair[1-i])+": a gauge's accuracy class and span go together")
+				e.fail(pair[1-i], calc.Missing).With(p).Because(calc.ReasonGoTogether)
 				ok = false
 			}
 		}

@@ -172,7 +172,7 @@ func (b *builder) problem(p string) string {
 	if fe == nil {
 		return ""
 	}
-	return fe.Words(b.figure)
+	return ErrorText(fe, b.us)
 }
 
 // named is p's problem preceded by its label, for lists.
