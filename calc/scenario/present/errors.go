@@ -167,6 +167,14 @@ func (w wording) got() string {
 	return ""
 }
 
+// aNumber is "a number " when the text typed could not be read as one.
+func (w wording) aNumber() string {
+	if w.fe.Value == nil && w.fe.Input != "" {
+		return "a number "
+	}
+	return ""
+}
+
 // figs words the reason's figures.
 func (w wording) figs(i int) string {
 	if i >= len(w.fe.Figures) {
@@ -328,9 +336,9 @@ func (w wording) kindText() string {
 		}
 		return w.expected() + "; got " + dimName(fe.UnitDim) + " unit " + quote(fe.Input)
 	case calc.NotPositive:
-		return w.subject() + " must be above zero" + w.got()
+		return w.subject() + " must be " + w.aNumber() + "above zero" + w.got()
 	case calc.Negative:
-		return w.subject() + " must be zero or more" + w.got()
+		return w.subject() + " must be " + w.aNumber() + "zero or more" + w.got()
 	case calc.OutOfRange, calc.AboveLimit, calc.BelowLimit:
 		return w.subject() + " must be " + w.limits() + w.got()
 	case calc.UnknownChoice:
