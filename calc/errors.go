@@ -177,7 +177,7 @@ func (e *FieldError) Error() string {
 		add("item", strconv.Itoa(e.Item))
 	}
 	if e.Input != "" {
-		add("input", strconv.Quote(e.Input))
+		add("input", quoteInput(e.Input))
 	}
 	if e.Value != nil {
 		add("value", e.Value.SI())

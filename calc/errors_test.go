@@ -78,6 +78,10 @@ func TestFieldErrorData(t *testing.T) {
 	if e := countErr("pq", 9, 3, 8); e.Kind != TooMany {
 		t.Errorf("countErr(9, 3, 8) = %v", e)
 	}
+	// Long input is shortened in the Error line.
+	if _, err := Parse("q", strings.Repeat("z", 500), Flow, ""); err == nil || len(err.Error()) > 120 {
+		t.Errorf("long input: %v", err)
+	}
 	// The deprecated constructor still works, as KindOther with its sentence.
 	if e := FieldErrorf("q", "flow %v is odd", Fig(0.045, Flow)); e.Kind != KindOther || e.Error() != "q: flow 45.00 L/s is odd" {
 		t.Errorf("FieldErrorf: %q", e.Error())

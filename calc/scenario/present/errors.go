@@ -130,10 +130,14 @@ func (w wording) own(f calc.Figure) string {
 	return w.fig(f)
 }
 
-// exact writes a plain number with up to six significant digits.
+// exact writes a plain number with up to six significant digits; a large
+// one (a Reynolds number) is grouped as plainNumber writes it.
 func exact(v float64) string {
 	if math.IsNaN(v) || math.IsInf(v, 0) {
 		return "—"
+	}
+	if math.Abs(v) >= 1e6 {
+		return plainNumber(v)
 	}
 	s := strconv.FormatFloat(v, 'g', 6, 64)
 	if v < 0 {
