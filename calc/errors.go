@@ -221,7 +221,14 @@ func fieldErrorf(field, format string, args ...any) error {
 // arguments (formatted with %v) become its Figures.
 //
 // Deprecated: use NewFieldError; kept so that code written against it
-// still compiles. TestNoSentencesInErrors lists its remaining uses.
+// still compiles. TestNoSentencesInErrors lists its remaining uses. To
+// convert one: "x must be positive, got %v" is
+// NewFieldError(f, NotPositive).Got(Fig(x, dim)); "must be between %v and
+// %v; got %v" is OutOfRange with Got and Within; "unknown %q; expected one
+// of …" is UnknownChoice with Typed and OneOf; the range of a published
+// method is OutsideValidity; a case the kind does not cover gets a Reason
+// in reasons.go (its figures listed in its comment) and a wording in
+// calc/scenario/present/errors.go.
 func FieldErrorf(field, format string, args ...any) *FieldError {
 	msg, figs := sprintFigures(format, args)
 	return &FieldError{Field: field, Kind: KindOther, Msg: msg, Figures: figs}

@@ -70,6 +70,8 @@ func (w wording) where() string {
 	fe := w.fe
 	var pre string
 	switch {
+	case fe.Item > 0 && fe.Kind == calc.Missing:
+		// kindText says which value is empty
 	case fe.Item > 0 && isSheetList(fe.Field):
 		pre = "point " + strconv.Itoa(fe.Item) + ": "
 	case fe.Item > 0:
@@ -313,7 +315,7 @@ func (w wording) kindText() string {
 		case fe.Other != "":
 			return "give the " + label(fe.Other) + " first"
 		case fe.Item > 0:
-			return "this value is empty"
+			return "value " + strconv.Itoa(fe.Item) + " of the list is empty"
 		}
 		if p, _, ok := scenario.Lookup(fe.Field); ok && p.Missing != "" {
 			return p.Missing
