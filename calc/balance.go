@@ -209,8 +209,7 @@ func (b Balance) Solve() (BalanceResult, error) {
 		if lam, _, err := b.solveFor(boundLaminar); err == nil {
 			res.ValueLow, res.ValueHigh = math.Min(design, lam), math.Max(design, lam)
 		}
-		res.Warnings = append(res.Warnings, warnf(b.Unknown.String(),
-			"transitional flow (Re 2300–4000): the result lies between the laminar and turbulent bounds, shown as a range; the design value uses the turbulent bound"))
+		res.Warnings = append(res.Warnings, Warn(b.Unknown.String(), CautionTransitionalBalance))
 	}
 	return res, nil
 }
@@ -350,7 +349,7 @@ func (b Balance) at(q float64, bd bound) (state, error) {
 			}
 			ps.Alpha = a
 		case !ps.HasRegime && ps.Velocity != 0 && b.Alpha == AlphaFromRegime:
-			st.warn = append(st.warn, warnf("d"+field[1:], "α taken as 1 (turbulent): give the diameter at this point to find its regime"))
+			st.warn = append(st.warn, Warn("d"+field[1:], CautionAlphaUnity))
 		}
 		ps.PressureHead = (p.P - b.SitePressure) / (rho * g)
 		ps.VelocityHead = ps.Alpha * ps.Velocity * ps.Velocity / (2 * g)
@@ -582,23 +581,23 @@ func (b Balance) result(v float64, st state) BalanceResult {
 
 	switch {
 	case b.Unknown == SolvePumpHead && v < 0:
-		r.Warnings = append(r.Warnings, warnf("hp", "the pump head comes out negative: no pump is needed, point 1 alone drives this flow (a valve or turbine would have to take the surplus)"))
+		r.Warnings = append(r.Warnings, Warn("hp", CautionPumpHeadNegative))
 	case b.Unknown == SolveTurbineHead && v < 0:
-		r.Warnings = append(r.Warnings, warnf("ht", "the turbine head comes out negative: at this flow the line cannot drive a turbine; it needs a pump"))
+		r.Warnings = append(r.Warnings, Warn("ht", CautionTurbineHeadNegative))
 	case b.Unknown == SolveFrictionHead && v < 0:
-		r.Warnings = append(r.Warnings, warnf("hf", "the friction head comes out negative, which no real line does: check the readings and the direction of flow"))
+		r.Warnings = append(r.Warnings, Warn("hf", CautionFrictionHeadNegative))
 	}
 	pv := b.Fluid.VapourPressure
 	for i, p := range []PointState{r.In, r.Out} {
 		n := fmt.Sprint(i + 1)
 		switch {
 		case p.P <= 0:
-			r.Warnings = append(r.Warnings, warnf("p"+n, "the absolute pressure at this point is zero or negative, which a liquid cannot sustain: the column breaks and the liquid vaporises"))
+			r.Warnings = append(r.Warnings, Warn("p"+n, CautionNoAbsolutePressure))
 		case pv > 0 && p.P <= pv:
-			r.Warnings = append(r.Warnings, warnf("p"+n, "the absolute pressure at this point (%v absolute) is at or below the liquid's vapour pressure (%v): expect cavitation or flashing", Fig(p.P, Pressure), Fig(pv, Pressure)))
+			r.Warnings = append(r.Warnings, Warn("p"+n, CautionBelowVapourPressure, Fig(p.P, Pressure), Fig(pv, Pressure)))
 		}
 		if v := math.Abs(p.Velocity); v > 6 {
-			r.Warnings = append(r.Warnings, warnf("v"+n, "a velocity of %v is unusually high for a liquid line (common practice keeps below about %v): erosion, noise and water-hammer risk", Fig(v, Velocity), Fig(3, Velocity)))
+			r.Warnings = append(r.Warnings, Warn("v"+n, CautionPointVelocityHigh, Fig(v, Velocity), Fig(3, Velocity)))
 		}
 	}
 	return r

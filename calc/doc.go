@@ -108,5 +108,6 @@
 // the reader's units (calc/scenario/present/errors.go); Error is a terse
 // line in SI for Go callers. Build errors with NewFieldError and its
 // methods; fieldErrorf and FieldErrorf, which hold a sentence, are
-// deprecated.
+// deprecated. Warnings are data the same way: a Warning's Code (a
+// Caution) and Figures; Warnf and warnf are deprecated.
 package calc

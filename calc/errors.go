@@ -278,30 +278,51 @@ func wordFigures(msg string, figs []Figure, show func(Figure) string) string {
 
 // Warning is a caution about a result. Field names the input it concerns;
 // Segment is the 1-based segment of a line it is about (0 none), Field
-// then being that segment's field ("d", "z"). Text quotes its figures the
-// way FieldError.Msg does.
+// then being that segment's field ("d", "z"). Code says what it is about
+// and Figures holds the figures it quotes (SI, with their dimension); the
+// view model words it. A warning of CautionText (the deprecated Warnf)
+// holds a sentence in Text, with a mark for each of Figures.
 type Warning struct {
 	Field   string
 	Segment int
+	Code    Caution
 	Text    string
 	Figures []Figure
 }
 
-// Warnf builds a Warning with a formatted text; Figure arguments
-// (formatted with %v) become its Figures.
+// Warnf builds a Warning of CautionText holding a sentence; Figure
+// arguments (formatted with %v) become its Figures.
+//
+// Deprecated: use Warn with a Caution (in cautions.go, worded in
+// calc/scenario/present/errors.go); kept so that code written against it
+// still compiles.
 func Warnf(field, format string, args ...any) Warning {
 	t, figs := sprintFigures(format, args)
 	return Warning{Field: field, Text: t, Figures: figs}
 }
 
 // warnf is Warnf, for this package's own use.
+//
+// Deprecated: use Warn.
 func warnf(field, format string, args ...any) Warning { return Warnf(field, format, args...) }
 
-// Words writes the warning's text with each figure written by show.
-func (w Warning) Words(show func(Figure) string) string { return wordFigures(w.Text, w.Figures, show) }
+// Words writes the text of a CautionText warning with each figure written
+// by show; "" for a coded one.
+func (w Warning) Words(show func(Figure) string) string {
+	if w.Code != CautionText {
+		return ""
+	}
+	return wordFigures(w.Text, w.Figures, show)
+}
 
-// String writes the warning with its figures in SI.
-func (w Warning) String() string { return w.Words(Figure.SI) }
+// String is a line for logs and Go callers: a coded warning's name and
+// figures in SI, or the text with its figures in SI.
+func (w Warning) String() string {
+	if w.Code != CautionText {
+		return w.terse()
+	}
+	return w.Words(Figure.SI)
+}
 
 // fittingErr reports err, met while working out the K of fitting key, under
 // the field "fit": Input is the key and Other the field err named.

@@ -16,34 +16,50 @@ import (
 // worded by the view model (calc/scenario/present/errors.go). The list it
 // prints is what remains to convert.
 func TestNoSentencesInErrors(t *testing.T) {
-	old := regexp.MustCompile(`\b(fieldErrorf|FieldErrorf)\(|FieldError\{[^}]*Msg: *(fmt\.|")`)
-	var files []string
-	for _, dir := range []string{".", "scenario"} {
-		m, err := filepath.Glob(filepath.Join(dir, "*.go"))
-		if err != nil {
-			t.Fatal(err)
-		}
-		files = append(files, m...)
-	}
-	var uses []string
-	for _, f := range files {
-		if strings.HasSuffix(f, "_test.go") || f == "errors.go" {
-			continue
-		}
-		b, err := os.ReadFile(f)
-		if err != nil {
-			t.Fatal(err)
-		}
-		for i, line := range strings.Split(string(b), "\n") {
-			if old.MatchString(line) && !strings.HasPrefix(strings.TrimSpace(line), "//") {
-				uses = append(uses, f+":"+strconv.Itoa(i+1)+": "+strings.TrimSpace(line))
-			}
-		}
-	}
+	uses := sentenceUses(t, regexp.MustCompile(`\b(fieldErrorf|FieldErrorf)\(|FieldError\{[^}]*Msg: *(fmt\.|")`), ".", "scenario")
 	if len(uses) > 0 {
 		t.Errorf("%d errors are still built from sentences; give each a Kind (and a Reason, worded in present/errors.go):\n%s",
 			len(uses), strings.Join(uses, "\n"))
 	}
+}
+
+// TestNoSentencesInWarnings fails on every warning of calc's own built
+// from a sentence (the deprecated warnf and Warnf): a warning is a Caution
+// and its figures, worded by the view model. calc/scenario's own warnings
+// are still sentences (not checked here).
+func TestNoSentencesInWarnings(t *testing.T) {
+	uses := sentenceUses(t, regexp.MustCompile(`\b(warnf|Warnf)\(`), ".")
+	if len(uses) > 0 {
+		t.Errorf("%d warnings are still built from sentences; give each a Caution (cautions.go, worded in present/errors.go):\n%s",
+			len(uses), strings.Join(uses, "\n"))
+	}
+}
+
+// sentenceUses lists the lines of the non-test Go files of dirs (but
+// errors.go, which declares the old constructors) that match old.
+func sentenceUses(t *testing.T, old *regexp.Regexp, dirs ...string) []string {
+	var uses []string
+	for _, dir := range dirs {
+		files, err := filepath.Glob(filepath.Join(dir, "*.go"))
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, f := range files {
+			if strings.HasSuffix(f, "_test.go") || f == "errors.go" {
+				continue
+			}
+			b, err := os.ReadFile(f)
+			if err != nil {
+				t.Fatal(err)
+			}
+			for i, line := range strings.Split(string(b), "\n") {
+				if old.MatchString(line) && !strings.HasPrefix(strings.TrimSpace(line), "//") {
+					uses = append(uses, f+":"+strconv.Itoa(i+1)+": "+strings.TrimSpace(line))
+				}
+			}
+		}
+	}
+	return uses
 }
 
 // TestReasonNames keeps the names of Error in step with the constants.
@@ -53,6 +69,9 @@ func TestReasonNames(t *testing.T) {
 	}
 	if len(kindNames) != int(kindEnd) {
 		t.Errorf("%d kind names for %d kinds", len(kindNames), kindEnd)
+	}
+	if len(cautionNames) != int(cautionEnd) || len(Cautions()) != int(cautionEnd)-1 {
+		t.Errorf("%d caution names for %d cautions", len(cautionNames), cautionEnd)
 	}
 	if len(Reasons()) != int(reasonEnd)-1 || len(Kinds()) != int(kindEnd)-1 {
 		t.Errorf("Reasons or Kinds leave one out")

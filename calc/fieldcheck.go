@@ -125,15 +125,15 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	fc.Head = fc.PressureHead + fc.ElevationHead + fc.VelocityHead
 	fc.HydraulicPower = rhog * r.Q * fc.Head
 	if fc.Head <= 0 {
-		fc.Warnings = append(fc.Warnings, warnf("pd", "the readings give a pump head of %v, which a running pump does not: check that the gauges are the right way round and read in the same units", Fig(fc.Head, Length)))
+		fc.Warnings = append(fc.Warnings, Warn("pd", CautionHeadNotPositive, Fig(fc.Head, Length)))
 	}
 	if r.PowerIn > 0 {
 		fc.Efficiency = fc.HydraulicPower / r.PowerIn
 		switch {
 		case fc.Efficiency > 1:
-			fc.Warnings = append(fc.Warnings, warnf("pin", "the wire-to-water efficiency comes out at %.0f %%, above 100 %%: the readings are inconsistent (check the flow, the gauges, the power reading and its unit)", fc.Efficiency*100))
+			fc.Warnings = append(fc.Warnings, Warn("pin", CautionWireAbove100, Num(fc.Efficiency)))
 		case fc.Efficiency < FieldEfficiencyLow && fc.Head > 0:
-			fc.Warnings = append(fc.Warnings, warnf("pin", "the wire-to-water efficiency is only %.0f %% (below %.0f %%): look for wear, a throttled or recirculating pump, a motor problem, or a reading error", fc.Efficiency*100, FieldEfficiencyLow*100))
+			fc.Warnings = append(fc.Warnings, Warn("pin", CautionWireLow, Num(fc.Efficiency), Num(FieldEfficiencyLow)))
 		}
 	}
 	if c != nil {
@@ -146,11 +146,11 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 			if e, ok := c.Efficiency(r.Q); ok {
 				fc.CurveEfficiency = e
 				if fc.Efficiency > e {
-					fc.Warnings = append(fc.Warnings, warnf("pin", "the wire-to-water efficiency (%.0f %%) is above the data sheet's efficiency of the pump alone at this flow (%.0f %%), which the motor's losses make impossible: check the power reading and its unit (kW or hp), the flow and the gauges", fc.Efficiency*100, e*100))
+					fc.Warnings = append(fc.Warnings, Warn("pin", CautionWireAbovePump, Num(fc.Efficiency), Num(e)))
 				}
 			}
 		} else {
-			fc.Warnings = append(fc.Warnings, warnf("qm", "the measured flow (%v) lies outside the data sheet's flows (%v to %v): no curve head to compare with", Fig(r.Q, Flow), Fig(c.MinFlow(), Flow), Fig(c.MaxFlow(), Flow)))
+			fc.Warnings = append(fc.Warnings, Warn("qm", CautionFlowOffSheet, Fig(r.Q, Flow), Fig(c.MinFlow(), Flow), Fig(c.MaxFlow(), Flow)))
 		}
 	}
 	if r.PowerIn > 0 && r.MotorEff > 0 {
@@ -158,9 +158,9 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 		fc.PumpEfficiency = fc.HydraulicPower / fc.ShaftPower
 		switch {
 		case fc.PumpEfficiency > 1:
-			fc.Warnings = append(fc.Warnings, warnf("etam", "the pump's own efficiency comes out at %.0f %%, above 100 %%: the readings or the motor efficiency are wrong", fc.PumpEfficiency*100))
+			fc.Warnings = append(fc.Warnings, Warn("etam", CautionPumpEffAbove100, Num(fc.PumpEfficiency)))
 		case fc.PumpEfficiency > PumpEfficiencyHigh:
-			fc.Warnings = append(fc.Warnings, warnf("etam", "the pump's own efficiency comes out at %.0f %%, above the %.0f %% that even the largest pumps hardly reach: check the power reading, the motor efficiency, the flow and the gauges", fc.PumpEfficiency*100, PumpEfficiencyHigh*100))
+			fc.Warnings = append(fc.Warnings, Warn("etam", CautionPumpEffHigh, Num(fc.PumpEfficiency), Num(PumpEfficiencyHigh)))
 		}
 		if fc.CurveEfficiency > 0 {
 			fc.HasEffDeviation, fc.EffDeviation = true, fc.PumpEfficiency-fc.CurveEfficiency

@@ -186,7 +186,7 @@ func (l Line) minDiameter() float64 {
 // naming its segment; at zero flow one warning stands for all.
 func lineWarnings(lr *LineResult, q float64) []Warning {
 	if q == 0 {
-		return []Warning{warnf("q", "no flow: all losses in the line are zero")}
+		return []Warning{Warn("q", CautionNoFlow)}
 	}
 	var out []Warning
 	for i, s := range lr.Segments {

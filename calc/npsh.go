@@ -98,17 +98,16 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 	}
 	r := NPSHResult{Required: in.NPSHr}
 	r.Available = (in.SurfacePressure-fl.VapourPressure)/(fl.Density*StandardGravity) + in.SurfaceZ - in.PumpZ - in.SuctionLoss
-	const guidance = "margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least %v (common practice, from memory); large, high-energy or hot-liquid pumps need more"
 	minMargin := Fig(NPSHMarginMin, Length)
 	if in.NPSHr == 0 {
 		r.Level = NPSHUnrated
 		r.Margin = r.Available
 		if r.Available <= 0 {
 			r.Level = NPSHDanger
-			r.Note = warnf("", "NPSH available is %v, not above zero: the liquid boils at the pump inlet whatever the pump", Fig(r.Available, Length))
+			r.Note = Warn("", CautionNPSHNone, Fig(r.Available, Length))
 			return r, nil
 		}
-		r.Note = warnf("", "NPSH available is %v; give the pump's NPSH required at this flow to judge the margin ("+guidance+")", Fig(r.Available, Length), minMargin)
+		r.Note = Warn("", CautionNPSHUnrated, Fig(r.Available, Length), minMargin)
 		return r, nil
 	}
 	r.Margin = r.Available - r.Required
@@ -116,13 +115,13 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 	switch {
 	case r.Available <= 0 || r.Available < r.Required:
 		r.Level = NPSHDanger
-		r.Note = warnf("", "NPSH available %v is below the %v required: the pump will cavitate (lost head, noise, damage); raise the source, lower the pump, cut the suction losses or cool the liquid", Fig(r.Available, Length), Fig(r.Required, Length))
+		r.Note = Warn("", CautionNPSHBelow, Fig(r.Available, Length), Fig(r.Required, Length))
 	case r.Ratio < NPSHMarginRatio || r.Margin < NPSHMarginMin:
 		r.Level = NPSHCaution
-		r.Note = warnf("", "NPSH available %v exceeds the %v required by only %v (ratio %.2f): expect some cavitation; "+guidance, Fig(r.Available, Length), Fig(r.Required, Length), Fig(r.Margin, Length), r.Ratio, minMargin)
+		r.Note = Warn("", CautionNPSHLowMargin, Fig(r.Available, Length), Fig(r.Required, Length), Fig(r.Margin, Length), Num(r.Ratio), minMargin)
 	default:
 		r.Level = NPSHOK
-		r.Note = warnf("", "NPSH available %v against %v required: margin %v, ratio %.2f; "+guidance, Fig(r.Available, Length), Fig(r.Required, Length), Fig(r.Margin, Length), r.Ratio, minMargin)
+		r.Note = Warn("", CautionNPSHMargin, Fig(r.Available, Length), Fig(r.Required, Length), Fig(r.Margin, Length), Num(r.Ratio), minMargin)
 	}
 	return r, nil
 }

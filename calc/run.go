@@ -1,7 +1,6 @@
 package calc
 
 import (
-	"fmt"
 	"math"
 )
 
@@ -226,19 +225,17 @@ func (r Run) validate(fl Fluid) error {
 }
 
 // turbulentFriction returns the Darcy f of the run's method at Reynolds
-// number re and velocity v, with any range warning.
-func (r Run) turbulentFriction(re, v, q float64) (float64, string, error) {
+// number re and velocity v; outside reports Swamee–Jain used outside its
+// fitted range.
+func (r Run) turbulentFriction(re, v, q float64) (f float64, outside bool, err error) {
 	rr := r.Roughness / r.Diameter
-	var f float64
-	var err error
-	warn := ""
 	switch r.Method {
 	case MethodColebrook:
 		f, err = Colebrook(re, rr)
 	case MethodSwameeJain:
 		f, err = SwameeJain(re, rr)
 		if err == nil && (re < swameeJainReMin || rr < swameeJainRRMin || rr > swameeJainRRMax) {
-			warn = fmt.Sprintf("Swamee–Jain is used outside its fitted range (Re 5000–1e8, ε/D 1e-6–0.01; here Re %.3g, ε/D %.3g): prefer Colebrook", re, rr)
+			outside = true
 		}
 	case MethodHaaland:
 		f, err = Haaland(re, rr)
@@ -252,9 +249,9 @@ func (r Run) turbulentFriction(re, v, q float64) (float64, string, error) {
 		}
 	}
 	if err != nil {
-		return 0, "", frictionRangeErr(re, err)
+		return 0, false, frictionRangeErr(re, err)
 	}
-	return f, warn, nil
+	return f, outside, nil
 }
 
 // Evaluate computes velocity, Reynolds number, regime, α, the Darcy
@@ -295,11 +292,11 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	res := RunResult{SumK: sumK, Fittings: ks}
 	res.Velocity, res.Reynolds, res.Regime = v, re, RegimeOf(re)
 	if (r.Diameter < KDiameterMin || r.Diameter > KDiameterMax) && r.anyFitting(func(f Fitting) bool { return f.Method != KFixed }) {
-		res.Warnings = append(res.Warnings, warnf("d", "inside diameter %v is outside the sizes the fitting methods were published for (about %v–%v): their K values are extrapolated", Fig(r.Diameter, Length), Fig(KDiameterMin, Length), Fig(KDiameterMax, Length)))
+		res.Warnings = append(res.Warnings, Warn("d", CautionFittingSizes, Fig(r.Diameter, Length), Fig(KDiameterMin, Length), Fig(KDiameterMax, Length)))
 	}
 	if q == 0 {
 		res.Alpha = AlphaLaminar()
-		res.Warnings = append(res.Warnings, warnf("q", "no flow: all losses are zero"))
+		res.Warnings = append(res.Warnings, Warn("q", CautionNoFlow))
 		return res, nil
 	}
 	hv := v * v / (2 * StandardGravity)
@@ -312,10 +309,10 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		res.Alpha = AlphaLaminar()
 		res.Friction, res.FrictionLow, res.FrictionHigh = f, f, f
 		if r.Method == MethodHazenWilliams {
-			res.Warnings = append(res.Warnings, warnf("", "laminar flow: friction from 64/Re; Hazen–Williams does not apply"))
+			res.Warnings = append(res.Warnings, Warn("", CautionLaminarHazen))
 		}
 		if sumK > r.ExtraK && r.anyFitting(func(f Fitting) bool { return !f.ReDependent() }) {
-			res.Warnings = append(res.Warnings, warnf("", "laminar flow: the fitting K values (Crane TP-410 and fixed ones) are turbulent-flow figures; real fitting losses are higher"))
+			res.Warnings = append(res.Warnings, Warn("", CautionLaminarFittings))
 		}
 	case Transitional:
 		fLam := 64 / re
@@ -323,8 +320,8 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		if err != nil {
 			return RunResult{}, err
 		}
-		if w != "" {
-			res.Warnings = append(res.Warnings, warnf("", "%s", w))
+		if w {
+			res.Warnings = append(res.Warnings, Warn("", CautionSwameeJainRange, Num(re), Num(r.Roughness/r.Diameter)))
 		}
 		res.FrictionLow, res.FrictionHigh = math.Min(fLam, fTurb), math.Max(fLam, fTurb)
 		res.Friction = res.FrictionHigh
@@ -332,20 +329,20 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		if fLam > fTurb {
 			res.Alpha = AlphaLaminar()
 		}
-		res.Warnings = append(res.Warnings, warnf("", "transitional flow (Re %.0f, between 2300 and 4000): the loss lies between the laminar (64/Re) and turbulent bounds; the larger is used", re))
+		res.Warnings = append(res.Warnings, Warn("", CautionTransitionalRun, Num(re)))
 	default:
 		f, w, err := r.turbulentFriction(re, v, q)
 		if err != nil {
 			return RunResult{}, err
 		}
-		if w != "" {
-			res.Warnings = append(res.Warnings, warnf("", "%s", w))
+		if w {
+			res.Warnings = append(res.Warnings, Warn("", CautionSwameeJainRange, Num(re), Num(r.Roughness/r.Diameter)))
 		}
 		res.Alpha = AlphaTurbulent()
 		res.Friction, res.FrictionLow, res.FrictionHigh = f, f, f
 	}
 	if r.Method == MethodHazenWilliams && r.Diameter < hazenDMin && res.Regime != Laminar {
-		res.Warnings = append(res.Warnings, warnf("d", "Hazen–Williams is meant for pipes of about %v and larger: prefer Colebrook", Fig(hazenDMin, Length)))
+		res.Warnings = append(res.Warnings, Warn("d", CautionHazenSmallPipe, Fig(hazenDMin, Length)))
 	}
 	res.MajorLoss = res.Friction * ld * hv
 	res.TotalLoss = res.MajorLoss + res.MinorLoss
@@ -353,9 +350,9 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	res.TotalLossHigh = res.FrictionHigh*ld*hv + res.MinorLoss
 	switch {
 	case v < RunVelocityLow:
-		res.Warnings = append(res.Warnings, warnf("q", "velocity %v is low for a liquid line (usual range %v–%v, common practice)", Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
+		res.Warnings = append(res.Warnings, Warn("q", CautionVelocityLow, Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
 	case v > RunVelocityHigh:
-		res.Warnings = append(res.Warnings, warnf("q", "velocity %v is high for a liquid line (usual range %v–%v, common practice)", Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
+		res.Warnings = append(res.Warnings, Warn("q", CautionVelocityHigh, Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
 	}
 	return res, nil
 }

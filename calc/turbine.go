@@ -53,9 +53,9 @@ func Turbine(b Balance, eff float64) (TurbineResult, error) {
 	r.HydraulicPower = rhog * r.Q * r.NetHead
 	r.Power = r.HydraulicPower * eff
 	if r.GrossHead <= 0 {
-		r.Warnings = append(r.Warnings, warnf("z1", "the gross head is %v: point 1 does not lie above point 2 in head, so there is nothing for a turbine to take", Fig(r.GrossHead, Length)))
+		r.Warnings = append(r.Warnings, Warn("z1", CautionNoGrossHead, Fig(r.GrossHead, Length)))
 	} else if r.NetHead <= 0 {
-		r.Warnings = append(r.Warnings, warnf("q", "at this flow the line's losses (%v) and the exit velocity head use up the whole gross head (%v): no output; lower the flow or enlarge the pipe", Fig(r.Losses, Length), Fig(r.GrossHead, Length)))
+		r.Warnings = append(r.Warnings, Warn("q", CautionNoOutput, Fig(r.Losses, Length), Fig(r.GrossHead, Length)))
 	}
 	return r, nil
 }

@@ -48,7 +48,7 @@ func observable(r Result, key string) (float64, string, error) {
 		var all []string
 		for _, w := range r.Warnings {
 			if w.Param == p {
-				all = append(all, w.String())
+				all = append(all, warningWords(w, r.US))
 			}
 		}
 		if len(all) == 0 {

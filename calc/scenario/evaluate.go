@@ -173,7 +173,7 @@ func (e *eval) warnCalc(topic string, w calc.Warning) {
 	if f := linkName(w.Field); w.Segment > 0 && f != "" {
 		p = SegmentParam(w.Segment, f)
 	}
-	e.res.Warnings = append(e.res.Warnings, Warning{Param: p, Topic: topic, Segment: w.Segment, Text: w.Text, Figures: w.Figures})
+	e.res.Warnings = append(e.res.Warnings, Warning{Param: p, Topic: topic, Segment: w.Segment, Code: w.Code, Text: w.Text, Figures: w.Figures})
 }
 
 // quantity parses a dimensioned parameter into SI. A missing value is an

@@ -5,4 +5,7 @@ import (
 	"fieldhead/calc/scenario/present"
 )
 
-func init() { scenario.ErrorTextForTest = present.ErrorText }
+func init() {
+	scenario.ErrorTextForTest = present.ErrorText
+	scenario.WarningTextForTest = present.WarningText
+}

@@ -700,3 +700,157 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 		return "use 1, or a count and p or s, e.g. 2p for two in parallel, 2s for two in series"
 	},
 }
+
+// WarningText words a warning from calc of caution c quoting figs (SI) for
+// a sheet in US units (us) or SI; "" for CautionText, whose sentence the
+// caller words with Words.
+func WarningText(c calc.Caution, figs []calc.Figure, us bool) string {
+	cw, ok := cautionWords[c]
+	if !ok {
+		return ""
+	}
+	return cw(cautioning{figs: figs, w: wording{fe: &calc.FieldError{}, us: us}})
+}
+
+type cautioning struct {
+	figs []calc.Figure
+	w    wording
+}
+
+// f words figure i in the sheet's units, "?" if absent.
+func (c cautioning) f(i int) string {
+	if i >= len(c.figs) {
+		return "?"
+	}
+	return c.w.fig(c.figs[i])
+}
+
+// pc words figure i, a share (0.76), as a percentage.
+func (c cautioning) pc(i int) string {
+	if i >= len(c.figs) {
+		return "?"
+	}
+	return strconv.FormatFloat(c.figs[i].Value*100, 'f', 0, 64) + " %"
+}
+
+// abs words figure i, an absolute pressure, with its reference.
+func (c cautioning) abs(i int) string {
+	if i >= len(c.figs) {
+		return "?"
+	}
+	return c.w.absolute(c.figs[i])
+}
+
+// npshGuidance is the margin guidance the NPSH notes rest on.
+func (c cautioning) npshGuidance(least int) string {
+	return "margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least " +
+		c.f(least) + " (common practice, from memory); large, high-energy or hot-liquid pumps need more"
+}
+
+// cautionWords words each caution.
+var cautionWords = map[calc.Caution]func(c cautioning) string{
+	calc.CautionNoFlow: func(c cautioning) string { return "no flow: all losses are zero" },
+	calc.CautionFittingSizes: func(c cautioning) string {
+		return "inside diameter " + c.f(0) + " is outside the sizes the fitting methods were published for (about " + c.f(1) + "–" + c.f(2) + "): their K values are extrapolated"
+	},
+	calc.CautionLaminarHazen: func(c cautioning) string {
+		return "laminar flow: friction from 64/Re; Hazen–Williams does not apply"
+	},
+	calc.CautionLaminarFittings: func(c cautioning) string {
+		return "laminar flow: the fitting K values (Crane TP-410 and fixed ones) are turbulent-flow figures; real fitting losses are higher"
+	},
+	calc.CautionSwameeJainRange: func(c cautioning) string {
+		return "Swamee–Jain is used outside its fitted range (Re 5000–1e8, ε/D 1e-6–0.01; here Re " + c.f(0) + ", ε/D " + c.f(1) + "): prefer Colebrook"
+	},
+	calc.CautionTransitionalRun: func(c cautioning) string {
+		return "transitional flow (Re " + ratio(c.figs, 0, 0) + ", between 2300 and 4000): the loss lies between the laminar (64/Re) and turbulent bounds; the larger is used"
+	},
+	calc.CautionHazenSmallPipe: func(c cautioning) string {
+		return "Hazen–Williams is meant for pipes of about " + c.f(0) + " and larger: prefer Colebrook"
+	},
+	calc.CautionVelocityLow: func(c cautioning) string {
+		return "velocity " + c.f(0) + " is low for a liquid line (usual range " + c.f(1) + "–" + c.f(2) + ", common practice)"
+	},
+	calc.CautionVelocityHigh: func(c cautioning) string {
+		return "velocity " + c.f(0) + " is high for a liquid line (usual range " + c.f(1) + "–" + c.f(2) + ", common practice)"
+	},
+	calc.CautionColumnBreaks: func(c cautioning) string {
+		return "the absolute pressure in the pipe falls to " + c.abs(0) + " at " + c.f(1) + " from point 1, at or below the liquid's vapour pressure (" + c.f(2) +
+			"): the liquid column would break there (vapour pockets, cavitation); lower the pipe, reduce the losses upstream or raise the pressure"
+	},
+	calc.CautionTransitionalBalance: func(c cautioning) string {
+		return "transitional flow (Re 2300–4000): the result lies between the laminar and turbulent bounds, shown as a range; the design value uses the turbulent bound"
+	},
+	calc.CautionAlphaUnity: func(c cautioning) string {
+		return "α taken as 1 (turbulent): give the diameter at this point to find its regime"
+	},
+	calc.CautionPumpHeadNegative: func(c cautioning) string {
+		return "the pump head comes out negative: no pump is needed, point 1 alone drives this flow (a valve or turbine would have to take the surplus)"
+	},
+	calc.CautionTurbineHeadNegative: func(c cautioning) string {
+		return "the turbine head comes out negative: at this flow the line cannot drive a turbine; it needs a pump"
+	},
+	calc.CautionFrictionHeadNegative: func(c cautioning) string {
+		return "the friction head comes out negative, which no real line does: check the readings and the direction of flow"
+	},
+	calc.CautionNoAbsolutePressure: func(c cautioning) string {
+		return "the absolute pressure at this point is zero or negative, which a liquid cannot sustain: the column breaks and the liquid vaporises"
+	},
+	calc.CautionBelowVapourPressure: func(c cautioning) string {
+		return "the absolute pressure at this point (" + c.abs(0) + ") is at or below the liquid's vapour pressure (" + c.f(1) + "): expect cavitation or flashing"
+	},
+	calc.CautionPointVelocityHigh: func(c cautioning) string {
+		return "a velocity of " + c.f(0) + " is unusually high for a liquid line (common practice keeps below about " + c.f(1) + "): erosion, noise and water-hammer risk"
+	},
+	calc.CautionNPSHNone: func(c cautioning) string {
+		return "NPSH available is " + c.f(0) + ", not above zero: the liquid boils at the pump inlet whatever the pump"
+	},
+	calc.CautionNPSHUnrated: func(c cautioning) string {
+		return "NPSH available is " + c.f(0) + "; give the pump's NPSH required at this flow to judge the margin (" + c.npshGuidance(1) + ")"
+	},
+	calc.CautionNPSHBelow: func(c cautioning) string {
+		return "NPSH available " + c.f(0) + " is below the " + c.f(1) + " required: the pump will cavitate (lost head, noise, damage); raise the source, lower the pump, cut the suction losses or cool the liquid"
+	},
+	calc.CautionNPSHLowMargin: func(c cautioning) string {
+		return "NPSH available " + c.f(0) + " exceeds the " + c.f(1) + " required by only " + c.f(2) + " (ratio " + ratio(c.figs, 3, 2) + "): expect some cavitation; " + c.npshGuidance(4)
+	},
+	calc.CautionNPSHMargin: func(c cautioning) string {
+		return "NPSH available " + c.f(0) + " against " + c.f(1) + " required: margin " + c.f(2) + ", ratio " + ratio(c.figs, 3, 2) + "; " + c.npshGuidance(4)
+	},
+	calc.CautionNoGrossHead: func(c cautioning) string {
+		return "the gross head is " + c.f(0) + ": point 1 does not lie above point 2 in head, so there is nothing for a turbine to take"
+	},
+	calc.CautionNoOutput: func(c cautioning) string {
+		return "at this flow the line's losses (" + c.f(0) + ") and the exit velocity head use up the whole gross head (" + c.f(1) + "): no output; lower the flow or enlarge the pipe"
+	},
+	calc.CautionHeadNotPositive: func(c cautioning) string {
+		return "the readings give a pump head of " + c.f(0) + ", which a running pump does not: check that the gauges are the right way round and read in the same units"
+	},
+	calc.CautionWireAbove100: func(c cautioning) string {
+		return "the wire-to-water efficiency comes out at " + c.pc(0) + ", above 100 %: the readings are inconsistent (check the flow, the gauges, the power reading and its unit)"
+	},
+	calc.CautionWireLow: func(c cautioning) string {
+		return "the wire-to-water efficiency is only " + c.pc(0) + " (below " + c.pc(1) + "): look for wear, a throttled or recirculating pump, a motor problem, or a reading error"
+	},
+	calc.CautionWireAbovePump: func(c cautioning) string {
+		return "the wire-to-water efficiency (" + c.pc(0) + ") is above the data sheet's efficiency of the pump alone at this flow (" + c.pc(1) +
+			"), which the motor's losses make impossible: check the power reading and its unit (kW or hp), the flow and the gauges"
+	},
+	calc.CautionFlowOffSheet: func(c cautioning) string {
+		return "the measured flow (" + c.f(0) + ") lies outside the data sheet's flows (" + c.f(1) + " to " + c.f(2) + "): no curve head to compare with"
+	},
+	calc.CautionPumpEffAbove100: func(c cautioning) string {
+		return "the pump's own efficiency comes out at " + c.pc(0) + ", above 100 %: the readings or the motor efficiency are wrong"
+	},
+	calc.CautionPumpEffHigh: func(c cautioning) string {
+		return "the pump's own efficiency comes out at " + c.pc(0) + ", above the " + c.pc(1) + " that even the largest pumps hardly reach: check the power reading, the motor efficiency, the flow and the gauges"
+	},
+}
+
+// ratio writes figure i, a plain number, with the given decimals.
+func ratio(figs []calc.Figure, i, decimals int) string {
+	if i >= len(figs) {
+		return "?"
+	}
+	return strconv.FormatFloat(figs[i].Value, 'f', decimals, 64)
+}

@@ -142,3 +142,54 @@ func TestParseErrorWords(t *testing.T) {
 		t.Errorf("long input on a US sheet: %q", got)
 	}
 }
+
+// TestEveryCautionWorded: every Caution calc can report has a wording
+// here, in both unit systems, with no placeholder left and no SI unit
+// after a figure on a US sheet.
+func TestEveryCautionWorded(t *testing.T) {
+	figs := []calc.Figure{calc.Fig(7.2, calc.Length), calc.Fig(3.1, calc.Length), calc.Fig(4.1, calc.Length), calc.Num(2.3), calc.Fig(0.6, calc.Length)}
+	for _, c := range calc.Cautions() {
+		for _, us := range []bool{false, true} {
+			s := WarningText(c, figs, us)
+			if s == "" || strings.Contains(s, "?") {
+				t.Errorf("%v (us %v): %q", c, us, s)
+			}
+			if bad := siAfterDigit(s); us && len(bad) > 0 {
+				t.Errorf("%v: the US wording %q has SI units %v", c, s, bad)
+			}
+		}
+	}
+	if len(cautionWords) != len(calc.Cautions()) {
+		t.Errorf("%d wordings for %d cautions", len(cautionWords), len(calc.Cautions()))
+	}
+	if WarningText(calc.CautionText, figs, false) != "" {
+		t.Error("a warning of text is worded by its own Words")
+	}
+}
+
+// TestCautionWords: the wording of calc's warnings as an SI sheet shows
+// them, and in a US sheet's units.
+func TestCautionWords(t *testing.T) {
+	// Source: the sentences Fieldhead has shown for these warnings (they
+	// were calc's own before warnings became data); figures by
+	// scenario.Show, e.g. 0.6 m = 1.969 ft (0.6/0.3048).
+	for _, c := range []struct {
+		c    calc.Caution
+		figs []calc.Figure
+		us   bool
+		want string
+	}{
+		{calc.CautionNPSHBelow, []calc.Figure{calc.Fig(10, calc.Length), calc.Fig(12, calc.Length)}, false,
+			"NPSH available 10.00 m is below the 12.00 m required: the pump will cavitate (lost head, noise, damage); raise the source, lower the pump, cut the suction losses or cool the liquid"},
+		{calc.CautionNPSHUnrated, []calc.Figure{calc.Fig(10, calc.Length), calc.Fig(0.6, calc.Length)}, true,
+			"NPSH available is 32.81 ft; give the pump's NPSH required at this flow to judge the margin (margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least 1.969 ft (common practice, from memory); large, high-energy or hot-liquid pumps need more)"},
+		{calc.CautionWireLow, []calc.Figure{calc.Num(0.2), calc.Num(0.3)}, false,
+			"the wire-to-water efficiency is only 20 % (below 30 %): look for wear, a throttled or recirculating pump, a motor problem, or a reading error"},
+		{calc.CautionVelocityHigh, []calc.Figure{calc.Fig(4, calc.Velocity), calc.Fig(0.3, calc.Velocity), calc.Fig(3, calc.Velocity)}, false,
+			"velocity 4.000 m/s is high for a liquid line (usual range 0.3000 m/s–3.000 m/s, common practice)"},
+	} {
+		if got := WarningText(c.c, c.figs, c.us); got != c.want {
+			t.Errorf("%v (us %v):\n got %q\nwant %q", c.c, c.us, got, c.want)
+		}
+	}
+}
