@@ -56,6 +56,27 @@ const (
 	CautionFlowOffSheet    // the measured flow Figures[0] lies outside the data sheet's flows (Figures[1] to Figures[2])
 	CautionPumpEffAbove100 // the pump's own efficiency Figures[0] is above 100 %
 	CautionPumpEffHigh     // the pump's own efficiency Figures[0] is above the Figures[1] that even the largest pumps hardly reach
+
+	// The sheet's checks (calc/scenario).
+	CautionDroopingCurve       // the data sheet's head rises with flow up to Figures[0] (a drooping curve)
+	CautionOperatingNeedsHp    // the operating point needs the balance solved for the pump head
+	CautionOperatingUnstable   // the operating point Figures[0] lies where the head rises with flow (up to Figures[1])
+	CautionOperatingOffRegion  // the operating point Figures[0] lies outside the preferred region Figures[1] to Figures[2] (shares Figures[3]–Figures[4] of the best-efficiency flow)
+	CautionMeasuredOffRegion   // the measured flow, as CautionOperatingOffRegion
+	CautionSuctionLossZero     // no line of segments: the suction losses are taken as zero
+	CautionMotorEffHigh        // a motor efficiency Figures[0] is above the Figures[1] the best large motors hardly reach
+	CautionTurbineNeedsHt      // the turbine's output needs the balance solved for the turbine head
+	CautionLastSegmentEnd      // the last segment ends at Figures[0] but point 2 is at Figures[1]
+	CautionStandardAtmosphere  // no site altitude or barometer: the standard sea-level pressure Figures[0] is used
+	CautionBoilingAtSite       // the water is at or above its boiling point at the site pressure
+	CautionSheetEffHigh        // data-sheet point Figures[0]: an efficiency Figures[1] above the Figures[2] the largest pumps hardly reach
+	CautionOverspeed           // a speed of Figures[0] (a share) of the data sheet's overspeeds the pump
+	CautionBEPAtEnd            // the data sheet's highest efficiency is at its first or last point
+	CautionDutyOverspeed       // this duty needs Figures[0] (a share) of the data sheet's speed
+	CautionPowerAccuracyUnused // a power meter's accuracy without its reading is not used
+	CautionNoAccuracy          // no instrument accuracy is given: the verdict takes every reading as exact
+	CautionGradeNeedsSheet     // the acceptance grade needs the data sheet's head at the measured flow
+	CautionConvertBelowZero    // the value converted is at or below absolute zero pressure
 	cautionEnd
 )
 
@@ -111,6 +132,25 @@ var cautionNames = [...]string{"text",
 	"flow off sheet",
 	"pump eff above 100",
 	"pump eff high",
+	"drooping curve",
+	"operating needs hp",
+	"operating unstable",
+	"operating off region",
+	"measured off region",
+	"suction loss zero",
+	"motor eff high",
+	"turbine needs ht",
+	"last segment end",
+	"standard atmosphere",
+	"boiling at site",
+	"sheet eff high",
+	"overspeed",
+	"bep at end",
+	"duty overspeed",
+	"power accuracy unused",
+	"no accuracy",
+	"grade needs sheet",
+	"convert below zero",
 }
 
 // Warn builds a Warning about field of caution c quoting figs.

@@ -23,12 +23,12 @@ func TestNoSentencesInErrors(t *testing.T) {
 	}
 }
 
-// TestNoSentencesInWarnings fails on every warning of calc's own built
-// from a sentence (the deprecated warnf and Warnf): a warning is a Caution
-// and its figures, worded by the view model. calc/scenario's own warnings
-// are still sentences (not checked here).
+// TestNoSentencesInWarnings fails on every warning in calc or
+// calc/scenario built from a sentence (the deprecated warnf and Warnf, or
+// a Warning with a Text): a warning is a Caution and its figures, worded
+// by the view model.
 func TestNoSentencesInWarnings(t *testing.T) {
-	uses := sentenceUses(t, regexp.MustCompile(`\b(warnf|Warnf)\(`), ".")
+	uses := sentenceUses(t, regexp.MustCompile(`\b(warnf|Warnf)\(|Warning\{[^}]*Text: *(fmt\.|")`), ".", "scenario")
 	if len(uses) > 0 {
 		t.Errorf("%d warnings are still built from sentences; give each a Caution (cautions.go, worded in present/errors.go):\n%s",
 			len(uses), strings.Join(uses, "\n"))

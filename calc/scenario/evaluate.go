@@ -162,10 +162,6 @@ func linkName(calcField string) string {
 	return ""
 }
 
-func (e *eval) warn(param, topic, text string) {
-	e.res.Warnings = append(e.res.Warnings, Warning{Param: param, Topic: topic, Text: text})
-}
-
 // warnCalc records a warning from calc, under its segment's parameter
 // when it names a segment.
 func (e *eval) warnCalc(topic string, w calc.Warning) {
@@ -222,7 +218,7 @@ func (e *eval) site() {
 		}
 	default:
 		e.res.SitePressure, e.res.SiteFrom = seaLevel, SiteStandard
-		e.warnCalc("site", calc.Warnf("alt", "no site altitude or barometer reading: the standard sea-level pressure %v absolute is used for gauge ↔ absolute and the vapour-pressure check", calc.Fig(seaLevel, calc.Pressure)))
+		e.warnCalc("site", calc.Warn("alt", calc.CautionStandardAtmosphere, calc.Fig(seaLevel, calc.Pressure)))
 	}
 }
 
@@ -244,7 +240,7 @@ func (e *eval) liquid() {
 			return
 		}
 		if p < psat {
-			e.warn("t", "liquid", "the water is at or above its boiling point at the site pressure; its properties are taken at the saturation pressure")
+			e.warnCalc("liquid", calc.Warn("t", calc.CautionBoilingAtSite))
 			p = psat
 		}
 		props := calc.Water

@@ -52,8 +52,7 @@ func (e *eval) line() *calc.Line {
 	}
 	if e.s.Has("z2") && e.s.Has(fmt.Sprintf("s%d.z", n)) {
 		if z2, good := e.quantity("z2"); good && math.Abs(z2-ln.Segments[n-1].EndZ) > 0.01 {
-			e.warnCalc("line", calc.Warnf(SegmentParam(n, "z"), "the last segment ends at %v but point 2 is at %v: the profile follows the segments",
-				calc.Fig(ln.Segments[n-1].EndZ, calc.Length), calc.Fig(z2, calc.Length)))
+			e.warnCalc("line", calc.Warn(SegmentParam(n, "z"), calc.CautionLastSegmentEnd, calc.Fig(ln.Segments[n-1].EndZ, calc.Length), calc.Fig(z2, calc.Length)))
 		}
 	}
 	return ln

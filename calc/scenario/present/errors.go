@@ -845,6 +845,81 @@ var cautionWords = map[calc.Caution]func(c cautioning) string{
 	calc.CautionPumpEffHigh: func(c cautioning) string {
 		return "the pump's own efficiency comes out at " + c.pc(0) + ", above the " + c.pc(1) + " that even the largest pumps hardly reach: check the power reading, the motor efficiency, the flow and the gauges"
 	},
+	calc.CautionDroopingCurve: func(c cautioning) string {
+		return "the data sheet's head rises with flow up to " + c.f(0) + " (a drooping curve): below that flow the pump can run unstably, hunting between two points where a line of high static head crosses the curve twice; pumps of such curves in parallel may not share the flow"
+	},
+	calc.CautionOperatingNeedsHp: func(c cautioning) string {
+		return "the operating point needs the balance solved for the pump head (solve=hp)"
+	},
+	calc.CautionOperatingUnstable: func(c cautioning) string {
+		return "the operating point (" + c.f(0) + ") lies where the head rises with flow (up to " + c.f(1) + "): expect unstable running"
+	},
+	calc.CautionOperatingOffRegion: func(c cautioning) string { return c.offRegion("the operating point") },
+	calc.CautionMeasuredOffRegion:  func(c cautioning) string { return c.offRegion("the measured flow") },
+	calc.CautionSuctionLossZero: func(c cautioning) string {
+		return "no line of segments: the suction losses are taken as zero; describe the suction pipe as segment 1 to include them"
+	},
+	calc.CautionMotorEffHigh: func(c cautioning) string {
+		return "a motor efficiency of " + c.sh(0) + " is above the " + c.sh(1) + " that even the best large motors hardly reach: check the nameplate"
+	},
+	calc.CautionTurbineNeedsHt: func(c cautioning) string {
+		return "the turbine's output needs the balance solved for the turbine head (solve=ht)"
+	},
+	calc.CautionLastSegmentEnd: func(c cautioning) string {
+		return "the last segment ends at " + c.f(0) + " but point 2 is at " + c.f(1) + ": the profile follows the segments"
+	},
+	calc.CautionStandardAtmosphere: func(c cautioning) string {
+		return "no site altitude or barometer reading: the standard sea-level pressure " + c.abs(0) + " is used for gauge ↔ absolute and the vapour-pressure check"
+	},
+	calc.CautionBoilingAtSite: func(c cautioning) string {
+		return "the water is at or above its boiling point at the site pressure; its properties are taken at the saturation pressure"
+	},
+	calc.CautionSheetEffHigh: func(c cautioning) string {
+		return "point " + ratio(c.figs, 0, 0) + ": a data-sheet efficiency of " + c.sh(1) + " is above the " + c.sh(2) + " that even the largest pumps hardly reach: check the list"
+	},
+	calc.CautionOverspeed: func(c cautioning) string {
+		return "a speed of " + c.sh(0) + " of the data sheet's overspeeds the pump: the maker must confirm the pump, its bearings, seal and motor are fit for it (the power rises with the cube of the speed)"
+	},
+	calc.CautionBEPAtEnd: func(c cautioning) string {
+		return "the data sheet's highest efficiency is at its first or last point: the best-efficiency point may lie beyond the sheet, and the region drawn from it is uncertain"
+	},
+	calc.CautionDutyOverspeed: func(c cautioning) string {
+		return "this flow needs " + c.sh(0) + " of the data sheet's speed: overspeed, which the maker must approve"
+	},
+	calc.CautionPowerAccuracyUnused: func(c cautioning) string {
+		return "a power meter's accuracy without its reading (motor electrical input) is not used"
+	},
+	calc.CautionNoAccuracy: func(c cautioning) string {
+		return "no instrument accuracy is given: the verdict takes every reading as exact, which no field test is; give the gauges' classes and spans and the meters' accuracies"
+	},
+	calc.CautionGradeNeedsSheet: func(c cautioning) string {
+		return "the acceptance grade needs the data sheet's head at the measured flow: give the data sheet, covering that flow"
+	},
+	calc.CautionConvertBelowZero: func(c cautioning) string {
+		return "this is at or below absolute zero pressure, which no liquid can sustain: check the value and whether it is gauge or absolute"
+	},
+}
+
+// sh words figure i, a share, as a percentage of up to four digits.
+func (c cautioning) sh(i int) string {
+	if i >= len(c.figs) {
+		return "?"
+	}
+	return share(c.figs[i].Value)
+}
+
+// offRegion words a flow outside the preferred operating region.
+func (c cautioning) offRegion(what string) string {
+	side := "below"
+	if len(c.figs) > 2 && c.figs[0].Value > c.figs[2].Value {
+		side = "above"
+	}
+	lo, hi := "?", "?"
+	if len(c.figs) > 4 {
+		lo, hi = strconv.FormatFloat(c.figs[3].Value*100, 'g', 4, 64), strconv.FormatFloat(c.figs[4].Value*100, 'g', 4, 64)
+	}
+	return what + " (" + c.f(0) + ") lies " + side + " the preferred operating region (" + c.f(1) + " to " + c.f(2) + ", " + lo + "–" + hi +
+		" % of the best-efficiency flow, after ANSI/HI 9.6.3 from memory): expect more vibration, recirculation or wear; ask the maker about the allowable region"
 }
 
 // ratio writes figure i, a plain number, with the given decimals.
