@@ -157,9 +157,34 @@ func (w wording) absolute(f calc.Figure) string {
 	return b.absolute(f.Value)
 }
 
-func (w wording) val() string { return w.own(*w.fe.Value) }
-func (w wording) min() string { return w.own(*w.fe.Min) }
-func (w wording) max() string { return w.own(*w.fe.Max) }
+func (w wording) val() string { return w.ownOf(w.fe.Value) }
+func (w wording) min() string { return w.ownOf(w.fe.Min) }
+func (w wording) max() string { return w.ownOf(w.fe.Max) }
+
+// ownOf words f as own does, "?" when the error lacks it.
+func (w wording) ownOf(f *calc.Figure) string {
+	if f == nil {
+		return "?"
+	}
+	return w.own(*f)
+}
+
+// shareOf words a share (the value or one of the figures) as a percentage,
+// "?" when the error lacks it.
+func shareOf(f *calc.Figure) string {
+	if f == nil {
+		return "?"
+	}
+	return share(f.Value)
+}
+
+// figAt is the error's figure i, nil when it has none.
+func (w wording) figAt(i int) *calc.Figure {
+	if i >= len(w.fe.Figures) {
+		return nil
+	}
+	return &w.fe.Figures[i]
+}
 
 // got is "; got …" with the value given (or the text typed), "" if none.
 func (w wording) got() string {
@@ -492,7 +517,7 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 		if v := w.fe.Value; v != nil {
 			t += " = " + plainNumber(v.Value)
 		}
-		return t + " is above " + plainNumber(w.fe.Max.Value) + ", the edge of the Moody chart"
+		return t + " is above " + w.max() + ", the edge of the Moody chart"
 	},
 	calc.ReasonHazenViscosity: func(w wording) string {
 		return "Hazen–Williams holds for water near ordinary temperatures (kinematic viscosity " + w.limits() + "); this liquid has " + w.val() + ": use Colebrook"
@@ -640,13 +665,13 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 		return "the curves do not meet within the data sheet: beyond its last point (Q = " + w.figs(0) + ", where the pump still gives " + w.figs(1) + " against the " + w.figs(2) + " the line needs) the pump would run out; add a point or throttle"
 	},
 	calc.ReasonSpeedBeyondSheet: func(w wording) string {
-		return "no speed in range: " + w.figs(0) + " is beyond what the data sheet covers between " + share(w.fe.Figures[1].Value) + " and " + share(w.fe.Figures[2].Value) + " speed"
+		return "no speed in range: " + w.figs(0) + " is beyond what the data sheet covers between " + shareOf(w.figAt(1)) + " and " + shareOf(w.figAt(2)) + " speed"
 	},
 	calc.ReasonSpeedTopShort: func(w wording) string {
-		return "no speed in range: even at " + share(w.fe.Figures[0].Value) + " speed the pumps give only " + w.figs(1) + " at " + w.figs(2) + ", and the line needs " + w.figs(3)
+		return "no speed in range: even at " + shareOf(w.figAt(0)) + " speed the pumps give only " + w.figs(1) + " at " + w.figs(2) + ", and the line needs " + w.figs(3)
 	},
 	calc.ReasonSpeedBottomOver: func(w wording) string {
-		return "no speed in range: at " + share(w.fe.Figures[0].Value) + " speed, the lowest at which the data sheet still reaches " + w.figs(1) + ", the pumps already give " + w.figs(2) + " and the line needs only " + w.figs(3) + " (throttling or a smaller impeller, not speed, would meet this duty)"
+		return "no speed in range: at " + shareOf(w.figAt(0)) + " speed, the lowest at which the data sheet still reaches " + w.figs(1) + ", the pumps already give " + w.figs(2) + " and the line needs only " + w.figs(3) + " (throttling or a smaller impeller, not speed, would meet this duty)"
 	},
 	calc.ReasonLineHeadNotFinite: func(w wording) string {
 		return "the head the line needs at that flow is not a finite number"
@@ -668,7 +693,7 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 		return t + ": a gauge's accuracy class and span go together"
 	},
 	calc.ReasonNoGrossHead: func(w wording) string {
-		return "the gross head is " + w.fig(*w.fe.Value) + ": point 1 must lie above point 2 in head for a turbine to give output"
+		return "the gross head is " + w.ownOf(w.fe.Value) + ": point 1 must lie above point 2 in head for a turbine to give output"
 	},
 	calc.ReasonOutputUnbound: func(w wording) string {
 		return "the output keeps rising with flow: the line has no pipe or diameters to limit it; give a pipe or the largest flow"
@@ -680,7 +705,7 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 		return "the largest flow to search must be zero (automatic) or more" + w.got()
 	},
 	calc.ReasonFractionTyped: func(w wording) string {
-		got, meant := share(w.fe.Value.Value), share(w.fe.Figures[0].Value)
+		got, meant := shareOf(w.fe.Value), shareOf(w.figAt(0))
 		if w.fe.Field == "peff" {
 			return got + " looks like a fraction typed into the percentage list: did you mean " + meant + "? (give every efficiency in %, e.g. 0,52,71,76,72%)"
 		}

@@ -58,6 +58,15 @@ func TestEveryKindAndReasonWorded(t *testing.T) {
 			check(r.String(), full("p1", k, r))
 		}
 	}
+	// An error lacking the data its reason quotes is still worded, not a panic.
+	for _, r := range calc.Reasons() {
+		for _, k := range append(calc.Kinds(), calc.KindOther) {
+			_ = ErrorText(calc.NewFieldError("q", k).Because(r), true)
+		}
+	}
+	for _, c := range calc.Cautions() {
+		_ = WarningText(c, nil, true)
+	}
 	if len(reasonWords) != len(calc.Reasons()) {
 		t.Errorf("%d wordings for %d reasons", len(reasonWords), len(calc.Reasons()))
 	}
