@@ -12,11 +12,11 @@ import (
 
 // TestNoSentencesInErrors fails on every error in calc or calc/scenario
 // still built from a format string of words (the deprecated fieldErrorf
-// and FieldErrorf, or a FieldError with a Msg): errors are data here and
+// and FieldErrorf, scenario's e.fail, or a FieldError with a Msg): errors are data here and
 // worded by the view model (calc/scenario/present/errors.go). The list it
 // prints is what remains to convert.
 func TestNoSentencesInErrors(t *testing.T) {
-	uses := sentenceUses(t, regexp.MustCompile(`\b(fieldErrorf|FieldErrorf)\(|FieldError\{[^}]*Msg: *(fmt\.|")`), ".", "scenario")
+	uses := sentenceUses(t, regexp.MustCompile(`\b(fieldErrorf|FieldErrorf|e\.fail)\(|FieldError\{[^}]*Msg: *(fmt\.|")`), ".", "scenario")
 	if len(uses) > 0 {
 		t.Errorf("%d errors are still built from sentences; give each a Kind (and a Reason, worded in present/errors.go):\n%s",
 			len(uses), strings.Join(uses, "\n"))
@@ -24,11 +24,11 @@ func TestNoSentencesInErrors(t *testing.T) {
 }
 
 // TestNoSentencesInWarnings fails on every warning in calc or
-// calc/scenario built from a sentence (the deprecated warnf and Warnf, or
-// a Warning with a Text): a warning is a Caution and its figures, worded
+// calc/scenario built from a sentence (the deprecated warnf and Warnf,
+// scenario's e.warn, or a Warning with a Text): a warning is a Caution and its figures, worded
 // by the view model.
 func TestNoSentencesInWarnings(t *testing.T) {
-	uses := sentenceUses(t, regexp.MustCompile(`\b(warnf|Warnf)\(|Warning\{[^}]*Text: *(fmt\.|")`), ".", "scenario")
+	uses := sentenceUses(t, regexp.MustCompile(`\b(warnf|Warnf|e\.warn)\(|Warning\{[^}]*Text: *(fmt\.|")`), ".", "scenario")
 	if len(uses) > 0 {
 		t.Errorf("%d warnings are still built from sentences; give each a Caution (cautions.go, worded in present/errors.go):\n%s",
 			len(uses), strings.Join(uses, "\n"))

@@ -26,7 +26,7 @@ func (e *eval) checkAll() {
 			e.list(name)
 		case KindChoice:
 			if cs := Choices(name); len(cs) > 0 && !oneOf(text, cs) {
-				e.fail(name, calc.UnknownChoice).Typed(text)
+				e.bad(name, calc.UnknownChoice).Typed(text)
 			}
 		case KindNumber:
 			if _, err := number(name, text); err != nil {

@@ -33,11 +33,11 @@ func Evaluate(s Scenario) Result {
 	case "us":
 		e.us = true
 	default:
-		e.fail("units", calc.UnknownChoice).Typed(u)
+		e.bad("units", calc.UnknownChoice).Typed(u)
 	}
 	res.US = e.us
 	if n := s.Get("name"); n != "" && (!printable(n) || len(n) > 200) {
-		e.fail("name", calc.AboveLimit).AtMost(calc.Num(200)).Because(calc.ReasonTitle)
+		e.bad("name", calc.AboveLimit).AtMost(calc.Num(200)).Because(calc.ReasonTitle)
 	}
 
 	e.checkAll()
@@ -86,12 +86,29 @@ func oneOf(v string, cs []Choice) bool {
 	return false
 }
 
-// fail records a problem of kind k with a parameter (the first one
+// bad records a problem of kind k with a parameter (the first one
 // recorded for it is kept) and returns it for its data to be added.
-func (e *eval) fail(param string, k calc.Kind) *calc.FieldError {
+func (e *eval) bad(param string, k calc.Kind) *calc.FieldError {
 	fe := calc.NewFieldError(param, k)
 	e.record(fe)
 	return fe
+}
+
+// fail records a problem with a parameter as a sentence (KindOther); msg
+// may start with the parameter's name ("q: …"), which is dropped.
+//
+// Deprecated: use bad with a Kind (worded in present/errors.go); kept so
+// that code written against it still compiles.
+func (e *eval) fail(param, msg string) {
+	e.record(&calc.FieldError{Field: param, Kind: calc.KindOther, Msg: strings.TrimPrefix(msg, param+": ")})
+}
+
+// warn records a warning as a sentence.
+//
+// Deprecated: use warnCalc with a calc.Caution (worded in
+// present/errors.go); kept so that code written against it still compiles.
+func (e *eval) warn(param, topic, text string) {
+	e.res.Warnings = append(e.res.Warnings, Warning{Param: param, Topic: topic, Text: text})
 }
 
 // recordOther records an error that is not a *calc.FieldError (none is
@@ -178,7 +195,7 @@ func (e *eval) quantity(param string) (float64, bool) {
 	p, _, _ := Lookup(param)
 	text := e.s.Get(param)
 	if strings.TrimSpace(text) == "" {
-		e.fail(param, calc.Missing)
+		e.bad(param, calc.Missing)
 		return 0, false
 	}
 	v, err := calc.Parse(param, text, p.Dim, DefaultUnit(param, e.us))
@@ -202,7 +219,7 @@ func (e *eval) site() {
 	case e.s.Has("baro"):
 		if p, ok := e.quantity("baro"); ok {
 			if !(p > 0) {
-				e.fail("baro", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
+				e.bad("baro", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
 				return
 			}
 			e.res.SitePressure, e.res.SiteFrom = p, SiteBarometer
@@ -267,7 +284,7 @@ func (e *eval) liquid() {
 		}
 		e.res.Fluid = &fl
 	default:
-		e.fail("liq", calc.UnknownChoice).Typed(liq)
+		e.bad("liq", calc.UnknownChoice).Typed(liq)
 	}
 }
 

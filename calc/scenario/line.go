@@ -16,7 +16,7 @@ func (e *eval) line() *calc.Line {
 		return nil
 	}
 	if e.s.Has("l") {
-		e.fail("l", calc.Inconsistent).With("s1.l").Because(calc.ReasonRunOrSegments)
+		e.bad("l", calc.Inconsistent).With("s1.l").Because(calc.ReasonRunOrSegments)
 		return nil
 	}
 	ln := &calc.Line{}
@@ -24,7 +24,7 @@ func (e *eval) line() *calc.Line {
 	for i := 1; i <= n; i++ {
 		pre := fmt.Sprintf("s%d.", i)
 		if !e.s.Has(pre + "l") {
-			e.fail(pre+"l", calc.Missing).Because(calc.ReasonSegmentGap)
+			e.bad(pre+"l", calc.Missing).Because(calc.ReasonSegmentGap)
 			ok = false
 			continue
 		}
@@ -41,7 +41,7 @@ func (e *eval) line() *calc.Line {
 			good = good && g
 			seg.EndZ = z
 		default:
-			e.fail(zp, calc.Missing)
+			e.bad(zp, calc.Missing)
 			good = false
 		}
 		ok = ok && good

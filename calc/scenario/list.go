@@ -13,7 +13,7 @@ import (
 func (e *eval) list(param string) ([]float64, bool) {
 	text := strings.TrimSpace(e.s.Get(param))
 	if text == "" {
-		e.fail(param, calc.Missing)
+		e.bad(param, calc.Missing)
 		return nil, false
 	}
 	sep := ","
@@ -27,7 +27,7 @@ func (e *eval) list(param string) ([]float64, bool) {
 	for i, it := range items {
 		it = strings.TrimSpace(it)
 		if it == "" {
-			e.fail(param, calc.Missing).At(i + 1)
+			e.bad(param, calc.Missing).At(i + 1)
 			return nil, false
 		}
 		if _, u := Split(it); u == "" {

@@ -50,7 +50,7 @@ func (e *eval) pump() {
 		return
 	}
 	if len(qs) != len(hs) {
-		e.fail("ph", calc.WrongCount).Given(len(hs)).AtMost(calc.Num(float64(len(qs)))).With("pq")
+		e.bad("ph", calc.WrongCount).Given(len(hs)).AtMost(calc.Num(float64(len(qs)))).With("pq")
 		return
 	}
 	pts := make([]calc.PumpPoint, len(qs))
@@ -66,7 +66,7 @@ func (e *eval) pump() {
 			return
 		}
 		if len(vs) != len(qs) {
-			e.fail(opt, calc.WrongCount).Given(len(vs)).AtMost(calc.Num(float64(len(qs)))).With("pq")
+			e.bad(opt, calc.WrongCount).Given(len(vs)).AtMost(calc.Num(float64(len(qs)))).With("pq")
 			return
 		}
 		if opt == "peff" && !e.sheetEfficiencies(vs) {
@@ -97,7 +97,7 @@ func (e *eval) pump() {
 			if v, ok := e.quantity(ref.name); ok && v > 0 {
 				*ref.v = v
 			} else if ok {
-				e.fail(ref.name, calc.NotPositive)
+				e.bad(ref.name, calc.NotPositive)
 			}
 		}
 	}
@@ -116,7 +116,7 @@ func (e *eval) pump() {
 	case "", "1":
 	default:
 		if len(a) != 2 || a[0] < '2' || a[0] > '8' || (a[1] != 'p' && a[1] != 's') {
-			e.fail("pumps", calc.UnknownChoice).Typed(a).Because(calc.ReasonPumpsCount)
+			e.bad("pumps", calc.UnknownChoice).Typed(a).Because(calc.ReasonPumpsCount)
 			return
 		}
 		pr.Count, pr.Parallel = int(a[0]-'0'), a[1] == 'p'
@@ -238,7 +238,7 @@ func (e *eval) field() {
 	gauge := func(param string) float64 {
 		text := e.s.Get(param)
 		if strings.TrimSpace(text) == "" {
-			e.fail(param, calc.Missing)
+			e.bad(param, calc.Missing)
 			ok = false
 			return 0
 		}

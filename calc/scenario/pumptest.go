@@ -1,6 +1,7 @@
 package scenario
 
 import (
+	"strconv"
 	"strings"
 
 	"fieldhead/calc"
@@ -30,6 +31,12 @@ type EnergyResult struct {
 	Q, H     float64 // flow, m³/s, and head, m
 }
 
+// pct writes a percentage as typed: "90", "0.9", "52", "97.5".
+//
+// Deprecated: messages are worded in present/errors.go; kept for code
+// written against it.
+func pct(v float64) string { return strconv.FormatFloat(v, 'g', 4, 64) }
+
 // isFrequency reports whether unit text names a speed or frequency unit
 // (rpm, Hz).
 func isFrequency(u string) bool {
@@ -49,7 +56,7 @@ func (e *eval) share(param string) (float64, bool) {
 		return 0, false
 	}
 	if meant, slip := calc.FractionSlip(v); slip {
-		e.fail(param, calc.OutOfRange).Got(calc.Num(v)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
+		e.bad(param, calc.OutOfRange).Got(calc.Num(v)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
 		return 0, false
 	}
 	return v, true
@@ -60,7 +67,7 @@ func (e *eval) share(param string) (float64, bool) {
 func (e *eval) sheetEfficiencies(vs []float64) bool {
 	for i, v := range vs {
 		if meant, slip := calc.FractionSlip(v); slip {
-			e.fail("peff", calc.OutOfRange).At(i+1).Got(calc.Num(v)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
+			e.bad("peff", calc.OutOfRange).At(i+1).Got(calc.Num(v)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
 			return false
 		}
 	}
@@ -97,7 +104,7 @@ func (e *eval) speed() (float64, bool) {
 			ref = "fmains"
 		}
 		if !e.s.Has(ref) {
-			e.fail("spd", calc.Missing).With(ref).Typed(unit.Symbol).Because(calc.ReasonSpeedReference)
+			e.bad("spd", calc.Missing).With(ref).Typed(unit.Symbol).Because(calc.ReasonSpeedReference)
 			return 0, false
 		}
 		base, ok := e.quantity(ref)
@@ -274,7 +281,7 @@ func (e *eval) bands(fc calc.FieldCheck) {
 	for _, pair := range [][2]string{{"gcs", "gss"}, {"gcd", "gsd"}} {
 		for i, p := range pair {
 			if e.s.Has(p) && !e.s.Has(pair[1-i]) {
-				e.fail(pair[1-i], calc.Missing).With(p).Because(calc.ReasonGoTogether)
+				e.bad(pair[1-i], calc.Missing).With(p).Because(calc.ReasonGoTogether)
 				ok = false
 			}
 		}
