@@ -240,3 +240,9 @@ func symbolList(dim Dimension) []string {
 	}
 	return s
 }
+
+// symbolsFor lists the symbols of a dimension as text.
+//
+// Deprecated: errors carry symbolList as data; kept for code written
+// against it.
+func symbolsFor(dim Dimension) string { return strings.Join(symbolList(dim), ", ") }
