@@ -86,7 +86,7 @@ func TestBrowserLinePump(t *testing.T) {
 	expect("#npsh-r", scenario.Show(want.NPSH.Required, calc.Length, us))
 	expect("#npsh-margin", scenario.Show(want.NPSH.Margin, calc.Length, us))
 	expect("#npsh-ratio", calc.FormatNumber(want.NPSH.Ratio, 3))
-	expect("#npsh-note", want.NPSH.Note.String())
+	expect("#npsh-note", present.WarningText(want.NPSH.Note.Code, want.NPSH.Note.Figures, us))
 	pumpDraft := scenario.NewDraft(pumpLink)
 	if level, _ := present.Build(&pumpDraft, want).Text("npsh-level"); b.js(`document.querySelector("#npsh-level").textContent`) != level {
 		t.Errorf("the NPSH verdict shows %q, want %q for level %s", b.js(`document.querySelector("#npsh-level").textContent`), level, want.NPSH.Level)

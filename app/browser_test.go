@@ -293,19 +293,26 @@ func TestBrowser(t *testing.T) {
 	}
 
 	// 5. A warning from the core appears by the answer (here: a high
-	// velocity at point 2; the text is the core's own).
+	// velocity at point 2; the text is the view model's wording of the
+	// core's warning).
 	fast := demo.Clone()
 	if err := fast.Set("v2", "8m/s"); err != nil {
 		t.Fatal(err)
 	}
 	var warnings []string
 	fr := scenario.Evaluate(fast)
+	worded := func(w calc.Warning) string {
+		if w.Code != calc.CautionText {
+			return present.WarningText(w.Code, w.Figures, fr.US)
+		}
+		return w.Words(func(f calc.Figure) string { return scenario.Show(f.Value, f.Dim, fr.US) })
+	}
 	for _, w := range fr.Warnings {
-		warnings = append(warnings, w.Text)
+		warnings = append(warnings, worded(w.Calc()))
 	}
 	if fr.Balance != nil {
 		for _, w := range fr.Balance.Warnings {
-			warnings = append(warnings, w.Text)
+			warnings = append(warnings, worded(w))
 		}
 	}
 	typeInto("#in-v2", "8")

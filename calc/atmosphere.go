@@ -25,7 +25,7 @@ const (
 // 2000 m) is below the day-to-day variation of the barometer.
 func StandardAtmosphere(altitude float64) (float64, error) {
 	if math.IsNaN(altitude) || altitude < isaHMin || altitude > isaHMax {
-		return 0, fieldErrorf("alt", "altitude must be between %v and %v for the ISO 2533 troposphere; got %v", Fig(isaHMin, Length), Fig(isaHMax, Length), Fig(altitude, Length))
+		return 0, NewFieldError("alt", OutsideValidity).Got(Fig(altitude, Length)).Within(Fig(isaHMin, Length), Fig(isaHMax, Length)).Because(ReasonISA)
 	}
 	return isaP0 * math.Pow(1-isaL*altitude/isaT0, StandardGravity/(isaR*isaL)), nil
 }

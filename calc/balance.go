@@ -37,7 +37,7 @@ func ParseUnknown(s string) (Unknown, error) {
 			return Unknown(i), nil
 		}
 	}
-	return 0, fieldErrorf("solve", "%q is not a quantity that can be solved for; use one of hp, ht, hf, p1, p2, z1, z2, q", s)
+	return 0, NewFieldError("solve", UnknownChoice).Typed(s).OneOf("hp", "ht", "hf", "p1", "p2", "z1", "z2", "q")
 }
 
 // AlphaMode chooses the kinetic-energy correction factor α at each point.
@@ -209,8 +209,7 @@ func (b Balance) Solve() (BalanceResult, error) {
 		if lam, _, err := b.solveFor(boundLaminar); err == nil {
 			res.ValueLow, res.ValueHigh = math.Min(design, lam), math.Max(design, lam)
 		}
-		res.Warnings = append(res.Warnings, warnf(b.Unknown.String(),
-			"transitional flow (Re 2300–4000): the result lies between the laminar and turbulent bounds, shown as a range; the design value uses the turbulent bound"))
+		res.Warnings = append(res.Warnings, Warn(b.Unknown.String(), CautionTransitionalBalance))
 	}
 	return res, nil
 }
@@ -233,10 +232,10 @@ const (
 func (b Balance) check() error {
 	fl := b.Fluid
 	if !(fl.Density > 0) || math.IsInf(fl.Density, 0) {
-		return fieldErrorf("rho", "the liquid density must be a positive number")
+		return NewFieldError("rho", NotPositive).Got(Fig(fl.Density, Density))
 	}
 	if b.Unknown < 0 || int(b.Unknown) >= len(unknownNames) {
-		return fieldErrorf("solve", "no such unknown")
+		return NewFieldError("solve", UnknownChoice)
 	}
 	finite := []struct {
 		field string
@@ -252,7 +251,7 @@ func (b Balance) check() error {
 	}
 	for _, c := range finite {
 		if c.skip != b.Unknown && (math.IsNaN(c.v) || math.IsInf(c.v, 0)) {
-			return fieldErrorf(c.field, "must be a finite number")
+			return NewFieldError(c.field, NotFinite)
 		}
 	}
 	// Magnitudes far beyond any liquid line are refused, so that no term
@@ -272,7 +271,7 @@ func (b Balance) check() error {
 		{"d1", "diameter", b.In.D, maxDiameter, -1}, {"d2", "diameter", b.Out.D, maxDiameter, -1},
 	} {
 		if c.skip != b.Unknown && math.Abs(c.v) > c.max {
-			return fieldErrorf(c.field, "a %s of %.3g (SI) is far beyond any liquid line (at most %.3g); check the value and its unit", c.what, c.v, c.max)
+			return NewFieldError(c.field, AboveLimit).Got(Num(c.v)).AtMost(Num(c.max)).Because(ReasonFarBeyond)
 		}
 	}
 	for _, d := range []struct {
@@ -280,43 +279,43 @@ func (b Balance) check() error {
 		v     float64
 	}{{"d1", b.In.D}, {"d2", b.Out.D}} {
 		if d.v > 0 && d.v < minDiameter {
-			return fieldErrorf(d.field, "a diameter of %v is below the %v Fieldhead accepts; check the unit", Fig(d.v, Length), Fig(minDiameter, Length))
+			return NewFieldError(d.field, BelowLimit).Got(Fig(d.v, Length)).AtLeast(Fig(minDiameter, Length)).Because(ReasonCheckUnit)
 		}
 	}
 	if fl.Density < minDensity || fl.Density > maxDensity {
-		return fieldErrorf("rho", "a density of %v is outside the %v to %v of liquids", Fig(fl.Density, Density), Fig(minDensity, Density), Fig(maxDensity, Density))
+		return NewFieldError("rho", OutOfRange).Got(Fig(fl.Density, Density)).Within(Fig(minDensity, Density), Fig(maxDensity, Density))
 	}
 	if b.In.D < 0 {
-		return fieldErrorf("d1", "the diameter must be positive")
+		return NewFieldError("d1", NotPositive).Got(Fig(b.In.D, Length))
 	}
 	if b.Out.D < 0 {
-		return fieldErrorf("d2", "the diameter must be positive")
+		return NewFieldError("d2", NotPositive).Got(Fig(b.Out.D, Length))
 	}
 	if b.Unknown != SolveFlow && b.Q < 0 {
-		return fieldErrorf("q", "the flow must not be negative; number the points so that the liquid flows from 1 to 2")
+		return NewFieldError("q", Negative).Got(Fig(b.Q, Flow)).Because(ReasonFlowDirection)
 	}
 	if b.Run != nil && b.Line != nil {
-		return fieldErrorf("l", "give either a single pipe run or a line of segments, not both")
+		return NewFieldError("l", Inconsistent).With("line").Because(ReasonRunOrSegments)
 	}
 	if b.Line != nil {
 		if err := b.Line.check(); err != nil {
 			return err
 		}
 		if b.PumpAfter < 0 || b.PumpAfter > len(b.Line.Segments) {
-			return fieldErrorf("pafter", "the pump sits after segment 0 (at point 1) to %d (the last), got %d", len(b.Line.Segments), b.PumpAfter)
+			return NewFieldError("pafter", OutOfRange).Got(Num(float64(b.PumpAfter))).Within(Num(0), Num(float64(len(b.Line.Segments)))).Because(ReasonPumpAfter)
 		}
 		if b.Unknown == SolveFrictionHead {
-			return fieldErrorf("solve", "the friction head is computed from the line's segments; solve for another quantity, or remove the segments to solve for hf")
+			return NewFieldError("solve", Inconsistent).With("hf").Because(ReasonHfFromSegments)
 		}
 	}
 	if (b.In.D > 0 || b.Out.D > 0 || b.Run != nil || b.Line != nil) && !(fl.Viscosity > 0) {
-		return fieldErrorf("mu", "the liquid viscosity must be positive to find the regime")
+		return NewFieldError("mu", NotPositive).Got(Fig(fl.Viscosity, DynamicViscosity))
 	}
 	if b.Run != nil && b.Unknown == SolveFrictionHead {
-		return fieldErrorf("solve", "the friction head is computed from the pipe run; solve for another quantity, or remove the run's length to solve for hf")
+		return NewFieldError("solve", Inconsistent).With("hf").Because(ReasonHfFromRun)
 	}
 	if b.Unknown == SolveFlow && b.Run == nil && b.Line == nil && b.In.D == 0 && b.Out.D == 0 {
-		return fieldErrorf("q", "the balance does not depend on the flow: give a pipe run, or diameters d1/d2, to solve for the flow")
+		return NewFieldError("q", NoSolution).Because(ReasonFlowIndependent)
 	}
 	return nil
 }
@@ -350,7 +349,7 @@ func (b Balance) at(q float64, bd bound) (state, error) {
 			}
 			ps.Alpha = a
 		case !ps.HasRegime && ps.Velocity != 0 && b.Alpha == AlphaFromRegime:
-			st.warn = append(st.warn, warnf("d"+field[1:], "α taken as 1 (turbulent): give the diameter at this point to find its regime"))
+			st.warn = append(st.warn, Warn("d"+field[1:], CautionAlphaUnity))
 		}
 		ps.PressureHead = (p.P - b.SitePressure) / (rho * g)
 		ps.VelocityHead = ps.Alpha * ps.Velocity * ps.Velocity / (2 * g)
@@ -433,7 +432,7 @@ func (b Balance) solveFor(bd bound) (float64, state, error) {
 	case SolveZ2:
 		return b.Out.Z + b.residual(st), st, nil
 	}
-	return 0, st, fieldErrorf("solve", "no such unknown")
+	return 0, st, NewFieldError("solve", UnknownChoice)
 }
 
 // solveFlow finds the flow that closes the balance, by Brent's method over
@@ -471,12 +470,12 @@ func (b Balance) solveFlow(bd bound) (float64, state, error) {
 	}
 	if err == errNoBracket {
 		if f(qmin) < 0 {
-			return 0, state{}, fieldErrorf("q", "no flow from point 1 to point 2 is possible: even at almost no flow the head at point 1 (with any pump) is below what point 2 needs")
+			return 0, state{}, NewFieldError("q", NoSolution).Because(ReasonNoFlowPossible)
 		}
-		return 0, state{}, fieldErrorf("q", "no solution in range: even at %v (%v in the narrowest pipe) the head at point 1 exceeds what the line uses; check the inputs", Fig(qmax, Flow), Fig(30, Velocity))
+		return 0, state{}, NewFieldError("q", NoSolution).Because(ReasonNoSolutionBelow, Fig(qmax, Flow), Fig(30, Velocity))
 	}
 	if err != nil {
-		return 0, state{}, fieldErrorf("q", "no solution found: %v", err)
+		return 0, state{}, NewFieldError("q", NotConverged)
 	}
 	st, err := b.at(q, bd)
 	if err != nil {
@@ -486,7 +485,7 @@ func (b Balance) solveFlow(bd bound) (float64, state, error) {
 	// switching at the laminar/turbulent limit); a real root has a small
 	// residual.
 	if r := b.residual(st); math.Abs(r) > 1e-6*(1+math.Abs(st.in.TotalHead)+math.Abs(st.out.TotalHead)) {
-		return 0, st, fieldErrorf("q", "no steady flow closes the balance: it jumps across the laminar–turbulent limit near %v", Fig(q, Flow))
+		return 0, st, NewFieldError("q", NoSolution).Because(ReasonRegimeJump, Fig(q, Flow))
 	}
 	return q, st, nil
 }
@@ -582,23 +581,23 @@ func (b Balance) result(v float64, st state) BalanceResult {
 
 	switch {
 	case b.Unknown == SolvePumpHead && v < 0:
-		r.Warnings = append(r.Warnings, warnf("hp", "the pump head comes out negative: no pump is needed, point 1 alone drives this flow (a valve or turbine would have to take the surplus)"))
+		r.Warnings = append(r.Warnings, Warn("hp", CautionPumpHeadNegative))
 	case b.Unknown == SolveTurbineHead && v < 0:
-		r.Warnings = append(r.Warnings, warnf("ht", "the turbine head comes out negative: at this flow the line cannot drive a turbine; it needs a pump"))
+		r.Warnings = append(r.Warnings, Warn("ht", CautionTurbineHeadNegative))
 	case b.Unknown == SolveFrictionHead && v < 0:
-		r.Warnings = append(r.Warnings, warnf("hf", "the friction head comes out negative, which no real line does: check the readings and the direction of flow"))
+		r.Warnings = append(r.Warnings, Warn("hf", CautionFrictionHeadNegative))
 	}
 	pv := b.Fluid.VapourPressure
 	for i, p := range []PointState{r.In, r.Out} {
 		n := fmt.Sprint(i + 1)
 		switch {
 		case p.P <= 0:
-			r.Warnings = append(r.Warnings, warnf("p"+n, "the absolute pressure at this point is zero or negative, which a liquid cannot sustain: the column breaks and the liquid vaporises"))
+			r.Warnings = append(r.Warnings, Warn("p"+n, CautionNoAbsolutePressure))
 		case pv > 0 && p.P <= pv:
-			r.Warnings = append(r.Warnings, warnf("p"+n, "the absolute pressure at this point (%v absolute) is at or below the liquid's vapour pressure (%v): expect cavitation or flashing", Fig(p.P, Pressure), Fig(pv, Pressure)))
+			r.Warnings = append(r.Warnings, Warn("p"+n, CautionBelowVapourPressure, Fig(p.P, Pressure), Fig(pv, Pressure)))
 		}
 		if v := math.Abs(p.Velocity); v > 6 {
-			r.Warnings = append(r.Warnings, warnf("v"+n, "a velocity of %v is unusually high for a liquid line (common practice keeps below about %v): erosion, noise and water-hammer risk", Fig(v, Velocity), Fig(3, Velocity)))
+			r.Warnings = append(r.Warnings, Warn("v"+n, CautionPointVelocityHigh, Fig(v, Velocity), Fig(3, Velocity)))
 		}
 	}
 	return r

@@ -157,7 +157,7 @@ func TestBalanceTransitional(t *testing.T) {
 
 func hasWarning(r BalanceResult, text string) bool {
 	for _, w := range r.Warnings {
-		if strings.Contains(w.Text, text) {
+		if strings.Contains(w.String(), text) {
 			return true
 		}
 	}
@@ -175,10 +175,10 @@ func TestBalanceWarnings(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !hasWarning(r, "vapour pressure") {
+	if !hasWarning(r, "below vapour pressure") {
 		t.Errorf("no vapour-pressure warning: %v", r.Warnings)
 	}
-	if !hasWarning(r, "no pump is needed") {
+	if !hasWarning(r, "pump head negative") {
 		t.Errorf("no negative-pump warning: %v", r.Warnings)
 	}
 }

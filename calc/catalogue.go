@@ -57,7 +57,7 @@ func LookupCatalogue(key string) (Catalogue, error) {
 		}
 		keys = append(keys, c.Key)
 	}
-	return Catalogue{}, fieldErrorf("cat", "unknown pipe catalogue %q; expected one of %s", key, strings.Join(keys, ", "))
+	return Catalogue{}, NewFieldError("cat", UnknownChoice).Typed(key).OneOf(keys...)
 }
 
 // Sizes returns the sizes of one class of the catalogue, smallest first.
@@ -69,7 +69,7 @@ func (c Catalogue) Sizes(class string) ([]PipeSize, error) {
 			return frClassPipes(sch), nil
 		}
 	}
-	return nil, fieldErrorf("sch", "no class %q in the %s catalogue; expected one of %s", class, c.Name, strings.Join(c.Classes, ", "))
+	return nil, NewFieldError("sch", UnknownChoice).Typed(class).OneOf(c.Classes...).With("cat")
 }
 
 // SteelDN returns the DN that ASME B36.10M lists beside nominal pipe

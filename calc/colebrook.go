@@ -72,5 +72,5 @@ func ColebrookFixedPoint(re, relRough float64) (float64, int, error) {
 			return 1 / (x * x), i, nil
 		}
 	}
-	return 0, 0, fieldErrorf("re", "fixed-point Colebrook iteration did not converge at Re %g, ε/D %g", re, relRough)
+	return 0, 0, NewFieldError("re", NotConverged).Got(Num(re))
 }

@@ -22,5 +22,5 @@ func ExampleColebrook() {
 func ExampleColebrook_error() {
 	_, err := calc.Colebrook(1e5, 0.2)
 	fmt.Println(err)
-	// Output: eps: relative roughness ε/D must be between 0 and 0.05, got 0.2
+	// Output: eps: out of range (relative roughness) value=0.2000 min=0.000 max=0.05000
 }

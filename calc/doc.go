@@ -105,5 +105,13 @@
 //
 // Functions return errors rather than panicking. An error about an input is
 // a *FieldError whose Field is the share-link parameter (or quantity) at
-// fault, so the app can show it beside the field.
+// fault, so the app can show it beside the field. It is data, not a
+// sentence: a Kind (missing, not a number, out of range, no solution…), a
+// Reason for the specific case, and the value, limits, choices or counts
+// involved as Figures (SI value and dimension). The view model words it in
+// the reader's units (calc/scenario/present/errors.go); Error is a terse
+// line in SI for Go callers. Build errors with NewFieldError and its
+// methods; fieldErrorf and FieldErrorf, which hold a sentence, are
+// deprecated. Warnings are data the same way: a Warning's Code (a
+// Caution) and Figures; Warnf and warnf are deprecated.
 package calc

@@ -36,17 +36,17 @@ func EnergyUse(power, q, h, rho, hours, tariff float64) (Energy, error) {
 	ok := func(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 	switch {
 	case !ok(power) || !(power > 0):
-		return Energy{}, fieldErrorf("pin", "the input power must be above zero, got %v", Fig(power, Power))
+		return Energy{}, NewFieldError("pin", NotPositive).Got(Fig(power, Power))
 	case !ok(q) || !(q > 0):
-		return Energy{}, fieldErrorf("qm", "the flow must be above zero, got %v", Fig(q, Flow))
+		return Energy{}, NewFieldError("qm", NotPositive).Got(Fig(q, Flow))
 	case !ok(h) || !(h > 0):
-		return Energy{}, fieldErrorf("qm", "the head must be above zero for an energy per volume and head, got %v", Fig(h, Length))
+		return Energy{}, NewFieldError("qm", NotPositive).Got(Fig(h, Length)).Because(ReasonHeadForEnergy)
 	case !ok(rho) || !(rho > 0):
-		return Energy{}, fieldErrorf("rho", "the liquid density must be a positive number")
+		return Energy{}, NewFieldError("rho", NotPositive).Got(Fig(rho, Density))
 	case !ok(hours) || hours < 0 || hours > 8784:
-		return Energy{}, fieldErrorf("hours", "the running hours per year must be 0 to 8784 (a leap year), got %g", hours)
+		return Energy{}, NewFieldError("hours", OutOfRange).Got(Num(hours)).Within(Num(0), Num(8784))
 	case !ok(tariff) || tariff < 0:
-		return Energy{}, fieldErrorf("tariff", "the tariff must be zero or positive, got %g", tariff)
+		return Energy{}, NewFieldError("tariff", Negative).Got(Num(tariff))
 	}
 	e := Energy{PerVolume: power / q, Ideal: rho * StandardGravity * h, IdealHead: rho * StandardGravity}
 	e.PerVolumeHead = e.PerVolume / h

@@ -94,25 +94,25 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	finite := func(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 	switch {
 	case !finite(fl.Density) || !(fl.Density > 0):
-		return FieldCheck{}, fieldErrorf("rho", "the liquid density must be a positive number")
+		return FieldCheck{}, NewFieldError("rho", NotPositive).Got(Fig(fl.Density, Density))
 	case !finite(r.Ps) || r.Ps < fieldVacuum:
-		return FieldCheck{}, fieldErrorf("ps", "the suction gauge reading must be a finite gauge pressure not below full vacuum, got %v", Fig(r.Ps, Pressure))
+		return FieldCheck{}, NewFieldError("ps", BelowLimit).Got(Fig(r.Ps, Pressure)).Because(ReasonBelowVacuum)
 	case !finite(r.Pd) || r.Pd < fieldVacuum:
-		return FieldCheck{}, fieldErrorf("pd", "the discharge gauge reading must be a finite gauge pressure not below full vacuum, got %v", Fig(r.Pd, Pressure))
+		return FieldCheck{}, NewFieldError("pd", BelowLimit).Got(Fig(r.Pd, Pressure)).Because(ReasonBelowVacuum)
 	case !finite(r.Zs):
-		return FieldCheck{}, fieldErrorf("zs", "the suction gauge's height must be a finite number")
+		return FieldCheck{}, NewFieldError("zs", NotFinite)
 	case !finite(r.Zd):
-		return FieldCheck{}, fieldErrorf("zd", "the discharge gauge's height must be a finite number")
+		return FieldCheck{}, NewFieldError("zd", NotFinite)
 	case !finite(r.Ds) || !(r.Ds > 0):
-		return FieldCheck{}, fieldErrorf("ds", "give the inside diameter of the pipe at the suction gauge")
+		return FieldCheck{}, NewFieldError("ds", Missing)
 	case !finite(r.Dd) || !(r.Dd > 0):
-		return FieldCheck{}, fieldErrorf("dd", "give the inside diameter of the pipe at the discharge gauge")
+		return FieldCheck{}, NewFieldError("dd", Missing)
 	case !finite(r.Q) || !(r.Q > 0):
-		return FieldCheck{}, fieldErrorf("qm", "give the measured flow (above zero)")
+		return FieldCheck{}, NewFieldError("qm", NotPositive).Got(Fig(r.Q, Flow))
 	case !finite(r.PowerIn) || r.PowerIn < 0:
-		return FieldCheck{}, fieldErrorf("pin", "the measured electrical input must be zero (not measured) or positive, got %v", Fig(r.PowerIn, Power))
+		return FieldCheck{}, NewFieldError("pin", Negative).Got(Fig(r.PowerIn, Power))
 	case !finite(r.MotorEff) || r.MotorEff < 0 || r.MotorEff > 1:
-		return FieldCheck{}, fieldErrorf("etam", "the motor's efficiency must be above 0 and at most 100 %%, got %.4g %%", r.MotorEff*100)
+		return FieldCheck{}, NewFieldError("etam", OutOfRange).Got(Num(r.MotorEff)).Within(Num(0), Num(1)).Because(ReasonEfficiency)
 	}
 	g := StandardGravity
 	rhog := fl.Density * g
@@ -125,15 +125,15 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 	fc.Head = fc.PressureHead + fc.ElevationHead + fc.VelocityHead
 	fc.HydraulicPower = rhog * r.Q * fc.Head
 	if fc.Head <= 0 {
-		fc.Warnings = append(fc.Warnings, warnf("pd", "the readings give a pump head of %v, which a running pump does not: check that the gauges are the right way round and read in the same units", Fig(fc.Head, Length)))
+		fc.Warnings = append(fc.Warnings, Warn("pd", CautionHeadNotPositive, Fig(fc.Head, Length)))
 	}
 	if r.PowerIn > 0 {
 		fc.Efficiency = fc.HydraulicPower / r.PowerIn
 		switch {
 		case fc.Efficiency > 1:
-			fc.Warnings = append(fc.Warnings, warnf("pin", "the wire-to-water efficiency comes out at %.0f %%, above 100 %%: the readings are inconsistent (check the flow, the gauges, the power reading and its unit)", fc.Efficiency*100))
+			fc.Warnings = append(fc.Warnings, Warn("pin", CautionWireAbove100, Num(fc.Efficiency)))
 		case fc.Efficiency < FieldEfficiencyLow && fc.Head > 0:
-			fc.Warnings = append(fc.Warnings, warnf("pin", "the wire-to-water efficiency is only %.0f %% (below %.0f %%): look for wear, a throttled or recirculating pump, a motor problem, or a reading error", fc.Efficiency*100, FieldEfficiencyLow*100))
+			fc.Warnings = append(fc.Warnings, Warn("pin", CautionWireLow, Num(fc.Efficiency), Num(FieldEfficiencyLow)))
 		}
 	}
 	if c != nil {
@@ -146,11 +146,11 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 			if e, ok := c.Efficiency(r.Q); ok {
 				fc.CurveEfficiency = e
 				if fc.Efficiency > e {
-					fc.Warnings = append(fc.Warnings, warnf("pin", "the wire-to-water efficiency (%.0f %%) is above the data sheet's efficiency of the pump alone at this flow (%.0f %%), which the motor's losses make impossible: check the power reading and its unit (kW or hp), the flow and the gauges", fc.Efficiency*100, e*100))
+					fc.Warnings = append(fc.Warnings, Warn("pin", CautionWireAbovePump, Num(fc.Efficiency), Num(e)))
 				}
 			}
 		} else {
-			fc.Warnings = append(fc.Warnings, warnf("qm", "the measured flow (%v) lies outside the data sheet's flows (%v to %v): no curve head to compare with", Fig(r.Q, Flow), Fig(c.MinFlow(), Flow), Fig(c.MaxFlow(), Flow)))
+			fc.Warnings = append(fc.Warnings, Warn("qm", CautionFlowOffSheet, Fig(r.Q, Flow), Fig(c.MinFlow(), Flow), Fig(c.MaxFlow(), Flow)))
 		}
 	}
 	if r.PowerIn > 0 && r.MotorEff > 0 {
@@ -158,9 +158,9 @@ func CheckPump(fl Fluid, r FieldReadings, c *PumpCurve) (FieldCheck, error) {
 		fc.PumpEfficiency = fc.HydraulicPower / fc.ShaftPower
 		switch {
 		case fc.PumpEfficiency > 1:
-			fc.Warnings = append(fc.Warnings, warnf("etam", "the pump's own efficiency comes out at %.0f %%, above 100 %%: the readings or the motor efficiency are wrong", fc.PumpEfficiency*100))
+			fc.Warnings = append(fc.Warnings, Warn("etam", CautionPumpEffAbove100, Num(fc.PumpEfficiency)))
 		case fc.PumpEfficiency > PumpEfficiencyHigh:
-			fc.Warnings = append(fc.Warnings, warnf("etam", "the pump's own efficiency comes out at %.0f %%, above the %.0f %% that even the largest pumps hardly reach: check the power reading, the motor efficiency, the flow and the gauges", fc.PumpEfficiency*100, PumpEfficiencyHigh*100))
+			fc.Warnings = append(fc.Warnings, Warn("etam", CautionPumpEffHigh, Num(fc.PumpEfficiency), Num(PumpEfficiencyHigh)))
 		}
 		if fc.CurveEfficiency > 0 {
 			fc.HasEffDeviation, fc.EffDeviation = true, fc.PumpEfficiency-fc.CurveEfficiency

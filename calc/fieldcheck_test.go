@@ -77,7 +77,7 @@ func TestCheckPumpCurve(t *testing.T) {
 	}
 	r.Q = 0.05
 	fc, _ = CheckPump(testLiquid, r, &c)
-	if fc.HasCurve || !fcHas(fc.Warnings, "qm", "outside the data sheet") {
+	if fc.HasCurve || !fcHas(fc.Warnings, "qm", "flow off sheet") {
 		t.Errorf("beyond the sheet: %+v", fc)
 	}
 }
@@ -85,7 +85,7 @@ func TestCheckPumpCurve(t *testing.T) {
 // fcHas reports whether a warning for field contains sub.
 func fcHas(ws []Warning, field, sub string) bool {
 	for _, w := range ws {
-		if w.Field == field && strings.Contains(w.Text, sub) {
+		if w.Field == field && strings.Contains(w.String(), sub) {
 			return true
 		}
 	}
@@ -100,7 +100,7 @@ func TestCheckPumpWarnings(t *testing.T) {
 	for _, tc := range []struct {
 		pin  float64
 		want string
-	}{{0.9 * hyd, "above 100 %"}, {hyd / 0.2, "only 20 %"}} {
+	}{{0.9 * hyd, "wire above 100 f0=1.111"}, {hyd / 0.2, "wire low f0=0.2000 f1=0.3000"}} {
 		r.PowerIn = tc.pin
 		fc, err := CheckPump(testLiquid, r, nil)
 		if err != nil {
@@ -115,7 +115,7 @@ func TestCheckPumpWarnings(t *testing.T) {
 		t.Errorf("65 %%: %+v", fc)
 	}
 	r.Pd, r.Ps = 0, 200e3
-	if fc, _ := CheckPump(testLiquid, r, nil); !fcHas(fc.Warnings, "pd", "right way round") {
+	if fc, _ := CheckPump(testLiquid, r, nil); !fcHas(fc.Warnings, "pd", "head not positive") {
 		t.Errorf("negative head: %+v", fc.Warnings)
 	}
 }

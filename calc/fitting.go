@@ -202,7 +202,7 @@ func LookupFitting(key string) (Fitting, error) {
 	for _, f := range FittingTable() {
 		keys = append(keys, f.Key)
 	}
-	return Fitting{}, fieldErrorf("fit", "unknown fitting %q; expected one of %s", key, strings.Join(keys, ", "))
+	return Fitting{}, NewFieldError("fit", UnknownChoice).Typed(key).OneOf(keys...)
 }
 
 // frFitting returns the table row of key, or nil. Keys as stored (lower
@@ -232,7 +232,7 @@ func frFitting(key string) *Fitting {
 // 10 m (field "d").
 func CraneFT(d float64) (float64, error) {
 	if math.IsNaN(d) || d < craneDMin || d > craneDMax {
-		return 0, fieldErrorf("d", "the Crane TP-410 friction factor f_T is defined here for inside diameters of %g mm to %g m, got %g m", craneDMin*1e3, float64(craneDMax), d)
+		return 0, NewFieldError("d", OutsideValidity).Got(Fig(d, Length)).Within(Fig(craneDMin, Length), Fig(float64(craneDMax), Length)).Because(ReasonCraneFT)
 	}
 	return clamond(7.5e6*d, 3.4126825352925e-5*math.Pow(d, -1.0112)), nil
 }
@@ -274,10 +274,10 @@ func (f Fitting) KAt(d, re float64) (float64, error) {
 // frCheckKInputs validates the diameter and Reynolds number of KAt.
 func frCheckKInputs(d, re float64) error {
 	if math.IsNaN(d) || math.IsInf(d, 0) || d <= 0 {
-		return fieldErrorf("d", "inside diameter must be positive, got %g", d)
+		return NewFieldError("d", NotPositive).Got(Fig(d, Length))
 	}
 	if math.IsNaN(re) || re <= 0 {
-		return fieldErrorf("re", "Reynolds number must be positive, got %g", re)
+		return NewFieldError("re", NotPositive).Got(Num(re))
 	}
 	return nil
 }
@@ -301,7 +301,7 @@ func (f *Fitting) kAt(d, re, ft float64) (float64, error) {
 	case KDarby:
 		return f.darbyK(d, re)
 	}
-	return 0, fieldErrorf("fit", "fitting %q has an unknown method", f.Key)
+	return 0, NewFieldError("fit", UnknownChoice).Typed(f.Key).Because(ReasonFittingMethod)
 }
 
 // Formula returns the fitting's K formula at inside diameter d (m), as
@@ -327,10 +327,10 @@ func (f Fitting) Formula(d float64) string {
 // losses: both finite and positive.
 func frCheckDiameters(d1, d2 float64) error {
 	if math.IsNaN(d1) || math.IsInf(d1, 0) || d1 <= 0 {
-		return fieldErrorf("d1", "upstream diameter must be positive, got %g", d1)
+		return NewFieldError("d1", NotPositive).Got(Fig(d1, Length))
 	}
 	if math.IsNaN(d2) || math.IsInf(d2, 0) || d2 <= 0 {
-		return fieldErrorf("d2", "downstream diameter must be positive, got %g", d2)
+		return NewFieldError("d2", NotPositive).Got(Fig(d2, Length))
 	}
 	return nil
 }
@@ -348,7 +348,7 @@ func SuddenExpansionK(d1, d2 float64) (float64, error) {
 		return 0, err
 	}
 	if d2 < d1 {
-		return 0, fieldErrorf("d2", "an expansion needs the downstream diameter (%g) at least the upstream one (%g)", d2, d1)
+		return 0, NewFieldError("d2", BelowLimit).Got(Fig(d2, Length)).AtLeast(Fig(d1, Length)).Because(ReasonExpansion)
 	}
 	r := d1 / d2
 	k := 1 - r*r
@@ -368,7 +368,7 @@ func SuddenContractionK(d1, d2 float64) (float64, error) {
 		return 0, err
 	}
 	if d2 > d1 {
-		return 0, fieldErrorf("d2", "a contraction needs the downstream diameter (%g) at most the upstream one (%g)", d2, d1)
+		return 0, NewFieldError("d2", AboveLimit).Got(Fig(d2, Length)).AtMost(Fig(d1, Length)).Because(ReasonContraction)
 	}
 	r := d2 / d1
 	return 0.5 * (1 - r*r), nil

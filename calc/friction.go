@@ -66,20 +66,20 @@ func ParseFrictionMethod(s string) (FrictionMethod, error) {
 	case "hazen-williams", "hazenwilliams", "hw":
 		return MethodHazenWilliams, nil
 	}
-	return 0, fieldErrorf("method", "unknown friction method %q; expected colebrook, swamee-jain, haaland or hazen-williams", s)
+	return 0, NewFieldError("method", UnknownChoice).Typed(s).OneOf("colebrook", "swamee-jain", "haaland", "hazen-williams")
 }
 
 // frCheckTurbulent validates the inputs of the turbulent friction-factor
 // functions.
 func frCheckTurbulent(re, relRough float64) error {
 	if math.IsNaN(re) || math.IsInf(re, 0) || re <= 0 {
-		return fieldErrorf("re", "Reynolds number must be a positive number, got %g", re)
+		return NewFieldError("re", NotPositive).Got(Num(re))
 	}
 	if re < FrictionReMin || re > FrictionReMax {
-		return fieldErrorf("re", "turbulent friction formulas apply for Reynolds numbers %g to %g, got %g", FrictionReMin, FrictionReMax, re)
+		return NewFieldError("re", OutsideValidity).Got(Num(re)).Within(Num(FrictionReMin), Num(FrictionReMax)).Because(ReasonTurbulentFriction)
 	}
 	if math.IsNaN(relRough) || relRough < 0 || relRough > FrictionRelRoughMax {
-		return fieldErrorf("eps", "relative roughness ε/D must be between 0 and %g, got %g", FrictionRelRoughMax, relRough)
+		return NewFieldError("eps", OutOfRange).Got(Num(relRough)).Within(Num(0), Num(FrictionRelRoughMax)).Because(ReasonRelativeRoughness)
 	}
 	return nil
 }
@@ -90,7 +90,7 @@ func frCheckTurbulent(re, relRough float64) error {
 // "re".
 func LaminarFriction(re float64) (float64, error) {
 	if math.IsNaN(re) || re <= 0 || re > laminarReLimit {
-		return 0, fieldErrorf("re", "laminar friction factor 64/Re applies for Reynolds numbers above 0 and up to %g, got %g", laminarReLimit, re)
+		return 0, NewFieldError("re", OutsideValidity).Got(Num(re)).Within(Num(0), Num(laminarReLimit)).Because(ReasonLaminarFriction)
 	}
 	return 64 / re, nil
 }

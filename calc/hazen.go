@@ -21,16 +21,16 @@ const (
 // "chw" (C must lie in 40…160).
 func HazenWilliamsHeadLoss(q, d, length, c float64) (float64, error) {
 	if math.IsNaN(q) || math.IsInf(q, 0) || q < 0 {
-		return 0, fieldErrorf("q", "flow must be zero or positive, got %g", q)
+		return 0, NewFieldError("q", Negative).Got(Fig(q, Flow))
 	}
 	if math.IsNaN(d) || math.IsInf(d, 0) || d <= 0 {
-		return 0, fieldErrorf("d", "inside diameter must be positive, got %g", d)
+		return 0, NewFieldError("d", NotPositive).Got(Fig(d, Length))
 	}
 	if math.IsNaN(length) || math.IsInf(length, 0) || length < 0 {
-		return 0, fieldErrorf("length", "pipe length must be zero or positive, got %g", length)
+		return 0, NewFieldError("length", Negative).Got(Fig(length, Length))
 	}
 	if math.IsNaN(c) || c < HazenCMin || c > HazenCMax {
-		return 0, fieldErrorf("chw", "Hazen–Williams C must be between %g and %g, got %g", HazenCMin, HazenCMax, c)
+		return 0, NewFieldError("chw", OutOfRange).Got(Num(c)).Within(Num(HazenCMin), Num(HazenCMax))
 	}
 	if q == 0 || length == 0 {
 		return 0, nil

@@ -168,14 +168,14 @@ func if97Region1DensityCore(tK, pPa float64) float64 {
 // extrapolated.
 func IF97Region1Density(tK, pPa float64) (float64, error) {
 	if math.IsNaN(tK) || tK < if97Tmin || tK > if97R1Tmax {
-		return 0, fieldErrorf("t", "temperature must be between %v and %v for IAPWS-IF97 region 1 (liquid water); got %v", Fig(if97Tmin, Temperature), Fig(if97R1Tmax, Temperature), Fig(tK, Temperature))
+		return 0, NewFieldError("t", OutsideValidity).Got(Fig(tK, Temperature)).Within(Fig(if97Tmin, Temperature), Fig(if97R1Tmax, Temperature)).Because(ReasonIF97)
 	}
 	if math.IsNaN(pPa) || pPa <= 0 || pPa > if97R1Pmax {
-		return 0, fieldErrorf("p", "absolute pressure must be above the vapour pressure and at most %g MPa for IAPWS-IF97 region 1; got %g Pa", if97R1Pmax/1e6, pPa)
+		return 0, NewFieldError("p", AboveLimit).Got(Fig(pPa, Pressure)).AtMost(Fig(if97R1Pmax, Pressure)).Because(ReasonIF97)
 	}
 	ps := if97SaturationPressureCore(tK)
 	if tK <= if97Tcrit && pPa < ps {
-		return 0, fieldErrorf("p", "absolute pressure %g Pa is below the vapour pressure %g Pa at %g K: the water would be vapour", pPa, ps, tK)
+		return 0, NewFieldError("p", BelowLimit).Got(Fig(pPa, Pressure)).AtLeast(Fig(ps, Pressure)).Because(ReasonBoils, Fig(tK, Temperature))
 	}
 	return if97Region1DensityCore(tK, pPa), nil
 }
@@ -216,7 +216,7 @@ func if97SaturationPressureCore(tK float64) float64 {
 // result is a *FieldError naming "t".
 func SaturationPressure(tK float64) (float64, error) {
 	if math.IsNaN(tK) || tK < if97Tmin || tK > if97Tcrit {
-		return 0, fieldErrorf("t", "temperature must be between %v and %v for the IAPWS-IF97 saturation line; got %v", Fig(if97Tmin, Temperature), Fig(if97Tcrit, Temperature), Fig(tK, Temperature))
+		return 0, NewFieldError("t", OutsideValidity).Got(Fig(tK, Temperature)).Within(Fig(if97Tmin, Temperature), Fig(if97Tcrit, Temperature)).Because(ReasonIF97Saturation)
 	}
 	return if97SaturationPressureCore(tK), nil
 }

@@ -87,14 +87,14 @@ func transitionLoss(d1, v1, d2, v2 float64) (float64, error) {
 func (l Line) check() error {
 	n := len(l.Segments)
 	if n == 0 {
-		return fieldErrorf("line", "give at least one pipe segment")
+		return NewFieldError("line", TooFew).AtLeast(Num(1))
 	}
 	if n > MaxSegments {
-		return fieldErrorf("line", "a line has at most %d segments, got %d", MaxSegments, n)
+		return countErr("line", n, 1, MaxSegments)
 	}
 	for i, s := range l.Segments {
 		if math.IsNaN(s.EndZ) || math.IsInf(s.EndZ, 0) {
-			return &FieldError{Field: "z", Segment: i + 1, Msg: "the elevation of the segment's end must be a finite number"}
+			return NewFieldError("z", NotFinite).InSegment(i + 1).Because(ReasonSegmentEnd)
 		}
 	}
 	return nil
@@ -186,7 +186,7 @@ func (l Line) minDiameter() float64 {
 // naming its segment; at zero flow one warning stands for all.
 func lineWarnings(lr *LineResult, q float64) []Warning {
 	if q == 0 {
-		return []Warning{warnf("q", "no flow: all losses in the line are zero")}
+		return []Warning{Warn("q", CautionNoFlow)}
 	}
 	var out []Warning
 	for i, s := range lr.Segments {

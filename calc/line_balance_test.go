@@ -4,7 +4,6 @@ import (
 	"errors"
 	"math"
 	"math/rand"
-	"strings"
 	"testing"
 )
 
@@ -269,7 +268,7 @@ func TestProfileVapourWarning(t *testing.T) {
 	}
 	found := false
 	for _, w := range r.Warnings {
-		if w.Segment == 1 && w.Field == "z" && strings.Contains(w.Text, "vapour pressure") {
+		if w.Segment == 1 && w.Field == "z" && w.Code == CautionColumnBreaks {
 			found = true
 		}
 	}

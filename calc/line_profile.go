@@ -78,8 +78,7 @@ func (b Balance) profile(r *BalanceResult, lr *LineResult) ([]ProfileNode, []War
 		nodes = append(nodes, start, end)
 		for _, n := range [2]ProfileNode{start, end} {
 			if n.Pressure <= pv || n.Pressure <= 0 {
-				w := warnf("z", "the absolute pressure in the pipe falls to %v absolute at %v from point 1, at or below the liquid's vapour pressure (%v): the liquid column would break there (vapour pockets, cavitation); lower the pipe, reduce the losses upstream or raise the pressure",
-					Fig(n.Pressure, Pressure), Fig(n.Distance, Length), Fig(pv, Pressure))
+				w := Warn("z", CautionColumnBreaks, Fig(n.Pressure, Pressure), Fig(n.Distance, Length), Fig(pv, Pressure))
 				w.Segment = i + 1
 				warn = append(warn, w)
 				break

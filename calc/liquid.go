@@ -13,13 +13,13 @@ import "math"
 // (unknown).
 func CustomLiquid(rho, mu, pv float64) (Fluid, error) {
 	if !(rho >= minDensity && rho <= maxDensity) {
-		return Fluid{}, fieldErrorf("rho", "a liquid's density lies between %v and %v; got %v", Fig(minDensity, Density), Fig(maxDensity, Density), Fig(rho, Density))
+		return Fluid{}, NewFieldError("rho", OutOfRange).Got(Fig(rho, Density)).Within(Fig(minDensity, Density), Fig(maxDensity, Density))
 	}
 	if !(mu > 0) || math.IsInf(mu, 0) {
-		return Fluid{}, fieldErrorf("mu", "dynamic viscosity must be a positive finite number in Pa·s; got %g", mu)
+		return Fluid{}, NewFieldError("mu", NotPositive).Got(Fig(mu, DynamicViscosity))
 	}
 	if !(pv >= 0) || math.IsInf(pv, 0) {
-		return Fluid{}, fieldErrorf("pv", "vapour pressure must be zero or a positive finite number in Pa (absolute); got %g", pv)
+		return Fluid{}, NewFieldError("pv", Negative).Got(Fig(pv, Pressure)).Because(ReasonAbsolutePressure)
 	}
 	return Fluid{
 		Name:           "custom liquid",

@@ -73,5 +73,5 @@ func LookupMaterial(key string) (Material, error) {
 	for _, m := range MaterialTable() {
 		keys = append(keys, m.Key)
 	}
-	return Material{}, fieldErrorf("mat", "unknown pipe material %q; expected one of %s", key, strings.Join(keys, ", "))
+	return Material{}, NewFieldError("mat", UnknownChoice).Typed(key).OneOf(keys...)
 }

@@ -82,33 +82,32 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 	finite := func(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 	switch {
 	case !finite(fl.Density) || !(fl.Density > 0):
-		return NPSHResult{}, fieldErrorf("rho", "the liquid density must be a positive number")
+		return NPSHResult{}, NewFieldError("rho", NotPositive).Got(Fig(fl.Density, Density))
 	case !finite(fl.VapourPressure) || fl.VapourPressure < 0:
-		return NPSHResult{}, fieldErrorf("pv", "the liquid's vapour pressure must be zero or positive (absolute)")
+		return NPSHResult{}, NewFieldError("pv", Negative).Got(Fig(fl.VapourPressure, Pressure)).Because(ReasonAbsolutePressure)
 	case !finite(in.SurfacePressure) || !(in.SurfacePressure > 0):
-		return NPSHResult{}, fieldErrorf("p1", "the pressure on the source surface must be a positive absolute pressure, got %v absolute", Fig(in.SurfacePressure, Pressure))
+		return NPSHResult{}, NewFieldError("p1", NotPositive).Got(Fig(in.SurfacePressure, Pressure)).Because(ReasonAbsolutePressure)
 	case !finite(in.SurfaceZ):
-		return NPSHResult{}, fieldErrorf("z1", "the source surface's elevation must be a finite number")
+		return NPSHResult{}, NewFieldError("z1", NotFinite)
 	case !finite(in.PumpZ):
-		return NPSHResult{}, fieldErrorf("zp", "the pump's elevation must be a finite number")
+		return NPSHResult{}, NewFieldError("zp", NotFinite)
 	case !finite(in.SuctionLoss) || in.SuctionLoss < 0:
-		return NPSHResult{}, fieldErrorf("hs", "the suction-line loss must be zero or positive, got %v", Fig(in.SuctionLoss, Length))
+		return NPSHResult{}, NewFieldError("hs", Negative).Got(Fig(in.SuctionLoss, Length))
 	case !finite(in.NPSHr) || in.NPSHr < 0:
-		return NPSHResult{}, fieldErrorf("npshr", "the NPSH required must be zero (not given) or positive, got %v", Fig(in.NPSHr, Length))
+		return NPSHResult{}, NewFieldError("npshr", Negative).Got(Fig(in.NPSHr, Length))
 	}
 	r := NPSHResult{Required: in.NPSHr}
 	r.Available = (in.SurfacePressure-fl.VapourPressure)/(fl.Density*StandardGravity) + in.SurfaceZ - in.PumpZ - in.SuctionLoss
-	const guidance = "margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least %v (common practice, from memory); large, high-energy or hot-liquid pumps need more"
 	minMargin := Fig(NPSHMarginMin, Length)
 	if in.NPSHr == 0 {
 		r.Level = NPSHUnrated
 		r.Margin = r.Available
 		if r.Available <= 0 {
 			r.Level = NPSHDanger
-			r.Note = warnf("", "NPSH available is %v, not above zero: the liquid boils at the pump inlet whatever the pump", Fig(r.Available, Length))
+			r.Note = Warn("", CautionNPSHNone, Fig(r.Available, Length))
 			return r, nil
 		}
-		r.Note = warnf("", "NPSH available is %v; give the pump's NPSH required at this flow to judge the margin ("+guidance+")", Fig(r.Available, Length), minMargin)
+		r.Note = Warn("", CautionNPSHUnrated, Fig(r.Available, Length), minMargin)
 		return r, nil
 	}
 	r.Margin = r.Available - r.Required
@@ -116,13 +115,13 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 	switch {
 	case r.Available <= 0 || r.Available < r.Required:
 		r.Level = NPSHDanger
-		r.Note = warnf("", "NPSH available %v is below the %v required: the pump will cavitate (lost head, noise, damage); raise the source, lower the pump, cut the suction losses or cool the liquid", Fig(r.Available, Length), Fig(r.Required, Length))
+		r.Note = Warn("", CautionNPSHBelow, Fig(r.Available, Length), Fig(r.Required, Length))
 	case r.Ratio < NPSHMarginRatio || r.Margin < NPSHMarginMin:
 		r.Level = NPSHCaution
-		r.Note = warnf("", "NPSH available %v exceeds the %v required by only %v (ratio %.2f): expect some cavitation; "+guidance, Fig(r.Available, Length), Fig(r.Required, Length), Fig(r.Margin, Length), r.Ratio, minMargin)
+		r.Note = Warn("", CautionNPSHLowMargin, Fig(r.Available, Length), Fig(r.Required, Length), Fig(r.Margin, Length), Num(r.Ratio), minMargin)
 	default:
 		r.Level = NPSHOK
-		r.Note = warnf("", "NPSH available %v against %v required: margin %v, ratio %.2f; "+guidance, Fig(r.Available, Length), Fig(r.Required, Length), Fig(r.Margin, Length), r.Ratio, minMargin)
+		r.Note = Warn("", CautionNPSHMargin, Fig(r.Available, Length), Fig(r.Required, Length), Fig(r.Margin, Length), Num(r.Ratio), minMargin)
 	}
 	return r, nil
 }
@@ -134,13 +133,13 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 // 0) has none. Without a line the error names "pafter".
 func SuctionLoss(b Balance, q float64) (float64, error) {
 	if b.Line == nil {
-		return 0, fieldErrorf("pafter", "the suction losses come from a line of segments with the pump after one of them; give the segments, or type the suction loss")
+		return 0, NewFieldError("pafter", Missing).With("line").Because(ReasonSuctionSegments)
 	}
 	if err := b.Line.check(); err != nil {
 		return 0, err
 	}
 	if b.PumpAfter < 0 || b.PumpAfter > len(b.Line.Segments) {
-		return 0, fieldErrorf("pafter", "the pump sits after segment 0 (at point 1) to %d (the last), got %d", len(b.Line.Segments), b.PumpAfter)
+		return 0, NewFieldError("pafter", OutOfRange).Got(Num(float64(b.PumpAfter))).Within(Num(0), Num(float64(len(b.Line.Segments)))).Because(ReasonPumpAfter)
 	}
 	if b.PumpAfter == 0 {
 		return 0, nil

@@ -61,12 +61,12 @@ func TestNPSHLevels(t *testing.T) {
 		lvl   NPSHLevel
 		note  string
 	}{
-		{12, NPSHDanger, "will cavitate"},
-		{10.01, NPSHDanger, "will cavitate"},
-		{9.2, NPSHCaution, "from memory"}, // ratio 1.087 < 1.1
-		{9.05, NPSHOK, "ANSI/HI 9.6.1"},   // ratio 1.105 ≥ 1.1, margin 0.95 m ≥ 0.6 m
-		{5, NPSHOK, "from memory"},
-		{0, NPSHUnrated, "give the pump's NPSH required"},
+		{12, NPSHDanger, "npsh below"},
+		{10.01, NPSHDanger, "npsh below"},
+		{9.2, NPSHCaution, "npsh low margin"}, // ratio 1.087 < 1.1
+		{9.05, NPSHOK, "npsh margin"},         // ratio 1.105 ≥ 1.1, margin 0.95 m ≥ 0.6 m
+		{5, NPSHOK, "npsh margin"},
+		{0, NPSHUnrated, "npsh unrated"},
 	}
 	for _, tc := range tests {
 		r, err := NPSH(fl, NPSHInput{SurfacePressure: 100e3, NPSHr: tc.npshr})

@@ -213,7 +213,7 @@ func LookupPipe(nps, schedule string) (PipeSize, error) {
 		for _, c := range frClasses {
 			all = append(all, c.name)
 		}
-		return PipeSize{}, fieldErrorf("sch", "unknown schedule or class %q; expected one of %s", schedule, strings.Join(all, ", "))
+		return PipeSize{}, NewFieldError("sch", UnknownChoice).Typed(schedule).OneOf(all...)
 	}
 	pipes := frClassPipes(sch)
 	size := nps
@@ -233,5 +233,5 @@ func LookupPipe(nps, schedule string) (PipeSize, error) {
 	for i, p := range pipes {
 		sizes[i] = p.NPS
 	}
-	return PipeSize{}, fieldErrorf("nps", "no size %q in class %s; sizes listed: %s", nps, sch, strings.Join(sizes, ", "))
+	return PipeSize{}, NewFieldError("nps", UnknownChoice).Typed(nps).OneOf(sizes...).With("sch")
 }

@@ -58,7 +58,7 @@ type PumpCurve struct {
 func FitPump(points []PumpPoint) (PumpCurve, error) {
 	n := len(points)
 	if n < PumpMinPoints || n > PumpMaxPoints {
-		return PumpCurve{}, fieldErrorf("pq", "give %d to %d data-sheet points, got %d", PumpMinPoints, PumpMaxPoints, n)
+		return PumpCurve{}, countErr("pq", n, PumpMinPoints, PumpMaxPoints)
 	}
 	finite := func(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 	effGiven, npshGiven, falling := false, false, false
@@ -66,15 +66,15 @@ func FitPump(points []PumpPoint) (PumpCurve, error) {
 		k := i + 1
 		switch {
 		case !finite(p.Q) || p.Q < 0:
-			return PumpCurve{}, fieldErrorf("pq", "point %d: the flow must be zero or positive, got %v", k, Fig(p.Q, Flow))
+			return PumpCurve{}, NewFieldError("pq", Negative).At(k).Got(Fig(p.Q, Flow))
 		case i > 0 && !(p.Q > points[i-1].Q):
-			return PumpCurve{}, fieldErrorf("pq", "point %d: the flow (%v) must be above the previous point's (%v); list the points in order of rising flow, each flow once", k, Fig(p.Q, Flow), Fig(points[i-1].Q, Flow))
+			return PumpCurve{}, NewFieldError("pq", BelowLimit).At(k).Got(Fig(p.Q, Flow)).AtLeast(Fig(points[i-1].Q, Flow)).Because(ReasonFlowsRising)
 		case !finite(p.H) || p.H < 0:
-			return PumpCurve{}, fieldErrorf("ph", "point %d: the head must be zero or positive, got %v", k, Fig(p.H, Length))
+			return PumpCurve{}, NewFieldError("ph", Negative).At(k).Got(Fig(p.H, Length))
 		case i > 0 && p.H == points[i-1].H:
-			return PumpCurve{}, fieldErrorf("ph", "point %d: the head (%v) equals the previous point's: a data-sheet curve that stays level is not accepted; read the heads off the curve again", k, Fig(p.H, Length))
+			return PumpCurve{}, NewFieldError("ph", Inconsistent).At(k).Got(Fig(p.H, Length)).Because(ReasonCurveLevel)
 		case i > 0 && p.H > points[i-1].H && falling:
-			return PumpCurve{}, fieldErrorf("ph", "point %d: the head (%v) must be below the previous point's (%v): past its highest point the curve must fall with rising flow", k, Fig(p.H, Length), Fig(points[i-1].H, Length))
+			return PumpCurve{}, NewFieldError("ph", AboveLimit).At(k).Got(Fig(p.H, Length)).AtMost(Fig(points[i-1].H, Length)).Because(ReasonCurveMustFall)
 		case i > 0 && p.H < points[i-1].H:
 			falling = true
 		}
@@ -82,7 +82,7 @@ func FitPump(points []PumpPoint) (PumpCurve, error) {
 		npshGiven = npshGiven || p.NPSHr != 0
 	}
 	if !falling || points[n-1].H > points[n-2].H {
-		return PumpCurve{}, fieldErrorf("ph", "point %d: the curve ends on its highest head; the data sheet must reach the falling part of the curve", n)
+		return PumpCurve{}, NewFieldError("ph", Inconsistent).At(n).Because(ReasonCurveEndsHigh)
 	}
 	c := PumpCurve{points: append([]PumpPoint(nil), points...)}
 	x := make([]float64, n)
@@ -95,9 +95,9 @@ func FitPump(points []PumpPoint) (PumpCurve, error) {
 		for i, p := range points {
 			switch {
 			case p.Q == 0 && p.Eff != 0:
-				return PumpCurve{}, fieldErrorf("peff", "point %d: at zero flow the efficiency is 0 by definition (no water is delivered), got %g", i+1, p.Eff)
+				return PumpCurve{}, NewFieldError("peff", Inconsistent).At(i + 1).Got(Num(p.Eff)).Because(ReasonZeroFlowEff)
 			case p.Q > 0 && !(p.Eff > 0 && p.Eff <= 1):
-				return PumpCurve{}, fieldErrorf("peff", "point %d: the efficiency must be above 0 and at most 100 %%, got %g %%; give an efficiency for every point or for none", i+1, p.Eff*100)
+				return PumpCurve{}, NewFieldError("peff", OutOfRange).At(i+1).Got(Num(p.Eff)).Within(Num(0), Num(1)).Because(ReasonEfficiency)
 			}
 			y[i] = p.Eff
 		}
@@ -110,7 +110,7 @@ func FitPump(points []PumpPoint) (PumpCurve, error) {
 		for i := c.npshStart; i < n; i++ {
 			p := points[i]
 			if !finite(p.NPSHr) || !(p.NPSHr > 0) {
-				return PumpCurve{}, fieldErrorf("pnpsh", "point %d: the NPSH required must be positive, got %v; give it for every point or for none", i+1, Fig(p.NPSHr, Length))
+				return PumpCurve{}, NewFieldError("pnpsh", NotPositive).At(i + 1).Got(Fig(p.NPSHr, Length))
 			}
 			y[i] = p.NPSHr
 		}

@@ -27,10 +27,10 @@ const PumpMaxCombined = 8
 // of ours rather than a published limit (field "spd").
 func (c PumpCurve) AtSpeed(ratio float64) (PumpCurve, error) {
 	if len(c.points) == 0 {
-		return PumpCurve{}, fieldErrorf("pq", "no pump curve: give the data-sheet points")
+		return PumpCurve{}, NewFieldError("pq", Missing)
 	}
 	if math.IsNaN(ratio) || ratio < PumpSpeedRatioMin || ratio > PumpSpeedRatioMax {
-		return PumpCurve{}, fieldErrorf("spd", "the speed must be between %g %% and %g %% of the data sheet's, got %g %%", PumpSpeedRatioMin*100, PumpSpeedRatioMax*100, ratio*100)
+		return PumpCurve{}, NewFieldError("spd", OutOfRange).Got(Num(ratio)).Within(Num(PumpSpeedRatioMin), Num(PumpSpeedRatioMax))
 	}
 	pts := c.Points()
 	r2 := ratio * ratio
@@ -51,10 +51,10 @@ func (c PumpCurve) AtSpeed(ratio float64) (PumpCurve, error) {
 // only one drawing from the suction line).
 func (c PumpCurve) Combine(n int, parallel bool) (PumpCurve, error) {
 	if len(c.points) == 0 {
-		return PumpCurve{}, fieldErrorf("pq", "no pump curve: give the data-sheet points")
+		return PumpCurve{}, NewFieldError("pq", Missing)
 	}
 	if n < 1 || n > PumpMaxCombined {
-		return PumpCurve{}, fieldErrorf("pumps", "the number of identical pumps must be 1 to %d, got %d", PumpMaxCombined, n)
+		return PumpCurve{}, countErr("pumps", n, 1, PumpMaxCombined)
 	}
 	pts := c.Points()
 	for i := range pts {

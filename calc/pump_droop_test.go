@@ -3,7 +3,6 @@ package calc
 import (
 	"errors"
 	"math"
-	"strings"
 	"testing"
 )
 
@@ -53,7 +52,7 @@ func TestDroopingCurve(t *testing.T) {
 	// Above the peak: no meeting, said plainly.
 	b.Out.Z = 50
 	var fe *FieldError
-	if _, err := OperatingPoint(c, b); !errors.As(err, &fe) || fe.Field != "ph" || !strings.Contains(fe.Msg, "highest head") {
+	if _, err := OperatingPoint(c, b); !errors.As(err, &fe) || fe.Field != "ph" || fe.Reason != ReasonTopBelowLine {
 		t.Errorf("lift above the peak: %v", err)
 	}
 	// The affinity laws keep the shape.

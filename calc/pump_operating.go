@@ -34,7 +34,7 @@ type OperatingResult struct {
 // the line needs, so it would run out beyond the sheet (field "pq").
 func OperatingPoint(c PumpCurve, b Balance) (OperatingResult, error) {
 	if len(c.points) == 0 {
-		return OperatingResult{}, fieldErrorf("pq", "no pump curve: give the data-sheet points")
+		return OperatingResult{}, NewFieldError("pq", Missing)
 	}
 	orig := b
 	b, err := b.forSystem()
@@ -56,15 +56,15 @@ func OperatingPoint(c PumpCurve, b Balance) (OperatingResult, error) {
 			return OperatingResult{}, err
 		}
 		if ht < st {
-			return OperatingResult{}, fieldErrorf("ph", "the curves do not meet: the pump's highest head %v (at %v) is below the %v the line needs there", Fig(ht, Length), Fig(top, Flow), Fig(st, Length))
+			return OperatingResult{}, NewFieldError("ph", NoSolution).Because(ReasonTopBelowLine, Fig(ht, Length), Fig(top, Flow), Fig(st, Length))
 		}
 		qa, ha, sa = top, ht, st
 	}
 	if ha < sa {
 		if qa == 0 {
-			return OperatingResult{}, fieldErrorf("ph", "the curves do not meet: the pump's shut-off head %v is below the %v the line needs at zero flow", Fig(ha, Length), Fig(sa, Length))
+			return OperatingResult{}, NewFieldError("ph", NoSolution).Because(ReasonShutOffBelowLine, Fig(ha, Length), Fig(sa, Length))
 		}
-		return OperatingResult{}, fieldErrorf("ph", "the curves do not meet within the data sheet: at its first point (Q = %v) the pump's head %v is already below the %v the line needs; a point at lower flow may be missing", Fig(qa, Flow), Fig(ha, Length), Fig(sa, Length))
+		return OperatingResult{}, NewFieldError("ph", NoSolution).Because(ReasonFirstPointBelow, Fig(qa, Flow), Fig(ha, Length), Fig(sa, Length))
 	}
 	hb, _ := c.Head(qb)
 	sb, _, err := b.systemHead(qb)
@@ -72,7 +72,7 @@ func OperatingPoint(c PumpCurve, b Balance) (OperatingResult, error) {
 		return OperatingResult{}, err
 	}
 	if hb > sb {
-		return OperatingResult{}, fieldErrorf("pq", "the curves do not meet within the data sheet: beyond its last point (Q = %v, where the pump still gives %v against the %v the line needs) the pump would run out; add a point or throttle", Fig(qb, Flow), Fig(hb, Length), Fig(sb, Length))
+		return OperatingResult{}, NewFieldError("pq", NoSolution).Because(ReasonPumpRunsOut, Fig(qb, Flow), Fig(hb, Length), Fig(sb, Length))
 	}
 	var evalErr error
 	f := func(q float64) float64 {
@@ -89,13 +89,13 @@ func OperatingPoint(c PumpCurve, b Balance) (OperatingResult, error) {
 		return OperatingResult{}, evalErr
 	}
 	if err != nil {
-		return OperatingResult{}, fieldErrorf("q", "no operating point found: %v", err)
+		return OperatingResult{}, NewFieldError("q", NotConverged)
 	}
 	h, _ := c.Head(q)
 	// Brent lands on a jump when the system curve is discontinuous (α or
 	// the friction factor switching at the laminar–turbulent limit).
 	if r := f(q); math.Abs(r) > 1e-6*(1+math.Abs(h)) {
-		return OperatingResult{}, fieldErrorf("q", "the curves do not meet cleanly: the system curve jumps across the laminar–turbulent limit near %v, where the pump curve crosses it", Fig(q, Flow))
+		return OperatingResult{}, NewFieldError("q", NoSolution).Because(ReasonRegimeJump, Fig(q, Flow))
 	}
 	orig.Unknown, orig.Q = SolvePumpHead, q
 	br, err := orig.Solve()

@@ -2,9 +2,9 @@ package calc
 
 import (
 	"errors"
+	"fmt"
 	"math"
 	"math/rand"
-	"strings"
 	"testing"
 )
 
@@ -128,7 +128,10 @@ func TestFitPumpErrors(t *testing.T) {
 	for _, tc := range tests {
 		_, err := FitPump(tc.pts)
 		var fe *FieldError
-		if !errors.As(err, &fe) || fe.Field != tc.field || !strings.Contains(fe.Msg, tc.point) {
+		item := 0
+		fmt.Sscanf(tc.point, "point %d", &item)
+		if !errors.As(err, &fe) || fe.Field != tc.field || fe.Item != item || fe.Kind == KindOther ||
+			(item == 0 && (fe.Min == nil || fe.Min.Value != 3 || fe.Max == nil || fe.Max.Value != 8)) {
 			t.Errorf("%s: got %v, want a *FieldError for %q mentioning %q", tc.name, err, tc.field, tc.point)
 		}
 	}
@@ -288,7 +291,7 @@ func TestOperatingPointOnBothCurves(t *testing.T) {
 		op, err := OperatingPoint(c, b)
 		if err != nil {
 			var fe *FieldError
-			if !errors.As(err, &fe) || !strings.Contains(fe.Msg, "do not meet") {
+			if !errors.As(err, &fe) || fe.Kind != NoSolution {
 				t.Fatalf("trial %d: %v", trial, err)
 			}
 			continue
@@ -323,12 +326,13 @@ func TestOperatingPointNoMeet(t *testing.T) {
 	high := Balance{Fluid: testLiquid, SitePressure: 101325, In: Point{P: 101325}, Out: Point{P: 101325, Z: 60}, Line: pmKLine(10, 0.1)}
 	_, err = OperatingPoint(c, high)
 	var fe *FieldError
-	if !errors.As(err, &fe) || fe.Field != "ph" || !strings.Contains(fe.Error(), "shut-off head 48.00 m is below the 60.00 m") {
+	if !errors.As(err, &fe) || fe.Field != "ph" || fe.Reason != ReasonShutOffBelowLine ||
+		len(fe.Figures) != 2 || math.Abs(fe.Figures[0].Value-48) > 1e-9 || math.Abs(fe.Figures[1].Value-60) > 0.01 {
 		t.Errorf("lift above shut-off: %v", err)
 	}
 	easy := Balance{Fluid: testLiquid, SitePressure: 101325, In: Point{P: 101325}, Out: Point{P: 101325, Z: 5}, Line: pmKLine(1, 0.3)}
 	_, err = OperatingPoint(c, easy)
-	if !errors.As(err, &fe) || fe.Field != "pq" || !strings.Contains(fe.Msg, "run out") {
+	if !errors.As(err, &fe) || fe.Field != "pq" || fe.Reason != ReasonPumpRunsOut {
 		t.Errorf("runs out: %v", err)
 	}
 	if _, err := OperatingPoint(PumpCurve{}, easy); !errors.As(err, &fe) || fe.Field != "pq" {

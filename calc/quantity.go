@@ -37,9 +37,10 @@ func (r PressureRef) String() string {
 // when defaultUnit is empty (except for Dimensionless). Temperatures below
 // absolute zero are refused.
 //
-// Every error is a *FieldError whose Field is field and whose message says
-// what kind of quantity was expected, with an example, e.g.
-// `d1: expected a length, e.g. 203 mm; got a pressure unit "kPa"`.
+// Every error is a *FieldError whose Field is field and whose Dim is dim:
+// its Kind says what is wrong (Missing, NotANumber, NotFinite, NoUnit,
+// UnknownUnit, WrongDimension, BelowLimit for a temperature below absolute
+// zero), Input the text at fault, e.g. `d1: wrong dimension input="kPa"`.
 func Parse(field, text string, dim Dimension, defaultUnit string) (float64, error) {
 	v, _, err := parseQuantity(field, text, dim, defaultUnit, false)
 	return v, err
@@ -55,28 +56,32 @@ func ParsePressure(field, text string, defaultUnit string) (pa float64, ref Pres
 }
 
 func parseQuantity(field, text string, dim Dimension, defaultUnit string, withRef bool) (float64, PressureRef, error) {
-	fail := func(format string, args ...any) (float64, PressureRef, error) {
-		return 0, RefUnspecified, fieldErrorf(field, "expected %s; "+format, append([]any{dim.expected()}, args...)...)
+	fail := func(k Kind, input string) (float64, PressureRef, error) {
+		e := NewFieldError(field, k).Typed(input)
+		e.Dim = dim
+		return 0, RefUnspecified, e
 	}
 	s := strings.TrimSpace(text)
 	if s == "" {
-		return fail("the value is empty")
+		return fail(Missing, "")
 	}
 	num, unitText := splitNumber(s)
 	if num == "" {
 		if isNonFinite(s) {
-			return fail("%s is not a finite number", quoteInput(s))
+			return fail(NotFinite, s)
 		}
-		return fail("%s is not a number", quoteInput(s))
+		return fail(NotANumber, s)
 	}
-	x, problem := parseDecimal(num)
-	if problem != "" {
-		return fail(problem, quoteInput(num))
+	x, k, why := parseDecimal(num)
+	if k != KindOther {
+		v, ref, err := fail(k, num)
+		err.(*FieldError).Reason = why
+		return v, ref, err
 	}
 	fromDefault := unitText == ""
 	if fromDefault {
 		if defaultUnit == "" && dim != Dimensionless {
-			return fail("add a unit to %s", quoteInput(num))
+			return fail(NoUnit, num)
 		}
 		unitText = defaultUnit
 	}
@@ -85,24 +90,29 @@ func parseQuantity(field, text string, dim Dimension, defaultUnit string, withRe
 		unitText, ref = splitPressureRef(unitText)
 	}
 	u, ok := lookupUnit(unitText)
+	var e *FieldError
 	switch {
 	case !ok && dim == Pressure && !withRef && hasPressureRef(unitText):
-		return fail("%s names gauge or absolute, which this input does not take", quoteInput(unitText))
+		e = NewFieldError(field, UnknownUnit).Because(ReasonPressureRef)
 	case !ok:
-		return fail("unknown unit %s (use %s)", quoteInput(unitText), symbolsFor(dim))
-	case u.Dim != dim && u.Dim == Dimensionless:
-		return fail("got %s, which is a plain-number unit", quoteInput(unitText))
+		e = NewFieldError(field, UnknownUnit).OneOf(symbolList(dim)...)
 	case u.Dim != dim && dim == Pressure && u.Dim == Length:
-		return fail("got a length unit %s (a water column as a pressure is written mH2O or ftH2O)", quoteInput(unitText))
+		e = NewFieldError(field, WrongDimension).Because(ReasonWaterColumn)
 	case u.Dim != dim:
-		return fail("got %s %s unit %s", dimInfos[u.Dim].article, u.Dim, quoteInput(unitText))
+		e = NewFieldError(field, WrongDimension)
+	}
+	if e != nil {
+		e.Input, e.Dim, e.UnitDim = unitText, dim, u.Dim
+		return 0, RefUnspecified, e
 	}
 	si := u.ToSI(x)
 	if math.IsInf(si, 0) || math.IsNaN(si) {
-		return fail("%s is out of range", quoteInput(s))
+		return fail(NotFinite, s)
 	}
 	if dim == Temperature && si < 0 {
-		return fail("%s is below absolute zero", quoteInput(s))
+		v, ref, err := fail(BelowLimit, s)
+		err.(*FieldError).Got(Fig(si, Temperature)).AtLeast(Fig(0, Temperature)).Because(ReasonAbsoluteZero)
+		return v, ref, err
 	}
 	return si, ref, nil
 }
@@ -149,33 +159,33 @@ func splitNumber(s string) (num, rest string) {
 	return b.String(), strings.TrimSpace(s[i:])
 }
 
-// parseDecimal parses a number from splitNumber. On failure it returns a
-// message format with one %s for the quoted number.
-func parseDecimal(num string) (float64, string) {
+// parseDecimal parses a number from splitNumber. On failure it returns the
+// kind of error (KindOther: none) and its reason.
+func parseDecimal(num string) (float64, Kind, Reason) {
 	mant, exp := num, ""
 	if k := strings.IndexAny(num, "eE"); k >= 0 {
 		mant, exp = num[:k], num[k:]
 	}
 	dots, commas := strings.Count(mant, "."), strings.Count(mant, ",")
 	if dots+commas > 1 {
-		return 0, "%s has more than one separator; write the digits without grouping, e.g. 1250.5"
+		return 0, NotANumber, ReasonGrouping
 	}
 	if commas == 1 {
 		k := strings.IndexByte(mant, ',')
 		whole, frac := strings.TrimPrefix(mant[:k], "-"), mant[k+1:]
 		if len(frac) == 3 && len(whole) >= 1 && len(whole) <= 3 && whole[0] != '0' {
-			return 0, "%s is ambiguous; write " + mant[:k] + frac + " (no grouping) or " + mant[:k] + "." + frac + " (decimal point)"
+			return 0, NotANumber, ReasonAmbiguousComma
 		}
 		mant = mant[:k] + "." + frac
 	}
 	x, err := strconv.ParseFloat(mant+exp, 64)
 	switch {
 	case errors.Is(err, strconv.ErrRange):
-		return 0, "%s is out of range"
+		return 0, NotFinite, ReasonNone
 	case err != nil:
-		return 0, "%s is not a number"
+		return 0, NotANumber, ReasonNone
 	}
-	return x, ""
+	return x, KindOther, ReasonNone
 }
 
 func isNonFinite(s string) bool {

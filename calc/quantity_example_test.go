@@ -17,7 +17,7 @@ func ExampleParse() {
 	// Output:
 	// 0.015141647136 m³/s <nil>
 	// 15.1 L/s
-	// d1: expected a length, e.g. 203 mm; got a pressure unit "kPa"
+	// d1: wrong dimension input="kPa"
 }
 
 func ExampleParsePressure() {

@@ -51,7 +51,7 @@ func AlphaParabolicNumeric(n int) float64 {
 // giving α ≈ 1.058. n must lie in 1…20 (field "n").
 func AlphaPowerLawN(n float64) (float64, error) {
 	if math.IsNaN(n) || n < 1 || n > 20 {
-		return 0, fieldErrorf("n", "power-law exponent n must be between 1 and 20 (n ≈ 7 is usual), got %g", n)
+		return 0, NewFieldError("n", OutOfRange).Got(Num(n)).Within(Num(1), Num(20)).Because(ReasonPowerLawN)
 	}
 	a := (n + 1) * (2*n + 1)
 	return a * a * a / (4 * n * n * n * n * (n + 3) * (2*n + 3)), nil
@@ -78,7 +78,7 @@ const (
 // (field "re"); outside, use AlphaPowerLawN with a chosen n, or α = 1.
 func AlphaPowerLaw(re float64) (alpha, n float64, err error) {
 	if math.IsNaN(re) || re <= 0 || re > alphaPowerLawReMax {
-		return 0, 0, fieldErrorf("re", "profile-based α needs a turbulent Reynolds number up to %g, got %g", alphaPowerLawReMax, re)
+		return 0, 0, NewFieldError("re", OutsideValidity).Got(Num(re)).AtMost(Num(alphaPowerLawReMax)).Because(ReasonProfileAlpha)
 	}
 	n = 7
 	for i := 0; i < 60; i++ {
@@ -95,11 +95,11 @@ func AlphaPowerLaw(re float64) (alpha, n float64, err error) {
 	}
 	reU := re * (n + 1) * (2*n + 1) / (2 * n * n)
 	if !(reU >= alphaPowerLawReUMin) {
-		return 0, 0, fieldErrorf("re", "profile-based α needs a centre-line Reynolds number of at least %g (mean Re about 1.6e4), got mean Re %g", alphaPowerLawReUMin, re)
+		return 0, 0, NewFieldError("re", OutsideValidity).Got(Num(re)).AtLeast(Num(alphaPowerLawReUMin)).Because(ReasonProfileAlpha)
 	}
 	alpha, err = AlphaPowerLawN(n)
 	if err != nil {
-		return 0, 0, fieldErrorf("re", "profile exponent n = %.3g from Re %g is outside 1…20", n, re)
+		return 0, 0, NewFieldError("re", OutsideValidity).Got(Num(re)).Within(Num(1), Num(20)).Because(ReasonProfileExponent, Num(n))
 	}
 	return alpha, n, nil
 }

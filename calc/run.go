@@ -1,7 +1,6 @@
 package calc
 
 import (
-	"fmt"
 	"math"
 )
 
@@ -133,7 +132,7 @@ func (r Run) lumped() Run {
 // method's range, re not positive) or "k" (bad ExtraK).
 func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 	if !frCheckNonNeg(r.ExtraK) {
-		return nil, 0, fieldErrorf("k", "extra loss coefficient must be zero or positive, got %g", r.ExtraK)
+		return nil, 0, NewFieldError("k", Negative).Got(Num(r.ExtraK))
 	}
 	sum := r.ExtraK
 	if r.extraK1 > 0 && !math.IsInf(re, 1) {
@@ -148,12 +147,12 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 			return nil, 0, err
 		}
 		if fc.Count < 0 {
-			return nil, 0, fieldErrorf("fit", "number of %q fittings must not be negative, got %d", fc.Key, fc.Count)
+			return nil, 0, NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(float64(fc.Count))).Because(ReasonFittingCount)
 		}
 		fk := FittingK{Key: f.Key, Count: fc.Count}
 		if fc.Override {
 			if !frCheckNonNeg(fc.K) {
-				return nil, 0, fieldErrorf("fit", "the K given for %q must be zero or positive, got %g", fc.Key, fc.K)
+				return nil, 0, NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(fc.K)).Because(ReasonFittingK)
 			}
 			fk.K, fk.Method, fk.Formula = fc.K, "given", "K = "+frG(fc.K)
 		} else {
@@ -166,7 +165,7 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 				k, err = f.kAt(r.Diameter, re, ft)
 			}
 			if err != nil {
-				return nil, 0, fieldErrorf("fit", "%s: %v", fc.Key, err)
+				return nil, 0, fittingErr(fc.Key, err)
 			}
 			fk.K, fk.Method, fk.Formula, fk.Source = k, f.Method.String(), f.Formula(r.Diameter), f.Source
 		}
@@ -190,55 +189,53 @@ func (r Run) anyFitting(ok func(Fitting) bool) bool {
 // validate checks the run and the liquid.
 func (r Run) validate(fl Fluid) error {
 	if !frCheckPositive(fl.Density) {
-		return fieldErrorf("rho", "liquid density must be positive, got %g", fl.Density)
+		return NewFieldError("rho", NotPositive).Got(Fig(fl.Density, Density))
 	}
 	if !frCheckPositive(fl.Viscosity) {
-		return fieldErrorf("mu", "liquid viscosity must be positive, got %g", fl.Viscosity)
+		return NewFieldError("mu", NotPositive).Got(Fig(fl.Viscosity, DynamicViscosity))
 	}
 	if !frCheckNonNeg(r.Length) {
-		return fieldErrorf("length", "pipe length must be zero or positive, got %g", r.Length)
+		return NewFieldError("length", Negative).Got(Fig(r.Length, Length))
 	}
 	if !frCheckPositive(r.Diameter) {
-		return fieldErrorf("d", "inside diameter must be positive, got %g", r.Diameter)
+		return NewFieldError("d", NotPositive).Got(Fig(r.Diameter, Length))
 	}
 	switch r.Method {
 	case MethodColebrook, MethodSwameeJain, MethodHaaland:
 		if !frCheckNonNeg(r.Roughness) {
-			return fieldErrorf("eps", "roughness must be zero or positive, got %g", r.Roughness)
+			return NewFieldError("eps", Negative).Got(Fig(r.Roughness, Length))
 		}
 		if rr := r.Roughness / r.Diameter; rr > FrictionRelRoughMax {
-			return fieldErrorf("eps", "relative roughness ε/D = %.3g is above %g, the edge of the Moody chart", rr, FrictionRelRoughMax)
+			return NewFieldError("eps", AboveLimit).Got(Num(rr)).AtMost(Num(FrictionRelRoughMax)).Because(ReasonRelativeRoughness)
 		}
 	case MethodHazenWilliams:
 		if r.HazenC == 0 {
-			return fieldErrorf("chw", "give the Hazen–Williams C factor (for example from the pipe material)")
+			return NewFieldError("chw", Missing)
 		}
 		if math.IsNaN(r.HazenC) || r.HazenC < HazenCMin || r.HazenC > HazenCMax {
-			return fieldErrorf("chw", "Hazen–Williams C must be between %g and %g, got %g", HazenCMin, HazenCMax, r.HazenC)
+			return NewFieldError("chw", OutOfRange).Got(Num(r.HazenC)).Within(Num(HazenCMin), Num(HazenCMax))
 		}
 		if nu := fl.KinematicViscosity(); nu < hazenNuMin || nu > hazenNuMax {
-			return fieldErrorf("method", "Hazen–Williams holds for water near ordinary temperatures (kinematic viscosity %g–%g mm²/s); this liquid has %.3g mm²/s: use Colebrook", hazenNuMin*1e6, hazenNuMax*1e6, nu*1e6)
+			return NewFieldError("method", OutsideValidity).Got(Fig(nu, KinematicViscosity)).Within(Fig(hazenNuMin, KinematicViscosity), Fig(hazenNuMax, KinematicViscosity)).Because(ReasonHazenViscosity)
 		}
 	default:
-		return fieldErrorf("method", "unknown friction method %d", int(r.Method))
+		return NewFieldError("method", UnknownChoice).Given(int(r.Method))
 	}
 	return nil
 }
 
 // turbulentFriction returns the Darcy f of the run's method at Reynolds
-// number re and velocity v, with any range warning.
-func (r Run) turbulentFriction(re, v, q float64) (float64, string, error) {
+// number re and velocity v; outside reports Swamee–Jain used outside its
+// fitted range.
+func (r Run) turbulentFriction(re, v, q float64) (f float64, outside bool, err error) {
 	rr := r.Roughness / r.Diameter
-	var f float64
-	var err error
-	warn := ""
 	switch r.Method {
 	case MethodColebrook:
 		f, err = Colebrook(re, rr)
 	case MethodSwameeJain:
 		f, err = SwameeJain(re, rr)
 		if err == nil && (re < swameeJainReMin || rr < swameeJainRRMin || rr > swameeJainRRMax) {
-			warn = fmt.Sprintf("Swamee–Jain is used outside its fitted range (Re 5000–1e8, ε/D 1e-6–0.01; here Re %.3g, ε/D %.3g): prefer Colebrook", re, rr)
+			outside = true
 		}
 	case MethodHaaland:
 		f, err = Haaland(re, rr)
@@ -248,13 +245,13 @@ func (r Run) turbulentFriction(re, v, q float64) (float64, string, error) {
 		hl, err = HazenWilliamsHeadLoss(q, r.Diameter, 1, r.HazenC)
 		f = hl * r.Diameter * 2 * StandardGravity / (v * v)
 		if err == nil && re > FrictionReMax {
-			err = fieldErrorf("re", "Reynolds number %.3g is above %g", re, FrictionReMax)
+			err = NewFieldError("re", AboveLimit).Got(Num(re)).AtMost(Num(FrictionReMax))
 		}
 	}
 	if err != nil {
-		return 0, "", fieldErrorf("q", "at this flow the Reynolds number is %.3g, outside the friction formula's range (%v)", re, err)
+		return 0, false, frictionRangeErr(re, err)
 	}
-	return f, warn, nil
+	return f, outside, nil
 }
 
 // Evaluate computes velocity, Reynolds number, regime, α, the Darcy
@@ -282,7 +279,7 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		return RunResult{}, err
 	}
 	if math.IsNaN(q) || math.IsInf(q, 0) || q < 0 {
-		return RunResult{}, fieldErrorf("q", "flow must be zero or positive, got %g", q)
+		return RunResult{}, NewFieldError("q", Negative).Got(Fig(q, Flow))
 	}
 	area := math.Pi * r.Diameter * r.Diameter / 4
 	v := q / area
@@ -295,11 +292,11 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	res := RunResult{SumK: sumK, Fittings: ks}
 	res.Velocity, res.Reynolds, res.Regime = v, re, RegimeOf(re)
 	if (r.Diameter < KDiameterMin || r.Diameter > KDiameterMax) && r.anyFitting(func(f Fitting) bool { return f.Method != KFixed }) {
-		res.Warnings = append(res.Warnings, warnf("d", "inside diameter %v is outside the sizes the fitting methods were published for (about %v–%v): their K values are extrapolated", Fig(r.Diameter, Length), Fig(KDiameterMin, Length), Fig(KDiameterMax, Length)))
+		res.Warnings = append(res.Warnings, Warn("d", CautionFittingSizes, Fig(r.Diameter, Length), Fig(KDiameterMin, Length), Fig(KDiameterMax, Length)))
 	}
 	if q == 0 {
 		res.Alpha = AlphaLaminar()
-		res.Warnings = append(res.Warnings, warnf("q", "no flow: all losses are zero"))
+		res.Warnings = append(res.Warnings, Warn("q", CautionNoFlow))
 		return res, nil
 	}
 	hv := v * v / (2 * StandardGravity)
@@ -312,10 +309,10 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		res.Alpha = AlphaLaminar()
 		res.Friction, res.FrictionLow, res.FrictionHigh = f, f, f
 		if r.Method == MethodHazenWilliams {
-			res.Warnings = append(res.Warnings, warnf("", "laminar flow: friction from 64/Re; Hazen–Williams does not apply"))
+			res.Warnings = append(res.Warnings, Warn("", CautionLaminarHazen))
 		}
 		if sumK > r.ExtraK && r.anyFitting(func(f Fitting) bool { return !f.ReDependent() }) {
-			res.Warnings = append(res.Warnings, warnf("", "laminar flow: the fitting K values (Crane TP-410 and fixed ones) are turbulent-flow figures; real fitting losses are higher"))
+			res.Warnings = append(res.Warnings, Warn("", CautionLaminarFittings))
 		}
 	case Transitional:
 		fLam := 64 / re
@@ -323,8 +320,8 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		if err != nil {
 			return RunResult{}, err
 		}
-		if w != "" {
-			res.Warnings = append(res.Warnings, warnf("", "%s", w))
+		if w {
+			res.Warnings = append(res.Warnings, Warn("", CautionSwameeJainRange, Num(re), Num(r.Roughness/r.Diameter)))
 		}
 		res.FrictionLow, res.FrictionHigh = math.Min(fLam, fTurb), math.Max(fLam, fTurb)
 		res.Friction = res.FrictionHigh
@@ -332,20 +329,20 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		if fLam > fTurb {
 			res.Alpha = AlphaLaminar()
 		}
-		res.Warnings = append(res.Warnings, warnf("", "transitional flow (Re %.0f, between 2300 and 4000): the loss lies between the laminar (64/Re) and turbulent bounds; the larger is used", re))
+		res.Warnings = append(res.Warnings, Warn("", CautionTransitionalRun, Num(re)))
 	default:
 		f, w, err := r.turbulentFriction(re, v, q)
 		if err != nil {
 			return RunResult{}, err
 		}
-		if w != "" {
-			res.Warnings = append(res.Warnings, warnf("", "%s", w))
+		if w {
+			res.Warnings = append(res.Warnings, Warn("", CautionSwameeJainRange, Num(re), Num(r.Roughness/r.Diameter)))
 		}
 		res.Alpha = AlphaTurbulent()
 		res.Friction, res.FrictionLow, res.FrictionHigh = f, f, f
 	}
 	if r.Method == MethodHazenWilliams && r.Diameter < hazenDMin && res.Regime != Laminar {
-		res.Warnings = append(res.Warnings, warnf("d", "Hazen–Williams is meant for pipes of about %v and larger: prefer Colebrook", Fig(hazenDMin, Length)))
+		res.Warnings = append(res.Warnings, Warn("d", CautionHazenSmallPipe, Fig(hazenDMin, Length)))
 	}
 	res.MajorLoss = res.Friction * ld * hv
 	res.TotalLoss = res.MajorLoss + res.MinorLoss
@@ -353,9 +350,9 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	res.TotalLossHigh = res.FrictionHigh*ld*hv + res.MinorLoss
 	switch {
 	case v < RunVelocityLow:
-		res.Warnings = append(res.Warnings, warnf("q", "velocity %v is low for a liquid line (usual range %v–%v, common practice)", Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
+		res.Warnings = append(res.Warnings, Warn("q", CautionVelocityLow, Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
 	case v > RunVelocityHigh:
-		res.Warnings = append(res.Warnings, warnf("q", "velocity %v is high for a liquid line (usual range %v–%v, common practice)", Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
+		res.Warnings = append(res.Warnings, Warn("q", CautionVelocityHigh, Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
 	}
 	return res, nil
 }

@@ -47,7 +47,7 @@ const (
 func Seawater(tK, pPa float64) (Fluid, error) {
 	switch {
 	case math.IsNaN(tK) || tK < SeawaterMinTemperature-waterTempSlack || tK > SeawaterMaxTemperature+waterTempSlack:
-		return Fluid{}, fieldErrorf("t", "seawater temperature must be between %v and %v; got %v", Fig(SeawaterMinTemperature, Temperature), Fig(SeawaterMaxTemperature, Temperature), Fig(tK, Temperature))
+		return Fluid{}, NewFieldError("t", OutsideValidity).Got(Fig(tK, Temperature)).Within(Fig(SeawaterMinTemperature, Temperature), Fig(SeawaterMaxTemperature, Temperature)).Because(ReasonSeawaterProperties)
 	case tK < SeawaterMinTemperature:
 		tK = SeawaterMinTemperature
 	case tK > SeawaterMaxTemperature:
@@ -55,7 +55,7 @@ func Seawater(tK, pPa float64) (Fluid, error) {
 	}
 	pv := if97SaturationPressureCore(tK)
 	if math.IsNaN(pPa) || pPa < pv || pPa > SeawaterMaxPressure {
-		return Fluid{}, fieldErrorf("p", "absolute pressure for seawater must be between its vapour pressure (%v at %v) and %v; got %v", Fig(pv, Pressure), Fig(tK, Temperature), Fig(SeawaterMaxPressure, Pressure), Fig(pPa, Pressure))
+		return Fluid{}, NewFieldError("p", OutOfRange).Got(Fig(pPa, Pressure)).Within(Fig(pv, Pressure), Fig(SeawaterMaxPressure, Pressure)).Because(ReasonBoils, Fig(tK, Temperature))
 	}
 	t := tK - 273.15 // °C
 	s := SeawaterSalinity

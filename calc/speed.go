@@ -22,16 +22,16 @@ import (
 // lowest speed that still reaches the flow on the data sheet.
 func SpeedForDuty(base PumpCurve, count int, parallel bool, q, h float64) (float64, error) {
 	if len(base.points) == 0 {
-		return 0, fieldErrorf("pq", "no pump curve: give the data-sheet points")
+		return 0, NewFieldError("pq", Missing)
 	}
 	if count < 1 || count > PumpMaxCombined {
-		return 0, fieldErrorf("pumps", "the number of identical pumps must be 1 to %d, got %d", PumpMaxCombined, count)
+		return 0, countErr("pumps", count, 1, PumpMaxCombined)
 	}
 	if math.IsNaN(q) || math.IsInf(q, 0) || !(q > 0) {
-		return 0, fieldErrorf("qsp", "give the flow to reach (above zero)")
+		return 0, NewFieldError("qsp", NotPositive)
 	}
 	if math.IsNaN(h) || math.IsInf(h, 0) {
-		return 0, fieldErrorf("qsp", "the head the line needs at that flow is not a finite number")
+		return 0, NewFieldError("qsp", NoSolution).Because(ReasonLineHeadNotFinite)
 	}
 	p, s := 1.0, 1.0
 	if parallel {
@@ -46,7 +46,7 @@ func SpeedForDuty(base PumpCurve, count int, parallel bool, q, h float64) (float
 		hi = math.Min(hi, q/(p*base.MinFlow()))
 	}
 	if !(lo <= hi) {
-		return 0, fieldErrorf("qsp", "no speed in range: %v is beyond what the data sheet covers between %g %% and %g %% speed", Fig(q, Flow), PumpSpeedRatioMin*100, PumpSpeedRatioMax*100)
+		return 0, NewFieldError("qsp", NoSolution).Because(ReasonSpeedBeyondSheet, Fig(q, Flow), Num(PumpSpeedRatioMin), Num(PumpSpeedRatioMax))
 	}
 	f := func(r float64) float64 {
 		x := math.Min(math.Max(q/(p*r), base.MinFlow()), base.MaxFlow())
@@ -56,11 +56,11 @@ func SpeedForDuty(base PumpCurve, count int, parallel bool, q, h float64) (float
 	r, err := brent(f, lo, hi, 1e-12)
 	switch {
 	case errors.Is(err, errNoBracket) && f(hi) < 0:
-		return 0, fieldErrorf("qsp", "no speed in range: even at %g %% speed the pumps give only %v at %v, and the line needs %v", hi*100, Fig(f(hi)+h, Length), Fig(q, Flow), Fig(h, Length))
+		return 0, NewFieldError("qsp", NoSolution).Because(ReasonSpeedTopShort, Num(hi), Fig(f(hi)+h, Length), Fig(q, Flow), Fig(h, Length))
 	case errors.Is(err, errNoBracket):
-		return 0, fieldErrorf("qsp", "no speed in range: at %.4g %% speed, the lowest at which the data sheet still reaches %v, the pumps already give %v and the line needs only %v (throttling or a smaller impeller, not speed, would meet this duty)", lo*100, Fig(q, Flow), Fig(f(lo)+h, Length), Fig(h, Length))
+		return 0, NewFieldError("qsp", NoSolution).Because(ReasonSpeedBottomOver, Num(lo), Fig(q, Flow), Fig(f(lo)+h, Length), Fig(h, Length))
 	case err != nil:
-		return 0, fieldErrorf("qsp", "the speed for this duty could not be found: %v", err)
+		return 0, NewFieldError("qsp", NotConverged)
 	}
 	return r, nil
 }
@@ -75,10 +75,10 @@ func SpeedForDuty(base PumpCurve, count int, parallel bool, q, h float64) (float
 // in range needs as much.
 func FlowForHead(b Balance, h, qGuess float64) (float64, error) {
 	if math.IsNaN(h) || math.IsInf(h, 0) {
-		return 0, fieldErrorf("hsp", "give the head to reach as a finite length")
+		return 0, NewFieldError("hsp", NotFinite)
 	}
 	if !(qGuess > 0) || math.IsInf(qGuess, 0) {
-		return 0, fieldErrorf("hsp", "no flow scale to search from: give the data sheet")
+		return 0, NewFieldError("hsp", Missing).With("pq")
 	}
 	b, err := b.forSystem()
 	if err != nil {
@@ -96,17 +96,17 @@ func FlowForHead(b Balance, h, qGuess float64) (float64, error) {
 	if f0 := f(0); evalErr != nil {
 		return 0, evalErr
 	} else if f0 > 0 {
-		return 0, fieldErrorf("hsp", "the line needs %v even at zero flow (levels and pressures alone): a head of %v moves no liquid", Fig(f0+h, Length), Fig(h, Length))
+		return 0, NewFieldError("hsp", NoSolution).Because(ReasonHeadBelowStatic, Fig(f0+h, Length), Fig(h, Length))
 	}
 	hi := qGuess
 	for i := 0; f(hi) < 0 || evalErr != nil; i++ {
 		if evalErr != nil {
 			// The line cannot be worked out at such a flow (beyond the
 			// friction formulas' range): no duty in range.
-			return 0, fieldErrorf("hsp", "the line needs less than %v at every flow it can be worked out for (up to %v): no duty at that head in range", Fig(h, Length), Fig(hi, Flow))
+			return 0, NewFieldError("hsp", NoSolution).Because(ReasonHeadNeverReached, Fig(h, Length), Fig(hi, Flow))
 		}
 		if i == 10 {
-			return 0, fieldErrorf("hsp", "the line needs less than %v at every flow up to %v: no duty at that head in range", Fig(h, Length), Fig(hi, Flow))
+			return 0, NewFieldError("hsp", NoSolution).Because(ReasonHeadNeverReached, Fig(h, Length), Fig(hi, Flow))
 		}
 		hi *= 2
 	}
@@ -115,7 +115,7 @@ func FlowForHead(b Balance, h, qGuess float64) (float64, error) {
 		return 0, evalErr
 	}
 	if err != nil {
-		return 0, fieldErrorf("hsp", "the flow at that head could not be found: %v", err)
+		return 0, NewFieldError("hsp", NotConverged)
 	}
 	return q, nil
 }

@@ -1,9 +1,9 @@
 package calc
 
 import (
+	"errors"
 	"fmt"
 	"math"
-	"strings"
 	"testing"
 )
 
@@ -55,17 +55,22 @@ func TestSpeedForDuty(t *testing.T) {
 	// lowest speed that still reaches the flow.
 	for _, tc := range []struct {
 		q, h float64
-		msg  string
+		kind Kind
+		why  Reason
 	}{
-		{0.03, 1000, "no speed in range: even at 200 %"},
-		{0.03, 0.01, "no speed in range: at"},
-		{1, 10, "no speed in range"},
-		{0, 10, "flow to reach"},
-		{0.03, math.NaN(), "not a finite number"},
+		{0.03, 1000, NoSolution, ReasonSpeedTopShort},
+		{0.03, 0.01, NoSolution, ReasonSpeedBottomOver},
+		{1, 10, NoSolution, ReasonSpeedBeyondSheet},
+		{0, 10, NotPositive, ReasonNone},
+		{0.03, math.NaN(), NoSolution, ReasonLineHeadNotFinite},
 	} {
 		_, err := SpeedForDuty(base, 1, false, tc.q, tc.h)
-		if err == nil || !strings.Contains(err.Error(), tc.msg) || !strings.HasPrefix(err.Error(), "qsp:") {
-			t.Errorf("q %g, h %g: error %v, want %q on qsp", tc.q, tc.h, err, tc.msg)
+		var fe *FieldError
+		if !errors.As(err, &fe) || fe.Kind != tc.kind || fe.Reason != tc.why || fe.Field != "qsp" {
+			t.Errorf("q %g, h %g: error %v, want %v (%v) on qsp", tc.q, tc.h, err, tc.kind, tc.why)
+		}
+		if tc.why == ReasonSpeedTopShort && (len(fe.Figures) != 4 || fe.Figures[0].Value != PumpSpeedRatioMax) {
+			t.Errorf("q %g, h %g: figures %v, want the top speed first", tc.q, tc.h, fe.Figures)
 		}
 	}
 }
@@ -90,15 +95,18 @@ func TestFlowForHead(t *testing.T) {
 	}
 	for _, tc := range []struct {
 		h, guess float64
-		msg      string
+		kind     Kind
+		why      Reason
 	}{
-		{15, 0.04, "moves no liquid"},
-		{1e9, 0.04, "no duty at that head"},
-		{math.NaN(), 0.04, "finite"},
-		{30, 0, "no flow scale"},
+		{15, 0.04, NoSolution, ReasonHeadBelowStatic},
+		{1e9, 0.04, NoSolution, ReasonHeadNeverReached},
+		{math.NaN(), 0.04, NotFinite, ReasonNone},
+		{30, 0, Missing, ReasonNone},
 	} {
-		if _, err := FlowForHead(b, tc.h, tc.guess); err == nil || !strings.Contains(err.Error(), tc.msg) || !strings.HasPrefix(err.Error(), "hsp:") {
-			t.Errorf("h %g: error %v, want %q on hsp", tc.h, err, tc.msg)
+		_, err := FlowForHead(b, tc.h, tc.guess)
+		var fe *FieldError
+		if !errors.As(err, &fe) || fe.Kind != tc.kind || fe.Reason != tc.why || fe.Field != "hsp" {
+			t.Errorf("h %g: error %v, want %v (%v) on hsp", tc.h, err, tc.kind, tc.why)
 		}
 	}
 }

@@ -27,12 +27,12 @@ func SystemCurve(b Balance, flows []float64) ([]CurvePoint, error) {
 		return nil, err
 	}
 	if len(flows) == 0 {
-		return nil, fieldErrorf("q", "give at least one flow for the system curve")
+		return nil, NewFieldError("q", TooFew).AtLeast(Num(1))
 	}
 	out := make([]CurvePoint, len(flows))
 	for i, q := range flows {
 		if math.IsNaN(q) || math.IsInf(q, 0) || q < 0 {
-			return nil, fieldErrorf("q", "the flows of a system curve must be zero or positive, got %g", q)
+			return nil, NewFieldError("q", Negative).Got(Fig(q, Flow))
 		}
 		h, tr, err := b.systemHead(q)
 		if err != nil {

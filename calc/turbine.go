@@ -26,7 +26,7 @@ type TurbineResult struct {
 // checkTurbineEff validates a turbine efficiency (field "etat").
 func checkTurbineEff(eff float64) error {
 	if math.IsNaN(eff) || !(eff > 0 && eff <= 1) {
-		return fieldErrorf("etat", "the turbine efficiency must be above 0 and at most 100 %%, got %g %%", eff*100)
+		return NewFieldError("etat", OutOfRange).Got(Num(eff)).Within(Num(0), Num(1)).Because(ReasonEfficiency)
 	}
 	return nil
 }
@@ -53,9 +53,9 @@ func Turbine(b Balance, eff float64) (TurbineResult, error) {
 	r.HydraulicPower = rhog * r.Q * r.NetHead
 	r.Power = r.HydraulicPower * eff
 	if r.GrossHead <= 0 {
-		r.Warnings = append(r.Warnings, warnf("z1", "the gross head is %v: point 1 does not lie above point 2 in head, so there is nothing for a turbine to take", Fig(r.GrossHead, Length)))
+		r.Warnings = append(r.Warnings, Warn("z1", CautionNoGrossHead, Fig(r.GrossHead, Length)))
 	} else if r.NetHead <= 0 {
-		r.Warnings = append(r.Warnings, warnf("q", "at this flow the line's losses (%v) and the exit velocity head use up the whole gross head (%v): no output; lower the flow or enlarge the pipe", Fig(r.Losses, Length), Fig(r.GrossHead, Length)))
+		r.Warnings = append(r.Warnings, Warn("q", CautionNoOutput, Fig(r.Losses, Length), Fig(r.GrossHead, Length)))
 	}
 	return r, nil
 }
@@ -100,7 +100,7 @@ func BestTurbineFlow(b Balance, eff, qmax float64) (TurbineResult, error) {
 		return TurbineResult{}, err
 	}
 	if math.IsNaN(qmax) || math.IsInf(qmax, 0) || qmax < 0 {
-		return TurbineResult{}, fieldErrorf("q", "the largest flow to search must be zero (automatic) or positive, got %g", qmax)
+		return TurbineResult{}, NewFieldError("q", Negative).Got(Fig(qmax, Flow)).Because(ReasonSearchLimit)
 	}
 	orig := b
 	b.Unknown, b.PumpHead, b.TurbineHead, b.Q = SolveTurbineHead, 0, 0, 0
@@ -110,7 +110,7 @@ func BestTurbineFlow(b Balance, eff, qmax float64) (TurbineResult, error) {
 	b = b.lumped()
 	rhog := b.Fluid.Density * StandardGravity
 	if gross := (b.In.P-b.Out.P)/rhog + b.In.Z - b.Out.Z; gross <= 0 {
-		return TurbineResult{}, fieldErrorf("z1", "the gross head is %v: point 1 must lie above point 2 in head for a turbine to give output", Fig(gross, Length))
+		return TurbineResult{}, NewFieldError("z1", NoSolution).Got(Fig(gross, Length)).Because(ReasonNoGrossHead)
 	}
 	var evalErr error
 	net := func(q float64) float64 {
@@ -135,7 +135,7 @@ func BestTurbineFlow(b Balance, eff, qmax float64) (TurbineResult, error) {
 			dmin = math.Min(dmin, b.Line.minDiameter())
 		}
 		if math.IsInf(dmin, 1) {
-			return TurbineResult{}, fieldErrorf("q", "the output keeps rising with flow: the line has no pipe or diameters to limit it; give a pipe or the largest flow")
+			return TurbineResult{}, NewFieldError("q", NoSolution).Because(ReasonOutputUnbound)
 		}
 		qbig := 30 * math.Pi * dmin * dmin / 4 // 30 m/s in the narrowest pipe
 		hb := net(qbig)
@@ -143,14 +143,14 @@ func BestTurbineFlow(b Balance, eff, qmax float64) (TurbineResult, error) {
 			return TurbineResult{}, evalErr
 		}
 		if hb > 0 {
-			return TurbineResult{}, fieldErrorf("q", "even at %v (%v in the narrowest pipe) the line leaves head for the turbine: give the largest flow to search", Fig(qbig, Flow), Fig(30, Velocity))
+			return TurbineResult{}, NewFieldError("q", NoSolution).Because(ReasonTurbineNoZero, Fig(qbig, Flow), Fig(30, Velocity))
 		}
 		q0, err := brent(net, qbig*1e-9, qbig, qbig*1e-13)
 		if evalErr != nil {
 			return TurbineResult{}, evalErr
 		}
 		if err != nil {
-			return TurbineResult{}, fieldErrorf("q", "cannot find the flow at which the net head vanishes: %v", err)
+			return TurbineResult{}, NewFieldError("q", NotConverged)
 		}
 		qmax = q0
 	}

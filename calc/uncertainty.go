@@ -72,11 +72,11 @@ func (fc FieldCheck) Uncertainty(fl Fluid, a Accuracy) (FieldBands, error) {
 	}{{"gcs", a.ClassS}, {"gss", a.SpanS}, {"gcd", a.ClassD}, {"gsd", a.SpanD},
 		{"uqm", a.Flow}, {"upin", a.Power}, {"uz", a.Height}} {
 		if math.IsNaN(c.v) || math.IsInf(c.v, 0) || c.v < 0 {
-			return FieldBands{}, fieldErrorf(c.field, "an accuracy must be zero or positive, got %g", c.v)
+			return FieldBands{}, NewFieldError(c.field, Negative).Got(Num(c.v))
 		}
 	}
 	if !(fl.Density > 0) || !(fc.Q > 0) {
-		return FieldBands{}, fieldErrorf("qm", "the field check has no flow to work from")
+		return FieldBands{}, NewFieldError("qm", NotPositive)
 	}
 	rhog := fl.Density * StandardGravity
 	up := func(class, span float64) float64 { return class * span / rhog }

@@ -3,7 +3,6 @@ package calc
 import (
 	"fmt"
 	"math"
-	"strings"
 	"testing"
 )
 
@@ -60,7 +59,7 @@ func TestUncertainty(t *testing.T) {
 		t.Errorf("power meter only: %+v", u)
 	}
 	for _, a := range []Accuracy{{ClassS: -0.01}, {SpanD: math.NaN()}, {Flow: math.Inf(1)}, {Height: -1}} {
-		if _, err := fc.Uncertainty(fl, a); err == nil || !strings.Contains(err.Error(), "zero or positive") {
+		if _, err := fc.Uncertainty(fl, a); err == nil || err.(*FieldError).Kind != Negative {
 			t.Errorf("%+v: error %v", a, err)
 		}
 	}

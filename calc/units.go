@@ -192,7 +192,7 @@ func LookupUnit(sym string) (Unit, error) {
 	if u, ok := lookupUnit(sym); ok {
 		return u, nil
 	}
-	return Unit{}, fieldErrorf("unit", "unknown unit %s", quoteInput(sym))
+	return Unit{}, NewFieldError("unit", UnknownUnit).Typed(sym)
 }
 
 func lookupUnit(sym string) (Unit, bool) {
@@ -230,13 +230,19 @@ func DefaultUnit(dim Dimension, us bool) Unit {
 	return Unit{}
 }
 
-// symbolsFor lists the symbols of a dimension for error messages.
-func symbolsFor(dim Dimension) string {
+// symbolList lists the symbols of a dimension, for an error's choices.
+func symbolList(dim Dimension) []string {
 	var s []string
 	for _, u := range UnitsFor(dim) {
 		if u.Symbol != "" {
 			s = append(s, u.Symbol)
 		}
 	}
-	return strings.Join(s, ", ")
+	return s
 }
+
+// symbolsFor lists the symbols of a dimension as text.
+//
+// Deprecated: errors carry symbolList as data; kept for code written
+// against it.
+func symbolsFor(dim Dimension) string { return strings.Join(symbolList(dim), ", ") }

@@ -95,10 +95,10 @@ func waterViscosityCore(tK, rho float64) float64 {
 // *FieldError naming "t" or "rho".
 func WaterViscosity(tK, rho float64) (float64, error) {
 	if math.IsNaN(tK) || tK < viscTmin || tK > viscTmax {
-		return 0, fieldErrorf("t", "temperature must be between %v and %v for the IAPWS 2008 viscosity formulation; got %v", Fig(viscTmin, Temperature), Fig(viscTmax, Temperature), Fig(tK, Temperature))
+		return 0, NewFieldError("t", OutsideValidity).Got(Fig(tK, Temperature)).Within(Fig(viscTmin, Temperature), Fig(viscTmax, Temperature)).Because(ReasonIAPWSViscosity)
 	}
 	if math.IsNaN(rho) || math.IsInf(rho, 0) || rho <= 0 {
-		return 0, fieldErrorf("rho", "density must be a positive finite number in kg/m³; got %g", rho)
+		return 0, NewFieldError("rho", NotPositive).Got(Fig(rho, Density))
 	}
 	return waterViscosityCore(tK, rho), nil
 }

@@ -36,7 +36,7 @@ const (
 func Water(tK, pPa float64) (Fluid, error) {
 	switch {
 	case math.IsNaN(tK) || tK < WaterMinTemperature-waterTempSlack || tK > WaterMaxTemperature+waterTempSlack:
-		return Fluid{}, fieldErrorf("t", "water temperature must be between %v and %v; got %v", Fig(WaterMinTemperature, Temperature), Fig(WaterMaxTemperature, Temperature), Fig(tK, Temperature))
+		return Fluid{}, NewFieldError("t", OutsideValidity).Got(Fig(tK, Temperature)).Within(Fig(WaterMinTemperature, Temperature), Fig(WaterMaxTemperature, Temperature)).Because(ReasonWaterProperties)
 	case tK < WaterMinTemperature:
 		tK = WaterMinTemperature
 	case tK > WaterMaxTemperature:
@@ -45,9 +45,9 @@ func Water(tK, pPa float64) (Fluid, error) {
 	ps := if97SaturationPressureCore(tK)
 	if math.IsNaN(pPa) || pPa < ps || pPa > WaterMaxPressure {
 		if !math.IsNaN(pPa) && pPa < ps {
-			return Fluid{}, fieldErrorf("p", "absolute pressure %v is below the vapour pressure of water at %v (%v): the water would boil; valid range is %v to %v absolute", Fig(pPa, Pressure), Fig(tK, Temperature), Fig(ps, Pressure), Fig(ps, Pressure), Fig(WaterMaxPressure, Pressure))
+			return Fluid{}, NewFieldError("p", BelowLimit).Got(Fig(pPa, Pressure)).Within(Fig(ps, Pressure), Fig(WaterMaxPressure, Pressure)).Because(ReasonBoils, Fig(tK, Temperature))
 		}
-		return Fluid{}, fieldErrorf("p", "absolute pressure must be between the vapour pressure (%v at %v) and %v; got %v", Fig(ps, Pressure), Fig(tK, Temperature), Fig(WaterMaxPressure, Pressure), Fig(pPa, Pressure))
+		return Fluid{}, NewFieldError("p", OutOfRange).Got(Fig(pPa, Pressure)).Within(Fig(ps, Pressure), Fig(WaterMaxPressure, Pressure)).Because(ReasonBoils, Fig(tK, Temperature))
 	}
 	rho := if97Region1DensityCore(tK, pPa)
 	return Fluid{

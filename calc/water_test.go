@@ -221,7 +221,7 @@ func ExampleWater() {
 	// viscosity 1.05268 mPa·s
 	// vapour pressure 2064.7 Pa
 	// kinematic viscosity 1.0542e-06 m²/s
-	// p: absolute pressure 1.500 kPa is below the vapour pressure of water at 18.00 °C (2.065 kPa): the water would boil; valid range is 2.065 kPa to 10000 kPa absolute
+	// p: below limit (boils) value=1.500 kPa min=2.065 kPa max=10000 kPa f0=18.00 °C
 }
 
 func BenchmarkWater(b *testing.B) {

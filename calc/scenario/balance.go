@@ -1,7 +1,6 @@
 package scenario
 
 import (
-	"fmt"
 	"math"
 	"strings"
 
@@ -50,7 +49,7 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 	case "pl":
 		b.Alpha = calc.AlphaProfile
 	default:
-		e.fail("alpha", "alpha: use auto, 1 or pl")
+		e.bad("alpha", calc.UnknownChoice).Typed(e.s.Get("alpha"))
 		return
 	}
 	ok := true
@@ -74,7 +73,7 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 	switch {
 	case line != nil:
 		if solve == calc.SolveFrictionHead {
-			e.fail("solve", "solve: the friction head is computed from the line's segments; solve for another quantity, or remove the segments to solve for hf")
+			e.bad("solve", calc.Inconsistent).With("hf").Because(calc.ReasonHfFromSegments)
 			return
 		}
 		b.Line = line
@@ -85,14 +84,14 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 		if e.s.Has("pafter") {
 			n, err := number("pafter", e.s.Get("pafter"))
 			if err != nil || n != math.Trunc(n) || n < 0 || int(n) > len(line.Segments) {
-				e.fail("pafter", fmt.Sprintf("pafter: the number of the segment the pump follows, 0 (at point 1) to %d", len(line.Segments)))
+				e.bad("pafter", calc.OutOfRange).Typed(e.s.Get("pafter")).Within(calc.Num(0), calc.Num(float64(len(line.Segments)))).Because(calc.ReasonPumpAfter)
 				return
 			}
 			b.PumpAfter = int(n)
 		}
 	case run != nil:
 		if solve == calc.SolveFrictionHead {
-			e.fail("solve", "solve: the friction head is computed from the pipe run; solve for another quantity, or remove the run's length l to solve for hf")
+			e.bad("solve", calc.Inconsistent).With("hf").Because(calc.ReasonHfFromRun)
 			return
 		}
 		spec := e.runSpec
@@ -135,7 +134,7 @@ func (e *eval) pressure(param string, unknown, solve calc.Unknown, ok *bool) flo
 	}
 	text := e.s.Get(param)
 	if strings.TrimSpace(text) == "" {
-		e.fail(param, missingMsg(param))
+		e.bad(param, calc.Missing)
 		*ok = false
 		return 0
 	}
@@ -171,7 +170,7 @@ func (e *eval) absolute(refParam string, ref calc.PressureRef) (bool, bool) {
 	case "a":
 		return true, true
 	}
-	e.fail(refParam, refParam+": use g (gauge) or a (absolute)")
+	e.bad(refParam, calc.UnknownChoice).Typed(e.s.Get(refParam))
 	return false, false
 }
 
@@ -181,7 +180,7 @@ func (e *eval) point(n string, p *calc.Point, ok *bool) {
 	case e.s.Has("d" + n):
 		d, good := e.quantity("d" + n)
 		if good && !(d > 0) {
-			e.fail("d"+n, "d"+n+": the diameter must be above zero")
+			e.bad("d"+n, calc.NotPositive).Got(calc.Fig(d, calc.Length))
 			good = false
 		}
 		*ok = *ok && good

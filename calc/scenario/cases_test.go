@@ -41,14 +41,14 @@ func observable(r Result, key string) (float64, string, error) {
 		if !ok {
 			return 0, "", fmt.Errorf("no error on %s (errors: %v)", p, r.Errors)
 		}
-		return 0, m.Error(), nil
+		return 0, worded(m, r.US), nil
 	}
 	if strings.HasPrefix(key, "warning.") {
 		p := strings.TrimPrefix(key, "warning.")
 		var all []string
 		for _, w := range r.Warnings {
 			if w.Param == p {
-				all = append(all, w.String())
+				all = append(all, warningWords(w, r.US))
 			}
 		}
 		if len(all) == 0 {

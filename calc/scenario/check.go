@@ -1,7 +1,6 @@
 package scenario
 
 import (
-	"fmt"
 	"strings"
 
 	"fieldhead/calc"
@@ -27,7 +26,7 @@ func (e *eval) checkAll() {
 			e.list(name)
 		case KindChoice:
 			if cs := Choices(name); len(cs) > 0 && !oneOf(text, cs) {
-				e.fail(name, fmt.Sprintf("%q is not one of the choices (%s)", truncate(text), choiceList(cs)))
+				e.bad(name, calc.UnknownChoice).Typed(text)
 			}
 		case KindNumber:
 			if _, err := number(name, text); err != nil {

@@ -18,7 +18,7 @@ func (e *eval) convert() {
 		if herr != nil {
 			var fe *calc.FieldError
 			if errors.As(err, &fe) {
-				fe.Msg += " — or a head of the liquid in m or ft"
+				fe.Reason = calc.ReasonOrHead
 			}
 			e.failErr("cv", err)
 			return
@@ -76,6 +76,6 @@ func (e *eval) convert() {
 	row("conventional water column", "inH2O", gauge)
 	e.res.Convert = cr
 	if abs <= 0 {
-		e.warn("cv", "convert", "this is at or below absolute zero pressure, which no liquid can sustain: check the value and whether it is gauge or absolute")
+		e.warnCalc("convert", calc.Warn("cv", calc.CautionConvertBelowZero))
 	}
 }

@@ -2,7 +2,6 @@ package scenario
 
 import (
 	"errors"
-	"fmt"
 	"math"
 	"strconv"
 	"strings"
@@ -34,11 +33,11 @@ func Evaluate(s Scenario) Result {
 	case "us":
 		e.us = true
 	default:
-		e.fail("units", fmt.Sprintf("%q is not a unit system; use si or us", u))
+		e.bad("units", calc.UnknownChoice).Typed(u)
 	}
 	res.US = e.us
 	if n := s.Get("name"); n != "" && (!printable(n) || len(n) > 200) {
-		e.fail("name", "the title must be plain text of at most 200 characters")
+		e.bad("name", calc.AboveLimit).AtMost(calc.Num(200)).Because(calc.ReasonTitle)
 	}
 
 	e.checkAll()
@@ -87,10 +86,44 @@ func oneOf(v string, cs []Choice) bool {
 	return false
 }
 
-// fail records the first problem with a parameter; msg may start with
-// the parameter's name ("q: …"), which is dropped.
+// bad records a problem of kind k with a parameter (the first one
+// recorded for it is kept) and returns it for its data to be added.
+func (e *eval) bad(param string, k calc.Kind) *calc.FieldError {
+	fe := calc.NewFieldError(param, k)
+	e.record(fe)
+	return fe
+}
+
+// fail records a problem with a parameter as a sentence (KindOther); msg
+// may start with the parameter's name ("q: …"), which is dropped.
+//
+// Deprecated: use bad with a Kind (worded in present/errors.go); kept so
+// that code written against it still compiles.
 func (e *eval) fail(param, msg string) {
-	e.record(&calc.FieldError{Field: param, Msg: strings.TrimPrefix(msg, param+": ")})
+	e.record(&calc.FieldError{Field: param, Kind: calc.KindOther, Msg: strings.TrimPrefix(msg, param+": ")})
+}
+
+// warn records a warning as a sentence.
+//
+// Deprecated: use warnCalc with a calc.Caution (worded in
+// present/errors.go); kept so that code written against it still compiles.
+func (e *eval) warn(param, topic, text string) {
+	e.res.Warnings = append(e.res.Warnings, Warning{Param: param, Topic: topic, Text: text})
+}
+
+// recordOther records an error that is not a *calc.FieldError (none is
+// expected) under param, its Go text kept as a last resort.
+func (e *eval) recordOther(param string, err error) {
+	e.record(&calc.FieldError{Field: param, Kind: calc.KindOther, Msg: err.Error()})
+}
+
+// atItem marks err as about the 1-based item i of a list.
+func atItem(err error, i int) error {
+	var fe *calc.FieldError
+	if errors.As(err, &fe) {
+		fe.Item = i
+	}
+	return err
 }
 
 // record keeps the first problem recorded for its field.
@@ -106,7 +139,7 @@ func (e *eval) record(fe *calc.FieldError) {
 func (e *eval) failErr(param string, err error) {
 	var fe *calc.FieldError
 	if !errors.As(err, &fe) {
-		e.fail(param, err.Error())
+		e.recordOther(param, err)
 		return
 	}
 	c := *fe
@@ -129,7 +162,7 @@ func (e *eval) failAt(param string, err error) {
 		e.record(&c)
 		return
 	}
-	e.fail(param, err.Error())
+	e.recordOther(param, err)
 }
 
 // linkName is the link's name of a field calc names in a run ("length"
@@ -146,10 +179,6 @@ func linkName(calcField string) string {
 	return ""
 }
 
-func (e *eval) warn(param, topic, text string) {
-	e.res.Warnings = append(e.res.Warnings, Warning{Param: param, Topic: topic, Text: text})
-}
-
 // warnCalc records a warning from calc, under its segment's parameter
 // when it names a segment.
 func (e *eval) warnCalc(topic string, w calc.Warning) {
@@ -157,7 +186,7 @@ func (e *eval) warnCalc(topic string, w calc.Warning) {
 	if f := linkName(w.Field); w.Segment > 0 && f != "" {
 		p = SegmentParam(w.Segment, f)
 	}
-	e.res.Warnings = append(e.res.Warnings, Warning{Param: p, Topic: topic, Segment: w.Segment, Text: w.Text, Figures: w.Figures})
+	e.res.Warnings = append(e.res.Warnings, Warning{Param: p, Topic: topic, Segment: w.Segment, Code: w.Code, Text: w.Text, Figures: w.Figures})
 }
 
 // quantity parses a dimensioned parameter into SI. A missing value is an
@@ -166,7 +195,7 @@ func (e *eval) quantity(param string) (float64, bool) {
 	p, _, _ := Lookup(param)
 	text := e.s.Get(param)
 	if strings.TrimSpace(text) == "" {
-		e.fail(param, p.Missing)
+		e.bad(param, calc.Missing)
 		return 0, false
 	}
 	v, err := calc.Parse(param, text, p.Dim, DefaultUnit(param, e.us))
@@ -190,7 +219,7 @@ func (e *eval) site() {
 	case e.s.Has("baro"):
 		if p, ok := e.quantity("baro"); ok {
 			if !(p > 0) {
-				e.fail("baro", "baro: a barometer reading is an absolute pressure and must be above zero")
+				e.bad("baro", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
 				return
 			}
 			e.res.SitePressure, e.res.SiteFrom = p, SiteBarometer
@@ -206,7 +235,7 @@ func (e *eval) site() {
 		}
 	default:
 		e.res.SitePressure, e.res.SiteFrom = seaLevel, SiteStandard
-		e.warnCalc("site", calc.Warnf("alt", "no site altitude or barometer reading: the standard sea-level pressure %v absolute is used for gauge ↔ absolute and the vapour-pressure check", calc.Fig(seaLevel, calc.Pressure)))
+		e.warnCalc("site", calc.Warn("alt", calc.CautionStandardAtmosphere, calc.Fig(seaLevel, calc.Pressure)))
 	}
 }
 
@@ -271,7 +300,7 @@ func (e *eval) liquid() {
 		}
 		e.res.Fluid, e.res.LiquidFrom = &fl, LiquidTypedProps
 	default:
-		e.fail("liq", fmt.Sprintf("liq: %q is not a liquid Fieldhead knows; use water, seawater, eg, pg or custom", liq))
+		e.bad("liq", calc.UnknownChoice).Typed(liq)
 	}
 }
 
@@ -357,7 +386,7 @@ func number(param, text string) (float64, error) {
 	t := strings.ReplaceAll(strings.TrimSpace(text), ",", ".")
 	v, err := strconv.ParseFloat(t, 64)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
-		return 0, fmt.Errorf("%s: expected a plain number, got %q", param, text)
+		return 0, calc.NewFieldError(param, calc.NotANumber).Typed(text)
 	}
 	return v, nil
 }

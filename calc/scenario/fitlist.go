@@ -1,7 +1,6 @@
 package scenario
 
 import (
-	"fmt"
 	"math"
 	"strconv"
 	"strings"
@@ -38,21 +37,21 @@ func ParseFittings(text string) ([]calc.FittingCount, error) {
 		}
 		key = strings.ToLower(key)
 		if seen[key] {
-			return nil, &calc.FieldError{Field: "fit", Msg: fmt.Sprintf("%q is listed twice; give one count", key)}
+			return nil, calc.NewFieldError("fit", calc.Inconsistent).Typed(key).Because(calc.ReasonListedTwice)
 		}
 		seen[key] = true
 		fc := calc.FittingCount{Key: key, Count: 1}
 		if hasCount {
 			c, err := strconv.Atoi(strings.TrimSpace(cnt))
 			if err != nil || c < 0 || c > fitMaxCount {
-				return nil, &calc.FieldError{Field: "fit", Msg: fmt.Sprintf("the count of %q must be a whole number from 0 to %d", key, fitMaxCount)}
+				return nil, calc.NewFieldError("fit", calc.OutOfRange).Typed(key).Within(calc.Num(0), calc.Num(fitMaxCount)).Because(calc.ReasonFittingCount)
 			}
 			fc.Count = c
 		}
 		if hasK {
 			k, err := strconv.ParseFloat(strings.TrimSpace(kText), 64)
 			if err != nil || math.IsNaN(k) || k < 0 || k > fitMaxK {
-				return nil, &calc.FieldError{Field: "fit", Msg: fmt.Sprintf("the K given for %q after @ must be a number from 0 to %d, got %q", key, fitMaxK, kText)}
+				return nil, calc.NewFieldError("fit", calc.OutOfRange).Typed(key+"@"+kText).Within(calc.Num(0), calc.Num(fitMaxK)).Because(calc.ReasonFittingK)
 			}
 			fc.K, fc.Override = k, true
 		}

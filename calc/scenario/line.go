@@ -16,7 +16,7 @@ func (e *eval) line() *calc.Line {
 		return nil
 	}
 	if e.s.Has("l") {
-		e.fail("l", "l: give either a single pipe run (l, d…) or a line of segments (s1.l, s2.l…), not both")
+		e.bad("l", calc.Inconsistent).With("s1.l").Because(calc.ReasonRunOrSegments)
 		return nil
 	}
 	ln := &calc.Line{}
@@ -24,7 +24,7 @@ func (e *eval) line() *calc.Line {
 	for i := 1; i <= n; i++ {
 		pre := fmt.Sprintf("s%d.", i)
 		if !e.s.Has(pre + "l") {
-			e.fail(pre+"l", fmt.Sprintf("%sl: segment %d needs its length (segments are numbered from point 1 without gaps)", pre, i))
+			e.bad(pre+"l", calc.Missing).Because(calc.ReasonSegmentGap)
 			ok = false
 			continue
 		}
@@ -41,7 +41,7 @@ func (e *eval) line() *calc.Line {
 			good = good && g
 			seg.EndZ = z
 		default:
-			e.fail(zp, fmt.Sprintf("%s: enter the elevation of the end of segment %d", zp, i))
+			e.bad(zp, calc.Missing)
 			good = false
 		}
 		ok = ok && good
@@ -52,8 +52,7 @@ func (e *eval) line() *calc.Line {
 	}
 	if e.s.Has("z2") && e.s.Has(fmt.Sprintf("s%d.z", n)) {
 		if z2, good := e.quantity("z2"); good && math.Abs(z2-ln.Segments[n-1].EndZ) > 0.01 {
-			e.warnCalc("line", calc.Warnf(SegmentParam(n, "z"), "the last segment ends at %v but point 2 is at %v: the profile follows the segments",
-				calc.Fig(ln.Segments[n-1].EndZ, calc.Length), calc.Fig(z2, calc.Length)))
+			e.warnCalc("line", calc.Warn(SegmentParam(n, "z"), calc.CautionLastSegmentEnd, calc.Fig(ln.Segments[n-1].EndZ, calc.Length), calc.Fig(z2, calc.Length)))
 		}
 	}
 	return ln

@@ -1,7 +1,6 @@
 package scenario
 
 import (
-	"fmt"
 	"strings"
 
 	"fieldhead/calc"
@@ -14,7 +13,7 @@ import (
 func (e *eval) list(param string) ([]float64, bool) {
 	text := strings.TrimSpace(e.s.Get(param))
 	if text == "" {
-		e.fail(param, missingMsg(param))
+		e.bad(param, calc.Missing)
 		return nil, false
 	}
 	sep := ","
@@ -28,7 +27,7 @@ func (e *eval) list(param string) ([]float64, bool) {
 	for i, it := range items {
 		it = strings.TrimSpace(it)
 		if it == "" {
-			e.fail(param, fmt.Sprintf("%s: value %d of the list is empty", param, i+1))
+			e.bad(param, calc.Missing).At(i + 1)
 			return nil, false
 		}
 		if _, u := Split(it); u == "" {
@@ -36,7 +35,7 @@ func (e *eval) list(param string) ([]float64, bool) {
 		}
 		v, err := calc.Parse(param, it, dim, DefaultUnit(param, e.us))
 		if err != nil {
-			e.failErr(param, fmt.Errorf("%w (value %d of the list)", err, i+1))
+			e.failErr(param, atItem(err, i+1))
 			return nil, false
 		}
 		out = append(out, v)

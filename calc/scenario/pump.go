@@ -2,7 +2,6 @@ package scenario
 
 import (
 	"errors"
-	"fmt"
 	"math"
 	"strings"
 
@@ -51,7 +50,7 @@ func (e *eval) pump() {
 		return
 	}
 	if len(qs) != len(hs) {
-		e.fail("ph", fmt.Sprintf("ph: %d heads for %d flows; give one head per data-sheet flow", len(hs), len(qs)))
+		e.bad("ph", calc.WrongCount).Given(len(hs)).AtMost(calc.Num(float64(len(qs)))).With("pq")
 		return
 	}
 	pts := make([]calc.PumpPoint, len(qs))
@@ -67,7 +66,7 @@ func (e *eval) pump() {
 			return
 		}
 		if len(vs) != len(qs) {
-			e.fail(opt, fmt.Sprintf("%s: %d values for %d flows; give one per data-sheet flow", opt, len(vs), len(qs)))
+			e.bad(opt, calc.WrongCount).Given(len(vs)).AtMost(calc.Num(float64(len(qs)))).With("pq")
 			return
 		}
 		if opt == "peff" && !e.sheetEfficiencies(vs) {
@@ -88,7 +87,7 @@ func (e *eval) pump() {
 	}
 	pr.Base = base
 	if _, top, drooping := base.Unstable(); drooping {
-		e.warnCalc("pump", calc.Warnf("ph", "the data sheet's head rises with flow up to %v (a drooping curve): below that flow the pump can run unstably, hunting between two points where a line of high static head crosses the curve twice; pumps of such curves in parallel may not share the flow", calc.Fig(top, calc.Flow)))
+		e.warnCalc("pump", calc.Warn("ph", calc.CautionDroopingCurve, calc.Fig(top, calc.Flow)))
 	}
 	for _, ref := range []struct {
 		name string
@@ -98,7 +97,7 @@ func (e *eval) pump() {
 			if v, ok := e.quantity(ref.name); ok && v > 0 {
 				*ref.v = v
 			} else if ok {
-				e.fail(ref.name, Label(ref.name)+" must be above zero")
+				e.bad(ref.name, calc.NotPositive)
 			}
 		}
 	}
@@ -117,7 +116,7 @@ func (e *eval) pump() {
 	case "", "1":
 	default:
 		if len(a) != 2 || a[0] < '2' || a[0] > '8' || (a[1] != 'p' && a[1] != 's') {
-			e.fail("pumps", "pumps: use 1, or a count and p or s, e.g. 2p for two in parallel, 2s for two in series")
+			e.bad("pumps", calc.UnknownChoice).Typed(a).Because(calc.ReasonPumpsCount)
 			return
 		}
 		pr.Count, pr.Parallel = int(a[0]-'0'), a[1] == 'p'
@@ -135,7 +134,7 @@ func (e *eval) pump() {
 		return // the balance's own errors say what is missing
 	}
 	if b.Unknown != calc.SolvePumpHead {
-		e.warn("solve", "pump", "the operating point needs the balance solved for the pump head (solve=hp)")
+		e.warnCalc("pump", calc.Warn("solve", calc.CautionOperatingNeedsHp))
 		return
 	}
 	if e.drawsCurves() {
@@ -154,9 +153,9 @@ func (e *eval) pump() {
 	}
 	pr.Operating = &op
 	if _, top, drooping := pr.Curve.Unstable(); drooping && op.Q <= top {
-		e.warnCalc("pump", calc.Warnf("q", "the operating point (%v) lies where the head rises with flow (up to %v): expect unstable running", calc.Fig(op.Q, calc.Flow), calc.Fig(top, calc.Flow)))
+		e.warnCalc("pump", calc.Warn("q", calc.CautionOperatingUnstable, calc.Fig(op.Q, calc.Flow), calc.Fig(top, calc.Flow)))
 	}
-	e.regionCheck(pr.BEP, op.Q, "q", "pump", "the operating point")
+	e.regionCheck(pr.BEP, op.Q, "q", "pump")
 	e.speedFor(pr)
 }
 
@@ -210,7 +209,7 @@ func (e *eval) npsh() {
 	e.res.NPSH = &r
 	e.res.NPSHFlow = q
 	if b.Line == nil {
-		e.warn("zp", "npsh", "no line of segments: the suction losses are taken as zero; describe the suction pipe as segment 1 to include them")
+		e.warnCalc("npsh", calc.Warn("zp", calc.CautionSuctionLossZero))
 	}
 	if pr != nil {
 		for _, p := range pr.System {
@@ -239,7 +238,7 @@ func (e *eval) field() {
 	gauge := func(param string) float64 {
 		text := e.s.Get(param)
 		if strings.TrimSpace(text) == "" {
-			e.fail(param, param+": enter the gauge reading")
+			e.bad(param, calc.Missing)
 			ok = false
 			return 0
 		}
@@ -286,7 +285,7 @@ func (e *eval) field() {
 		ok = ok && good
 		r.MotorEff = v
 		if v > calc.MotorEfficiencyHigh && v <= 1 {
-			e.warn("etam", "field", fmt.Sprintf("a motor efficiency of %s %% is above the %s %% that even the best large motors hardly reach: check the nameplate", pct(v*100), pct(calc.MotorEfficiencyHigh*100)))
+			e.warnCalc("field", calc.Warn("etam", calc.CautionMotorEffHigh, calc.Num(v), calc.Num(calc.MotorEfficiencyHigh)))
 		}
 	}
 	if !ok {
@@ -306,7 +305,7 @@ func (e *eval) field() {
 		e.warnCalc("field", w)
 	}
 	if e.res.Pump != nil {
-		e.regionCheck(e.res.Pump.SingleBEP, r.Q, "qm", "field", "the measured flow")
+		e.regionCheck(e.res.Pump.SingleBEP, r.Q, "qm", "field")
 	}
 	e.bands(fc)
 	e.accept(fc)
@@ -324,7 +323,7 @@ func (e *eval) turbine() {
 		return
 	}
 	if e.bal.Unknown != calc.SolveTurbineHead {
-		e.warn("etat", "turbine", "the turbine's output needs the balance solved for the turbine head (solve=ht)")
+		e.warnCalc("turbine", calc.Warn("etat", calc.CautionTurbineNeedsHt))
 		return
 	}
 	t, err := calc.Turbine(*e.bal, eff)

@@ -1,7 +1,6 @@
 package scenario
 
 import (
-	"fmt"
 	"strconv"
 	"strings"
 
@@ -33,6 +32,9 @@ type EnergyResult struct {
 }
 
 // pct writes a percentage as typed: "90", "0.9", "52", "97.5".
+//
+// Deprecated: messages are worded in present/errors.go; kept for code
+// written against it.
 func pct(v float64) string { return strconv.FormatFloat(v, 'g', 4, 64) }
 
 // isFrequency reports whether unit text names a speed or frequency unit
@@ -54,8 +56,7 @@ func (e *eval) share(param string) (float64, bool) {
 		return 0, false
 	}
 	if meant, slip := calc.FractionSlip(v); slip {
-		e.fail(param, fmt.Sprintf("a %s of %s %% is not plausible; a fraction was probably typed into a percentage box: did you mean %s %%?",
-			Label(param), pct(v*100), pct(meant)))
+		e.bad(param, calc.OutOfRange).Got(calc.Num(v)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
 		return 0, false
 	}
 	return v, true
@@ -66,15 +67,13 @@ func (e *eval) share(param string) (float64, bool) {
 func (e *eval) sheetEfficiencies(vs []float64) bool {
 	for i, v := range vs {
 		if meant, slip := calc.FractionSlip(v); slip {
-			e.fail("peff", fmt.Sprintf("point %d: %s %% looks like a fraction typed into the percentage list: did you mean %s %%? (give every efficiency in %%, e.g. 0,52,71,76,72%%)",
-				i+1, pct(v*100), pct(meant)))
+			e.bad("peff", calc.OutOfRange).At(i+1).Got(calc.Num(v)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
 			return false
 		}
 	}
 	for i, v := range vs {
 		if v > calc.PumpEfficiencyHigh && v <= 1 {
-			e.warn("peff", "pump", fmt.Sprintf("point %d: a data-sheet efficiency of %s %% is above the %s %% that even the largest pumps hardly reach: check the list",
-				i+1, pct(v*100), pct(calc.PumpEfficiencyHigh*100)))
+			e.warnCalc("pump", calc.Warn("peff", calc.CautionSheetEffHigh, calc.Num(float64(i+1)), calc.Num(v), calc.Num(calc.PumpEfficiencyHigh)))
 			break
 		}
 	}
@@ -100,12 +99,12 @@ func (e *eval) speed() (float64, bool) {
 			return 0, false
 		}
 		unit, _ := calc.LookupUnit(u)
-		ref, over := "nrat", "the rated speed"
+		ref := "nrat"
 		if unit.Symbol == "Hz" {
-			ref, over = "fmains", "the mains frequency"
+			ref = "fmains"
 		}
 		if !e.s.Has(ref) {
-			e.fail("spd", fmt.Sprintf("a speed in %s needs %s (%s) to compare with; or give the speed in %%", unit.Symbol, over, Label(ref)))
+			e.bad("spd", calc.Missing).With(ref).Typed(unit.Symbol).Because(calc.ReasonSpeedReference)
 			return 0, false
 		}
 		base, ok := e.quantity(ref)
@@ -121,7 +120,7 @@ func (e *eval) speed() (float64, bool) {
 		ratio = v
 	}
 	if ratio > 1 && ratio <= calc.PumpSpeedRatioMax {
-		e.warn("spd", "pump", fmt.Sprintf("a speed of %s %% of the data sheet's overspeeds the pump: the maker must confirm the pump, its bearings, seal and motor are fit for it (the power rises with the cube of the speed)", pct(ratio*100)))
+		e.warnCalc("pump", calc.Warn("spd", calc.CautionOverspeed, calc.Num(ratio)))
 	}
 	return ratio, true
 }
@@ -137,24 +136,23 @@ func (e *eval) bep(pr *PumpResult) {
 		pr.SingleBEP = &b
 	}
 	if pr.BEP != nil && pr.BEP.AtEdge {
-		e.warn("peff", "pump", "the data sheet's highest efficiency is at its first or last point: the best-efficiency point may lie beyond the sheet, and the region drawn from it is uncertain")
+		e.warnCalc("pump", calc.Warn("peff", calc.CautionBEPAtEnd))
 	}
 }
 
 // regionCheck warns when flow q of the pumps lies outside the preferred
 // operating region.
-func (e *eval) regionCheck(b *calc.BEP, q float64, param, topic, what string) {
+func (e *eval) regionCheck(b *calc.BEP, q float64, param, topic string) {
 	if b == nil || b.InRegion(q) {
 		return
 	}
 	lo, hi := b.Region()
-	side := "below"
-	if q > hi {
-		side = "above"
+	c := calc.CautionOperatingOffRegion
+	if param != "q" {
+		c = calc.CautionMeasuredOffRegion
 	}
-	e.warnCalc(topic, calc.Warnf(param, "%s (%v) lies %s the preferred operating region (%v to %v, %s–%s %% of the best-efficiency flow, after ANSI/HI 9.6.3 from memory): expect more vibration, recirculation or wear; ask the maker about the allowable region",
-		what, calc.Fig(q, calc.Flow), side, calc.Fig(lo, calc.Flow), calc.Fig(hi, calc.Flow),
-		pct(calc.PreferredRegionLow*100), pct(calc.PreferredRegionHigh*100)))
+	e.warnCalc(topic, calc.Warn(param, c, calc.Fig(q, calc.Flow), calc.Fig(lo, calc.Flow), calc.Fig(hi, calc.Flow),
+		calc.Num(calc.PreferredRegionLow), calc.Num(calc.PreferredRegionHigh)))
 }
 
 // speedFor solves for the speed at which the pumps deliver the flow qsp,
@@ -203,7 +201,7 @@ func (e *eval) speedFor(pr *PumpResult) {
 	}
 	pr.SpeedFor = &SpeedSolution{Q: q, H: h, Ratio: r, Curve: c, ByHead: byHead}
 	if r > 1 {
-		e.warn(param, "pump", fmt.Sprintf("this flow needs %s %% of the data sheet's speed: overspeed, which the maker must approve", pct(r*100)))
+		e.warnCalc("pump", calc.Warn(param, calc.CautionDutyOverspeed, calc.Num(r)))
 	}
 }
 
@@ -283,13 +281,13 @@ func (e *eval) bands(fc calc.FieldCheck) {
 	for _, pair := range [][2]string{{"gcs", "gss"}, {"gcd", "gsd"}} {
 		for i, p := range pair {
 			if e.s.Has(p) && !e.s.Has(pair[1-i]) {
-				e.fail(pair[1-i], missingMsg(pair[1-i])+": a gauge's accuracy class and span go together")
+				e.bad(pair[1-i], calc.Missing).With(p).Because(calc.ReasonGoTogether)
 				ok = false
 			}
 		}
 	}
 	if a.Power > 0 && !e.s.Has("pin") {
-		e.warn("upin", "field", "a power meter's accuracy without its reading (motor electrical input) is not used")
+		e.warnCalc("field", calc.Warn("upin", calc.CautionPowerAccuracyUnused))
 	}
 	if !ok {
 		return
@@ -315,11 +313,11 @@ func (e *eval) accept(fc calc.FieldCheck) {
 	if e.res.FieldBands != nil {
 		bands = *e.res.FieldBands
 	} else {
-		e.warn("grade", "field", "no instrument accuracy is given: the verdict takes every reading as exact, which no field test is; give the gauges' classes and spans and the meters' accuracies")
+		e.warnCalc("field", calc.Warn("grade", calc.CautionNoAccuracy))
 	}
 	a, ok := calc.Accept(fc, bands, g)
 	if !ok {
-		e.warn("grade", "field", "the acceptance grade needs the data sheet's head at the measured flow: give the data sheet, covering that flow")
+		e.warnCalc("field", calc.Warn("grade", calc.CautionGradeNeedsSheet))
 		return
 	}
 	e.res.Acceptance = &a

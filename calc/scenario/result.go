@@ -51,23 +51,30 @@ type Result struct {
 // Warning is a caution about a result. Param names the input it concerns,
 // or is empty for the scenario as a whole; Topic groups it for display
 // ("balance", "run", "convert", "liquid", "site").
-// Text quotes its figures as calc.FieldError's Msg does: word it with
-// Words.
+// A warning from calc says what it is about as data (Code, Figures), worded
+// by the view model; one of scenario's own, or of calc.CautionText, holds a
+// sentence in Text that quotes its figures behind marks: word it with Words.
 type Warning struct {
 	Param   string
 	Topic   string
 	Segment int // the segment of a line it is about, 0 none
+	Code    calc.Caution
 	Text    string
 	Figures []calc.Figure
 }
 
-// Words writes the warning with each figure written by show.
-func (w Warning) Words(show func(calc.Figure) string) string {
-	return calc.Warning{Text: w.Text, Figures: w.Figures}.Words(show)
+// Calc is the warning as calc's type, for its Words and String.
+func (w Warning) Calc() calc.Warning {
+	return calc.Warning{Field: w.Param, Segment: w.Segment, Code: w.Code, Text: w.Text, Figures: w.Figures}
 }
 
-// String writes the warning with its figures in SI.
-func (w Warning) String() string { return w.Words(calc.Figure.SI) }
+// Words writes the sentence of a warning of Text with each figure written
+// by show; "" for a coded one.
+func (w Warning) Words(show func(calc.Figure) string) string { return w.Calc().Words(show) }
+
+// String is a line for logs: the sentence with its figures in SI, or a
+// coded warning's name and figures.
+func (w Warning) String() string { return w.Calc().String() }
 
 // RunResult is the pipe run as evaluated, with the dimensions actually used.
 type RunResult struct {

@@ -31,7 +31,7 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 	positive := func(param, what string) float64 {
 		v, good := e.quantity(param)
 		if good && !(v > 0) {
-			e.fail(param, param+": "+what+" must be above zero")
+			e.bad(param, calc.NotPositive).Got(calc.Fig(v, calc.Length))
 			good = false
 		}
 		ok = ok && good
@@ -42,7 +42,7 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 	if l, good := e.quantity(p("l")); !good {
 		ok = false
 	} else if l < 0 {
-		e.fail(p("l"), "the length of the run must not be negative")
+		e.bad(p("l"), calc.Negative).Got(calc.Fig(l, calc.Length))
 		ok = false
 	} else {
 		r.Length = l
@@ -65,7 +65,7 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 			r.Diameter = ps.ID
 		}
 	default:
-		e.fail(p("d"), missingMsg("d"))
+		e.bad(p("d"), calc.Missing)
 		ok = false
 	}
 	var mat *calc.Material
@@ -92,7 +92,7 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 	case e.s.Has(p("eps")):
 		if eps, good := e.quantity(p("eps")); good {
 			if eps < 0 {
-				e.fail(p("eps"), p("eps")+": the roughness must not be negative")
+				e.bad(p("eps"), calc.Negative).Got(calc.Fig(eps, calc.Length))
 				ok = false
 			}
 			r.Roughness = eps
@@ -102,7 +102,7 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 	case mat != nil:
 		r.Roughness = mat.Roughness
 	case method != calc.MethodHazenWilliams:
-		e.fail(p("eps"), missingMsg("eps"))
+		e.bad(p("eps"), calc.Missing)
 		ok = false
 	}
 	hc := 0.0
@@ -110,7 +110,7 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 	case e.s.Has("chw"):
 		c, err := number("chw", e.s.Get("chw"))
 		if err != nil || !(c > 0) {
-			e.fail("chw", "chw: the Hazen–Williams C must be a number above zero, e.g. 130")
+			e.bad("chw", calc.NotPositive).Typed(e.s.Get("chw"))
 			ok = false
 		}
 		hc = c
@@ -118,7 +118,7 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 		hc = mat.HazenC
 	}
 	if method == calc.MethodHazenWilliams && !(hc > 0) {
-		e.fail("chw", "chw: enter a Hazen–Williams C, or pick a material that has one")
+		e.bad("chw", calc.Missing).With("mat")
 		ok = false
 	}
 	fits, err := ParseFittings(e.s.Get(p("fit")))
@@ -130,7 +130,7 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 	if e.s.Has(p("k")) {
 		k, err := number(p("k"), e.s.Get(p("k")))
 		if err != nil || k < 0 {
-			e.fail(p("k"), p("k")+": the extra loss coefficient must be a number, zero or more")
+			e.bad(p("k"), calc.Negative).Typed(e.s.Get(p("k")))
 			ok = false
 		}
 		extra = k

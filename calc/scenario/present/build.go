@@ -172,7 +172,7 @@ func (b *builder) problem(p string) string {
 	if fe == nil {
 		return ""
 	}
-	return fe.Words(b.figure)
+	return ErrorText(fe, b.us)
 }
 
 // named is p's problem preceded by its label, for lists.
@@ -206,9 +206,17 @@ func (b *builder) warnsAbout(p string) bool {
 	return false
 }
 
+// caution words a warning from calc: by its Code, or its sentence.
+func (b *builder) caution(w calc.Warning) string {
+	if w.Code != calc.CautionText {
+		return WarningText(w.Code, w.Figures, b.us)
+	}
+	return w.Words(b.figure)
+}
+
 // warnText words a warning, naming its segment.
 func (b *builder) warnText(w scenario.Warning) string {
-	t := w.Words(b.figure)
+	t := b.caution(w.Calc())
 	if w.Segment > 0 {
 		t = "segment " + strconv.Itoa(w.Segment) + ": " + t
 	}

@@ -152,7 +152,7 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 		)
 	}
 	fs = append(fs, Fact{Label: "at a flow of", Value: b.param("q", b.r.NPSHFlow)})
-	return level, Block{Kind: BlockFacts, Class: "facts", Facts: fs}, text("note-text", "npsh-note", n.Note.Words(b.figure))
+	return level, Block{Kind: BlockFacts, Class: "facts", Facts: fs}, text("note-text", "npsh-note", b.caution(n.Note))
 }
 
 // npshCard is NPSH available against required.

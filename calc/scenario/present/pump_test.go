@@ -495,7 +495,7 @@ func TestNPSHVerdictBeforeFacts(t *testing.T) {
 			if level < 0 || facts < 0 || level > facts {
 				t.Errorf("verdict at block %d, facts at %d", level, facts)
 			}
-			wantNote := r.NPSH.Note.Words(func(f calc.Figure) string { return scenario.Show(f.Value, f.Dim, r.US) })
+			wantNote := WarningText(r.NPSH.Note.Code, r.NPSH.Note.Figures, r.US)
 			if note != wantNote {
 				t.Errorf("note %q, want %q", note, wantNote)
 			}

@@ -213,6 +213,9 @@ func TestReportWarningsAndMethods(t *testing.T) {
 	seen := map[string]bool{}
 	for _, w := range r.Warnings {
 		text := w.Words(func(f calc.Figure) string { return scenario.Show(f.Value, f.Dim, false) })
+		if w.Code != calc.CautionText {
+			text = WarningText(w.Code, w.Figures, false)
+		}
 		if w.Segment > 0 {
 			text = "segment " + strconv.Itoa(w.Segment) + ": " + text
 		}

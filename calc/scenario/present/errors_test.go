@@ -1,0 +1,204 @@
+package present
+
+import (
+	"strings"
+	"testing"
+
+	"fieldhead/calc"
+	"fieldhead/calc/scenario"
+)
+
+// TestEveryKindAndReasonWorded: every Kind and every Reason calc can
+// report has a wording here, in both unit systems, with no placeholder
+// left, and a US sheet's wording has no SI unit after a figure (the
+// scanner of TestNoSIUnitsOnUSSheet).
+func TestEveryKindAndReasonWorded(t *testing.T) {
+	// A full error: every figure slot filled with a quantity, so that a
+	// wording that quotes any of them is exercised in both systems.
+	full := func(field string, k calc.Kind, r calc.Reason) *calc.FieldError {
+		fe := calc.NewFieldError(field, k).Got(calc.Fig(0.3, calc.Length)).Within(calc.Fig(0.2, calc.Length), calc.Fig(0.5, calc.Length)).
+			Because(r, calc.Fig(0.045, calc.Flow), calc.Fig(31, calc.Length), calc.Fig(0.04, calc.Flow), calc.Fig(29, calc.Length)).
+			Typed("12x").With("q").Given(2)
+		fe.Dim, fe.UnitDim = calc.Length, calc.Pressure
+		return fe
+	}
+	check := func(what string, fe *calc.FieldError) map[bool]string {
+		out := map[bool]string{}
+		for _, us := range []bool{false, true} {
+			s := ErrorText(fe, us)
+			switch {
+			case s == "":
+				t.Errorf("%s (us %v): no wording", what, us)
+			case strings.Contains(s, "?") && !strings.Contains(s, "did you mean"):
+				t.Errorf("%s (us %v): a placeholder is left in %q", what, us, s)
+			case strings.ContainsRune(s, '\uE000'):
+				t.Errorf("%s (us %v): a figure mark is left in %q", what, us, s)
+			}
+			if bad := siAfterDigit(s); us && len(bad) > 0 {
+				t.Errorf("%s: the US wording %q has SI units %v", what, s, bad)
+			}
+			out[us] = s
+		}
+		return out
+	}
+	for _, k := range calc.Kinds() {
+		for _, field := range []string{"d", "pq", "etam", "cat"} {
+			w := check(k.String()+" on "+field, full(field, k, calc.ReasonNone))
+			if k == calc.NotPositive && field == "d" && !strings.Contains(w[true], "in") {
+				t.Errorf("a diameter's figures on a US sheet are not in inches: %q", w[true])
+			}
+		}
+	}
+	for _, r := range calc.Reasons() {
+		if _, ok := reasonWords[r]; !ok {
+			t.Errorf("reason %v has no wording", r)
+			continue
+		}
+		for _, k := range []calc.Kind{calc.OutOfRange, calc.BelowLimit, calc.NoSolution, calc.Missing} {
+			check(r.String(), full("p1", k, r))
+		}
+	}
+	// An error lacking the data its reason quotes is still worded, not a panic.
+	for _, r := range calc.Reasons() {
+		for _, k := range append(calc.Kinds(), calc.KindOther) {
+			_ = ErrorText(calc.NewFieldError("q", k).Because(r), true)
+		}
+	}
+	for _, c := range calc.Cautions() {
+		_ = WarningText(c, nil, true)
+	}
+	if len(reasonWords) != len(calc.Reasons()) {
+		t.Errorf("%d wordings for %d reasons", len(reasonWords), len(calc.Reasons()))
+	}
+}
+
+// TestErrorTextNamesAndUnits: the wording names the field by its label,
+// quotes figures in the sheet's units, and other fields by their labels.
+func TestErrorTextNamesAndUnits(t *testing.T) {
+	// Source: the labels of scenario's table; the figures by scenario.Show
+	// and ShowParam (the same unit table), e.g. 203.2 mm = 8 in exactly.
+	d := calc.NewFieldError("d1", calc.NotPositive).Got(calc.Fig(-0.2032, calc.Length))
+	for _, c := range []struct {
+		fe   *calc.FieldError
+		us   bool
+		want string
+	}{
+		{d, false, "the " + scenario.Label("d1") + " must be above zero; got " + scenario.ShowParam("d1", -0.2032, false)},
+		{d, true, "the " + scenario.Label("d1") + " must be above zero; got " + scenario.ShowParam("d1", -0.2032, true)},
+		{calc.NewFieldError("hsp", calc.Missing).With("pq"), false, "give the " + scenario.Label("pq") + " first"},
+		{calc.NewFieldError("t", calc.OutsideValidity).Got(calc.Fig(400, calc.Temperature)).
+			Within(calc.Fig(273.15, calc.Temperature), calc.Fig(373.15, calc.Temperature)).Because(calc.ReasonWaterProperties), true,
+			"the water temperature must be from 32.00 °F to 212.0 °F; got 260.3 °F"},
+		{calc.NewFieldError("etam", calc.OutOfRange).Got(calc.Num(1.2)).Within(calc.Num(0), calc.Num(1)).Because(calc.ReasonEfficiency), false,
+			"the motor efficiency must be above 0 and at most 100 %; got 120 %"},
+		{calc.NewFieldError("peff", calc.OutOfRange).At(2).Got(calc.Num(0.0052)).Because(calc.ReasonFractionTyped, calc.Num(0.52)), false,
+			"point 2: 0.52 % looks like a fraction typed into the percentage list: did you mean 52 %? (give every efficiency in %, e.g. 0,52,71,76,72%)"},
+		{calc.NewFieldError("hours", calc.OutOfRange).Got(calc.Num(9000)).Within(calc.Num(0), calc.Num(8784)), false,
+			"the running hours per year must be from 0 to 8784; got 9000"},
+		{calc.NewFieldError("units", calc.UnknownChoice).Typed("imperial"), false, `"imperial" is not one of the choices (use si or us)`},
+		{calc.FieldErrorf("q", "flow %v is odd", calc.Fig(0.045, calc.Flow)), true, "flow " + scenario.Show(0.045, calc.Flow, true) + " is odd"},
+	} {
+		if got := ErrorText(c.fe, c.us); got != c.want {
+			t.Errorf("%v (us %v):\n got %q\nwant %q", c.fe, c.us, got, c.want)
+		}
+	}
+}
+
+// TestParseErrorWords words each error of calc.Parse as an SI sheet shows
+// it: what the box expected, with an example, then what is wrong.
+func TestParseErrorWords(t *testing.T) {
+	// Source: the messages Fieldhead has shown for these inputs (they were
+	// calc's own before errors became data), and the unit examples of
+	// calc's dimension table (203 mm, 250 kPa, 1.5 m/s, 18 °C).
+	rows := []struct {
+		text string
+		dim  calc.Dimension
+		def  string
+		msg  string // after the expectation
+	}{
+		{"abc", calc.Pressure, "kPa", `"abc" is not a number`},
+		{"NaN", calc.Length, "m", `"NaN" is not a finite number`},
+		{"1e999", calc.Length, "m", `"1e999" is not a finite number`},
+		{"1.2.3 m", calc.Length, "", "more than one separator"},
+		{"1,250 m", calc.Length, "", `"1,250" is ambiguous; write 1250 (no grouping) or 1.250 (decimal point)`},
+		{"-2,500 kPa", calc.Pressure, "", `"-2,500" is ambiguous; write -2500 (no grouping) or -2.500 (decimal point)`},
+		{"250", calc.Pressure, "", `add a unit to "250"`},
+		{"3 kPz", calc.Pressure, "", `unknown unit "kPz" (use kPa, bar, MPa, Pa,`},
+		{"10 m", calc.Pressure, "", `got a length unit "m" (a water column as a pressure is written mH2O or ftH2O)`},
+		{"10 mH2O", calc.Length, "", `got a pressure unit "mH2O"`},
+		{"15 L/s", calc.Velocity, "", `got a volumetric flow unit "L/s"`},
+		{"2 m²", calc.Length, "", `got an area unit "m²"`},
+		{"50 %", calc.Length, "", `got "%", which is a plain-number unit`},
+		{"30 psig", calc.Pressure, "", `"psig" names gauge or absolute`},
+		{"-300 °C", calc.Temperature, "", `"-300 °C" is below absolute zero`},
+	}
+	examples := map[calc.Dimension]string{calc.Length: "a length, e.g. 203 mm", calc.Pressure: "a pressure, e.g. 250 kPa",
+		calc.Velocity: "a velocity, e.g. 1.5 m/s", calc.Temperature: "a temperature, e.g. 18 °C"}
+	for _, r := range rows {
+		_, err := calc.Parse("fld", r.text, r.dim, r.def)
+		fe, ok := err.(*calc.FieldError)
+		if !ok {
+			t.Fatalf("Parse(%q): %v", r.text, err)
+		}
+		got, want := ErrorText(fe, false), "expected "+examples[r.dim]+"; "
+		if !strings.HasPrefix(got, want) || !strings.Contains(got, r.msg) {
+			t.Errorf("Parse(%q): %q\n want %q…%q", r.text, got, want, r.msg)
+		}
+	}
+	// A US sheet's example is in US units; long input is shortened.
+	_, err := calc.Parse("q", strings.Repeat("z", 500), calc.Flow, "")
+	if got := ErrorText(err.(*calc.FieldError), true); !strings.HasPrefix(got, "expected a volumetric flow, e.g. 700 gpm; ") || len(got) > 120 {
+		t.Errorf("long input on a US sheet: %q", got)
+	}
+}
+
+// TestEveryCautionWorded: every Caution calc can report has a wording
+// here, in both unit systems, with no placeholder left and no SI unit
+// after a figure on a US sheet.
+func TestEveryCautionWorded(t *testing.T) {
+	figs := []calc.Figure{calc.Fig(7.2, calc.Length), calc.Fig(3.1, calc.Length), calc.Fig(4.1, calc.Length), calc.Num(2.3), calc.Fig(0.6, calc.Length)}
+	for _, c := range calc.Cautions() {
+		for _, us := range []bool{false, true} {
+			s := WarningText(c, figs, us)
+			if s == "" || strings.Contains(s, "?") {
+				t.Errorf("%v (us %v): %q", c, us, s)
+			}
+			if bad := siAfterDigit(s); us && len(bad) > 0 {
+				t.Errorf("%v: the US wording %q has SI units %v", c, s, bad)
+			}
+		}
+	}
+	if len(cautionWords) != len(calc.Cautions()) {
+		t.Errorf("%d wordings for %d cautions", len(cautionWords), len(calc.Cautions()))
+	}
+	if WarningText(calc.CautionText, figs, false) != "" {
+		t.Error("a warning of text is worded by its own Words")
+	}
+}
+
+// TestCautionWords: the wording of calc's warnings as an SI sheet shows
+// them, and in a US sheet's units.
+func TestCautionWords(t *testing.T) {
+	// Source: the sentences Fieldhead has shown for these warnings (they
+	// were calc's own before warnings became data); figures by
+	// scenario.Show, e.g. 0.6 m = 1.969 ft (0.6/0.3048).
+	for _, c := range []struct {
+		c    calc.Caution
+		figs []calc.Figure
+		us   bool
+		want string
+	}{
+		{calc.CautionNPSHBelow, []calc.Figure{calc.Fig(10, calc.Length), calc.Fig(12, calc.Length)}, false,
+			"NPSH available 10.00 m is below the 12.00 m required: the pump will cavitate (lost head, noise, damage); raise the source, lower the pump, cut the suction losses or cool the liquid"},
+		{calc.CautionNPSHUnrated, []calc.Figure{calc.Fig(10, calc.Length), calc.Fig(0.6, calc.Length)}, true,
+			"NPSH available is 32.81 ft; give the pump's NPSH required at this flow to judge the margin (margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least 1.969 ft (common practice, from memory); large, high-energy or hot-liquid pumps need more)"},
+		{calc.CautionWireLow, []calc.Figure{calc.Num(0.2), calc.Num(0.3)}, false,
+			"the wire-to-water efficiency is only 20 % (below 30 %): look for wear, a throttled or recirculating pump, a motor problem, or a reading error"},
+		{calc.CautionVelocityHigh, []calc.Figure{calc.Fig(4, calc.Velocity), calc.Fig(0.3, calc.Velocity), calc.Fig(3, calc.Velocity)}, false,
+			"velocity 4.000 m/s is high for a liquid line (usual range 0.3000 m/s–3.000 m/s, common practice)"},
+	} {
+		if got := WarningText(c.c, c.figs, c.us); got != c.want {
+			t.Errorf("%v (us %v):\n got %q\nwant %q", c.c, c.us, got, c.want)
+		}
+	}
+}
