@@ -72,6 +72,7 @@ func Evaluate(s Scenario) Result {
 		e.energy()
 	}
 	e.turbine()
+	e.surge(run)
 	if s.Has("cv") {
 		e.convert()
 	}
