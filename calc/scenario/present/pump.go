@@ -674,5 +674,5 @@ func (b *builder) turbineFacts() []Fact {
 			Fact{Label: "net head at that flow", Value: b.head(best.NetHead)},
 		)
 	}
-	return out
+	return append(out, b.hydroFacts(t)...)
 }

@@ -245,7 +245,7 @@ func (b *builder) reportResults() Card {
 		}, b.turbineFacts()...)}
 	}
 	heading := func(ok bool, s string) Block { return maybe(ok, Block{Kind: BlockHeading, Text: s}) }
-	return Card{ID: "report-results", Class: "rsec", Title: "Results", Blocks: []Block{
+	return Card{ID: "report-results", Class: "rsec", Title: "Results", Blocks: append([]Block{
 		heading(br != nil, "Energy balance"),
 		answer,
 		heading(br != nil, "Where the head goes"),
@@ -269,7 +269,7 @@ func (b *builder) reportResults() Card {
 		maybe(energy != nil, Block{Kind: BlockFacts, Class: "facts", Facts: energy}),
 		heading(t != nil, "Turbine"),
 		maybe(t != nil, turb),
-	}}
+	}, b.reportSurge()...)}
 }
 
 // reportCharts holds both charts; ok is false when there is neither.
