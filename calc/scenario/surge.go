@@ -32,7 +32,7 @@ type SurgePipe struct {
 	calc.SurgePipe
 	WallFrom    string // "catalogue" (the pipe size picked) or "typed"
 	ModulusFrom string // "material" (its key in Material) or "typed"
-	Material    string // the material's key, "" when typed
+	Material    string // the material's name, "" when typed
 }
 
 // surge works out the surge of a closure at point 2 when a closure time
@@ -216,7 +216,7 @@ func (e *eval) surgePipes(run *RunResult, c float64) ([]SurgePipe, bool) {
 				ok = false
 				continue
 			}
-			p.Modulus, p.ModulusFrom, p.Material = m.Modulus, "material", m.Key
+			p.Modulus, p.ModulusFrom, p.Material = m.Modulus, "material", m.Name
 		}
 		out = append(out, p)
 	}

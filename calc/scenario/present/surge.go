@@ -145,12 +145,13 @@ func (b *builder) hydroFacts(t *calc.TurbineResult) []Fact {
 	out := []Fact{
 		{ID: "turb-loss-share", Label: "line losses as a share of the gross head", Value: percent(t.LossShare)},
 		{ID: "turb-net-share", Label: "net head as a share of the gross head", Value: percent(t.NetShare)},
-		{ID: "turb-static", Label: "pressure at the turbine inlet with no flow (at point 2's level)",
-			Value: b.gauge(t.StaticInlet) + " (" + b.head(t.StaticInlet/b.rhoG()) + "): what the inlet valve and the pipe there hold at rest, before any surge", Key: true},
+		{ID: "turb-static", Label: "pressure at the turbine inlet with no flow, at point 2's level: what the inlet valve and the pipe there hold at rest, before any surge",
+			Value: b.gauge(t.StaticInlet) + " (" + b.head(t.StaticInlet/b.rhoG()) + ")", Key: true},
 	}
 	if best := b.r.BestTurbine; best != nil {
-		out = append(out, Fact{ID: "turb-best-note", Label: "the flow of most output",
-			Value: "is where this line's output peaks, not a design flow: " + percent(best.LossShare) + " of the gross head is lost in the pipe there; the water available through the year, the turbine's own efficiency curve, the pipe's pressure class and surge decide the design flow, with the turbine maker and a licensed engineer"})
+		out = append(out, Fact{ID: "turb-best-note",
+			Label: "the flow of most output is where this line's output peaks, not a design flow: the water available through the year, the turbine's own efficiency curve, the pipe's pressure class and surge decide that, with the turbine maker and a licensed engineer",
+			Value: percent(best.LossShare) + " of the gross head lost there"})
 	}
 	return out
 }

@@ -127,10 +127,10 @@ func TestHydroFacts(t *testing.T) {
 	if card == nil {
 		t.Fatal("no turbine card")
 	}
-	facts := map[string]string{}
+	facts, labels := map[string]string{}, map[string]string{}
 	for _, b := range card.Blocks {
 		for _, f := range b.Facts {
-			facts[f.ID] = f.Value
+			facts[f.ID], labels[f.ID] = f.Value, f.Label
 		}
 	}
 	if got, want := facts["turb-loss-share"], percent(tr.LossShare); got != want {
@@ -139,8 +139,8 @@ func TestHydroFacts(t *testing.T) {
 	if got := facts["turb-static"]; !strings.HasPrefix(got, scenario.Show(tr.StaticInlet, calc.Pressure, false)) {
 		t.Errorf("no-flow inlet pressure %q, want it to start with %q", got, scenario.Show(tr.StaticInlet, calc.Pressure, false))
 	}
-	if !strings.Contains(facts["turb-best-note"], "not a design flow") {
-		t.Errorf("best-flow caution %q", facts["turb-best-note"])
+	if !strings.Contains(labels["turb-best-note"], "not a design flow") || !strings.HasPrefix(facts["turb-best-note"], percent(r.BestTurbine.LossShare)) {
+		t.Errorf("best-flow caution %q: %q", labels["turb-best-note"], facts["turb-best-note"])
 	}
 	if tr.GrossHead <= 0 || tr.LossShare+tr.NetShare > 1 {
 		t.Errorf("shares %g + %g of %g m", tr.LossShare, tr.NetShare, tr.GrossHead)
