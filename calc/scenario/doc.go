@@ -154,10 +154,11 @@
 //	        round trip 2L/a, the Joukowsky figure is only an upper bound
 //	dv      the velocity stopped, e.g. 1.5m/s (blank: the whole flow
 //	        velocity in the pipe at point 2)
-//	wall    the pipe's wall thickness, e.g. 14.6mm (blank: from the size
-//	        and schedule picked; needed for a typed inside diameter)
-//	epipe   the wall's elastic modulus, e.g. 1GPa (blank: the material's,
-//	        from memory)
+//	wall    the pipe's wall thickness, e.g. 14.6mm, for every pipe of the
+//	        line (blank: each from its size and schedule picked; needed
+//	        where an inside diameter is typed)
+//	epipe   the wall's elastic modulus, e.g. 1GPa, for every pipe (blank:
+//	        each from its material, from memory)
 //	kliq    the liquid's bulk modulus, e.g. 2.2GPa (blank: water from the
 //	        IAPWS-IF97 speed of sound, seawater from Mackenzie's; another
 //	        liquid needs it)
