@@ -72,7 +72,7 @@ func Evaluate(s Scenario) Result {
 		e.energy()
 	}
 	e.turbine()
-	e.surge(run)
+	e.surge(run, line)
 	if s.Has("cv") {
 		e.convert()
 	}

@@ -38,7 +38,7 @@ type SurgePipe struct {
 // surge works out the surge of a closure at point 2 when a closure time
 // is given: the liquid's bulk modulus, each pipe's wall and modulus, then
 // calc.Surge.
-func (e *eval) surge(run *RunResult) {
+func (e *eval) surge(run *RunResult, line *calc.Line) {
 	if !e.s.Has("tc") || e.res.Fluid == nil {
 		return
 	}
@@ -67,7 +67,7 @@ func (e *eval) surge(run *RunResult) {
 		}
 		c = v
 	}
-	pipes, good := e.surgePipes(run, c)
+	pipes, good := e.surgePipes(run, line, c)
 	if !ok || !good {
 		return
 	}
@@ -148,7 +148,7 @@ func (e *eval) bulkModulus() (float64, string, bool) {
 // surgePipes are the pipes between the points, each with its wall
 // thickness (from the size picked, else the typed wall) and its wall's
 // modulus (typed epipe, else the material's), restraint factor c.
-func (e *eval) surgePipes(run *RunResult, c float64) ([]SurgePipe, bool) {
+func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePipe, bool) {
 	type spec struct {
 		pre    string
 		length float64
@@ -156,14 +156,16 @@ func (e *eval) surgePipes(run *RunResult, c float64) ([]SurgePipe, bool) {
 	}
 	var specs []spec
 	switch {
-	case e.bal != nil && e.bal.Line != nil:
-		for i, sg := range e.bal.Line.Segments {
+	case line != nil:
+		for i, sg := range line.Segments {
 			specs = append(specs, spec{SegmentParam(i+1, ""), sg.Length, sg.Diameter})
 		}
 	case run != nil && e.runSpec.Diameter > 0:
 		specs = append(specs, spec{"", e.runSpec.Length, e.runSpec.Diameter})
 	default:
-		e.fail("tc", "the surge estimate needs the pipe between the points: describe the pipe run or the line's segments")
+		if !e.s.Has("l") && e.s.SegmentCount() == 0 {
+			e.fail("tc", "the surge estimate needs the pipe between the points: describe the pipe run or the line's segments")
+		}
 		return nil, false
 	}
 	ok := true
