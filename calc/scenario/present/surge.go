@@ -101,13 +101,13 @@ func (b *builder) surgeFacts() []Fact {
 		if len(sr.Pipes) > 1 {
 			label = "segment " + strconv.Itoa(i+1)
 		}
-		wall := b.param("wall", p.Wall) + " wall"
+		wall := b.param("wall", p.Wall) + " wall (typed)"
 		if p.WallFrom == "catalogue" {
-			wall += " (the size picked)"
+			wall = b.param("wall", p.Wall) + " wall (the size picked)"
 		}
-		mod := "E " + b.param("epipe", p.Modulus)
+		mod := "E " + b.param("epipe", p.Modulus) + " (typed)"
 		if p.ModulusFrom == "material" {
-			mod += " (" + p.Material + ", from memory)"
+			mod = "E " + b.param("epipe", p.Modulus) + " (" + p.Material + ", from memory)"
 		}
 		v := wall + ", " + mod
 		if len(sr.Pipes) > 1 {
