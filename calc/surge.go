@@ -190,6 +190,9 @@ func (s Surge) Evaluate() (SurgeResult, error) {
 	}
 	r.DeltaP = s.Density * r.WaveSpeed * r.DeltaV
 	r.DeltaH = r.WaveSpeed * r.DeltaV / StandardGravity
+	if math.IsInf(r.DeltaP+s.Static, 0) || math.IsInf(r.Period, 0) {
+		return SurgeResult{}, fieldErrorf("dv", "these figures give a surge beyond any number: check the velocity change (%v), the moduli and the closure time", Fig(r.DeltaV, Velocity))
+	}
 	r.Fast = s.ClosureTime <= r.Period
 	r.Peak = s.Static + r.DeltaP
 	r.Low = s.Static - r.DeltaP

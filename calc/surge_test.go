@@ -125,6 +125,7 @@ func TestSurgeBadInputs(t *testing.T) {
 		{"diameter 0", with(func(s *Surge) { s.Pipes[0].Diameter = 0 }), "d"},
 		{"no pipes", with(func(s *Surge) { s.Pipes = nil }), "q"},
 		{"negative length", with(func(s *Surge) { s.Pipes[0].Length = -1 }), "length"},
+		{"a rise beyond any number", with(func(s *Surge) { s.DeltaV = 1e306 }), "dv"},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {

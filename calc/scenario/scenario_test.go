@@ -268,6 +268,7 @@ func FuzzScenario(f *testing.F) {
 	f.Add(Demo().Encode() + "&etam=92%&gcs=1.6%&gss=250kPa&gcd=1%&gsd=1000kPa&uqm=2%&upin=1.5%&uz=10mm&grade=2B" +
 		"&qsp=70L/s&nrat=1450rpm&fmains=50Hz&hours=3000&tariff=0.18")
 	f.Add("pq=0,10,20,30L/s&ph=40,44,42,30m&peff=0,0.5,0.7,0.6&spd=45Hz&fmains=0Hz&qsp=1e300L/s")
+	f.Add(TurbineDemo().Encode() + "&tc=1e-300s&wall=1e-300mm&epipe=1e300GPa&kliq=1e300GPa&cr=2&dv=1e300m/s")
 	f.Fuzz(func(t *testing.T, q string) {
 		s, _ := Parse(q)
 		r := Evaluate(s)
