@@ -58,9 +58,9 @@ func (b *builder) surgeFacts() []Fact {
 	if sr == nil {
 		return nil
 	}
-	closure := "fast: within the round trip, the full Joukowsky rise"
+	closure := "fast, within 2L/a: the full Joukowsky rise"
 	if !sr.Fast {
-		closure = "slower than the round trip 2L/a: the rise is smaller than Joukowsky's, which is an upper bound here; only a transient analysis gives the figure"
+		closure = "slower than 2L/a: Joukowsky's rise is only an upper bound"
 	}
 	out := []Fact{
 		{ID: "surge-a", Label: "wave speed at the valve (Korteweg)", Value: b.show(sr.WaveSpeed, calc.Velocity), Key: true},
