@@ -386,7 +386,7 @@ func (s *sheet) layout() app.UI {
 	case "line":
 		root = div("stack", div("duo", cards("line-card", "profile-card")...), div("stack", cards("seg-results", "segments")...))
 	case "pump":
-		root = div("stack", div("duo", div("col", cards("operating", "npsh", "turbine")...), div("col", cards("pump-chart-card", "profile-card")...)),
+		root = div("stack", div("duo", div("col", cards("operating", "npsh", "turbine", "surge")...), div("col", cards("pump-chart-card", "profile-card")...)),
 			div("duo even", div("col", cards("datasheet-card", "pump-side")...), div("col", cards("pump-setup", "field")...)))
 	default:
 		root = app.Article().Class("report").Body(cards(ids(vm.Cards)...)...)

@@ -71,8 +71,19 @@
 // curves by Brent's method. CheckPump turns gauge readings into pump head,
 // hydraulic power and wire-to-water efficiency. NPSH compares the NPSH
 // available at the pump inlet with the NPSH required. Turbine and
-// BestTurbineFlow give a turbine's net head and output, and the flow that
-// maximises it.
+// BestTurbineFlow give a turbine's net head and output, the flow that
+// maximises it, the losses' share of the gross head and the no-flow
+// pressure at the turbine's inlet.
+//
+// # Surge
+//
+// Surge.Evaluate is a screening estimate of water hammer for a valve
+// closing at the end of a line: each pipe's wave speed by Korteweg (1878,
+// WaveSpeed, in the form of Wylie & Streeter 1993), the wave's round trip
+// 2L/a, and Joukowsky's rise ρ·a·Δv, which is an upper bound for a closure
+// slower than 2L/a. WaterBulkModulus and SeawaterBulkModulus give the
+// liquid's bulk modulus from its speed of sound; materials carry an
+// elastic modulus (from memory). It is no transient analysis.
 //
 // # Pump tests
 //

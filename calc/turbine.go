@@ -19,8 +19,17 @@ type TurbineResult struct {
 	Efficiency       float64 // turbine-and-generator efficiency used, fraction
 	HydraulicPower   float64 // ρ·g·Q·NetHead, W
 	Power            float64 // output, ρ·g·Q·NetHead·η, W
-	Balance          BalanceResult
-	Warnings         []Warning
+	// LossShare is Losses/GrossHead and NetShare NetHead/GrossHead, the
+	// shares of the gross head lost in the line and left for the turbine
+	// (0 when there is no gross head).
+	LossShare, NetShare float64
+	// StaticInlet is the gauge pressure at point 2's elevation with the
+	// flow stopped, point 1's level and pressure held there:
+	// p1 (gauge) + ρ·g·(z1 − z2), Pa. It is what the turbine's inlet valve
+	// and the pipe there hold at rest, before any surge.
+	StaticInlet float64
+	Balance     BalanceResult
+	Warnings    []Warning
 }
 
 // checkTurbineEff validates a turbine efficiency (field "etat").
@@ -52,6 +61,10 @@ func Turbine(b Balance, eff float64) (TurbineResult, error) {
 	r.GrossHead = (b.In.P-b.Out.P)/rhog + b.In.Z - b.Out.Z
 	r.HydraulicPower = rhog * r.Q * r.NetHead
 	r.Power = r.HydraulicPower * eff
+	if r.GrossHead > 0 {
+		r.LossShare, r.NetShare = r.Losses/r.GrossHead, r.NetHead/r.GrossHead
+	}
+	r.StaticInlet = br.In.P - b.SitePressure + rhog*(br.In.Z-br.Out.Z)
 	if r.GrossHead <= 0 {
 		r.Warnings = append(r.Warnings, Warn("z1", CautionNoGrossHead, Fig(r.GrossHead, Length)))
 	} else if r.NetHead <= 0 {

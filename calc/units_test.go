@@ -56,6 +56,7 @@ func TestUnitSP811(t *testing.T) {
 		{"Pa", "1.0 E+00", true, 0, false},         // SI unit
 		{"kPa", "1.0 E+03", true, 0, false},        // SI prefix kilo
 		{"MPa", "1.0 E+06", true, 0, false},        // SI prefix mega
+		{"GPa", "1.0 E+09", true, 0, false},        // SI prefix giga
 		{"bar", "1.0 E+05", true, 0, false},        // bar, NIST SP 811 (2008) App. B, exact, from memory
 		{"mbar", "1.0 E+02", true, 0, false},       // millibar (mbar), NIST SP 811 (2008) App. B, exact, from memory
 		{"atm", "1.013 25 E+05", true, 0, false},   // atmosphere, standard (atm), NIST SP 811 (2008) App. B, exact, from memory
@@ -65,6 +66,7 @@ func TestUnitSP811(t *testing.T) {
 		// ↑ 1000 × millimeter of water, conventional, NIST SP 811 (2008) App. B, from memory
 		{"mmHg", "1.333 224 E+02", false, 0, false},  // millimeter of mercury, conventional (mmHg), NIST SP 811 (2008) App. B, from memory
 		{"psi", "6.894 757 E+03", false, 0, false},   // pound-force per square inch (psi), NIST SP 811 (2008) App. B, from memory
+		{"ksi", "6.894 757 E+06", false, 0, false},   // kip per square inch (ksi), NIST SP 811 (2008) App. B, from memory
 		{"ftH2O", "2.989 067 E+03", false, 0, false}, // foot of water, conventional (ftH2O), NIST SP 811 (2008) App. B, from memory
 		{"inH2O", "2.490 889 E+02", false, 0, false}, // inch of water, conventional (inH2O), NIST SP 811 (2008) App. B, from memory
 		{"inHg", "3.386 389 E+03", false, 0, false},  // inch of mercury, conventional (inHg), NIST SP 811 (2008) App. B, from memory
@@ -316,7 +318,7 @@ func TestUnitTable(t *testing.T) {
 func TestUnitsForOrder(t *testing.T) {
 	// Pickers list metric units first, then US customary ones, and start
 	// with the metric default.
-	us := map[string]bool{"ft": true, "in": true, "psi": true, "ftH2O": true, "inH2O": true, "inHg": true,
+	us := map[string]bool{"ft": true, "in": true, "psi": true, "ksi": true, "ftH2O": true, "inH2O": true, "inHg": true,
 		"ft/s": true, "gpm": true, "cfs": true, "MGD": true, "°F": true, "lb/ft³": true, "ft²/s": true,
 		"hp": true, "hp(E)": true, "ft²": true, "in²": true, "lb": true,
 		"kWh/kgal": true, "kWh/(kgal·100ft)": true}

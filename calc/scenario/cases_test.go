@@ -302,6 +302,35 @@ func observable(r Result, key string) (float64, string, error) {
 		case "lossfrac":
 			// Share of the gross head lost in the line and at the exit.
 			return (t.Losses + t.ExitVelocityHead) / t.GrossHead, "", nil
+		case "lossshare":
+			return t.LossShare, "", nil
+		case "static":
+			return t.StaticInlet, "", nil
+		}
+	case "surge":
+		sr := r.Surge
+		if sr == nil {
+			return miss()
+		}
+		switch name {
+		case "a":
+			return sr.WaveSpeed, "", nil
+		case "period":
+			return sr.Period, "", nil
+		case "dp":
+			return sr.DeltaP, "", nil
+		case "dh":
+			return sr.DeltaH, "", nil
+		case "static":
+			return sr.Static, "", nil
+		case "peak":
+			// Gauge, as the card shows it.
+			return sr.Static + sr.DeltaP, "", nil
+		case "fast":
+			if sr.Fast {
+				return 1, "", nil
+			}
+			return 0, "", nil
 		}
 	case "convert":
 		c := r.Convert

@@ -176,6 +176,25 @@
 //
 //	etat    turbine-and-generator efficiency, e.g. 82%
 //
+// Surge on a fast closure at point 2 (a screening estimate: Korteweg's
+// wave speed, Joukowsky's rise; with a pipe run or a line, and asked for
+// by tc):
+//
+//	tc      the valve's closing time, e.g. 2s; slower than the wave's
+//	        round trip 2L/a, the Joukowsky figure is only an upper bound
+//	dv      the velocity stopped, e.g. 1.5m/s (blank: the whole flow
+//	        velocity in the pipe at point 2)
+//	wall    the pipe's wall thickness, e.g. 14.6mm, for every pipe of the
+//	        line (blank: each from its size and schedule picked; needed
+//	        where an inside diameter is typed)
+//	epipe   the wall's elastic modulus, e.g. 1GPa, for every pipe (blank:
+//	        each from its material, from memory)
+//	kliq    the liquid's bulk modulus, e.g. 2.2GPa (blank: water from the
+//	        IAPWS-IF97 speed of sound, seawater from Mackenzie's; another
+//	        liquid needs it)
+//	cr      the restraint factor c, a plain number (blank: 1, a pipe with
+//	        expansion joints; 1 − ν² for one anchored throughout)
+//
 // The link's integrity field (see CheckParam, Sign):
 //
 //	ck      eight hex digits, the CRC-32 of the canonical query, written

@@ -71,6 +71,7 @@ func Evaluate(s Scenario) Result {
 		e.energy()
 	}
 	e.turbine()
+	e.surge(run, line)
 	if s.Has("cv") {
 		e.convert()
 	}

@@ -166,6 +166,14 @@ var Table = []Param{
 	{Name: "hours", Label: "running hours per year", Box: "Running hours per year", Hint: "(optional, for a yearly cost)", Kind: KindNumber},
 	{Name: "tariff", Label: "energy tariff per kWh", Box: "Energy tariff per kWh", Hint: "(any currency; optional)", Kind: KindNumber},
 	q("etat", "turbine-and-generator efficiency", "Turbine-and-generator efficiency", "", calc.Dimensionless, "%", "%", "enter the turbine-and-generator efficiency"),
+
+	// Surge on a fast closure at point 2 (calc.Surge): a closure time asks for it.
+	q("tc", "valve closing time", "Valve closing time", "(at point 2; for a surge estimate)", calc.Duration, "s", "s", "enter the time the valve takes to close"),
+	q("dv", "velocity stopped", "Velocity stopped", "(blank: the whole flow velocity)", calc.Velocity, "m/s", "ft/s", "enter the change of velocity at the valve"),
+	q("wall", "wall thickness", "Wall thickness", "(blank: from the size picked)", calc.Length, "mm", "in", "enter the pipe's wall thickness"),
+	q("epipe", "wall's elastic modulus", "Wall's elastic modulus", "(blank: from the material)", calc.Pressure, "GPa", "ksi", "enter the elastic modulus of the pipe wall"),
+	q("kliq", "liquid's bulk modulus", "Liquid's bulk modulus", "(blank for water and seawater)", calc.Pressure, "GPa", "ksi", "enter the liquid's bulk modulus"),
+	{Name: "cr", Label: "restraint factor", Box: "Restraint factor c", Hint: "(blank: 1, expansion joints throughout)", Kind: KindNumber},
 }
 
 func q(name, label, box, hint string, dim calc.Dimension, si, us, missing string) Param {

@@ -46,6 +46,7 @@ type Result struct {
 	Energy      *EnergyResult       // energy per volume pumped (measured, else at the operating point)
 	Turbine     *calc.TurbineResult // the turbine's output at the flow
 	BestTurbine *calc.TurbineResult // at the flow that gives the most output
+	Surge       *SurgeResult        // a closure at point 2, when a closure time is given
 }
 
 // Warning is a caution about a result. Param names the input it concerns,

@@ -270,6 +270,7 @@ func FuzzScenario(f *testing.F) {
 	f.Add("pq=0,10,20,30L/s&ph=40,44,42,30m&peff=0,0.5,0.7,0.6&spd=45Hz&fmains=0Hz&qsp=1e300L/s")
 	f.Add(strings.NewReplacer("liq=water", "liq=pg&glyv=30%", "t=18C", "t=-40C").Replace(Demo().Encode()))
 	f.Add("liq=eg&gly=60%&t=-48C&baro=20kPa&view=convert&cv=1e-300kPa")
+	f.Add(TurbineDemo().Encode() + "&tc=1e-300s&wall=1e-300mm&epipe=1e300GPa&kliq=1e300GPa&cr=2&dv=1e300m/s")
 	f.Fuzz(func(t *testing.T, q string) {
 		s, _ := Parse(q)
 		r := Evaluate(s)

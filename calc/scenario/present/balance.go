@@ -17,7 +17,11 @@ var solveLabels = map[string]string{
 // balanceView is the two-point energy balance: the answer, the two
 // points, what lies between them, the liquid and where the head goes.
 func (b *builder) balanceView() []Card {
-	return []Card{b.answerCard(), b.pointCard("1", "in"), b.pointCard("2", "out"), b.betweenCard(), b.liquidCard(), b.budgetCard()}
+	cards := []Card{b.answerCard(), b.pointCard("1", "in"), b.pointCard("2", "out"), b.betweenCard(), b.liquidCard(), b.budgetCard()}
+	if b.wantsSurge() {
+		cards = append(cards, b.surgeCard())
+	}
+	return cards
 }
 
 // solvedText is a value of the unknown as the sheet shows it; a pressure

@@ -38,7 +38,8 @@ func methodsFor(us bool) []Method {
 		{"Best efficiency", "the best-efficiency point is the peak of the parabola through the data sheet's highest efficiency and its two neighbours; the preferred operating region 70–120 % of its flow after ANSI/HI 9.6.3 (from memory)."},
 		{"Speed for a flow", "the affinity laws (Q ∝ n, H ∝ n²) and Brent's method for the speed at which the pumps meet the system curve at the flow asked for (or at the flow where the line needs the head asked for), checked against python3-scipy (PchipInterpolator, brentq); speed in rpm over the rated speed, or a drive's frequency over the mains frequency (an induction motor's speed follows its supply nearly in proportion, common practice)."},
 		{"Energy", "energy per volume pumped, input power over flow, in " + energy + ", beside the least possible ρ·g·H (common practice); a yearly cost from running hours and a tariff."},
-		{"Turbine", "output ρ·g·Q·H_net·η after the line's losses; the flow of most output by golden-section search."},
+		{"Turbine", "output ρ·g·Q·H_net·η after the line's losses; the flow of most output by golden-section search; losses and net head as shares of the gross head; the no-flow pressure at the turbine inlet from point 1's level and pressure."},
+		{"Surge", "a screening estimate for a valve closing at point 2: the wave speed of Korteweg (1878), a = √((K/ρ)/(1 + c·K·D/(E·e))), in the form of Wylie & Streeter, Fluid Transients in Systems (1993), with the restraint factor c (1 by default); the pressure rise of Joukowsky (1898/1900), Δp = ρ·a·Δv, for a closure within the wave's round trip 2L/a, an upper bound for a slower one; water's bulk modulus ρ·w² from the IAPWS-IF97 speed of sound (checked against python3-iapws), seawater's from the speed of sound of Mackenzie (1981, coefficients from memory, checked against TEOS-10 in python3-gsw); the pipe materials' elastic moduli from memory; checked against the formulas re-computed in python3-mpmath."},
 	}
 }
 

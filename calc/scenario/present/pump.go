@@ -17,7 +17,7 @@ import (
 // shows the turbine side instead.
 func (b *builder) pumpView() []Card {
 	if b.solve() == "ht" {
-		return []Card{b.turbineCard(), b.profileCard(), {ID: "pump-side", Title: "Pump side", Blocks: []Block{
+		return []Card{b.turbineCard(), b.surgeCard(), b.profileCard(), {ID: "pump-side", Title: "Pump side", Blocks: []Block{
 			text("muted", "", "The pump's operating point, NPSH and data sheet apply when the balance solves for the pump head."),
 			{Kind: BlockButtons, Buttons: []Button{{ID: "to-hp", Text: "Solve for the pump head", Class: "act",
 				Act: Action{Do: "choose", Param: "solve", Value: "hp"}}}},
@@ -674,5 +674,5 @@ func (b *builder) turbineFacts() []Fact {
 			Fact{Label: "net head at that flow", Value: b.head(best.NetHead)},
 		)
 	}
-	return out
+	return append(out, b.hydroFacts(t)...)
 }

@@ -286,8 +286,9 @@ func TestPumpViewIDs(t *testing.T) {
 			[]string{"operating", "npsh", "pump-chart-card", "datasheet-card", "pump-setup", "liquid", "field", "energy"},
 			[]string{"op-q", "answer"}},
 		{"turbine demo", scenario.TurbineDemo(),
-			[]string{"turbine", "profile-card", "pump-side"},
-			[]string{"answer", "turb-power", "turb-gross", "turb-net", "turb-best", "to-hp"}},
+			[]string{"turbine", "surge", "profile-card", "pump-side"},
+			[]string{"answer", "turb-power", "turb-gross", "turb-net", "turb-best", "turb-loss-share", "turb-static", "turb-best-note",
+				"in-tc", "surge-caution", "to-hp"}},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			sh, _ := sheetOf(t, tc.sc, "pump")

@@ -247,7 +247,7 @@ func (b *builder) reportResults() Card {
 	}
 	heading := func(ok bool, s string) Block { return maybe(ok, Block{Kind: BlockHeading, Text: s}) }
 	liquid := b.liquidFacts()
-	return Card{ID: "report-results", Class: "rsec", Title: "Results", Blocks: []Block{
+	return Card{ID: "report-results", Class: "rsec", Title: "Results", Blocks: append([]Block{
 		heading(liquid != nil, "Liquid"),
 		maybe(liquid != nil, Block{Kind: BlockFacts, Class: "facts", Facts: liquid}),
 		heading(br != nil, "Energy balance"),
@@ -275,7 +275,7 @@ func (b *builder) reportResults() Card {
 		maybe(energy != nil, Block{Kind: BlockFacts, Class: "facts", Facts: energy}),
 		heading(t != nil, "Turbine"),
 		maybe(t != nil, turb),
-	}}
+	}, b.reportSurge()...)}
 }
 
 // reportCharts holds both charts; ok is false when there is neither.

@@ -45,6 +45,7 @@ in|inch|m|-
 kPa|kPa|Pa|-
 bar|bar|Pa|-
 MPa|MPa|Pa|-
+GPa|GPa|Pa|-
 Pa|Pa|Pa|-
 mbar|millibar|Pa|-
 atm|atm|Pa|-
@@ -53,6 +54,7 @@ cmH2O|cm water|Pa|-
 mmH2O|mm water|Pa|-
 mmHg|mm Hg|Pa|-
 psi|psi|Pa|-
+ksi|ksi|Pa|-
 ftH2O|ft water|Pa|-
 inH2O|inch water|Pa|-
 inHg|inch Hg|Pa|-

@@ -1,0 +1,148 @@
+package present
+
+import (
+	"reflect"
+	"strings"
+	"testing"
+
+	"fieldhead/calc"
+	"fieldhead/calc/scenario"
+)
+
+// surgeDemo is the turbine demo with a wall thickness (160 mm PE, SDR 11:
+// 14.6 mm, as ISO 4427 gives it, from memory) and a closing time.
+func surgeDemo(t *testing.T, tc string) scenario.Scenario {
+	t.Helper()
+	sc := scenario.TurbineDemo().Clone()
+	for k, v := range map[string]string{"wall": "14.6mm", "tc": tc} {
+		if err := sc.Set(k, v); err != nil {
+			t.Fatal(err)
+		}
+	}
+	return sc
+}
+
+// The moduli's SI unit counts as SI after a figure in every US check.
+func init() { siTokens["GPa"] = true }
+
+func findCard(cards []Card, id string) *Card {
+	for i := range cards {
+		if cards[i].ID == id {
+			return &cards[i]
+		}
+	}
+	return nil
+}
+
+func TestSurgeCard(t *testing.T) {
+	// Source: the card words calc's surge figures (checked against
+	// python3-mpmath in ref-surge.case) with scenario.Show, under the
+	// screening caution, and says plainly when the closure is slower than
+	// 2L/a (Joukowsky's rise is then an upper bound: Wylie & Streeter 1993).
+	for _, c := range []struct {
+		tc    string
+		fast  bool
+		label string
+	}{{"1s", true, "Joukowsky"}, {"30s", false, "slower than 2L/a"}} {
+		sh, r := sheetOf(t, surgeDemo(t, c.tc), "balance")
+		if len(r.Errors) > 0 {
+			t.Fatalf("errors: %v", r.Errors)
+		}
+		sr := r.Surge
+		if sr == nil || sr.Fast != c.fast {
+			t.Fatalf("tc %s: surge %+v", c.tc, sr)
+		}
+		card := findCard(sh.Cards, "surge")
+		if card == nil {
+			t.Fatalf("no surge card on the Balance view")
+		}
+		var caution, answer bool
+		for _, b := range card.Blocks {
+			switch b.Kind {
+			case BlockLevel:
+				caution = strings.Contains(b.Text, "Screening estimate") && strings.Contains(b.Text, "licensed engineer") && strings.Contains(b.Text, "transient analysis")
+			case BlockAnswer:
+				answer = true
+				if !strings.Contains(b.Answer.Label, c.label) {
+					t.Errorf("tc %s: answer label %q, want it to say %q", c.tc, b.Answer.Label, c.label)
+				}
+				if want := scenario.Show(sr.DeltaP, calc.Pressure, false); b.Answer.Values[0].Text != want {
+					t.Errorf("tc %s: rise %q, want %q", c.tc, b.Answer.Values[0].Text, want)
+				}
+			}
+		}
+		if !caution || !answer {
+			t.Errorf("tc %s: caution %v, answer %v", c.tc, caution, answer)
+		}
+		rep, _ := sheetOf(t, surgeDemo(t, c.tc), "report")
+		found := false
+		walk(reflect.ValueOf(rep.Cards), "", func(_, s string) { found = found || strings.Contains(s, "Joukowsky rise") })
+		if !found {
+			t.Errorf("tc %s: the report has no surge line", c.tc)
+		}
+	}
+	// A sheet with no pipe between the points offers no surge card.
+	sc := scenario.Demo().Clone()
+	for i, n := 1, sc.SegmentCount(); i <= n; i++ {
+		for _, f := range scenario.SegmentFields {
+			_ = sc.Set(scenario.SegmentParam(i, f), "")
+		}
+	}
+	_ = sc.Set("hf", "5m")
+	if sh, _ := sheetOf(t, sc, "balance"); findCard(sh.Cards, "surge") != nil {
+		t.Error("a surge card without a pipe run")
+	}
+}
+
+func TestSurgeAndHydroUS(t *testing.T) {
+	// Source: a US sheet words every figure in US customary units
+	// (scenario.DefaultUnit with us): the surge and turbine figures too,
+	// moduli in ksi.
+	us := usOf(t, surgeDemo(t, "1s"))
+	for _, v := range []string{"balance", "pump", "report"} {
+		sh, r := sheetOf(t, us, v)
+		if len(r.Errors) > 0 {
+			t.Fatalf("%s: errors %v", v, r.Errors)
+		}
+		entered := enteredInSI(sh)
+		walk(reflect.ValueOf(sh.Cards), "", func(name, s string) {
+			if bad := siAfterDigit(s); len(bad) > 0 && !entered[s] {
+				t.Errorf("%s: %s %q has SI units %v", v, name, s, bad)
+			}
+		})
+	}
+}
+
+func TestHydroFacts(t *testing.T) {
+	// Source: the turbine card words calc's shares of the gross head and
+	// the no-flow inlet pressure p1 + ρ·g·(z1 − z2) (ref-surge.case checks
+	// the figures), and cautions that the flow of most output is not a
+	// design flow.
+	sh, r := sheetOf(t, scenario.TurbineDemo(), "pump")
+	tr := r.Turbine
+	if tr == nil || r.BestTurbine == nil {
+		t.Fatal("no turbine result for the turbine demo")
+	}
+	card := findCard(sh.Cards, "turbine")
+	if card == nil {
+		t.Fatal("no turbine card")
+	}
+	facts, labels := map[string]string{}, map[string]string{}
+	for _, b := range card.Blocks {
+		for _, f := range b.Facts {
+			facts[f.ID], labels[f.ID] = f.Value, f.Label
+		}
+	}
+	if got, want := facts["turb-loss-share"], percent(tr.LossShare); got != want {
+		t.Errorf("loss share %q, want %q", got, want)
+	}
+	if got := facts["turb-static"]; !strings.HasPrefix(got, scenario.Show(tr.StaticInlet, calc.Pressure, false)) {
+		t.Errorf("no-flow inlet pressure %q, want it to start with %q", got, scenario.Show(tr.StaticInlet, calc.Pressure, false))
+	}
+	if !strings.Contains(labels["turb-best-note"], "not a design flow") || !strings.HasPrefix(facts["turb-best-note"], percent(r.BestTurbine.LossShare)) {
+		t.Errorf("best-flow caution %q: %q", labels["turb-best-note"], facts["turb-best-note"])
+	}
+	if tr.GrossHead <= 0 || tr.LossShare+tr.NetShare > 1 {
+		t.Errorf("shares %g + %g of %g m", tr.LossShare, tr.NetShare, tr.GrossHead)
+	}
+}

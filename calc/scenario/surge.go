@@ -1,0 +1,229 @@
+package scenario
+
+import (
+	"errors"
+	"math"
+	"strings"
+
+	"fieldhead/calc"
+)
+
+// SurgeResult is the screening estimate of a fast closure at point 2 with
+// what it was worked out from.
+type SurgeResult struct {
+	calc.SurgeResult
+	ClosureTime float64 // s
+	BulkModulus float64 // K of the liquid used, Pa
+	// BulkFrom says where K comes from: "if97" (water, ρ·w² of IAPWS-IF97),
+	// "mackenzie" (seawater, ρ·c² with Mackenzie's sound speed) or "typed".
+	BulkFrom string
+	Pipes    []SurgePipe // from point 1 to the valve at point 2
+	// Static is the gauge pressure at point 2 with the flow stopped: the
+	// higher of point 1's level and pressure held on the closed valve,
+	// p1 + ρ·g·(z1 − z2), and point 2's own pressure. StaticKnown is false
+	// without a solved balance (the figures are then rises only).
+	Static      float64
+	StaticKnown bool
+}
+
+// SurgePipe is one pipe of the surge estimate with where its wall figures
+// come from.
+type SurgePipe struct {
+	calc.SurgePipe
+	WallFrom    string // "catalogue" (the pipe size picked) or "typed"
+	ModulusFrom string // "material" (its key in Material) or "typed"
+	Material    string // the material's name, "" when typed
+}
+
+// surge works out the surge of a closure at point 2 when a closure time
+// is given: the liquid's bulk modulus, each pipe's wall and modulus, then
+// calc.Surge.
+func (e *eval) surge(run *RunResult, line *calc.Line) {
+	if !e.s.Has("tc") || e.res.Fluid == nil {
+		return
+	}
+	tc, ok := e.quantity("tc")
+	if ok && !(tc > 0) {
+		e.fail("tc", "the closure time must be above zero")
+		ok = false
+	}
+	k, from, good := e.bulkModulus()
+	ok = ok && good
+	dv := 0.0
+	if e.s.Has("dv") {
+		v, good := e.quantity("dv")
+		if good && !(v > 0) {
+			e.fail("dv", "the velocity change must be above zero (blank: the whole flow velocity)")
+			good = false
+		}
+		ok, dv = ok && good, v
+	}
+	c := 1.0
+	if e.s.Has("cr") {
+		v, err := number("cr", e.s.Get("cr"))
+		if err != nil || !(v > 0 && v <= 2) {
+			e.fail("cr", "the restraint factor must be a number above 0 and at most 2, near 1 (1 with expansion joints, 1 − ν² anchored throughout)")
+			ok = false
+		}
+		c = v
+	}
+	pipes, good := e.surgePipes(run, line, c)
+	if !ok || !good {
+		return
+	}
+	q := 0.0
+	switch {
+	case e.res.Balance != nil:
+		q = e.res.Balance.Q
+	case e.s.Has("q"):
+		q, _ = e.quantity("q")
+	}
+	for i := range pipes {
+		d := pipes[i].Diameter
+		pipes[i].Velocity = q / (math.Pi * d * d / 4)
+	}
+	fl := e.res.Fluid
+	in := calc.Surge{Density: fl.Density, BulkModulus: k, ClosureTime: tc, DeltaV: dv,
+		Static: e.res.SitePressure, VapourPressure: fl.VapourPressure}
+	out := &SurgeResult{ClosureTime: tc, BulkModulus: k, BulkFrom: from, Pipes: pipes}
+	if br := e.res.Balance; br != nil {
+		rhog := fl.Density * calc.StandardGravity
+		in.Static = math.Max(br.In.P+rhog*(br.In.Z-br.Out.Z), br.Out.P)
+		out.StaticKnown = true
+	}
+	for _, p := range pipes {
+		in.Pipes = append(in.Pipes, p.SurgePipe)
+	}
+	r, err := in.Evaluate()
+	if err != nil {
+		var fe *calc.FieldError
+		if errors.As(err, &fe) && isKnown(fe.Field) {
+			e.failAt(fe.Field, err) // a surge input, whichever segment
+			return
+		}
+		e.failErr("tc", err)
+		return
+	}
+	out.SurgeResult = r
+	out.Static = in.Static - e.res.SitePressure
+	e.res.Surge = out
+	for _, w := range r.Warnings {
+		e.warnCalc("surge", w)
+	}
+}
+
+// bulkModulus is the liquid's bulk modulus: typed (kliq), else from the
+// speed of sound of water or seawater; another liquid needs it typed.
+func (e *eval) bulkModulus() (float64, string, bool) {
+	if e.s.Has("kliq") {
+		k, ok := e.quantity("kliq")
+		if ok && !(k > 0) {
+			e.fail("kliq", "the bulk modulus must be above zero (water near 20 °C: about 2.2 GPa)")
+			return 0, "", false
+		}
+		return k, "typed", ok
+	}
+	fl := e.res.Fluid
+	p := math.Max(e.res.SitePressure, fl.VapourPressure)
+	switch strings.TrimSpace(e.s.Get("liq")) {
+	case "", "water":
+		k, err := calc.WaterBulkModulus(fl.Temperature, p)
+		if err != nil {
+			e.failErr("t", err)
+			return 0, "", false
+		}
+		return k, "if97", true
+	case "seawater":
+		k, err := calc.SeawaterBulkModulus(fl.Temperature, p)
+		if err != nil {
+			e.failErr("t", err)
+			return 0, "", false
+		}
+		return k, "mackenzie", true
+	}
+	e.fail("kliq", "enter the liquid's bulk modulus for the surge estimate (it is known here only for water and seawater)")
+	return 0, "", false
+}
+
+// surgePipes are the pipes between the points, each with its wall
+// thickness (from the size picked, else the typed wall) and its wall's
+// modulus (typed epipe, else the material's), restraint factor c.
+func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePipe, bool) {
+	type spec struct {
+		pre    string
+		length float64
+		d      float64
+	}
+	var specs []spec
+	switch {
+	case line != nil:
+		for i, sg := range line.Segments {
+			specs = append(specs, spec{SegmentParam(i+1, ""), sg.Length, sg.Diameter})
+		}
+	case run != nil && e.runSpec.Diameter > 0:
+		specs = append(specs, spec{"", e.runSpec.Length, e.runSpec.Diameter})
+	default:
+		if !e.s.Has("l") && e.s.SegmentCount() == 0 {
+			e.fail("tc", "the surge estimate needs the pipe between the points: describe the pipe run or the line's segments")
+		}
+		return nil, false
+	}
+	ok := true
+	wall, typedWall := 0.0, false
+	if e.s.Has("wall") {
+		w, good := e.quantity("wall")
+		if good && !(w > 0) {
+			e.fail("wall", "the wall thickness must be above zero")
+			good = false
+		}
+		ok, wall, typedWall = ok && good, w, good
+	}
+	mod, typedMod := 0.0, false
+	if e.s.Has("epipe") {
+		m, good := e.quantity("epipe")
+		if good && !(m > 0) {
+			e.fail("epipe", "the elastic modulus must be above zero (steel about 200 GPa, PE about 1 GPa)")
+			good = false
+		}
+		ok, mod, typedMod = ok && good, m, good
+	}
+	var out []SurgePipe
+	for _, sp := range specs {
+		p := SurgePipe{SurgePipe: calc.SurgePipe{Length: sp.length, Diameter: sp.d, Restraint: c}}
+		switch {
+		case typedWall:
+			p.Wall, p.WallFrom = wall, "typed"
+		default:
+			ps, err := calc.LookupPipe(strings.TrimSpace(e.s.Get(sp.pre+"nps")), strings.TrimSpace(e.s.Get(sp.pre+"sch")))
+			if err != nil || !(e.s.Has(sp.pre+"nps") || e.s.Has(sp.pre+"sch")) || e.s.Has(sp.pre+"d") {
+				if !e.s.Has("wall") {
+					e.fail("wall", "enter the pipe's wall thickness for the surge estimate (or pick a nominal size and schedule)")
+				}
+				ok = false
+				continue
+			}
+			// A ductile iron pipe's wall leaves out its mortar lining,
+			// which carries little of the hoop load.
+			p.Wall, p.WallFrom = ps.Wall, "catalogue"
+		}
+		switch {
+		case typedMod:
+			p.Modulus, p.ModulusFrom = mod, "typed"
+		default:
+			m, err := calc.LookupMaterial(strings.TrimSpace(e.s.Get(sp.pre + "mat")))
+			if err != nil || !e.s.Has(sp.pre+"mat") || m.Modulus == 0 {
+				if !e.s.Has("epipe") {
+					e.fail("epipe", "enter the pipe wall's elastic modulus for the surge estimate (or pick the pipe's material)")
+				}
+				ok = false
+				continue
+			}
+			p.Modulus, p.ModulusFrom, p.Material = m.Modulus, "material", m.Name
+		}
+		out = append(out, p)
+	}
+	return out, ok
+}
+
+// isKnown reports whether name is a parameter of the link.
+func isKnown(name string) bool { _, ok := known[name]; return ok }
