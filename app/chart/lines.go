@@ -81,7 +81,7 @@ func (r *renderer) drawSeries(b []byte, p *panel) []byte {
 				x, y := r.x.px(s.X[j]), ys.px(s.Y[j])
 				if p.plot.contains(x, y) {
 					b = appendShape(b, shape, x, y, col)
-					r.placed = append(r.placed, rect{x - 7, y - 7, x + 7, y + 7})
+					r.pl.marks = append(r.pl.marks, rect{x - 7, y - 7, x + 7, y + 7})
 				}
 			}
 			continue
@@ -118,16 +118,30 @@ func (r *renderer) drawSeries(b []byte, p *panel) []byte {
 	return b
 }
 
-// drawTags writes each tagged series' short name at its last point inside
-// the plot, above the line or below it, with a paper halo.
-func (r *renderer) drawTags(b []byte, p *panel) []byte {
+// tagLabels are the names written on the lines: each tagged series' Tag,
+// or with Chart.Direct its Name. The spots are at the line's last point
+// in the plot, left of it above or below (the side TagBelow prefers
+// first), then at points farther back along the line.
+func (r *renderer) tagLabels(p *panel) []pendingLabel {
+	var out []pendingLabel
 	for i := range p.c.Series {
 		s := &p.c.Series[i]
-		if s.Tag == "" || s.Style == Points {
+		name := s.Tag
+		if name == "" && r.c.Direct {
+			name = s.Name
+		}
+		if name == "" || s.Style == Points {
 			continue
 		}
 		ys := r.yScale(p, s.Y2)
-		for j := min(len(s.X), len(s.Y)) - 1; j >= 0; j-- {
+		w := textWidth(name, fontSmall) + 4
+		h := fontSmall * 1.2
+		// The preferred side all along the walk first, then the other:
+		// two lines close together keep their order (EGL above HGL).
+		var first, second []rect
+		var ex, ey, lx, ly float64
+		n := min(len(s.X), len(s.Y))
+		for j := n - 1; j >= 0 && len(first) < 24; j-- {
 			if !finite(s.X[j]) || !finite(s.Y[j]) {
 				continue
 			}
@@ -135,21 +149,31 @@ func (r *renderer) drawTags(b []byte, p *panel) []byte {
 			if !p.plot.contains(x, y) {
 				continue
 			}
-			dy := -7.0
-			if s.TagBelow {
-				dy = fontSmall + 5
+			if first == nil {
+				ex, ey = x, y
+			} else if math.Hypot(x-lx, y-ly) < 14 {
+				continue // walk back along the line in steps of about 14 px
 			}
-			b = append(b, `<g data-line="`...)
-			b = appendText(b, s.Key)
-			b = append(b, `">`...)
-			b = r.haloText(b, x-4, y+dy, []string{s.Tag}, "end", fontSmall, true, r.colour(s.Accent))
-			w := textWidth(s.Tag, fontSmall)
-			r.placed = append(r.placed, rect{x - 4 - w, y + dy - fontSmall, x - 4, y + dy + 3})
-			b = append(b, "</g>"...)
-			break
+			lx, ly = x, y
+			above := rect{x - 4 - w, y - 5 - h, x - 4, y - 5}
+			below := rect{x - 4 - w, y + 5, x - 4, y + 5 + h}
+			if s.TagBelow {
+				above, below = below, above
+			}
+			first, second = append(first, above), append(second, below)
+		}
+		var spots []rect
+		if first != nil {
+			// Past the end, to its right, when there is room.
+			right := rect{ex + 6, ey - h/2, ex + 6 + w, ey + h/2}
+			spots = append(append(append(spots, first[0], right), first[1:]...), second...)
+		}
+		if spots != nil {
+			out = append(out, pendingLabel{lines: []string{name}, colour: r.colour(s.Accent), p: p, spots: spots,
+				bold: true, size: fontSmall, key: s.Key, x: ex, y: ey})
 		}
 	}
-	return b
+	return out
 }
 
 // pointShape returns the shape of a Points series, choosing the next

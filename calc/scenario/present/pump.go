@@ -269,17 +269,22 @@ func (b *builder) pumpChart(id, caption string) Block {
 	}
 	if bep := pr.BEP; bep != nil {
 		lo, hi := bep.Region()
-		ch.Bands = append(ch.Bands, Band{X0: qu.FromSI(lo), X1: qu.FromSI(hi),
+		ch.Bands = append(ch.Bands, Band{X0: qu.FromSI(lo), X1: qu.FromSI(hi), Keep: true,
 			Label: "preferred region"}) // its bounds are in the caption and the facts: a band's label must fit a phone's chart
-		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(bep.Q), Y: hu.FromSI(bep.H),
+		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(bep.Q), Y: hu.FromSI(bep.H), Role: MarkPeak,
 			Label: "best efficiency\n" + b.param("q", bep.Q) + ", " + percent(bep.Eff)})
 	}
 	if f := b.r.Field; f != nil && f.Head > 0 {
 		label := "measured\n" + b.param("qm", f.Q) + ", " + b.head(f.Head)
+		m := Marker{X: qu.FromSI(f.Q), Y: hu.FromSI(f.Head), Role: MarkMeasured}
 		if u := b.r.FieldBands; u != nil {
 			label += " ± " + b.head(u.Head.U)
+			// The box spans the band either side: in display units, as a
+			// difference (no offset in any flow or length unit).
+			m.DX, m.DY = qu.FromSI(f.Q+u.Flow.U)-m.X, hu.FromSI(f.Head+u.Head.U)-m.Y
 		}
-		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(f.Q), Y: hu.FromSI(f.Head), Label: label})
+		m.Label = label
+		ch.Markers = append(ch.Markers, m)
 	}
 	if sf := pr.SpeedFor; sf != nil {
 		xs, ys = sampleCurve(sf.Curve.MinFlow(), sf.Curve.MaxFlow(), sf.Curve.Head, qu, hu)
@@ -287,7 +292,7 @@ func (b *builder) pumpChart(id, caption string) Block {
 		if sf.ByHead {
 			goal = b.head(sf.H)
 		}
-		add(RolePumpBase, "at "+percent(sf.Ratio)+" speed for "+goal, xs, ys)
+		add(RoleSpeed, "at "+percent(sf.Ratio)+" speed for "+goal, xs, ys)
 	}
 	if c.HasEfficiency() {
 		pct := displayUnit("peff", b.us)

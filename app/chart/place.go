@@ -1,0 +1,93 @@
+package chart
+
+import "math"
+
+// placer puts label boxes on a plot, greedily in the order they are
+// asked for: each takes the first of its candidate spots, in order of
+// preference, that stays inside the bounds and overlaps no label placed
+// before it, preferring among those a spot that covers no symbol and no
+// line. A label that finds no free spot is not placed (the caller writes
+// it under the plot instead), so no two placed labels ever overlap.
+type placer struct {
+	bounds rect
+	taken  []rect       // labels placed; never overlapped
+	marks  []rect       // symbols and boxes, avoided when possible
+	segs   [][4]float64 // line pieces, avoided when possible
+}
+
+func (a rect) overlaps(b rect) bool { return a.l < b.r && a.r > b.l && a.t < b.b && a.b > b.t }
+
+func (a rect) inside(b rect) bool { return a.l >= b.l && a.r <= b.r && a.t >= b.t && a.b <= b.b }
+
+// place picks the best free spot among cands and marks it taken. It
+// returns the spot's index, or −1 when every spot leaves the bounds or
+// overlaps a placed label.
+func (pl *placer) place(cands []rect) int {
+	best, bestCost := -1, math.Inf(1)
+	for i, c := range cands {
+		if !c.inside(pl.bounds) {
+			continue
+		}
+		free := true
+		for _, o := range pl.taken {
+			if c.overlaps(o) {
+				free = false
+				break
+			}
+		}
+		if !free {
+			continue
+		}
+		cost := 0.0
+		for _, m := range pl.marks {
+			if c.overlaps(m) {
+				cost += 4
+			}
+		}
+		for _, g := range pl.segs {
+			if _, _, _, _, hit := clipSegment(c, g[0], g[1], g[2], g[3]); hit {
+				cost++
+			}
+		}
+		// Later spots are farther from their point: a small price each,
+		// so a spot that crosses one line more still beats one far off.
+		cost += 0.04 * float64(i)
+		if cost < bestCost {
+			best, bestCost = i, cost
+		}
+		if cost < 0.04*float64(i)+1e-9 && i < 8 {
+			break // a clear spot near the point: take it
+		}
+	}
+	if best >= 0 {
+		pl.taken = append(pl.taken, cands[best])
+	}
+	return best
+}
+
+// pointSpots are the candidate boxes, w × h, for a label of the point
+// (x, y): the eight spots around it at increasing distances, nearest
+// first.
+func pointSpots(x, y, w, h float64) []rect {
+	var out []rect
+	for _, d := range [...]float64{12, 26, 44, 70, 100, 140} {
+		for _, o := range [...][2]float64{
+			{d, -d - h},          // above right
+			{d, d - 2},           // below right
+			{-d - w, -d - h},     // above left
+			{-d - w, d - 2},      // below left
+			{-w / 2, -d - 4 - h}, // above
+			{-w / 2, d + 4},      // below
+			{d + 4, -h / 2},      // right
+			{-d - 4 - w, -h / 2}, // left
+		} {
+			out = append(out, rect{x + o[0], y + o[1], x + o[0] + w, y + o[1] + h})
+		}
+	}
+	return out
+}
+
+// nearest returns the point of r closest to (x, y).
+func (a rect) nearest(x, y float64) (float64, float64) {
+	return math.Max(a.l, math.Min(x, a.r)), math.Max(a.t, math.Min(y, a.b))
+}
