@@ -45,16 +45,17 @@ func chartWidthFor(w int) int {
 	return max(280, min(720, vb))
 }
 
+// chartSVG draws a chart of the view model as SVG text.
+func chartSVG(c *present.Chart) string {
+	if c.Kind == "pump" {
+		return pumpChart(c).SVG()
+	}
+	return profileChart(c).SVG()
+}
+
 // chartFigure draws a chart with its caption.
 func chartFigure(c *present.Chart) app.UI {
-	var svg string
-	switch c.Kind {
-	case "pump":
-		svg = pumpChart(c).SVG()
-	default:
-		svg = profileChart(c).SVG()
-	}
-	body := []app.UI{app.Div().Class("chart").Body(app.Raw(svg))}
+	body := []app.UI{app.Div().Class("chart").Body(app.Raw(chartSVG(c)))}
 	if c.Caption != "" {
 		body = append(body, app.P().Class("caption").Text(c.Caption))
 	}

@@ -49,6 +49,9 @@ const (
 	// Dot is a small filled disc: a figure given on paper (a data-sheet
 	// point).
 	Dot
+	// Ring is a small open circle: a reading taken on site (drawn inside
+	// its uncertainty box).
+	Ring
 	// Peak is a filled triangle standing on the point: the top of a curve
 	// (the best-efficiency point).
 	Peak

@@ -17,7 +17,7 @@ const (
 	sampleW    = 52.0 // legend sample length
 	tickLen    = 6.0
 	gridColour = "#cdd2d6"
-	areaFill   = "#e3e6e9"
+	areaFill   = "#eceae2" // a warm grey, lighter than the tint
 	hatch      = "#a9b0b6"
 	tint       = "#e9e6da" // the page's track colour: a range to keep to, a measurement's box
 	ink2       = "#3b4249"

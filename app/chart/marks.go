@@ -232,6 +232,9 @@ func (r *renderer) placeLabels(b []byte, labels []pendingLabel) ([]byte, []strin
 			spots = pointSpots(l.x, l.y, w+4, h)
 		}
 		i := r.pl.place(spots)
+		if i < 0 && l.spots == nil {
+			i = r.pl.place(r.pl.scan(l.x, l.y, w+4, h))
+		}
 		if i < 0 {
 			notes = append(notes, joinLines(l.lines))
 			// The note's number beside the point, where it finds room (the
@@ -255,7 +258,7 @@ func (r *renderer) placeLabels(b []byte, labels []pendingLabel) ([]byte, []strin
 				b = appendPt(appendPt(b, 'M', l.x, l.y), 'L', nx, ny)
 				b = append(b, `" stroke="`...)
 				b = append(b, l.colour...)
-				b = append(b, `" stroke-width="1"/>`...)
+				b = append(b, `" stroke-width="1.5" data-leader=""/>`...)
 			}
 		}
 		// The text is drawn from the box's left edge: every anchor is
@@ -335,6 +338,13 @@ func appendShape(b []byte, s Shape, x, y float64, col string) []byte {
 		b = append(b, `" stroke="`...)
 		b = append(b, col...)
 		return append(b, `" stroke-width="2.8" stroke-linecap="round"/>`...)
+	case Ring:
+		b = append(b, `<circle cx="`...)
+		b = appendNum(b, x)
+		b = append(b, `" cy="`...)
+		b = appendNum(b, y)
+		b = append(b, `" r="3.8`...)
+		return end(b, "2")
 	case Dot:
 		b = append(b, `<circle cx="`...)
 		b = appendNum(b, x)

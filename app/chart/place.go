@@ -1,6 +1,9 @@
 package chart
 
-import "math"
+import (
+	"math"
+	"sort"
+)
 
 // placer puts label boxes on a plot, greedily in the order they are
 // asked for: each takes the first of its candidate spots, in order of
@@ -38,20 +41,25 @@ func (pl *placer) place(cands []rect) int {
 		if !free {
 			continue
 		}
-		cost := 0.0
+		// Later spots are farther from their point: a small price each,
+		// so a spot that crosses one line more still beats one far off.
+		cost := 0.04 * float64(i)
 		for _, m := range pl.marks {
 			if c.overlaps(m) {
 				cost += 4
 			}
 		}
 		for _, g := range pl.segs {
+			if cost >= bestCost {
+				break // no better than the best so far
+			}
+			if math.Max(g[0], g[2]) < c.l || math.Min(g[0], g[2]) > c.r || math.Max(g[1], g[3]) < c.t || math.Min(g[1], g[3]) > c.b {
+				continue // far from the box
+			}
 			if _, _, _, _, hit := clipSegment(c, g[0], g[1], g[2], g[3]); hit {
 				cost++
 			}
 		}
-		// Later spots are farther from their point: a small price each,
-		// so a spot that crosses one line more still beats one far off.
-		cost += 0.04 * float64(i)
 		if cost < bestCost {
 			best, bestCost = i, cost
 		}
@@ -90,4 +98,31 @@ func pointSpots(x, y, w, h float64) []rect {
 // nearest returns the point of r closest to (x, y).
 func (a rect) nearest(x, y float64) (float64, float64) {
 	return math.Max(a.l, math.Min(x, a.r)), math.Max(a.t, math.Min(y, a.b))
+}
+
+// scan is the last resort: boxes w × h at every 12 px across the bounds,
+// nearest to (x, y) first.
+func (pl *placer) scan(x, y, w, h float64) []rect {
+	var out []rect
+	q := pl.bounds
+	for t := q.t; t+h <= q.b; t += 12 {
+		for l := q.l; l+w <= q.r; l += 12 {
+			out = append(out, rect{l, t, l + w, t + h})
+		}
+	}
+	d := make([]float64, len(out))
+	for i, a := range out {
+		nx, ny := a.nearest(x, y)
+		d[i] = math.Hypot(nx-x, ny-y)
+	}
+	idx := make([]int, len(out))
+	for i := range idx {
+		idx[i] = i
+	}
+	sort.SliceStable(idx, func(i, j int) bool { return d[idx[i]] < d[idx[j]] })
+	sorted := make([]rect, len(out))
+	for i, k := range idx {
+		sorted[i] = out[k]
+	}
+	return sorted
 }

@@ -107,7 +107,7 @@ func TestUncertaintyBoxSize(t *testing.T) {
 	if cx, cy := num(m[1])+num(m[3])/2, num(m[2])+num(m[4])/2; math.Abs(cx-r.x.px(41)) > 0.1 || math.Abs(cy-p.y.px(50.8)) > 0.1 {
 		t.Errorf("box centred at (%.1f, %.1f), the point is at (%.1f, %.1f)", cx, cy, r.x.px(41), p.y.px(50.8))
 	}
-	if !regexp.MustCompile(`<g data-mark="measured"><circle`).MatchString(svg) {
+	if !regexp.MustCompile(`<g data-mark="measured"><circle[^>]* fill="#ffffff"`).MatchString(svg) {
 		t.Error("the measured point is not drawn as an open circle")
 	}
 }

@@ -43,7 +43,7 @@ type PumpSystemInput struct {
 	Operating []Marker
 	// Peaks are best-efficiency points: filled ink triangles.
 	Peaks []Marker
-	// Measured are measured points: open ink circles, each with its
+	// Measured are measured points: small open ink rings, each with its
 	// uncertainty box when its DX or DY is set.
 	Measured []Marker
 	// Bands are flow ranges: hatched (beyond the data sheet, unstable), or
@@ -126,7 +126,7 @@ func PumpSystemChart(in PumpSystemInput) Chart {
 		c.Markers = append(c.Markers, m)
 	}
 	for _, m := range in.Measured {
-		m.Shape, m.Key, m.Accent = Circle, "measured", false
+		m.Shape, m.Key, m.Accent = Ring, "measured", false
 		c.Markers = append(c.Markers, m)
 	}
 	for _, m := range in.Peaks {

@@ -172,21 +172,29 @@ func (b *builder) npshCard() Card {
 // pumpChartCard holds the pump and system chart.
 func (b *builder) pumpChartCard() Card {
 	pr := b.r.Pump
-	caption := "Accent: the pump's head curve through the data-sheet points (squares). Dash-dot: the head the line needs at each flow. They cross at the operating point."
+	// The chart's language (DEVELOPERS.md, "chart language") in words.
+	caption := "Heavy accent line: the pump's head curve as it runs, through the data sheet's points (filled dots). Dashed ink: the head the line needs at each flow. They cross at the operating point (ringed). Each line is named at its end."
 	if pr != nil && len(pr.System) > 0 {
 		caption += " At zero flow the line needs " + b.head(pr.System[0].H) + " (levels and pressures alone); the rest is friction, fittings and velocity head."
 	}
 	if pr != nil && pr.BEP != nil {
-		caption += " The shaded band is the preferred operating region, 70–120 % of the best-efficiency flow (ANSI/HI 9.6.3, from memory), around the marked best-efficiency point."
+		caption += " The tinted band is the preferred operating region, 70–120 % of the best-efficiency flow (ANSI/HI 9.6.3, from memory), around the best-efficiency point (filled triangle)."
 	}
 	if b.r.Field != nil {
-		caption += " The point marked measured is the field check's flow and head."
+		caption += " The open ring is the field check's measured flow and head"
+		if b.r.FieldBands != nil {
+			caption += "; the box around it spans the readings' uncertainty, ± flow across and ± head up and down"
+		}
+		caption += "."
 	}
 	if pr != nil && pr.SpeedFor != nil {
-		caption += " A second pump curve shows the speed that meets the flow asked for."
+		caption += " A thinner accent curve is the pump at the speed that meets the flow asked for."
+	}
+	if pr != nil && pr.Curve.HasEfficiency() {
+		caption += " The strip below: the pump's efficiency at each flow."
 	}
 	if pr != nil && (pr.Curve.HasNPSHr() || len(pr.NPSHa) > 0) {
-		caption += " Lower panel: NPSH the pump requires (solid) and NPSH available at its inlet (dashed); available must stay above required."
+		caption += " Bottom strip: NPSH the pump requires (solid) and NPSH available at its inlet (dashed); available must stay above required."
 	}
 	return Card{ID: "pump-chart-card", Class: "chart-card", Title: "Pump and system curves", Blocks: []Block{
 		maybe(pr == nil, text("muted", "", "Drawn once the data sheet has at least three points.")),
