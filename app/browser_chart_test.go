@@ -93,3 +93,35 @@ func TestBrowserFieldCheckUS(t *testing.T) {
 // visibleText is every text of the page but the pickers' option lists
 // (which offer every unit), the link, and the report's inputs as entered.
 const visibleText = `(() => { const w = document.createTreeWalker(document.body, NodeFilter.SHOW_TEXT, {acceptNode: n => n.parentElement.closest("select, script, style, .print-only, .linktext, #report-inputs td, #report-segments td") ? NodeFilter.FILTER_REJECT : NodeFilter.FILTER_ACCEPT}); let out = []; while (w.nextNode()) out.push(w.currentNode.nodeValue); return out.join("\n"); })()`
+
+// TestPhoneTabRows: on phones (320 to 412 px wide) the seven view tabs
+// take at most two rows, each tab at least 44 px tall (WCAG 2.2 SC 2.5.8's
+// enhanced target size, the sheet's touch rule) and none cut: its name
+// fits its box. Screenshots: tabs-<width>.png.
+func TestPhoneTabRows(t *testing.T) {
+	site := testSite(t)
+	b := newTab(t)
+	srv := newSiteServer(t, site)
+	sc := scenario.Demo()
+	for _, w := range []int{320, 360, 390, 412} {
+		if err := chromedp.Do(b.ctx, chromedp.EmulateViewport(int64(w), 740, chromedp.EmulatePortrait, chromedp.EmulateMobile, chromedp.EmulateTouch)); err != nil {
+			t.Fatal(err)
+		}
+		b.navigate(srv.URL + "/?" + sc.Encode())
+		got := b.js(`(() => {
+			const tabs = [...document.querySelectorAll(".tabs .tab")];
+			const rows = new Set(tabs.map(e => Math.round(e.getBoundingClientRect().top)));
+			const low = tabs.filter(e => e.getBoundingClientRect().height < 44).length;
+			const cut = tabs.filter(e => { const n = e.querySelector(".tab-name"); return n && n.scrollWidth > e.clientWidth; }).length;
+			return [tabs.length, rows.size, low, cut].join(" ");
+		})()`)
+		var n, rows, low, cut int
+		if _, err := fmt.Sscan(got, &n, &rows, &low, &cut); err != nil {
+			t.Fatalf("%d px: %q: %v", w, got, err)
+		}
+		if n != len(present.Views) || rows > 2 || low > 0 || cut > 0 {
+			t.Errorf("%d px: %d tabs in %d rows (want %d in at most 2), %d under 44 px tall, %d cut", w, n, rows, len(present.Views), low, cut)
+		}
+		b.shot(fmt.Sprintf("tabs-%d", w))
+	}
+}

@@ -287,14 +287,21 @@ func headroom(lo, hi float64, fixLo, fixHi bool) (float64, float64, bool, bool) 
 // would stick out of the picture.
 func (r *renderer) layoutX(left, right float64, y2 bool) {
 	for pass := 0; pass < 2; pass++ {
-		n := int((right-left)/100) + 1
-		for ; ; n-- {
+		// Of the tick counts whose labels do not touch, the one whose
+		// rounded limits waste the least width (a phone's 0–1500 for data
+		// to 1110 becomes 0–1200); more ticks on a tie.
+		var best scale
+		for n := int((right-left)/70) + 1; n >= 2; n-- {
 			r.x = niceScale(r.xlo, r.xhi, r.xfLo, r.xfHi, n)
 			r.x.p0, r.x.p1 = left, right
-			if n <= 2 || !r.xCrowded() {
-				break
+			if n > 2 && (r.xCrowded() || len(r.x.ticks) > int((right-left)/100)+3) {
+				continue
+			}
+			if best.ticks == nil || r.x.hi-r.x.lo < best.hi-best.lo {
+				best = r.x
 			}
 		}
+		r.x = best
 		if y2 || len(r.x.ticks) == 0 {
 			return
 		}

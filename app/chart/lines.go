@@ -138,10 +138,10 @@ func (r *renderer) tagLabels(p *panel) []pendingLabel {
 		h := fontSmall * 1.2
 		// The preferred side all along the walk first, then the other:
 		// two lines close together keep their order (EGL above HGL).
-		var first, second []rect
+		var first, second, later []rect
 		var ex, ey, lx, ly float64
 		n := min(len(s.X), len(s.Y))
-		for j := n - 1; j >= 0 && len(first) < 24; j-- {
+		for j := n - 1; j >= 0 && len(first) < 60; j-- {
 			if !finite(s.X[j]) || !finite(s.Y[j]) {
 				continue
 			}
@@ -161,12 +161,16 @@ func (r *renderer) tagLabels(p *panel) []pendingLabel {
 				above, below = below, above
 			}
 			first, second = append(first, above), append(second, below)
+			// The same beginning at the point, for lines whose left
+			// stretch is crowded or which start near the axis.
+			right := func(a rect) rect { return rect{x + 4, a.t, x + 4 + w, a.b} }
+			later = append(later, right(above), right(below))
 		}
 		var spots []rect
 		if first != nil {
 			// Past the end, to its right, when there is room.
 			right := rect{ex + 6, ey - h/2, ex + 6 + w, ey + h/2}
-			spots = append(append(append(spots, first[0], right), first[1:]...), second...)
+			spots = append(append(append(append(spots, first[0], right), first[1:]...), second...), later...)
 		}
 		if spots != nil {
 			out = append(out, pendingLabel{lines: []string{name}, colour: r.colour(s.Accent), p: p, spots: spots,

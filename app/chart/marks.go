@@ -208,8 +208,8 @@ func (r *renderer) uncertaintyBox(b []byte, p *panel, m Marker, ys *scale, col s
 	return b
 }
 
-// placeLabels places every pending label, band labels first, then
-// marker labels, then line names, each in the first free spot (see
+// placeLabels places every pending label in the order given (bands',
+// markers', then lines' names), each in the first free spot (see
 // placer). A label farther than a short reach from its point gets a thin
 // leader. Labels with no free spot are numbered at their point and
 // returned as notes, to be written under the plot.
@@ -231,9 +231,13 @@ func (r *renderer) placeLabels(b []byte, labels []pendingLabel) ([]byte, []strin
 		if spots == nil {
 			spots = pointSpots(l.x, l.y, w+4, h)
 		}
-		i := r.pl.place(spots)
+		px, py := l.x, l.y // a marker's label may be set off with a leader
+		if l.spots != nil {
+			px, py = math.NaN(), math.NaN()
+		}
+		i := r.pl.place(spots, px, py)
 		if i < 0 && l.spots == nil {
-			i = r.pl.place(r.pl.scan(l.x, l.y, w+4, h))
+			i = r.pl.place(r.pl.scan(l.x, l.y, w+4, h), px, py)
 		}
 		if i < 0 {
 			notes = append(notes, joinLines(l.lines))
@@ -241,7 +245,7 @@ func (r *renderer) placeLabels(b []byte, labels []pendingLabel) ([]byte, []strin
 			// note's own text names the point's figures in any case).
 			n := itoa(len(notes))
 			nw, nh := textWidth(n, fontSmall)+4, fontSmall*1.2
-			if j := r.pl.place(pointSpots(l.x, l.y, nw, nh)); j >= 0 {
+			if j := r.pl.place(pointSpots(l.x, l.y, nw, nh), math.NaN(), math.NaN()); j >= 0 {
 				box := r.pl.taken[len(r.pl.taken)-1]
 				r.labelBoxes = append(r.labelBoxes, box)
 				b = r.haloText(b, box.l+2, box.t+fontSmall*0.95, []string{n}, "start", fontSmall, true, l.colour)
@@ -252,8 +256,7 @@ func (r *renderer) placeLabels(b []byte, labels []pendingLabel) ([]byte, []strin
 		r.labelBoxes = append(r.labelBoxes, box)
 		if l.spots == nil {
 			// A leader from the point to the label when it sits off.
-			nx, ny := box.nearest(l.x, l.y)
-			if math.Hypot(nx-l.x, ny-l.y) > 24 {
+			if nx, ny, far := box.leader(l.x, l.y); far {
 				b = append(b, `<path d="`...)
 				b = appendPt(appendPt(b, 'M', l.x, l.y), 'L', nx, ny)
 				b = append(b, `" stroke="`...)

@@ -8,7 +8,7 @@ import (
 // placer puts label boxes on a plot, greedily in the order they are
 // asked for: each takes the first of its candidate spots, in order of
 // preference, that stays inside the bounds and overlaps no label placed
-// before it, preferring among those a spot that covers no symbol and no
+// before it and no symbol, preferring among those a spot that crosses no
 // line. A label that finds no free spot is not placed (the caller writes
 // it under the plot instead), so no two placed labels ever overlap.
 type placer struct {
@@ -25,7 +25,12 @@ func (a rect) inside(b rect) bool { return a.l >= b.l && a.r <= b.r && a.t >= b.
 // place picks the best free spot among cands and marks it taken. It
 // returns the spot's index, or −1 when every spot leaves the bounds or
 // overlaps a placed label.
-func (pl *placer) place(cands []rect) int {
+//
+// With a finite point (x, y), a spot farther than leaderReach from it
+// will get a leader line to it, so a spot whose leader would cross a
+// placed label is not free either, and the leader chosen becomes a line
+// for later labels to avoid.
+func (pl *placer) place(cands []rect, x, y float64) int {
 	best, bestCost := -1, math.Inf(1)
 	for i, c := range cands {
 		if !c.inside(pl.bounds) {
@@ -38,6 +43,14 @@ func (pl *placer) place(cands []rect) int {
 				break
 			}
 		}
+		if lx, ly, far := c.leader(x, y); free && far {
+			for _, o := range pl.taken {
+				if _, _, _, _, hit := clipSegment(o, x, y, lx, ly); hit {
+					free = false
+					break
+				}
+			}
+		}
 		if !free {
 			continue
 		}
@@ -46,8 +59,12 @@ func (pl *placer) place(cands []rect) int {
 		cost := 0.04 * float64(i)
 		for _, m := range pl.marks {
 			if c.overlaps(m) {
-				cost += 4
+				free = false // a label never hides a mark
+				break
 			}
+		}
+		if !free {
+			continue
 		}
 		for _, g := range pl.segs {
 			if cost >= bestCost {
@@ -69,8 +86,24 @@ func (pl *placer) place(cands []rect) int {
 	}
 	if best >= 0 {
 		pl.taken = append(pl.taken, cands[best])
+		if lx, ly, far := cands[best].leader(x, y); far {
+			pl.segs = append(pl.segs, [4]float64{x, y, lx, ly})
+		}
 	}
 	return best
+}
+
+// leaderReach is how far a label may sit from its point without a leader.
+const leaderReach = 24
+
+// leader returns where a leader from (x, y) meets the box a, and whether
+// the box is far enough to need one (never for a NaN point).
+func (a rect) leader(x, y float64) (float64, float64, bool) {
+	if !finite(x) || !finite(y) {
+		return 0, 0, false
+	}
+	nx, ny := a.nearest(x, y)
+	return nx, ny, math.Hypot(nx-x, ny-y) > leaderReach
 }
 
 // pointSpots are the candidate boxes, w × h, for a label of the point

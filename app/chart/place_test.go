@@ -68,19 +68,30 @@ func TestPlaceLabelsApart(t *testing.T) {
 // inside its bounds and free of labels, prefers one clear of symbols and
 // lines, and refuses when none is free.
 func TestPlacerFirstFree(t *testing.T) {
+	nan := math.NaN()
 	pl := placer{bounds: rect{0, 0, 100, 100}}
-	if i := pl.place([]rect{{-5, 0, 10, 10}, {0, 0, 10, 10}}); i != 1 {
+	if i := pl.place([]rect{{-5, 0, 10, 10}, {0, 0, 10, 10}}, nan, nan); i != 1 {
 		t.Errorf("took spot %d, want 1 (the first is outside the bounds)", i)
 	}
-	if i := pl.place([]rect{{5, 5, 15, 15}, {20, 0, 30, 10}}); i != 1 {
+	if i := pl.place([]rect{{5, 5, 15, 15}, {20, 0, 30, 10}}, nan, nan); i != 1 {
 		t.Errorf("took spot %d, want 1 (the first overlaps a label)", i)
 	}
 	pl.marks = append(pl.marks, rect{40, 0, 50, 10})
-	if i := pl.place([]rect{{40, 0, 50, 10}, {60, 0, 70, 10}}); i != 1 {
+	if i := pl.place([]rect{{40, 0, 50, 10}, {60, 0, 70, 10}}, nan, nan); i != 1 {
 		t.Errorf("took spot %d, want 1 (the first covers a symbol)", i)
 	}
-	if i := pl.place([]rect{{0, 0, 10, 10}, {22, 2, 28, 8}}); i != -1 {
+	pl.segs = append(pl.segs, [4]float64{60, 20, 70, 30})
+	if i := pl.place([]rect{{58, 18, 72, 32}, {80, 20, 90, 30}}, nan, nan); i != 1 {
+		t.Errorf("took spot %d, want 1 (the first crosses a line)", i)
+	}
+	if i := pl.place([]rect{{0, 0, 10, 10}, {22, 2, 28, 8}}, nan, nan); i != -1 {
 		t.Errorf("took spot %d, want none (every spot overlaps a label)", i)
+	}
+	// A spot whose leader from the point (25, 90) would cross a label
+	// (at 20–30, 50–60) is not free; one beside the point is.
+	pl.taken = append(pl.taken, rect{20, 50, 30, 60})
+	if i := pl.place([]rect{{20, 20, 30, 25}, {30, 80, 40, 85}}, 25, 90); i != 1 {
+		t.Errorf("took spot %d, want 1 (the first one's leader crosses a label)", i)
 	}
 }
 

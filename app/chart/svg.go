@@ -192,6 +192,9 @@ func (r *renderer) draw(b []byte) []byte {
 	for _, p := range r.panels {
 		tags = append(tags, r.tagLabels(p)...)
 	}
+	// The markers' labels before the lines' names: a name can sit
+	// anywhere along its line, and names placed first would wall a point
+	// in.
 	all := append(append(r.bandLabels, labels...), tags...)
 	body, notes := r.placeLabels(body, all)
 	y := r.h - 4
