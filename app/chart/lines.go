@@ -139,22 +139,11 @@ func (r *renderer) tagLabels(p *panel) []pendingLabel {
 		// The preferred side all along the walk first, then the other:
 		// two lines close together keep their order (EGL above HGL).
 		var first, second, later []rect
-		var ex, ey, lx, ly float64
-		n := min(len(s.X), len(s.Y))
-		for j := n - 1; j >= 0 && len(first) < 60; j-- {
-			if !finite(s.X[j]) || !finite(s.Y[j]) {
-				continue
-			}
-			x, y := r.x.px(s.X[j]), ys.px(s.Y[j])
-			if !p.plot.contains(x, y) {
-				continue
-			}
+		var ex, ey float64
+		at := func(x, y float64) {
 			if first == nil {
 				ex, ey = x, y
-			} else if math.Hypot(x-lx, y-ly) < 14 {
-				continue // walk back along the line in steps of about 14 px
 			}
-			lx, ly = x, y
 			above := rect{x - 4 - w, y - 5 - h, x - 4, y - 5}
 			below := rect{x - 4 - w, y + 5, x - 4, y + 5 + h}
 			if s.TagBelow {
@@ -165,6 +154,31 @@ func (r *renderer) tagLabels(p *panel) []pendingLabel {
 			// stretch is crowded or which start near the axis.
 			right := func(a rect) rect { return rect{x + 4, a.t, x + 4 + w, a.b} }
 			later = append(later, right(above), right(below))
+		}
+		// Walk back from the last point in the plot, along the line, a
+		// spot every 14 px or so (between vertices too: a profile has few).
+		n := min(len(s.X), len(s.Y))
+		var px, py float64
+		have := false
+		for j := n - 1; j >= 0 && len(first) < 80; j-- {
+			if !finite(s.X[j]) || !finite(s.Y[j]) {
+				have = false
+				continue
+			}
+			x, y := r.x.px(s.X[j]), ys.px(s.Y[j])
+			if have {
+				steps := int(math.Min(math.Hypot(x-px, y-py)/14, 80))
+				for k := 1; k <= steps && len(first) < 80; k++ {
+					f := float64(k) / float64(steps+1)
+					if qx, qy := px+(x-px)*f, py+(y-py)*f; p.plot.contains(qx, qy) {
+						at(qx, qy)
+					}
+				}
+			}
+			if p.plot.contains(x, y) {
+				at(x, y)
+			}
+			px, py, have = x, y, true
 		}
 		var spots []rect
 		if first != nil {
