@@ -138,7 +138,7 @@ func (r *renderer) tagLabels(p *panel) []pendingLabel {
 		h := fontSmall * 1.2
 		// The preferred side all along the walk first, then the other:
 		// two lines close together keep their order (EGL above HGL).
-		var first, second, later []rect
+		var first, second, later, farther []rect
 		var ex, ey float64
 		at := func(x, y float64) {
 			if first == nil {
@@ -154,6 +154,13 @@ func (r *renderer) tagLabels(p *panel) []pendingLabel {
 			// stretch is crowded or which start near the axis.
 			right := func(a rect) rect { return rect{x + 4, a.t, x + 4 + w, a.b} }
 			later = append(later, right(above), right(below))
+			// A little farther off the line, either side.
+			off := func(a rect, dy float64) rect { return rect{a.l, a.t + dy, a.r, a.b + dy} }
+			d := 16.0
+			if s.TagBelow {
+				d = -d
+			}
+			farther = append(farther, off(above, -d), off(below, d), off(right(above), -d), off(right(below), d))
 		}
 		// Walk back from the last point in the plot, along the line, a
 		// spot every 14 px or so (between vertices too: a profile has few).
@@ -184,7 +191,7 @@ func (r *renderer) tagLabels(p *panel) []pendingLabel {
 		if first != nil {
 			// Past the end, to its right, when there is room.
 			right := rect{ex + 6, ey - h/2, ex + 6 + w, ey + h/2}
-			spots = append(append(append(append(spots, first[0], right), first[1:]...), second...), later...)
+			spots = append(append(append(append(append(spots, first[0], right), first[1:]...), second...), later...), farther...)
 		}
 		if spots != nil {
 			out = append(out, pendingLabel{lines: []string{name}, colour: r.colour(s.Accent), p: p, spots: spots,
