@@ -33,6 +33,9 @@ func (a rect) inside(b rect) bool { return a.l >= b.l && a.r <= b.r && a.t >= b.
 func (pl *placer) place(cands []rect, x, y float64) int {
 	best, bestCost := -1, math.Inf(1)
 	for i, c := range cands {
+		if 0.04*float64(i) >= bestCost {
+			break // every later spot costs at least this much
+		}
 		if !c.inside(pl.bounds) {
 			continue
 		}
@@ -80,8 +83,8 @@ func (pl *placer) place(cands []rect, x, y float64) int {
 		if cost < bestCost {
 			best, bestCost = i, cost
 		}
-		if cost < 0.04*float64(i)+1e-9 && i < 8 {
-			break // a clear spot near the point: take it
+		if cost < 0.04*float64(i)+1e-9 {
+			break // a clear spot: no later one can be cheaper
 		}
 	}
 	if best >= 0 {
