@@ -45,16 +45,17 @@ func chartWidthFor(w int) int {
 	return max(280, min(720, vb))
 }
 
+// chartSVG draws a chart of the view model as SVG text.
+func chartSVG(c *present.Chart) string {
+	if c.Kind == "pump" {
+		return pumpChart(c).SVG()
+	}
+	return profileChart(c).SVG()
+}
+
 // chartFigure draws a chart with its caption.
 func chartFigure(c *present.Chart) app.UI {
-	var svg string
-	switch c.Kind {
-	case "pump":
-		svg = pumpChart(c).SVG()
-	default:
-		svg = profileChart(c).SVG()
-	}
-	body := []app.UI{app.Div().Class("chart").Body(app.Raw(svg))}
+	body := []app.UI{app.Div().Class("chart").Body(app.Raw(chartSVG(c)))}
 	if c.Caption != "" {
 		body = append(body, app.P().Class("caption").Text(c.Caption))
 	}
@@ -70,7 +71,7 @@ func bands(bs []present.Band) []chart.Band {
 		if x1 < b.X0 {
 			x1 = math.Inf(1) // to the right edge
 		}
-		out = append(out, chart.Band{X0: b.X0, X1: x1, Label: b.Label})
+		out = append(out, chart.Band{X0: b.X0, X1: x1, Label: b.Label, Tint: b.Keep})
 	}
 	return out
 }
@@ -83,6 +84,8 @@ func pumpChart(c *present.Chart) chart.Chart {
 		switch cu.Role {
 		case present.RolePump, present.RolePumpBase:
 			in.Pumps = append(in.Pumps, curve(cu))
+		case present.RoleSpeed:
+			in.Speeds = append(in.Speeds, curve(cu))
 		case present.RoleDataPoints:
 			in.DataPoints = curve(cu)
 		case present.RoleSystem:
@@ -96,7 +99,15 @@ func pumpChart(c *present.Chart) chart.Chart {
 		}
 	}
 	for _, m := range c.Markers {
-		in.Operating = append(in.Operating, chart.Marker{X: m.X, Y: m.Y, Label: m.Label})
+		mk := chart.Marker{X: m.X, Y: m.Y, Label: m.Label, DX: m.DX, DY: m.DY}
+		switch m.Role {
+		case present.MarkPeak:
+			in.Peaks = append(in.Peaks, mk)
+		case present.MarkMeasured:
+			in.Measured = append(in.Measured, mk)
+		default:
+			in.Operating = append(in.Operating, mk)
+		}
 	}
 	return chart.PumpSystemChart(in)
 }

@@ -12,6 +12,9 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+
+	"fieldhead/calc/scenario"
+	"fieldhead/calc/scenario/present"
 )
 
 // The contrast of the palette in web/fieldhead.css, by the formulas of
@@ -373,4 +376,57 @@ func TestPaletteContrast(t *testing.T) {
 		t.Errorf("only %d pairs found: the stylesheet parser is missing rules", len(seen))
 	}
 	t.Logf("%d colour pairs checked, %d below the WCAG 2.1 AA minimum; the closest is %s", len(seen), failed, lowestAt)
+}
+
+// TestChartContrast draws the demo's pump chart (in US units, with
+// accuracies: every kind of mark) and the profile chart, and checks every
+// colour the SVG uses for text against the chart's white paper at 4.5:1
+// (WCAG 2.1 SC 1.4.3), and every line and mark stroke at 3:1 (SC 1.4.11,
+// graphical objects), except the grid, the hatching and the tints, which
+// carry no meaning of their own (the bands are named in words).
+func TestChartContrast(t *testing.T) {
+	sc := scenario.Demo()
+	for _, kv := range [][2]string{{"units", "us"}, {"gcs", "1.6%"}, {"gss", "250kPa"}, {"gcd", "1.6%"}, {"gsd", "1000kPa"},
+		{"uqm", "2%"}, {"grade", "2B"}, {"qsp", "70L/s"}} {
+		if err := sc.Set(kv[0], kv[1]); err != nil {
+			t.Fatal(err)
+		}
+	}
+	paper, _ := parseHex("#ffffff")
+	decorative := map[string]bool{"#cdd2d6": true, "#a9b0b6": true, "#e9e6da": true, "#eceae2": true, "#f1f2f3": true, "#ffffff": true}
+	for _, view := range []string{"pump", "line"} {
+		_ = sc.Set("view", view)
+		d := scenario.NewDraft(sc)
+		sh := present.Build(&d, scenario.Evaluate(sc))
+		var svg string
+		for _, c := range sh.Cards {
+			for _, bl := range c.Blocks {
+				if bl.Chart != nil {
+					svg += chartSVG(bl.Chart)
+				}
+			}
+		}
+		if !strings.Contains(svg, "<text") {
+			t.Fatalf("%s view: no chart drawn", view)
+		}
+		text := regexp.MustCompile(`<text[^>]* fill="(#[0-9a-fA-F]{3,6})"`)
+		for _, m := range text.FindAllStringSubmatch(svg, -1) {
+			c, err := parseHex(m[1])
+			if err != nil {
+				t.Fatal(err)
+			}
+			if r := contrast(c, paper); r < 4.5 {
+				t.Errorf("%s view: chart text in %s is %.2f:1 on white, under 4.5:1", view, m[1], r)
+			}
+		}
+		for _, m := range regexp.MustCompile(`stroke="(#[0-9a-fA-F]{3,6})"`).FindAllStringSubmatch(svg, -1) {
+			if decorative[strings.ToLower(m[1])] {
+				continue
+			}
+			c, _ := parseHex(m[1])
+			if r := contrast(c, paper); r < 3 {
+				t.Errorf("%s view: chart stroke %s is %.2f:1 on white, under 3:1", view, m[1], r)
+			}
+		}
+	}
 }

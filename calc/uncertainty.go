@@ -38,12 +38,13 @@ func (b Band) Dominant() string {
 	return b.Terms[0].Field
 }
 
-// FieldBands holds the bands of a field check's results: pump head
-// (m), hydraulic power (W), wire-to-water and pump efficiency (shares).
+// FieldBands holds the bands of a field check's results: flow (m³/s,
+// the flow meter's share of the reading), pump head (m), hydraulic power
+// (W), wire-to-water and pump efficiency (shares).
 // Wire and Pump are empty without a measured input (and, for Pump, a
 // motor efficiency, which is taken as exact).
 type FieldBands struct {
-	Head, Power, Wire, Pump Band
+	Flow, Head, Power, Wire, Pump Band
 }
 
 // Uncertainty propagates the instruments' accuracy a to the results of a
@@ -95,7 +96,7 @@ func (fc FieldCheck) Uncertainty(fl Fluid, a Accuracy) (FieldBands, error) {
 		Term{"zd", rhog * fc.Q * a.Height},
 		Term{"qm", rhog * (fc.Head + 2*fc.VelocityHead) * uq},
 	)
-	out := FieldBands{Head: head, Power: power}
+	out := FieldBands{Flow: band(Term{"qm", uq}), Head: head, Power: power}
 	if fc.Efficiency > 0 {
 		share := func(eta float64) Band {
 			terms := make([]Term, 0, len(power.Terms)+1)

@@ -53,6 +53,11 @@ func TestUncertainty(t *testing.T) {
 			}
 		})
 	}
+	// The flow's band is the meter's share of the reading (a ±2 % meter
+	// reading 30 L/s: ±0.6 L/s, the definition of "% of reading").
+	if u, _ := fc.Uncertainty(fl, Accuracy{Flow: 0.02}); math.Abs(u.Flow.U-0.0006) > 1e-15 || u.Flow.Dominant() != "qm" {
+		t.Errorf("flow band ±%g m³/s, want ±0.0006 from qm", u.Flow.U)
+	}
 	// The power meter adds its share to the efficiencies only.
 	u, _ := fc.Uncertainty(fl, Accuracy{Power: 0.015})
 	if u.Head.U != 0 || u.Power.U != 0 || math.Abs(u.Wire.U-0.015*fc.Efficiency) > 1e-15 || u.Wire.Dominant() != "pin" {

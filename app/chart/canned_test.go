@@ -140,7 +140,7 @@ func TestCannedCharts(t *testing.T) {
 	}{
 		{"pump-system", PumpSystemChart(demoPumpInput()), []string{
 			"flow Q (L/s)", "head H (m)", "pump at 100 % speed", "pump at 90 % speed", "system curve",
-			"data-sheet points", "efficiency (right axis)", "efficiency η (%)", "NPSH (m)", "NPSH required",
+			"efficiency", "efficiency η (%)", "NPSH (m)", "NPSH required",
 			"NPSH available", "operating point", "beyond data sheet"}},
 		{"pump-system-bare", PumpSystemChart(PumpSystemInput{FlowLabel: "flow (gpm)", HeadLabel: "head (ft)",
 			Pumps:   []Curve{{Name: "pump", X: []float64{0, 500, 1000}, Y: []float64{200, 180, 120}}},

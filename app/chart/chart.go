@@ -46,6 +46,15 @@ const (
 	Diamond
 	// Cross is a diagonal cross.
 	Cross
+	// Dot is a small filled disc: a figure given on paper (a data-sheet
+	// point).
+	Dot
+	// Ring is a small open circle: a reading taken on site (drawn inside
+	// its uncertainty box).
+	Ring
+	// Peak is a filled triangle standing on the point: the top of a curve
+	// (the best-efficiency point).
+	Peak
 )
 
 // Series is one named polyline. X and Y are paired by index (the shorter
@@ -89,6 +98,12 @@ type Marker struct {
 	Drop bool
 	// Y2 places the marker against the second (right) y axis.
 	Y2 bool
+	// DX and DY, when either is above zero, are the ± of a measurement in
+	// data units: a box of 2·DX by 2·DY is drawn around the mark, with
+	// whiskers from the mark to its sides (data-mark="uncertainty").
+	DX, DY float64
+	// Key names the mark in the SVG (data-mark), for tests and styles.
+	Key string
 }
 
 // Band is a shaded, hatched x-range across the plot, for example the flows
@@ -98,6 +113,9 @@ type Band struct {
 	X0, X1 float64
 	// Label is written at the top of the band (or beside the guide).
 	Label string
+	// Tint fills the band with a flat tint instead of hatching: a range
+	// to keep to (hatching marks a range to distrust or avoid).
+	Tint bool
 }
 
 // Axis describes a second y axis on the right of the plot.
@@ -119,6 +137,9 @@ type Chart struct {
 	XLabel, YLabel string
 	// Series are drawn in order; the legend lists them in the same order.
 	Series []Series
+	// Direct names each series on the plot, at the free spot nearest its
+	// right end, instead of in a legend above it.
+	Direct bool
 	// Markers are drawn on top of the series.
 	Markers []Marker
 	// Bands are drawn beneath the series.
@@ -133,9 +154,10 @@ type Chart struct {
 	XMin, XMax, YMin, YMax *float64
 	// Y2 adds a second y axis on the right for series and markers with Y2 set.
 	Y2 *Axis
-	// Lower is an optional second panel drawn below this one, sharing the
-	// x axis (its own X limits, Title, Lower, Accent and Width are ignored;
-	// its Height, default 1/2 of this chart's, sets the panel's height).
+	// Lower is an optional panel drawn below this one, sharing the x axis
+	// (its own X limits, Title, Accent and Width are ignored; its Height,
+	// default 1/2 of this chart's, sets the panel's height). A Lower's own
+	// Lower is drawn below it, and so on: a stack of strips.
 	Lower *Chart
 	// Accent is the one accent colour as a CSS colour ("" = DefaultAccent).
 	Accent string

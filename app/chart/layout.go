@@ -17,8 +17,9 @@ const (
 	sampleW    = 52.0 // legend sample length
 	tickLen    = 6.0
 	gridColour = "#cdd2d6"
-	areaFill   = "#e3e6e9"
+	areaFill   = "#eceae2" // a warm grey, lighter than the tint
 	hatch      = "#a9b0b6"
+	tint       = "#e9e6da" // the page's track colour: a range to keep to, a measurement's box
 	ink2       = "#3b4249"
 	paper      = "#ffffff"
 )
@@ -31,6 +32,7 @@ type legendItem struct {
 
 type panel struct {
 	c                       *Chart
+	height                  float64 // asked for, px
 	top                     float64
 	titleY                  float64 // baseline of the chart title, 0 if none
 	legend                  []legendItem
@@ -56,10 +58,11 @@ type renderer struct {
 	x          scale
 	xlo, xhi   float64 // x data limits before rounding
 	xfLo, xfHi bool
-	placed     []rect // boxes of labels already placed
-	late       []byte // band labels, written over the lines
-	labels     bool   // some marker has a label (line pieces are then kept)
-	markerN    int    // Points series seen, for automatic shapes
+	pl         placer         // labels placed so far, and what they avoid
+	labelBoxes []rect         // every label box drawn, for tests
+	bandLabels []pendingLabel // placed before the markers' labels
+	labels     bool           // some marker has a label (line pieces are then kept)
+	markerN    int            // Points series seen, for automatic shapes
 }
 
 func newRenderer(c *Chart) *renderer {
@@ -96,17 +99,16 @@ func (r *renderer) render(b []byte) []byte {
 		h = math.Round(r.w * 0.6)
 	}
 	h = math.Max(h, 160)
-	main := &panel{c: c, hasY2: c.Y2 != nil}
+	main := &panel{c: c, hasY2: c.Y2 != nil, height: h}
 	r.panels = append(r.panels, main)
-	lowerH := 0.0
-	if c.Lower != nil {
-		lp := &panel{c: c.Lower, hasY2: c.Lower.Y2 != nil}
-		r.panels = append(r.panels, lp)
-		lowerH = float64(c.Lower.Height)
+	// The strips below, a chain of Lower charts (at most a few; a cycle
+	// is cut).
+	for lc, n := c.Lower, 0; lc != nil && lc != c && n < 8; lc, n = lc.Lower, n+1 {
+		lowerH := float64(lc.Height)
 		if lowerH <= 0 {
 			lowerH = math.Round(h / 2)
 		}
-		lowerH = math.Max(lowerH, 140)
+		r.panels = append(r.panels, &panel{c: lc, hasY2: lc.Y2 != nil, height: math.Max(lowerH, 140)})
 	}
 
 	// X limits from every panel; they do not depend on the layout.
@@ -174,10 +176,7 @@ func (r *renderer) render(b []byte) []byte {
 	// Vertical layout, panel by panel.
 	y := 0.0
 	for i, p := range r.panels {
-		ph := h
-		if i == 1 {
-			ph = lowerH
-		}
+		ph := p.height
 		p.top = y
 		y += pad
 		if i == 0 && c.Title != "" {
@@ -288,14 +287,21 @@ func headroom(lo, hi float64, fixLo, fixHi bool) (float64, float64, bool, bool) 
 // would stick out of the picture.
 func (r *renderer) layoutX(left, right float64, y2 bool) {
 	for pass := 0; pass < 2; pass++ {
-		n := int((right-left)/100) + 1
-		for ; ; n-- {
+		// Of the tick counts whose labels do not touch, the one whose
+		// rounded limits waste the least width (a phone's 0–1500 for data
+		// to 1110 becomes 0–1200); more ticks on a tie.
+		var best scale
+		for n := int((right-left)/70) + 1; n >= 2; n-- {
 			r.x = niceScale(r.xlo, r.xhi, r.xfLo, r.xfHi, n)
 			r.x.p0, r.x.p1 = left, right
-			if n <= 2 || !r.xCrowded() {
-				break
+			if n > 2 && (r.xCrowded() || len(r.x.ticks) > int((right-left)/100)+3) {
+				continue
+			}
+			if best.ticks == nil || r.x.hi-r.x.lo < best.hi-best.lo {
+				best = r.x
 			}
 		}
+		r.x = best
 		if y2 || len(r.x.ticks) == 0 {
 			return
 		}

@@ -3,6 +3,9 @@ package chart
 // layoutLegend places the legend entries of p in rows starting at y and
 // returns the y below them.
 func (r *renderer) layoutLegend(p *panel, y float64) float64 {
+	if r.c.Direct {
+		return y // the lines are named on the plot
+	}
 	x := pad
 	rows := 0
 	for i := range p.c.Series {

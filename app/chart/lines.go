@@ -81,7 +81,7 @@ func (r *renderer) drawSeries(b []byte, p *panel) []byte {
 				x, y := r.x.px(s.X[j]), ys.px(s.Y[j])
 				if p.plot.contains(x, y) {
 					b = appendShape(b, shape, x, y, col)
-					r.placed = append(r.placed, rect{x - 7, y - 7, x + 7, y + 7})
+					r.pl.marks = append(r.pl.marks, rect{x - 7, y - 7, x + 7, y + 7})
 				}
 			}
 			continue
@@ -118,38 +118,87 @@ func (r *renderer) drawSeries(b []byte, p *panel) []byte {
 	return b
 }
 
-// drawTags writes each tagged series' short name at its last point inside
-// the plot, above the line or below it, with a paper halo.
-func (r *renderer) drawTags(b []byte, p *panel) []byte {
+// tagLabels are the names written on the lines: each tagged series' Tag,
+// or with Chart.Direct its Name. The spots are at the line's last point
+// in the plot, left of it above or below (the side TagBelow prefers
+// first), then at points farther back along the line.
+func (r *renderer) tagLabels(p *panel) []pendingLabel {
+	var out []pendingLabel
 	for i := range p.c.Series {
 		s := &p.c.Series[i]
-		if s.Tag == "" || s.Style == Points {
+		name := s.Tag
+		if name == "" && r.c.Direct {
+			name = s.Name
+		}
+		if name == "" || s.Style == Points {
 			continue
 		}
 		ys := r.yScale(p, s.Y2)
-		for j := min(len(s.X), len(s.Y)) - 1; j >= 0; j-- {
+		w := textWidth(name, fontSmall) + 4
+		h := fontSmall * 1.2
+		// The preferred side all along the walk first, then the other:
+		// two lines close together keep their order (EGL above HGL).
+		var first, second, later, farther []rect
+		var ex, ey float64
+		at := func(x, y float64) {
+			if first == nil {
+				ex, ey = x, y
+			}
+			above := rect{x - 4 - w, y - 5 - h, x - 4, y - 5}
+			below := rect{x - 4 - w, y + 5, x - 4, y + 5 + h}
+			if s.TagBelow {
+				above, below = below, above
+			}
+			first, second = append(first, above), append(second, below)
+			// The same beginning at the point, for lines whose left
+			// stretch is crowded or which start near the axis.
+			right := func(a rect) rect { return rect{x + 4, a.t, x + 4 + w, a.b} }
+			later = append(later, right(above), right(below))
+			// A little farther off the line, either side.
+			off := func(a rect, dy float64) rect { return rect{a.l, a.t + dy, a.r, a.b + dy} }
+			d := 16.0
+			if s.TagBelow {
+				d = -d
+			}
+			farther = append(farther, off(above, -d), off(below, d), off(right(above), -d), off(right(below), d))
+		}
+		// Walk back from the last point in the plot, along the line, a
+		// spot every 14 px or so (between vertices too: a profile has few).
+		n := min(len(s.X), len(s.Y))
+		var px, py float64
+		have := false
+		for j := n - 1; j >= 0 && len(first) < 80; j-- {
 			if !finite(s.X[j]) || !finite(s.Y[j]) {
+				have = false
 				continue
 			}
 			x, y := r.x.px(s.X[j]), ys.px(s.Y[j])
-			if !p.plot.contains(x, y) {
-				continue
+			if have {
+				steps := int(math.Min(math.Hypot(x-px, y-py)/14, 80))
+				for k := 1; k <= steps && len(first) < 80; k++ {
+					f := float64(k) / float64(steps+1)
+					if qx, qy := px+(x-px)*f, py+(y-py)*f; p.plot.contains(qx, qy) {
+						at(qx, qy)
+					}
+				}
 			}
-			dy := -7.0
-			if s.TagBelow {
-				dy = fontSmall + 5
+			if p.plot.contains(x, y) {
+				at(x, y)
 			}
-			b = append(b, `<g data-line="`...)
-			b = appendText(b, s.Key)
-			b = append(b, `">`...)
-			b = r.haloText(b, x-4, y+dy, []string{s.Tag}, "end", fontSmall, true, r.colour(s.Accent))
-			w := textWidth(s.Tag, fontSmall)
-			r.placed = append(r.placed, rect{x - 4 - w, y + dy - fontSmall, x - 4, y + dy + 3})
-			b = append(b, "</g>"...)
-			break
+			px, py, have = x, y, true
+		}
+		var spots []rect
+		if first != nil {
+			// Past the end, to its right, when there is room.
+			right := rect{ex + 6, ey - h/2, ex + 6 + w, ey + h/2}
+			spots = append(append(append(append(append(spots, first[0], right), first[1:]...), second...), later...), farther...)
+		}
+		if spots != nil {
+			out = append(out, pendingLabel{lines: []string{name}, colour: r.colour(s.Accent), p: p, spots: spots,
+				bold: true, size: fontSmall, key: s.Key, x: ex, y: ey})
 		}
 	}
-	return b
+	return out
 }
 
 // pointShape returns the shape of a Points series, choosing the next

@@ -2,6 +2,7 @@ package chart
 
 import (
 	"math"
+	"strconv"
 	"strings"
 )
 
@@ -33,16 +34,9 @@ func (r *renderer) drawBands(b []byte, p *panel) []byte {
 			b = append(b, `" stroke="`+ink2+`" stroke-width="1.5" stroke-dasharray="6 4"/>`...)
 			if bd.Label != "" {
 				w := textWidth(bd.Label, fontSmall)
-				anchor, tx := "start", x+5
-				if x+5+w > q.r {
-					anchor, tx = "end", x-5
-				}
-				r.late = r.haloText(r.late, tx, q.t+18, []string{bd.Label}, anchor, fontSmall, false, ink2)
-				l := tx
-				if anchor == "end" {
-					l = tx - w
-				}
-				r.placed = append(r.placed, rect{l, q.t + 4, l + w, q.t + 22})
+				r.bandLabels = append(r.bandLabels, pendingLabel{x: x, y: q.t, lines: []string{bd.Label}, colour: ink2, p: p,
+					spots: []rect{{x + 5, q.t + 4, x + 5 + w, q.t + 22}, {x - 5 - w, q.t + 4, x - 5, q.t + 22},
+						{x + 5, q.t + 24, x + 5 + w, q.t + 42}, {x - 5 - w, q.t + 24, x - 5, q.t + 42}}})
 			}
 			continue
 		}
@@ -65,58 +59,60 @@ func (r *renderer) drawBands(b []byte, p *panel) []byte {
 		b = appendNum(b, rr-l)
 		b = append(b, `" height="`...)
 		b = appendNum(b, q.b-q.t)
-		b = append(b, `" fill="#f1f2f3"/><path d="`...)
-		// 45° hatching every 12 px, anchored to the page so that bands
-		// next to each other line up.
-		h := q.b - q.t
-		start := math.Floor((l-h)/12) * 12
-		for k := start; k <= rr; k += 12 {
-			ax, ay, bx, by, ok := clipSegment(band, k, q.b, k+h, q.t)
-			if !ok {
-				continue
+		if bd.Tint {
+			// A range to keep to: a flat tint edged by two thin rules.
+			b = append(b, `" fill="`+tint+`" data-band="tint"/><path d="`...)
+			b = appendPt(appendPt(b, 'M', l, q.t), 'V', q.b, math.NaN())
+			b = appendPt(appendPt(b, 'M', rr, q.t), 'V', q.b, math.NaN())
+			b = append(b, `" stroke="`+ink2+`" stroke-width="1"/>`...)
+		} else {
+			b = append(b, `" fill="#f1f2f3"/><path d="`...)
+			// 45° hatching every 12 px, anchored to the page so that bands
+			// next to each other line up.
+			h := q.b - q.t
+			start := math.Floor((l-h)/12) * 12
+			for k := start; k <= rr; k += 12 {
+				ax, ay, bx, by, ok := clipSegment(band, k, q.b, k+h, q.t)
+				if !ok {
+					continue
+				}
+				b = appendPt(appendPt(b, 'M', ax, ay), 'L', bx, by)
 			}
-			b = append(b, 'M')
-			b = appendNum(b, ax)
-			b = append(b, ' ')
-			b = appendNum(b, ay)
-			b = append(b, 'L')
-			b = appendNum(b, bx)
-			b = append(b, ' ')
-			b = appendNum(b, by)
+			b = append(b, `M0 0" stroke="`+hatch+`" stroke-width="1"/>`...)
 		}
-		b = append(b, `M0 0" stroke="`+hatch+`" stroke-width="1"/>`...)
 		if bd.Label != "" {
+			// Along the top of the band: centred, else against one side,
+			// on the first row free of other band labels.
 			w := textWidth(bd.Label, fontSmall)
-			anchor, tx := "middle", (l+rr)/2
-			switch {
-			case w+8 <= rr-l:
-			case rr >= q.r-1:
-				anchor, tx = "end", rr-4
-			default:
-				anchor, tx = "start", l+4
+			var spots []rect
+			for row := 0.0; row < 3; row++ {
+				t := q.t + 4 + 20*row
+				for _, lx := range [...]float64{(l+rr)/2 - w/2, l + 4, rr - 4 - w} {
+					spots = append(spots, rect{lx, t, lx + w, t + 18})
+				}
 			}
-			r.late = r.haloText(r.late, tx, q.t+18, []string{bd.Label}, anchor, fontSmall, false, ink2)
-			lx := tx - w/2
-			if anchor == "end" {
-				lx = tx - w
-			} else if anchor == "start" {
-				lx = tx
-			}
-			r.placed = append(r.placed, rect{lx, q.t + 4, lx + w, q.t + 22})
+			r.bandLabels = append(r.bandLabels, pendingLabel{x: (l + rr) / 2, y: q.t, lines: []string{bd.Label}, colour: ink2, p: p, spots: spots})
 		}
 	}
 	return b
 }
 
+// pendingLabel is a label waiting for its place: a marker's, a band's or
+// a line's name. spots, when set, are its only candidate boxes; else the
+// boxes around (x, y) are tried.
 type pendingLabel struct {
 	x, y   float64
 	lines  []string
 	colour string
 	p      *panel
+	spots  []rect
+	bold   bool
+	size   float64
+	key    string // data-line of a line's name
 }
 
-// drawMarkers draws marker symbols and drop lines; the labels are placed
-// after everything else so they sit on top.
+// drawMarkers draws marker symbols, uncertainty boxes and drop lines;
+// the labels are placed after everything else so they sit on top.
 func (r *renderer) drawMarkers(b []byte, p *panel, labels []pendingLabel) ([]byte, []pendingLabel) {
 	q := p.plot
 	for _, m := range p.c.Markers {
@@ -150,80 +146,153 @@ func (r *renderer) drawMarkers(b []byte, p *panel, labels []pendingLabel) ([]byt
 			b = append(b, col...)
 			b = append(b, `" stroke-width="1.6" stroke-dasharray="2 4"/>`...)
 		}
+		if (m.DX > 0 || m.DY > 0) && finite(m.DX) && finite(m.DY) {
+			b = r.uncertaintyBox(b, p, m, ys, col)
+		}
 		shape := m.Shape
 		if shape == AutoShape {
 			shape = Target
 		}
+		if m.Key != "" {
+			b = append(b, `<g data-mark="`...)
+			b = appendText(b, m.Key)
+			b = append(b, `">`...)
+		}
 		b = appendShape(b, shape, x, y, col)
-		r.placed = append(r.placed, rect{x - 10, y - 10, x + 10, y + 10})
+		if m.Key != "" {
+			b = append(b, "</g>"...)
+		}
+		r.pl.marks = append(r.pl.marks, rect{x - 10, y - 10, x + 10, y + 10})
 		if m.Label != "" {
-			labels = append(labels, pendingLabel{x, y, strings.Split(m.Label, "\n"), col, p})
+			labels = append(labels, pendingLabel{x: x, y: y, lines: strings.Split(m.Label, "\n"), colour: col, p: p, bold: true, size: fontText})
 		}
 	}
 	return b, labels
 }
 
-// placeLabel writes a marker label in the spot around it that lies inside
-// the plot and covers the fewest other labels, symbols and line pieces.
-func (r *renderer) placeLabel(b []byte, l pendingLabel) []byte {
-	const size = fontText
-	w := 0.0
-	for _, s := range l.lines {
-		w = math.Max(w, textWidth(s, size))
+// uncertaintyBox draws the ± of a measurement around its mark: a thin
+// rectangle 2·DX by 2·DY in data units, faintly tinted, and whiskers from
+// the mark to its four sides, clipped to the plot. A box too small to see
+// (under 3 px) keeps its whiskers' end ticks, so it still shows.
+func (r *renderer) uncertaintyBox(b []byte, p *panel, m Marker, ys *scale, col string) []byte {
+	q := p.plot
+	x0, x1 := r.x.px(m.X-m.DX), r.x.px(m.X+m.DX)
+	y0, y1 := ys.px(m.Y+m.DY), ys.px(m.Y-m.DY)
+	x0, x1 = math.Max(x0, q.l), math.Min(x1, q.r)
+	y0, y1 = math.Max(y0, q.t), math.Min(y1, q.b)
+	if !(x1 >= x0 && y1 >= y0) {
+		return b
 	}
-	h := float64(len(l.lines)) * size * 1.2
-	type spot struct {
-		dx, dy float64 // offset of the box's top-left from the point
-		anchor string
+	x, y := r.x.px(m.X), ys.px(m.Y)
+	b = append(b, `<g data-mark="uncertainty"><rect x="`...)
+	b = appendNum(b, x0)
+	b = append(b, `" y="`...)
+	b = appendNum(b, y0)
+	b = append(b, `" width="`...)
+	b = appendNum(b, x1-x0)
+	b = append(b, `" height="`...)
+	b = appendNum(b, y1-y0)
+	b = append(b, `" fill="`+tint+`" fill-opacity="0.7" stroke="`...)
+	b = append(b, col...)
+	b = append(b, `" stroke-width="1.4"/><path d="`...)
+	b = appendPt(appendPt(b, 'M', x0, y), 'H', x1, math.NaN())
+	b = appendPt(appendPt(b, 'M', x, y0), 'V', y1, math.NaN())
+	// End ticks across each whisker.
+	for _, e := range [...][4]float64{{x0, y - 4, 0, 8}, {x1, y - 4, 0, 8}, {x - 4, y0, 8, 0}, {x - 4, y1, 8, 0}} {
+		b = appendPt(appendPt(b, 'M', e[0], e[1]), 'l', e[2], e[3])
 	}
-	spots := [...]spot{
-		{12, -12 - h, "start"},    // above right
-		{12, 10, "start"},         // below right
-		{-12 - w, -12 - h, "end"}, // above left
-		{-12 - w, 10, "end"},      // below left
-		{-w / 2, -16 - h, "middle"},
-		{-w / 2, 16, "middle"},
-		{28, -28 - h, "start"}, // farther out
-		{28, 26, "start"},
-		{-28 - w, -28 - h, "end"},
-		{-28 - w, 26, "end"},
-	}
-	q := l.p.plot
-	best, bestScore := 0, math.Inf(1)
-	for i, s := range spots {
-		box := rect{l.x + s.dx - 2, l.y + s.dy, l.x + s.dx + w + 2, l.y + s.dy + h}
-		score := 0.0
-		if box.l < q.l+2 || box.r > q.r-2 || box.t < q.t+2 || box.b > q.b-2 {
-			score += 1000
+	b = append(b, `" fill="none" stroke="`...)
+	b = append(b, col...)
+	b = append(b, `" stroke-width="1.4"/></g>`...)
+	r.pl.marks = append(r.pl.marks, rect{x0 - 4, y0 - 4, x1 + 4, y1 + 4})
+	return b
+}
+
+// placeLabels places every pending label in the order given (bands',
+// markers', then lines' names), each in the first free spot (see
+// placer). A label farther than a short reach from its point gets a thin
+// leader. Labels with no free spot are numbered at their point and
+// returned as notes, to be written under the plot.
+func (r *renderer) placeLabels(b []byte, labels []pendingLabel) ([]byte, []string) {
+	var notes []string
+	for _, l := range labels {
+		size := l.size
+		if size == 0 {
+			size = fontSmall
 		}
-		for _, o := range r.placed {
-			if box.l < o.r && box.r > o.l && box.t < o.b && box.b > o.t {
-				score += 20
+		w := 0.0
+		for _, s := range l.lines {
+			w = math.Max(w, textWidth(s, size))
+		}
+		h := float64(len(l.lines)) * size * 1.2
+		q := l.p.plot
+		r.pl.bounds = rect{q.l + 2, q.t + 2, q.r - 2, q.b - 2}
+		spots := l.spots
+		if spots == nil {
+			spots = pointSpots(l.x, l.y, w+4, h)
+		}
+		px, py := l.x, l.y // a marker's label may be set off with a leader
+		if l.spots != nil {
+			px, py = math.NaN(), math.NaN()
+		}
+		i := r.pl.place(spots, px, py)
+		if i < 0 && l.spots == nil {
+			i = r.pl.place(r.pl.scan(l.x, l.y, w+4, h), px, py)
+		}
+		if i < 0 {
+			notes = append(notes, joinLines(l.lines))
+			// The note's number beside the point, where it finds room (the
+			// note's own text names the point's figures in any case).
+			n := itoa(len(notes))
+			nw, nh := textWidth(n, fontSmall)+4, fontSmall*1.2
+			if j := r.pl.place(pointSpots(l.x, l.y, nw, nh), math.NaN(), math.NaN()); j >= 0 {
+				box := r.pl.taken[len(r.pl.taken)-1]
+				r.labelBoxes = append(r.labelBoxes, box)
+				b = r.haloText(b, box.l+2, box.t+fontSmall*0.95, []string{n}, "start", fontSmall, true, l.colour)
+			}
+			continue
+		}
+		box := r.pl.taken[len(r.pl.taken)-1]
+		r.labelBoxes = append(r.labelBoxes, box)
+		if l.spots == nil {
+			// A leader from the point to the label when it sits off.
+			if nx, ny, far := box.leader(l.x, l.y); far {
+				b = append(b, `<path d="`...)
+				b = appendPt(appendPt(b, 'M', l.x, l.y), 'L', nx, ny)
+				b = append(b, `" stroke="`...)
+				b = append(b, l.colour...)
+				b = append(b, `" stroke-width="1.5" data-leader=""/>`...)
 			}
 		}
-		for _, g := range l.p.segs {
-			if _, _, _, _, hit := clipSegment(box, g[0], g[1], g[2], g[3]); hit {
-				score++
-			}
+		// The text is drawn from the box's left edge: every anchor is
+		// "start", so an estimate of the width errs to the right only.
+		if l.key != "" {
+			b = append(b, `<g data-line="`...)
+			b = appendText(b, l.key)
+			b = append(b, `">`...)
 		}
-		if i >= 6 {
-			score += 0.5 // prefer labels close to their point
-		}
-		if score < bestScore {
-			best, bestScore = i, score
+		b = r.haloText(b, box.l+2, box.t+size*0.95, l.lines, "start", size, l.bold, l.colour)
+		if l.key != "" {
+			b = append(b, "</g>"...)
 		}
 	}
-	s := spots[best]
-	box := rect{l.x + s.dx, l.y + s.dy, l.x + s.dx + w, l.y + s.dy + h}
-	r.placed = append(r.placed, box)
-	tx := box.l
-	switch s.anchor {
-	case "end":
-		tx = box.r
-	case "middle":
-		tx = (box.l + box.r) / 2
+	return b, notes
+}
+
+func joinLines(ls []string) string { return strings.Join(ls, " ") }
+
+func itoa(n int) string { return strconv.Itoa(n) }
+
+// appendPt appends a path command and its point; a NaN y leaves it out
+// (for H and V, which take one number).
+func appendPt(b []byte, cmd byte, x, y float64) []byte {
+	b = append(b, cmd)
+	b = appendNum(b, x)
+	if math.IsNaN(y) {
+		return b
 	}
-	return r.haloText(b, tx, box.t+size*0.95, l.lines, s.anchor, size, true, l.colour)
+	b = append(b, ' ')
+	return appendNum(b, y)
 }
 
 // appendShape appends a marker symbol centred on (x, y).
@@ -232,6 +301,14 @@ func appendShape(b []byte, s Shape, x, y float64, col string) []byte {
 		b = appendNum(b, x+dx)
 		b = append(b, ' ')
 		return appendNum(b, y+dy)
+	}
+	// poly opens a path through the offsets (dx, dy pairs), closed.
+	poly := func(b []byte, d ...float64) []byte {
+		b = append(b, `<path d="`...)
+		for i := 0; i+1 < len(d); i += 2 {
+			b = appendPt(b, "ML"[min(i, 1)], x+d[i], y+d[i+1])
+		}
+		return append(b, 'Z')
 	}
 	end := func(b []byte, w string) []byte {
 		b = append(b, `" fill="`+paper+`" stroke="`...)
@@ -254,25 +331,9 @@ func appendShape(b []byte, s Shape, x, y float64, col string) []byte {
 		b = append(b, "h10v10h-10Z"...)
 		return end(b, "2.2")
 	case Triangle:
-		b = append(b, `<path d="M`...)
-		b = P(b, 0, -7)
-		b = append(b, 'L')
-		b = P(b, 6.5, 4.5)
-		b = append(b, 'L')
-		b = P(b, -6.5, 4.5)
-		b = append(b, 'Z')
-		return end(b, "2.2")
+		return end(poly(b, 0, -7, 6.5, 4.5, -6.5, 4.5), "2.2")
 	case Diamond:
-		b = append(b, `<path d="M`...)
-		b = P(b, 0, -7)
-		b = append(b, 'L')
-		b = P(b, 7, 0)
-		b = append(b, 'L')
-		b = P(b, 0, 7)
-		b = append(b, 'L')
-		b = P(b, -7, 0)
-		b = append(b, 'Z')
-		return end(b, "2.2")
+		return end(poly(b, 0, -7, 7, 0, 0, 7, -7, 0), "2.2")
 	case Cross:
 		b = append(b, `<path d="M`...)
 		b = P(b, -5, -5)
@@ -280,6 +341,26 @@ func appendShape(b []byte, s Shape, x, y float64, col string) []byte {
 		b = append(b, `" stroke="`...)
 		b = append(b, col...)
 		return append(b, `" stroke-width="2.8" stroke-linecap="round"/>`...)
+	case Ring:
+		b = append(b, `<circle cx="`...)
+		b = appendNum(b, x)
+		b = append(b, `" cy="`...)
+		b = appendNum(b, y)
+		b = append(b, `" r="3.8`...)
+		return end(b, "2")
+	case Dot:
+		b = append(b, `<circle cx="`...)
+		b = appendNum(b, x)
+		b = append(b, `" cy="`...)
+		b = appendNum(b, y)
+		b = append(b, `" r="4.2" fill="`...)
+		b = append(b, col...)
+		return append(b, `" stroke="`+paper+`" stroke-width="1.2"/>`...)
+	case Peak:
+		b = poly(b, 0, -9, 8, 5, -8, 5)
+		b = append(b, `" fill="`...)
+		b = append(b, col...)
+		return append(b, `" stroke="`+paper+`" stroke-width="1.5" stroke-linejoin="round"/>`...)
 	default: // Target
 		b = append(b, `<circle cx="`...)
 		b = appendNum(b, x)

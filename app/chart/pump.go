@@ -11,6 +11,15 @@ func (c Curve) empty() bool { return len(c.X) == 0 || len(c.Y) == 0 }
 
 // PumpSystemInput holds what PumpSystemChart draws, in display units (the
 // caller converts and writes the units into the axis titles).
+//
+// The chart's language (see DEVELOPERS.md): solid lines are the pump's
+// side (the head it gives, the NPSH it needs), dashed lines the line's
+// side (the head it needs, the NPSH it offers); the accent is what is
+// worked out for this sheet, ink what was given; filled marks come from
+// the data sheet, open marks from the site; a flat tint is a range to keep
+// to, hatching a range to distrust. Lines are named at their ends, not in
+// a legend; other quantities against flow stand in strips below the head,
+// each with its own scale, never on a second axis.
 type PumpSystemInput struct {
 	// Title heads the chart, e.g. "BS-3 duty pump against the line".
 	Title string
@@ -18,28 +27,38 @@ type PumpSystemInput struct {
 	// "head H (m)".
 	FlowLabel, HeadLabel string
 	// Pumps are head–flow curves. The first (the pump as it runs, e.g.
-	// "pump at 100 % speed") is drawn solid and heavy in the accent colour;
-	// the others (other speeds, pumps in parallel) in ink, dashed, long
-	// dashed, then dotted.
+	// "pump at 100 % speed") is drawn solid and heavy in the accent
+	// colour; the others (the data sheet's curve when the pump runs
+	// otherwise, pumps in parallel) thin solid ink.
 	Pumps []Curve
-	// DataPoints are the data-sheet points, drawn as open squares.
+	// Speeds are the pump's curves at other speeds (e.g. the speed that
+	// meets a flow): medium solid accent.
+	Speeds []Curve
+	// DataPoints are the data-sheet points, drawn as small filled dots.
 	DataPoints Curve
-	// Systems are system curves, drawn in ink dash-dot (the first heavy).
+	// Systems are system curves, drawn in ink dashes (the first heavier).
 	Systems []Curve
 	// Operating are operating points, each a ringed dot with its label; the
 	// first is in the accent colour with drop lines to both axes.
 	Operating []Marker
-	// Bands are shaded flow ranges, e.g. {X0: 70, X1: math.Inf(1),
-	// Label: "beyond data sheet"}, or zero-width guides.
+	// Peaks are best-efficiency points: filled ink triangles.
+	Peaks []Marker
+	// Measured are measured points: small open ink rings, each with its
+	// uncertainty box when its DX or DY is set.
+	Measured []Marker
+	// Bands are flow ranges: hatched (beyond the data sheet, unstable), or
+	// tinted when Tint is set (the preferred operating region); or
+	// zero-width guides.
 	Bands []Band
-	// Efficiency, if given, is drawn dotted against a right-hand axis
-	// titled EfficiencyLabel (e.g. "efficiency η (%)"), starting at 0.
+	// Efficiency, if given, is drawn in a strip below the head, titled
+	// EfficiencyLabel (e.g. "efficiency η (%)"), from 0, as a solid ink
+	// line over a light area.
 	Efficiency      Curve
 	EfficiencyLabel string
-	// NPSHRequired and NPSHAvailable, if either is given, go in a panel
-	// below sharing the flow axis, titled NPSHLabel (e.g. "NPSH (m)"):
-	// required solid ink, available dashed accent. The operating flows are
-	// marked there by guide lines.
+	// NPSHRequired and NPSHAvailable, if either is given, go in the
+	// bottom strip, titled NPSHLabel (e.g. "NPSH (m)"): required solid
+	// ink, available dashed accent. The operating flows are marked in
+	// every strip by guide lines.
 	NPSHRequired, NPSHAvailable Curve
 	NPSHLabel                   string
 	// FlowMax and HeadMax fix the top of the axes (0 = automatic); both
@@ -52,8 +71,8 @@ type PumpSystemInput struct {
 
 // PumpSystemChart builds the pump-and-system chart: head against flow with
 // the pump curve(s), the system curve(s), the operating point(s), optional
-// data-sheet points and efficiency (right axis), and an optional NPSH panel
-// below on the same flow axis.
+// data-sheet points, best-efficiency and measured points, and optional
+// strips below on the same flow axis for efficiency and NPSH.
 func PumpSystemChart(in PumpSystemInput) Chart {
 	c := Chart{
 		Title:  in.Title,
@@ -65,6 +84,7 @@ func PumpSystemChart(in PumpSystemInput) Chart {
 		Accent: in.Accent,
 		Width:  in.Width,
 		Height: in.Height,
+		Direct: true,
 	}
 	if in.FlowMax > 0 {
 		c.XMax = Fix(in.FlowMax)
@@ -72,50 +92,75 @@ func PumpSystemChart(in PumpSystemInput) Chart {
 	if in.HeadMax > 0 {
 		c.YMax = Fix(in.HeadMax)
 	}
-	others := [...]Style{Dashed, LongDash, Dotted}
 	for i, p := range in.Pumps {
 		if p.empty() {
 			continue
 		}
-		s := Series{Name: p.Name, X: p.X, Y: p.Y}
+		s := Series{Name: p.Name, X: p.X, Y: p.Y, Key: "pump"}
 		if i == 0 {
 			s.Accent, s.Heavy = true, true
 		} else {
-			s.Style = others[(i-1)%len(others)]
+			s.Key = "pump-other"
 		}
 		c.Series = append(c.Series, s)
+	}
+	for _, p := range in.Speeds {
+		if !p.empty() {
+			c.Series = append(c.Series, Series{Name: p.Name, X: p.X, Y: p.Y, Accent: true, Key: "speed"})
+		}
 	}
 	for i, sc := range in.Systems {
 		if sc.empty() {
 			continue
 		}
-		c.Series = append(c.Series, Series{Name: sc.Name, X: sc.X, Y: sc.Y, Style: DashDot, Heavy: i == 0})
+		c.Series = append(c.Series, Series{Name: sc.Name, X: sc.X, Y: sc.Y, Style: Dashed, Heavy: i == 0, Key: "system", TagBelow: true})
 	}
 	if !in.DataPoints.empty() {
-		c.Series = append(c.Series, Series{Name: in.DataPoints.Name, X: in.DataPoints.X, Y: in.DataPoints.Y, Style: Points, Shape: Square})
-	}
-	if !in.Efficiency.empty() {
-		c.Y2 = &Axis{Label: in.EfficiencyLabel, Min: Fix(0)}
-		c.Series = append(c.Series, Series{Name: in.Efficiency.Name, X: in.Efficiency.X, Y: in.Efficiency.Y, Style: Dotted, Y2: true})
+		c.Series = append(c.Series, Series{Name: in.DataPoints.Name, X: in.DataPoints.X, Y: in.DataPoints.Y, Style: Points, Shape: Dot, Key: "data"})
 	}
 	for i, m := range in.Operating {
 		if i == 0 {
 			m.Accent, m.Drop = true, true
 		}
+		m.Shape, m.Key = Target, "operating"
 		c.Markers = append(c.Markers, m)
 	}
+	for _, m := range in.Measured {
+		m.Shape, m.Key, m.Accent = Ring, "measured", false
+		c.Markers = append(c.Markers, m)
+	}
+	for _, m := range in.Peaks {
+		m.Shape, m.Key, m.Accent = Peak, "peak", false
+		c.Markers = append(c.Markers, m)
+	}
+	var guides []Band
+	for _, m := range in.Operating {
+		guides = append(guides, Band{X0: m.X, X1: m.X})
+	}
+	last := &c
+	h := float64(in.Height)
+	if h <= 0 {
+		h = 480
+	}
+	if !in.Efficiency.empty() {
+		st := &Chart{YLabel: in.EfficiencyLabel, YMin: Fix(0), Height: int(h * 0.36), Bands: guides,
+			Series: []Series{{Name: in.Efficiency.Name, X: in.Efficiency.X, Y: in.Efficiency.Y, Style: Area, Key: "efficiency"}}}
+		for _, b := range in.Bands {
+			if b.Tint {
+				st.Bands = append(st.Bands, Band{X0: b.X0, X1: b.X1, Tint: true})
+			}
+		}
+		last.Lower, last = st, st
+	}
 	if !in.NPSHRequired.empty() || !in.NPSHAvailable.empty() {
-		lo := &Chart{YLabel: in.NPSHLabel, YMin: Fix(0)}
+		lo := &Chart{YLabel: in.NPSHLabel, YMin: Fix(0), Height: int(h * 0.45), Bands: guides}
 		if !in.NPSHRequired.empty() {
-			lo.Series = append(lo.Series, Series{Name: in.NPSHRequired.Name, X: in.NPSHRequired.X, Y: in.NPSHRequired.Y, Heavy: true})
+			lo.Series = append(lo.Series, Series{Name: in.NPSHRequired.Name, X: in.NPSHRequired.X, Y: in.NPSHRequired.Y, Heavy: true, Key: "npsh-required", TagBelow: true})
 		}
 		if !in.NPSHAvailable.empty() {
-			lo.Series = append(lo.Series, Series{Name: in.NPSHAvailable.Name, X: in.NPSHAvailable.X, Y: in.NPSHAvailable.Y, Style: Dashed, Accent: true, Heavy: true})
+			lo.Series = append(lo.Series, Series{Name: in.NPSHAvailable.Name, X: in.NPSHAvailable.X, Y: in.NPSHAvailable.Y, Style: Dashed, Accent: true, Heavy: true, Key: "npsh-available"})
 		}
-		for _, m := range in.Operating {
-			lo.Bands = append(lo.Bands, Band{X0: m.X, X1: m.X})
-		}
-		c.Lower = lo
+		last.Lower = lo
 	}
 	return c
 }

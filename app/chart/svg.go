@@ -65,10 +65,8 @@ func (r *renderer) desc() string {
 		sb.WriteString(" of " + c.YLabel + " against " + c.XLabel)
 	}
 	var names, marks []string
-	for _, p := range []*Chart{c, c.Lower} {
-		if p == nil {
-			continue
-		}
+	for _, pn := range r.panels {
+		p := pn.c
 		for _, s := range p.Series {
 			if s.Name != "" {
 				names = append(names, s.Name)
@@ -171,27 +169,45 @@ func (r *renderer) colour(accent bool) string {
 }
 
 func (r *renderer) draw(b []byte) []byte {
-	b = r.header(b)
+	// The body first: the labels' places depend on what is drawn, and the
+	// picture's height on the labels that find no place (notes below).
+	var body []byte
 	c := r.c
 	if c.Title != "" {
 		for i, l := range r.panels[0].titleLines {
-			b = r.text(b, pad, r.panels[0].titleY+24*float64(i), l, "start", fontTitle, true, Ink)
+			body = r.text(body, pad, r.panels[0].titleY+24*float64(i), l, "start", fontTitle, true, Ink)
 		}
 	}
 	var labels []pendingLabel
 	for _, p := range r.panels {
-		b = r.drawBands(b, p)
-		b = r.drawAreas(b, p)
-		b = r.drawGrid(b, p)
-		b = r.drawSeries(b, p)
-		b = r.drawTags(b, p)
-		b, labels = r.drawMarkers(b, p, labels)
-		b = r.drawAxes(b, p)
-		b = r.drawLegend(b, p)
+		body = r.drawBands(body, p)
+		body = r.drawAreas(body, p)
+		body = r.drawGrid(body, p)
+		body = r.drawSeries(body, p)
+		body, labels = r.drawMarkers(body, p, labels)
+		body = r.drawAxes(body, p)
+		body = r.drawLegend(body, p)
 	}
-	b = append(b, r.late...)
-	for _, l := range labels {
-		b = r.placeLabel(b, l)
+	var tags []pendingLabel
+	for _, p := range r.panels {
+		tags = append(tags, r.tagLabels(p)...)
 	}
+	// The markers' labels before the lines' names: a name can sit
+	// anywhere along its line, and names placed first would wall a point
+	// in.
+	all := append(append(r.bandLabels, labels...), tags...)
+	body, notes := r.placeLabels(body, all)
+	y := r.h - 4
+	for i, n := range notes {
+		for _, l := range wrapText(itoa(i+1)+"  "+n, fontSmall, r.w-2*pad) {
+			y += 20
+			body = r.text(body, pad, y, l, "start", fontSmall, false, Ink)
+		}
+	}
+	if len(notes) > 0 {
+		r.h = y + 10
+	}
+	b = r.header(b)
+	b = append(b, body...)
 	return append(b, "</svg>"...)
 }

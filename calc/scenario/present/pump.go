@@ -172,21 +172,29 @@ func (b *builder) npshCard() Card {
 // pumpChartCard holds the pump and system chart.
 func (b *builder) pumpChartCard() Card {
 	pr := b.r.Pump
-	caption := "Accent: the pump's head curve through the data-sheet points (squares). Dash-dot: the head the line needs at each flow. They cross at the operating point."
+	// The chart's language (DEVELOPERS.md, "chart language") in words.
+	caption := "Heavy accent line: the pump's head curve as it runs, through the data sheet's points (filled dots). Dashed ink: the head the line needs at each flow. They cross at the operating point (ringed). Each line is named at its end."
 	if pr != nil && len(pr.System) > 0 {
 		caption += " At zero flow the line needs " + b.head(pr.System[0].H) + " (levels and pressures alone); the rest is friction, fittings and velocity head."
 	}
 	if pr != nil && pr.BEP != nil {
-		caption += " The shaded band is the preferred operating region, 70–120 % of the best-efficiency flow (ANSI/HI 9.6.3, from memory), around the marked best-efficiency point."
+		caption += " The tinted band is the preferred operating region, 70–120 % of the best-efficiency flow (ANSI/HI 9.6.3, from memory), around the best-efficiency point (filled triangle)."
 	}
 	if b.r.Field != nil {
-		caption += " The point marked measured is the field check's flow and head."
+		caption += " The open ring is the field check's measured flow and head"
+		if b.r.FieldBands != nil {
+			caption += "; the box around it spans the readings' uncertainty, ± flow across and ± head up and down"
+		}
+		caption += "."
 	}
 	if pr != nil && pr.SpeedFor != nil {
-		caption += " A second pump curve shows the speed that meets the flow asked for."
+		caption += " A thinner accent curve is the pump at the speed that meets the flow asked for."
+	}
+	if pr != nil && pr.Curve.HasEfficiency() {
+		caption += " The strip below: the pump's efficiency at each flow."
 	}
 	if pr != nil && (pr.Curve.HasNPSHr() || len(pr.NPSHa) > 0) {
-		caption += " Lower panel: NPSH the pump requires (solid) and NPSH available at its inlet (dashed); available must stay above required."
+		caption += " Bottom strip: NPSH the pump requires (solid) and NPSH available at its inlet (dashed); available must stay above required."
 	}
 	return Card{ID: "pump-chart-card", Class: "chart-card", Title: "Pump and system curves", Blocks: []Block{
 		maybe(pr == nil, text("muted", "", "Drawn once the data sheet has at least three points.")),
@@ -269,17 +277,22 @@ func (b *builder) pumpChart(id, caption string) Block {
 	}
 	if bep := pr.BEP; bep != nil {
 		lo, hi := bep.Region()
-		ch.Bands = append(ch.Bands, Band{X0: qu.FromSI(lo), X1: qu.FromSI(hi),
+		ch.Bands = append(ch.Bands, Band{X0: qu.FromSI(lo), X1: qu.FromSI(hi), Keep: true,
 			Label: "preferred region"}) // its bounds are in the caption and the facts: a band's label must fit a phone's chart
-		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(bep.Q), Y: hu.FromSI(bep.H),
+		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(bep.Q), Y: hu.FromSI(bep.H), Role: MarkPeak,
 			Label: "best efficiency\n" + b.param("q", bep.Q) + ", " + percent(bep.Eff)})
 	}
 	if f := b.r.Field; f != nil && f.Head > 0 {
 		label := "measured\n" + b.param("qm", f.Q) + ", " + b.head(f.Head)
+		m := Marker{X: qu.FromSI(f.Q), Y: hu.FromSI(f.Head), Role: MarkMeasured}
 		if u := b.r.FieldBands; u != nil {
 			label += " ± " + b.head(u.Head.U)
+			// The box spans the band either side: in display units, as a
+			// difference (no offset in any flow or length unit).
+			m.DX, m.DY = qu.FromSI(f.Q+u.Flow.U)-m.X, hu.FromSI(f.Head+u.Head.U)-m.Y
 		}
-		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(f.Q), Y: hu.FromSI(f.Head), Label: label})
+		m.Label = label
+		ch.Markers = append(ch.Markers, m)
 	}
 	if sf := pr.SpeedFor; sf != nil {
 		xs, ys = sampleCurve(sf.Curve.MinFlow(), sf.Curve.MaxFlow(), sf.Curve.Head, qu, hu)
@@ -287,7 +300,7 @@ func (b *builder) pumpChart(id, caption string) Block {
 		if sf.ByHead {
 			goal = b.head(sf.H)
 		}
-		add(RolePumpBase, "at "+percent(sf.Ratio)+" speed for "+goal, xs, ys)
+		add(RoleSpeed, "at "+percent(sf.Ratio)+" speed for "+goal, xs, ys)
 	}
 	if c.HasEfficiency() {
 		pct := displayUnit("peff", b.us)

@@ -211,6 +211,7 @@ const (
 	RoleEGL
 	RoleHGL
 	RoleVapour
+	RoleSpeed // the pump at another speed (the speed that meets a flow)
 )
 
 // Curve is one line of a chart.
@@ -225,12 +226,26 @@ type Marker struct {
 	X, Y  float64
 	Label string
 	Pump  bool // the pump on the profile
+	Role  MarkRole
+	// DX and DY are a measured point's ± in flow and head (display
+	// units), 0 when unknown.
+	DX, DY float64
 }
+
+// MarkRole says what a marker of the pump chart is.
+type MarkRole uint8
+
+const (
+	MarkOperating MarkRole = iota // worked out: where pump and line meet
+	MarkPeak                      // the best-efficiency point of the data sheet
+	MarkMeasured                  // the field check's reading
+)
 
 // Band is a shaded range of x; X1 below X0 means "to the right edge".
 type Band struct {
 	X0, X1 float64
 	Label  string
+	Keep   bool // a range to keep to (the preferred region), not one to avoid
 }
 
 // Fittings is the fitting editor of one run or segment.

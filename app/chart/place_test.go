@@ -1,0 +1,124 @@
+package chart
+
+import (
+	"fmt"
+	"math"
+	"regexp"
+	"strconv"
+	"testing"
+)
+
+// rendered draws c and returns its renderer (for the label boxes it
+// placed) and the SVG text.
+func rendered(c Chart) (*renderer, string) {
+	r := newRenderer(&c)
+	return r, string(r.render(nil))
+}
+
+// TestPlaceLabelsApart: no two label boxes the chart draws intersect, on
+// the demo's pump chart at a desktop's and a phone's width and on a
+// crowded chart (ten labelled points in a small plot, some on top of each
+// other); every box lies inside its SVG; a label that finds no free spot
+// is written under the plot, numbered. The figures are invented.
+func TestPlaceLabelsApart(t *testing.T) {
+	crowded := demoPumpInput()
+	crowded.Width, crowded.Height = 300, 320
+	for i := 0; i < 10; i++ {
+		q := 30 + float64(i%4)*3
+		crowded.Measured = append(crowded.Measured, Marker{X: q, Y: 45 - float64(i%3), DX: 1, DY: 1.5,
+			Label: fmt.Sprintf("reading %d\n%.1f L/s, %.1f m", i+1, q, 45-float64(i%3))})
+	}
+	phone := demoPumpInput()
+	phone.Width = 360
+	cases := map[string]PumpSystemInput{"demo 720": demoPumpInput(), "demo 360": phone, "crowded 300": crowded}
+	cases["demo 720"] = func() PumpSystemInput { in := demoPumpInput(); in.Width = 720; return in }()
+	for name, in := range cases {
+		t.Run(name, func(t *testing.T) {
+			c := PumpSystemChart(in)
+			r, svg := rendered(c)
+			boxes := r.labelBoxes
+			if len(boxes) < 3 {
+				t.Fatalf("only %d labels placed", len(boxes))
+			}
+			for i := range boxes {
+				a := boxes[i]
+				if a.l < 0 || a.r > r.w || a.t < 0 || a.b > r.h {
+					t.Errorf("label box %d %+v outside the picture %.0f × %.0f", i, a, r.w, r.h)
+				}
+				for j := i + 1; j < len(boxes); j++ {
+					if a.overlaps(boxes[j]) {
+						t.Errorf("label boxes %d %+v and %d %+v intersect", i, a, j, boxes[j])
+					}
+				}
+			}
+			checkInside(t, readSVG(t, svg))
+		})
+	}
+	// The crowded chart cannot place every label beside its point: the
+	// rest are numbered notes under the plot, none lost.
+	_, svg := rendered(PumpSystemChart(crowded))
+	for i := 1; i <= 10; i++ {
+		if !regexp.MustCompile(`>(\d+\s+)?reading ` + strconv.Itoa(i) + `( |<)`).MatchString(svg) {
+			t.Errorf("reading %d's label is neither on the plot nor in the notes", i)
+		}
+	}
+}
+
+// TestPlacerFirstFree: the placer takes the first candidate that is
+// inside its bounds and free of labels, prefers one clear of symbols and
+// lines, and refuses when none is free.
+func TestPlacerFirstFree(t *testing.T) {
+	nan := math.NaN()
+	pl := placer{bounds: rect{0, 0, 100, 100}}
+	if i := pl.place([]rect{{-5, 0, 10, 10}, {0, 0, 10, 10}}, nan, nan); i != 1 {
+		t.Errorf("took spot %d, want 1 (the first is outside the bounds)", i)
+	}
+	if i := pl.place([]rect{{5, 5, 15, 15}, {20, 0, 30, 10}}, nan, nan); i != 1 {
+		t.Errorf("took spot %d, want 1 (the first overlaps a label)", i)
+	}
+	pl.marks = append(pl.marks, rect{40, 0, 50, 10})
+	if i := pl.place([]rect{{40, 0, 50, 10}, {60, 0, 70, 10}}, nan, nan); i != 1 {
+		t.Errorf("took spot %d, want 1 (the first covers a symbol)", i)
+	}
+	pl.segs = append(pl.segs, [4]float64{60, 20, 70, 30})
+	if i := pl.place([]rect{{58, 18, 72, 32}, {80, 20, 90, 30}}, nan, nan); i != 1 {
+		t.Errorf("took spot %d, want 1 (the first crosses a line)", i)
+	}
+	if i := pl.place([]rect{{0, 0, 10, 10}, {22, 2, 28, 8}}, nan, nan); i != -1 {
+		t.Errorf("took spot %d, want none (every spot overlaps a label)", i)
+	}
+	// A spot whose leader from the point (25, 90) would cross a label
+	// (at 20–30, 50–60) is not free; one beside the point is.
+	pl.taken = append(pl.taken, rect{20, 50, 30, 60})
+	if i := pl.place([]rect{{20, 20, 30, 25}, {30, 80, 40, 85}}, 25, 90); i != 1 {
+		t.Errorf("took spot %d, want 1 (the first one's leader crosses a label)", i)
+	}
+}
+
+// TestUncertaintyBoxSize: the measured point's box spans ±DX and ±DY in
+// the chart's own units: its width over the plot's width is 2·DX over the
+// flow axis' span, its height likewise in head. The figures are invented
+// (a reading of 41 L/s ± 0.82, 50.8 m ± 1.9).
+func TestUncertaintyBoxSize(t *testing.T) {
+	in := demoPumpInput()
+	in.Measured = []Marker{{X: 41, Y: 50.8, DX: 0.82, DY: 1.9, Label: "measured"}}
+	c := PumpSystemChart(in)
+	r, svg := rendered(c)
+	m := regexp.MustCompile(`<g data-mark="uncertainty"><rect x="([^"]+)" y="([^"]+)" width="([^"]+)" height="([^"]+)"`).FindStringSubmatch(svg)
+	if m == nil {
+		t.Fatal("no uncertainty box drawn")
+	}
+	num := func(s string) float64 { v, _ := strconv.ParseFloat(s, 64); return v }
+	p := r.panels[0]
+	wantW := 2 * 0.82 / (r.x.hi - r.x.lo) * (p.plot.r - p.plot.l)
+	wantH := 2 * 1.9 / (p.y.hi - p.y.lo) * (p.plot.b - p.plot.t)
+	if math.Abs(num(m[3])-wantW) > 0.1 || math.Abs(num(m[4])-wantH) > 0.1 {
+		t.Errorf("box %s × %s px, want %.2f × %.2f", m[3], m[4], wantW, wantH)
+	}
+	if cx, cy := num(m[1])+num(m[3])/2, num(m[2])+num(m[4])/2; math.Abs(cx-r.x.px(41)) > 0.1 || math.Abs(cy-p.y.px(50.8)) > 0.1 {
+		t.Errorf("box centred at (%.1f, %.1f), the point is at (%.1f, %.1f)", cx, cy, r.x.px(41), p.y.px(50.8))
+	}
+	if !regexp.MustCompile(`<g data-mark="measured"><circle[^>]* fill="#ffffff"`).MatchString(svg) {
+		t.Error("the measured point is not drawn as an open circle")
+	}
+}
