@@ -147,6 +147,13 @@ type BalanceResult struct {
 	// has one; Profile is then its EGL/HGL profile (see ProfileNode).
 	Line    *LineResult
 	Profile []ProfileNode
+	// HighPoints are the stretches of the line where the HGL falls below
+	// the pipe crown or the vapour-pressure line, one per stretch. When
+	// the column breaks at one and FullFlowKnown is true, FullFlow is the
+	// largest flow the line carries full, m³/s (see Balance.fullFlow).
+	HighPoints    []HighPoint
+	FullFlow      float64
+	FullFlowKnown bool
 	// PumpAfter is the pump's place on the line as used for the profile.
 	PumpAfter int
 

@@ -43,6 +43,7 @@ func (b *builder) lineCard() Card {
 			{Label: "length of the line", Value: length},
 			{Label: "segments", Value: strconv.Itoa(len(l.Segments))},
 		}}
+		facts.Facts = append(facts.Facts, b.highPointFacts()...)
 	}
 	isLine := func(w scenario.Warning) bool {
 		n, _ := scenario.SegmentOf(w.Param)
@@ -51,6 +52,62 @@ func (b *builder) lineCard() Card {
 	return Card{ID: "line-card", Class: "answer-card", Title: "Line, point 1 to point 2", Blocks: []Block{
 		{Kind: BlockAnswer, ID: "answer", Answer: a}, facts, fields(b.pumpPlace(n)), b.warnings(isLine),
 	}}
+}
+
+// fullFlowAnswer is the Balance view's answer when it solves for the flow
+// and the column breaks at a high point: the flow of the balance needs a
+// full pipe past it, so the headline is the largest flow the line carries
+// full, with the balance's figure below it. ok is false otherwise.
+func (b *builder) fullFlowAnswer() (a Answer, ok bool) {
+	br := b.r.Balance
+	if br == nil || b.solve() != "q" || !b.brokenColumn() {
+		return a, false
+	}
+	if !br.FullFlowKnown {
+		return Answer{Label: "Flow (the unknown): the line cannot run full",
+			Values: []Value{{"answer-value", "none full"}},
+			Subs:   []string{"below vapour pressure — column breaks at a high point even with no flow (see the warning); a full pipe would carry " + b.param("q", br.Q)}}, true
+	}
+	return Answer{Label: "Flow (the unknown): the most the line carries full",
+		Values: []Value{{"answer-value", b.param("q", br.FullFlow)}},
+		Subs: []string{"limited by a high point, where the pressure would fall below vapour pressure — column breaks beyond this flow (see the warning)",
+			"the balance with the pipe full past the high point would give " + b.param("q", br.Q) + ", which it cannot carry"}}, true
+}
+
+// brokenColumn reports whether the column breaks at a high point.
+func (b *builder) brokenColumn() bool {
+	for _, hp := range b.r.Balance.HighPoints {
+		if hp.Breaks {
+			return true
+		}
+	}
+	return false
+}
+
+// highPointFacts are the line card's facts on its high points.
+func (b *builder) highPointFacts() []Fact {
+	br := b.r.Balance
+	var out []Fact
+	for i, hp := range br.HighPoints {
+		where := "start"
+		if hp.AtEnd {
+			where = "end"
+		}
+		v := b.head(hp.BelowCrown) + " below the pipe crown (below atmospheric)"
+		if hp.Breaks {
+			v = "below vapour pressure — column breaks"
+		}
+		out = append(out, Fact{ID: "high-point-" + strconv.Itoa(i+1), Label: "high point, " + where + " of segment " + strconv.Itoa(hp.Segment) +
+			" (" + b.param("l", hp.Distance) + " from point 1)", Value: v})
+	}
+	if b.brokenColumn() {
+		v := "none: the column breaks even with no flow"
+		if br.FullFlowKnown {
+			v = b.param("q", br.FullFlow) + " (the surplus head taken by a valve at point 2)"
+		}
+		out = append(out, Fact{ID: "full-flow", Label: "largest flow the line carries full", Value: v, Key: true})
+	}
+	return out
 }
 
 // lineInputs are the parameters the line's result depends on.
