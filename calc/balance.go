@@ -568,13 +568,9 @@ func (b Balance) result(v float64, st state) BalanceResult {
 		add("major", "pipe friction", -1, major)
 		add("minor", "fittings", -1, minor)
 	} else if st.line != nil {
-		major, minor := st.line.MajorLoss, st.line.MinorLoss+st.line.TransitionLoss
-		if st.line.Transitional && st.line.TotalLoss > 0 {
-			scale := r.FrictionHead / st.line.TotalLoss
-			major, minor = major*scale, minor*scale
+		for _, t := range st.line.budgetTerms(r.FrictionHead) {
+			add(t.key, t.label, -1, t.head)
 		}
-		add("major", "pipe friction", -1, major)
-		add("minor", "fittings and changes of diameter", -1, minor)
 	} else {
 		add("hf", "friction and other losses", -1, r.FrictionHead)
 	}

@@ -52,7 +52,7 @@ func (b Balance) gradeNodes(in PointState, hp float64, lr *LineResult) []Profile
 		start := node(i+1, hv)
 		dist += segs[i].Length
 		z = segs[i].EndZ
-		egl -= sr.TotalLoss
+		egl -= sr.TotalLoss + sr.ComponentLoss
 		nodes = append(nodes, start, node(i+1, hv))
 	}
 	if b.PumpAfter == len(segs) {

@@ -140,7 +140,7 @@ func linkName(calcField string) string {
 		return "l"
 	case "method":
 		return "fm"
-	case "d", "eps", "fit", "k", "chw", "z":
+	case "d", "eps", "fit", "k", "chw", "z", "cmp":
 		return calcField
 	}
 	return ""

@@ -40,6 +40,7 @@ func (b *builder) lineCard() Card {
 			{Label: "pipe friction", Value: b.head(l.MajorLoss)},
 			{Label: "fittings", Value: b.head(l.MinorLoss)},
 			{Label: "changes of diameter", Value: b.head(l.TransitionLoss)},
+			{Label: "components (chillers, coils, valves…)", Value: b.head(l.ComponentLoss)},
 			{Label: "length of the line", Value: length},
 			{Label: "segments", Value: strconv.Itoa(len(l.Segments))},
 		}}
@@ -242,7 +243,7 @@ func (b *builder) segmentTable() Block {
 		return Block{Kind: BlockEmpty}
 	}
 	l := br.Line
-	cols := []string{"segment", "velocity", "Reynolds number", "regime", "friction factor f", "pipe friction", "fittings (ΣK)", "change of diameter"}
+	cols := []string{"segment", "velocity", "Reynolds number", "regime", "friction factor f", "pipe friction", "fittings (ΣK)", "change of diameter", "components"}
 	t := &Table{ID: "seg-table", Class: "grid figures", Head: cols}
 	cell := func(col int, text string) Cell { return Cell{Text: text, Label: cols[col]} }
 	for i, r := range l.Segments {
@@ -258,13 +259,14 @@ func (b *builder) segmentTable() Block {
 			cell(5, b.head(r.MajorLoss)),
 			cell(6, b.head(r.MinorLoss)+" ("+calc.FormatNumber(r.SumK, 3)+")"),
 			cell(7, b.head(r.TransitionLoss)),
+			cell(8, b.componentText(r.Components)),
 		}})
 	}
 	t.Foot = []Row{
 		{Head: "whole line", HeadSpan: 5, Class: "sum", Cells: []Cell{
-			cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss))}},
-		{Head: "friction and fittings, point 1 to point 2", HeadSpan: 5, Class: "sum total", Cells: []Cell{
-			{ID: "seg-total", Text: b.head(l.TotalLoss), Span: 3}}},
+			cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss)), cell(8, b.head(l.ComponentLoss))}},
+		{Head: "friction, fittings and components, point 1 to point 2", HeadSpan: 5, Class: "sum total", Cells: []Cell{
+			{ID: "seg-total", Text: b.head(l.TotalLoss), Span: 4}}},
 	}
 	return Block{Kind: BlockTable, Table: t}
 }
@@ -357,9 +359,32 @@ func (b *builder) segmentCard(n, count int) Card {
 		if r.TransitionLoss != 0 {
 			line += " + change of diameter " + b.head(r.TransitionLoss)
 		}
+		if len(r.Components) > 0 {
+			line += " + components: " + b.componentText(r.Components)
+		}
 	}
+	cmp := b.plain(p("cmp"), "", "", false)
+	note := "A drop given at a rated flow scales with the flow squared (rated on the liquid in service). A valve's Kv (m³/h at 1 bar) or Cv (US gal/min at 1 psi) is the one at its present opening."
+	if b.us {
+		cmp.Placeholder = "chiller:6.5psi@190gpm, valve:cv46"
+		note = "A drop given at a rated flow scales with the flow squared (rated on the liquid in service). A valve's Cv (US gal/min at 1 psi) is the one at its present opening."
+	}
+	blocks = append(blocks, fields(cmp), text("muted", "", note))
 	c.Blocks = append(blocks, text("computed", "seg-line-"+num, line))
 	return c
+}
+
+// componentText lists components' drops by name, as heads and pressures
+// in the sheet's units; "none" without any.
+func (b *builder) componentText(cs []calc.ComponentLoss) string {
+	if len(cs) == 0 {
+		return "none"
+	}
+	parts := make([]string, len(cs))
+	for i, c := range cs {
+		parts[i] = c.Name + " " + b.head(c.Head) + " (" + b.show(c.Pressure, calc.Pressure) + ")"
+	}
+	return strings.Join(parts, "; ")
 }
 
 // lineSummary stands in the Balance view for the single run's inputs when

@@ -3,6 +3,15 @@
 carries full (ref-highpoint.case), components on segments
 (ref-components.case).
 
+Components (python3-mpmath and GNU units): a drop rated at a flow scales
+with the flow squared, dp = dp_r (Q/Q_r)^2 (or a head h_r (Q/Q_r)^2); a
+control valve by Kv (IEC 60534-1: m^3/h of water of 1000 kg/m^3 at 1 bar)
+drops dp = 1 bar (Q/Kv)^2 rho/1000; a Cv (ANSI/ISA-75.01.01: US gal/min at
+1 psi) is turned into a Kv by GNU units' (gallon/min)^2/psi in
+(m^3/hr)^2/bar.  The pipe's friction is Darcy-Weisbach with
+Colebrook-White.  The expected pump head is the friction plus the
+components' drops as heads of the liquid (equal levels, both ends open).
+
 High points (python3-mpmath, mp.dps = 40): a gravity main from an open
 tank (gauge 0 at its surface z1, no velocity) over a crest.  With the
 surplus head taken at the outlet, the pressure at the crest (the end of
@@ -21,7 +30,7 @@ import sys
 
 sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
 import gen_cases  # noqa: E402  (its Writer, sig, colebrook; its cases run only as a script)
-from gen_cases import G, colebrook, sig  # noqa: E402
+from gen_cases import G, colebrook, sig, units  # noqa: E402
 
 mp = gen_cases.mp
 PI = mp.pi
@@ -69,4 +78,38 @@ def highpoint_cases():
     w.close()
 
 
+def component_cases():
+    w = Writer("ref-components.case",
+               "components on a segment: drops rated at a flow and control valves by Cv or Kv",
+               "python3-mpmath and GNU units (dp = dp_r (Q/Q_r)^2; Kv per IEC 60534-1, Cv per ANSI/ISA-75.01.01, "
+               "Cv to Kv by GNU units; Darcy-Weisbach with Colebrook-White)")
+    kv_per_cv = mp.sqrt(units("(gallon/min)^2/psi", "(m^3/hr)^2/bar"))
+    mu = mp.mpf("0.0025")
+    for name, rho, q, cmp, drops in [
+        # drops: ("p", Pa at rated, rated m3/s) | ("h", m at rated, rated m3/s) | ("kv", Kv) | ("cv", Cv)
+        ("a chiller rated in kPa and a valve by Cv, off their rated flow", "1030", "10",
+         "chiller:45kPa@12L/s,valve:cv46", [("p", 45000, "0.012"), ("cv", "46")]),
+        ("a coil rated as a head and a valve by Kv", "1000", "15",
+         "coil:3.2m@15L/s,valve:kv40", [("h", "3.2", "0.015"), ("kv", "40")]),
+    ]:
+        rhov, qv = mp.mpf(rho), mp.mpf(q) / 1000
+        d, length, eps = mp.mpf("0.1"), mp.mpf(200), mp.mpf("0.00005")
+        v = qv / (PI * d * d / 4)
+        f = colebrook(rhov * v * d / mu, eps / d)
+        h = f * length / d * v * v / (2 * G)
+        for kind, a, *b in drops:
+            if kind == "p":
+                h += mp.mpf(a) * (qv / mp.mpf(b[0])) ** 2 / (rhov * G)
+            elif kind == "h":
+                h += mp.mpf(a) * (qv / mp.mpf(b[0])) ** 2
+            else:
+                kv = mp.mpf(a) * (kv_per_cv if kind == "cv" else 1)
+                h += 100000 * (qv * 3600 / kv) ** 2 * rhov / 1000 / (rhov * G)
+        query = ("liq=custom&rho=%skg/m3&mu=2.5mPa.s&pv=2kPa&baro=101.325kPa&p1=0kPa&v1=0m/s&p2=0kPa&v2=0m/s"
+                 "&z1=10m&z2=10m&q=%sL/s&solve=hp&s1.l=200m&s1.d=100mm&s1.eps=0.05mm&s1.cmp=%s" % (rho, q, cmp))
+        w.case(name, query, ["balance.value = %s m ± 1e-9 rel" % sig(h)])
+    w.close()
+
+
 highpoint_cases()
+component_cases()
