@@ -316,7 +316,20 @@ func (b *builder) segmentList() Card {
 	}
 	blocks = append(blocks, Block{Kind: BlockButtons, Buttons: []Button{{ID: "seg-add", Text: "+ " + label, Class: "act",
 		Disabled: n >= scenario.MaxSegments, Act: Action{Do: "seg-add"}}}})
+	blocks = append(blocks, b.surveyBox())
 	return Card{ID: "segments", Class: "seglist", Title: "Segments, in the direction of flow", Blocks: blocks}
+}
+
+// surveyBox is where a survey table is pasted to make the segments.
+func (b *builder) surveyBox() Block {
+	lu, zu := scenario.DefaultUnit("l", b.us), scenario.DefaultUnit("z1", b.us)
+	return Block{Kind: BlockSurvey, Survey: &Survey{ID: "survey-text", Title: "Make the segments from a survey",
+		Label: "Chainage and elevation, one point a line (" + lu + ", " + zu + ")",
+		Hint: "Paste two columns from a spreadsheet (tab, semicolon or comma separated; a header row is skipped). " +
+			"Each pair of points becomes a segment: its length the slope length between them, its end the second point's elevation. " +
+			"Segments already here keep their pipe, fittings and components; new ones take the last segment's pipe.",
+		Text: b.d.Survey, Notes: b.d.SurveyNotes, Open: len(b.d.SurveyNotes) > 0,
+		Button: Button{ID: "survey-paste", Text: "Make the segments", Class: "act"}}}
 }
 
 // segmentCard is one segment's inputs and its figures at the flow.
