@@ -40,10 +40,12 @@ func (b *builder) lineCard() Card {
 			{Label: "pipe friction", Value: b.head(l.MajorLoss)},
 			{Label: "fittings", Value: b.head(l.MinorLoss)},
 			{Label: "changes of diameter", Value: b.head(l.TransitionLoss)},
-			{Label: "components (chillers, coils, valves…)", Value: b.head(l.ComponentLoss)},
 			{Label: "length of the line", Value: length},
 			{Label: "segments", Value: strconv.Itoa(len(l.Segments))},
 		}}
+		if l.ComponentLoss != 0 {
+			facts.Facts = append(facts.Facts, Fact{Label: "components (by name in the loss table)", Value: b.head(l.ComponentLoss)})
+		}
 		facts.Facts = append(facts.Facts, b.highPointFacts()...)
 	}
 	isLine := func(w scenario.Warning) bool {
@@ -244,6 +246,15 @@ func (b *builder) segmentTable() Block {
 	}
 	l := br.Line
 	cols := []string{"segment", "velocity", "Reynolds number", "regime", "friction factor f", "pipe friction", "fittings (ΣK)", "change of diameter", "components"}
+	// The components' column only where a segment has one: the table
+	// fits the width of a tablet's page without it.
+	hasCmp := l.ComponentLoss != 0
+	for _, r := range l.Segments {
+		hasCmp = hasCmp || len(r.Components) > 0
+	}
+	if !hasCmp {
+		cols = cols[:8]
+	}
 	t := &Table{ID: "seg-table", Class: "grid figures", Head: cols}
 	cell := func(col int, text string) Cell { return Cell{Text: text, Label: cols[col]} }
 	for i, r := range l.Segments {
@@ -259,14 +270,22 @@ func (b *builder) segmentTable() Block {
 			cell(5, b.head(r.MajorLoss)),
 			cell(6, b.head(r.MinorLoss)+" ("+calc.FormatNumber(r.SumK, 3)+")"),
 			cell(7, b.head(r.TransitionLoss)),
-			cell(8, b.componentText(r.Components)),
 		}})
+		if hasCmp {
+			row := &t.Rows[len(t.Rows)-1]
+			row.Cells = append(row.Cells, cell(8, b.componentText(r.Components, false)))
+		}
+	}
+	sums := []Cell{cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss))}
+	total := "friction and fittings, point 1 to point 2"
+	if hasCmp {
+		sums = append(sums, cell(8, b.head(l.ComponentLoss)))
+		total = "friction, fittings and components, point 1 to point 2"
 	}
 	t.Foot = []Row{
-		{Head: "whole line", HeadSpan: 5, Class: "sum", Cells: []Cell{
-			cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss)), cell(8, b.head(l.ComponentLoss))}},
-		{Head: "friction, fittings and components, point 1 to point 2", HeadSpan: 5, Class: "sum total", Cells: []Cell{
-			{ID: "seg-total", Text: b.head(l.TotalLoss), Span: 4}}},
+		{Head: "whole line", HeadSpan: 5, Class: "sum", Cells: sums},
+		{Head: total, HeadSpan: 5, Class: "sum total", Cells: []Cell{
+			{ID: "seg-total", Text: b.head(l.TotalLoss), Span: len(sums)}}},
 	}
 	return Block{Kind: BlockTable, Table: t}
 }
@@ -373,7 +392,7 @@ func (b *builder) segmentCard(n, count int) Card {
 			line += " + change of diameter " + b.head(r.TransitionLoss)
 		}
 		if len(r.Components) > 0 {
-			line += " + components: " + b.componentText(r.Components)
+			line += " + components: " + b.componentText(r.Components, true)
 		}
 	}
 	cmp := b.plain(p("cmp"), "", "", false)
@@ -387,15 +406,18 @@ func (b *builder) segmentCard(n, count int) Card {
 	return c
 }
 
-// componentText lists components' drops by name, as heads and pressures
-// in the sheet's units; "none" without any.
-func (b *builder) componentText(cs []calc.ComponentLoss) string {
+// componentText lists components' drops by name, as heads (and, with
+// pressure, as pressures) in the sheet's units; "none" without any.
+func (b *builder) componentText(cs []calc.ComponentLoss, pressure bool) string {
 	if len(cs) == 0 {
 		return "none"
 	}
 	parts := make([]string, len(cs))
 	for i, c := range cs {
-		parts[i] = c.Name + " " + b.head(c.Head) + " (" + b.show(c.Pressure, calc.Pressure) + ")"
+		parts[i] = c.Name + " " + b.head(c.Head)
+		if pressure {
+			parts[i] += " (" + b.show(c.Pressure, calc.Pressure) + ")"
+		}
 	}
 	return strings.Join(parts, "; ")
 }
@@ -410,8 +432,12 @@ func (b *builder) lineSummary(n int) Block {
 	t := what + ": shown once the balance has an answer."
 	if br := b.r.Balance; br != nil && br.Line != nil {
 		l := br.Line
+		cmp := ""
+		if l.ComponentLoss != 0 {
+			cmp = " + components " + b.head(l.ComponentLoss)
+		}
 		t = what + ": pipe friction " + b.head(l.MajorLoss) + " + fittings " + b.head(l.MinorLoss) +
-			" + changes of diameter " + b.head(l.TransitionLoss) + " = " + b.head(l.TotalLoss)
+			" + changes of diameter " + b.head(l.TransitionLoss) + cmp + " = " + b.head(l.TotalLoss)
 	}
 	return Block{Kind: BlockText, ID: "line-total", Class: "computed", Text: t, Buttons: []Button{
 		{ID: "to-line", Text: "Open the Line view", Class: "act", Act: Action{Do: "choose", Param: "view", Value: "line"}}}}
