@@ -25,6 +25,9 @@ type HighPoint struct {
 	// Breaks is true when Pressure is at or below the vapour pressure (or
 	// zero): the liquid column breaks there.
 	Breaks bool
+	// AtPump is true when the node is the pump's inlet (the end of segment
+	// PumpAfter, with a pump head): a suction problem rather than a crest.
+	AtPump bool
 }
 
 // gradeNodes builds the EGL/HGL nodes of the line carrying lr's flow, from
@@ -67,7 +70,7 @@ func (b Balance) gradeNodes(in PointState, hp float64, lr *LineResult) []Profile
 // them; point 1, nodes[0], is checked by the balance itself). The crown is
 // not checked at the line's two ends: their elevations are those of points
 // 1 and 2, often a tank's surface rather than the pipe.
-func (b Balance) highPoints(nodes []ProfileNode) []HighPoint {
+func (b Balance) highPoints(nodes []ProfileNode, pumpHead float64) []HighPoint {
 	pv := b.Fluid.VapourPressure
 	total := b.Line.Length()
 	var out []HighPoint
@@ -90,6 +93,7 @@ func (b Balance) highPoints(nodes []ProfileNode) []HighPoint {
 		// segment adds is that segment's end too.
 		hp := HighPoint{Segment: seg, AtEnd: k%2 == 0 || k > 2*len(b.Line.Segments), Distance: n.Distance, Z: n.Z,
 			BelowCrown: below, Pressure: n.Pressure, Breaks: breaks}
+		hp.AtPump = pumpHead > 0 && k%2 == 0 && k <= 2*len(b.Line.Segments) && seg == b.PumpAfter
 		if !in {
 			out = append(out, hp)
 			in = true
@@ -151,6 +155,15 @@ func highPointWarnings(hps []HighPoint, q, fq float64, fok bool) []Warning {
 		}
 		var w Warning
 		switch {
+		case hp.AtPump && hp.Breaks && fok:
+			w = warnf("z", "at the pump's inlet, the end of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line, so the pressure there would be below the liquid's vapour pressure — the column breaks and the pump cavitates. The suction side stays full only up to %v, not the %v of the balance; raise the supply, enlarge or shorten the suction line, move losses to the delivery side or set the pump lower",
+				hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(fq, Flow), Fig(q, Flow))
+		case hp.AtPump && hp.Breaks:
+			w = warnf("z", "at the pump's inlet, the end of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line even with no flow — the column breaks and the pump cannot prime or run; set the pump lower or raise the supply",
+				hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length))
+		case hp.AtPump:
+			w = warnf("z", "at the pump's inlet, the end of segment %d (%v from point 1, elevation %v): the hydraulic grade line is %v below the pipe crown, so the suction is below atmospheric pressure: air leaks in at joints and seals; check the NPSH on the Pump view",
+				hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(hp.BelowCrown, Length))
 		case hp.Breaks && fok:
 			w = warnf("z", "high point at the %s of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line, so the pressure there would be below the liquid's vapour pressure — the column breaks (vapour pockets, a siphon that stops, cavitation and hammer when it rejoins). The pipe runs full only up to %v (with the surplus head taken by a valve at point 2), not the %v of the balance; lower the pipe, reduce the losses upstream or raise the pressure",
 				where, hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(fq, Flow), Fig(q, Flow))

@@ -129,3 +129,31 @@ func TestHighPointBelowCrown(t *testing.T) {
 		t.Errorf("below crown %v: %s", hp.BelowCrown, ws[0].Text)
 	}
 }
+
+// TestHighPointAtPumpInlet: a long, lossy suction run ending at the pump
+// (after segment 1) drops the pressure at the pump's inlet below the
+// vapour pressure: worded as the pump's inlet, not a crest. The suction
+// run alone at 30 L/s in 100 mm pipe over 300 m loses far more than the
+// 10.1 m the atmosphere supplies (1 bar ≈ 10.2 m of water, common
+// practice).
+func TestHighPointAtPumpInlet(t *testing.T) {
+	b := Balance{Fluid: testLiquid, SitePressure: 101325, In: Point{P: 101325}, Out: Point{P: 101325, Z: 20},
+		Line: &Line{Segments: []Segment{
+			{Run: Run{Length: 300, Diameter: 0.1, Roughness: 5e-5}, EndZ: 0},
+			{Run: Run{Length: 100, Diameter: 0.1, Roughness: 5e-5}, EndZ: 20},
+		}}, PumpAfter: 1, Q: 0.03, Unknown: SolvePumpHead}
+	r, err := b.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(r.HighPoints) != 1 || !r.HighPoints[0].AtPump || !r.HighPoints[0].Breaks || !r.FullFlowKnown {
+		t.Fatalf("high points %+v", r.HighPoints)
+	}
+	found := false
+	for _, w := range r.Warnings {
+		found = found || strings.HasPrefix(w.Text, "at the pump's inlet, the end of segment 1")
+	}
+	if !found {
+		t.Errorf("warnings %+v", r.Warnings)
+	}
+}

@@ -51,7 +51,7 @@ func lineAlpha(mode AlphaMode, rr *RunResult) float64 {
 // Out.TotalHead + h_turbine.
 func (b Balance) profile(r *BalanceResult, lr *LineResult) ([]ProfileNode, []Warning) {
 	nodes := b.gradeNodes(r.In, r.PumpHead, lr)
-	r.HighPoints = b.highPoints(nodes)
+	r.HighPoints = b.highPoints(nodes, r.PumpHead)
 	broken := false
 	for _, hp := range r.HighPoints {
 		broken = broken || hp.Breaks

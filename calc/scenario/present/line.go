@@ -92,15 +92,18 @@ func (b *builder) highPointFacts() []Fact {
 	br := b.r.Balance
 	var out []Fact
 	for i, hp := range br.HighPoints {
-		where := "start"
-		if hp.AtEnd {
-			where = "end"
+		where := "high point, start"
+		switch {
+		case hp.AtPump:
+			where = "pump inlet, end"
+		case hp.AtEnd:
+			where = "high point, end"
 		}
 		v := b.head(hp.BelowCrown) + " below the pipe crown (below atmospheric)"
 		if hp.Breaks {
 			v = "below vapour pressure — column breaks"
 		}
-		out = append(out, Fact{ID: "high-point-" + strconv.Itoa(i+1), Label: "high point, " + where + " of segment " + strconv.Itoa(hp.Segment) +
+		out = append(out, Fact{ID: "high-point-" + strconv.Itoa(i+1), Label: where + " of segment " + strconv.Itoa(hp.Segment) +
 			" (" + b.param("l", hp.Distance) + " from point 1)", Value: v})
 	}
 	if b.brokenColumn() {
@@ -245,16 +248,8 @@ func (b *builder) segmentTable() Block {
 		return Block{Kind: BlockEmpty}
 	}
 	l := br.Line
-	cols := []string{"segment", "velocity", "Reynolds number", "regime", "friction factor f", "pipe friction", "fittings (ΣK)", "change of diameter", "components"}
-	// The components' column only where a segment has one: the table
-	// fits the width of a tablet's page without it.
-	hasCmp := l.ComponentLoss != 0
-	for _, r := range l.Segments {
-		hasCmp = hasCmp || len(r.Components) > 0
-	}
-	if !hasCmp {
-		cols = cols[:8]
-	}
+	cols := []string{"segment", "velocity", "Reynolds number", "regime", "friction factor f", "pipe friction", "fittings (ΣK)", "change of diameter"}
+	hasCmp := false
 	t := &Table{ID: "seg-table", Class: "grid figures", Head: cols}
 	cell := func(col int, text string) Cell { return Cell{Text: text, Label: cols[col]} }
 	for i, r := range l.Segments {
@@ -271,22 +266,24 @@ func (b *builder) segmentTable() Block {
 			cell(6, b.head(r.MinorLoss)+" ("+calc.FormatNumber(r.SumK, 3)+")"),
 			cell(7, b.head(r.TransitionLoss)),
 		}})
-		if hasCmp {
-			row := &t.Rows[len(t.Rows)-1]
-			row.Cells = append(row.Cells, cell(8, b.componentText(r.Components, false)))
+		// A component is a row of its own under its segment, so the
+		// table keeps its width on a tablet.
+		for _, c := range r.Components {
+			hasCmp = true
+			t.Rows = append(t.Rows, Row{Head: "segment " + strconv.Itoa(i+1) + " component: " + c.Name, HeadSpan: 5, Class: "cmp", Cells: []Cell{
+				{Text: b.head(c.Head) + " (" + b.show(c.Pressure, calc.Pressure) + ")", Label: "drop at this flow", Span: 3}}})
 		}
 	}
-	sums := []Cell{cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss))}
 	total := "friction and fittings, point 1 to point 2"
+	t.Foot = []Row{{Head: "whole line", HeadSpan: 5, Class: "sum", Cells: []Cell{
+		cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss))}}}
 	if hasCmp {
-		sums = append(sums, cell(8, b.head(l.ComponentLoss)))
 		total = "friction, fittings and components, point 1 to point 2"
+		t.Foot = append(t.Foot, Row{Head: "components", HeadSpan: 5, Class: "sum", Cells: []Cell{
+			{Text: b.head(l.ComponentLoss), Label: "drop at this flow", Span: 3}}})
 	}
-	t.Foot = []Row{
-		{Head: "whole line", HeadSpan: 5, Class: "sum", Cells: sums},
-		{Head: total, HeadSpan: 5, Class: "sum total", Cells: []Cell{
-			{ID: "seg-total", Text: b.head(l.TotalLoss), Span: len(sums)}}},
-	}
+	t.Foot = append(t.Foot, Row{Head: total, HeadSpan: 5, Class: "sum total", Cells: []Cell{
+		{ID: "seg-total", Text: b.head(l.TotalLoss), Span: 3}}})
 	return Block{Kind: BlockTable, Table: t}
 }
 
@@ -392,7 +389,7 @@ func (b *builder) segmentCard(n, count int) Card {
 			line += " + change of diameter " + b.head(r.TransitionLoss)
 		}
 		if len(r.Components) > 0 {
-			line += " + components: " + b.componentText(r.Components, true)
+			line += " + components: " + b.componentText(r.Components)
 		}
 	}
 	cmp := b.plain(p("cmp"), "", "", false)
@@ -406,18 +403,12 @@ func (b *builder) segmentCard(n, count int) Card {
 	return c
 }
 
-// componentText lists components' drops by name, as heads (and, with
-// pressure, as pressures) in the sheet's units; "none" without any.
-func (b *builder) componentText(cs []calc.ComponentLoss, pressure bool) string {
-	if len(cs) == 0 {
-		return "none"
-	}
+// componentText lists components' drops by name, as heads and pressures
+// in the sheet's units.
+func (b *builder) componentText(cs []calc.ComponentLoss) string {
 	parts := make([]string, len(cs))
 	for i, c := range cs {
-		parts[i] = c.Name + " " + b.head(c.Head)
-		if pressure {
-			parts[i] += " (" + b.show(c.Pressure, calc.Pressure) + ")"
-		}
+		parts[i] = c.Name + " " + b.head(c.Head) + " (" + b.show(c.Pressure, calc.Pressure) + ")"
 	}
 	return strings.Join(parts, "; ")
 }
