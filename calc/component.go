@@ -56,7 +56,8 @@ func KvFromCv(cv float64) float64 {
 // not the valve's rated one). Its drop, from the definition of Kv
 // (IEC 60534-1) and the sizing equation for incompressible, non-choked
 // turbulent flow (IEC 60534-2-1, piping geometry factor 1: a valve of the
-// pipe's size), is Δp = 1 bar · (Q/(Kv m³/h))² · ρ/(1000 kg/m³). Choked
+// pipe's size; the equation's form and the reference density of
+// 1000 kg/m³ in both standards are from memory), is Δp = 1 bar · (Q/(Kv m³/h))² · ρ/(1000 kg/m³). Choked
 // flow and cavitation in the valve are not checked.
 type Component struct {
 	Name      string

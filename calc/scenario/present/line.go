@@ -28,6 +28,9 @@ func (b *builder) lineCard() Card {
 	} else {
 		l := br.Line
 		a.Label = "Friction and fittings at " + b.param("q", br.Q)
+		if l.ComponentLoss != 0 {
+			a.Label = "Friction, fittings and components at " + b.param("q", br.Q)
+		}
 		a.Values = []Value{{"line-loss", b.head(l.TotalLoss)}}
 		if l.Transitional && l.TotalLossLow != l.TotalLossHigh {
 			a.Subs = []string{"transitional flow in the line: between " + b.head(l.TotalLossLow) + " and " + b.head(l.TotalLossHigh)}
@@ -270,8 +273,8 @@ func (b *builder) segmentTable() Block {
 		// table keeps its width on a tablet.
 		for _, c := range r.Components {
 			hasCmp = true
-			t.Rows = append(t.Rows, Row{Head: "segment " + strconv.Itoa(i+1) + " component: " + c.Name, HeadSpan: 5, Class: "cmp", Cells: []Cell{
-				{Text: b.head(c.Head) + " (" + b.show(c.Pressure, calc.Pressure) + ")", Label: "drop at this flow", Span: 3}}})
+			t.Rows = append(t.Rows, Row{Head: "segment " + strconv.Itoa(i+1) + " component " + c.Name + ": " + b.head(c.Head) +
+				" (" + b.show(c.Pressure, calc.Pressure) + ")", HeadSpan: len(cols), Class: "cmp"})
 		}
 	}
 	total := "friction and fittings, point 1 to point 2"
@@ -279,8 +282,7 @@ func (b *builder) segmentTable() Block {
 		cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss))}}}
 	if hasCmp {
 		total = "friction, fittings and components, point 1 to point 2"
-		t.Foot = append(t.Foot, Row{Head: "components", HeadSpan: 5, Class: "sum", Cells: []Cell{
-			{Text: b.head(l.ComponentLoss), Label: "drop at this flow", Span: 3}}})
+		t.Foot = append(t.Foot, Row{Head: "components: " + b.head(l.ComponentLoss), HeadSpan: len(cols), Class: "sum cmp"})
 	}
 	t.Foot = append(t.Foot, Row{Head: total, HeadSpan: 5, Class: "sum total", Cells: []Cell{
 		{ID: "seg-total", Text: b.head(l.TotalLoss), Span: 3}}})

@@ -72,7 +72,7 @@ func TestComponentsOnTheSheet(t *testing.T) {
 	}
 	sh, _ = sheetOf(t, sc.Clone(), "line")
 	text = sheetText(sh)
-	if !strings.Contains(text, "segment 1 component: chiller\ncmp\n\n4.589 m (45.00 kPa)") || !strings.Contains(text, "components: chiller 4.589 m (45.00 kPa); valve 10.20 m (100.0 kPa)") {
+	if !strings.Contains(text, "segment 1 component chiller: 4.589 m (45.00 kPa)") || !strings.Contains(text, "components: chiller 4.589 m (45.00 kPa); valve 10.20 m (100.0 kPa)") {
 		t.Errorf("line view lacks the components:\n%s", text)
 	}
 	us := sc.Clone()
