@@ -115,6 +115,8 @@ func (c *card) block(b *present.Block) app.UI {
 		return app.Div().Class("field").Body(
 			app.Label().For(b.ID).Class("lbl").Text(b.Text),
 			app.Input().Type("file").ID(b.ID).Class("file").Accept(".txt,text/plain").OnChange(c.S.onImport))
+	case present.BlockSurvey:
+		return &survey{S: c.S, V: *b.Survey}
 	case present.BlockList:
 		items := make([]app.UI, len(b.Items))
 		for i, t := range b.Items {

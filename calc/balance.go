@@ -147,6 +147,13 @@ type BalanceResult struct {
 	// has one; Profile is then its EGL/HGL profile (see ProfileNode).
 	Line    *LineResult
 	Profile []ProfileNode
+	// HighPoints are the stretches of the line where the HGL falls below
+	// the pipe crown or the vapour-pressure line, one per stretch. When
+	// the column breaks at one and FullFlowKnown is true, FullFlow is the
+	// largest flow the line carries full, m³/s (see Balance.fullFlow).
+	HighPoints    []HighPoint
+	FullFlow      float64
+	FullFlowKnown bool
 	// PumpAfter is the pump's place on the line as used for the profile.
 	PumpAfter int
 
@@ -560,13 +567,9 @@ func (b Balance) result(v float64, st state) BalanceResult {
 		add("major", "pipe friction", -1, major)
 		add("minor", "fittings", -1, minor)
 	} else if st.line != nil {
-		major, minor := st.line.MajorLoss, st.line.MinorLoss+st.line.TransitionLoss
-		if st.line.Transitional && st.line.TotalLoss > 0 {
-			scale := r.FrictionHead / st.line.TotalLoss
-			major, minor = major*scale, minor*scale
+		for _, t := range st.line.budgetTerms(r.FrictionHead) {
+			add(t.key, t.label, -1, t.head)
 		}
-		add("major", "pipe friction", -1, major)
-		add("minor", "fittings and changes of diameter", -1, minor)
 	} else {
 		add("hf", "friction and other losses", -1, r.FrictionHead)
 	}

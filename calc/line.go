@@ -15,6 +15,9 @@ const MaxSegments = 20
 type Segment struct {
 	Run
 	EndZ float64 // elevation of the segment's end above the datum, m
+	// Components are further named losses on the segment (a chiller, a
+	// coil, a control valve), taken at the segment's end for the profile.
+	Components []Component
 }
 
 // Line is an ordered list of segments from point 1 to point 2.
@@ -29,6 +32,10 @@ type SegmentResult struct {
 	// diameter differs from the previous segment's (Borda–Carnot sudden
 	// expansion or sudden contraction), m. Zero for the first segment.
 	TransitionLoss float64
+	// Components are the drops of the segment's components at the flow,
+	// in its order; ComponentLoss is their sum, m.
+	Components    []ComponentLoss
+	ComponentLoss float64
 }
 
 // LineResult is a Line evaluated at one flow. Losses are heads in metres of
@@ -42,9 +49,10 @@ type LineResult struct {
 	TotalLoss, TotalLossLow, TotalLossHigh float64
 	// Transitional is true when any segment is in transitional flow.
 	Transitional bool
-	// MajorLoss, MinorLoss and TransitionLoss split the design TotalLoss
-	// into pipe friction, fittings and changes of diameter.
-	MajorLoss, MinorLoss, TransitionLoss float64
+	// MajorLoss, MinorLoss, TransitionLoss and ComponentLoss split the
+	// design TotalLoss into pipe friction, fittings, changes of diameter
+	// and the segments' components.
+	MajorLoss, MinorLoss, TransitionLoss, ComponentLoss float64
 }
 
 // wrapSegmentError marks a segment's *FieldError with the segment it came
@@ -58,7 +66,7 @@ func wrapSegmentError(i int, err error) error {
 	}
 	c := *fe
 	switch fe.Field {
-	case "length", "d", "eps", "fit", "k", "method", "chw", "z":
+	case "length", "d", "eps", "fit", "k", "method", "chw", "z", "cmp":
 		c.Segment = i + 1
 	default:
 		c.Msg = fmt.Sprintf("segment %d: %s", i+1, fe.Msg)
@@ -111,8 +119,10 @@ func (l Line) check() error {
 // head) where it narrows. These are losses of abrupt changes; a gradual
 // reducer loses less, so the figure is on the safe side.
 //
+// Each segment's components (Component.Loss) add their drops at the flow.
+//
 // Errors are *FieldError values naming the segment's share-link field,
-// "sN.l", "sN.d", "sN.eps", "sN.fit", "sN.k", "sN.fm", "sN.chw" or "sN.z"
+// "sN.l", "sN.d", "sN.eps", "sN.fit", "sN.k", "sN.fm", "sN.chw", "sN.z" or "sN.cmp"
 // (N is the 1-based segment number), "line" for no segments or more than
 // MaxSegments, and "rho", "mu" or "q" (with the segment named in the
 // message) for the liquid and the flow.
@@ -137,9 +147,19 @@ func (l Line) Evaluate(fl Fluid, q float64) (LineResult, error) {
 			}
 			sr.TransitionLoss = tl
 		}
-		res.TotalLoss += rr.TotalLoss + sr.TransitionLoss
-		res.TotalLossLow += rr.TotalLossLow + sr.TransitionLoss
-		res.TotalLossHigh += rr.TotalLossHigh + sr.TransitionLoss
+		for _, c := range s.Components {
+			cl, err := c.Loss(fl.Density, q)
+			if err != nil {
+				return LineResult{}, wrapSegmentError(i, err)
+			}
+			sr.Components = append(sr.Components, cl)
+			sr.ComponentLoss += cl.Head
+		}
+		other := sr.TransitionLoss + sr.ComponentLoss
+		res.TotalLoss += rr.TotalLoss + other
+		res.TotalLossLow += rr.TotalLossLow + other
+		res.TotalLossHigh += rr.TotalLossHigh + other
+		res.ComponentLoss += sr.ComponentLoss
 		res.MajorLoss += rr.MajorLoss
 		res.MinorLoss += rr.MinorLoss
 		res.TransitionLoss += sr.TransitionLoss
@@ -151,13 +171,13 @@ func (l Line) Evaluate(fl Fluid, q float64) (LineResult, error) {
 }
 
 // LossThrough returns the design head lost in segments 1 to k (1-based,
-// inclusive): their friction and fittings and the transitions at their
-// starts, but not the transition into segment k+1. k ≤ 0 gives 0; k beyond
+// inclusive): their friction, fittings and components and the transitions
+// at their starts, but not the transition into segment k+1. k ≤ 0 gives 0; k beyond
 // the last segment gives the whole TotalLoss.
 func (r LineResult) LossThrough(k int) float64 {
 	var h float64
 	for i := 0; i < k && i < len(r.Segments); i++ {
-		h += r.Segments[i].TotalLoss + r.Segments[i].TransitionLoss
+		h += r.Segments[i].TotalLoss + r.Segments[i].TransitionLoss + r.Segments[i].ComponentLoss
 	}
 	return h
 }
@@ -213,6 +233,34 @@ func (l Line) lumped() Line {
 	for i := range out.Segments {
 		r := &out.Segments[i].Run
 		*r = r.lumped()
+	}
+	return out
+}
+
+// budgetTerm is one of a line's terms in "Where the head goes".
+type budgetTerm struct {
+	key, label string
+	head       float64
+}
+
+// budgetTerms splits the line's friction head hf (its design TotalLoss, or
+// a bound of it in transitional flow) into pipe friction ("major"),
+// fittings and changes of diameter ("minor") and one term per component
+// (key "cmpN.K", segment N's K-th component, labelled by its name and
+// segment). In transitional flow the bound's difference from TotalLoss is
+// shared between friction and fittings in proportion; components take no
+// part in it.
+func (r *LineResult) budgetTerms(hf float64) []budgetTerm {
+	major, minor := r.MajorLoss, r.MinorLoss+r.TransitionLoss
+	if r.Transitional && r.TotalLoss-r.ComponentLoss > 0 {
+		scale := (hf - r.ComponentLoss) / (r.TotalLoss - r.ComponentLoss)
+		major, minor = major*scale, minor*scale
+	}
+	out := []budgetTerm{{"major", "pipe friction", major}, {"minor", "fittings and changes of diameter", minor}}
+	for i, s := range r.Segments {
+		for k, c := range s.Components {
+			out = append(out, budgetTerm{fmt.Sprintf("cmp%d.%d", i+1, k+1), fmt.Sprintf("%s (segment %d)", c.Name, i+1), c.Head})
+		}
 	}
 	return out
 }

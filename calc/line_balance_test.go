@@ -4,6 +4,7 @@ import (
 	"errors"
 	"math"
 	"math/rand"
+	"strings"
 	"testing"
 )
 
@@ -266,14 +267,20 @@ func TestProfileVapourWarning(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	found := false
+	found := 0
 	for _, w := range r.Warnings {
-		if w.Segment == 1 && w.Field == "z" && w.Code == CautionColumnBreaks {
-			found = true
+		if w.Field == "z" && strings.Contains(w.Text, "high point") {
+			found++
+			if w.Segment != 1 || !strings.Contains(w.Text, "vapour-pressure line even with no flow") {
+				t.Errorf("high point warning: %+v", w)
+			}
 		}
 	}
-	if !found {
-		t.Errorf("no vapour warning on segment 1: %+v", r.Warnings)
+	if found != 1 {
+		t.Errorf("want one high-point warning on segment 1, got %d: %+v", found, r.Warnings)
+	}
+	if len(r.HighPoints) != 1 || !r.HighPoints[0].Breaks || r.FullFlowKnown {
+		t.Errorf("high points %+v, full flow known %v", r.HighPoints, r.FullFlowKnown)
 	}
 }
 

@@ -36,8 +36,9 @@ func lineAlpha(mode AlphaMode, rr *RunResult) float64 {
 
 // profile builds the EGL/HGL profile of a balance with a line, from the
 // solved result r (point heads, pump head) and the line evaluated at the
-// solution's flow, with warnings where the pressure in the pipe falls to
-// the vapour pressure.
+// solution's flow. It sets r.HighPoints (see HighPoint) and, when the
+// column breaks at one, r.FullFlow (see fullFlow), and words one warning
+// per high point.
 //
 // The first node is point 1 itself. Each segment then has a node at its
 // start and one at its end; friction and fittings are spread along the
@@ -49,46 +50,16 @@ func lineAlpha(mode AlphaMode, rr *RunResult) float64 {
 // of any turbine, taken at point 2: the last node's EGL is
 // Out.TotalHead + h_turbine.
 func (b Balance) profile(r *BalanceResult, lr *LineResult) ([]ProfileNode, []Warning) {
-	g := StandardGravity
-	rhog := b.Fluid.Density * g
-	segs := b.Line.Segments
-	nodes := make([]ProfileNode, 0, 2*len(segs)+2)
-	nodes = append(nodes, ProfileNode{Z: r.In.Z, EGL: r.In.TotalHead,
-		HGL: r.In.TotalHead - r.In.VelocityHead, Pressure: r.In.P})
-	egl, dist, z := r.In.TotalHead, 0.0, r.In.Z
-	node := func(seg int, hv float64) ProfileNode {
-		hgl := egl - hv
-		return ProfileNode{Distance: dist, Z: z, EGL: egl, HGL: hgl,
-			Pressure: (hgl-z)*rhog + b.SitePressure, Segment: seg}
+	nodes := b.gradeNodes(r.In, r.PumpHead, lr)
+	r.HighPoints = b.highPoints(nodes, r.PumpHead)
+	broken := false
+	for _, hp := range r.HighPoints {
+		broken = broken || hp.Breaks
 	}
-	var warn []Warning
-	pv := b.Fluid.VapourPressure
-	for i := range segs {
-		sr := &lr.Segments[i]
-		if b.PumpAfter == i {
-			egl += r.PumpHead
-		}
-		egl -= sr.TransitionLoss
-		hv := lineAlpha(b.Alpha, &sr.RunResult) * sr.Velocity * sr.Velocity / (2 * g)
-		start := node(i+1, hv)
-		dist += segs[i].Length
-		z = segs[i].EndZ
-		egl -= sr.TotalLoss
-		end := node(i+1, hv)
-		nodes = append(nodes, start, end)
-		for _, n := range [2]ProfileNode{start, end} {
-			if n.Pressure <= pv || n.Pressure <= 0 {
-				w := Warn("z", CautionColumnBreaks, Fig(n.Pressure, Pressure), Fig(n.Distance, Length), Fig(pv, Pressure))
-				w.Segment = i + 1
-				warn = append(warn, w)
-				break
-			}
-		}
+	fok := false
+	if broken {
+		r.FullFlow, fok = b.fullFlow(r)
+		r.FullFlowKnown = fok
 	}
-	if b.PumpAfter == len(segs) {
-		egl += r.PumpHead
-		last := &lr.Segments[len(segs)-1]
-		nodes = append(nodes, node(len(segs), lineAlpha(b.Alpha, &last.RunResult)*last.Velocity*last.Velocity/(2*g)))
-	}
-	return nodes, warn
+	return nodes, highPointWarnings(r.HighPoints, r.Q, r.FullFlow, fok)
 }

@@ -150,6 +150,13 @@ func observable(r Result, key string) (float64, string, error) {
 			return b.In.Alpha, "", nil
 		case "alpha2":
 			return b.Out.Alpha, "", nil
+		case "fullq": // the largest flow the line carries full
+			if !b.FullFlowKnown {
+				return miss()
+			}
+			return b.FullFlow, "", nil
+		case "highpoints": // how many high points the line has
+			return float64(len(b.HighPoints)), "", nil
 		}
 	case "pump":
 		if r.Pump == nil || r.Pump.Operating == nil {

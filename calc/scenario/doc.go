@@ -110,6 +110,19 @@
 //
 //	sN.l sN.d sN.nps sN.sch sN.mat sN.eps sN.fit sN.k   as for the single run
 //	sN.z    elevation of the segment's end, e.g. s1.z=214.5m
+//	sN.cmp  components on the segment (optional), comma separated, each
+//	        name:drop@flow or name:cvN / name:kvN, e.g.
+//	        s2.cmp=chiller:45kPa@12L/s,coil:3.2m@12L/s,valve:kv40
+//
+// A component's name is what the budget and the loss table show (any text
+// without , : or @, at most 40 characters). drop@flow is a drop at a rated
+// flow, a pressure (kPa, bar, psi…) or a head of the flowing liquid (m,
+// ft), and the flow with its unit; it scales with the flow squared and is
+// taken as rated on the liquid in service. cvN and kvN are a control
+// valve's flow coefficient at its present opening: Cv in US gal/min at
+// 1 psi, Kv in m³/h at 1 bar (IEC 60534-1, ANSI/ISA-75.01.01; Cv = 1.156·Kv),
+// its drop 1 bar·(Q/Kv)²·ρ/(1000 kg/m³). Units are required; decimals take
+// a point (a comma starts the next component).
 //
 // When segments are given they are the friction path of the balance (and a
 // single run l must not be given as well). Losses where the diameter

@@ -1,6 +1,9 @@
 package scenario
 
 import (
+	"fmt"
+	"math"
+	"strconv"
 	"strings"
 
 	"fieldhead/calc"
@@ -150,4 +153,151 @@ func (d *Draft) RemoveRow(row int) {
 		d.writeList(p, append(cells[:row], cells[row+1:]...), unit)
 	}
 	d.Rows = n - 1
+}
+
+// SurveyPoint is one row of a pasted survey: a chainage and an elevation,
+// as typed (in the sheet's length unit).
+type SurveyPoint struct {
+	Line                int // 1-based line of the pasted text
+	Chainage, Elevation float64
+	ChainText, ElevText string
+}
+
+// ParseSurvey reads a table of chainage and elevation as a spreadsheet
+// copies it: one point a line, the two columns separated by a tab, a
+// semicolon or a comma (the first of these the text holds, in that order;
+// spaces when it holds none), further columns ignored. Where the
+// separator is not a comma a decimal comma is read as a point. A first row
+// that is not numbers is a header and skipped; blank lines are skipped.
+// Each other row that cannot be used is a problem naming its line: a cell
+// that is not a number, a missing elevation, a chainage not beyond the
+// previous point's. The good rows are returned.
+func ParseSurvey(text string) (pts []SurveyPoint, problems []string) {
+	lines := strings.Split(strings.ReplaceAll(text, "\r\n", "\n"), "\n")
+	sep := ""
+	for _, s := range []string{"\t", ";", ","} {
+		if strings.Contains(text, s) {
+			sep = s
+			break
+		}
+	}
+	cells := func(l string) []string {
+		if sep == "" {
+			return strings.Fields(l)
+		}
+		return strings.Split(l, sep)
+	}
+	num := func(c string) (float64, string, bool) {
+		c = strings.TrimSpace(strings.ReplaceAll(c, "−", "-"))
+		if sep != "," {
+			c = strings.ReplaceAll(c, ",", ".")
+		}
+		v, err := strconv.ParseFloat(c, 64)
+		return v, c, err == nil && !math.IsInf(v, 0) && !math.IsNaN(v) && math.Abs(v) < 1e7
+	}
+	first := true
+	for i, l := range lines {
+		if strings.TrimSpace(l) == "" {
+			continue
+		}
+		cs := cells(l)
+		header := first
+		first = false
+		if len(cs) < 2 || strings.TrimSpace(cs[1]) == "" {
+			if header {
+				continue
+			}
+			problems = append(problems, fmt.Sprintf("line %d: %q has no elevation; give chainage and elevation", i+1, strings.TrimSpace(l)))
+			continue
+		}
+		c, ct, okc := num(cs[0])
+		z, zt, okz := num(cs[1])
+		switch {
+		case header && !okc && !okz:
+			continue
+		case !okc:
+			problems = append(problems, fmt.Sprintf("line %d: the chainage %q is not a number", i+1, strings.TrimSpace(cs[0])))
+			continue
+		case !okz:
+			problems = append(problems, fmt.Sprintf("line %d: the elevation %q is not a number", i+1, strings.TrimSpace(cs[1])))
+			continue
+		case len(pts) > 0 && c <= pts[len(pts)-1].Chainage:
+			problems = append(problems, fmt.Sprintf("line %d: the chainage %s is not beyond the previous point's (%s); the points go from point 1 towards point 2",
+				i+1, ct, pts[len(pts)-1].ChainText))
+			continue
+		}
+		pts = append(pts, SurveyPoint{Line: i + 1, Chainage: c, Elevation: z, ChainText: ct, ElevText: zt})
+	}
+	return pts, problems
+}
+
+// PasteProfile makes the line's segments from a pasted survey table (see
+// ParseSurvey): each pair of consecutive good points is a segment whose
+// end elevation is the second point's and whose length is the slope
+// length between them, sqrt(Δchainage² + Δelevation²), since a surveyor's
+// chainage is measured on the horizontal and friction goes with the length
+// of pipe laid. Figures are in the sheet's length unit.
+//
+// Segment k of the sheet takes the k-th run of the survey: its length and
+// end elevation change, its pipe, wall, fittings and components stay. New
+// segments take the pipe and wall of the sheet's last segment (as Add a
+// segment does); a sheet with a single run makes it segment 1 first. A
+// sheet with more segments than the survey keeps the further ones as they
+// are (a note says so). Point 1's elevation is set from the first point
+// when the sheet has none; one already given is kept (it may be a water
+// surface) and a note says so.
+//
+// It reports whether the scenario changed. SurveyNotes holds the problems
+// and notes; Survey keeps the pasted text while a row could not be used,
+// so nothing pasted is lost. A survey of fewer than two good points, or
+// of more than MaxSegments+1, changes nothing.
+func (d *Draft) PasteProfile(text string) bool {
+	d.endEdit()
+	pts, notes := ParseSurvey(text)
+	d.Survey, d.SurveyNotes = text, notes
+	switch {
+	case len(pts) < 2:
+		d.SurveyNotes = append(d.SurveyNotes, "a profile needs at least two points (rows of chainage and elevation); nothing was changed")
+		return false
+	case len(pts)-1 > MaxSegments:
+		d.SurveyNotes = append(d.SurveyNotes, fmt.Sprintf("a line has at most %d segments (%d points); this table has %d points: split the survey or merge short runs; nothing was changed",
+			MaxSegments, MaxSegments+1, len(pts)))
+		return false
+	}
+	if d.ShownSegments() == 0 && d.Scen.Has("l") {
+		d.AddSegment()
+	}
+	lu, zu := DefaultUnit("l", d.US()), DefaultUnit("z1", d.US())
+	before := d.Scen.Encode()
+	n := len(pts) - 1
+	for d.ShownSegments() < n {
+		d.AddSegment()
+	}
+	for k := 1; k <= n; k++ {
+		a, b := pts[k-1], pts[k]
+		dc, dz := b.Chainage-a.Chainage, b.Elevation-a.Elevation
+		l := math.Round(math.Hypot(dc, dz)*1000) / 1000
+		d.set(SegmentParam(k, "l"), strconv.FormatFloat(l, 'f', -1, 64)+lu)
+		d.set(SegmentParam(k, "z"), b.ElevText+zu)
+	}
+	if !d.Scen.Has("z1") {
+		d.set("z1", pts[0].ElevText+zu)
+	} else if !sameValue(d.Scen.Get("z1"), pts[0].Elevation, zu) {
+		d.SurveyNotes = append(d.SurveyNotes, "point 1's elevation is kept as given ("+d.Scen.Get("z1")+"); the first segment starts there, not at the survey's first point ("+pts[0].ElevText+" "+zu+")")
+	}
+	if extra := d.ShownSegments() - n; extra > 0 {
+		d.SurveyNotes = append(d.SurveyNotes, fmt.Sprintf("segments %d to %d are kept as they were; remove them if the survey replaces them", n+1, n+extra))
+	}
+	if len(notes) == 0 {
+		d.Survey = ""
+	}
+	return d.Scen.Encode() != before
+}
+
+// sameValue reports whether text ("212.0m", "212") is the value v in unit
+// u (a number without a unit is taken in u).
+func sameValue(text string, v float64, u string) bool {
+	num, unit := Split(text)
+	x, err := strconv.ParseFloat(strings.ReplaceAll(num, ",", "."), 64)
+	return err == nil && (unit == "" || unit == u) && x == v
 }

@@ -174,7 +174,7 @@ func linkName(calcField string) string {
 		return "l"
 	case "method":
 		return "fm"
-	case "d", "eps", "fit", "k", "chw", "z":
+	case "d", "eps", "fit", "k", "chw", "z", "cmp":
 		return calcField
 	}
 	return ""

@@ -3,6 +3,8 @@ package scenario
 import (
 	"fmt"
 	"math"
+	"strconv"
+	"strings"
 
 	"fieldhead/calc"
 )
@@ -30,6 +32,14 @@ func (e *eval) line() *calc.Line {
 		}
 		spec, _, good := e.readRun(pre)
 		seg := calc.Segment{Run: spec}
+		if e.s.Has(pre + "cmp") {
+			cs, err := ParseComponents(e.s.Get(pre + "cmp"))
+			if err != nil {
+				e.failAt(pre+"cmp", err)
+				good = false
+			}
+			seg.Components = cs
+		}
 		zp := pre + "z"
 		switch {
 		case e.s.Has(zp):
@@ -56,4 +66,100 @@ func (e *eval) line() *calc.Line {
 		}
 	}
 	return ln
+}
+
+// componentNameMax bounds a component's name, in characters.
+const componentNameMax = 40
+
+// ParseComponents reads a segment's components (sN.cmp): items separated
+// by commas, each name:spec, where name is the component's name as the
+// budget shows it (any text without , : or @) and spec is
+//
+//   - drop@flow: a drop at a rated flow, scaling with the flow squared;
+//     the drop a pressure (45kPa, 6.5psi, 0.3bar) or a head of the flowing
+//     liquid (3.2m, 10ft), the flow with its unit (12L/s, 190gpm);
+//   - cvN or kvN: a control valve by its flow coefficient at its present
+//     opening, Cv in US gal/min at 1 psi or Kv in m³/h at 1 bar (cv25,
+//     kv40).
+//
+// "chiller:45kPa@12L/s,coil:3.2m@12L/s,valve:kv40" is a chiller, a coil
+// and a control valve. Numbers take a decimal point; units are required.
+// Errors are *calc.FieldError for field "cmp" naming the item.
+func ParseComponents(text string) ([]calc.Component, error) {
+	var out []calc.Component
+	bad := func(format string, args ...any) error {
+		return &calc.FieldError{Field: "cmp", Msg: fmt.Sprintf(format, args...)}
+	}
+	for _, item := range strings.Split(text, ",") {
+		item = strings.TrimSpace(item)
+		if item == "" {
+			continue
+		}
+		name, spec, ok := strings.Cut(item, ":")
+		name, spec = strings.TrimSpace(name), strings.TrimSpace(spec)
+		if !ok || name == "" || strings.Contains(name, "@") {
+			return nil, bad("%q: write each component as name:drop@flow (chiller:45kPa@12L/s) or name:cv25 / name:kv40, separated by commas (decimals with a point)", item)
+		}
+		if len([]rune(name)) > componentNameMax {
+			return nil, bad("%q: a component's name has at most %d characters", name, componentNameMax)
+		}
+		c := calc.Component{Name: name}
+		low := strings.ToLower(spec)
+		switch {
+		case strings.HasPrefix(low, "cv") || strings.HasPrefix(low, "kv"):
+			v, err := strconv.ParseFloat(strings.TrimSpace(spec[2:]), 64)
+			if err != nil {
+				return nil, bad("%s: the valve's %s must be a number, as in %s:%s25", name, strings.ToUpper(low[:1])+"v", name, low[:2])
+			}
+			c.Kind, c.Kv = calc.ComponentValve, v
+			if low[0] == 'c' {
+				c.Kv = calc.KvFromCv(v)
+			}
+		case strings.Contains(spec, "@"):
+			dropText, flowText, _ := strings.Cut(spec, "@")
+			drop, dim, err := componentValue(dropText, "drop", calc.Pressure, calc.Length)
+			if err != nil {
+				return nil, bad("%s: %v", name, err)
+			}
+			flow, _, err := componentValue(flowText, "rated flow", calc.Flow)
+			if err != nil {
+				return nil, bad("%s: %v", name, err)
+			}
+			c.Kind, c.RatedFlow = calc.ComponentRated, flow
+			if dim == calc.Length {
+				c.RatedHead = drop
+			} else {
+				c.RatedDrop = drop
+			}
+		default:
+			return nil, bad("%s: %q is neither drop@flow (45kPa@12L/s) nor a valve's cv25 or kv40 (decimals take a point: a comma starts the next component)", name, spec)
+		}
+		if _, err := c.Loss(1000, 0); err != nil {
+			return nil, err
+		}
+		out = append(out, c)
+	}
+	return out, nil
+}
+
+// componentValue reads a number and its unit of one of the dimensions
+// dims, in SI.
+func componentValue(text, what string, dims ...calc.Dimension) (float64, calc.Dimension, error) {
+	num, unit := Split(text)
+	if num == "" || unit == "" {
+		return 0, 0, fmt.Errorf("the %s needs a number and its unit, got %q", what, strings.TrimSpace(text))
+	}
+	v, err := strconv.ParseFloat(strings.ReplaceAll(num, "−", "-"), 64)
+	if err != nil {
+		return 0, 0, fmt.Errorf("the %s %q is not a number (decimals with a point)", what, num)
+	}
+	u, err := calc.LookupUnit(unit)
+	if err == nil {
+		for _, d := range dims {
+			if u.Dim == d {
+				return u.ToSI(v), d, nil
+			}
+		}
+	}
+	return 0, 0, fmt.Errorf("%q is not a unit of the %s", unit, what)
 }

@@ -39,6 +39,9 @@ type Param struct {
 	// sN.<Name>; SegLabel is its label there ("length"), SegBox its box's.
 	Segment          bool
 	SegLabel, SegBox string
+	// SegmentOnly marks a segment's parameter with no single-run
+	// counterpart (sN.z, sN.cmp): there is no bare z or cmp.
+	SegmentOnly bool
 	// Group is the either/or group the parameter belongs to ("" none): the
 	// link holds only the chosen side's parameters.
 	Group string
@@ -118,7 +121,10 @@ var Table = []Param{
 	}},
 	{Name: "chw", Label: "Hazen–Williams C", Box: "Hazen–Williams C", Hint: "(blank: from the material)", Kind: KindNumber},
 	{Name: "z", Label: "end elevation", Kind: KindQuantity, Dim: calc.Length, SI: "m", US: "ft",
-		Segment: true, SegLabel: "elevation of its end", SegBox: "Elevation at its end"},
+		Segment: true, SegmentOnly: true, SegLabel: "elevation of its end", SegBox: "Elevation at its end"},
+	{Name: "cmp", Label: "components", Kind: KindText, Segment: true, SegmentOnly: true, SegLabel: "components",
+		SegBox: "Components", Hint: "(optional: name:drop@flow or name:cv25 / name:kv40, comma separated)",
+		Placeholder: "chiller:45kPa@12L/s, valve:kv40"},
 
 	{Name: "cv", Label: "value to convert", Box: "Pressure, water column or head", Kind: KindQuantity, Dim: calc.Pressure,
 		SI: "kPa", US: "psi", ExtraUnits: []string{"m", "ft"}, Missing: "enter a value to convert"},
@@ -303,7 +309,7 @@ func Lookup(name string) (p Param, seg int, ok bool) {
 		return p, n, true
 	}
 	r, found := byName[name]
-	if !found || (r.Name == "z") {
+	if !found || r.SegmentOnly {
 		return Param{}, 0, false
 	}
 	return *r, 0, true
@@ -345,7 +351,7 @@ func Label(name string) string {
 var Params = func() []string {
 	var out []string
 	for _, p := range Table {
-		if p.Name != "z" {
+		if !p.SegmentOnly {
 			out = append(out, p.Name)
 		}
 	}

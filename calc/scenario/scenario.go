@@ -23,7 +23,7 @@ var known = func() map[string]int {
 	m := make(map[string]int, len(Table)+MaxSegments*len(segFields))
 	i := 0
 	for _, p := range Table {
-		if p.Name == "z" {
+		if p.SegmentOnly {
 			continue
 		}
 		m[p.Name] = i

@@ -56,6 +56,9 @@ func (b *builder) answerCard() Card {
 	if br := b.r.Balance; br != nil {
 		a.Values = []Value{{"answer-value", b.solvedText(br.Value)}}
 		a.Subs = b.answerLines()
+		if full, ok := b.fullFlowAnswer(); ok {
+			a.Label, a.Values, a.Subs = full.Label, full.Values, append(full.Subs, a.Subs...)
+		}
 	} else {
 		a.None, a.Why = true, b.toCheck(balanceInputs()...)
 	}

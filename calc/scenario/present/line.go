@@ -28,6 +28,9 @@ func (b *builder) lineCard() Card {
 	} else {
 		l := br.Line
 		a.Label = "Friction and fittings at " + b.param("q", br.Q)
+		if l.ComponentLoss != 0 {
+			a.Label = "Friction, fittings and components at " + b.param("q", br.Q)
+		}
 		a.Values = []Value{{"line-loss", b.head(l.TotalLoss)}}
 		if l.Transitional && l.TotalLossLow != l.TotalLossHigh {
 			a.Subs = []string{"transitional flow in the line: between " + b.head(l.TotalLossLow) + " and " + b.head(l.TotalLossHigh)}
@@ -43,6 +46,10 @@ func (b *builder) lineCard() Card {
 			{Label: "length of the line", Value: length},
 			{Label: "segments", Value: strconv.Itoa(len(l.Segments))},
 		}}
+		if l.ComponentLoss != 0 {
+			facts.Facts = append(facts.Facts, Fact{Label: "components (by name in the loss table)", Value: b.head(l.ComponentLoss)})
+		}
+		facts.Facts = append(facts.Facts, b.highPointFacts()...)
 	}
 	isLine := func(w scenario.Warning) bool {
 		n, _ := scenario.SegmentOf(w.Param)
@@ -51,6 +58,65 @@ func (b *builder) lineCard() Card {
 	return Card{ID: "line-card", Class: "answer-card", Title: "Line, point 1 to point 2", Blocks: []Block{
 		{Kind: BlockAnswer, ID: "answer", Answer: a}, facts, fields(b.pumpPlace(n)), b.warnings(isLine),
 	}}
+}
+
+// fullFlowAnswer is the Balance view's answer when it solves for the flow
+// and the column breaks at a high point: the flow of the balance needs a
+// full pipe past it, so the headline is the largest flow the line carries
+// full, with the balance's figure below it. ok is false otherwise.
+func (b *builder) fullFlowAnswer() (a Answer, ok bool) {
+	br := b.r.Balance
+	if br == nil || b.solve() != "q" || !b.brokenColumn() {
+		return a, false
+	}
+	if !br.FullFlowKnown {
+		return Answer{Label: "Flow (the unknown): the line cannot run full",
+			Values: []Value{{"answer-value", "none full"}},
+			Subs:   []string{"below vapour pressure — column breaks at a high point even with no flow (see the warning); a full pipe would carry " + b.param("q", br.Q)}}, true
+	}
+	return Answer{Label: "Flow (the unknown): the most the line carries full",
+		Values: []Value{{"answer-value", b.param("q", br.FullFlow)}},
+		Subs: []string{"limited by a high point, where the pressure would fall below vapour pressure — column breaks beyond this flow (see the warning)",
+			"the balance with the pipe full past the high point would give " + b.param("q", br.Q) + ", which it cannot carry"}}, true
+}
+
+// brokenColumn reports whether the column breaks at a high point.
+func (b *builder) brokenColumn() bool {
+	for _, hp := range b.r.Balance.HighPoints {
+		if hp.Breaks {
+			return true
+		}
+	}
+	return false
+}
+
+// highPointFacts are the line card's facts on its high points.
+func (b *builder) highPointFacts() []Fact {
+	br := b.r.Balance
+	var out []Fact
+	for i, hp := range br.HighPoints {
+		where := "high point, start"
+		switch {
+		case hp.AtPump:
+			where = "pump inlet, end"
+		case hp.AtEnd:
+			where = "high point, end"
+		}
+		v := b.head(hp.BelowCrown) + " below the pipe crown (below atmospheric)"
+		if hp.Breaks {
+			v = "below vapour pressure — column breaks"
+		}
+		out = append(out, Fact{ID: "high-point-" + strconv.Itoa(i+1), Label: where + " of segment " + strconv.Itoa(hp.Segment) +
+			" (" + b.param("l", hp.Distance) + " from point 1)", Value: v})
+	}
+	if b.brokenColumn() {
+		v := "none: the column breaks even with no flow"
+		if br.FullFlowKnown {
+			v = b.param("q", br.FullFlow) + " (the surplus head taken by a valve at point 2)"
+		}
+		out = append(out, Fact{ID: "full-flow", Label: "largest flow the line carries full", Value: v, Key: true})
+	}
+	return out
 }
 
 // lineInputs are the parameters the line's result depends on.
@@ -186,6 +252,7 @@ func (b *builder) segmentTable() Block {
 	}
 	l := br.Line
 	cols := []string{"segment", "velocity", "Reynolds number", "regime", "friction factor f", "pipe friction", "fittings (ΣK)", "change of diameter"}
+	hasCmp := false
 	t := &Table{ID: "seg-table", Class: "grid figures", Head: cols}
 	cell := func(col int, text string) Cell { return Cell{Text: text, Label: cols[col]} }
 	for i, r := range l.Segments {
@@ -202,13 +269,23 @@ func (b *builder) segmentTable() Block {
 			cell(6, b.head(r.MinorLoss)+" ("+calc.FormatNumber(r.SumK, 3)+")"),
 			cell(7, b.head(r.TransitionLoss)),
 		}})
+		// A component is a row of its own under its segment, so the
+		// table keeps its width on a tablet.
+		for _, c := range r.Components {
+			hasCmp = true
+			t.Rows = append(t.Rows, Row{Head: "segment " + strconv.Itoa(i+1) + " component " + c.Name + ": " + b.head(c.Head) +
+				" (" + b.show(c.Pressure, calc.Pressure) + ")", HeadSpan: len(cols), Class: "cmp"})
+		}
 	}
-	t.Foot = []Row{
-		{Head: "whole line", HeadSpan: 5, Class: "sum", Cells: []Cell{
-			cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss))}},
-		{Head: "friction and fittings, point 1 to point 2", HeadSpan: 5, Class: "sum total", Cells: []Cell{
-			{ID: "seg-total", Text: b.head(l.TotalLoss), Span: 3}}},
+	total := "friction and fittings, point 1 to point 2"
+	t.Foot = []Row{{Head: "whole line", HeadSpan: 5, Class: "sum", Cells: []Cell{
+		cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss))}}}
+	if hasCmp {
+		total = "friction, fittings and components, point 1 to point 2"
+		t.Foot = append(t.Foot, Row{Head: "components: " + b.head(l.ComponentLoss), HeadSpan: len(cols), Class: "sum cmp"})
 	}
+	t.Foot = append(t.Foot, Row{Head: total, HeadSpan: 5, Class: "sum total", Cells: []Cell{
+		{ID: "seg-total", Text: b.head(l.TotalLoss), Span: 3}}})
 	return Block{Kind: BlockTable, Table: t}
 }
 
@@ -257,7 +334,20 @@ func (b *builder) segmentList() Card {
 	}
 	blocks = append(blocks, Block{Kind: BlockButtons, Buttons: []Button{{ID: "seg-add", Text: "+ " + label, Class: "act",
 		Disabled: n >= scenario.MaxSegments, Act: Action{Do: "seg-add"}}}})
+	blocks = append(blocks, b.surveyBox())
 	return Card{ID: "segments", Class: "seglist", Title: "Segments, in the direction of flow", Blocks: blocks}
+}
+
+// surveyBox is where a survey table is pasted to make the segments.
+func (b *builder) surveyBox() Block {
+	lu, zu := scenario.DefaultUnit("l", b.us), scenario.DefaultUnit("z1", b.us)
+	return Block{Kind: BlockSurvey, Survey: &Survey{ID: "survey-text", Title: "Make the segments from a survey",
+		Label: "Chainage and elevation, one point a line (" + lu + ", " + zu + ")",
+		Hint: "Paste two columns from a spreadsheet (tab, semicolon or comma separated; a header row is skipped). " +
+			"Each pair of points becomes a segment: its length the slope length between them, its end the second point's elevation. " +
+			"Segments already here keep their pipe, fittings and components; new ones take the last segment's pipe.",
+		Text: b.d.Survey, Notes: b.d.SurveyNotes, Open: len(b.d.SurveyNotes) > 0,
+		Button: Button{ID: "survey-paste", Text: "Make the segments", Class: "act"}}}
 }
 
 // segmentCard is one segment's inputs and its figures at the flow.
@@ -300,9 +390,29 @@ func (b *builder) segmentCard(n, count int) Card {
 		if r.TransitionLoss != 0 {
 			line += " + change of diameter " + b.head(r.TransitionLoss)
 		}
+		if len(r.Components) > 0 {
+			line += " + components: " + b.componentText(r.Components)
+		}
 	}
+	cmp := b.plain(p("cmp"), "", "", false)
+	note := "A drop given at a rated flow scales with the flow squared (rated on the liquid in service). A valve's Kv (m³/h at 1 bar) or Cv (US gal/min at 1 psi) is the one at its present opening."
+	if b.us {
+		cmp.Placeholder = "chiller:6.5psi@190gpm, valve:cv46"
+		note = "A drop given at a rated flow scales with the flow squared (rated on the liquid in service). A valve's Cv (US gal/min at 1 psi) is the one at its present opening."
+	}
+	blocks = append(blocks, fields(cmp), text("muted", "", note))
 	c.Blocks = append(blocks, text("computed", "seg-line-"+num, line))
 	return c
+}
+
+// componentText lists components' drops by name, as heads and pressures
+// in the sheet's units.
+func (b *builder) componentText(cs []calc.ComponentLoss) string {
+	parts := make([]string, len(cs))
+	for i, c := range cs {
+		parts[i] = c.Name + " " + b.head(c.Head) + " (" + b.show(c.Pressure, calc.Pressure) + ")"
+	}
+	return strings.Join(parts, "; ")
 }
 
 // lineSummary stands in the Balance view for the single run's inputs when
@@ -315,8 +425,12 @@ func (b *builder) lineSummary(n int) Block {
 	t := what + ": shown once the balance has an answer."
 	if br := b.r.Balance; br != nil && br.Line != nil {
 		l := br.Line
+		cmp := ""
+		if l.ComponentLoss != 0 {
+			cmp = " + components " + b.head(l.ComponentLoss)
+		}
 		t = what + ": pipe friction " + b.head(l.MajorLoss) + " + fittings " + b.head(l.MinorLoss) +
-			" + changes of diameter " + b.head(l.TransitionLoss) + " = " + b.head(l.TotalLoss)
+			" + changes of diameter " + b.head(l.TransitionLoss) + cmp + " = " + b.head(l.TotalLoss)
 	}
 	return Block{Kind: BlockText, ID: "line-total", Class: "computed", Text: t, Buttons: []Button{
 		{ID: "to-line", Text: "Open the Line view", Class: "act", Act: Action{Do: "choose", Param: "view", Value: "line"}}}}

@@ -55,6 +55,7 @@ const (
 	BlockList                       // Items as a plain list (methods, cautions)
 	BlockEmpty                      // nothing: keeps the place of a block that comes and goes
 	BlockImport                     // a file picker that imports a sheets file (Text: its label)
+	BlockSurvey                     // Survey: a box a survey table is pasted into, to make the segments
 )
 
 // Block is one part of a card; Kind says which of its fields apply. A
@@ -77,6 +78,17 @@ type Block struct {
 	Budget    *Budget
 	Node      *Node
 	Card      *Card
+	Survey    *Survey
+}
+
+// Survey is the box a table of chainage and elevation is pasted into and
+// the button that makes the segments from it (scenario.Draft.PasteProfile).
+type Survey struct {
+	ID, Title, Label, Hint string
+	Text                   string   // the pasted text kept while a row could not be used
+	Notes                  []string // what the last paste said: rows not used, segments kept
+	Open                   bool     // drawn open (a paste left notes)
+	Button                 Button
 }
 
 // FieldKind says how an input is drawn.

@@ -1,0 +1,48 @@
+package main
+
+import (
+	"fieldhead/calc/scenario/present"
+
+	"github.com/maxence-charriere/go-app/v10/pkg/app"
+)
+
+// survey is the box a survey table is pasted into and its button, which
+// makes the line's segments from it (one Draft method, PasteProfile).
+type survey struct {
+	app.Compo
+	S *sheet
+	V present.Survey
+}
+
+// Render draws the box, its hint, the button and what the last paste said.
+func (c *survey) Render() (ui app.UI) {
+	defer containPart(c.S, "the survey box", &ui)
+	v := c.V
+	notes := make([]app.UI, len(v.Notes))
+	for i, n := range v.Notes {
+		notes[i] = app.Li().Text(n)
+	}
+	return app.Details().Class("astext survey").Open(v.Open).Body(
+		app.Summary().Text(v.Title),
+		app.Div().Class("field").Body(
+			app.Label().For(v.ID).Class("lbl").Text(v.Label),
+			app.Textarea().ID(v.ID).Class("box survey-text").Rows(6).Attr("spellcheck", "false").
+				Attr("autocomplete", "off").Aria("describedby", v.ID+"-hint").Text(v.Text),
+			app.P().ID(v.ID+"-hint").Class("muted").Text(v.Hint)),
+		app.Button().Type("button").ID(v.Button.ID).Class(v.Button.Class).Text(v.Button.Text).OnClick(c.onPaste),
+		app.Ul().Class("msg warn survey-notes").Aria("live", "polite").Body(notes...),
+	)
+}
+
+// onPaste makes the segments from the box's text; a paste whose every row
+// was used empties the box.
+func (c *survey) onPaste(ctx app.Context, e app.Event) {
+	defer c.S.contain("making the segments from the survey")
+	box := app.Window().GetElementByID(c.V.ID)
+	c.S.d.PasteProfile(box.Get("value").String())
+	if c.S.d.Survey == "" {
+		box.Set("value", "")
+	}
+	c.S.copyNote = ""
+	c.S.evaluate()
+}

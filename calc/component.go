@@ -1,0 +1,129 @@
+package calc
+
+import "math"
+
+// ComponentKind says how a Component's loss is given.
+type ComponentKind uint8
+
+const (
+	// ComponentRated is a drop measured or specified at a rated flow (a
+	// chiller, a coil, a strainer, a meter from its data sheet).
+	ComponentRated ComponentKind = iota
+	// ComponentValve is a control valve by its flow coefficient at the
+	// opening it has (Kv, or Cv converted to Kv).
+	ComponentValve
+)
+
+// Flow-coefficient reference conditions of IEC 60534-1 and ANSI/ISA-75.01.01
+// (the definitions; the factor below follows from them and the exact unit
+// definitions of NIST SP 811):
+//
+//   - Kv is the flow of water in m³/h that passes with a pressure drop of
+//     1 bar (10⁵ Pa), the water at a density of 1000 kg/m³;
+//   - Cv is the flow of water in US gallons per minute that passes with a
+//     drop of 1 psi, the water taken at the same reference density.
+//
+// So Cv = Kv · (m³/h in gpm) · sqrt(psi in bar) = 1.156…·Kv.
+const (
+	kvFlowUnit   = 1.0 / 3600                               // m³/s in one m³/h
+	kvDropUnit   = 1e5                                      // Pa in one bar
+	cvFlowUnit   = 231 * 0.0254 * 0.0254 * 0.0254 / 60      // m³/s in one US gal/min (231 in³ exactly)
+	cvDropUnit   = 0.45359237 * 9.80665 / (0.0254 * 0.0254) // Pa in one psi (lbf/in²)
+	valveRefRho  = 1000.0                                   // kg/m³, the reference density of the definitions
+	componentMax = 1e9                                      // bound on a given coefficient, flow or drop (SI)
+)
+
+// KvFromCv converts a Cv (US gal/min at 1 psi) to a Kv (m³/h at 1 bar):
+// Kv = Cv/1.156…, the factor from the definitions above.
+func KvFromCv(cv float64) float64 {
+	return cv * (cvFlowUnit / kvFlowUnit) / math.Sqrt(cvDropUnit/kvDropUnit)
+}
+
+// Component is a named loss on a segment beside its pipe and fittings.
+//
+// A ComponentRated loss scales with the square of the flow from its rated
+// point (turbulent flow through a fixed geometry, common practice): the
+// drop at flow Q is RatedDrop·(Q/RatedFlow)² when the drop is given as a
+// pressure (RatedDrop > 0 or RatedHead 0), or a head RatedHead·(Q/RatedFlow)²
+// of the flowing liquid. The rating is taken to be for the liquid in
+// service: no density or viscosity correction is made (a drop rated on
+// water and used for a denser liquid scales in proportion to the density
+// if given as a pressure, and stays the same as a head; neither holds in
+// laminar flow, where the drop goes with Q, not Q²).
+//
+// A ComponentValve is a control valve by its flow coefficient Kv at the
+// opening it has (the Kv or Cv given is the one at the current opening,
+// not the valve's rated one). Its drop, from the definition of Kv
+// (IEC 60534-1) and the sizing equation for incompressible, non-choked
+// turbulent flow (IEC 60534-2-1, piping geometry factor 1: a valve of the
+// pipe's size; the equation's form and the reference density of
+// 1000 kg/m³ in both standards are from memory), is Δp = 1 bar · (Q/(Kv m³/h))² · ρ/(1000 kg/m³). Choked
+// flow and cavitation in the valve are not checked.
+type Component struct {
+	Name      string
+	Kind      ComponentKind
+	RatedDrop float64 // Pa at RatedFlow (ComponentRated, pressure form)
+	RatedHead float64 // m of the flowing liquid at RatedFlow (ComponentRated, head form)
+	RatedFlow float64 // m³/s (ComponentRated)
+	Kv        float64 // m³/h at 1 bar (ComponentValve)
+}
+
+// ComponentLoss is a component's drop at one flow.
+type ComponentLoss struct {
+	Name     string
+	Head     float64 // m of the flowing liquid
+	Pressure float64 // Pa
+}
+
+// check validates the component. Errors are *FieldError for field "cmp".
+func (c Component) check() error {
+	bad := func(v float64) bool { return math.IsNaN(v) || math.IsInf(v, 0) || v > componentMax }
+	switch c.Kind {
+	case ComponentRated:
+		switch {
+		case bad(c.RatedFlow) || !(c.RatedFlow > 0):
+			return fieldErrorf("cmp", "%s: the rated flow must be above zero", c.Name)
+		case bad(c.RatedDrop) || bad(c.RatedHead) || c.RatedDrop < 0 || c.RatedHead < 0:
+			return fieldErrorf("cmp", "%s: the rated drop must not be negative", c.Name)
+		case c.RatedDrop > 0 && c.RatedHead > 0:
+			return fieldErrorf("cmp", "%s: give the rated drop as a pressure or as a head, not both", c.Name)
+		}
+	case ComponentValve:
+		if bad(c.Kv) || !(c.Kv > 0) {
+			return fieldErrorf("cmp", "%s: the valve's Cv or Kv must be above zero (a shut valve passes no flow)", c.Name)
+		}
+	default:
+		return fieldErrorf("cmp", "%s: unknown kind of component", c.Name)
+	}
+	return nil
+}
+
+// Loss returns the component's drop carrying flow q (m³/s, ≥ 0) of a
+// liquid of density rho (kg/m³, > 0). Errors are *FieldError for field
+// "cmp" (a bad component) or "rho".
+func (c Component) Loss(rho, q float64) (ComponentLoss, error) {
+	if err := c.check(); err != nil {
+		return ComponentLoss{}, err
+	}
+	if !(rho > 0) || math.IsInf(rho, 0) {
+		return ComponentLoss{}, fieldErrorf("rho", "the density must be above zero")
+	}
+	rhog := rho * StandardGravity
+	out := ComponentLoss{Name: c.Name}
+	switch c.Kind {
+	case ComponentRated:
+		r := q / c.RatedFlow
+		if c.RatedHead > 0 {
+			out.Head = c.RatedHead * r * r
+			out.Pressure = out.Head * rhog
+		} else {
+			out.Pressure = c.RatedDrop * r * r
+			out.Head = out.Pressure / rhog
+		}
+	case ComponentValve:
+		r := q / (c.Kv * kvFlowUnit)
+		out.Pressure = kvDropUnit * r * r * rho / valveRefRho
+		out.Head = out.Pressure / rhog
+	}
+	return out, nil
+}

@@ -1,0 +1,181 @@
+package calc
+
+import "math"
+
+// HighPoint is a stretch of a line where the hydraulic grade line falls
+// below the pipe crown (the pressure at the top of the pipe is below the
+// site's atmospheric pressure) or the pressure falls to the liquid's
+// vapour pressure. Consecutive profile nodes that fail are one high point;
+// its figures are those of the node with the lowest pressure.
+type HighPoint struct {
+	// Segment is the 1-based segment of the lowest-pressure node; AtEnd is
+	// true when that node is the segment's end, false for its start.
+	Segment int
+	AtEnd   bool
+	// Distance is the node's chainage along the pipe from point 1, m; Z
+	// the pipe's elevation there, m.
+	Distance, Z float64
+	// BelowCrown is how far the HGL lies below the pipe crown (the pipe's
+	// elevation plus half its inside diameter), m; ≤ 0 when it does not.
+	BelowCrown float64
+	// Pressure is the absolute pressure in the pipe there, Pa, from the
+	// HGL. Where Breaks is true it is not a pressure the liquid can hold
+	// (it may be below zero): show it as "below the vapour pressure".
+	Pressure float64
+	// Breaks is true when Pressure is at or below the vapour pressure (or
+	// zero): the liquid column breaks there.
+	Breaks bool
+	// AtPump is true when the node is the pump's inlet (the end of segment
+	// PumpAfter, with a pump head): a suction problem rather than a crest.
+	AtPump bool
+}
+
+// gradeNodes builds the EGL/HGL nodes of the line carrying lr's flow, from
+// point 1's state in and the pump head hp, as described at profile.
+func (b Balance) gradeNodes(in PointState, hp float64, lr *LineResult) []ProfileNode {
+	g := StandardGravity
+	rhog := b.Fluid.Density * g
+	segs := b.Line.Segments
+	nodes := make([]ProfileNode, 0, 2*len(segs)+2)
+	nodes = append(nodes, ProfileNode{Z: in.Z, EGL: in.TotalHead,
+		HGL: in.TotalHead - in.VelocityHead, Pressure: in.P})
+	egl, dist, z := in.TotalHead, 0.0, in.Z
+	node := func(seg int, hv float64) ProfileNode {
+		hgl := egl - hv
+		return ProfileNode{Distance: dist, Z: z, EGL: egl, HGL: hgl,
+			Pressure: (hgl-z)*rhog + b.SitePressure, Segment: seg}
+	}
+	for i := range segs {
+		sr := &lr.Segments[i]
+		if b.PumpAfter == i {
+			egl += hp
+		}
+		egl -= sr.TransitionLoss
+		hv := lineAlpha(b.Alpha, &sr.RunResult) * sr.Velocity * sr.Velocity / (2 * g)
+		start := node(i+1, hv)
+		dist += segs[i].Length
+		z = segs[i].EndZ
+		egl -= sr.TotalLoss + sr.ComponentLoss
+		nodes = append(nodes, start, node(i+1, hv))
+	}
+	if b.PumpAfter == len(segs) {
+		egl += hp
+		last := &lr.Segments[len(segs)-1]
+		nodes = append(nodes, node(len(segs), lineAlpha(b.Alpha, &last.RunResult)*last.Velocity*last.Velocity/(2*g)))
+	}
+	return nodes
+}
+
+// highPoints finds the high points of a profile (nodes as gradeNodes builds
+// them; point 1, nodes[0], is checked by the balance itself). The crown is
+// not checked at the line's two ends: their elevations are those of points
+// 1 and 2, often a tank's surface rather than the pipe.
+func (b Balance) highPoints(nodes []ProfileNode, pumpHead float64) []HighPoint {
+	pv := b.Fluid.VapourPressure
+	total := b.Line.Length()
+	var out []HighPoint
+	in := false
+	for k := 1; k < len(nodes); k++ {
+		n := nodes[k]
+		seg := n.Segment
+		d := b.Line.Segments[seg-1].Diameter
+		below := n.Z + d/2 - n.HGL
+		if n.Distance == 0 || n.Distance == total {
+			below = 0
+		}
+		breaks := n.Pressure <= pv || n.Pressure <= 0
+		if below <= 0 && !breaks {
+			in = false
+			continue
+		}
+		// A node is a segment's start when it is the first of its segment's
+		// pair (k odd), its end otherwise; the node a pump after the last
+		// segment adds is that segment's end too.
+		hp := HighPoint{Segment: seg, AtEnd: k%2 == 0 || k > 2*len(b.Line.Segments), Distance: n.Distance, Z: n.Z,
+			BelowCrown: below, Pressure: n.Pressure, Breaks: breaks}
+		hp.AtPump = pumpHead > 0 && k%2 == 0 && k <= 2*len(b.Line.Segments) && seg == b.PumpAfter
+		if !in {
+			out = append(out, hp)
+			in = true
+			continue
+		}
+		last := &out[len(out)-1]
+		if n.Pressure < last.Pressure {
+			*last = hp
+		}
+		last.Breaks = last.Breaks || breaks
+	}
+	return out
+}
+
+// fullFlow returns the largest flow the line carries with the pipe full
+// (no node at or below the vapour pressure), with point 1's total head and
+// the pump head held as in r and the surplus head at smaller flows taken
+// up at point 2 (a throttling valve at the outlet): the flow at which the
+// lowest pressure along the line equals the vapour pressure, by Brent's
+// method over [0, r.Q]. The pressure at every node falls as the flow rises
+// (more friction upstream, more velocity head), so the root is unique. ok
+// is false when even no flow keeps the column whole (a high point above
+// the static level from point 1 less the vapour head) or when the flow
+// cannot be bracketed.
+func (b Balance) fullFlow(r *BalanceResult) (q float64, ok bool) {
+	pv := math.Max(b.Fluid.VapourPressure, 0)
+	var evalErr error
+	f := func(q float64) float64 {
+		lr, err := b.Line.Evaluate(b.Fluid, q)
+		if err != nil {
+			evalErr = err
+			return math.NaN()
+		}
+		nodes := b.gradeNodes(r.In, r.PumpHead, &lr)
+		pmin := math.Inf(1)
+		for _, n := range nodes[1:] {
+			pmin = math.Min(pmin, n.Pressure)
+		}
+		return pmin - pv
+	}
+	if !(r.Q > 0) {
+		return 0, false
+	}
+	q, err := brent(f, 0, r.Q, r.Q*1e-12)
+	if err != nil || evalErr != nil {
+		return 0, false
+	}
+	return q, true
+}
+
+// highPointWarnings words one warning per high point, and the full-pipe
+// flow when the column breaks (fq, fok as fullFlow returns them).
+func highPointWarnings(hps []HighPoint, q, fq float64, fok bool) []Warning {
+	var out []Warning
+	for _, hp := range hps {
+		where := "start"
+		if hp.AtEnd {
+			where = "end"
+		}
+		var w Warning
+		switch {
+		case hp.AtPump && hp.Breaks && fok:
+			w = warnf("z", "at the pump's inlet, the end of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line, so the pressure there would be below the liquid's vapour pressure — the column breaks and the pump cavitates. The suction side stays full only up to %v, not the %v of the balance; raise the supply, enlarge or shorten the suction line, move losses to the delivery side or set the pump lower",
+				hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(fq, Flow), Fig(q, Flow))
+		case hp.AtPump && hp.Breaks:
+			w = warnf("z", "at the pump's inlet, the end of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line even with no flow — the column breaks and the pump cannot prime or run; set the pump lower or raise the supply",
+				hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length))
+		case hp.AtPump:
+			w = warnf("z", "at the pump's inlet, the end of segment %d (%v from point 1, elevation %v): the hydraulic grade line is %v below the pipe crown, so the suction is below atmospheric pressure: air leaks in at joints and seals; check the NPSH on the Pump view",
+				hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(hp.BelowCrown, Length))
+		case hp.Breaks && fok:
+			w = warnf("z", "high point at the %s of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line, so the pressure there would be below the liquid's vapour pressure — the column breaks (vapour pockets, a siphon that stops, cavitation and hammer when it rejoins). The pipe runs full only up to %v (with the surplus head taken by a valve at point 2), not the %v of the balance; lower the pipe, reduce the losses upstream or raise the pressure",
+				where, hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(fq, Flow), Fig(q, Flow))
+		case hp.Breaks:
+			w = warnf("z", "high point at the %s of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line even with no flow — the column breaks, the pipe cannot run full past it at any flow; lower the pipe or raise the pressure upstream",
+				where, hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length))
+		default:
+			w = warnf("z", "high point at the %s of segment %d (%v from point 1, elevation %v): the hydraulic grade line is %v below the pipe crown, so the pipe is below atmospheric pressure there: an air valve would draw air in and dissolved air comes out; keeping the grade line above the pipe is common practice",
+				where, hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(hp.BelowCrown, Length))
+		}
+		w.Segment = hp.Segment
+		out = append(out, w)
+	}
+	return out
+}

@@ -1,0 +1,159 @@
+package calc
+
+import (
+	"math"
+	"strings"
+	"testing"
+)
+
+// highPointWarnings returns the warnings of r that name a high point.
+func highPointWarns(r BalanceResult) []Warning {
+	var out []Warning
+	for _, w := range r.Warnings {
+		if strings.HasPrefix(w.Text, "high point") {
+			out = append(out, w)
+		}
+	}
+	return out
+}
+
+// TestHighPointsOnePerStretch: a crest that runs flat over two segments
+// is one high point (one warning), and a second crest beyond a dip is
+// another. Hydrostatics: 9 m above an open surface at 101.325 kPa leaves
+// about 13 kPa absolute before any loss (1 bar ≈ 10.2 m of water, common
+// practice), so the losses of the flow push both crests to the vapour
+// pressure.
+func TestHighPointsOnePerStretch(t *testing.T) {
+	mk := func(ends ...float64) *Line {
+		l := &Line{}
+		for _, z := range ends {
+			l.Segments = append(l.Segments, Segment{Run: Run{Length: 300, Diameter: 0.1, Roughness: 5e-5}, EndZ: z})
+		}
+		return l
+	}
+	tests := []struct {
+		name   string
+		line   *Line
+		want   []int // segment of each high point's lowest node
+		breaks []bool
+	}{
+		{"flat crest over two segments", mk(9, 9, 9, -30), []int{3}, []bool{true}},
+		{"two crests", mk(9, -20, 9, -30), []int{1, 3}, []bool{true, true}},
+		{"no crest: the pipe drops first", mk(-25, -27, -29, -30), nil, nil},
+	}
+	for _, tt := range tests {
+		b := Balance{Fluid: testLiquid, SitePressure: 101325, In: Point{P: 101325}, Out: Point{P: 101325, Z: -30},
+			Line: tt.line, Unknown: SolveFlow}
+		r, err := b.Solve()
+		if err != nil {
+			t.Fatalf("%s: %v", tt.name, err)
+		}
+		ws := highPointWarns(r)
+		if len(ws) != len(tt.want) || len(r.HighPoints) != len(tt.want) {
+			t.Errorf("%s: %d warnings, %d high points, want %d: %+v", tt.name, len(ws), len(r.HighPoints), len(tt.want), ws)
+			continue
+		}
+		for i, hp := range r.HighPoints {
+			if hp.Segment != tt.want[i] || hp.Breaks != tt.breaks[i] || ws[i].Segment != hp.Segment {
+				t.Errorf("%s: high point %d = %+v, warning %+v", tt.name, i, hp, ws[i])
+			}
+			if !r.FullFlowKnown || !(r.FullFlow > 0 && r.FullFlow < r.Q) {
+				t.Errorf("%s: full flow %v (known %v) against %v", tt.name, r.FullFlow, r.FullFlowKnown, r.Q)
+			}
+			for _, f := range ws[i].Figures {
+				if f.Dim == Pressure {
+					t.Errorf("%s: a high point's warning shows a pressure: %+v", tt.name, ws[i])
+				}
+			}
+		}
+	}
+}
+
+// TestFullFlowLaminar: a viscous liquid climbing to a crest in laminar
+// flow. The largest flow with the column whole closes
+//
+//	(p_site − p_v)/(ρg) − h = 32·μ·L·V/(ρ·g·D²) + α·V²/(2g),  α = 2,
+//
+// the Hagen–Poiseuille loss (published law) plus the laminar velocity
+// head (α = 2 laminar, common practice), a quadratic in V solved here in
+// closed form.
+func TestFullFlowLaminar(t *testing.T) {
+	fl := Fluid{Name: "oil", Density: 1000, Viscosity: 0.5, VapourPressure: 2000}
+	const d, l, h, site = 0.05, 100.0, 5.0, 101325.0
+	b := Balance{Fluid: fl, SitePressure: site, In: Point{P: site}, Out: Point{P: site, Z: -50},
+		Line: &Line{Segments: []Segment{
+			{Run: Run{Length: l, Diameter: d}, EndZ: h},
+			{Run: Run{Length: l, Diameter: d}, EndZ: -50},
+		}}, Unknown: SolveFlow}
+	r, err := b.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	g := StandardGravity
+	H := (site-fl.VapourPressure)/(fl.Density*g) - h
+	a := 32 * fl.Viscosity * l / (fl.Density * g * d * d)
+	v := (-a + math.Sqrt(a*a+4*H/g)) / (2 / g)
+	want := v * math.Pi * d * d / 4
+	if re := fl.Density * v * d / fl.Viscosity; re > 2000 {
+		t.Fatalf("the check needs laminar flow, Re %v", re)
+	}
+	if !r.FullFlowKnown || math.Abs(r.FullFlow-want) > 1e-9*want {
+		t.Errorf("full flow %v (known %v), want %v", r.FullFlow, r.FullFlowKnown, want)
+	}
+	if len(r.HighPoints) != 1 || r.HighPoints[0].Segment != 1 || !r.HighPoints[0].AtEnd {
+		t.Errorf("high points %+v", r.HighPoints)
+	}
+}
+
+// TestHighPointBelowCrown: a pumped main whose grade line passes just
+// under a crest, above the vapour pressure: a sub-atmospheric high point
+// (HGL below the crown, common practice to avoid) with no break and no
+// full-pipe flow.
+func TestHighPointBelowCrown(t *testing.T) {
+	b := Balance{Fluid: testLiquid, SitePressure: 101325, In: Point{P: 101325}, Out: Point{P: 101325, Z: 0},
+		Line: &Line{Segments: []Segment{
+			{Run: Run{Length: 10, Diameter: 0.2}, EndZ: 2},
+			{Run: Run{Length: 10, Diameter: 0.2}, EndZ: 0},
+		}}, Q: 0.001, Unknown: SolvePumpHead}
+	r, err := b.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	ws := highPointWarns(r)
+	if len(r.HighPoints) != 1 || r.HighPoints[0].Breaks || r.FullFlowKnown || len(ws) != 1 {
+		t.Fatalf("high points %+v, warnings %+v", r.HighPoints, ws)
+	}
+	// The HGL at the crest: no flow to speak of, so about the level of
+	// point 1; the crown is 2 m + D/2 above it.
+	if hp := r.HighPoints[0]; math.Abs(hp.BelowCrown-2.1) > 0.01 || !strings.Contains(ws[0].Text, "below the pipe crown") {
+		t.Errorf("below crown %v: %s", hp.BelowCrown, ws[0].Text)
+	}
+}
+
+// TestHighPointAtPumpInlet: a long, lossy suction run ending at the pump
+// (after segment 1) drops the pressure at the pump's inlet below the
+// vapour pressure: worded as the pump's inlet, not a crest. The suction
+// run alone at 30 L/s in 100 mm pipe over 300 m loses far more than the
+// 10.1 m the atmosphere supplies (1 bar ≈ 10.2 m of water, common
+// practice).
+func TestHighPointAtPumpInlet(t *testing.T) {
+	b := Balance{Fluid: testLiquid, SitePressure: 101325, In: Point{P: 101325}, Out: Point{P: 101325, Z: 20},
+		Line: &Line{Segments: []Segment{
+			{Run: Run{Length: 300, Diameter: 0.1, Roughness: 5e-5}, EndZ: 0},
+			{Run: Run{Length: 100, Diameter: 0.1, Roughness: 5e-5}, EndZ: 20},
+		}}, PumpAfter: 1, Q: 0.03, Unknown: SolvePumpHead}
+	r, err := b.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(r.HighPoints) != 1 || !r.HighPoints[0].AtPump || !r.HighPoints[0].Breaks || !r.FullFlowKnown {
+		t.Fatalf("high points %+v", r.HighPoints)
+	}
+	found := false
+	for _, w := range r.Warnings {
+		found = found || strings.HasPrefix(w.Text, "at the pump's inlet, the end of segment 1")
+	}
+	if !found {
+		t.Errorf("warnings %+v", r.Warnings)
+	}
+}

@@ -1,0 +1,93 @@
+package scenario
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"fieldhead/calc"
+)
+
+// TestParseComponents reads the component syntax of sN.cmp (doc.go). The
+// figures are the typed values in SI by NIST SP 811 factors (1 kPa =
+// 1000 Pa, 1 L/s = 0.001 m³/s, 1 ft = 0.3048 m); a Cv is kept as its Kv
+// (calc.KvFromCv, checked against GNU units in calc).
+func TestParseComponents(t *testing.T) {
+	cs, err := ParseComponents(" chiller:45kPa@12L/s, coil 2: 3.2m @ 12 L/s ,valve:kv40,trim:CV 25, ")
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := []calc.Component{
+		{Name: "chiller", RatedDrop: 45e3, RatedFlow: 0.012},
+		{Name: "coil 2", RatedHead: 3.2, RatedFlow: 0.012},
+		{Name: "valve", Kind: calc.ComponentValve, Kv: 40},
+		{Name: "trim", Kind: calc.ComponentValve, Kv: calc.KvFromCv(25)},
+	}
+	if len(cs) != len(want) {
+		t.Fatalf("got %+v", cs)
+	}
+	for i := range want {
+		g, w := cs[i], want[i]
+		close := func(a, b float64) bool { return math.Abs(a-b) <= 1e-12*math.Max(math.Abs(b), 1) }
+		if g.Name != w.Name || g.Kind != w.Kind || !close(g.RatedDrop, w.RatedDrop) || !close(g.RatedHead, w.RatedHead) ||
+			!close(g.RatedFlow, w.RatedFlow) || !close(g.Kv, w.Kv) {
+			t.Errorf("item %d: %+v, want %+v", i, g, w)
+		}
+	}
+	if cs, err := ParseComponents("pump skid:10ft@150gpm"); err != nil || math.Abs(cs[0].RatedHead-3.048) > 1e-12 {
+		t.Errorf("US units: %+v, %v", cs, err)
+	}
+	bad := []struct{ text, msg string }{
+		{"chiller", "name:drop@flow"},
+		{":45kPa@12L/s", "name:drop@flow"},
+		{"valve:cv0", "above zero"},
+		{"valve:kv", "must be a number"},
+		{"coil:-5kPa@2L/s", "negative"},
+		{"coil:−5kPa@2L/s", "negative"},
+		{"coil:5kPa@0L/s", "rated flow must be above zero"},
+		{"coil:5@2L/s", "number and its unit"},
+		{"coil:5kPa@2", "number and its unit"},
+		{"coil:5L/s@2kPa", "not a unit of the drop"},
+		{"coil:5kPa@2m", "not a unit of the rated flow"},
+		{"coil:45,5kPa@12L/s", "decimals take a point"},
+		{"strainer:orifice", "neither drop@flow"},
+		{strings.Repeat("x", 41) + ":kv4", "at most 40"},
+	}
+	for _, b := range bad {
+		_, err := ParseComponents(b.text)
+		fe, ok := err.(*calc.FieldError)
+		if !ok || fe.Field != "cmp" || !strings.Contains(fe.Msg, b.msg) {
+			t.Errorf("%q: %v, want a cmp error with %q", b.text, err, b.msg)
+		}
+	}
+}
+
+// TestComponentsInTheSheet: a segment's components reach the budget by
+// name, and a bad one is an error on that segment's box with the rest of
+// the sheet kept.
+func TestComponentsInTheSheet(t *testing.T) {
+	const base = "liq=custom&rho=1000kg/m3&mu=1mPa.s&pv=2kPa&baro=101.325kPa&p1=0kPa&v1=0m/s&p2=0kPa&v2=0m/s&z1=10m&z2=10m&q=12L/s&solve=hp" +
+		"&s1.l=100m&s1.d=100mm&s1.eps=0.05mm&s1.z=10m&s2.l=50m&s2.d=100mm&s2.eps=0.05mm"
+	s, err := Parse(base + "&s2.cmp=chiller:45kPa@12L/s,valve:kv43.2")
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := Evaluate(s)
+	if r.Balance == nil {
+		t.Fatalf("errors %v", r.Errors)
+	}
+	var labels []string
+	for _, it := range r.Balance.Budget {
+		if strings.HasPrefix(it.Key, "cmp") {
+			labels = append(labels, it.Label)
+		}
+	}
+	if strings.Join(labels, "|") != "chiller (segment 2)|valve (segment 2)" {
+		t.Errorf("budget components %v", labels)
+	}
+	s, _ = Parse(base + "&s2.cmp=valve:cv0")
+	r = Evaluate(s)
+	if m := r.Errors["s2.cmp"]; m == nil || !strings.Contains(m.Msg, "valve") || s.Get("s2.cmp") != "valve:cv0" {
+		t.Errorf("errors %v", r.Errors)
+	}
+}
