@@ -65,8 +65,9 @@ func Evaluate(s Scenario) Result {
 			e.evalRun(run, q)
 		}
 	}
+	e.runView(line)
 	e.pump()
-	e.npsh()
+	e.npsh(line)
 	e.field()
 	if e.res.Fluid != nil {
 		e.energy()
