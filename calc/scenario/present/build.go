@@ -30,7 +30,7 @@ type builder struct {
 var Views = []struct{ Key, Hint string }{
 	{"balance", "two-point energy balance"},
 	{"convert", "head ↔ pressure"},
-	{"regime", "Re and friction"},
+	{"regime", "loss of a run, sizes"},
 	{"line", "segments, EGL/HGL"},
 	{"pump", "duty, NPSH, readings"},
 	{"report", "the printed sheet"},
@@ -270,7 +270,11 @@ func uses(view, p string) bool {
 	case "convert":
 		return oneOf(p, "view", "units", "name", "liq", "t", "rho", "mu", "pv", "alt", "baro", "cv", "cvref")
 	case "regime":
-		return oneOf(p, "view", "units", "name", "liq", "t", "rho", "mu", "pv", "q", "l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw")
+		if n, f := scenario.SegmentOf(p); n > 0 {
+			return oneOf(f, "l", "d", "nps", "sch", "mat", "eps", "fit", "k")
+		}
+		return oneOf(p, "view", "units", "name", "liq", "t", "rho", "mu", "pv", "q", "l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw",
+			"rseg", "szsch", "vlo", "vhi", "grad")
 	case "balance", "line", "pump":
 		return p != "cv" && p != "cvref"
 	case "book":
