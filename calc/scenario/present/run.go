@@ -167,6 +167,14 @@ func (b *builder) runCard(seg int) Card {
 	return c
 }
 
+// perHundred is "per 100 m" or "per 100 ft".
+func perHundred(us bool) string { return "per " + strings.TrimSuffix(hundred(us), " of pipe") }
+
+// short writes a default for a hint: two significant digits.
+func (b *builder) short(v float64, dim calc.Dimension) string {
+	return calc.FormatValue(v, calc.DefaultUnit(dim, b.us).Symbol, 2)
+}
+
 // hundred is "100 m" or "100 ft" of pipe.
 func hundred(us bool) string {
 	if us {
@@ -189,19 +197,15 @@ func (b *builder) fittingKTable(r *scenario.RunResult) Block {
 	if len(r.Fittings) == 0 {
 		return Block{Kind: BlockEmpty}
 	}
-	cols := []string{"fitting", "number", "K each", "how K is found", "head lost"}
+	// How each K is found (method and formula) is in the fitting editor.
+	cols := []string{"fitting", "number", "K each", "head lost"}
 	t := &Table{ID: "run-fits", Class: "grid figures", Head: cols}
 	hv := r.Velocity * r.Velocity / (2 * calc.StandardGravity)
 	for _, k := range r.Fittings {
-		how := k.Method
-		if k.Formula != "" && k.Method != "given" {
-			how += ", " + k.Formula
-		}
 		t.Rows = append(t.Rows, Row{Head: fittingName(k.Key), Cells: []Cell{
 			{Text: strconv.Itoa(k.Count), Label: cols[1]},
 			{Text: calc.FormatNumber(k.K, 3), Label: cols[2]},
-			{Text: how, Label: cols[3]},
-			{Text: b.head(float64(k.Count) * k.K * hv), Label: cols[4]},
+			{Text: b.head(float64(k.Count) * k.K * hv), Label: cols[3]},
 		}})
 	}
 	return Block{Kind: BlockTable, Table: t}
@@ -212,9 +216,10 @@ func (b *builder) fittingKTable(r *scenario.RunResult) Block {
 // marked.
 func (b *builder) sizingCard() Card {
 	def := calc.DefaultSizingLimits()
-	grad := b.plain("grad", "", "("+strings.TrimSuffix(hundred(b.us), " of pipe")+"; blank: "+calc.FormatNumber(def.GradientMax*100, 3)+", common practice)", true)
-	lo := b.quantity("vlo", "", "(blank: "+b.show(def.VelocityLow, calc.Velocity)+", common practice)")
-	hi := b.quantity("vhi", "", "(blank: "+b.show(def.VelocityHigh, calc.Velocity)+")")
+	per := perHundred(b.us)
+	grad := b.plain("grad", "", "("+per+"; blank: "+calc.FormatNumber(def.GradientMax*100, 1)+", common practice)", true)
+	lo := b.quantity("vlo", "", "(blank: "+b.short(def.VelocityLow, calc.Velocity)+", common practice)")
+	hi := b.quantity("vhi", "", "(blank: "+b.short(def.VelocityHigh, calc.Velocity)+")")
 	rv := b.r.RunView
 	var sz *scenario.Sizing
 	if rv != nil {
@@ -237,9 +242,9 @@ func (b *builder) sizingCard() Card {
 	}
 	c.Title = "Sizes compared at " + b.param("q", rv.Run.Flow)
 	return appendBlocks(c, text("computed", "sizing-what", b.sizingNote(rv, sz)), b.sizingTable(rv, sz),
-		text("note-text", "sizing-marks", "Marks: within the velocity band "+b.show(sz.Limits.VelocityLow, calc.Velocity)+" to "+
-			b.show(sz.Limits.VelocityHigh, calc.Velocity)+" and a pipe friction of at most "+calc.FormatNumber(sz.Limits.GradientMax*100, 3)+
-			" per "+strings.TrimSuffix(hundred(b.us), " of pipe")+" (defaults: common practice for water lines, from memory; set your own above). "+
+		text("note-text", "sizing-marks", "✓ fits: within the velocity band "+b.short(sz.Limits.VelocityLow, calc.Velocity)+" to "+
+			b.short(sz.Limits.VelocityHigh, calc.Velocity)+" and a pipe friction of at most "+calc.FormatNumber(sz.Limits.GradientMax*100, 3)+
+			" "+per+" (defaults: common practice for water lines, from memory; set your own above). "+
 			"A size that fits both is a starting point: cost, surge, standard stock and local codes decide."))
 }
 
@@ -262,7 +267,7 @@ func (b *builder) sizingNote(rv *scenario.RunView, sz *scenario.Sizing) string {
 // is at most twice the band's top to the first below half its bottom
 // (the rest are far from any choice).
 func (b *builder) sizingTable(rv *scenario.RunView, sz *scenario.Sizing) Block {
-	cols := []string{"size", "inside diameter", "velocity", "Reynolds number", "pipe friction per " + strings.TrimSuffix(hundred(b.us), " of pipe"), "loss of the run", "marks"}
+	cols := []string{"size", "inside diameter", "velocity", "Reynolds number", "pipe friction, " + perHundred(b.us), "loss of the run", "marks"}
 	t := &Table{ID: "sizing-table", Class: "grid figures", Head: cols}
 	lim := sz.Limits
 	here := rv.Run.Diameter
@@ -272,24 +277,26 @@ func (b *builder) sizingTable(rv *scenario.RunView, sz *scenario.Sizing) Block {
 			continue
 		}
 		name := sizeName(row.Pipe)
-		if b.us && row.Pipe.Catalogue == "pe" {
+		switch {
+		case b.us && row.Pipe.Catalogue == "pe":
 			name = "ISO 4427 size " + row.Pipe.NPS // a designation; its figure is in mm
+		case row.Pipe.DN > 0:
+			name = "NPS " + row.Pipe.NPS // the DN is in the run's facts; the table is kept narrow
 		}
-		cls := ""
+		cls, this := "", ""
 		if sameBore(row.Pipe.ID, here) {
-			name += " (this run)"
-			cls = "here"
+			cls, this = "here", " · this run"
 		}
 		if row.Err != nil {
 			t.Rows = append(t.Rows, Row{Head: name, Class: cls, Cells: []Cell{
 				{Text: b.param("d", row.Pipe.ID), Label: cols[1]},
-				{Text: "not worked out: " + b.errWords(row.Err), Label: cols[2], Span: 5}}})
+				{Text: "not worked out: " + b.errWords(row.Err) + this, Label: cols[2], Span: 5}}})
 			continue
 		}
 		mark := Cell{Label: cols[6]}
 		switch {
 		case row.Fits():
-			mark.Text, mark.Badge = "✓ fits both", "rg"
+			mark.Text, mark.Badge = "✓ fits", "rg"
 		default:
 			var why []string
 			if !row.InBand {
@@ -300,10 +307,11 @@ func (b *builder) sizingTable(rv *scenario.RunView, sz *scenario.Sizing) Block {
 				}
 			}
 			if !row.UnderMax {
-				why = append(why, "friction over the limit")
+				why = append(why, "friction high")
 			}
 			mark.Text = strings.Join(why, ", ")
 		}
+		mark.Text += this
 		t.Rows = append(t.Rows, Row{Head: name, Class: cls, Cells: []Cell{
 			{Text: b.param("d", row.Pipe.ID), Label: cols[1]},
 			{Text: b.show(r.Velocity, calc.Velocity), Label: cols[2]},
@@ -326,4 +334,15 @@ func (b *builder) errWords(err error) string {
 		return fe.Words(b.figure)
 	}
 	return err.Error()
+}
+
+// sizingMethod is the Methods entry of the sizing table, its defaults in
+// the sheet's units.
+func sizingMethod(us bool) string {
+	lim := calc.DefaultSizingLimits()
+	v := calc.DefaultUnit(calc.Velocity, us).Symbol
+	per := strings.TrimSuffix(hundred(us), " of pipe")
+	return "the run's length, roughness, fittings and friction method kept and evaluated in each size of one pipe class, the fittings' K worked out for each size; " +
+		"sizes marked inside a velocity band (default " + calc.FormatValue(lim.VelocityLow, v, 2) + " to " + calc.FormatValue(lim.VelocityHigh, v, 2) +
+		") and under a pipe-friction limit (default " + calc.FormatNumber(lim.GradientMax*100, 1) + " per " + per + "); the defaults are common practice for water lines, from memory, and may be set per sheet."
 }
