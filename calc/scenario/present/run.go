@@ -91,9 +91,10 @@ func (b *builder) segmentPicker(seg int) Block {
 		if b.s.Has(pre + "l") {
 			label += ": " + b.asEntered(pre+"l")
 		}
+		ps, err := calc.LookupPipe(strings.TrimSpace(b.s.Get(pre+"nps")), strings.TrimSpace(b.s.Get(pre+"sch")))
 		switch {
-		case b.s.Has(pre + "nps"):
-			label += ", " + strings.TrimSpace(b.s.Get(pre+"nps")) + " " + strings.TrimSpace(b.s.Get(pre+"sch"))
+		case b.s.Has(pre+"nps") && err == nil:
+			label += ", " + sizeName(ps) + " " + scenario.ClassName(ps.Catalogue, ps.Schedule)
 		case b.s.Has(pre + "d"):
 			label += ", " + b.asEntered(pre+"d") + " bore"
 		}
@@ -132,7 +133,7 @@ func (b *builder) runCard(seg int) Card {
 		return c
 	}
 	dp := r.TotalLoss * fl.Density * calc.StandardGravity
-	a := &Answer{Label: "Head lost at " + b.param("q", r.Flow) + ", and the pressure drop it makes",
+	a := &Answer{Label: "Lost at " + b.param("q", r.Flow) + ": head, and pressure drop",
 		Values: []Value{{"answer-value", b.head(r.TotalLoss)}, {"run-dp", b.show(dp, calc.Pressure)}},
 		Subs:   []string{"pipe friction " + b.head(r.MajorLoss) + " + fittings " + b.head(r.MinorLoss) + " (ΣK " + calc.FormatNumber(r.SumK, 3) + ")"}}
 	if r.TotalLossLow != r.TotalLossHigh {
@@ -267,7 +268,9 @@ func (b *builder) sizingNote(rv *scenario.RunView, sz *scenario.Sizing) string {
 // is at most twice the band's top to the first below half its bottom
 // (the rest are far from any choice).
 func (b *builder) sizingTable(rv *scenario.RunView, sz *scenario.Sizing) Block {
-	cols := []string{"size", "inside diameter", "velocity", "Reynolds number", "pipe friction, " + perHundred(b.us), "loss of the run", "marks"}
+	// The marks come next to the size, where a narrow screen still shows
+	// them without scrolling the table.
+	cols := []string{"size", "marks", "inside diameter", "velocity", "Reynolds number", "pipe friction, " + perHundred(b.us), "loss of the run"}
 	t := &Table{ID: "sizing-table", Class: "grid figures", Head: cols}
 	lim := sz.Limits
 	here := rv.Run.Diameter
@@ -289,11 +292,12 @@ func (b *builder) sizingTable(rv *scenario.RunView, sz *scenario.Sizing) Block {
 		}
 		if row.Err != nil {
 			t.Rows = append(t.Rows, Row{Head: name, Class: cls, Cells: []Cell{
-				{Text: b.param("d", row.Pipe.ID), Label: cols[1]},
-				{Text: "not worked out: " + b.errWords(row.Err) + this, Label: cols[2], Span: 5}}})
+				{Text: "not worked out: " + b.errWords(row.Err) + this, Label: cols[1]},
+				{Text: b.param("d", row.Pipe.ID), Label: cols[2]},
+				{Text: "—", Label: cols[3], Span: 4}}})
 			continue
 		}
-		mark := Cell{Label: cols[6]}
+		mark := Cell{Label: cols[1]}
 		switch {
 		case row.Fits():
 			mark.Text, mark.Badge = "✓ fits", "rg"
@@ -313,12 +317,12 @@ func (b *builder) sizingTable(rv *scenario.RunView, sz *scenario.Sizing) Block {
 		}
 		mark.Text += this
 		t.Rows = append(t.Rows, Row{Head: name, Class: cls, Cells: []Cell{
-			{Text: b.param("d", row.Pipe.ID), Label: cols[1]},
-			{Text: b.show(r.Velocity, calc.Velocity), Label: cols[2]},
-			{Text: plainNumber(r.Reynolds), Label: cols[3]},
-			{Text: b.head(row.Gradient * 100), Label: cols[4]},
-			{Text: b.head(r.TotalLoss), Label: cols[5]},
 			mark,
+			{Text: b.param("d", row.Pipe.ID), Label: cols[2]},
+			{Text: b.show(r.Velocity, calc.Velocity), Label: cols[3]},
+			{Text: plainNumber(r.Reynolds), Label: cols[4]},
+			{Text: b.head(row.Gradient * 100), Label: cols[5]},
+			{Text: b.head(r.TotalLoss), Label: cols[6]},
 		}})
 	}
 	return Block{Kind: BlockTable, Table: t}
