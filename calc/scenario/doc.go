@@ -55,7 +55,7 @@
 //
 // The value of the unknown's own parameter, if present, is kept but not used.
 //
-// A pipe run (used for hf in the balance when l is given, and by the Regime view):
+// A pipe run (used for hf in the balance when l is given, and by the Run view):
 //
 //	l       length of the run, e.g. 640m
 //	d       inside diameter, or

@@ -260,7 +260,7 @@ func (e *eval) liquid() {
 	}
 }
 
-// evalRun evaluates the pipe run at flow q for the Regime view.
+// evalRun evaluates the pipe run at flow q for the Run view.
 func (e *eval) evalRun(r *RunResult, q float64) {
 	rr, err := e.runSpec.Evaluate(*e.res.Fluid, q)
 	if err != nil {

@@ -16,7 +16,7 @@ type Result struct {
 	SitePressure float64     // Pa absolute
 	SiteFrom     SiteSource  // how the site pressure was found
 
-	Run     *RunResult          // the pipe run (Regime view; friction in the balance)
+	Run     *RunResult          // the pipe run (Run view; friction in the balance)
 	RunView *RunView            // the run the Run view shows (view=regime only) and its sizing table
 	Line    *calc.LineResult    // the line of segments at the flow (also when the balance cannot be solved)
 	Balance *calc.BalanceResult // the two-point energy balance
