@@ -200,7 +200,9 @@ func (b *builder) fittingKTable(r *scenario.RunResult) Block {
 	}
 	// How each K is found (method and formula) is in the fitting editor.
 	cols := []string{"fitting", "number", "K each", "head lost"}
-	t := &Table{ID: "run-fits", Class: "grid figures", Head: cols}
+	// A plain grid: names wrap in the answer's narrow column, and on the
+	// narrowest phones each name stands above its three figures.
+	t := &Table{ID: "run-fits", Class: "grid", Head: cols}
 	hv := r.Velocity * r.Velocity / (2 * calc.StandardGravity)
 	for _, k := range r.Fittings {
 		t.Rows = append(t.Rows, Row{Head: fittingName(k.Key), Cells: []Cell{
@@ -271,7 +273,7 @@ func (b *builder) sizingTable(rv *scenario.RunView, sz *scenario.Sizing) Block {
 	// The marks come next to the size, where a narrow screen still shows
 	// them without scrolling the table.
 	cols := []string{"size", "marks", "inside diameter", "velocity", "Reynolds number", "pipe friction, " + perHundred(b.us), "loss of the run"}
-	t := &Table{ID: "sizing-table", Class: "grid figures", Head: cols}
+	t := &Table{ID: "sizing-table", Class: "grid figures wide", Head: cols}
 	lim := sz.Limits
 	here := rv.Run.Diameter
 	for _, row := range sz.Rows {
