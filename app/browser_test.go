@@ -387,8 +387,8 @@ func TestBrowser(t *testing.T) {
 		t.Fatal(err)
 	}
 	waitResult()
-	if got := waitText("#answer-value", reynoldsText(wantSingle)); got != reynoldsText(wantSingle) {
-		t.Errorf("Regime shows Re %q, core gives %q", got, reynoldsText(wantSingle))
+	if got := waitText("#answer-value", runLossText(wantSingle)); got != runLossText(wantSingle) {
+		t.Errorf("the Run view shows a loss of %q, core gives %q", got, runLossText(wantSingle))
 	}
 	if err := chromedp.Do(ctx, chromedp.Click(chromedp.CSS("#view-balance")), chromedp.WaitVisible(chromedp.CSS("#run-line"))); err != nil {
 		t.Fatalf("the balance of a single-run link shows no pipe-run friction: %v", err)
@@ -546,9 +546,9 @@ func buildSite(t *testing.T) (string, error) {
 	return site, writeSite(site, wasm, filepath.Join("..", "web"), "")
 }
 
-// reynoldsText is the Reynolds number as the view model words it for the
-// Regime view of a single run.
-func reynoldsText(r scenario.Result) string {
+// runLossText is the run's head loss as the view model words it for the
+// Run view of a single run.
+func runLossText(r scenario.Result) string {
 	d := scenario.NewDraft(scenario.Scenario{})
 	_ = d.Scen.Set("view", "regime")
 	t, _ := present.Build(&d, r).Text("answer-value")

@@ -382,7 +382,8 @@ func (s *sheet) layout() app.UI {
 	case "convert":
 		root = div("layout", div("area-answer", cards("convert-card")...), div("area-inputs", cards("convert-in", "liquid")...))
 	case "regime":
-		root = div("layout", div("area-answer", cards("regime-card")...), div("area-inputs", cards("run", "liquid")...))
+		// The sizing table is wide: it follows the layout, full width.
+		root = div("layout", div("area-answer", cards("run-answer")...), div("area-inputs", cards("run", "liquid")...))
 	case "line":
 		root = div("stack", div("duo", cards("line-card", "profile-card")...), div("stack", cards("seg-results", "segments")...))
 	case "pump":

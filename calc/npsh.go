@@ -57,6 +57,12 @@ type NPSHInput struct {
 // NPSHResult is the NPSH available at the pump against the NPSH it
 // requires.
 type NPSHResult struct {
+	// The terms of NPSHa, heads in m of the liquid: the absolute pressure
+	// on the source surface, the source surface above the pump (negative
+	// for a suction lift), the suction losses and the vapour pressure.
+	// Available = PressureHead + StaticHead − LossHead − VapourHead.
+	PressureHead, StaticHead, LossHead, VapourHead float64
+
 	Available float64 // NPSHa, m
 	Required  float64 // NPSHr, m (0 when not given)
 	Margin    float64 // NPSHa − NPSHr, m
@@ -96,8 +102,10 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 	case !finite(in.NPSHr) || in.NPSHr < 0:
 		return NPSHResult{}, NewFieldError("npshr", Negative).Got(Fig(in.NPSHr, Length))
 	}
-	r := NPSHResult{Required: in.NPSHr}
-	r.Available = (in.SurfacePressure-fl.VapourPressure)/(fl.Density*StandardGravity) + in.SurfaceZ - in.PumpZ - in.SuctionLoss
+	rg := fl.Density * StandardGravity
+	r := NPSHResult{Required: in.NPSHr, PressureHead: in.SurfacePressure / rg, StaticHead: in.SurfaceZ - in.PumpZ,
+		LossHead: in.SuctionLoss, VapourHead: fl.VapourPressure / rg}
+	r.Available = (in.SurfacePressure-fl.VapourPressure)/rg + in.SurfaceZ - in.PumpZ - in.SuctionLoss
 	minMargin := Fig(NPSHMarginMin, Length)
 	if in.NPSHr == 0 {
 		r.Level = NPSHUnrated

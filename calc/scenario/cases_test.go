@@ -248,6 +248,68 @@ func observable(r Result, key string) (float64, string, error) {
 			return n.Ratio, "", nil
 		case "level":
 			return 0, n.Level.String(), nil
+		case "p":
+			return n.PressureHead, "", nil
+		case "z":
+			return n.StaticHead, "", nil
+		case "loss":
+			return n.LossHead, "", nil
+		case "pv":
+			return n.VapourHead, "", nil
+		}
+	case "runview":
+		rv := r.RunView
+		if rv == nil || rv.Run == nil {
+			return miss()
+		}
+		switch name {
+		case "seg":
+			return float64(rv.Segment), "", nil
+		case "loss":
+			return rv.Run.TotalLoss, "", nil
+		case "v":
+			return rv.Run.Velocity, "", nil
+		case "re":
+			return rv.Run.Reynolds, "", nil
+		}
+	case "sizing":
+		// sizing.<nominal size>.<id|v|re|f|grad|loss|mark>
+		if r.RunView == nil || r.RunView.Sizing == nil {
+			return miss()
+		}
+		size, field, _ := strings.Cut(name, ".")
+		for _, row := range r.RunView.Sizing.Rows {
+			if row.Pipe.NPS != size {
+				continue
+			}
+			if row.Err != nil {
+				return 0, "", fmt.Errorf("size %s: %v", size, row.Err)
+			}
+			switch field {
+			case "id":
+				return row.Pipe.ID, "", nil
+			case "v":
+				return row.Run.Velocity, "", nil
+			case "re":
+				return row.Run.Reynolds, "", nil
+			case "f":
+				return row.Run.Friction, "", nil
+			case "grad":
+				return row.Gradient, "", nil
+			case "loss":
+				return row.Run.TotalLoss, "", nil
+			case "mark":
+				m := "fits"
+				switch {
+				case !row.InBand && !row.UnderMax:
+					m = "velocity and friction"
+				case !row.InBand:
+					m = "velocity"
+				case !row.UnderMax:
+					m = "friction"
+				}
+				return 0, m, nil
+			}
 		}
 	case "field":
 		f := r.Field

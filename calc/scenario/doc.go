@@ -16,6 +16,8 @@
 // General:
 //
 //	view    balance | convert | regime | line | pump | report   the view the link opens on
+//	        (regime is the Run view, "Run and sizes": the link value is kept
+//	        from its first name so that old links open on it)
 //	units   si | us                          default and display units (default si)
 //	name    free text                        a title for the sheet (shown as text, never markup)
 //
@@ -83,7 +85,7 @@
 //
 // The value of the unknown's own parameter, if present, is kept but not used.
 //
-// A pipe run (used for hf in the balance when l is given, and by the Regime view):
+// A pipe run (used for hf in the balance when l is given, and by the Run view):
 //
 //	l       length of the run, e.g. 640m
 //	d       inside diameter, or
@@ -149,6 +151,28 @@
 //	zp      pump centreline elevation (for NPSH), e.g. 214.5m
 //	pafter  the pump sits after segment N (default 1 with segments, else at point 1)
 //	npshr   NPSH required, typed (instead of the pnpsh list)
+//	hs      suction loss, typed, e.g. 0.35m (instead of the losses of
+//	        segments 1 to pafter)
+//
+// NPSH needs only the suction side: liq and t (or the custom liquid's
+// properties), alt or baro, p1 and p1ref (the pressure on the source
+// surface: 0 gauge when open to the air, a vessel's pressure otherwise),
+// z1 (the source surface), zp, and hs or segments before the pump with q.
+// NPSHr is npshr, else the data sheet's pnpsh at the operating flow (or at
+// q without an operating point). The discharge side is not needed.
+//
+// The Run view (view=regime) shows one run: the single run, or a segment
+// of the line, and the same run in every size of a pipe class:
+//
+//	rseg    the segment shown, e.g. 2 (default 1; ignored without segments)
+//	szsch   the class whose sizes the table compares, e.g. SDR11, 40
+//	        (default: the run's own class, or the class of a size with the
+//	        run's inside diameter and material)
+//	vlo,vhi the velocity band marked, e.g. 0.6m/s and 2.4m/s (the defaults,
+//	        common practice)
+//	grad    the pipe friction marked as the most, per 100 of length, a plain
+//	        number (m per 100 m, or ft per 100 ft: the same figure), e.g. 4
+//	        (the default, common practice)
 //
 // With a pump curve and solve=hp, the operating point is where the pump
 // curve meets the system curve; q is then only the duty asked for.

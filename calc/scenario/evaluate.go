@@ -64,8 +64,9 @@ func Evaluate(s Scenario) Result {
 			e.evalRun(run, q)
 		}
 	}
+	e.runView(line)
 	e.pump()
-	e.npsh()
+	e.npsh(line)
 	e.field()
 	if e.res.Fluid != nil {
 		e.energy()
@@ -365,7 +366,7 @@ func (e *eval) linePressure() (float64, LiquidSource, bool) {
 	return site, LiquidSite, true
 }
 
-// evalRun evaluates the pipe run at flow q for the Regime view.
+// evalRun evaluates the pipe run at flow q for the Run view.
 func (e *eval) evalRun(r *RunResult, q float64) {
 	rr, err := e.runSpec.Evaluate(*e.res.Fluid, q)
 	if err != nil {

@@ -56,7 +56,7 @@ type Param struct {
 // parameters (sN.…) follow the single run's.
 var Table = []Param{
 	{Name: "view", Label: "view", Kind: KindChoice, choices: func() []Choice {
-		return []Choice{{"balance", "Balance"}, {"convert", "Convert"}, {"regime", "Regime"},
+		return []Choice{{"balance", "Balance"}, {"convert", "Convert"}, {"regime", "Run and sizes"},
 			{"line", "Line"}, {"pump", "Pump"}, {"report", "Report"}, {"book", "Site book"}}
 	}},
 	{Name: "units", Label: "unit system", Kind: KindChoice, choices: func() []Choice { return []Choice{{"si", "SI"}, {"us", "US"}} }},
@@ -126,6 +126,16 @@ var Table = []Param{
 		SegBox: "Components", Hint: "(optional: name:drop@flow or name:cv25 / name:kv40, comma separated)",
 		Placeholder: "chiller:45kPa@12L/s, valve:kv40"},
 
+	// The Run view: which run it shows, and its sizing table's class and
+	// marks (the marks' defaults are calc.DefaultSizingLimits, common
+	// practice).
+	{Name: "rseg", Label: "run shown", Box: "Run shown", Kind: KindChoice, choices: rsegChoices},
+	{Name: "szsch", Label: "pipe class to size across", Box: "Sizes from", Hint: "(blank: the run's own class)", Kind: KindChoice, choices: schChoices,
+		Missing: "pick the pipe class whose sizes the table compares"},
+	q("vlo", "velocity band, low end", "Velocity band from", "", calc.Velocity, "m/s", "ft/s", "enter the low end of the velocity band"),
+	q("vhi", "velocity band, high end", "to", "", calc.Velocity, "m/s", "ft/s", "enter the high end of the velocity band"),
+	{Name: "grad", Label: "loss gradient limit", Box: "Friction loss at most", Hint: "(head per 100 of pipe length)", Kind: KindNumber},
+
 	{Name: "cv", Label: "value to convert", Box: "Pressure, water column or head", Kind: KindQuantity, Dim: calc.Pressure,
 		SI: "kPa", US: "psi", ExtraUnits: []string{"m", "ft"}, Missing: "enter a value to convert"},
 	ref("cvref", "gauge/absolute"),
@@ -147,6 +157,7 @@ var Table = []Param{
 	q("zp", "pump centreline elevation", "Pump centreline elevation", "(for NPSH)", calc.Length, "m", "ft", "enter the pump centreline elevation"),
 	{Name: "pafter", Label: "pump position on the line", Box: "Pump position", Hint: "(for the profile and the suction side of NPSH)", Kind: KindNumber},
 	grp(q("npshr", "NPSH required (typed)", "NPSH required", "(at the operating flow)", calc.Length, "m", "ft", "enter the NPSH required"), "npsh"),
+	q("hs", "suction loss (typed)", "Suction loss", "(typed; blank: from the segments before the pump)", calc.Length, "m", "ft", "enter the head lost between the source and the pump inlet"),
 
 	q("ps", "suction gauge reading", "Suction gauge", "(reading)", calc.Pressure, "kPa", "psi", "enter the gauge reading"),
 	q("pd", "discharge gauge reading", "Discharge gauge", "(reading)", calc.Pressure, "kPa", "psi", "enter the gauge reading"),
@@ -263,6 +274,17 @@ func gradeChoices() []Choice {
 			head = "H 0 to +" + strconv.FormatFloat(g.HeadHigh*100, 'g', -1, 64) + " %"
 		}
 		out = append(out, Choice{g.Name, "grade " + g.Name + ": " + head + ", " + eff + " (" + g.Use + ")"})
+	}
+	return out
+}
+
+// rsegChoices are the runs the Run view can show: a segment of the line
+// by number (blank: the single run, or segment 1).
+func rsegChoices() []Choice {
+	out := make([]Choice, MaxSegments)
+	for i := range out {
+		n := strconv.Itoa(i + 1)
+		out[i] = Choice{n, "segment " + n}
 	}
 	return out
 }

@@ -159,57 +159,103 @@ func (e *eval) pump() {
 	e.speedFor(pr)
 }
 
-// npsh works out the NPSH available at the pump, at the operating point
-// when there is one, else at the duty flow, and NPSHa over the chart's
-// flows.
-func (e *eval) npsh() {
-	if !e.s.Has("zp") || e.bal == nil || e.res.Fluid == nil {
+// npsh works out the NPSH available at the pump from the suction side
+// alone: the source (p1, z1), the liquid and the site, the pump's
+// elevation (zp), and the suction loss, typed (hs) or from the segments
+// before the pump. The flow is the operating point's when there is one,
+// else the duty flow q; NPSHr is typed (npshr), else the data sheet's at
+// that flow. With a balance it also gives NPSHa over the chart's flows.
+func (e *eval) npsh(line *calc.Line) {
+	if !e.s.Has("zp") || e.res.Fluid == nil {
 		return
 	}
-	zp, ok := e.quantity("zp")
+	fl := *e.res.Fluid
+	ok := true
+	zp, good := e.quantity("zp")
+	ok = ok && good
+	src := calc.NPSHInput{PumpZ: zp}
+	if b := e.bal; b != nil && b.Unknown != calc.SolveP1 && b.Unknown != calc.SolveZ1 {
+		src.SurfacePressure, src.SurfaceZ = b.In.P, b.In.Z
+	} else {
+		src.SurfacePressure = e.pressure("p1", calc.SolveP1, calc.SolvePumpHead, &ok)
+		z, good := e.quantity("z1")
+		ok = ok && good
+		src.SurfaceZ = z
+	}
+	pr := e.res.Pump
+	var q float64
+	haveQ := false
+	switch {
+	case pr != nil && pr.Operating != nil:
+		q, haveQ = pr.Operating.Q, true
+	case e.bal != nil && e.bal.Unknown != calc.SolveFlow:
+		q, haveQ = e.bal.Q, true
+	case e.s.Has("q"):
+		q, haveQ = e.quantity("q")
+	}
+	typed := e.s.Has("hs")
+	if typed {
+		v, good := e.quantity("hs")
+		if good && v < 0 {
+			e.fail("hs", "hs: the suction loss must be zero or positive")
+			good = false
+		}
+		ok = ok && good
+		src.SuctionLoss = v
+	}
+	after := 0
+	if !typed && line != nil {
+		after = e.pumpAfter(line)
+		if after < 0 {
+			return
+		}
+		if after > 0 && !haveQ {
+			e.quantity("q") // says the flow is needed
+			ok = false
+		}
+	}
+	switch {
+	case e.s.Has("npshr"):
+		v, good := e.quantity("npshr")
+		ok = ok && good
+		src.NPSHr = v
+	case pr != nil && pr.Operating != nil:
+		src.NPSHr = pr.Operating.NPSHr
+	case pr != nil && pr.Curve.HasNPSHr() && haveQ:
+		if v, in := pr.Curve.NPSHr(q); in {
+			src.NPSHr = v
+		}
+	}
 	if !ok {
 		return
 	}
-	b := *e.bal
-	q := b.Q
-	required := 0.0
-	pr := e.res.Pump
-	if pr != nil && pr.Operating != nil {
-		q, required = pr.Operating.Q, pr.Operating.NPSHr
-	}
-	if e.s.Has("npshr") {
-		v, ok := e.quantity("npshr")
-		if !ok {
-			return
-		}
-		required = v
-	}
+	sb := calc.Balance{Fluid: fl, Line: line, PumpAfter: after}
 	in := func(q float64) (calc.NPSHInput, error) {
-		loss := 0.0
-		if b.Line != nil {
-			l, err := calc.SuctionLoss(b, q)
+		x := src
+		if !typed && line != nil && after > 0 {
+			l, err := calc.SuctionLoss(sb, q)
 			if err != nil {
 				return calc.NPSHInput{}, err
 			}
-			loss = l
+			x.SuctionLoss = l
 		}
-		return calc.NPSHInput{SurfacePressure: b.In.P, SurfaceZ: b.In.Z, PumpZ: zp, SuctionLoss: loss}, nil
+		return x, nil
 	}
 	x, err := in(q)
 	if err != nil {
 		e.failErr("pafter", err)
 		return
 	}
-	x.NPSHr = required
-	r, err := calc.NPSH(*e.res.Fluid, x)
+	r, err := calc.NPSH(fl, x)
 	if err != nil {
 		e.failErr("zp", err)
 		return
 	}
 	e.res.NPSH = &r
 	e.res.NPSHFlow = q
-	if b.Line == nil {
-		e.warnCalc("npsh", calc.Warn("zp", calc.CautionSuctionLossZero))
+	e.res.NPSHSuction = NPSHSuction{Typed: typed, After: after}
+	if !typed && line == nil {
+		e.warn("hs", "npsh", "no suction loss typed and no line of segments: the suction losses are taken as zero; type the suction loss, or describe the suction pipe as segment 1 with the pump after it")
 	}
 	if pr != nil {
 		for _, p := range pr.System {
@@ -217,13 +263,40 @@ func (e *eval) npsh() {
 			if err != nil {
 				return
 			}
-			a, err := calc.NPSH(*e.res.Fluid, x)
+			a, err := calc.NPSH(fl, x)
 			if err != nil {
 				return
 			}
 			pr.NPSHa = append(pr.NPSHa, calc.CurvePoint{Q: p.Q, H: a.Available})
 		}
 	}
+}
+
+// NPSHSuction says where the suction loss of Result.NPSH comes from.
+type NPSHSuction struct {
+	Typed bool // typed in (hs)
+	// After is the segment the pump follows: the losses of segments 1 to
+	// After; 0 with the pump at point 1 or without a line.
+	After int
+}
+
+// pumpAfter is the segment of line the pump follows: pafter, else after
+// segment 1 of a line of two or more, else at point 1. −1 (and an error)
+// when pafter is not a segment of the line.
+func (e *eval) pumpAfter(line *calc.Line) int {
+	n := len(line.Segments)
+	if !e.s.Has("pafter") {
+		if n > 1 {
+			return 1
+		}
+		return 0
+	}
+	v, err := number("pafter", e.s.Get("pafter"))
+	if err != nil || v != math.Trunc(v) || v < 0 || int(v) > n {
+		e.bad("pafter", calc.OutOfRange).Typed(e.s.Get("pafter")).Within(calc.Num(0), calc.Num(float64(n))).Because(calc.ReasonPumpAfter)
+		return -1
+	}
+	return int(v)
 }
 
 // field works out the pump's performance from gauge readings.

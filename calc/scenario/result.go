@@ -21,7 +21,8 @@ type Result struct {
 	// Glycol is the glycol mix's make-up (liq=eg or pg), nil for other liquids.
 	Glycol *GlycolMix
 
-	Run     *RunResult          // the pipe run (Regime view; friction in the balance)
+	Run     *RunResult          // the pipe run (Run view; friction in the balance)
+	RunView *RunView            // the run the Run view shows (view=regime only) and its sizing table
 	Line    *calc.LineResult    // the line of segments at the flow (also when the balance cannot be solved)
 	Balance *calc.BalanceResult // the two-point energy balance
 	Convert *ConvertResult      // the Convert view
@@ -35,8 +36,10 @@ type Result struct {
 
 	Pump     *PumpResult      // the pump curve, system curve and operating point
 	NPSH     *calc.NPSHResult // NPSH at the pump
-	NPSHFlow float64          // the flow NPSH was worked out at, m³/s
-	Field    *calc.FieldCheck // the pump's performance from gauge readings
+	NPSHFlow float64          // the flow NPSH was worked out at, m³/s (0: not known, the suction loss typed)
+	// NPSHSuction says where NPSH's suction loss comes from.
+	NPSHSuction NPSHSuction
+	Field       *calc.FieldCheck // the pump's performance from gauge readings
 	// FieldBands are the field check's uncertainty bands from the
 	// instruments' accuracy, nil when no accuracy is given.
 	FieldBands *calc.FieldBands

@@ -2,6 +2,9 @@ package scenario
 
 import (
 	"errors"
+	"fmt"
+	"math"
+	"strconv"
 	"strings"
 
 	"fieldhead/calc"
@@ -141,4 +144,170 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 	spec := calc.Run{Length: r.Length, Diameter: r.Diameter, Roughness: r.Roughness,
 		Fittings: fits, ExtraK: extra, Method: method, HazenC: hc}
 	return spec, r, true
+}
+
+// RunView is what the Run view shows: one run (the single run, or a
+// segment of the line) at the flow, and the sizing table for it.
+type RunView struct {
+	// Segment is the segment of the line shown (1-based), 0 for the
+	// single run.
+	Segment int
+	// Run is the run evaluated alone at the flow (no change of diameter
+	// at its ends); nil when it cannot be (Result.Errors say why).
+	Run *RunResult
+	// Sizing is the run in each size of a pipe class; nil when it cannot
+	// be worked out (Result.Errors say why, under szsch, vlo, vhi, grad).
+	Sizing *Sizing
+}
+
+// Sizing is a sizing table: the run's length, fittings, roughness and
+// friction method, at the flow, in every size of one pipe class.
+type Sizing struct {
+	Catalogue calc.Catalogue
+	Class     string // as LookupPipe takes it ("SDR11", "40")
+	Limits    calc.SizingLimits
+	Rows      []calc.SizingRow
+}
+
+// runView fills Result.RunView for the Run view: the segment rseg of the
+// line (segment 1 when not given), else the single run, and its sizing
+// table.
+func (e *eval) runView(line *calc.Line) {
+	if e.s.Get("view") != "regime" || e.res.Fluid == nil {
+		return
+	}
+	rv := &RunView{}
+	pre := ""
+	var spec calc.Run
+	switch {
+	case line != nil || e.s.SegmentCount() > 0:
+		n := e.s.SegmentCount()
+		rv.Segment = 1
+		if t := strings.TrimSpace(e.s.Get("rseg")); t != "" {
+			k, err := strconv.Atoi(t)
+			if err != nil || k < 1 || k > n {
+				e.fail("rseg", fmt.Sprintf("rseg: the line has segments 1 to %d; pick one of them", n))
+				e.res.RunView = rv
+				return
+			}
+			rv.Segment = k
+		}
+		pre = SegmentParam(rv.Segment, "")
+		e.res.RunView = rv
+		s, meta, ok := e.readRun(pre)
+		if !ok {
+			return
+		}
+		q, ok := e.quantity("q")
+		if !ok {
+			return
+		}
+		rr, err := s.Evaluate(*e.res.Fluid, q)
+		if err != nil {
+			e.failErr("q", err)
+			return
+		}
+		meta.RunResult, meta.Flow = rr, q
+		spec, rv.Run = s, meta
+		for _, w := range rr.Warnings {
+			w.Segment = rv.Segment
+			e.warnCalc("runview", w)
+		}
+	case e.s.Has("l"):
+		e.res.RunView = rv
+		if e.res.Run == nil {
+			return // the run's or the flow's errors say why
+		}
+		rv.Run, spec = e.res.Run, e.runSpec
+	default:
+		return
+	}
+	e.sizing(rv, spec, pre, rv.Run.Flow)
+}
+
+// sizing works out the sizing table of the run shown: the class szsch,
+// else the run's own class; the marks vlo, vhi and grad, else the
+// defaults of calc.DefaultSizingLimits (common practice).
+func (e *eval) sizing(rv *RunView, spec calc.Run, pre string, q float64) {
+	class := strings.TrimSpace(e.s.Get("szsch"))
+	if class == "" && rv.Run.Pipe != nil {
+		class = rv.Run.Pipe.Schedule
+	}
+	if class == "" {
+		class = classOfBore(rv.Run)
+	}
+	if class == "" {
+		return // the Run view asks for a class; not an error
+	}
+	var cat calc.Catalogue
+	var sizes []calc.PipeSize
+	for _, c := range calc.Catalogues() {
+		if s, err := c.Sizes(class); err == nil {
+			cat, sizes = c, s
+			break
+		}
+	}
+	if sizes == nil {
+		e.fail("szsch", fmt.Sprintf("szsch: %q is not a pipe class of the catalogues", class))
+		return
+	}
+	lim := calc.DefaultSizingLimits()
+	ok := true
+	for _, p := range []struct {
+		name string
+		v    *float64
+	}{{"vlo", &lim.VelocityLow}, {"vhi", &lim.VelocityHigh}} {
+		if e.s.Has(p.name) {
+			v, good := e.quantity(p.name)
+			ok = ok && good
+			*p.v = v
+		}
+	}
+	if e.s.Has("grad") {
+		g, err := number("grad", e.s.Get("grad"))
+		if err != nil || !(g > 0) {
+			e.fail("grad", "grad: the friction loss limit is a number above zero, in m per 100 m (ft per 100 ft), e.g. 4")
+			ok = false
+		}
+		lim.GradientMax = g / 100
+	}
+	if !ok {
+		return
+	}
+	rows, err := calc.SizeRun(spec, *e.res.Fluid, q, sizes, lim)
+	if err != nil {
+		var fe *calc.FieldError
+		field := "q"
+		if errors.As(err, &fe) {
+			switch fe.Field {
+			case "vlo", "vhi", "grad":
+				field = fe.Field
+			case "sch":
+				field = "szsch"
+			default:
+				if f := linkName(fe.Field); f != "" {
+					field = pre + f
+				}
+			}
+		}
+		e.failAt(field, err)
+		return
+	}
+	rv.Sizing = &Sizing{Catalogue: cat, Class: class, Limits: lim, Rows: rows}
+}
+
+// classOfBore is the class of the first catalogue size whose bore is the
+// run's inside diameter (within 0.05 mm) and, when the run names a
+// material, whose catalogue is of that material; "" when none is.
+func classOfBore(r *RunResult) string {
+	cats := map[string]string{}
+	for _, c := range calc.Catalogues() {
+		cats[c.Key] = c.Material
+	}
+	for _, p := range calc.PipeSizes() {
+		if math.Abs(p.ID-r.Diameter) <= 0.05e-3 && (r.Material == nil || cats[p.Catalogue] == r.Material.Key) {
+			return p.Schedule
+		}
+	}
+	return ""
 }

@@ -137,7 +137,7 @@ func TestBadInputs(t *testing.T) {
 		{set("units=imperial"), "units", "si or us", true},
 		{set("alt=99999m"), "alt", "", false},
 		{set("baro=-3kPa"), "baro", "above zero", false},
-		{set("view=map"), "view", "regime, line, pump, report", true},
+		{set("view=map"), "view", "regime (Run and sizes), line, pump, report", true},
 		{set("eps=-1mm"), "eps", "zero or more", true},
 		{set("chw=0"), "chw", "above zero", true},
 		{set("name=<script>alert(1)</script>"), "", "", true}, // text, kept as text

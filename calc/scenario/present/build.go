@@ -30,7 +30,7 @@ type builder struct {
 var Views = []struct{ Key, Hint string }{
 	{"balance", "two-point energy balance"},
 	{"convert", "head ↔ pressure"},
-	{"regime", "Re and friction"},
+	{"regime", "loss of a run, sizes"},
 	{"line", "segments, EGL/HGL"},
 	{"pump", "duty, NPSH, readings"},
 	{"report", "the printed sheet"},
@@ -278,7 +278,11 @@ func uses(view, p string) bool {
 	case "convert":
 		return oneOf(p, "view", "units", "name", "liq", "gly", "glyv", "t", "rho", "mu", "pv", "alt", "baro", "pl", "plref", "cv", "cvref")
 	case "regime":
-		return oneOf(p, "view", "units", "name", "liq", "gly", "glyv", "t", "rho", "mu", "pv", "pl", "plref", "q", "l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw")
+		if n, f := scenario.SegmentOf(p); n > 0 {
+			return oneOf(f, "l", "d", "nps", "sch", "mat", "eps", "fit", "k")
+		}
+		return oneOf(p, "view", "units", "name", "liq", "gly", "glyv", "t", "rho", "mu", "pv", "pl", "plref", "q", "l", "d", "nps", "sch", "mat", "eps", "fit", "k", "fm", "chw",
+			"rseg", "szsch", "vlo", "vhi", "grad")
 	case "balance", "line", "pump":
 		return p != "cv" && p != "cvref"
 	case "book":

@@ -508,6 +508,9 @@ func (b *builder) fittingKs(p string) []calc.FittingK {
 		return nil
 	}
 	n, _ := scenario.SegmentOf(p)
+	if rv := b.r.RunView; rv != nil && rv.Run != nil && rv.Segment == n {
+		return rv.Run.Fittings // the Run view's segment, solved alone
+	}
 	if br := b.r.Balance; br != nil && br.Line != nil && n >= 1 && n <= len(br.Line.Segments) {
 		return br.Line.Segments[n-1].Fittings
 	}

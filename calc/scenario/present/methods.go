@@ -29,6 +29,7 @@ func methodsFor(us bool) []Method {
 		{"Site pressure", "the ISO 2533 standard atmosphere at the site altitude, or the barometer reading."},
 		{"Units", "conversion factors of NIST SP 811 (2008), Appendix B, checked against GNU units; conventional water-column units at their SP 811 values, kept apart from the head of the actual liquid."},
 		{"Pipe dimensions", "each catalogue in its own notation: ASME B36.10M carbon steel and ASME B36.19M stainless (NPS, with DN), PVC to ASTM D1785 and D2241, checked row by row against python3-fluids; copper tube to ASTM B88, PE to ISO 4427 and cement-lined ductile iron to ISO 2531 with ISO 4179 linings from memory."},
+		{"Sizing table", sizingMethod(us)},
 		{"Pump curve", "monotone piecewise cubic interpolation through the data-sheet points (Fritsch & Carlson 1980), never beyond them; a head that rises at low flow (a drooping curve) is accepted and its rising part flagged as unstable; the operating point is where it meets the system curve, each flow of which is solved in full."},
 		{"Speed and arrangement", "the pump affinity laws; identical pumps in parallel add flow, in series add head."},
 		{"NPSH margin", "NPSH available from the surface pressure, vapour pressure, suction height and suction losses; margin guidance after ANSI/HI 9.6.1 (from memory): ratio at least 1.1 and at least " + margin + "."},

@@ -133,7 +133,7 @@ func npshLevel(l calc.NPSHLevel) (text, class string) {
 	return "NPSH required not given: no margin to judge", "lvl-none"
 }
 
-// npshBlocks are the NPSH verdict, its figures and its note; each is an
+// npshBlocks are the NPSH verdict, its breakdown and its note; each is an
 // empty block without an NPSH result.
 func (b *builder) npshBlocks() (level, facts, note Block) {
 	n := b.r.NPSH
@@ -143,29 +143,88 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 	}
 	t, cls := npshLevel(n.Level)
 	level = Block{Kind: BlockLevel, ID: "npsh-level", Class: cls, Text: t}
-	fs := []Fact{{ID: "npsh-a", Label: "NPSH available", Value: b.head(n.Available)}}
+	signed := func(v float64) string {
+		if v < 0 {
+			return "− " + b.head(-v)
+		}
+		return "+ " + b.head(v)
+	}
+	src := "pressure on the source surface (" + b.absolute(n.PressureHead*b.r.Fluid.Density*calc.StandardGravity) + ")"
+	if b.r.SitePressure > 0 && abs(n.PressureHead*b.r.Fluid.Density*calc.StandardGravity-b.r.SitePressure) < 1 {
+		src = "atmosphere on the source surface (site pressure " + b.absolute(b.r.SitePressure) + ")"
+	}
+	static := "source surface above the pump centreline"
+	if n.StaticHead < 0 {
+		static = "source surface below the pump centreline (suction lift)"
+	}
+	loss := "suction losses"
+	switch sc := b.r.NPSHSuction; {
+	case sc.Typed:
+		loss += " (typed)"
+	case sc.After == 1:
+		loss += " (segment 1, at " + b.param("q", b.r.NPSHFlow) + ")"
+	case sc.After > 1:
+		loss += " (segments 1 to " + strconv.Itoa(sc.After) + ", at " + b.param("q", b.r.NPSHFlow) + ")"
+	default:
+		loss += " (none: no suction pipe given)"
+	}
+	fs := []Fact{
+		{ID: "npsh-p", Label: src, Value: signed(n.PressureHead)},
+		{ID: "npsh-z", Label: static, Value: signed(n.StaticHead)},
+		{ID: "npsh-loss", Label: loss, Value: signed(-n.LossHead)},
+		{ID: "npsh-pv", Label: "vapour pressure of the liquid (" + b.absolute(b.r.Fluid.VapourPressure) + ")", Value: signed(-n.VapourHead)},
+		{ID: "npsh-a", Label: "NPSH available", Value: b.head(n.Available), Key: true},
+	}
 	if n.Level != calc.NPSHUnrated {
+		from := "typed"
+		if !b.s.Has("npshr") {
+			from = "data sheet, at " + b.param("q", b.r.NPSHFlow)
+		}
 		fs = append(fs,
-			Fact{ID: "npsh-r", Label: "NPSH required", Value: b.head(n.Required)},
+			Fact{ID: "npsh-r", Label: "NPSH required (" + from + ")", Value: b.head(n.Required)},
 			Fact{ID: "npsh-margin", Label: "margin", Value: b.head(n.Margin), Key: true},
-			Fact{ID: "npsh-ratio", Label: "ratio available ÷ required", Value: calc.FormatNumber(n.Ratio, 3)},
+			Fact{ID: "npsh-ratio", Label: "ratio available ÷ required (at least 1.1, ANSI/HI 9.6.1, from memory)", Value: calc.FormatNumber(n.Ratio, 3)},
 		)
 	}
-	fs = append(fs, Fact{Label: "at a flow of", Value: b.param("q", b.r.NPSHFlow)})
-	return level, Block{Kind: BlockFacts, Class: "facts", Facts: fs}, text("note-text", "npsh-note", b.caution(n.Note))
+	return level, Block{Kind: BlockFacts, ID: "npsh-facts", Class: "facts", Facts: fs}, text("note-text", "npsh-note", b.caution(n.Note))
 }
 
-// npshCard is NPSH available against required.
+func abs(x float64) float64 {
+	if x < 0 {
+		return -x
+	}
+	return x
+}
+
+// npshCard is NPSH available against required, from the suction side
+// alone: the source, the pump's height, the suction loss and the NPSH the
+// pump requires, each box in the card.
 func (b *builder) npshCard() Card {
 	why := "Enter the pump centreline elevation to work out the NPSH available."
 	if b.s.Has("zp") {
-		why = b.toCheck("zp", "npshr", "pafter", "t", "liq", "alt", "baro", "p1", "z1", "q")
+		ps := []string{"zp", "p1", "p1ref", "z1", "hs", "pafter", "npshr", "pnpsh", "t", "liq", "rho", "pv", "alt", "baro"}
+		if !b.s.Has("hs") {
+			ps = append(ps, "q") // the suction loss from the segments needs it
+		}
+		why = b.toCheck(ps...)
 	}
+	typed := b.d.SideOf("npsh") == "typed"
 	level, facts, note := b.npshBlocks()
-	return Card{ID: "npsh", Class: "npsh", Title: "Cavitation check (NPSH)", Blocks: []Block{
+	suction := Block{Kind: BlockEmpty}
+	if n := b.s.SegmentCount(); n > 0 && !b.s.Has("hs") {
+		suction = fields(b.pumpPlace(n))
+	}
+	return Card{ID: "npsh", Class: "npsh", Title: "Cavitation check (NPSH), suction side", Blocks: []Block{
 		maybe(b.r.NPSH == nil, text("muted", "npsh-why", why)),
 		level, facts, note,
 		b.warnings(nil, "npsh", "site", "liquid"),
+		{Kind: BlockHeading, Text: "Suction side"},
+		fields(b.quantity("p1", "Pressure on the source surface", "(0 gauge: open to the air)"), b.ref("p1ref")),
+		fields(b.quantity("z1", "Source surface elevation", ""), b.quantity("zp", "", "")),
+		fields(b.quantity("hs", "", "")),
+		suction,
+		b.toggle("npsh"),
+		maybe(typed, fields(b.quantity("npshr", "", ""))),
 	}}
 }
 
@@ -380,11 +439,6 @@ func (b *builder) dataSheetCard() Card {
 // pumpSetupCard is the speed, the arrangement, the pump's elevation and
 // the NPSH it requires.
 func (b *builder) pumpSetupCard() Card {
-	typed := b.d.SideOf("npsh") == "typed"
-	var npshr Block
-	if typed {
-		npshr = fields(b.quantity("npshr", "", ""))
-	}
 	return Card{ID: "pump-setup", Title: "Pump as installed", Blocks: []Block{
 		fields(b.quantity("spd", "", ""), b.picker("pumps", "", "")),
 		fields(b.quantity("nrat", "", ""), b.quantity("fmains", "", "")),
@@ -392,9 +446,6 @@ func (b *builder) pumpSetupCard() Card {
 		maybe(b.d.SideOf("spfor") != "h", fields(b.quantity("qsp", "", ""))),
 		maybe(b.d.SideOf("spfor") == "h", fields(b.quantity("hsp", "", ""))),
 		b.speedFacts(),
-		fields(b.quantity("zp", "", "")),
-		b.toggle("npsh"),
-		maybe(typed, npshr),
 	}}
 }
 

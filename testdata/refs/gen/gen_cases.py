@@ -415,6 +415,36 @@ def npsh_cases():
             "npsh.ratio = %s ± 1e-8 rel" % sig(a / r),
             "npsh.level is %s" % level,
         ])
+    # The suction side alone (no discharge side, no balance): the breakdown
+    # of NPSHa into the pressure head on the source surface, the static
+    # head, the suction losses (typed, or of segment 1 before the pump) and
+    # the vapour head.
+    for name, tc, alt, p1, z1, zp, loss, npshr in [
+            ("suction side alone: open sump, typed suction loss, 25 C, 300 m altitude", "25", "300", "0", "48.5", "51", "0.35", "3.2"),
+            ("suction side alone: closed vessel at 40 kPa gauge, flooded, 70 C", "70", "0", "40", "12", "9.5", "0.6", "4"),
+            ("suction side alone: open tank, loss of segment 1 at 18 L/s, 15 C", "15", "650", "0", "200", "203.2", None, "2.8")]:
+        t = mp.mpf(tc) + mp.mpf("273.15")
+        patm = iso2533(alt)
+        ps = patm + mp.mpf(p1) * 1000
+        # The water's properties are taken at the line pressure: with no pl
+        # and only p1 typed, that is p1's absolute pressure (doc.go, "pl").
+        rho, mu, psat = water(t, max(ps, mp.mpf(_PSat_T(float(t)) * 1e6)))
+        query = "view=pump&liq=water&t=%sC&alt=%sm&p1=%skPa&z1=%sm&zp=%sm&npshr=%sm" % (tc, alt, p1, z1, zp, npshr)
+        if loss is None:
+            hf, _ = darcy_loss(rho, mu, mp.mpf("0.018"), mp.mpf("0.1"), mp.mpf(9), mp.mpf("0.045e-3"), mp.mpf("2.2"))
+            query += "&q=18L/s&s1.l=9m&s1.d=100mm&s1.eps=0.045mm&s1.k=2.2&s1.z=%sm&pafter=1" % zp
+        else:
+            hf = mp.mpf(loss)
+            query += "&hs=%sm" % loss
+        a = (ps - psat) / (rho * G) + mp.mpf(z1) - mp.mpf(zp) - hf
+        w.case(name, query, [
+            "npsh.p = %s m ± 1e-8 rel" % sig(ps / (rho * G)),
+            "npsh.z = %s m ± 1e-9 m" % sig(mp.mpf(z1) - mp.mpf(zp)),
+            "npsh.loss = %s m ± 1e-8 rel" % sig(hf),
+            "npsh.pv = %s m ± 1e-8 rel" % sig(psat / (rho * G)),
+            "npsh.a = %s m ± 1e-8 rel" % sig(a),
+            "npsh.margin = %s m ± 1e-8 rel" % sig(a - mp.mpf(npshr)),
+        ])
     w.close()
 
 

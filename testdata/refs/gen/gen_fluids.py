@@ -436,7 +436,63 @@ def seawater():
             out.write("\t".join(r) + "\n")
 
 
+def sizing():
+    """The Run view's sizing table: one run (length, roughness, fittings)
+    evaluated in each schedule 40 size, with fluids' pipe bores, Colebrook
+    friction and Crane fitting K at each size."""
+    w = Writer("ref-fluids-sizing.case", "sizing table: a run in each size of a pipe class",
+               FLUIDS + " (fluids.piping schedule 40 bores, fluids.friction.Colebrook, fluids.fittings "
+               "K_gate_valve_Crane and bend_rounded 'Crane standard' with f_T from Colebrook, exit K = 1; "
+               "loss = f L/D V^2/2g + sum K V^2/2g, gradient = f/D V^2/2g; marks: a velocity band and a gradient limit by definition)")
+    g0 = 9.80665
+    for name, q_ls, length, eps_mm, extra, lim in [
+            ("35 L/s over 1200 m, two gates, four elbows and an exit", "35", 1200.0, "0.045", "", (0.6, 2.4, 0.04)),
+            ("8 L/s over 60 m, marks set to 1-2 m/s and 2 per 100", "8", 60.0, "0.15", "&vlo=1m/s&vhi=2m/s&grad=2", (1.0, 2.0, 0.02))]:
+        q = float(q_ls) / 1000
+        query = (CUSTOM + "&view=regime&q=%sL/s&l=%gm&nps=6&sch=40&eps=%smm&fit=gate:2,elbow90:4,exit:1%s"
+                 % (q_ls, length, eps_mm, extra))
+        expects = []
+        for nps in ["2", "3", "4", "6", "8", "10"]:
+            d = pipe("40", nps)[2] / 1000
+            v = q / (math.pi * d * d / 4)
+            re = 1000 * v * d / 1e-3
+            if v > 2 * lim[1] or v < lim[0] / 2:
+                continue  # the table leaves such sizes out of its window, but they are computed too
+            f = Colebrook(re, float(eps_mm) / 1000 / d)
+            ft = ft_exact(d)
+            ksum = 2 * crane_k("gate", d, ft)[0] + 4 * crane_k("elbow90", d, ft)[0] + 1.0
+            hv = v * v / (2 * g0)
+            grad = f / d * hv
+            loss = grad * length + ksum * hv
+            inband = lim[0] <= v <= lim[1]
+            under = grad <= lim[2]
+            mark = "fits" if inband and under else (
+                "velocity and friction" if not inband and not under else ("velocity" if not inband else "friction"))
+            expects += ["sizing.%s.id = %s m ± 1e-12 rel" % (nps, g(d)),
+                        "sizing.%s.v = %s m/s ± 1e-10 rel" % (nps, g(v)),
+                        "sizing.%s.re = %s ± 1e-10 rel" % (nps, g(re)),
+                        "sizing.%s.grad = %s ± 1e-9 rel" % (nps, g(grad)),
+                        "sizing.%s.loss = %s m ± 1e-9 rel" % (nps, g(loss)),
+                        "sizing.%s.mark is %s" % (nps, mark)]
+        w.case(name, query, expects)
+    # The Run view on segment 2 of a line: that segment alone.
+    q = 0.012
+    d = pipe("40", "4")[2] / 1000
+    v = q / (math.pi * d * d / 4)
+    re = 1000 * v * d / 1e-3
+    f = Colebrook(re, 0.045e-3 / d)
+    hv = v * v / (2 * g0)
+    loss = f * 300 / d * hv + crane_k("gate", d, ft_exact(d))[0] * hv
+    w.case("segment 2 of a line: 300 m of NPS 4 schedule 40 with a gate valve",
+           CUSTOM + "&view=regime&q=12L/s&rseg=2&s1.l=10m&s1.d=150mm&s1.eps=0.045mm&s1.z=5m"
+           "&s2.l=300m&s2.nps=4&s2.sch=40&s2.eps=0.045mm&s2.fit=gate:1&s2.z=20m",
+           ["runview.seg = 2 ± 0", "runview.v = %s m/s ± 1e-10 rel" % g(v), "runview.re = %s ± 1e-10 rel" % g(re),
+            "runview.loss = %s m ± 1e-9 rel" % g(loss)])
+    w.close()
+
+
 def main():
+    sizing()
     pipes()
     fittings()
     roughness()
