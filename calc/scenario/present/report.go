@@ -311,7 +311,9 @@ func (b *builder) fittingKTable() Block {
 		all = append(all, where{"pipe run", r.Fittings})
 	}
 	cols := []string{"where", "fitting", "count", "K each", "method"}
-	t := &Table{ID: "report-fitting-k", Class: "grid figures", Head: cols}
+	// Left-aligned and wrapping (as the inputs): the method column holds
+	// formulas.
+	t := &Table{ID: "report-fitting-k", Class: "grid inputs", Head: cols}
 	for _, w := range all {
 		for _, k := range w.ks {
 			method := k.Method
