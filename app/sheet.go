@@ -38,6 +38,7 @@ type sheet struct {
 	bk       book        // the sheets kept on this device (book.go)
 	ctx      app.Context // the sheet's own context, from OnMount
 	pending  bool        // a write of the sheet is put off (save)
+	edits    int         // edits so far, for save to see a pause
 	install  bool        // the browser offers to install the site (chrome.go)
 }
 
@@ -79,12 +80,18 @@ func newSheet() app.Composer {
 func (s *sheet) OnMount(ctx app.Context) {
 	s.ctx = ctx
 	if app.IsClient {
-		app.Window().Call("addEventListener", "pagehide", app.FuncOf(func(app.Value, []app.Value) any {
-			if s.pending {
-				s.flush()
-			}
-			return nil
-		}))
+		leave := func(hiddenOnly bool) app.Func {
+			return app.FuncOf(func(app.Value, []app.Value) any {
+				doc := app.Window().Get("document")
+				if s.pending && (!hiddenOnly || doc.Get("visibilityState").String() == "hidden") {
+					s.flush()
+				}
+				return nil
+			})
+		}
+		// A phone may end a page in the background without pagehide.
+		app.Window().Call("addEventListener", "pagehide", leave(false))
+		app.Window().Get("document").Call("addEventListener", "visibilitychange", leave(true))
 	}
 	s.watchUpdates(ctx)
 	s.install = installable(ctx)
@@ -158,9 +165,10 @@ func (s *sheet) evaluate() {
 }
 
 // save writes the sheet into the address bar, the saved copy and the site
-// book shortly after an edit, once its answer is on screen: the writes
-// cost an edit about as much as computing it, and a burst of typing needs
-// one write, not one per key. A page being left writes at once (pagehide).
+// book once typing pauses (saveDelay after the last edit), not during a
+// burst: the writes cost about as much as an edit (the address bar's
+// replaceState alone a few ms on a phone) and would delay the next key's
+// answer. A page being left or hidden writes at once (OnMount).
 func (s *sheet) save() {
 	if !app.IsClient {
 		return
@@ -169,24 +177,42 @@ func (s *sheet) save() {
 		s.flush()
 		return
 	}
-	if s.pending {
+	s.edits++
+	if s.pending { // the timer is armed: it waits again for this edit
 		return
 	}
 	s.pending = true
 	app.Window().Set("fieldheadPending", true) // for the browser tests
 	ctx := s.ctx
-	app.Window().Call("setTimeout", once(func(app.Value) {
-		ctx.Dispatch(func(ctx app.Context) {
-			defer s.contain("keeping the sheet")
-			s.flush()
-			if s.vm.View != "book" {
-				ctx.PreventUpdate() // nothing on screen changes
-			} else {
-				s.build() // the book lists the sheet as kept now
-			}
-		})
-	}), 200)
+	var arm func()
+	arm = func() {
+		seen := s.edits
+		app.Window().Call("setTimeout", once(func(app.Value) {
+			ctx.Dispatch(func(ctx app.Context) {
+				defer s.contain("keeping the sheet")
+				if !s.pending { // written meanwhile (pagehide)
+					ctx.PreventUpdate()
+					return
+				}
+				if s.edits != seen { // typed since: wait for the pause
+					arm()
+					ctx.PreventUpdate()
+					return
+				}
+				s.flush()
+				if s.vm.View != "book" {
+					ctx.PreventUpdate() // nothing on screen changes
+				} else {
+					s.build() // the book lists the sheet as kept now
+				}
+			})
+		}), saveDelay)
+	}
+	arm()
 }
+
+// saveDelay is how long, in ms, save waits after the last edit.
+const saveDelay = 400
 
 // flush writes what save put off.
 func (s *sheet) flush() {

@@ -110,15 +110,17 @@ const (
 )
 
 var (
-	siteDir   = flag.String("site", "build/site", "the built site to measure")
-	chromium  = flag.String("chromium", "", "Chromium's path (default: $CHROMIUM, else chromium on $PATH)")
-	loads     = flag.Int("loads", 5, "cold loads and offline reloads to take the median of (at least 5)")
-	edits     = flag.Int("edits", 60, "edits to time (at least 50)")
-	throttle  = flag.Float64("throttle", 4, "CPU slow-down factor for the browser figures")
-	count     = flag.Int("count", 5, "go test -count for the calc benchmarks")
-	benchtime = flag.String("benchtime", "1s", "go test -benchtime for the calc benchmarks")
-	wasmSrc   = flag.String("app", "./app", "the app package, built unstripped to read the wasm's composition")
-	phoneOnly = flag.Bool("phone-only", false, "only the phone-class figures and the sizes (to compare builds quickly)")
+	siteDir    = flag.String("site", "build/site", "the built site to measure")
+	chromium   = flag.String("chromium", "", "Chromium's path (default: $CHROMIUM, else chromium on $PATH)")
+	loads      = flag.Int("loads", 5, "cold loads and offline reloads to take the median of (at least 5)")
+	edits      = flag.Int("edits", 60, "edits to time (at least 50)")
+	throttle   = flag.Float64("throttle", 4, "CPU slow-down factor for the browser figures")
+	count      = flag.Int("count", 5, "go test -count for the calc benchmarks")
+	benchtime  = flag.String("benchtime", "1s", "go test -benchtime for the calc benchmarks")
+	wasmSrc    = flag.String("app", "./app", "the app package, built unstripped to read the wasm's composition")
+	phoneOnly  = flag.Bool("phone-only", false, "only the phone-class figures and the sizes (to compare builds quickly)")
+	editOnly   = flag.Bool("edits-only", false, "only the edit figures, on one loaded page (to compare builds quickly)")
+	profileTop = flag.Int("profile", 0, "with -edits-only: list this many functions of Chromium's CPU profile of the timed edits")
 )
 
 func main() {
@@ -138,6 +140,10 @@ func main() {
 		log.Fatal(err)
 	}
 	defer srv.Close()
+	if *editOnly {
+		editsOnly(origin + "/?" + scenario.Demo().Encode())
+		return
+	}
 	var fetched []string
 	if !*phoneOnly {
 		log.Print("calc benchmarks (go test -bench) …")
@@ -480,6 +486,21 @@ func (s *browserSession) storedBytes() int {
 	return n
 }
 
+// openShown starts a session, opens link and waits for its answer.
+func openShown(link string) *browserSession {
+	s, err := newSession()
+	if err != nil {
+		log.Fatal(err)
+	}
+	if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
+		log.Fatal(err)
+	}
+	if _, err := s.waitShown(); err != nil {
+		log.Fatal(err)
+	}
+	return s
+}
+
 // waitShown waits for the answer on screen and returns the time.
 func (s *browserSession) waitShown() (float64, error) {
 	// Long enough for a build of several MB over the phone-class link.
@@ -682,17 +703,8 @@ func (r *report) browser(link, origin string) []string {
 		s.cancel()
 	}
 
-	s, err := newSession()
-	if err != nil {
-		log.Fatal(err)
-	}
+	s := openShown(link)
 	defer s.cancel()
-	if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
-		log.Fatal(err)
-	}
-	if _, err := s.waitShown(); err != nil {
-		log.Fatal(err)
-	}
 	if err := s.waitWorker(); err != nil {
 		log.Fatalf("the service worker never took control: %v", err)
 	}
@@ -730,45 +742,9 @@ func (r *report) browser(link, origin string) []string {
 	}
 
 	// Edits, still offline (the page needs no network to compute).
-	if _, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](editJS)); err != nil {
-		log.Fatal(err)
-	}
-	focus := `(() => { const e = document.getElementById("in-q"); e.focus(); e.setSelectionRange(e.value.length, e.value.length); return e.value; })()`
-	var times []float64
-	for i := 0; i < warmupEdits+*edits; i++ {
-		v, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](focus))
-		if err != nil {
-			log.Fatal(err)
-		}
-		key := kb.Backspace
-		if i%2 == 1 {
-			key = "5"
-		}
-		if i == 0 && v == "" {
-			log.Fatal("the flow box is empty")
-		}
-		if err := chromedp.Do(s.ctx, chromedp.KeyEvent(key)); err != nil {
-			log.Fatal(err)
-		}
-		ctx, cancel := context.WithTimeout(s.ctx, 30*time.Second)
-		_, err = chromedp.Run(ctx, chromedp.Poll[bool](fmt.Sprintf("window.fieldheadEdits.length > %d", i),
-			chromedp.WithPollingInterval(5*time.Millisecond)))
-		cancel()
-		if err != nil {
-			log.Fatalf("edit %d never showed a changed answer: %v", i+1, err)
-		}
-	}
-	all, err := chromedp.Run(s.ctx, chromedp.Evaluate[[]float64]("window.fieldheadEdits"))
-	if err != nil {
-		log.Fatal(err)
-	}
-	times = all[warmupEdits:]
-	phases, err := chromedp.Run(s.ctx, chromedp.Evaluate[[][]float64]("window.fieldheadPhases"))
-	if err != nil || len(phases) != len(all) {
-		log.Fatalf("edit phases: %v", err)
-	}
+	times, phases := timeEdits(s, nil)
 	var mean [4]float64
-	for _, ph := range phases[warmupEdits:] {
+	for _, ph := range phases {
 		for k := range mean {
 			mean[k] += ph[k] / float64(len(times))
 		}
@@ -813,6 +789,51 @@ func (r *report) browser(link, origin string) []string {
 	}
 	_ = origin
 	return fetched
+}
+
+// timeEdits types *edits keys (after warmupEdits not counted) into the
+// flow box and returns each edit's time and phases (see editJS). between,
+// when not nil, runs after the warm-up edits (to start a profiler).
+func timeEdits(s *browserSession, between func()) (times []float64, phases [][]float64) {
+	if _, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](editJS)); err != nil {
+		log.Fatal(err)
+	}
+	focus := `(() => { const e = document.getElementById("in-q"); e.focus(); e.setSelectionRange(e.value.length, e.value.length); return e.value; })()`
+	for i := 0; i < warmupEdits+*edits; i++ {
+		if i == warmupEdits && between != nil {
+			between()
+		}
+		v, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](focus))
+		if err != nil {
+			log.Fatal(err)
+		}
+		key := kb.Backspace
+		if i%2 == 1 {
+			key = "5"
+		}
+		if i == 0 && v == "" {
+			log.Fatal("the flow box is empty")
+		}
+		if err := chromedp.Do(s.ctx, chromedp.KeyEvent(key)); err != nil {
+			log.Fatal(err)
+		}
+		ctx, cancel := context.WithTimeout(s.ctx, 30*time.Second)
+		_, err = chromedp.Run(ctx, chromedp.Poll[bool](fmt.Sprintf("window.fieldheadEdits.length > %d", i),
+			chromedp.WithPollingInterval(5*time.Millisecond)))
+		cancel()
+		if err != nil {
+			log.Fatalf("edit %d never showed a changed answer: %v", i+1, err)
+		}
+	}
+	all, err := chromedp.Run(s.ctx, chromedp.Evaluate[[]float64]("window.fieldheadEdits"))
+	if err != nil {
+		log.Fatal(err)
+	}
+	ph, err := chromedp.Run(s.ctx, chromedp.Evaluate[[][]float64]("window.fieldheadPhases"))
+	if err != nil || len(ph) != len(all) {
+		log.Fatalf("edit phases: %v", err)
+	}
+	return all[warmupEdits:], ph[warmupEdits:]
 }
 
 // sizes measures the wasm and every file a first visit fetches.
