@@ -383,12 +383,12 @@ func (s *sheet) Render() (ui app.UI) {
 // goes after the others.
 func (s *sheet) layout() app.UI {
 	vm := &s.vm
-	byID := map[string]present.Card{}
+	byID := make(map[string]present.Card, len(vm.Cards))
 	for _, c := range vm.Cards {
 		byID[c.ID] = c
 	}
-	used := map[string]bool{}
-	cards := func(ids ...string) []app.UI {
+	used := make(map[string]bool, len(vm.Cards))
+	cards := func(ids []string) []app.UI {
 		var out []app.UI
 		for _, id := range ids {
 			if c, ok := byID[id]; ok && !used[id] {
@@ -398,24 +398,22 @@ func (s *sheet) layout() app.UI {
 		}
 		return out
 	}
-	div := func(class string, body ...app.UI) app.UI { return app.Div().Class(class).Body(body...) }
+	var place func(a area) app.UI
+	place = func(a area) app.UI {
+		body := cards(a.cards)
+		for _, in := range a.in {
+			body = append(body, place(in))
+		}
+		return app.Div().Class(a.class).Body(body...)
+	}
 	var root app.UI
-	switch vm.View {
-	case "balance":
-		root = div("layout", div("area-answer", cards("answer-card")...),
-			div("area-inputs", div("points", cards("point-1", "point-2")...), div("stack", cards("between", "liquid")...)),
-			div("area-more", cards("budget")...))
-	case "convert":
-		root = div("layout", div("area-answer", cards("convert-card")...), div("area-inputs", cards("convert-in", "liquid")...))
-	case "regime":
-		root = div("layout", div("area-answer", cards("regime-card")...), div("area-inputs", cards("run", "liquid")...))
-	case "line":
-		root = div("stack", div("duo", cards("line-card", "profile-card")...), div("stack", cards("seg-results", "segments")...))
-	case "pump":
-		root = div("stack", div("duo", div("col", cards("operating", "npsh", "turbine")...), div("col", cards("pump-chart-card", "profile-card")...)),
-			div("duo even", div("col", cards("datasheet-card", "pump-side")...), div("col", cards("pump-setup", "field")...)))
-	default:
-		root = app.Article().Class("report").Body(cards(ids(vm.Cards)...)...)
+	for _, l := range layouts {
+		if l.view == vm.View {
+			root = place(l.area)
+		}
+	}
+	if root == nil {
+		root = app.Article().Class("report").Body(cards(ids(vm.Cards))...)
 	}
 	var rest []string
 	for _, c := range vm.Cards {
@@ -423,7 +421,46 @@ func (s *sheet) layout() app.UI {
 			rest = append(rest, c.ID)
 		}
 	}
-	return app.Div().Body(root, div("stack", cards(rest...)...))
+	return app.Div().Body(root, app.Div().Class("stack").Body(cards(rest)...))
+}
+
+// area is a <div> of a view's arrangement: the cards it holds, then the
+// areas inside it. The arrangements are data, not code: one function
+// drawing them is a fraction of the wasm that a call per area took.
+type area struct {
+	class string
+	cards []string
+	in    []area
+}
+
+// layouts are the views' arrangements; another view (the report, the
+// book) lists its cards in order.
+var layouts = []struct {
+	view string
+	area area
+}{
+	{"balance", area{class: "layout", in: []area{
+		{class: "area-answer", cards: []string{"answer-card"}},
+		{class: "area-inputs", in: []area{
+			{class: "points", cards: []string{"point-1", "point-2"}},
+			{class: "stack", cards: []string{"between", "liquid"}}}},
+		{class: "area-more", cards: []string{"budget"}}}}},
+	{"convert", area{class: "layout", in: []area{
+		{class: "area-answer", cards: []string{"convert-card"}},
+		{class: "area-inputs", cards: []string{"convert-in", "liquid"}}}}},
+	{"regime", area{class: "layout", in: []area{
+		{class: "area-answer", cards: []string{"regime-card"}},
+		{class: "area-inputs", cards: []string{"run", "liquid"}}}}},
+	{"line", area{class: "stack", in: []area{
+		{class: "duo", cards: []string{"line-card", "profile-card"}},
+		{class: "stack", cards: []string{"seg-results", "segments"}}}}},
+	{"pump", area{class: "stack", in: []area{
+		{class: "duo", in: []area{
+			{class: "col", cards: []string{"operating", "npsh", "turbine"}},
+			{class: "col", cards: []string{"pump-chart-card", "profile-card"}}}},
+		{class: "duo even", in: []area{
+			{class: "col", cards: []string{"datasheet-card", "pump-side"}},
+			{class: "col", cards: []string{"pump-setup", "field"}}}}}}},
 }
 
 func ids(cs []present.Card) []string {

@@ -120,6 +120,7 @@ var (
 	wasmSrc    = flag.String("app", "./app", "the app package, built unstripped to read the wasm's composition")
 	phoneOnly  = flag.Bool("phone-only", false, "only the phone-class figures and the sizes (to compare builds quickly)")
 	editOnly   = flag.Bool("edits-only", false, "only the edit figures, on one loaded page (to compare builds quickly)")
+	partsOf    = flag.String("parts", "", "only list the code of this wasm (built without -s) by package, largest first")
 	profileTop = flag.Int("profile", 0, "with -edits-only: list this many functions of Chromium's CPU profile of the timed edits")
 )
 
@@ -140,6 +141,30 @@ func main() {
 		log.Fatal(err)
 	}
 	defer srv.Close()
+	if *partsOf != "" {
+		mod, err := os.ReadFile(*partsOf)
+		if err != nil {
+			log.Fatal(err)
+		}
+		p, err := analyseWasm(mod)
+		if err != nil {
+			log.Fatal(err)
+		}
+		fmt.Printf("%s: code %.2f MiB, data %.2f MiB, other %.2f MiB\n", *partsOf, mib(p.code), mib(p.data), mib(p.other))
+		for _, l := range p.topPackages(60) {
+			fmt.Println(l)
+		}
+		var fs []string
+		for f := range p.funcs {
+			fs = append(fs, f)
+		}
+		sort.Slice(fs, func(i, j int) bool { return p.funcs[fs[i]] > p.funcs[fs[j]] })
+		fmt.Println("largest functions:")
+		for _, f := range fs[:min(60, len(fs))] {
+			fmt.Printf("%8.1f KiB  %s\n", float64(p.funcs[f])/1024, f)
+		}
+		return
+	}
 	if *editOnly {
 		editsOnly(origin + "/?" + scenario.Demo().Encode())
 		return

@@ -64,6 +64,11 @@ func editsOnly(link string) {
 	if err != nil {
 		log.Fatal(err)
 	}
+	regions, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](`[...document.querySelectorAll("#sheet > *, #sheet > main > *, section.card")].map(e => e.tagName.toLowerCase() + "." + e.className.split(" ")[0] + (e.id ? "#" + e.id : "") + ": " + e.getElementsByTagName("*").length).join("\\n")`))
+	if err != nil {
+		log.Fatal(err)
+	}
+	fmt.Printf("\nelements under each part of the page:\n%s\n", regions)
 	fmt.Printf("\nDOM mutations during the timed edits (kind, where: count):\n%s\n", strings.ReplaceAll(muts, "],[", "]\n["))
 }
 
