@@ -47,13 +47,13 @@ const brandMark = `<svg class="mark" viewBox="0 0 100 100" aria-hidden="true"><r
 // shareRow holds the actions on the whole sheet.
 func (s *sheet) shareRow() app.UI {
 	body := []app.UI{
-		app.Button().Type("button").ID("copy-link").Class("act main").Text("Copy link").OnClick(s.onCopy),
-		app.Button().Type("button").ID("print").Class("act").Text("Print sheet").OnClick(s.onPrint),
-		app.Button().Type("button").ID("demo").Class("act").Text("Demo").OnClick(s.onDemo),
-		app.Button().Type("button").ID("blank").Class("act").Text("New sheet").OnClick(s.onBlank),
+		act("copy-link", "act main", "Copy link", s.onCopy),
+		act("print", "act", "Print sheet", s.onPrint),
+		act("demo", "act", "Demo", s.onDemo),
+		act("blank", "act", "New sheet", s.onBlank),
 	}
 	if s.install {
-		body = append(body, app.Button().Type("button").ID("install").Class("act").Text("Install on this device").OnClick(s.onInstall))
+		body = append(body, act("install", "act", "Install on this device", s.onInstall))
 	}
 	if s.copyNote != "" {
 		body = append(body, app.Span().Class("note").ID("copy-note").Attr("role", "status").Text(s.copyNote))
@@ -63,6 +63,15 @@ func (s *sheet) shareRow() app.UI {
 			ReadOnly(true).Aria("label", "share link").Value(s.link()))
 	}
 	return app.Div().Class("share").Body(body...)
+}
+
+// act is a button of the page's own (not of the view model). Not
+// inlined: go-app's element builders are, and a copy per button made the
+// wasm larger.
+//
+//go:noinline
+func act(id, class, text string, h app.EventHandler) app.UI {
+	return app.Button().Type("button").ID(id).Class(class).Text(text).OnClick(h)
 }
 
 // pageTitle is the document's title: the sheet's name, then ours, so that

@@ -107,8 +107,7 @@ func (s *sheet) faultBanner() app.UI {
 		app.Span().Class("tag").Text("Fault"),
 		app.Text(" Fieldhead hit an internal error while "+s.fault.what+" ("+s.fault.msg+"). "+
 			"Your inputs are kept, in the boxes, in the link and on this device; change any of them to try again."),
-		app.Button().Type("button").ID("fault-dismiss").Class("act").Text("Dismiss").
-			OnClick(func(ctx app.Context, e app.Event) { s.fault = nil }),
+		act("fault-dismiss", "act", "Dismiss", func(ctx app.Context, e app.Event) { s.fault = nil }),
 	)
 }
 

@@ -36,6 +36,6 @@ func registerRoutes() {
 		app.Route("/", newSheet)
 		// Any other path under the site (index.html, a bookmark with a
 		// stray path) opens the same sheet: the query carries the scenario.
-		app.RouteWithRegexp("^/.*", newSheet)
+		routeAnyPath()
 	})
 }

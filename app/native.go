@@ -25,6 +25,10 @@ import (
 	"github.com/maxence-charriere/go-app/v10/pkg/app"
 )
 
+// routeAnyPath routes every path under the site to the sheet (the site
+// writer pre-renders them).
+func routeAnyPath() { app.RouteWithRegexp("^/.*", newSheet) }
+
 // native is the command-line role: write the static site, and serve it
 // when asked.
 func native() {

@@ -38,6 +38,7 @@ type sheet struct {
 	bk       book        // the sheets kept on this device (book.go)
 	ctx      app.Context // the sheet's own context, from OnMount
 	pending  bool        // a write of the sheet is put off (save)
+	edits    int         // edits so far, for save to see a pause
 	install  bool        // the browser offers to install the site (chrome.go)
 }
 
@@ -79,12 +80,18 @@ func newSheet() app.Composer {
 func (s *sheet) OnMount(ctx app.Context) {
 	s.ctx = ctx
 	if app.IsClient {
-		app.Window().Call("addEventListener", "pagehide", app.FuncOf(func(app.Value, []app.Value) any {
-			if s.pending {
-				s.flush()
-			}
-			return nil
-		}))
+		leave := func(hiddenOnly bool) app.Func {
+			return app.FuncOf(func(app.Value, []app.Value) any {
+				doc := app.Window().Get("document")
+				if s.pending && (!hiddenOnly || doc.Get("visibilityState").String() == "hidden") {
+					s.flush()
+				}
+				return nil
+			})
+		}
+		// A phone may end a page in the background without pagehide.
+		app.Window().Call("addEventListener", "pagehide", leave(false))
+		app.Window().Get("document").Call("addEventListener", "visibilitychange", leave(true))
 	}
 	s.watchUpdates(ctx)
 	s.install = installable(ctx)
@@ -158,9 +165,10 @@ func (s *sheet) evaluate() {
 }
 
 // save writes the sheet into the address bar, the saved copy and the site
-// book shortly after an edit, once its answer is on screen: the writes
-// cost an edit about as much as computing it, and a burst of typing needs
-// one write, not one per key. A page being left writes at once (pagehide).
+// book once typing pauses (saveDelay after the last edit), not during a
+// burst: the writes cost about as much as an edit (the address bar's
+// replaceState alone a few ms on a phone) and would delay the next key's
+// answer. A page being left or hidden writes at once (OnMount).
 func (s *sheet) save() {
 	if !app.IsClient {
 		return
@@ -169,24 +177,42 @@ func (s *sheet) save() {
 		s.flush()
 		return
 	}
-	if s.pending {
+	s.edits++
+	if s.pending { // the timer is armed: it waits again for this edit
 		return
 	}
 	s.pending = true
 	app.Window().Set("fieldheadPending", true) // for the browser tests
 	ctx := s.ctx
-	app.Window().Call("setTimeout", once(func(app.Value) {
-		ctx.Dispatch(func(ctx app.Context) {
-			defer s.contain("keeping the sheet")
-			s.flush()
-			if s.vm.View != "book" {
-				ctx.PreventUpdate() // nothing on screen changes
-			} else {
-				s.build() // the book lists the sheet as kept now
-			}
-		})
-	}), 200)
+	var arm func()
+	arm = func() {
+		seen := s.edits
+		app.Window().Call("setTimeout", once(func(app.Value) {
+			ctx.Dispatch(func(ctx app.Context) {
+				defer s.contain("keeping the sheet")
+				if !s.pending { // written meanwhile (pagehide)
+					ctx.PreventUpdate()
+					return
+				}
+				if s.edits != seen { // typed since: wait for the pause
+					arm()
+					ctx.PreventUpdate()
+					return
+				}
+				s.flush()
+				if s.vm.View != "book" {
+					ctx.PreventUpdate() // nothing on screen changes
+				} else {
+					s.build() // the book lists the sheet as kept now
+				}
+			})
+		}), saveDelay)
+	}
+	arm()
 }
+
+// saveDelay is how long, in ms, save waits after the last edit.
+const saveDelay = 400
 
 // flush writes what save put off.
 func (s *sheet) flush() {
@@ -357,12 +383,12 @@ func (s *sheet) Render() (ui app.UI) {
 // goes after the others.
 func (s *sheet) layout() app.UI {
 	vm := &s.vm
-	byID := map[string]present.Card{}
+	byID := make(map[string]present.Card, len(vm.Cards))
 	for _, c := range vm.Cards {
 		byID[c.ID] = c
 	}
-	used := map[string]bool{}
-	cards := func(ids ...string) []app.UI {
+	used := make(map[string]bool, len(vm.Cards))
+	cards := func(ids []string) []app.UI {
 		var out []app.UI
 		for _, id := range ids {
 			if c, ok := byID[id]; ok && !used[id] {
@@ -372,25 +398,22 @@ func (s *sheet) layout() app.UI {
 		}
 		return out
 	}
-	div := func(class string, body ...app.UI) app.UI { return app.Div().Class(class).Body(body...) }
+	var place func(a area) app.UI
+	place = func(a area) app.UI {
+		body := cards(a.cards)
+		for _, in := range a.in {
+			body = append(body, place(in))
+		}
+		return app.Div().Class(a.class).Body(body...)
+	}
 	var root app.UI
-	switch vm.View {
-	case "balance":
-		root = div("layout", div("area-answer", cards("answer-card")...),
-			div("area-inputs", div("points", cards("point-1", "point-2")...), div("stack", cards("between", "liquid")...)),
-			div("area-more", cards("budget")...))
-	case "convert":
-		root = div("layout", div("area-answer", cards("convert-card")...), div("area-inputs", cards("convert-in", "liquid")...))
-	case "regime":
-		// The sizing table is wide: it follows the layout, full width.
-		root = div("layout", div("area-answer", cards("run-answer")...), div("area-inputs", cards("run", "liquid")...))
-	case "line":
-		root = div("stack", div("duo", cards("line-card", "profile-card")...), div("stack", cards("seg-results", "segments")...))
-	case "pump":
-		root = div("stack", div("duo", div("col", cards("operating", "npsh", "turbine", "surge")...), div("col", cards("pump-chart-card", "profile-card")...)),
-			div("duo even", div("col", cards("datasheet-card", "pump-side")...), div("col", cards("pump-setup", "field")...)))
-	default:
-		root = app.Article().Class("report").Body(cards(ids(vm.Cards)...)...)
+	for _, l := range layouts {
+		if l.view == vm.View {
+			root = place(l.area)
+		}
+	}
+	if root == nil {
+		root = app.Article().Class("report").Body(cards(ids(vm.Cards))...)
 	}
 	var rest []string
 	for _, c := range vm.Cards {
@@ -398,7 +421,47 @@ func (s *sheet) layout() app.UI {
 			rest = append(rest, c.ID)
 		}
 	}
-	return app.Div().Body(root, div("stack", cards(rest...)...))
+	return app.Div().Body(root, app.Div().Class("stack").Body(cards(rest)...))
+}
+
+// area is a <div> of a view's arrangement: the cards it holds, then the
+// areas inside it. The arrangements are data, not code: one function
+// drawing them is a fraction of the wasm that a call per area took.
+type area struct {
+	class string
+	cards []string
+	in    []area
+}
+
+// layouts are the views' arrangements; another view (the report, the
+// book) lists its cards in order.
+var layouts = []struct {
+	view string
+	area area
+}{
+	{"balance", area{class: "layout", in: []area{
+		{class: "area-answer", cards: []string{"answer-card"}},
+		{class: "area-inputs", in: []area{
+			{class: "points", cards: []string{"point-1", "point-2"}},
+			{class: "stack", cards: []string{"between", "liquid"}}}},
+		{class: "area-more", cards: []string{"budget"}}}}},
+	{"convert", area{class: "layout", in: []area{
+		{class: "area-answer", cards: []string{"convert-card"}},
+		{class: "area-inputs", cards: []string{"convert-in", "liquid"}}}}},
+	// The run view's sizing table is wide: it follows the layout, full width.
+	{"regime", area{class: "layout", in: []area{
+		{class: "area-answer", cards: []string{"run-answer"}},
+		{class: "area-inputs", cards: []string{"run", "liquid"}}}}},
+	{"line", area{class: "stack", in: []area{
+		{class: "duo", cards: []string{"line-card", "profile-card"}},
+		{class: "stack", cards: []string{"seg-results", "segments"}}}}},
+	{"pump", area{class: "stack", in: []area{
+		{class: "duo", in: []area{
+			{class: "col", cards: []string{"operating", "npsh", "turbine", "surge"}},
+			{class: "col", cards: []string{"pump-chart-card", "profile-card"}}}},
+		{class: "duo even", in: []area{
+			{class: "col", cards: []string{"datasheet-card", "pump-side"}},
+			{class: "col", cards: []string{"pump-setup", "field"}}}}}}},
 }
 
 func ids(cs []present.Card) []string {

@@ -87,11 +87,10 @@ func (s *sheet) updateBanner() app.UI {
 	return app.Div().Class("banner update").ID("update").Attr("role", "status").Body(
 		app.Span().Class("tag").Text("New"),
 		app.Text(" An updated Fieldhead is installed on this device. Switch to it now; this sheet and every input come along. "),
-		app.Button().Type("button").ID("update-reload").Class("act main").Text("Switch to the update").
-			OnClick(func(ctx app.Context, e app.Event) {
-				defer s.contain("reloading for the new version")
-				s.evaluate() // the link and the saved copy hold the latest inputs
-				ctx.Reload()
-			}),
+		act("update-reload", "act main", "Switch to the update", func(ctx app.Context, e app.Event) {
+			defer s.contain("reloading for the new version")
+			s.evaluate() // the link and the saved copy hold the latest inputs
+			ctx.Reload()
+		}),
 	)
 }

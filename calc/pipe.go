@@ -77,12 +77,7 @@ func PipeSizes() []PipeSize {
 // frClassPipes returns the pipes of one canonical class name, a fresh
 // copy of the table built once (every look-up of a size reads it).
 func frClassPipes(sch string) []PipeSize {
-	frBuilt.Do(func() {
-		frByClass = make(map[string][]PipeSize, len(frClasses))
-		for _, c := range frClasses {
-			frByClass[c.name] = frBuildClass(c.name)
-		}
-	})
+	frBuilt.Do(frBuild)
 	rows, ok := frByClass[sch]
 	if !ok {
 		return nil
@@ -90,10 +85,33 @@ func frClassPipes(sch string) []PipeSize {
 	return append([]PipeSize(nil), rows...)
 }
 
+// The tables every look-up reads, built on first use (not at start-up):
+// the pipes by class, each pipe's size as a number (0 when unreadable),
+// and the class names by their frScheduleKey (the first class of a key).
 var (
-	frBuilt   sync.Once
-	frByClass map[string][]PipeSize
+	frBuilt     sync.Once
+	frByClass   map[string][]PipeSize
+	frNPSByCls  map[string][]float64
+	frSchedules map[string]string
 )
+
+func frBuild() {
+	frByClass = make(map[string][]PipeSize, len(frClasses))
+	frNPSByCls = make(map[string][]float64, len(frClasses))
+	frSchedules = make(map[string]string, len(frClasses))
+	for _, c := range frClasses {
+		rows := frBuildClass(c.name)
+		frByClass[c.name] = rows
+		nps := make([]float64, len(rows))
+		for i, p := range rows {
+			nps[i], _ = frNPSValue(p.NPS)
+		}
+		frNPSByCls[c.name] = nps
+		if k := frScheduleKey(c.name); frSchedules[k] == "" {
+			frSchedules[k] = c.name
+		}
+	}
+}
 
 // frBuildClass builds the pipes of one canonical class name.
 func frBuildClass(sch string) []PipeSize {
@@ -133,22 +151,21 @@ func frBuildClass(sch string) []PipeSize {
 // "SDR 11", "type L", "pvc sdr 21") to the canonical class name, or "" if
 // unknown.
 func frNormSchedule(s string) string {
-	n := func(s string) string {
-		t := strings.ToLower(strings.TrimSpace(s))
-		t = strings.NewReplacer(" ", "", ".", "", "-", "", "_", "").Replace(t)
-		for _, p := range []string{"schedule", "sch", "type"} {
-			t = strings.TrimPrefix(t, p)
-		}
-		return t
-	}
-	t := n(s)
-	for _, c := range frClasses {
-		if n(c.name) == t {
-			return c.name
-		}
-	}
-	return ""
+	frBuilt.Do(frBuild)
+	return frSchedules[frScheduleKey(s)]
 }
+
+// frScheduleKey is a class name as frNormSchedule compares it.
+func frScheduleKey(s string) string {
+	t := strings.ToLower(strings.TrimSpace(s))
+	t = frScheduleSeparators.Replace(t)
+	for _, p := range []string{"schedule", "sch", "type"} {
+		t = strings.TrimPrefix(t, p)
+	}
+	return t
+}
+
+var frScheduleSeparators = strings.NewReplacer(" ", "", ".", "", "-", "", "_", "")
 
 // frNPSValue reads a nominal size as a number: "1-1/2", "1 1/2", "1.5",
 // "1½", `8"`, "NPS 8", "8 in"; for PE also "160mm", "DN160", "d160".
@@ -215,7 +232,7 @@ func LookupPipe(nps, schedule string) (PipeSize, error) {
 		}
 		return PipeSize{}, NewFieldError("sch", UnknownChoice).Typed(schedule).OneOf(all...)
 	}
-	pipes := frClassPipes(sch)
+	pipes := frByClass[sch] // built by frNormSchedule; read only
 	size := nps
 	if t := strings.ToLower(strings.TrimSpace(nps)); strings.HasPrefix(t, "dn") && len(pipes) > 0 && pipes[0].DN > 0 {
 		if dn, ok := frNPSValue(t); ok && dn == math.Trunc(dn) {
@@ -223,9 +240,9 @@ func LookupPipe(nps, schedule string) (PipeSize, error) {
 		}
 	}
 	if v, ok := frNPSValue(size); ok {
-		for _, p := range pipes {
-			if w, _ := frNPSValue(p.NPS); w == v {
-				return p, nil
+		for i, w := range frNPSByCls[sch] {
+			if w == v {
+				return pipes[i], nil
 			}
 		}
 	}

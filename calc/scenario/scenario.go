@@ -2,7 +2,6 @@ package scenario
 
 import (
 	"fmt"
-	"hash/crc32"
 	"net/url"
 	"sort"
 	"strings"
@@ -248,7 +247,21 @@ func (s Scenario) Sign() string {
 	return CheckParam + "=" + checksum(q) + "&" + q
 }
 
-func checksum(q string) string { return fmt.Sprintf("%08x", crc32.ChecksumIEEE([]byte(q))) }
+func checksum(q string) string { return fmt.Sprintf("%08x", crc32IEEE(q)) }
+
+// crc32IEEE is CRC-32 with the IEEE polynomial (as hash/crc32's
+// ChecksumIEEE, ISO 3309 / ITU-T V.42), bit by bit: a link is short, and
+// hash/crc32 with its tables is several KB of the wasm.
+func crc32IEEE(s string) uint32 {
+	c := ^uint32(0)
+	for i := 0; i < len(s); i++ {
+		c ^= uint32(s[i])
+		for k := 0; k < 8; k++ {
+			c = c>>1 ^ 0xedb88320&-(c&1)
+		}
+	}
+	return ^c
+}
 
 // DamagedLink is the error of a link that arrived damaged. What was read
 // is kept in the Scenario Parse returns; Read counts its values.

@@ -1,6 +1,7 @@
 package scenario
 
 import (
+	"slices"
 	"strings"
 	"sync"
 	"unicode"
@@ -32,10 +33,42 @@ func DefaultUnit(param string, us bool) string {
 
 // UnitChoices lists unit symbols for a picker beside param, the default
 // first, then every unit of its dimension and the row's ExtraUnits.
+// The list is kept once made: the view model asks for it for every box
+// on every edit. The caller gets its own copy.
 func UnitChoices(param string, us bool) []string {
+	k := unitChoicesKey{param, us}
+	unitChoicesMu.Lock()
+	out, ok := unitChoicesMade[k]
+	unitChoicesMu.Unlock()
+	if !ok {
+		out, ok = unitChoices(param, us)
+		if !ok {
+			return nil
+		}
+		unitChoicesMu.Lock()
+		if unitChoicesMade == nil {
+			unitChoicesMade = map[unitChoicesKey][]string{}
+		}
+		unitChoicesMade[k] = out
+		unitChoicesMu.Unlock()
+	}
+	return slices.Clone(out)
+}
+
+type unitChoicesKey struct {
+	param string
+	us    bool
+}
+
+var (
+	unitChoicesMu   sync.Mutex
+	unitChoicesMade map[unitChoicesKey][]string // only parameters of the vocabulary: bounded
+)
+
+func unitChoices(param string, us bool) ([]string, bool) {
 	p, _, ok := Lookup(param)
 	if !ok || (p.Kind != KindQuantity && p.Kind != KindList) {
-		return nil
+		return nil, false
 	}
 	out := []string{DefaultUnit(param, us)}
 	add := func(sym string) {
@@ -52,7 +85,7 @@ func UnitChoices(param string, us bool) []string {
 	for _, u := range p.ExtraUnits {
 		add(u)
 	}
-	return out
+	return out, true
 }
 
 // Split separates a typed value into its number and its unit text:

@@ -110,15 +110,18 @@ const (
 )
 
 var (
-	siteDir   = flag.String("site", "build/site", "the built site to measure")
-	chromium  = flag.String("chromium", "", "Chromium's path (default: $CHROMIUM, else chromium on $PATH)")
-	loads     = flag.Int("loads", 5, "cold loads and offline reloads to take the median of (at least 5)")
-	edits     = flag.Int("edits", 60, "edits to time (at least 50)")
-	throttle  = flag.Float64("throttle", 4, "CPU slow-down factor for the browser figures")
-	count     = flag.Int("count", 5, "go test -count for the calc benchmarks")
-	benchtime = flag.String("benchtime", "1s", "go test -benchtime for the calc benchmarks")
-	wasmSrc   = flag.String("app", "./app", "the app package, built unstripped to read the wasm's composition")
-	phoneOnly = flag.Bool("phone-only", false, "only the phone-class figures and the sizes (to compare builds quickly)")
+	siteDir    = flag.String("site", "build/site", "the built site to measure")
+	chromium   = flag.String("chromium", "", "Chromium's path (default: $CHROMIUM, else chromium on $PATH)")
+	loads      = flag.Int("loads", 5, "cold loads and offline reloads to take the median of (at least 5)")
+	edits      = flag.Int("edits", 60, "edits to time (at least 50)")
+	throttle   = flag.Float64("throttle", 4, "CPU slow-down factor for the browser figures")
+	count      = flag.Int("count", 5, "go test -count for the calc benchmarks")
+	benchtime  = flag.String("benchtime", "1s", "go test -benchtime for the calc benchmarks")
+	wasmSrc    = flag.String("app", "./app", "the app package, built unstripped to read the wasm's composition")
+	phoneOnly  = flag.Bool("phone-only", false, "only the phone-class figures and the sizes (to compare builds quickly)")
+	editOnly   = flag.Bool("edits-only", false, "only the edit figures, on one loaded page (to compare builds quickly)")
+	partsOf    = flag.String("parts", "", "only list the code of this wasm (built without -s) by package, largest first")
+	profileTop = flag.Int("profile", 0, "with -edits-only: list this many functions of Chromium's CPU profile of the timed edits")
 )
 
 func main() {
@@ -138,6 +141,34 @@ func main() {
 		log.Fatal(err)
 	}
 	defer srv.Close()
+	if *partsOf != "" {
+		mod, err := os.ReadFile(*partsOf)
+		if err != nil {
+			log.Fatal(err)
+		}
+		p, err := analyseWasm(mod)
+		if err != nil {
+			log.Fatal(err)
+		}
+		fmt.Printf("%s: code %.2f MiB, data %.2f MiB, other %.2f MiB\n", *partsOf, mib(p.code), mib(p.data), mib(p.other))
+		for _, l := range p.topPackages(60) {
+			fmt.Println(l)
+		}
+		var fs []string
+		for f := range p.funcs {
+			fs = append(fs, f)
+		}
+		sort.Slice(fs, func(i, j int) bool { return p.funcs[fs[i]] > p.funcs[fs[j]] })
+		fmt.Println("largest functions:")
+		for _, f := range fs[:min(60, len(fs))] {
+			fmt.Printf("%8.1f KiB  %s\n", float64(p.funcs[f])/1024, f)
+		}
+		return
+	}
+	if *editOnly {
+		editsOnly(origin + "/?" + scenario.Demo().Encode())
+		return
+	}
 	var fetched []string
 	if !*phoneOnly {
 		log.Print("calc benchmarks (go test -bench) …")
@@ -368,7 +399,7 @@ const shownJS = `(() => {
 // editJS times edits: keydown → the end of the frame that paints a
 // changed answer, and the phases between: keydown → input event (the
 // browser), input → the answer changed in the DOM (the Go program: the
-// handler, go-app's wait for its next frame, drawing and patching the
+// handler, drawing (at once: our go-app copy no longer waits for a frame tick) and patching the
 // page), → the next animation frame, → that frame painted.
 const editJS = `(() => {
   window.fieldheadEdits = [];
@@ -478,6 +509,21 @@ func (s *browserSession) storedBytes() int {
 		})
 	}
 	return n
+}
+
+// openShown starts a session, opens link and waits for its answer.
+func openShown(link string) *browserSession {
+	s, err := newSession()
+	if err != nil {
+		log.Fatal(err)
+	}
+	if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
+		log.Fatal(err)
+	}
+	if _, err := s.waitShown(); err != nil {
+		log.Fatal(err)
+	}
+	return s
 }
 
 // waitShown waits for the answer on screen and returns the time.
@@ -682,17 +728,8 @@ func (r *report) browser(link, origin string) []string {
 		s.cancel()
 	}
 
-	s, err := newSession()
-	if err != nil {
-		log.Fatal(err)
-	}
+	s := openShown(link)
 	defer s.cancel()
-	if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
-		log.Fatal(err)
-	}
-	if _, err := s.waitShown(); err != nil {
-		log.Fatal(err)
-	}
 	if err := s.waitWorker(); err != nil {
 		log.Fatalf("the service worker never took control: %v", err)
 	}
@@ -730,45 +767,9 @@ func (r *report) browser(link, origin string) []string {
 	}
 
 	// Edits, still offline (the page needs no network to compute).
-	if _, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](editJS)); err != nil {
-		log.Fatal(err)
-	}
-	focus := `(() => { const e = document.getElementById("in-q"); e.focus(); e.setSelectionRange(e.value.length, e.value.length); return e.value; })()`
-	var times []float64
-	for i := 0; i < warmupEdits+*edits; i++ {
-		v, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](focus))
-		if err != nil {
-			log.Fatal(err)
-		}
-		key := kb.Backspace
-		if i%2 == 1 {
-			key = "5"
-		}
-		if i == 0 && v == "" {
-			log.Fatal("the flow box is empty")
-		}
-		if err := chromedp.Do(s.ctx, chromedp.KeyEvent(key)); err != nil {
-			log.Fatal(err)
-		}
-		ctx, cancel := context.WithTimeout(s.ctx, 30*time.Second)
-		_, err = chromedp.Run(ctx, chromedp.Poll[bool](fmt.Sprintf("window.fieldheadEdits.length > %d", i),
-			chromedp.WithPollingInterval(5*time.Millisecond)))
-		cancel()
-		if err != nil {
-			log.Fatalf("edit %d never showed a changed answer: %v", i+1, err)
-		}
-	}
-	all, err := chromedp.Run(s.ctx, chromedp.Evaluate[[]float64]("window.fieldheadEdits"))
-	if err != nil {
-		log.Fatal(err)
-	}
-	times = all[warmupEdits:]
-	phases, err := chromedp.Run(s.ctx, chromedp.Evaluate[[][]float64]("window.fieldheadPhases"))
-	if err != nil || len(phases) != len(all) {
-		log.Fatalf("edit phases: %v", err)
-	}
+	times, phases := timeEdits(s, nil)
 	var mean [4]float64
-	for _, ph := range phases[warmupEdits:] {
+	for _, ph := range phases {
 		for k := range mean {
 			mean[k] += ph[k] / float64(len(times))
 		}
@@ -776,7 +777,7 @@ func (r *report) browser(link, origin string) []string {
 	r.JSON["edit_phases_mean_ms"] = map[string]float64{"keydown_to_input": round1(mean[0]), "input_to_dom": round1(mean[1]),
 		"dom_to_frame": round1(mean[2]), "frame_to_painted": round1(mean[3])}
 	r.notes = append(r.notes, fmt.Sprintf("an edit, on average: keydown → input event %.1f ms (browser); input → answer changed in the DOM %.1f ms "+
-		"(Go: handler and Evaluate, go-app's wait for its next frame (1/120 s), Render and the DOM patch); → next frame %.1f ms; → painted %.1f ms",
+		"(Go: handler, Evaluate and the view model, Render and the DOM patch); → next frame %.1f ms; → painted %.1f ms",
 		mean[0], mean[1], mean[2], mean[3]))
 
 	elements, err := chromedp.Run(s.ctx, chromedp.Evaluate[int]("document.getElementsByTagName('*').length"))
@@ -805,14 +806,60 @@ func (r *report) browser(link, origin string) []string {
 	r.row("edit → updated result p95, ms ("+th+")", f1(p95), "≤ 25", ptr(p95 <= budgetEditP95))
 	if p95 > budgetEditP95 {
 		r.notes = append(r.notes, "edit p95 over budget: an edit runs scenario.Evaluate of the whole sheet (the system and "+
-			"NPSH curves solve the line at 41 flows) and builds the view model, then go-app draws no sooner than its fixed "+
-			"wait for its next frame (1/120 s); cards and inputs are components go-app skips when their part of the view "+
-			"model is unchanged ("+strconv.Itoa(elements)+" elements on the page); the link, the saved copy and the site book "+
-			"are written 200 ms later; the browser's input, frame and paint take about as long again at 4× throttle. "+
+			"NPSH curves only on the views that draw them) and builds the view model, then go-app draws at once; cards and "+
+			"inputs are components go-app skips when their part of the view model is unchanged ("+strconv.Itoa(elements)+
+			" elements on the page), but the sheet's own elements are drawn and compared again; the link, the saved copy and "+
+			"the site book are written once typing pauses (400 ms); the browser's input, frame and paint take about as long "+
+			"again at 4× throttle (bench -edits-only -profile 40 lists where). "+
 			"The figure also moves with the machine's other load.")
 	}
 	_ = origin
 	return fetched
+}
+
+// timeEdits types *edits keys (after warmupEdits not counted) into the
+// flow box and returns each edit's time and phases (see editJS). between,
+// when not nil, runs after the warm-up edits (to start a profiler).
+func timeEdits(s *browserSession, between func()) (times []float64, phases [][]float64) {
+	if _, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](editJS)); err != nil {
+		log.Fatal(err)
+	}
+	focus := `(() => { const e = document.getElementById("in-q"); e.focus(); e.setSelectionRange(e.value.length, e.value.length); return e.value; })()`
+	for i := 0; i < warmupEdits+*edits; i++ {
+		if i == warmupEdits && between != nil {
+			between()
+		}
+		v, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](focus))
+		if err != nil {
+			log.Fatal(err)
+		}
+		key := kb.Backspace
+		if i%2 == 1 {
+			key = "5"
+		}
+		if i == 0 && v == "" {
+			log.Fatal("the flow box is empty")
+		}
+		if err := chromedp.Do(s.ctx, chromedp.KeyEvent(key)); err != nil {
+			log.Fatal(err)
+		}
+		ctx, cancel := context.WithTimeout(s.ctx, 30*time.Second)
+		_, err = chromedp.Run(ctx, chromedp.Poll[bool](fmt.Sprintf("window.fieldheadEdits.length > %d", i),
+			chromedp.WithPollingInterval(5*time.Millisecond)))
+		cancel()
+		if err != nil {
+			log.Fatalf("edit %d never showed a changed answer: %v", i+1, err)
+		}
+	}
+	all, err := chromedp.Run(s.ctx, chromedp.Evaluate[[]float64]("window.fieldheadEdits"))
+	if err != nil {
+		log.Fatal(err)
+	}
+	ph, err := chromedp.Run(s.ctx, chromedp.Evaluate[[][]float64]("window.fieldheadPhases"))
+	if err != nil || len(ph) != len(all) {
+		log.Fatalf("edit phases: %v", err)
+	}
+	return all[warmupEdits:], ph[warmupEdits:]
 }
 
 // sizes measures the wasm and every file a first visit fetches.

@@ -26,6 +26,7 @@ type wasmParts struct {
 	code     int            // code section
 	other    int            // everything else (types, imports, names, …)
 	packages map[string]int // code bytes per Go package
+	funcs    map[string]int // code bytes per function
 }
 
 // readUvarint reads an unsigned LEB128.
@@ -121,8 +122,10 @@ func analyseWasm(mod []byte) (wasmParts, error) {
 	if len(names) == 0 {
 		return p, errors.New("no function names: build without -ldflags=-s to see the packages")
 	}
+	p.funcs = map[string]int{}
 	for i, size := range bodies {
 		p.packages[goPackage(names[imported+i])] += size
+		p.funcs[names[imported+i]] += size
 	}
 	return p, nil
 }

@@ -1,8 +1,9 @@
 package present
 
 import (
-	"encoding/csv"
 	"strings"
+	"unicode"
+	"unicode/utf8"
 
 	"fieldhead/calc"
 	"fieldhead/calc/scenario"
@@ -137,7 +138,6 @@ func problemList(r scenario.Result) string {
 // is the last column. A figure a sheet does not have is left empty.
 func ResultsCSV(sheets []scenario.Scenario, us bool) string {
 	var b strings.Builder
-	w := csv.NewWriter(&b)
 	head := make([]string, 0, len(csvColumns)+1)
 	units := make([]calc.Unit, len(csvColumns))
 	for i, c := range csvColumns {
@@ -153,7 +153,7 @@ func ResultsCSV(sheets []scenario.Scenario, us bool) string {
 		head = append(head, h)
 	}
 	head = append(head, "link")
-	_ = w.Write(head)
+	writeCSV(&b, head)
 	for _, s := range sheets {
 		r := scenario.Evaluate(s)
 		row := make([]string, 0, len(head))
@@ -169,8 +169,38 @@ func ResultsCSV(sheets []scenario.Scenario, us bool) string {
 			}
 		}
 		row = append(row, s.Sign())
-		_ = w.Write(row)
+		writeCSV(&b, row)
 	}
-	w.Flush()
 	return b.String()
+}
+
+// writeCSV writes one record as encoding/csv's Writer does with its
+// defaults (comma, "\n" after each record; a field quoted when it holds
+// a comma, a quote, a line break or starts with a space, or is \.),
+// without that package and bufio in the wasm.
+func writeCSV(b *strings.Builder, fields []string) {
+	for i, f := range fields {
+		if i > 0 {
+			b.WriteByte(',')
+		}
+		if !csvNeedsQuotes(f) {
+			b.WriteString(f)
+			continue
+		}
+		b.WriteByte('"')
+		b.WriteString(strings.ReplaceAll(f, `"`, `""`))
+		b.WriteByte('"')
+	}
+	b.WriteByte('\n')
+}
+
+func csvNeedsQuotes(f string) bool {
+	if f == "" {
+		return false
+	}
+	if f == `\.` || strings.ContainsAny(f, ",\"\r\n") {
+		return true
+	}
+	r, _ := utf8.DecodeRuneInString(f)
+	return unicode.IsSpace(r)
 }

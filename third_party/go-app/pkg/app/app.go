@@ -134,20 +134,6 @@ func Route(path string, newComponent func() Composer) {
 	routes.route(path, newComponent)
 }
 
-// RouteWithRegexp associates a URL path pattern with a function that generates
-// a new Composer component. When a user navigates to a URL path that matches
-// the given regular expression pattern, the function newComponent is invoked to
-// create and mount the associated component.
-//
-// Example:
-//
-//	RouteWithRegexp("^/users/[0-9]+$", func() Composer {
-//	    return NewUserComponent()
-//	})
-func RouteWithRegexp(pattern string, newComponent func() Composer) {
-	routes.routeWithRegexp(pattern, newComponent)
-}
-
 // NewZeroComponentFactory returns a function that, when invoked, creates and
 // returns a new instance of the same type as the provided component. The new
 // instance is initialized with zero values for all its fields.

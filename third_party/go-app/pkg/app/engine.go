@@ -241,11 +241,23 @@ func (e *engineX) Start(framerate int) {
 	for {
 		select {
 		case dispatch := <-e.dispatches:
+			dispatch()
+			// Fieldhead: draw at once when nothing else is queued, rather
+			// than on the next tick of the fixed frame (an edit waited up
+			// to 1/framerate s for it); a burst of dispatches still makes
+			// one frame.
+			if len(e.dispatches) == 0 {
+				e.processFrame()
+				if currentFrameDuration != iddleFrameDuration {
+					frames.Reset(iddleFrameDuration)
+					currentFrameDuration = iddleFrameDuration
+				}
+				continue
+			}
 			if currentFrameDuration != activeFrameDuration {
 				frames.Reset(activeFrameDuration)
 				currentFrameDuration = activeFrameDuration
 			}
-			dispatch()
 
 		case <-frames.C:
 			e.processFrame()

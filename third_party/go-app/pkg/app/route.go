@@ -1,7 +1,6 @@
 package app
 
 import (
-	"regexp"
 	"sync"
 )
 
@@ -22,16 +21,6 @@ func (r *router) route(path string, newComponent func() Composer) {
 	defer r.mu.Unlock()
 
 	r.routes[path] = newComponent
-}
-
-func (r *router) routeWithRegexp(pattern string, newComponent func() Composer) {
-	r.mu.Lock()
-	defer r.mu.Unlock()
-
-	r.routesWithRegexp = append(r.routesWithRegexp, regexpRoute{
-		regexp:       regexp.MustCompile(pattern),
-		newComponent: newComponent,
-	})
 }
 
 func (r *router) routed(path string) bool {
@@ -69,6 +58,6 @@ func (r *router) createComponent(path string) (Composer, bool) {
 }
 
 type regexpRoute struct {
-	regexp       *regexp.Regexp
+	regexp       interface{ MatchString(string) bool } // Fieldhead: *regexp.Regexp, set in route_regexp.go
 	newComponent func() Composer
 }

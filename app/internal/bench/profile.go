@@ -1,0 +1,189 @@
+//go:build !wasm
+
+package main
+
+import (
+	"fmt"
+	"log"
+	"os"
+	"sort"
+	"strconv"
+	"strings"
+
+	"github.com/chromedp/cdproto/cdp"
+	"github.com/chromedp/cdproto/profiler"
+	"github.com/chromedp/chromedp"
+)
+
+// editsOnly is -edits-only: one page load, then the timed edits, and
+// with -profile Chromium's sampling profile of the timed edits, the
+// functions that took the most time listed by their own time (the
+// wasm's functions are named when the site's wasm keeps its name
+// section: build it without -s for this).
+func editsOnly(link string) {
+	s := openShown(link)
+	defer s.cancel()
+	start := func() {
+		if *profileTop <= 0 {
+			return
+		}
+		if _, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](mutationsJS)); err != nil {
+			log.Fatal(err)
+		}
+		if _, err := chromedp.Call(s.ctx, profiler.Enable, cdp.Empty{}); err != nil {
+			log.Fatal(err)
+		}
+		if _, err := chromedp.Call(s.ctx, profiler.SetSamplingInterval, profiler.SetSamplingIntervalParams{Interval: 100}); err != nil {
+			log.Fatal(err)
+		}
+		if _, err := chromedp.Call(s.ctx, profiler.Start, cdp.Empty{}); err != nil {
+			log.Fatal(err)
+		}
+	}
+	var cpu0 float64
+	times, phases := timeEdits(s, func() { start(); cpu0 = rendererCPU(s.profile) })
+	cpu := rendererCPU(s.profile) - cpu0
+	var mean [4]float64
+	for _, ph := range phases {
+		for k := range mean {
+			mean[k] += ph[k] / float64(len(times))
+		}
+	}
+	fmt.Printf("edits %d, %g× CPU: p10 %.1f ms, p50 %.1f ms, p95 %.1f ms; phases (mean ms): keydown→input %.1f, input→DOM %.1f, DOM→frame %.1f, frame→painted %.1f\n",
+		len(times), *throttle, percentile(times, 10), percentile(times, 50), percentile(times, 95), mean[0], mean[1], mean[2], mean[3])
+	fmt.Printf("renderer CPU time per edit (unthrottled, less sensitive to the machine's load): %.1f ms\n", cpu/float64(len(times)))
+	if *profileTop <= 0 {
+		return
+	}
+	res, err := chromedp.Call(s.ctx, profiler.Stop, cdp.Empty{})
+	if err != nil {
+		log.Fatal(err)
+	}
+	printProfile(res.Profile, *profileTop)
+	muts, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](`JSON.stringify(Object.entries(window.fieldheadMutations).sort((a, b) => b[1] - a[1]).slice(0, 40))`))
+	if err != nil {
+		log.Fatal(err)
+	}
+	regions, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](`[...document.querySelectorAll("#sheet > *, #sheet > main > *, section.card")].map(e => e.tagName.toLowerCase() + "." + e.className.split(" ")[0] + (e.id ? "#" + e.id : "") + ": " + e.getElementsByTagName("*").length).join("\\n")`))
+	if err != nil {
+		log.Fatal(err)
+	}
+	fmt.Printf("\nelements under each part of the page:\n%s\n", regions)
+	fmt.Printf("\nDOM mutations during the timed edits (kind, where: count):\n%s\n", strings.ReplaceAll(muts, "],[", "]\n["))
+}
+
+// mutationsJS counts the page's DOM mutations by kind and place.
+const mutationsJS = `(() => {
+  window.fieldheadMutations = {};
+  const where = (n) => {
+    const e = n.nodeType === 1 ? n : n.parentElement;
+    if (!e) return "?";
+    const card = e.closest("section");
+    return e.tagName.toLowerCase() + (e.id ? "#" + e.id : "") + (card ? " in " + card.id : "");
+  };
+  new MutationObserver((rs) => {
+    for (const r of rs) {
+      const k = r.type + (r.attributeName ? ":" + r.attributeName : "") + " " + where(r.target);
+      window.fieldheadMutations[k] = (window.fieldheadMutations[k] || 0) + 1;
+    }
+  }).observe(document.body, {childList: true, subtree: true, characterData: true, attributes: true});
+  return "";
+})()`
+
+// printProfile lists the functions with the most samples at the top of
+// the stack (self) and, for the same names, anywhere on it (total).
+func printProfile(p *profiler.Profile, top int) {
+	byID := map[int64]*profiler.ProfileNode{}
+	parent := map[int64]int64{}
+	for _, n := range p.Nodes {
+		byID[n.ID] = n
+		for _, c := range n.Children {
+			parent[c] = n.ID
+		}
+	}
+	name := func(n *profiler.ProfileNode) string {
+		f := n.CallFrame.FunctionName
+		if f == "" {
+			f = "(anonymous)"
+		}
+		u := n.CallFrame.URL
+		if i := strings.LastIndex(u, "/"); i >= 0 {
+			u = u[i+1:]
+		}
+		if u != "" && !strings.HasSuffix(u, ".wasm") {
+			f += " [" + u + "]"
+		}
+		return f
+	}
+	self := map[string]float64{}
+	total := map[string]float64{}
+	var all float64
+	for i, id := range p.Samples {
+		dt := 0.0
+		if i+1 < len(p.TimeDeltas) {
+			dt = float64(p.TimeDeltas[i+1]) / 1000
+		}
+		n := byID[id]
+		all += dt
+		self[name(n)] += dt
+		seen := map[string]bool{}
+		for cur, ok := id, true; ok; cur, ok = parent[cur] {
+			k := name(byID[cur])
+			if !seen[k] {
+				seen[k] = true
+				total[k] += dt
+			}
+		}
+	}
+	type row struct {
+		k    string
+		v, t float64
+	}
+	rows := func(m map[string]float64) []row {
+		var out []row
+		for k, v := range m {
+			out = append(out, row{k, v, total[k]})
+		}
+		sort.Slice(out, func(i, j int) bool { return out[i].v > out[j].v })
+		if len(out) > top {
+			out = out[:top]
+		}
+		return out
+	}
+	fmt.Fprintf(os.Stdout, "profile: %.0f ms sampled\nself ms   total ms  function\n", all)
+	for _, r := range rows(self) {
+		fmt.Printf("%8.1f  %8.1f  %s\n", r.v, r.t, r.k)
+	}
+	fmt.Printf("\nby total:\n")
+	for _, r := range rows(total) {
+		fmt.Printf("%8.1f  %8.1f  %s\n", self[r.k], r.v, r.k)
+	}
+}
+
+// rendererCPU is the CPU time, in ms, the renderer processes of the
+// Chromium using profile have taken so far (Linux: /proc).
+func rendererCPU(profile string) float64 {
+	var total float64
+	dirs, _ := os.ReadDir("/proc")
+	for _, d := range dirs {
+		if d.Name()[0] < '0' || d.Name()[0] > '9' {
+			continue
+		}
+		cmd, err := os.ReadFile("/proc/" + d.Name() + "/cmdline")
+		if err != nil || !strings.Contains(string(cmd), "--type=renderer") || !strings.Contains(string(cmd), profile) {
+			continue
+		}
+		st, err := os.ReadFile("/proc/" + d.Name() + "/stat")
+		if err != nil {
+			continue
+		}
+		f := strings.Fields(string(st[strings.LastIndexByte(string(st), ')')+1:]))
+		if len(f) < 13 {
+			continue
+		}
+		ut, _ := strconv.ParseFloat(f[11], 64)
+		stt, _ := strconv.ParseFloat(f[12], 64)
+		total += (ut + stt) * 10 // clock ticks of 10 ms (USER_HZ 100)
+	}
+	return total
+}
