@@ -259,10 +259,10 @@ func (e *eval) liquid() {
 		}
 		if p < psat {
 			if from == LiquidTyped {
-				e.record(calc.FieldErrorf("pl", "the line pressure %v absolute is below the vapour pressure of the liquid at %v (%v): it would boil", calc.Fig(p, calc.Pressure), calc.Fig(t, calc.Temperature), calc.Fig(psat, calc.Pressure)))
+				e.bad("pl", calc.BelowLimit).Got(calc.Fig(p, calc.Pressure)).AtLeast(calc.Fig(psat, calc.Pressure)).Because(calc.ReasonBoils, calc.Fig(t, calc.Temperature))
 				return
 			}
-			e.warn("t", "liquid", "the water is at or above its boiling point at the pressure taken for its properties; they are taken at the saturation pressure")
+			e.warnCalc("liquid", calc.Warn("t", calc.CautionBoilingAtLine, calc.Fig(p, calc.Pressure), calc.Fig(psat, calc.Pressure)))
 			p, from = psat, LiquidSaturation
 		}
 		props := calc.Water
@@ -275,8 +275,8 @@ func (e *eval) liquid() {
 			if errors.As(err, &fe) && fe.Field == "p" {
 				c := *fe
 				c.Field = "pl"
-				if from != LiquidTyped {
-					c.Msg += "; this is the mean of the points' pressures: state the line pressure"
+				if from != LiquidTyped && c.Reason == calc.ReasonBoils {
+					c.Reason = calc.ReasonPointsMean
 				}
 				e.record(&c)
 				return
@@ -329,7 +329,7 @@ func (e *eval) linePressure() (float64, LiquidSource, bool) {
 			p += site
 		}
 		if !(p > 0) {
-			e.fail("pl", "pl: the line pressure must be above zero absolute")
+			e.bad("pl", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
 			return 0, 0, false
 		}
 		return p, LiquidTyped, true
