@@ -11,7 +11,7 @@ import (
 // Warning.Figures.
 type Caution uint16
 
-// The cautions. CautionText: Text holds a sentence (the deprecated Warnf).
+// The cautions. CautionText: no code, Text holds the words (none is built so).
 const (
 	CautionText Caution = iota
 

@@ -95,23 +95,6 @@ func (e *eval) bad(param string, k calc.Kind) *calc.FieldError {
 	return fe
 }
 
-// fail records a problem with a parameter as a sentence (KindOther); msg
-// may start with the parameter's name ("q: …"), which is dropped.
-//
-// Deprecated: use bad with a Kind (worded in present/errors.go); kept so
-// that code written against it still compiles.
-func (e *eval) fail(param, msg string) {
-	e.record(&calc.FieldError{Field: param, Kind: calc.KindOther, Msg: strings.TrimPrefix(msg, param+": ")})
-}
-
-// warn records a warning as a sentence.
-//
-// Deprecated: use warnCalc with a calc.Caution (worded in
-// present/errors.go); kept so that code written against it still compiles.
-func (e *eval) warn(param, topic, text string) {
-	e.res.Warnings = append(e.res.Warnings, Warning{Param: param, Topic: topic, Text: text})
-}
-
 // recordOther records an error that is not a *calc.FieldError (none is
 // expected) under param, its Go text kept as a last resort.
 func (e *eval) recordOther(param string, err error) {

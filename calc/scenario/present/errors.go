@@ -421,7 +421,7 @@ func (w wording) kindText() string {
 		}
 		return t + w.got()
 	}
-	return fe.Words(w.fig) // a sentence of the deprecated FieldErrorf
+	return fe.Words(w.fig) // a last-resort text (KindOther)
 }
 
 // reasonWords words the specific cases.

@@ -96,7 +96,7 @@ func TestErrorTextNamesAndUnits(t *testing.T) {
 		{calc.NewFieldError("hours", calc.OutOfRange).Got(calc.Num(9000)).Within(calc.Num(0), calc.Num(8784)), false,
 			"the running hours per year must be from 0 to 8784; got 9000"},
 		{calc.NewFieldError("units", calc.UnknownChoice).Typed("imperial"), false, `"imperial" is not one of the choices (use si or us)`},
-		{calc.FieldErrorf("q", "flow %v is odd", calc.Fig(0.045, calc.Flow)), true, "flow " + scenario.Show(0.045, calc.Flow, true) + " is odd"},
+		{&calc.FieldError{Field: "q", Msg: "flow \uE0000; is odd", Figures: []calc.Figure{calc.Fig(0.045, calc.Flow)}}, true, "flow " + scenario.Show(0.045, calc.Flow, true) + " is odd"},
 	} {
 		if got := ErrorText(c.fe, c.us); got != c.want {
 			t.Errorf("%v (us %v):\n got %q\nwant %q", c.fe, c.us, got, c.want)
