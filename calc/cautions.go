@@ -11,7 +11,7 @@ import (
 // Warning.Figures.
 type Caution uint16
 
-// The cautions. CautionText: Text holds a sentence (the deprecated Warnf).
+// The cautions. CautionText: no code, Text holds the words (none is built so).
 const (
 	CautionText Caution = iota
 
@@ -77,6 +77,28 @@ const (
 	CautionNoAccuracy          // no instrument accuracy is given: the verdict takes every reading as exact
 	CautionGradeNeedsSheet     // the acceptance grade needs the data sheet's head at the measured flow
 	CautionConvertBelowZero    // the value converted is at or below absolute zero pressure
+
+	// High points and the pump's inlet on a line of segments: Figures[0]
+	// the segment, Figures[1] 1 at its end or 0 at its start, Figures[2]
+	// the distance from point 1, Figures[3] the elevation; then as listed.
+	CautionInletBreaks      // the grade line falls below the vapour-pressure line at the pump's inlet; full only up to Figures[4], not the balance's Figures[5]
+	CautionInletBreaksStill // the grade line is below the vapour-pressure line at the pump's inlet even with no flow
+	CautionInletSuction     // the grade line is Figures[4] below the pipe crown at the pump's inlet: below atmospheric
+	CautionHighPointBreaks  // the grade line falls below the vapour-pressure line at a high point; full only up to Figures[4], not the balance's Figures[5]
+	CautionHighPointStill   // the grade line is below the vapour-pressure line at a high point even with no flow
+	CautionHighPointAir     // the grade line is Figures[4] below the pipe crown at a high point: below atmospheric
+
+	// The surge estimate.
+	CautionSurgeNoLength    // the line has no length: any closure counts as slow
+	CautionSurgeSlow        // the closure Figures[0] is slower than the round trip Figures[1]: Joukowsky's Figures[2] is an upper bound
+	CautionSurgeColumnParts // the low swing reaches the vapour pressure: the column may part
+	CautionSurgeDvAboveFlow // the velocity change Figures[0] is larger than the flow velocity at the valve Figures[1]
+
+	// The liquid.
+	CautionBoilingAtLine    // the water boils at the pressure taken for its properties (Figures[0], absolute); taken at the saturation pressure Figures[1]
+	CautionGlycolSlip       // a glycol share Figures[0] (a share) protects against almost no frost; Figures[1] the share probably meant
+	CautionGlycolBoiling    // the glycol mix boils at the site pressure; its properties are taken at its vapour pressure
+	CautionGlycolInhibitors // commercial glycols differ from the pure mixes computed (recalled constants)
 	cautionEnd
 )
 
@@ -151,6 +173,20 @@ var cautionNames = [...]string{"text",
 	"no accuracy",
 	"grade needs sheet",
 	"convert below zero",
+	"inlet breaks",
+	"inlet breaks still",
+	"inlet suction",
+	"high point breaks",
+	"high point still",
+	"high point air",
+	"surge no length",
+	"surge slow",
+	"surge column parts",
+	"surge dv above flow",
+	"boiling at line",
+	"glycol slip",
+	"glycol boiling",
+	"glycol inhibitors",
 }
 
 // Warn builds a Warning about field of caution c quoting figs.

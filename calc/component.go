@@ -75,25 +75,40 @@ type ComponentLoss struct {
 	Pressure float64 // Pa
 }
 
-// check validates the component. Errors are *FieldError for field "cmp".
+// check validates the component. Errors are *FieldError for field "cmp",
+// Input the component's name.
 func (c Component) check() error {
 	bad := func(v float64) bool { return math.IsNaN(v) || math.IsInf(v, 0) || v > componentMax }
+	// limit reports a value that is not above zero (or, with neg, is
+	// negative) or is beyond componentMax.
+	limit := func(r Reason, k Kind, v Figure) *FieldError {
+		if v.Value > componentMax || math.IsInf(v.Value, 1) {
+			k = AboveLimit
+		}
+		fe := NewFieldError("cmp", k).Typed(c.Name).Got(v).Because(r)
+		if k == AboveLimit {
+			fe.AtMost(Figure{componentMax, v.Dim})
+		}
+		return fe
+	}
 	switch c.Kind {
 	case ComponentRated:
 		switch {
 		case bad(c.RatedFlow) || !(c.RatedFlow > 0):
-			return fieldErrorf("cmp", "%s: the rated flow must be above zero", c.Name)
-		case bad(c.RatedDrop) || bad(c.RatedHead) || c.RatedDrop < 0 || c.RatedHead < 0:
-			return fieldErrorf("cmp", "%s: the rated drop must not be negative", c.Name)
+			return limit(ReasonComponentFlow, NotPositive, Fig(c.RatedFlow, Flow))
+		case bad(c.RatedDrop) || c.RatedDrop < 0:
+			return limit(ReasonComponentDrop, Negative, Fig(c.RatedDrop, Pressure))
+		case bad(c.RatedHead) || c.RatedHead < 0:
+			return limit(ReasonComponentDrop, Negative, Fig(c.RatedHead, Length))
 		case c.RatedDrop > 0 && c.RatedHead > 0:
-			return fieldErrorf("cmp", "%s: give the rated drop as a pressure or as a head, not both", c.Name)
+			return NewFieldError("cmp", Inconsistent).Typed(c.Name).Because(ReasonComponentDropBoth)
 		}
 	case ComponentValve:
 		if bad(c.Kv) || !(c.Kv > 0) {
-			return fieldErrorf("cmp", "%s: the valve's Cv or Kv must be above zero (a shut valve passes no flow)", c.Name)
+			return limit(ReasonValveCoefficient, NotPositive, Num(c.Kv))
 		}
 	default:
-		return fieldErrorf("cmp", "%s: unknown kind of component", c.Name)
+		return NewFieldError("cmp", UnknownChoice).Typed(c.Name).Because(ReasonComponentKind)
 	}
 	return nil
 }
@@ -106,7 +121,7 @@ func (c Component) Loss(rho, q float64) (ComponentLoss, error) {
 		return ComponentLoss{}, err
 	}
 	if !(rho > 0) || math.IsInf(rho, 0) {
-		return ComponentLoss{}, fieldErrorf("rho", "the density must be above zero")
+		return ComponentLoss{}, NewFieldError("rho", NotPositive).Got(Fig(rho, Density))
 	}
 	rhog := rho * StandardGravity
 	out := ComponentLoss{Name: c.Name}

@@ -77,23 +77,35 @@ func TestComponentLoss(t *testing.T) {
 // the component, never a loss.
 func TestComponentBadInput(t *testing.T) {
 	tests := []struct {
-		name string
-		c    Component
-		msg  string
+		name   string
+		c      Component
+		kind   Kind
+		reason Reason
 	}{
-		{"a Cv of 0", Component{Name: "valve", Kind: ComponentValve}, "above zero"},
-		{"a negative Kv", Component{Name: "valve", Kind: ComponentValve, Kv: -3}, "above zero"},
-		{"a negative rated drop", Component{Name: "coil", RatedDrop: -5e3, RatedFlow: 0.01}, "negative"},
-		{"a rated flow of 0", Component{Name: "coil", RatedDrop: 5e3}, "rated flow"},
-		{"a NaN drop", Component{Name: "coil", RatedDrop: math.NaN(), RatedFlow: 0.01}, "negative"},
-		{"both a pressure and a head", Component{Name: "coil", RatedDrop: 5e3, RatedHead: 1, RatedFlow: 0.01}, "not both"},
+		{"a Cv of 0", Component{Name: "valve", Kind: ComponentValve}, NotPositive, ReasonValveCoefficient},
+		{"a negative Kv", Component{Name: "valve", Kind: ComponentValve, Kv: -3}, NotPositive, ReasonValveCoefficient},
+		{"a Kv beyond any valve", Component{Name: "valve", Kind: ComponentValve, Kv: 2e9}, AboveLimit, ReasonValveCoefficient},
+		{"a negative rated drop", Component{Name: "coil", RatedDrop: -5e3, RatedFlow: 0.01}, Negative, ReasonComponentDrop},
+		{"a negative rated head", Component{Name: "coil", RatedHead: -1, RatedFlow: 0.01}, Negative, ReasonComponentDrop},
+		{"a rated flow of 0", Component{Name: "coil", RatedDrop: 5e3}, NotPositive, ReasonComponentFlow},
+		{"a NaN drop", Component{Name: "coil", RatedDrop: math.NaN(), RatedFlow: 0.01}, Negative, ReasonComponentDrop},
+		{"both a pressure and a head", Component{Name: "coil", RatedDrop: 5e3, RatedHead: 1, RatedFlow: 0.01}, Inconsistent, ReasonComponentDropBoth},
+		{"no kind", Component{Name: "pump", Kind: 9}, UnknownChoice, ReasonComponentKind},
 	}
 	for _, tt := range tests {
 		_, err := tt.c.Loss(1000, 0.01)
 		fe, ok := err.(*FieldError)
-		if !ok || fe.Field != "cmp" || !strings.Contains(fe.Msg, tt.msg) || !strings.Contains(fe.Msg, tt.c.Name) {
-			t.Errorf("%s: %v", tt.name, err)
+		if !ok || fe.Field != "cmp" || fe.Kind != tt.kind || fe.Reason != tt.reason || fe.Input != tt.c.Name {
+			t.Errorf("%s: %v, want cmp %v (%v) naming %q", tt.name, err, tt.kind, tt.reason, tt.c.Name)
 		}
+	}
+	// the value given is kept, in SI with its dimension
+	_, err := Component{Name: "coil", RatedDrop: -5e3, RatedFlow: 0.01}.Loss(1000, 0.01)
+	if fe, ok := err.(*FieldError); !ok || fe.Value == nil || *fe.Value != Fig(-5e3, Pressure) {
+		t.Errorf("a negative rated drop: %v, want the value -5 kPa kept", err)
+	}
+	if _, err := (Component{Name: "coil", RatedDrop: 5e3, RatedFlow: 0.01}).Loss(0, 0.01); err == nil || err.(*FieldError).Field != "rho" || err.(*FieldError).Kind != NotPositive {
+		t.Errorf("a density of 0: %v, want rho not positive", err)
 	}
 }
 

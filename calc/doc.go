@@ -122,7 +122,6 @@
 // involved as Figures (SI value and dimension). The view model words it in
 // the reader's units (calc/scenario/present/errors.go); Error is a terse
 // line in SI for Go callers. Build errors with NewFieldError and its
-// methods; fieldErrorf and FieldErrorf, which hold a sentence, are
-// deprecated. Warnings are data the same way: a Warning's Code (a
-// Caution) and Figures; Warnf and warnf are deprecated.
+// methods. Warnings are data the same way: a Warning's Code (a Caution)
+// and Figures, built with Warn.
 package calc

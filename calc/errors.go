@@ -2,7 +2,6 @@ package calc
 
 import (
 	"errors"
-	"fmt"
 	"strconv"
 	"strings"
 )
@@ -35,10 +34,10 @@ type FieldError struct {
 	// value; UnitDim that of the unit typed, for WrongDimension.
 	Dim, UnitDim Dimension
 
-	// Msg is the sentence of an error built by the deprecated FieldErrorf
-	// (Kind KindOther), with a mark for each of Figures.
-	//
-	// Deprecated: build errors with NewFieldError and its methods.
+	// Msg is the text of an error of Kind KindOther: the Go text of an
+	// error that was not a *FieldError, kept as a last resort (scenario's
+	// recordOther), with a mark for each of Figures if it quotes any.
+	// Build errors with NewFieldError and its methods.
 	Msg string
 }
 
@@ -48,7 +47,7 @@ type Kind uint8
 
 // The kinds of input error.
 const (
-	KindOther       Kind = iota // a sentence of the deprecated FieldErrorf (Msg)
+	KindOther       Kind = iota // a last-resort text (Msg) of an error that was not a *FieldError
 	Missing                     // no value was given and one is needed
 	NotANumber                  // Input is not a number
 	NotFinite                   // Input (or the value computed from it) is not a finite number
@@ -151,7 +150,7 @@ func (e *FieldError) Given(n int) *FieldError { e.Count = n; return e }
 // InSegment records the 1-based segment of a line.
 func (e *FieldError) InSegment(n int) *FieldError { e.Segment = n; return e }
 
-// figureMark stands for figure i in a deprecated message: a private-use
+// figureMark stands for figure i in a KindOther message: a private-use
 // character and the index, which no input can put there (links refuse
 // control and private-use characters are never typed into a number).
 const figureMark = '\uE000'
@@ -203,51 +202,10 @@ func (e *FieldError) Error() string {
 	return b.String()
 }
 
-// Words writes Msg, the sentence of a deprecated KindOther error, with each
+// Words writes Msg, the text of a KindOther error, with each
 // figure written by show; "" for a structured error.
 func (e *FieldError) Words(show func(Figure) string) string {
 	return wordFigures(e.Msg, e.Figures, show)
-}
-
-// fieldErrorf builds a *FieldError of KindOther holding a sentence.
-//
-// Deprecated: use NewFieldError; kept so that code written against it
-// still compiles. TestNoSentencesInErrors lists its remaining uses.
-func fieldErrorf(field, format string, args ...any) error {
-	return FieldErrorf(field, format, args...)
-}
-
-// FieldErrorf builds a *FieldError of KindOther holding a sentence; Figure
-// arguments (formatted with %v) become its Figures.
-//
-// Deprecated: use NewFieldError; kept so that code written against it
-// still compiles. TestNoSentencesInErrors lists its remaining uses. To
-// convert one: "x must be positive, got %v" is
-// NewFieldError(f, NotPositive).Got(Fig(x, dim)); "must be between %v and
-// %v; got %v" is OutOfRange with Got and Within; "unknown %q; expected one
-// of …" is UnknownChoice with Typed and OneOf; the range of a published
-// method is OutsideValidity; a case the kind does not cover gets a Reason
-// in reasons.go (its figures listed in its comment) and a wording in
-// calc/scenario/present/errors.go.
-func FieldErrorf(field, format string, args ...any) *FieldError {
-	msg, figs := sprintFigures(format, args)
-	return &FieldError{Field: field, Kind: KindOther, Msg: msg, Figures: figs}
-}
-
-// sprintFigures formats a message, replacing each Figure argument by its
-// mark.
-func sprintFigures(format string, args []any) (string, []Figure) {
-	var figs []Figure
-	out := make([]any, len(args))
-	for i, a := range args {
-		if f, ok := a.(Figure); ok {
-			out[i] = string(figureMark) + strconv.Itoa(len(figs)) + ";"
-			figs = append(figs, f)
-			continue
-		}
-		out[i] = a
-	}
-	return fmt.Sprintf(format, out...), figs
 }
 
 // wordFigures replaces the marks of msg by the figures written by show.
@@ -280,8 +238,9 @@ func wordFigures(msg string, figs []Figure, show func(Figure) string) string {
 // Segment is the 1-based segment of a line it is about (0 none), Field
 // then being that segment's field ("d", "z"). Code says what it is about
 // and Figures holds the figures it quotes (SI, with their dimension); the
-// view model words it. A warning of CautionText (the deprecated Warnf)
-// holds a sentence in Text, with a mark for each of Figures.
+// view model words it. A warning of CautionText (no Code) holds a text in
+// Text, with a mark for each of Figures; nothing in calc or calc/scenario
+// builds one any more (TestNoSentencesInWarnings).
 type Warning struct {
 	Field   string
 	Segment int
@@ -289,22 +248,6 @@ type Warning struct {
 	Text    string
 	Figures []Figure
 }
-
-// Warnf builds a Warning of CautionText holding a sentence; Figure
-// arguments (formatted with %v) become its Figures.
-//
-// Deprecated: use Warn with a Caution (in cautions.go, worded in
-// calc/scenario/present/errors.go); kept so that code written against it
-// still compiles.
-func Warnf(field, format string, args ...any) Warning {
-	t, figs := sprintFigures(format, args)
-	return Warning{Field: field, Text: t, Figures: figs}
-}
-
-// warnf is Warnf, for this package's own use.
-//
-// Deprecated: use Warn.
-func warnf(field, format string, args ...any) Warning { return Warnf(field, format, args...) }
 
 // Words writes the text of a CautionText warning with each figure written
 // by show; "" for a coded one.

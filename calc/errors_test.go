@@ -101,8 +101,9 @@ func TestFieldErrorData(t *testing.T) {
 	if _, err := Parse("q", strings.Repeat("z", 500), Flow, ""); err == nil || len(err.Error()) > 120 {
 		t.Errorf("long input: %v", err)
 	}
-	// The deprecated constructor still works, as KindOther with its sentence.
-	if e := FieldErrorf("q", "flow %v is odd", Fig(0.045, Flow)); e.Kind != KindOther || e.Error() != "q: flow 45.00 L/s is odd" {
-		t.Errorf("FieldErrorf: %q", e.Error())
+	// A last-resort KindOther text keeps its words, its figures in SI
+	// (45 L/s = 0.045 m³/s).
+	if e := (&FieldError{Field: "q", Msg: "flow \uE0000; is odd", Figures: []Figure{Fig(0.045, Flow)}}); e.Error() != "q: flow 45.00 L/s is odd" {
+		t.Errorf("KindOther: %q", e.Error())
 	}
 }

@@ -34,7 +34,7 @@ const darbyDMin = 6.84e-3
 // NPS 1/8 bore, and finite (field "d").
 func DarbyNominalSize(d float64) (float64, error) {
 	if math.IsNaN(d) || math.IsInf(d, 0) || d < darbyDMin {
-		return 0, fieldErrorf("d", "Darby's 3-K method takes the nominal size from the schedule 40 bores, from %g mm (NPS 1/8); got an inside diameter of %g m", darbyDMin*1e3, d)
+		return 0, NewFieldError("d", BelowLimit).Got(Fig(d, Length)).AtLeast(Fig(darbyDMin, Length)).Because(ReasonDarbySize)
 	}
 	mm := d * 1e3
 	n := len(darbyBore)

@@ -102,7 +102,7 @@ const glycolWaterMolar = 18.015268e-3
 
 func (g Glycol) data() (glycolData, error) {
 	if g != EthyleneGlycol && g != PropyleneGlycol {
-		return glycolData{}, fieldErrorf("glycol", "the glycol must be ethylene or propylene glycol")
+		return glycolData{}, NewFieldError("glycol", UnknownChoice).Typed(g.String()).OneOf(EthyleneGlycol.String(), PropyleneGlycol.String())
 	}
 	return glycols[g], nil
 }
@@ -114,7 +114,7 @@ func glycolPercent(f float64) string {
 
 func glycolCheckShare(w float64) error {
 	if !(w >= 0 && w <= GlycolMaxMassFraction) {
-		return fieldErrorf("w", "the glycol share must be between 0 and %s by mass; got %s", glycolPercent(GlycolMaxMassFraction), glycolPercent(w))
+		return NewFieldError("w", OutOfRange).Got(Num(w)).Within(Num(0), Num(GlycolMaxMassFraction)).Because(ReasonGlycolMass)
 	}
 	return nil
 }
@@ -169,7 +169,7 @@ func GlycolMassFraction(g Glycol, phi float64) (float64, error) {
 	}
 	maxPhi, _ := GlycolVolumeFraction(g, GlycolMaxMassFraction)
 	if !(phi >= 0 && phi <= maxPhi*(1+1e-12)) {
-		return 0, fieldErrorf("phi", "the glycol share must be between 0 and %s by volume (%s by mass); got %s", glycolPercent(maxPhi), glycolPercent(GlycolMaxMassFraction), glycolPercent(phi))
+		return 0, NewFieldError("phi", OutOfRange).Got(Num(phi)).Within(Num(0), Num(maxPhi)).Because(ReasonGlycolVolume, Num(GlycolMaxMassFraction))
 	}
 	mg := phi * d.rho20
 	return math.Min(mg/(mg+(1-phi)*glycolWater20()), GlycolMaxMassFraction), nil
@@ -208,16 +208,16 @@ func GlycolMix(g Glycol, w, tK, pPa float64) (Fluid, error) {
 	tf := 273.15 + glycolFreeze(d, w)
 	switch {
 	case math.IsNaN(tK) || tK > GlycolMaxTemperature+waterTempSlack:
-		return Fluid{}, fieldErrorf("t", "a glycol mix's temperature must be between its freezing point and %v; got %v", Fig(GlycolMaxTemperature, Temperature), Fig(tK, Temperature))
+		return Fluid{}, NewFieldError("t", OutOfRange).Got(Fig(tK, Temperature)).Within(Fig(tf, Temperature), Fig(GlycolMaxTemperature, Temperature)).Because(ReasonGlycolTemperature)
 	case tK < tf-1e-9:
-		return Fluid{}, fieldErrorf("t", "%s %s by mass freezes at %v: the temperature %v is below it (a stronger mix, or a warmer liquid, is needed)", glycolPercent(w), g, Fig(tf, Temperature), Fig(tK, Temperature))
+		return Fluid{}, NewFieldError("t", BelowLimit).Got(Fig(tK, Temperature)).AtLeast(Fig(tf, Temperature)).Typed(g.String()).Because(ReasonGlycolFreezes, Num(w))
 	case tK > GlycolMaxTemperature:
 		tK = GlycolMaxTemperature
 	}
 	tw := math.Max(tK, WaterMinTemperature) // water's formulations are not taken below 0 °C
 	pv := glycolWaterMoleFraction(d, w) * if97SaturationPressureCore(tw)
 	if math.IsNaN(pPa) || pPa < pv || pPa > GlycolMaxPressure {
-		return Fluid{}, fieldErrorf("p", "absolute pressure for the glycol mix must be between its vapour pressure (%v at %v) and %v; got %v", Fig(pv, Pressure), Fig(tK, Temperature), Fig(GlycolMaxPressure, Pressure), Fig(pPa, Pressure))
+		return Fluid{}, NewFieldError("p", OutOfRange).Got(Fig(pPa, Pressure)).Within(Fig(pv, Pressure), Fig(GlycolMaxPressure, Pressure)).Because(ReasonBoils, Fig(tK, Temperature))
 	}
 	pw := math.Max(pPa, if97SaturationPressureCore(tw))
 	rhoW := if97Region1DensityCore(tw, pw)

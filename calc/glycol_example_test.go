@@ -28,5 +28,5 @@ func ExampleGlycolMix_frozen() {
 	_, err := calc.GlycolMix(calc.EthyleneGlycol, 0.20, 273.15-10, 101325)
 	fmt.Println(err)
 	// Output:
-	// t: 20 % ethylene glycol by mass freezes at -7.900 °C: the temperature -10.00 °C is below it (a stronger mix, or a warmer liquid, is needed)
+	// t: below limit (glycol freezes) input="ethylene glycol" value=-10.00 °C min=-7.900 °C f0=0.2000
 }

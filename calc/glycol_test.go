@@ -182,8 +182,10 @@ func TestGlycolErrors(t *testing.T) {
 	}
 	// the message for a mix below its freezing point quotes it
 	err := glycolErr(GlycolMix(PropyleneGlycol, 0.3, 273.15-13, 101325))
-	if got := err.Error(); got != "t: 30 % propylene glycol by mass freezes at -12.70 °C: the temperature -13.00 °C is below it (a stronger mix, or a warmer liquid, is needed)" {
-		t.Errorf("message: %s", got)
+	var fe *FieldError
+	if !errors.As(err, &fe) || fe.Kind != BelowLimit || fe.Reason != ReasonGlycolFreezes || fe.Input != "propylene glycol" ||
+		fe.Value == nil || fe.Min == nil || math.Abs(fe.Min.Value-(273.15-12.70)) > 0.005 || len(fe.Figures) != 1 || fe.Figures[0] != Num(0.3) {
+		t.Errorf("below its freezing point: %v, want the freezing point -12.70 °C and the share 30 %%", err)
 	}
 }
 

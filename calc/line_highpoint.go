@@ -149,30 +149,25 @@ func (b Balance) fullFlow(r *BalanceResult) (q float64, ok bool) {
 func highPointWarnings(hps []HighPoint, q, fq float64, fok bool) []Warning {
 	var out []Warning
 	for _, hp := range hps {
-		where := "start"
+		at := Num(0)
 		if hp.AtEnd {
-			where = "end"
+			at = Num(1)
 		}
+		place := []Figure{Num(float64(hp.Segment)), at, Fig(hp.Distance, Length), Fig(hp.Z, Length)}
 		var w Warning
 		switch {
 		case hp.AtPump && hp.Breaks && fok:
-			w = warnf("z", "at the pump's inlet, the end of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line, so the pressure there would be below the liquid's vapour pressure — the column breaks and the pump cavitates. The suction side stays full only up to %v, not the %v of the balance; raise the supply, enlarge or shorten the suction line, move losses to the delivery side or set the pump lower",
-				hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(fq, Flow), Fig(q, Flow))
+			w = Warn("z", CautionInletBreaks, append(place, Fig(fq, Flow), Fig(q, Flow))...)
 		case hp.AtPump && hp.Breaks:
-			w = warnf("z", "at the pump's inlet, the end of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line even with no flow — the column breaks and the pump cannot prime or run; set the pump lower or raise the supply",
-				hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length))
+			w = Warn("z", CautionInletBreaksStill, place...)
 		case hp.AtPump:
-			w = warnf("z", "at the pump's inlet, the end of segment %d (%v from point 1, elevation %v): the hydraulic grade line is %v below the pipe crown, so the suction is below atmospheric pressure: air leaks in at joints and seals; check the NPSH on the Pump view",
-				hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(hp.BelowCrown, Length))
+			w = Warn("z", CautionInletSuction, append(place, Fig(hp.BelowCrown, Length))...)
 		case hp.Breaks && fok:
-			w = warnf("z", "high point at the %s of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line, so the pressure there would be below the liquid's vapour pressure — the column breaks (vapour pockets, a siphon that stops, cavitation and hammer when it rejoins). The pipe runs full only up to %v (with the surplus head taken by a valve at point 2), not the %v of the balance; lower the pipe, reduce the losses upstream or raise the pressure",
-				where, hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(fq, Flow), Fig(q, Flow))
+			w = Warn("z", CautionHighPointBreaks, append(place, Fig(fq, Flow), Fig(q, Flow))...)
 		case hp.Breaks:
-			w = warnf("z", "high point at the %s of segment %d (%v from point 1, elevation %v): the hydraulic grade line falls below the vapour-pressure line even with no flow — the column breaks, the pipe cannot run full past it at any flow; lower the pipe or raise the pressure upstream",
-				where, hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length))
+			w = Warn("z", CautionHighPointStill, place...)
 		default:
-			w = warnf("z", "high point at the %s of segment %d (%v from point 1, elevation %v): the hydraulic grade line is %v below the pipe crown, so the pipe is below atmospheric pressure there: an air valve would draw air in and dissolved air comes out; keeping the grade line above the pipe is common practice",
-				where, hp.Segment, Fig(hp.Distance, Length), Fig(hp.Z, Length), Fig(hp.BelowCrown, Length))
+			w = Warn("z", CautionHighPointAir, append(place, Fig(hp.BelowCrown, Length))...)
 		}
 		w.Segment = hp.Segment
 		out = append(out, w)

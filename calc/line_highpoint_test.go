@@ -2,7 +2,6 @@ package calc
 
 import (
 	"math"
-	"strings"
 	"testing"
 )
 
@@ -10,7 +9,8 @@ import (
 func highPointWarns(r BalanceResult) []Warning {
 	var out []Warning
 	for _, w := range r.Warnings {
-		if strings.HasPrefix(w.Text, "high point") {
+		switch w.Code {
+		case CautionHighPointBreaks, CautionHighPointStill, CautionHighPointAir:
 			out = append(out, w)
 		}
 	}
@@ -125,8 +125,10 @@ func TestHighPointBelowCrown(t *testing.T) {
 	}
 	// The HGL at the crest: no flow to speak of, so about the level of
 	// point 1; the crown is 2 m + D/2 above it.
-	if hp := r.HighPoints[0]; math.Abs(hp.BelowCrown-2.1) > 0.01 || !strings.Contains(ws[0].Text, "below the pipe crown") {
-		t.Errorf("below crown %v: %s", hp.BelowCrown, ws[0].Text)
+	if hp := r.HighPoints[0]; math.Abs(hp.BelowCrown-2.1) > 0.01 || ws[0].Code != CautionHighPointAir || len(ws[0].Figures) != 5 ||
+		ws[0].Figures[0] != Num(1) || ws[0].Figures[1] != Num(1) || ws[0].Figures[2] != Fig(10, Length) || ws[0].Figures[3] != Fig(2, Length) ||
+		ws[0].Figures[4] != Fig(hp.BelowCrown, Length) {
+		t.Errorf("below crown %v: %v", hp.BelowCrown, ws[0])
 	}
 }
 
@@ -151,7 +153,10 @@ func TestHighPointAtPumpInlet(t *testing.T) {
 	}
 	found := false
 	for _, w := range r.Warnings {
-		found = found || strings.HasPrefix(w.Text, "at the pump's inlet, the end of segment 1")
+		// the end of segment 1, 300 m from point 1 at elevation 0, full
+		// only up to the full-pipe flow, not the balance's 30 L/s
+		found = found || w.Code == CautionInletBreaks && w.Segment == 1 && len(w.Figures) == 6 && w.Figures[0] == Num(1) &&
+			w.Figures[2] == Fig(300, Length) && w.Figures[3] == Fig(0, Length) && w.Figures[4] == Fig(r.FullFlow, Flow) && w.Figures[5] == Fig(0.03, Flow)
 	}
 	if !found {
 		t.Errorf("warnings %+v", r.Warnings)

@@ -93,6 +93,44 @@ const (
 	ReasonSpeedReference // Missing: a speed in Input's unit needs Other to compare with
 	ReasonTitle          // AboveLimit: the title must be plain text of at most Max characters
 	ReasonPumpsCount     // UnknownChoice: pumps working together: 1, or a count and p or s
+
+	// The line pressure.
+	ReasonPointsMean // BelowLimit, OutOfRange: as ReasonBoils, the pressure being the mean of the points' pressures: state the line pressure
+
+	// Components (field "cmp"): Input is the component's name, or
+	// "name:text" with the text that could not be read.
+	ReasonComponentFlow     // NotPositive, AboveLimit: the rated flow (Value) of component Input
+	ReasonComponentDrop     // Negative, AboveLimit: the rated drop (Value, a pressure or a head) of component Input
+	ReasonComponentDropBoth // Inconsistent: component Input's rated drop is given both as a pressure and as a head
+	ReasonValveCoefficient  // NotPositive, AboveLimit: a valve's Cv or Kv (Value, a Kv) must be above zero
+	ReasonComponentKind     // UnknownChoice: component Input is of no known kind
+	ReasonComponentSyntax   // UnknownChoice: item Input is not name:drop@flow or name:cv… / name:kv…
+	ReasonComponentName     // AboveLimit: component name Input has more than Max characters
+	ReasonComponentSpec     // UnknownChoice: "name:spec" Input is neither drop@flow nor cv… / kv…
+	ReasonValveNumber       // NotANumber: "name:spec" Input: the number after cv or kv
+	ReasonComponentValue    // NoUnit, NotANumber, UnknownUnit: "name:text" Input, the drop (Dim Pressure) or the rated flow (Dim Flow)
+
+	// Fittings by Darby's 3-K method.
+	ReasonDarbySize // BelowLimit: the inside diameter (Value) below the smallest schedule 40 bore Darby's nominal size is taken from (Min)
+
+	// Glycol mixes: shares are mass or volume fractions (0.3).
+	ReasonGlycolMass        // OutOfRange: the glycol share by mass (Value) from Min to Max
+	ReasonGlycolVolume      // OutOfRange: the glycol share by volume (Value) from Min to Max; Figures[0] the largest share by mass
+	ReasonGlycolTemperature // OutOfRange: a glycol mix's temperature (Value) from its freezing point (Min) to Max
+	ReasonGlycolFreezes     // BelowLimit: the mix of Input (a glycol) at share by mass Figures[0] freezes at Min; the temperature is Value
+
+	// The surge estimate.
+	ReasonThinWall       // AboveLimit: a wall (Value) of at least half the inside diameter Figures[0]
+	ReasonRestraint      // OutOfRange: the restraint factor (Value) above Min and at most Max, near 1
+	ReasonSurgePipe      // Missing: the surge needs the pipe between the points
+	ReasonNoFlowToStop   // Missing: there is no flow to stop at the valve
+	ReasonSurgeUnbounded // NotFinite: the surge is beyond any number; Figures[0] the velocity change
+	ReasonVelocityChange // NotPositive: a velocity change given must be above zero (blank: the whole flow velocity)
+	ReasonBulkModulus    // NotPositive: a liquid's bulk modulus; Figures[0] water's near 20 °C
+	ReasonBulkUnknown    // Missing: the bulk modulus is known only for water and seawater
+	ReasonWallModulus    // NotPositive: a pipe wall's elastic modulus; Figures[0] steel's, Figures[1] PE's
+	ReasonSurgeWall      // Missing: the wall thickness (or a nominal size and schedule) for the surge
+	ReasonSurgeModulus   // Missing: the wall's elastic modulus (or the pipe's material) for the surge
 	reasonEnd
 )
 
@@ -186,6 +224,33 @@ var reasonNames = [...]string{"none",
 	"speed reference",
 	"title",
 	"pumps count",
+	"points mean",
+	"component flow",
+	"component drop",
+	"component drop both",
+	"valve coefficient",
+	"component kind",
+	"component syntax",
+	"component name",
+	"component spec",
+	"valve number",
+	"component value",
+	"darby size",
+	"glycol mass",
+	"glycol volume",
+	"glycol temperature",
+	"glycol freezes",
+	"thin wall",
+	"restraint",
+	"surge pipe",
+	"no flow to stop",
+	"surge unbounded",
+	"velocity change",
+	"bulk modulus",
+	"bulk unknown",
+	"wall modulus",
+	"surge wall",
+	"surge modulus",
 }
 
 // countErr reports n items where min to max are accepted (TooFew or

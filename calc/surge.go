@@ -99,10 +99,10 @@ func WaveSpeed(k, rho, d, wall, e, c float64) (float64, error) {
 		return 0, err
 	}
 	if !(k > 0) || math.IsInf(k, 0) {
-		return 0, fieldErrorf("kliq", "the liquid's bulk modulus must be above zero; got %v", Fig(k, Pressure))
+		return 0, NewFieldError("kliq", NotPositive).Got(Fig(k, Pressure))
 	}
 	if !(rho > 0) || math.IsInf(rho, 0) {
-		return 0, fieldErrorf("rho", "the density must be above zero; got %v", Fig(rho, Density))
+		return 0, NewFieldError("rho", NotPositive).Got(Fig(rho, Density))
 	}
 	return waveSpeed(k, rho, d, wall, e, c), nil
 }
@@ -116,15 +116,15 @@ func waveSpeed(k, rho, d, wall, e, c float64) float64 {
 func checkSurgePipe(d, wall, e, c float64) error {
 	switch {
 	case !(d > 0) || math.IsInf(d, 0):
-		return fieldErrorf("d", "the inside diameter must be above zero; got %v", Fig(d, Length))
+		return NewFieldError("d", NotPositive).Got(Fig(d, Length))
 	case !(wall > 0) || math.IsInf(wall, 0):
-		return fieldErrorf("wall", "the wall thickness must be above zero; got %v", Fig(wall, Length))
+		return NewFieldError("wall", NotPositive).Got(Fig(wall, Length))
 	case wall >= d/2:
-		return fieldErrorf("wall", "a wall thickness of %v is not a pipe of inside diameter %v: the thin-wall wave speed needs a wall well under half the diameter", Fig(wall, Length), Fig(d, Length))
+		return NewFieldError("wall", AboveLimit).Got(Fig(wall, Length)).Because(ReasonThinWall, Fig(d, Length))
 	case !(e > 0):
-		return fieldErrorf("epipe", "the pipe wall's elastic modulus must be above zero; got %v", Fig(e, Pressure))
+		return NewFieldError("epipe", NotPositive).Got(Fig(e, Pressure))
 	case !(c > 0 && c <= surgeMaxRestraint):
-		return fieldErrorf("cr", "the restraint factor must be above 0 and at most %g (near 1: 1 with expansion joints, 1 − ν² anchored throughout); got %g", surgeMaxRestraint, c)
+		return NewFieldError("cr", OutOfRange).Got(Num(c)).Within(Num(0), Num(surgeMaxRestraint)).Because(ReasonRestraint)
 	}
 	return nil
 }
@@ -145,19 +145,19 @@ func checkSurgePipe(d, wall, e, c float64) error {
 // Segment when there are several.
 func (s Surge) Evaluate() (SurgeResult, error) {
 	if len(s.Pipes) == 0 {
-		return SurgeResult{}, fieldErrorf("q", "the surge needs the pipe between the points: describe the run or the line")
+		return SurgeResult{}, NewFieldError("q", Missing).Because(ReasonSurgePipe)
 	}
 	if !(s.ClosureTime > 0) || math.IsInf(s.ClosureTime, 0) {
-		return SurgeResult{}, fieldErrorf("tc", "the closure time must be above zero; got %v", Fig(s.ClosureTime, Duration))
+		return SurgeResult{}, NewFieldError("tc", NotPositive).Got(Fig(s.ClosureTime, Duration))
 	}
 	if math.IsNaN(s.DeltaV) || s.DeltaV < 0 || math.IsInf(s.DeltaV, 0) {
-		return SurgeResult{}, fieldErrorf("dv", "the velocity change must be above zero; got %v", Fig(s.DeltaV, Velocity))
+		return SurgeResult{}, NewFieldError("dv", Negative).Got(Fig(s.DeltaV, Velocity))
 	}
 	if !(s.BulkModulus > 0) || math.IsInf(s.BulkModulus, 0) {
-		return SurgeResult{}, fieldErrorf("kliq", "the liquid's bulk modulus must be above zero; got %v", Fig(s.BulkModulus, Pressure))
+		return SurgeResult{}, NewFieldError("kliq", NotPositive).Got(Fig(s.BulkModulus, Pressure))
 	}
 	if !(s.Density > 0) || math.IsInf(s.Density, 0) {
-		return SurgeResult{}, fieldErrorf("rho", "the density must be above zero; got %v", Fig(s.Density, Density))
+		return SurgeResult{}, NewFieldError("rho", NotPositive).Got(Fig(s.Density, Density))
 	}
 	r := SurgeResult{}
 	for i, p := range s.Pipes {
@@ -172,7 +172,7 @@ func (s Surge) Evaluate() (SurgeResult, error) {
 			return SurgeResult{}, err
 		}
 		if !(p.Length >= 0) || math.IsInf(p.Length, 0) {
-			return SurgeResult{}, fieldErrorf("length", "the length must not be negative; got %v", Fig(p.Length, Length))
+			return SurgeResult{}, NewFieldError("length", Negative).Got(Fig(p.Length, Length))
 		}
 		a := waveSpeed(s.BulkModulus, s.Density, p.Diameter, p.Wall, p.Modulus, c)
 		r.WaveSpeeds = append(r.WaveSpeeds, a)
@@ -186,28 +186,28 @@ func (s Surge) Evaluate() (SurgeResult, error) {
 		r.DeltaV = math.Abs(last.Velocity)
 	}
 	if !(r.DeltaV > 0) {
-		return SurgeResult{}, fieldErrorf("dv", "there is no flow to stop at the valve: give the flow, or the velocity change")
+		return SurgeResult{}, NewFieldError("dv", Missing).Because(ReasonNoFlowToStop)
 	}
 	r.DeltaP = s.Density * r.WaveSpeed * r.DeltaV
 	r.DeltaH = r.WaveSpeed * r.DeltaV / StandardGravity
 	if math.IsInf(r.DeltaP+s.Static, 0) || math.IsInf(r.Period, 0) {
-		return SurgeResult{}, fieldErrorf("dv", "these figures give a surge beyond any number: check the velocity change (%v), the moduli and the closure time", Fig(r.DeltaV, Velocity))
+		return SurgeResult{}, NewFieldError("dv", NotFinite).Because(ReasonSurgeUnbounded, Fig(r.DeltaV, Velocity))
 	}
 	r.Fast = s.ClosureTime <= r.Period
 	r.Peak = s.Static + r.DeltaP
 	r.Low = s.Static - r.DeltaP
 	r.ColumnParts = r.Low <= s.VapourPressure
 	if r.Length == 0 {
-		r.Warnings = append(r.Warnings, warnf("tc", "the line has no length: the wave's round trip is zero and any closure counts as slow"))
+		r.Warnings = append(r.Warnings, Warn("tc", CautionSurgeNoLength))
 	}
 	if !r.Fast {
-		r.Warnings = append(r.Warnings, warnf("tc", "the closure (%v) is slower than the wave's round trip 2L/a (%v): the rise is smaller than Joukowsky's %v, which is then an upper bound; only a transient analysis of the valve's closing curve gives the actual figure", Fig(s.ClosureTime, Duration), Fig(r.Period, Duration), Fig(r.DeltaP, Pressure)))
+		r.Warnings = append(r.Warnings, Warn("tc", CautionSurgeSlow, Fig(s.ClosureTime, Duration), Fig(r.Period, Duration), Fig(r.DeltaP, Pressure)))
 	}
 	if r.ColumnParts {
-		r.Warnings = append(r.Warnings, warnf("tc", "the low swing after the closure reaches the vapour pressure: the liquid column may part and rejoin with a blow larger than Joukowsky's figure"))
+		r.Warnings = append(r.Warnings, Warn("tc", CautionSurgeColumnParts))
 	}
 	if last.Velocity != 0 && s.DeltaV > math.Abs(last.Velocity)*1.0001 {
-		r.Warnings = append(r.Warnings, warnf("dv", "the velocity change (%v) is larger than the flow velocity at the valve (%v)", Fig(s.DeltaV, Velocity), Fig(math.Abs(last.Velocity), Velocity)))
+		r.Warnings = append(r.Warnings, Warn("dv", CautionSurgeDvAboveFlow, Fig(s.DeltaV, Velocity), Fig(math.Abs(last.Velocity), Velocity)))
 	}
 	return r, nil
 }

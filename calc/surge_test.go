@@ -187,7 +187,8 @@ func TestSurgeSlowClosureAndColumn(t *testing.T) {
 	}
 	found := false
 	for _, w := range slow.Warnings {
-		found = found || (w.Field == "tc" && strings.Contains(w.Text, "upper bound"))
+		found = found || (w.Field == "tc" && w.Code == CautionSurgeSlow && len(w.Figures) == 3 && w.Figures[0] == Fig(s.ClosureTime, Duration) &&
+			w.Figures[1] == Fig(slow.Period, Duration) && w.Figures[2] == Fig(slow.DeltaP, Pressure))
 	}
 	if !found {
 		t.Errorf("no upper-bound warning for a slow closure: %v", slow.Warnings)

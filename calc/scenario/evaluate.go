@@ -96,23 +96,6 @@ func (e *eval) bad(param string, k calc.Kind) *calc.FieldError {
 	return fe
 }
 
-// fail records a problem with a parameter as a sentence (KindOther); msg
-// may start with the parameter's name ("q: …"), which is dropped.
-//
-// Deprecated: use bad with a Kind (worded in present/errors.go); kept so
-// that code written against it still compiles.
-func (e *eval) fail(param, msg string) {
-	e.record(&calc.FieldError{Field: param, Kind: calc.KindOther, Msg: strings.TrimPrefix(msg, param+": ")})
-}
-
-// warn records a warning as a sentence.
-//
-// Deprecated: use warnCalc with a calc.Caution (worded in
-// present/errors.go); kept so that code written against it still compiles.
-func (e *eval) warn(param, topic, text string) {
-	e.res.Warnings = append(e.res.Warnings, Warning{Param: param, Topic: topic, Text: text})
-}
-
 // recordOther records an error that is not a *calc.FieldError (none is
 // expected) under param, its Go text kept as a last resort.
 func (e *eval) recordOther(param string, err error) {
@@ -260,10 +243,10 @@ func (e *eval) liquid() {
 		}
 		if p < psat {
 			if from == LiquidTyped {
-				e.record(calc.FieldErrorf("pl", "the line pressure %v absolute is below the vapour pressure of the liquid at %v (%v): it would boil", calc.Fig(p, calc.Pressure), calc.Fig(t, calc.Temperature), calc.Fig(psat, calc.Pressure)))
+				e.bad("pl", calc.BelowLimit).Got(calc.Fig(p, calc.Pressure)).AtLeast(calc.Fig(psat, calc.Pressure)).Because(calc.ReasonBoils, calc.Fig(t, calc.Temperature))
 				return
 			}
-			e.warn("t", "liquid", "the water is at or above its boiling point at the pressure taken for its properties; they are taken at the saturation pressure")
+			e.warnCalc("liquid", calc.Warn("t", calc.CautionBoilingAtLine, calc.Fig(p, calc.Pressure), calc.Fig(psat, calc.Pressure)))
 			p, from = psat, LiquidSaturation
 		}
 		props := calc.Water
@@ -276,8 +259,8 @@ func (e *eval) liquid() {
 			if errors.As(err, &fe) && fe.Field == "p" {
 				c := *fe
 				c.Field = "pl"
-				if from != LiquidTyped {
-					c.Msg += "; this is the mean of the points' pressures: state the line pressure"
+				if from != LiquidTyped && c.Reason == calc.ReasonBoils {
+					c.Reason = calc.ReasonPointsMean
 				}
 				e.record(&c)
 				return
@@ -330,7 +313,7 @@ func (e *eval) linePressure() (float64, LiquidSource, bool) {
 			p += site
 		}
 		if !(p > 0) {
-			e.fail("pl", "pl: the line pressure must be above zero absolute")
+			e.bad("pl", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
 			return 0, 0, false
 		}
 		return p, LiquidTyped, true

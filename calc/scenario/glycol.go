@@ -2,7 +2,6 @@ package scenario
 
 import (
 	"errors"
-	"strconv"
 
 	"fieldhead/calc"
 )
@@ -37,7 +36,7 @@ func (e *eval) glycol(liq string) {
 		return
 	}
 	if meant, slip := calc.FractionSlip(v); slip {
-		e.warn(share, "liquid", "a glycol share of "+strconv.FormatFloat(v*100, 'g', 3, 64)+" % protects against almost no frost: if a fraction was typed, the share meant is probably "+strconv.FormatFloat(meant, 'g', 3, 64)+" %")
+		e.warnCalc("liquid", calc.Warn(share, calc.CautionGlycolSlip, calc.Num(v), calc.Num(meant/100)))
 	}
 	mix.FreezingPoint, _ = calc.GlycolFreezingPoint(g, mix.MassFraction)
 	e.res.Glycol = mix
@@ -54,7 +53,7 @@ func (e *eval) glycol(liq string) {
 		// boiling at the site pressure: as for water, the properties are
 		// taken at the mix's vapour pressure, with a warning
 		pv, _ := calc.GlycolMix(g, mix.MassFraction, t, calc.GlycolMaxPressure)
-		e.warn("t", "liquid", "the glycol mix is at or above its boiling point at the site pressure; its properties are taken at its vapour pressure")
+		e.warnCalc("liquid", calc.Warn("t", calc.CautionGlycolBoiling))
 		fl, err = calc.GlycolMix(g, mix.MassFraction, t, pv.VapourPressure)
 	}
 	if err != nil {
@@ -62,5 +61,5 @@ func (e *eval) glycol(liq string) {
 		return
 	}
 	e.res.Fluid, e.res.LiquidFrom = &fl, LiquidSite
-	e.warn("liq", "liquid", "commercial glycols carry inhibitors and dyes and differ from the pure mixes computed here, whose constants are recalled values (from memory): the maker's data sheet governs density, viscosity and freezing point")
+	e.warnCalc("liquid", calc.Warn("liq", calc.CautionGlycolInhibitors))
 }

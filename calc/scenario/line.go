@@ -87,8 +87,9 @@ const componentNameMax = 40
 // Errors are *calc.FieldError for field "cmp" naming the item.
 func ParseComponents(text string) ([]calc.Component, error) {
 	var out []calc.Component
-	bad := func(format string, args ...any) error {
-		return &calc.FieldError{Field: "cmp", Msg: fmt.Sprintf(format, args...)}
+	// bad reports the text of component name that could not be read.
+	bad := func(k calc.Kind, r calc.Reason, name, text string) error {
+		return calc.NewFieldError("cmp", k).Typed(name + ":" + text).Because(r)
 	}
 	for _, item := range strings.Split(text, ",") {
 		item = strings.TrimSpace(item)
@@ -98,10 +99,10 @@ func ParseComponents(text string) ([]calc.Component, error) {
 		name, spec, ok := strings.Cut(item, ":")
 		name, spec = strings.TrimSpace(name), strings.TrimSpace(spec)
 		if !ok || name == "" || strings.Contains(name, "@") {
-			return nil, bad("%q: write each component as name:drop@flow (chiller:45kPa@12L/s) or name:cv25 / name:kv40, separated by commas (decimals with a point)", item)
+			return nil, calc.NewFieldError("cmp", calc.UnknownChoice).Typed(item).Because(calc.ReasonComponentSyntax)
 		}
 		if len([]rune(name)) > componentNameMax {
-			return nil, bad("%q: a component's name has at most %d characters", name, componentNameMax)
+			return nil, calc.NewFieldError("cmp", calc.AboveLimit).Typed(name).AtMost(calc.Num(componentNameMax)).Because(calc.ReasonComponentName)
 		}
 		c := calc.Component{Name: name}
 		low := strings.ToLower(spec)
@@ -109,7 +110,7 @@ func ParseComponents(text string) ([]calc.Component, error) {
 		case strings.HasPrefix(low, "cv") || strings.HasPrefix(low, "kv"):
 			v, err := strconv.ParseFloat(strings.TrimSpace(spec[2:]), 64)
 			if err != nil {
-				return nil, bad("%s: the valve's %s must be a number, as in %s:%s25", name, strings.ToUpper(low[:1])+"v", name, low[:2])
+				return nil, bad(calc.NotANumber, calc.ReasonValveNumber, name, spec)
 			}
 			c.Kind, c.Kv = calc.ComponentValve, v
 			if low[0] == 'c' {
@@ -117,13 +118,13 @@ func ParseComponents(text string) ([]calc.Component, error) {
 			}
 		case strings.Contains(spec, "@"):
 			dropText, flowText, _ := strings.Cut(spec, "@")
-			drop, dim, err := componentValue(dropText, "drop", calc.Pressure, calc.Length)
+			drop, dim, err := componentValue(name, dropText, calc.Pressure, calc.Length)
 			if err != nil {
-				return nil, bad("%s: %v", name, err)
+				return nil, err
 			}
-			flow, _, err := componentValue(flowText, "rated flow", calc.Flow)
+			flow, _, err := componentValue(name, flowText, calc.Flow)
 			if err != nil {
-				return nil, bad("%s: %v", name, err)
+				return nil, err
 			}
 			c.Kind, c.RatedFlow = calc.ComponentRated, flow
 			if dim == calc.Length {
@@ -132,7 +133,7 @@ func ParseComponents(text string) ([]calc.Component, error) {
 				c.RatedDrop = drop
 			}
 		default:
-			return nil, bad("%s: %q is neither drop@flow (45kPa@12L/s) nor a valve's cv25 or kv40 (decimals take a point: a comma starts the next component)", name, spec)
+			return nil, bad(calc.UnknownChoice, calc.ReasonComponentSpec, name, spec)
 		}
 		if _, err := c.Loss(1000, 0); err != nil {
 			return nil, err
@@ -143,15 +144,21 @@ func ParseComponents(text string) ([]calc.Component, error) {
 }
 
 // componentValue reads a number and its unit of one of the dimensions
-// dims, in SI.
-func componentValue(text, what string, dims ...calc.Dimension) (float64, calc.Dimension, error) {
+// dims, in SI: the drop (dims[0] Pressure, or a head) or the rated flow
+// of component name. Errors are *calc.FieldError of ReasonComponentValue.
+func componentValue(name, text string, dims ...calc.Dimension) (float64, calc.Dimension, error) {
+	bad := func(k calc.Kind) error {
+		fe := calc.NewFieldError("cmp", k).Typed(name + ":" + strings.TrimSpace(text)).Because(calc.ReasonComponentValue)
+		fe.Dim = dims[0]
+		return fe
+	}
 	num, unit := Split(text)
 	if num == "" || unit == "" {
-		return 0, 0, fmt.Errorf("the %s needs a number and its unit, got %q", what, strings.TrimSpace(text))
+		return 0, 0, bad(calc.NoUnit)
 	}
 	v, err := strconv.ParseFloat(strings.ReplaceAll(num, "−", "-"), 64)
 	if err != nil {
-		return 0, 0, fmt.Errorf("the %s %q is not a number (decimals with a point)", what, num)
+		return 0, 0, bad(calc.NotANumber)
 	}
 	u, err := calc.LookupUnit(unit)
 	if err == nil {
@@ -161,5 +168,5 @@ func componentValue(text, what string, dims ...calc.Dimension) (float64, calc.Di
 			}
 		}
 	}
-	return 0, 0, fmt.Errorf("%q is not a unit of the %s", unit, what)
+	return 0, 0, bad(calc.UnknownUnit)
 }

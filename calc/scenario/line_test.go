@@ -37,27 +37,35 @@ func TestParseComponents(t *testing.T) {
 	if cs, err := ParseComponents("pump skid:10ft@150gpm"); err != nil || math.Abs(cs[0].RatedHead-3.048) > 1e-12 {
 		t.Errorf("US units: %+v, %v", cs, err)
 	}
-	bad := []struct{ text, msg string }{
-		{"chiller", "name:drop@flow"},
-		{":45kPa@12L/s", "name:drop@flow"},
-		{"valve:cv0", "above zero"},
-		{"valve:kv", "must be a number"},
-		{"coil:-5kPa@2L/s", "negative"},
-		{"coil:−5kPa@2L/s", "negative"},
-		{"coil:5kPa@0L/s", "rated flow must be above zero"},
-		{"coil:5@2L/s", "number and its unit"},
-		{"coil:5kPa@2", "number and its unit"},
-		{"coil:5L/s@2kPa", "not a unit of the drop"},
-		{"coil:5kPa@2m", "not a unit of the rated flow"},
-		{"coil:45,5kPa@12L/s", "decimals take a point"},
-		{"strainer:orifice", "neither drop@flow"},
-		{strings.Repeat("x", 41) + ":kv4", "at most 40"},
+	// Each bad item: its kind, its reason and the words the page shows
+	// (SI sheet), which name the component or the item typed.
+	bad := []struct {
+		text   string
+		kind   calc.Kind
+		reason calc.Reason
+		msg    string
+	}{
+		{"chiller", calc.UnknownChoice, calc.ReasonComponentSyntax, `"chiller": write each component as name:drop@flow`},
+		{":45kPa@12L/s", calc.UnknownChoice, calc.ReasonComponentSyntax, "name:drop@flow"},
+		{"valve:cv0", calc.NotPositive, calc.ReasonValveCoefficient, `"valve": the valve's Cv or Kv must be above zero`},
+		{"valve:kv", calc.NotANumber, calc.ReasonValveNumber, `"valve": the valve's Kv must be a number, as in valve:kv25`},
+		{"coil:-5kPa@2L/s", calc.Negative, calc.ReasonComponentDrop, `"coil": the rated drop must not be negative; got -5.000 kPa`},
+		{"coil:−5kPa@2L/s", calc.Negative, calc.ReasonComponentDrop, "must not be negative"},
+		{"coil:5kPa@0L/s", calc.NotPositive, calc.ReasonComponentFlow, "rated flow must be above zero"},
+		{"coil:5@2L/s", calc.NoUnit, calc.ReasonComponentValue, `the drop needs a number and its unit, e.g. 45kPa or 3.2m; got "5"`},
+		{"coil:5kPa@2", calc.NoUnit, calc.ReasonComponentValue, `the rated flow needs a number and its unit, e.g. 12L/s; got "2"`},
+		{"coil:5L/s@2kPa", calc.UnknownUnit, calc.ReasonComponentValue, `the drop "5L/s" is not in a unit of pressure or head`},
+		{"coil:5kPa@2m", calc.UnknownUnit, calc.ReasonComponentValue, `the rated flow "2m" is not in a unit of flow`},
+		{"coil:5..5kPa@2L/s", calc.NotANumber, calc.ReasonComponentValue, `the drop "5..5kPa" is not a number`},
+		{"coil:45,5kPa@12L/s", calc.UnknownChoice, calc.ReasonComponentSpec, "decimals take a point"},
+		{"strainer:orifice", calc.UnknownChoice, calc.ReasonComponentSpec, `"strainer": "orifice" is neither drop@flow`},
+		{strings.Repeat("x", 41) + ":kv4", calc.AboveLimit, calc.ReasonComponentName, "at most 40 characters"},
 	}
 	for _, b := range bad {
 		_, err := ParseComponents(b.text)
 		fe, ok := err.(*calc.FieldError)
-		if !ok || fe.Field != "cmp" || !strings.Contains(fe.Msg, b.msg) {
-			t.Errorf("%q: %v, want a cmp error with %q", b.text, err, b.msg)
+		if !ok || fe.Field != "cmp" || fe.Kind != b.kind || fe.Reason != b.reason || !strings.Contains(worded(fe, false), b.msg) {
+			t.Errorf("%q: %v, want a cmp error %v (%v) with %q", b.text, err, b.kind, b.reason, b.msg)
 		}
 	}
 }
@@ -87,7 +95,7 @@ func TestComponentsInTheSheet(t *testing.T) {
 	}
 	s, _ = Parse(base + "&s2.cmp=valve:cv0")
 	r = Evaluate(s)
-	if m := r.Errors["s2.cmp"]; m == nil || !strings.Contains(m.Msg, "valve") || s.Get("s2.cmp") != "valve:cv0" {
+	if m := r.Errors["s2.cmp"]; m == nil || m.Reason != calc.ReasonValveCoefficient || !strings.Contains(worded(m, false), `"valve"`) || s.Get("s2.cmp") != "valve:cv0" {
 		t.Errorf("errors %v", r.Errors)
 	}
 }

@@ -44,7 +44,7 @@ func (e *eval) surge(run *RunResult, line *calc.Line) {
 	}
 	tc, ok := e.quantity("tc")
 	if ok && !(tc > 0) {
-		e.fail("tc", "the closure time must be above zero")
+		e.bad("tc", calc.NotPositive).Got(calc.Fig(tc, calc.Duration))
 		ok = false
 	}
 	k, from, good := e.bulkModulus()
@@ -53,7 +53,7 @@ func (e *eval) surge(run *RunResult, line *calc.Line) {
 	if e.s.Has("dv") {
 		v, good := e.quantity("dv")
 		if good && !(v > 0) {
-			e.fail("dv", "the velocity change must be above zero (blank: the whole flow velocity)")
+			e.bad("dv", calc.NotPositive).Got(calc.Fig(v, calc.Velocity)).Because(calc.ReasonVelocityChange)
 			good = false
 		}
 		ok, dv = ok && good, v
@@ -62,7 +62,12 @@ func (e *eval) surge(run *RunResult, line *calc.Line) {
 	if e.s.Has("cr") {
 		v, err := number("cr", e.s.Get("cr"))
 		if err != nil || !(v > 0 && v <= 2) {
-			e.fail("cr", "the restraint factor must be a number above 0 and at most 2, near 1 (1 with expansion joints, 1 − ν² anchored throughout)")
+			fe := e.bad("cr", calc.OutOfRange).Within(calc.Num(0), calc.Num(2)).Because(calc.ReasonRestraint)
+			if err != nil {
+				fe.Typed(e.s.Get("cr"))
+			} else {
+				fe.Got(calc.Num(v))
+			}
 			ok = false
 		}
 		c = v
@@ -118,7 +123,7 @@ func (e *eval) bulkModulus() (float64, string, bool) {
 	if e.s.Has("kliq") {
 		k, ok := e.quantity("kliq")
 		if ok && !(k > 0) {
-			e.fail("kliq", "the bulk modulus must be above zero (water near 20 °C: about 2.2 GPa)")
+			e.bad("kliq", calc.NotPositive).Got(calc.Fig(k, calc.Pressure)).Because(calc.ReasonBulkModulus, calc.Fig(2.2e9, calc.Pressure))
 			return 0, "", false
 		}
 		return k, "typed", ok
@@ -141,7 +146,7 @@ func (e *eval) bulkModulus() (float64, string, bool) {
 		}
 		return k, "mackenzie", true
 	}
-	e.fail("kliq", "enter the liquid's bulk modulus for the surge estimate (it is known here only for water and seawater)")
+	e.bad("kliq", calc.Missing).Because(calc.ReasonBulkUnknown)
 	return 0, "", false
 }
 
@@ -164,7 +169,7 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 		specs = append(specs, spec{"", e.runSpec.Length, e.runSpec.Diameter})
 	default:
 		if !e.s.Has("l") && e.s.SegmentCount() == 0 {
-			e.fail("tc", "the surge estimate needs the pipe between the points: describe the pipe run or the line's segments")
+			e.bad("tc", calc.Missing).Because(calc.ReasonSurgePipe)
 		}
 		return nil, false
 	}
@@ -173,7 +178,7 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 	if e.s.Has("wall") {
 		w, good := e.quantity("wall")
 		if good && !(w > 0) {
-			e.fail("wall", "the wall thickness must be above zero")
+			e.bad("wall", calc.NotPositive).Got(calc.Fig(w, calc.Length))
 			good = false
 		}
 		ok, wall, typedWall = ok && good, w, good
@@ -182,7 +187,7 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 	if e.s.Has("epipe") {
 		m, good := e.quantity("epipe")
 		if good && !(m > 0) {
-			e.fail("epipe", "the elastic modulus must be above zero (steel about 200 GPa, PE about 1 GPa)")
+			e.bad("epipe", calc.NotPositive).Got(calc.Fig(m, calc.Pressure)).Because(calc.ReasonWallModulus, calc.Fig(200e9, calc.Pressure), calc.Fig(1e9, calc.Pressure))
 			good = false
 		}
 		ok, mod, typedMod = ok && good, m, good
@@ -197,7 +202,7 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 			ps, err := calc.LookupPipe(strings.TrimSpace(e.s.Get(sp.pre+"nps")), strings.TrimSpace(e.s.Get(sp.pre+"sch")))
 			if err != nil || !(e.s.Has(sp.pre+"nps") || e.s.Has(sp.pre+"sch")) || e.s.Has(sp.pre+"d") {
 				if !e.s.Has("wall") {
-					e.fail("wall", "enter the pipe's wall thickness for the surge estimate (or pick a nominal size and schedule)")
+					e.bad("wall", calc.Missing).Because(calc.ReasonSurgeWall)
 				}
 				ok = false
 				continue
@@ -213,7 +218,7 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 			m, err := calc.LookupMaterial(strings.TrimSpace(e.s.Get(sp.pre + "mat")))
 			if err != nil || !e.s.Has(sp.pre+"mat") || m.Modulus == 0 {
 				if !e.s.Has("epipe") {
-					e.fail("epipe", "enter the pipe wall's elastic modulus for the surge estimate (or pick the pipe's material)")
+					e.bad("epipe", calc.Missing).Because(calc.ReasonSurgeModulus)
 				}
 				ok = false
 				continue

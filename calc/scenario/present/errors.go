@@ -421,7 +421,7 @@ func (w wording) kindText() string {
 		}
 		return t + w.got()
 	}
-	return fe.Words(w.fig) // a sentence of the deprecated FieldErrorf
+	return fe.Words(w.fig) // a last-resort text (KindOther)
 }
 
 // reasonWords words the specific cases.
@@ -472,21 +472,9 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 	calc.ReasonISA: func(w wording) string {
 		return "the altitude must be " + w.limits() + " for the ISO 2533 troposphere" + w.got()
 	},
-	calc.ReasonBoils: func(w wording) string {
-		fe := w.fe
-		if fe.Min == nil || fe.Value == nil {
-			return "the absolute pressure is below the liquid's vapour pressure: it would boil"
-		}
-		t := "the absolute pressure " + w.absolute(*fe.Value)
-		if fe.Value.Value < fe.Min.Value {
-			t += " is below the liquid's vapour pressure at " + w.figs(0) + " (" + w.absolute(*fe.Min) + "): it would boil"
-		} else {
-			t += " is outside the range the liquid's properties hold for"
-		}
-		if fe.Max != nil {
-			t += "; give " + w.absolute(*fe.Min) + " to " + w.absolute(*fe.Max)
-		}
-		return t
+	calc.ReasonBoils: boils,
+	calc.ReasonPointsMean: func(w wording) string {
+		return boils(w) + "; this is the mean of the points' pressures: state the line pressure"
 	},
 	calc.ReasonAbsolutePressure: func(w wording) string {
 		t := w.subject() + " is an absolute pressure and must be above zero"
@@ -724,6 +712,179 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 	calc.ReasonPumpsCount: func(w wording) string {
 		return "use 1, or a count and p or s, e.g. 2p for two in parallel, 2s for two in series"
 	},
+	calc.ReasonComponentFlow: func(w wording) string {
+		return quote(w.fe.Input) + ": the rated flow must be " + w.aboveZeroOrLimit() + w.got()
+	},
+	calc.ReasonComponentDrop: func(w wording) string {
+		if w.fe.Kind == calc.AboveLimit {
+			return quote(w.fe.Input) + ": the rated drop must be " + w.limits() + w.got()
+		}
+		return quote(w.fe.Input) + ": the rated drop must not be negative" + w.got()
+	},
+	calc.ReasonComponentDropBoth: func(w wording) string {
+		return quote(w.fe.Input) + ": give the rated drop as a pressure or as a head, not both"
+	},
+	calc.ReasonValveCoefficient: func(w wording) string {
+		if w.fe.Kind == calc.AboveLimit {
+			return quote(w.fe.Input) + ": the valve's Cv or Kv is beyond any real valve: check the number"
+		}
+		return quote(w.fe.Input) + ": the valve's Cv or Kv must be above zero (a shut valve passes no flow)"
+	},
+	calc.ReasonComponentKind: func(w wording) string {
+		return quote(w.fe.Input) + " is of no known kind of component (a drop at a rated flow, or a valve)"
+	},
+	calc.ReasonComponentSyntax: func(w wording) string {
+		return quote(w.fe.Input) + ": write each component as name:drop@flow (chiller:" + w.ratedExample() + ") or name:cv25 / name:kv40, separated by commas (decimals with a point)"
+	},
+	calc.ReasonComponentName: func(w wording) string {
+		return quote(w.fe.Input) + ": a component's name has at most " + count(w.fe.Max) + " characters"
+	},
+	calc.ReasonComponentSpec: func(w wording) string {
+		name, spec, _ := strings.Cut(w.fe.Input, ":")
+		return quote(name) + ": " + quote(spec) + " is neither drop@flow (" + w.ratedExample() + ") nor a valve's cv25 or kv40 (decimals take a point: a comma starts the next component)"
+	},
+	calc.ReasonValveNumber: func(w wording) string {
+		name, spec, _ := strings.Cut(w.fe.Input, ":")
+		kv := "kv"
+		if strings.HasPrefix(strings.ToLower(spec), "cv") {
+			kv = "cv"
+		}
+		return quote(name) + ": the valve's " + strings.ToUpper(kv[:1]) + "v must be a number, as in " + name + ":" + kv + "25; got " + quote(spec)
+	},
+	calc.ReasonComponentValue: func(w wording) string {
+		name, text, _ := strings.Cut(w.fe.Input, ":")
+		what, units, ex := "drop", "pressure or head", "45kPa or 3.2m"
+		if w.us {
+			ex = "6.5psi or 10ft"
+		}
+		if w.fe.Dim == calc.Flow {
+			what, units, ex = "rated flow", "flow", "12L/s"
+			if w.us {
+				ex = "190gpm"
+			}
+		}
+		switch w.fe.Kind {
+		case calc.NotANumber:
+			return quote(name) + ": the " + what + " " + quote(text) + " is not a number (decimals with a point, e.g. " + ex + ")"
+		case calc.UnknownUnit:
+			return quote(name) + ": the " + what + " " + quote(text) + " is not in a unit of " + units + " (e.g. " + ex + ")"
+		}
+		return quote(name) + ": the " + what + " needs a number and its unit, e.g. " + ex + "; got " + quote(text)
+	},
+	calc.ReasonDarbySize: func(w wording) string {
+		// in the unit of a diameter, whichever field the error is under
+		dia := func(f *calc.Figure) string {
+			if f == nil {
+				return "?"
+			}
+			return scenario.ShowParam("d", f.Value, w.us)
+		}
+		t := "Darby's 3-K method takes the nominal size from the schedule 40 bores, from " + dia(w.fe.Min) + " (NPS 1/8)"
+		if w.got() != "" {
+			return t + "; got an inside diameter of " + dia(w.fe.Value)
+		}
+		return t
+	},
+	calc.ReasonGlycolMass: func(w wording) string {
+		return "the glycol share must be between " + w.shareRange() + " by mass" + w.gotShare()
+	},
+	calc.ReasonGlycolVolume: func(w wording) string {
+		return "the glycol share must be between " + w.shareRange() + " by volume (" + shareOf(w.figAt(0)) + " by mass)" + w.gotShare()
+	},
+	calc.ReasonGlycolTemperature: func(w wording) string {
+		return "a glycol mix's temperature must be from its freezing point (" + w.min() + ") to " + w.max() + w.got()
+	},
+	calc.ReasonGlycolFreezes: func(w wording) string {
+		return shareOf(w.figAt(0)) + " " + w.fe.Input + " by mass freezes at " + w.min() + ": the temperature " + w.val() + " is below it (a stronger mix, or a warmer liquid, is needed)"
+	},
+	calc.ReasonThinWall: func(w wording) string {
+		return "a wall thickness of " + w.val() + " is not a pipe of inside diameter " + w.ownOf(w.figAt(0)) + ": the thin-wall wave speed needs a wall well under half the diameter"
+	},
+	calc.ReasonRestraint: func(w wording) string {
+		return "the restraint factor must be a number above 0 and at most " + count(w.fe.Max) + ", near 1 (1 with expansion joints, 1 − ν² anchored throughout)" + w.got()
+	},
+	calc.ReasonSurgePipe: func(w wording) string {
+		return "the surge estimate needs the pipe between the points: describe the pipe run or the line's segments"
+	},
+	calc.ReasonNoFlowToStop: func(w wording) string {
+		return "there is no flow to stop at the valve: give the flow, or the velocity change"
+	},
+	calc.ReasonSurgeUnbounded: func(w wording) string {
+		return "these figures give a surge beyond any number: check the velocity change (" + w.figs(0) + "), the moduli and the closure time"
+	},
+	calc.ReasonVelocityChange: func(w wording) string {
+		return "the velocity change must be above zero (blank: the whole flow velocity)" + w.got()
+	},
+	calc.ReasonBulkModulus: func(w wording) string {
+		near := "20 °C"
+		if w.us {
+			near = "68 °F"
+		}
+		return "the bulk modulus must be above zero (water near " + near + ": about " + w.ownOf(w.figAt(0)) + ")" + w.got()
+	},
+	calc.ReasonBulkUnknown: func(w wording) string {
+		return "enter the liquid's bulk modulus for the surge estimate (it is known here only for water and seawater)"
+	},
+	calc.ReasonWallModulus: func(w wording) string {
+		return "the elastic modulus must be above zero (steel about " + w.ownOf(w.figAt(0)) + ", PE about " + w.ownOf(w.figAt(1)) + ")" + w.got()
+	},
+	calc.ReasonSurgeWall: func(w wording) string {
+		return "enter the pipe's wall thickness for the surge estimate (or pick a nominal size and schedule)"
+	},
+	calc.ReasonSurgeModulus: func(w wording) string {
+		return "enter the pipe wall's elastic modulus for the surge estimate (or pick the pipe's material)"
+	},
+}
+
+// boils words a pressure against the liquid's vapour pressure and range.
+func boils(w wording) string {
+	fe := w.fe
+	if fe.Min == nil || fe.Value == nil {
+		return "the absolute pressure is below the liquid's vapour pressure: it would boil"
+	}
+	t := "the absolute pressure " + w.absolute(*fe.Value)
+	if fe.Value.Value < fe.Min.Value {
+		t += " is below the liquid's vapour pressure at " + w.figs(0) + " (" + w.absolute(*fe.Min) + "): it would boil"
+	} else {
+		t += " is outside the range the liquid's properties hold for"
+	}
+	if fe.Max != nil {
+		t += "; give " + w.absolute(*fe.Min) + " to " + w.absolute(*fe.Max)
+	}
+	return t
+}
+
+// aboveZeroOrLimit is "above zero", or the limits of an AboveLimit error.
+func (w wording) aboveZeroOrLimit() string {
+	if w.fe.Kind == calc.AboveLimit {
+		return w.limits()
+	}
+	return "above zero"
+}
+
+// ratedExample is a component's drop at its rated flow in the sheet's units.
+func (w wording) ratedExample() string {
+	if w.us {
+		return "6.5psi@190gpm"
+	}
+	return "45kPa@12L/s"
+}
+
+// shareRange is "0 and 60 %": the limits, shares, as percentages.
+func (w wording) shareRange() string {
+	lo := "?"
+	if w.fe.Min != nil {
+		lo = strconv.FormatFloat(w.fe.Min.Value*100, 'g', 4, 64)
+	}
+	return lo + " and " + shareOf(w.fe.Max)
+}
+
+// gotShare is "; got …" with the value, a share, as a percentage.
+func (w wording) gotShare() string {
+	if v := w.fe.Value; v != nil && !math.IsNaN(v.Value) && !math.IsInf(v.Value, 0) {
+		return "; got " + share(v.Value)
+	}
+	return ""
 }
 
 // WarningText words a warning from calc of caution c quoting figs (SI) for
@@ -923,6 +1084,84 @@ var cautionWords = map[calc.Caution]func(c cautioning) string{
 	calc.CautionConvertBelowZero: func(c cautioning) string {
 		return "this is at or below absolute zero pressure, which no liquid can sustain: check the value and whether it is gauge or absolute"
 	},
+	calc.CautionInletBreaks: func(c cautioning) string {
+		return c.inlet() + c.breaks("the column breaks and the pump cavitates. The suction side stays full", "",
+			"raise the supply, enlarge or shorten the suction line, move losses to the delivery side or set the pump lower")
+	},
+	calc.CautionInletBreaksStill: func(c cautioning) string {
+		return c.inlet() + stillBreaks + "the column breaks and the pump cannot prime or run; set the pump lower or raise the supply"
+	},
+	calc.CautionInletSuction: func(c cautioning) string {
+		return c.inlet() + c.belowCrown("the suction is below atmospheric pressure: air leaks in at joints and seals; check the NPSH on the Pump view")
+	},
+	calc.CautionHighPointBreaks: func(c cautioning) string {
+		return c.highPoint() + c.breaks("the column breaks (vapour pockets, a siphon that stops, cavitation and hammer when it rejoins). The pipe runs full",
+			" (with the surplus head taken by a valve at point 2)", "lower the pipe, reduce the losses upstream or raise the pressure")
+	},
+	calc.CautionHighPointStill: func(c cautioning) string {
+		return c.highPoint() + stillBreaks + "the column breaks, the pipe cannot run full past it at any flow; lower the pipe or raise the pressure upstream"
+	},
+	calc.CautionHighPointAir: func(c cautioning) string {
+		return c.highPoint() + c.belowCrown("the pipe is below atmospheric pressure there: an air valve would draw air in and dissolved air comes out; keeping the grade line above the pipe is common practice")
+	},
+	calc.CautionSurgeNoLength: func(c cautioning) string {
+		return "the line has no length: the wave's round trip is zero and any closure counts as slow"
+	},
+	calc.CautionSurgeSlow: func(c cautioning) string {
+		return "the closure (" + c.f(0) + ") is slower than the wave's round trip 2L/a (" + c.f(1) + "): the rise is smaller than Joukowsky's " + c.f(2) +
+			", which is then an upper bound; only a transient analysis of the valve's closing curve gives the actual figure"
+	},
+	calc.CautionSurgeColumnParts: func(c cautioning) string {
+		return "the low swing after the closure reaches the vapour pressure: the liquid column may part and rejoin with a blow larger than Joukowsky's figure"
+	},
+	calc.CautionSurgeDvAboveFlow: func(c cautioning) string {
+		return "the velocity change (" + c.f(0) + ") is larger than the flow velocity at the valve (" + c.f(1) + ")"
+	},
+	calc.CautionBoilingAtLine: func(c cautioning) string {
+		return "the water is at or above its boiling point at the pressure taken for its properties (" + c.abs(0) + "); they are taken at the saturation pressure (" + c.abs(1) + ")"
+	},
+	calc.CautionGlycolSlip: func(c cautioning) string {
+		return "a glycol share of " + c.sh(0) + " protects against almost no frost: if a fraction was typed, the share meant is probably " + c.sh(1)
+	},
+	calc.CautionGlycolBoiling: func(c cautioning) string {
+		return "the glycol mix is at or above its boiling point at the site pressure; its properties are taken at its vapour pressure"
+	},
+	calc.CautionGlycolInhibitors: func(c cautioning) string {
+		return "commercial glycols carry inhibitors and dyes and differ from the pure mixes computed here, whose constants are recalled values (from memory): the maker's data sheet governs density, viscosity and freezing point"
+	},
+}
+
+// stillBreaks says the column breaks at a place even with no flow.
+const stillBreaks = ": the hydraulic grade line falls below the vapour-pressure line even with no flow — "
+
+// breaks says the column breaks at a place (what follows), the pipe full
+// only up to Figures[4] (how) and not at the balance's Figures[5], and what
+// to do.
+func (c cautioning) breaks(what, how, do string) string {
+	return ": the hydraulic grade line falls below the vapour-pressure line, so the pressure there would be below the liquid's vapour pressure — " +
+		what + " only up to " + c.f(4) + how + ", not the " + c.f(5) + " of the balance; " + do
+}
+
+// belowCrown says the grade line is Figures[4] below the pipe crown, so
+// (what follows).
+func (c cautioning) belowCrown(so string) string {
+	return ": the hydraulic grade line is " + c.f(4) + " below the pipe crown, so " + so
+}
+
+// inlet says where the pump's inlet is on a line: Figures[0] the segment,
+// Figures[2] the distance from point 1, Figures[3] the elevation.
+func (c cautioning) inlet() string {
+	return "at the pump's inlet, the end of segment " + ratio(c.figs, 0, 0) + " (" + c.f(2) + " from point 1, elevation " + c.f(3) + ")"
+}
+
+// highPoint says where a high point is, as inlet, Figures[1] 1 at the
+// segment's end, 0 at its start.
+func (c cautioning) highPoint() string {
+	where := "start"
+	if len(c.figs) > 1 && c.figs[1].Value != 0 {
+		where = "end"
+	}
+	return "high point at the " + where + " of segment " + ratio(c.figs, 0, 0) + " (" + c.f(2) + " from point 1, elevation " + c.f(3) + ")"
 }
 
 // sh words figure i, a share, as a percentage of up to four digits.

@@ -96,7 +96,7 @@ func TestErrorTextNamesAndUnits(t *testing.T) {
 		{calc.NewFieldError("hours", calc.OutOfRange).Got(calc.Num(9000)).Within(calc.Num(0), calc.Num(8784)), false,
 			"the running hours per year must be from 0 to 8784; got 9000"},
 		{calc.NewFieldError("units", calc.UnknownChoice).Typed("imperial"), false, `"imperial" is not one of the choices (use si or us)`},
-		{calc.FieldErrorf("q", "flow %v is odd", calc.Fig(0.045, calc.Flow)), true, "flow " + scenario.Show(0.045, calc.Flow, true) + " is odd"},
+		{&calc.FieldError{Field: "q", Msg: "flow \uE0000; is odd", Figures: []calc.Figure{calc.Fig(0.045, calc.Flow)}}, true, "flow " + scenario.Show(0.045, calc.Flow, true) + " is odd"},
 	} {
 		if got := ErrorText(c.fe, c.us); got != c.want {
 			t.Errorf("%v (us %v):\n got %q\nwant %q", c.fe, c.us, got, c.want)
@@ -156,7 +156,7 @@ func TestParseErrorWords(t *testing.T) {
 // here, in both unit systems, with no placeholder left and no SI unit
 // after a figure on a US sheet.
 func TestEveryCautionWorded(t *testing.T) {
-	figs := []calc.Figure{calc.Fig(7.2, calc.Length), calc.Fig(3.1, calc.Length), calc.Fig(4.1, calc.Length), calc.Num(2.3), calc.Fig(0.6, calc.Length)}
+	figs := []calc.Figure{calc.Fig(7.2, calc.Length), calc.Fig(3.1, calc.Length), calc.Fig(4.1, calc.Length), calc.Num(2.3), calc.Fig(0.6, calc.Length), calc.Fig(0.02, calc.Flow)}
 	for _, c := range calc.Cautions() {
 		for _, us := range []bool{false, true} {
 			s := WarningText(c, figs, us)
@@ -196,6 +196,14 @@ func TestCautionWords(t *testing.T) {
 			"the wire-to-water efficiency is only 20 % (below 30 %): look for wear, a throttled or recirculating pump, a motor problem, or a reading error"},
 		{calc.CautionVelocityHigh, []calc.Figure{calc.Fig(4, calc.Velocity), calc.Fig(0.3, calc.Velocity), calc.Fig(3, calc.Velocity)}, false,
 			"velocity 4.000 m/s is high for a liquid line (usual range 0.3000 m/s–3.000 m/s, common practice)"},
+		// 300 m = 984.3 ft, 12 m = 39.37 ft (0.3048 m/ft), 14.5 L/s =
+		// 229.8 gpm, 30 L/s = 475.5 gpm (231 in³/gal, NIST SP 811).
+		{calc.CautionHighPointBreaks, []calc.Figure{calc.Num(2), calc.Num(0), calc.Fig(300, calc.Length), calc.Fig(12, calc.Length), calc.Fig(0.0145, calc.Flow), calc.Fig(0.03, calc.Flow)}, true,
+			"high point at the start of segment 2 (984.3 ft from point 1, elevation 39.37 ft): the hydraulic grade line falls below the vapour-pressure line, so the pressure there would be below the liquid's vapour pressure — the column breaks (vapour pockets, a siphon that stops, cavitation and hammer when it rejoins). The pipe runs full only up to 229.8 gpm (with the surplus head taken by a valve at point 2), not the 475.5 gpm of the balance; lower the pipe, reduce the losses upstream or raise the pressure"},
+		{calc.CautionInletSuction, []calc.Figure{calc.Num(1), calc.Num(1), calc.Fig(300, calc.Length), calc.Fig(0, calc.Length), calc.Fig(2.1, calc.Length)}, false,
+			"at the pump's inlet, the end of segment 1 (300.0 m from point 1, elevation 0.000 m): the hydraulic grade line is 2.100 m below the pipe crown, so the suction is below atmospheric pressure: air leaks in at joints and seals; check the NPSH on the Pump view"},
+		{calc.CautionSurgeSlow, []calc.Figure{calc.Fig(3, calc.Duration), calc.Fig(1.5, calc.Duration), calc.Fig(2.634e6, calc.Pressure)}, false,
+			"the closure (3.000 s) is slower than the wave's round trip 2L/a (1.500 s): the rise is smaller than Joukowsky's 2634 kPa, which is then an upper bound; only a transient analysis of the valve's closing curve gives the actual figure"},
 	} {
 		if got := WarningText(c.c, c.figs, c.us); got != c.want {
 			t.Errorf("%v (us %v):\n got %q\nwant %q", c.c, c.us, got, c.want)
