@@ -131,6 +131,11 @@ const (
 	ReasonWallModulus    // NotPositive: a pipe wall's elastic modulus; Figures[0] steel's, Figures[1] PE's
 	ReasonSurgeWall      // Missing: the wall thickness (or a nominal size and schedule) for the surge
 	ReasonSurgeModulus   // Missing: the wall's elastic modulus (or the pipe's material) for the surge
+
+	// The Run view and its sizing table.
+	ReasonVelocityBand // BelowLimit: the velocity band's high end (Value) must be above its low end (Min)
+	ReasonRunSegment   // OutOfRange: the segment shown (Input) must be one of the line's, Min to Max
+	ReasonSizingClass  // UnknownChoice: Input is not a pipe class of any catalogue
 	reasonEnd
 )
 
@@ -251,6 +256,9 @@ var reasonNames = [...]string{"none",
 	"wall modulus",
 	"surge wall",
 	"surge modulus",
+	"velocity band",
+	"run segment",
+	"sizing class",
 }
 
 // countErr reports n items where min to max are accepted (TooFew or

@@ -61,15 +61,15 @@ func (r SizingRow) Fits() bool { return r.Err == nil && r.InBand && r.UnderMax }
 func SizeRun(r Run, fl Fluid, q float64, sizes []PipeSize, lim SizingLimits) ([]SizingRow, error) {
 	switch {
 	case math.IsNaN(q) || math.IsInf(q, 0) || !(q > 0):
-		return nil, fieldErrorf("q", "a sizing table needs a flow above zero, got %v", Fig(q, Flow))
+		return nil, NewFieldError("q", NotPositive).Got(Fig(q, Flow))
 	case math.IsNaN(lim.VelocityLow) || math.IsInf(lim.VelocityLow, 0) || lim.VelocityLow < 0:
-		return nil, fieldErrorf("vlo", "the velocity band's low end must be zero or positive, got %v", Fig(lim.VelocityLow, Velocity))
+		return nil, NewFieldError("vlo", Negative).Got(Fig(lim.VelocityLow, Velocity))
 	case math.IsNaN(lim.VelocityHigh) || math.IsInf(lim.VelocityHigh, 0) || !(lim.VelocityHigh > lim.VelocityLow):
-		return nil, fieldErrorf("vhi", "the velocity band's high end must be above its low end (%v), got %v", Fig(lim.VelocityLow, Velocity), Fig(lim.VelocityHigh, Velocity))
+		return nil, NewFieldError("vhi", BelowLimit).AtLeast(Fig(lim.VelocityLow, Velocity)).Got(Fig(lim.VelocityHigh, Velocity)).Because(ReasonVelocityBand)
 	case math.IsNaN(lim.GradientMax) || math.IsInf(lim.GradientMax, 0) || !(lim.GradientMax > 0):
-		return nil, fieldErrorf("grad", "the loss-gradient limit must be above zero, got %g per 100", lim.GradientMax*100)
+		return nil, NewFieldError("grad", NotPositive).Got(Num(lim.GradientMax * 100))
 	case len(sizes) == 0:
-		return nil, fieldErrorf("sch", "no pipe sizes to compare")
+		return nil, NewFieldError("sch", Missing)
 	}
 	// The inputs shared by every size are checked once, at the first
 	// size's bore, so that one bad length or fitting is one error, not a
@@ -84,14 +84,17 @@ func SizeRun(r Run, fl Fluid, q float64, sizes []PipeSize, lim SizingLimits) ([]
 		}
 	}
 	if !frCheckNonNeg(r.ExtraK) {
-		return nil, fieldErrorf("k", "extra loss coefficient must be zero or positive, got %g", r.ExtraK)
+		return nil, NewFieldError("k", Negative).Got(Num(r.ExtraK))
 	}
 	for _, fc := range r.Fittings {
 		if _, err := LookupFitting(fc.Key); err != nil {
 			return nil, err
 		}
-		if fc.Count < 0 || (fc.Override && !frCheckNonNeg(fc.K)) {
-			return nil, fieldErrorf("fit", "%q: the count must not be negative and a given K must be zero or positive", fc.Key)
+		if fc.Count < 0 {
+			return nil, NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(float64(fc.Count))).Because(ReasonFittingCount)
+		}
+		if fc.Override && !frCheckNonNeg(fc.K) {
+			return nil, NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(fc.K)).Because(ReasonFittingK)
 		}
 	}
 	out := make([]SizingRow, len(sizes))

@@ -197,7 +197,7 @@ func (e *eval) npsh(line *calc.Line) {
 	if typed {
 		v, good := e.quantity("hs")
 		if good && v < 0 {
-			e.fail("hs", "hs: the suction loss must be zero or positive")
+			e.bad("hs", calc.Negative).Got(calc.Fig(v, calc.Length))
 			good = false
 		}
 		ok = ok && good
@@ -255,7 +255,7 @@ func (e *eval) npsh(line *calc.Line) {
 	e.res.NPSHFlow = q
 	e.res.NPSHSuction = NPSHSuction{Typed: typed, After: after}
 	if !typed && line == nil {
-		e.warn("hs", "npsh", "no suction loss typed and no line of segments: the suction losses are taken as zero; type the suction loss, or describe the suction pipe as segment 1 with the pump after it")
+		e.warnCalc("npsh", calc.Warn("hs", calc.CautionSuctionLossZero))
 	}
 	if pr != nil {
 		for _, p := range pr.System {

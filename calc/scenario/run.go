@@ -2,7 +2,6 @@ package scenario
 
 import (
 	"errors"
-	"fmt"
 	"math"
 	"strconv"
 	"strings"
@@ -186,7 +185,7 @@ func (e *eval) runView(line *calc.Line) {
 		if t := strings.TrimSpace(e.s.Get("rseg")); t != "" {
 			k, err := strconv.Atoi(t)
 			if err != nil || k < 1 || k > n {
-				e.fail("rseg", fmt.Sprintf("rseg: the line has segments 1 to %d; pick one of them", n))
+				e.bad("rseg", calc.OutOfRange).Typed(t).Within(calc.Num(1), calc.Num(float64(n))).Because(calc.ReasonRunSegment)
 				e.res.RunView = rv
 				return
 			}
@@ -248,7 +247,7 @@ func (e *eval) sizing(rv *RunView, spec calc.Run, pre string, q float64) {
 		}
 	}
 	if sizes == nil {
-		e.fail("szsch", fmt.Sprintf("szsch: %q is not a pipe class of the catalogues", class))
+		e.bad("szsch", calc.UnknownChoice).Typed(class).Because(calc.ReasonSizingClass)
 		return
 	}
 	lim := calc.DefaultSizingLimits()
@@ -266,7 +265,7 @@ func (e *eval) sizing(rv *RunView, spec calc.Run, pre string, q float64) {
 	if e.s.Has("grad") {
 		g, err := number("grad", e.s.Get("grad"))
 		if err != nil || !(g > 0) {
-			e.fail("grad", "grad: the friction loss limit is a number above zero, in m per 100 m (ft per 100 ft), e.g. 4")
+			e.bad("grad", calc.NotPositive).Typed(e.s.Get("grad"))
 			ok = false
 		}
 		lim.GradientMax = g / 100

@@ -598,6 +598,19 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 	calc.ReasonRegimeJump: func(w wording) string {
 		return "no steady flow closes the balance: it jumps across the laminar–turbulent limit near " + w.figs(0)
 	},
+	calc.ReasonVelocityBand: func(w wording) string {
+		low := "?"
+		if w.fe.Min != nil {
+			low = w.fig(*w.fe.Min)
+		}
+		return "the velocity band's high end must be above its low end (" + low + ")" + w.got()
+	},
+	calc.ReasonRunSegment: func(w wording) string {
+		return "the line has segments " + count(w.fe.Min) + " to " + count(w.fe.Max) + "; pick one of them (got " + quote(w.fe.Input) + ")"
+	},
+	calc.ReasonSizingClass: func(w wording) string {
+		return quote(w.fe.Input) + " is not a pipe class of the catalogues; choose a schedule or class listed under Schedule or class"
+	},
 	calc.ReasonPumpAfter: func(w wording) string {
 		t := "the number of the segment the pump follows must be 0 (at point 1) to " + count(w.fe.Max) + " (the last)"
 		if w.fe.Value != nil {
@@ -1043,7 +1056,7 @@ var cautionWords = map[calc.Caution]func(c cautioning) string{
 	calc.CautionOperatingOffRegion: func(c cautioning) string { return c.offRegion("the operating point") },
 	calc.CautionMeasuredOffRegion:  func(c cautioning) string { return c.offRegion("the measured flow") },
 	calc.CautionSuctionLossZero: func(c cautioning) string {
-		return "no line of segments: the suction losses are taken as zero; describe the suction pipe as segment 1 to include them"
+		return "no suction loss typed and no line of segments: the suction losses are taken as zero; type the suction loss, or describe the suction pipe as segment 1 with the pump after it"
 	},
 	calc.CautionMotorEffHigh: func(c cautioning) string {
 		return "a motor efficiency of " + c.sh(0) + " is above the " + c.sh(1) + " that even the best large motors hardly reach: check the nameplate"
