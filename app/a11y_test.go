@@ -179,6 +179,7 @@ func TestAccessibility(t *testing.T) {
 		t.Error("Space on the SI units button did not switch the units")
 	}
 	press("view-convert", "\r")
+	b.poll("!window.fieldheadPending", 5*time.Second) // the link is written once edits pause
 	if !b.jsBool(`location.search.includes("view=convert")`) {
 		t.Error("Enter on the Convert tab did not open it")
 	}
