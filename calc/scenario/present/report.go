@@ -158,9 +158,12 @@ func (b *builder) segmentInputs(n int) Block {
 					v := b.inputValue(p)
 					switch f {
 					case "nps":
-						v = "NPS " + v
-					case "sch":
-						v = "schedule " + v
+						// The size in its catalogue's notation (NPS, OD, DN,
+						// inch) when the pair names a catalogue pipe.
+						v = "size " + v
+						if p, err := calc.LookupPipe(b.s.Get(p), b.s.Get(scenario.SegmentParam(i, "sch"))); err == nil {
+							v = sizeName(p)
+						}
 					}
 					parts = append(parts, v)
 				}
