@@ -263,7 +263,7 @@ func (bk *book) importSheets(text string) {
 	}
 	msg += "."
 	for _, b := range bad {
-		msg += " Line " + strconv.Itoa(b.Line) + " not read: " + b.Err.Error() + "."
+		msg += " Line " + strconv.Itoa(b.Line) + " not read: " + strings.TrimSuffix(present.LinkErrorText(b.Err), ".") + "."
 	}
 	bk.state.Notice = msg
 }
