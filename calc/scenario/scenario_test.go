@@ -41,7 +41,7 @@ func TestParseLinkErrors(t *testing.T) {
 		{"z1=3m&name=%ff%fe", LinkNotUTF8, "name", "not valid UTF-8", "z1"},
 		{"z1=3m&name=a%07b", LinkControl, "name", "control characters", "z1"},
 		{"z1=3m&" + strings.Repeat("é", 20) + "=1", LinkUnknown, strings.Repeat("é", 12) + "…", "not a Fieldhead parameter", "z1"},
-		{"z1=3m&%ff=1", LinkNotUTF8, "", "no readable name", "z1"},
+		{"z1=3m&%ff=1", LinkNotUTF8, "", "name or value is not valid UTF-8", "z1"},
 		// 2.7 KB of non-ASCII text triples once escaped: refused whole.
 		{"name=" + strings.Repeat("é", 1400), LinkTooLongOut, "", "once written out", ""},
 	}

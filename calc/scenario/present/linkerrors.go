@@ -70,6 +70,9 @@ func linkErrorText(e *scenario.LinkError) string {
 	case scenario.LinkValueEncoding:
 		return n + ": the value is not valid percent-encoding"
 	case scenario.LinkNotUTF8:
+		if e.Name == "" {
+			return "a parameter's name or value is not valid UTF-8 text"
+		}
 		return n + ": the value is not valid UTF-8 text"
 	case scenario.LinkControl:
 		return n + ": the value holds control characters, which no field takes"
