@@ -137,13 +137,9 @@ func (s *sheet) linkProblem() app.UI {
 	if s.linkErr == "" {
 		return nil
 	}
-	text := " Part of the link was not understood and was left out: " + s.linkErr
-	if s.damaged {
-		text = " " + s.linkErr + " The sheet kept on this device is unchanged until you edit this one."
-	}
 	return app.Div().Class("banner").ID("link-error").Attr("role", "alert").Body(
 		app.Span().Class("tag").Text("Link"),
-		app.Text(text),
+		app.Text(" "+present.LinkBanner(s.linkErr, s.damaged)),
 	)
 }
 

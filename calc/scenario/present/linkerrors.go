@@ -101,3 +101,39 @@ func damagedText(d *scenario.DamagedLink) string {
 	}
 	return "the link arrived damaged — " + why + ": " + read + ". Ask for the link again, or copy it whole."
 }
+
+// LinkBanner is the page's notice of a link not read whole, after its
+// "Link" tag: text is what LinkErrorText (or LinkRefused) said; damaged
+// when the link arrived damaged, and then the sheet kept on the device is
+// left alone until this one is edited.
+func LinkBanner(text string, damaged bool) string {
+	if damaged {
+		return text + " The sheet kept on this device is unchanged until you edit this one."
+	}
+	return "Part of the link was not understood and was left out: " + text
+}
+
+// LinkRefused says why a link refused as a whole was not used (text, from
+// LinkErrorText) and what opened in its place: the sheet saved on this
+// device (saved), else the demo.
+func LinkRefused(text string, saved bool) string {
+	instead := "this is the demo"
+	if saved {
+		instead = "this is the sheet saved on this device"
+	}
+	return "the link could not be used (" + text + "); " + instead
+}
+
+// ImportNotice says what adding a sheets file did: the sheets added, those
+// kept already, and each line not read with why.
+func ImportNotice(added, same int, bad []scenario.LineError) string {
+	msg := "Added " + strconv.Itoa(added) + " sheets"
+	if same > 0 {
+		msg += "; " + strconv.Itoa(same) + " were kept already"
+	}
+	msg += "."
+	for _, b := range bad {
+		msg += " Line " + strconv.Itoa(b.Line) + " not read: " + strings.TrimSuffix(LinkErrorText(b.Err), ".") + "."
+	}
+	return msg
+}

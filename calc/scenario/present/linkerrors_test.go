@@ -81,3 +81,29 @@ func TestLinkErrorWords(t *testing.T) {
 		t.Error("no error should give no words")
 	}
 }
+
+// TestLinkNotices: the page's notices around a link error keep its words
+// and say what the page did about it.
+func TestLinkNotices(t *testing.T) {
+	_, bad := scenario.ReadSheets("Pit\t\nWell\tzz=1")
+	if got, want := ImportNotice(2, 1, bad), `Added 2 sheets; 1 were kept already. Line 1 not read: no link after the title. Line 2 not read: "zz": not a Fieldhead parameter.`; got != want {
+		t.Errorf("import notice %q, want %q", got, want)
+	}
+	signed := scenario.Demo().Sign()
+	_, err := scenario.Parse(signed[:len(signed)-1])
+	if got := ImportNotice(0, 0, []scenario.LineError{{Line: 4, Err: err}}); strings.Contains(got, "..") || !strings.Contains(got, "Line 4 not read: the link arrived damaged") {
+		t.Errorf("import notice of a damaged line: %q", got)
+	}
+	if got := LinkBanner("x", false); got != "Part of the link was not understood and was left out: x" {
+		t.Errorf("banner %q", got)
+	}
+	if got := LinkBanner(LinkErrorText(err), true); !strings.HasPrefix(got, "the link arrived damaged") || !strings.HasSuffix(got, "until you edit this one.") {
+		t.Errorf("damaged banner %q", got)
+	}
+	if got := LinkRefused("y", true); got != "the link could not be used (y); this is the sheet saved on this device" {
+		t.Errorf("refused %q", got)
+	}
+	if got := LinkRefused("y", false); !strings.HasSuffix(got, "this is the demo") {
+		t.Errorf("refused %q", got)
+	}
+}
