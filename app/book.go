@@ -257,15 +257,7 @@ func (bk *book) importSheets(text string) {
 		}
 		added++
 	}
-	msg := "Added " + strconv.Itoa(added) + " sheets"
-	if same > 0 {
-		msg += "; " + strconv.Itoa(same) + " were kept already"
-	}
-	msg += "."
-	for _, b := range bad {
-		msg += " Line " + strconv.Itoa(b.Line) + " not read: " + b.Err.Error() + "."
-	}
-	bk.state.Notice = msg
+	bk.state.Notice = present.ImportNotice(added, same, bad)
 }
 
 // blank reports whether a sheet holds nothing but its view and units.

@@ -1,8 +1,6 @@
 package main
 
 import (
-	"strings"
-
 	"fieldhead/calc/scenario/present"
 
 	"github.com/maxence-charriere/go-app/v10/pkg/app"
@@ -139,13 +137,9 @@ func (s *sheet) linkProblem() app.UI {
 	if s.linkErr == "" {
 		return nil
 	}
-	text := " Part of the link was not understood and was left out: " + s.linkErr
-	if s.damaged {
-		text = " " + strings.TrimPrefix(s.linkErr, "link: ") + " The sheet kept on this device is unchanged until you edit this one."
-	}
 	return app.Div().Class("banner").ID("link-error").Attr("role", "alert").Body(
 		app.Span().Class("tag").Text("Link"),
-		app.Text(text),
+		app.Text(" "+present.LinkBanner(s.linkErr, s.damaged)),
 	)
 }
 

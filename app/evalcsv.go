@@ -24,12 +24,12 @@ func evalCSV(path string, us bool, out, errs io.Writer) error {
 	}
 	lines, bad := scenario.ReadSheets(string(data))
 	for _, b := range bad {
-		fmt.Fprintf(errs, "%s:%d: not read: %v\n", path, b.Line, b.Err)
+		fmt.Fprintf(errs, "%s:%d: not read: %s\n", path, b.Line, present.LinkErrorText(b.Err))
 	}
 	var sheets []scenario.Scenario
 	for _, l := range lines {
-		if l.Note != "" {
-			fmt.Fprintf(errs, "%s:%d: read in part: %s\n", path, l.Line, l.Note)
+		if l.Err != nil {
+			fmt.Fprintf(errs, "%s:%d: read in part: %s\n", path, l.Line, present.LinkErrorText(l.Err))
 		}
 		sheets = append(sheets, l.Scen)
 	}

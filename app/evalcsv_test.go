@@ -34,7 +34,7 @@ func TestEvalCSV(t *testing.T) {
 	if err != nil || len(rows) != 3 {
 		t.Errorf("%d rows (%v), want a header and two sheets", len(rows), err)
 	}
-	if !strings.Contains(errs.String(), "sheets.txt:4:") {
-		t.Errorf("the bad line is not named by its number: %q", errs.String())
+	if !strings.Contains(errs.String(), `sheets.txt:4: not read: "zz": not a Fieldhead parameter`) {
+		t.Errorf("the bad line is not named by its number with present's words: %q", errs.String())
 	}
 }

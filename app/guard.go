@@ -146,11 +146,10 @@ func keepSavedSheet(sc scenario.Scenario, msg string, fromLink bool) (scenario.S
 	if msg == "" || !fromLink || sc.Encode() != "" {
 		return sc, msg
 	}
-	note := "the link could not be used (" + msg + "); "
 	if saved := storageGet(storageKey); saved != "" {
 		if s, err := scenario.Parse(saved); err == nil {
-			return s, note + "this is the sheet saved on this device"
+			return s, present.LinkRefused(msg, true)
 		}
 	}
-	return scenario.Demo(), note + "this is the demo"
+	return scenario.Demo(), present.LinkRefused(msg, false)
 }

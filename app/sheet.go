@@ -61,10 +61,7 @@ func newSheet() app.Composer {
 		s.adopt(scenario.Demo(), "")
 	} else {
 		sc, err := scenario.Parse(query)
-		msg := ""
-		if err != nil {
-			msg = err.Error()
-		}
+		msg := present.LinkErrorText(err)
 		var d *scenario.DamagedLink
 		s.damaged = errors.As(err, &d) && u.RawQuery != ""
 		sc, msg = keepSavedSheet(sc, msg, u.RawQuery != "")

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"net/url"
 	"sort"
+	"strconv"
 	"strings"
 	"unicode"
 	"unicode/utf8"
@@ -53,18 +54,20 @@ type Scenario struct {
 
 // Parse reads a query string (with or without a leading '?'). It fails only
 // for a link that cannot be read as a whole: too long, not valid
-// percent-encoding or UTF-8, or an unknown or repeated parameter. Each such
-// error names the parameter where there is one.
+// percent-encoding or UTF-8, or an unknown or repeated parameter. The
+// error is data for present to word: a *LinkError for a link too long, a
+// *DamagedLink for one that arrived damaged, else LinkErrors listing every
+// problem, each naming its parameter where there is one.
 func Parse(query string) (Scenario, error) {
 	s := Scenario{raw: map[string]string{}}
 	query = strings.ReplaceAll(strings.TrimPrefix(query, "?"), "&amp;", "&") // as a mail program may write "&"
 	if len(query) > MaxQueryBytes {
-		return s, fmt.Errorf("link: the scenario is %d bytes, longer than the %d accepted", len(query), MaxQueryBytes)
+		return s, &LinkError{Kind: LinkTooLong, Size: len(query), Limit: MaxQueryBytes}
 	}
 	if query == "" {
 		return s, nil
 	}
-	var errs []string
+	var errs LinkErrors
 	check, cut := "", ""
 	parts := strings.Split(query, "&")
 	for i, part := range parts {
@@ -82,28 +85,28 @@ func Parse(query string) (Scenario, error) {
 		k, v = lenientPercent(k), lenientPercent(v)
 		key, err := url.QueryUnescape(k)
 		if err != nil {
-			errs = append(errs, fmt.Sprintf("link: a parameter name is not valid percent-encoding (%q)", truncate(k)))
+			errs = append(errs, &LinkError{Kind: LinkNameEncoding, Name: errName(k)})
 			continue
 		}
 		val, err := url.QueryUnescape(v)
 		if err != nil {
-			errs = append(errs, fmt.Sprintf("%s: the value is not valid percent-encoding", safeName(key)))
+			errs = append(errs, &LinkError{Kind: LinkValueEncoding, Name: errName(key)})
 			continue
 		}
 		if !utf8.ValidString(key) || !utf8.ValidString(val) {
-			errs = append(errs, fmt.Sprintf("%s: the value is not valid UTF-8 text", safeName(key)))
+			errs = append(errs, &LinkError{Kind: LinkNotUTF8, Name: errName(key)})
 			continue
 		}
 		if strings.IndexFunc(val, unicode.IsControl) >= 0 {
-			errs = append(errs, fmt.Sprintf("%s: the value holds control characters, which no field takes", safeName(key)))
+			errs = append(errs, &LinkError{Kind: LinkControl, Name: errName(key)})
 			continue
 		}
 		if _, ok := known[key]; !ok {
-			errs = append(errs, fmt.Sprintf("%s: not a Fieldhead parameter", safeName(key)))
+			errs = append(errs, &LinkError{Kind: LinkUnknown, Name: errName(key)})
 			continue
 		}
 		if _, dup := s.raw[key]; dup {
-			errs = append(errs, fmt.Sprintf("%s: given twice; keep one", key))
+			errs = append(errs, &LinkError{Kind: LinkTwice, Name: errName(key)})
 			continue
 		}
 		s.raw[key] = val
@@ -111,13 +114,13 @@ func Parse(query string) (Scenario, error) {
 	// The canonical link must fit too, so that what Parse accepts always
 	// reads back (escaping can triple the length of non-ASCII text).
 	if n := len(s.Encode()); n > MaxQueryBytes {
-		return Scenario{raw: map[string]string{}}, fmt.Errorf("link: the scenario is %d bytes once written out, longer than the %d accepted", n, MaxQueryBytes)
+		return Scenario{raw: map[string]string{}}, &LinkError{Kind: LinkTooLongOut, Size: n, Limit: MaxQueryBytes}
 	}
 	if d := s.damage(check, cut); d != nil {
 		return s, d
 	}
 	if len(errs) > 0 {
-		return s, fmt.Errorf("%s", strings.Join(errs, "; "))
+		return s, errs
 	}
 	return s, nil
 }
@@ -132,7 +135,7 @@ func (s Scenario) Has(param string) bool { return strings.TrimSpace(s.raw[param]
 // nothing: an unknown parameter is kept out and reported by the returned error.
 func (s *Scenario) Set(param, text string) error {
 	if _, ok := known[param]; !ok {
-		return fmt.Errorf("%s: not a Fieldhead parameter", safeName(param))
+		return &LinkError{Kind: LinkUnknown, Name: errName(param)}
 	}
 	if s.raw == nil {
 		s.raw = map[string]string{}
@@ -214,19 +217,25 @@ func isHex(c byte) bool {
 	return '0' <= c && c <= '9' || 'a' <= c && c <= 'f' || 'A' <= c && c <= 'F'
 }
 
+// truncate cuts s to 24 bytes with "…", at a rune boundary.
 func truncate(s string) string {
-	if len(s) > 24 {
-		return s[:24] + "…"
+	if len(s) <= 24 {
+		return s
 	}
-	return s
+	n := 24
+	for n > 0 && !utf8.RuneStart(s[n]) {
+		n--
+	}
+	return s[:n] + "…"
 }
 
-// safeName keeps error messages short and printable when a name is junk.
-func safeName(k string) string {
+// errName is a parameter name as a LinkError keeps it: short, and ""
+// when it is not text.
+func errName(k string) string {
 	if !utf8.ValidString(k) {
-		return "link"
+		return ""
 	}
-	return fmt.Sprintf("%q", truncate(k))
+	return truncate(k)
 }
 
 // CheckParam is the link's integrity field: a short checksum of the
@@ -266,22 +275,20 @@ func crc32IEEE(s string) uint32 {
 // DamagedLink is the error of a link that arrived damaged. What was read
 // is kept in the Scenario Parse returns; Read counts its values.
 type DamagedLink struct {
-	Cut      string // the part the link ends in when it ends inside a parameter
+	Cut      string // the part the link ends in when it ends inside a parameter, cut to 24 bytes
 	Mismatch bool   // the integrity field does not match what was read
 	Read     int    // values read
 	Last     string // the last parameter read, in link order
 }
 
+// Error is a terse form for logs and tests; what users read comes from
+// present.
 func (d *DamagedLink) Error() string {
-	why := "its check does not match what arrived"
+	why := "check does not match"
 	if d.Cut != "" {
-		why = "it ends in the middle of a value (" + truncate(d.Cut) + ")"
+		why = "ends inside " + strconv.Quote(d.Cut)
 	}
-	read := "nothing could be read"
-	if d.Read > 0 {
-		read = fmt.Sprintf("%d values were read, the last %s (%s); what followed it is missing or altered", d.Read, Label(d.Last), d.Last)
-	}
-	return "link: the link arrived damaged — " + why + ": " + read + ". Ask for the link again, or copy it whole."
+	return "link: damaged (" + why + "), " + strconv.Itoa(d.Read) + " values read, last " + strconv.Quote(d.Last)
 }
 
 // damage reports a damaged link: a check that does not match, or an end
@@ -296,7 +303,7 @@ func (s Scenario) damage(check, cut string) *DamagedLink {
 		keys = append(keys, k)
 	}
 	sortByLink(keys)
-	d := &DamagedLink{Cut: cut, Mismatch: mismatch, Read: len(keys)}
+	d := &DamagedLink{Cut: truncate(cut), Mismatch: mismatch, Read: len(keys)}
 	if len(keys) > 0 {
 		d.Last = keys[len(keys)-1]
 	}

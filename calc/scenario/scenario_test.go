@@ -1,6 +1,7 @@
 package scenario
 
 import (
+	"errors"
 	"fmt"
 	"math"
 	"strings"
@@ -29,25 +30,44 @@ func TestParseEncodeRoundTrip(t *testing.T) {
 func TestParseLinkErrors(t *testing.T) {
 	tests := []struct {
 		query string
-		want  string // in the error
+		kind  LinkKind
+		name  string // the parameter the error names
+		want  string // in the error as the page words it
 		kept  string // a parameter that must survive
 	}{
-		{"z1=3m&zz=4", `"zz": not a Fieldhead parameter`, "z1"},
-		{"z1=3m&z1=4m", "z1: given twice", "z1"},
-		{"z1=3m&" + strings.Repeat("a", MaxQueryBytes), "longer than", ""},
-		{"z1=3m&name=%ff%fe", "not valid UTF-8", "z1"},
-		{"z1=3m&name=a%07b", "control characters", "z1"},
+		{"z1=3m&zz=4", LinkUnknown, "zz", `"zz": not a Fieldhead parameter`, "z1"},
+		{"z1=3m&z1=4m", LinkTwice, "z1", `"z1" (` + Label("z1") + `): given twice`, "z1"},
+		{"z1=3m&" + strings.Repeat("a", MaxQueryBytes), LinkTooLong, "", "longer than the 8192", ""},
+		{"z1=3m&name=%ff%fe", LinkNotUTF8, "name", "not valid UTF-8", "z1"},
+		{"z1=3m&name=a%07b", LinkControl, "name", "control characters", "z1"},
+		{"z1=3m&" + strings.Repeat("é", 20) + "=1", LinkUnknown, strings.Repeat("é", 12) + "…", "not a Fieldhead parameter", "z1"},
+		{"z1=3m&%ff=1", LinkNotUTF8, "", "name or value is not valid UTF-8", "z1"},
 		// 2.7 KB of non-ASCII text triples once escaped: refused whole.
-		{"name=" + strings.Repeat("é", 1400), "once written out", ""},
+		{"name=" + strings.Repeat("é", 1400), LinkTooLongOut, "", "once written out", ""},
 	}
 	for _, tc := range tests {
 		s, err := Parse(tc.query)
-		if err == nil || !strings.Contains(err.Error(), tc.want) {
-			t.Errorf("Parse(%.40q): error %v, want it to contain %q", tc.query, err, tc.want)
+		var le *LinkError
+		if !errors.As(err, &le) || le.Kind != tc.kind || le.Name != tc.name {
+			t.Errorf("Parse(%.40q): error %#v, want kind %d naming %q", tc.query, err, tc.kind, tc.name)
+		}
+		if w := linkWorded(err); !strings.Contains(w, tc.want) {
+			t.Errorf("Parse(%.40q): error worded %q, want it to contain %q", tc.query, w, tc.want)
 		}
 		if tc.kept != "" && !s.Has(tc.kept) {
 			t.Errorf("Parse(%.40q) dropped %s", tc.query, tc.kept)
 		}
+	}
+	// Every problem of a link is listed, in link order.
+	_, err := Parse("zz=1&z1=3m&z1=4m&name=a%07b")
+	var list LinkErrors
+	if !errors.As(err, &list) || len(list) != 3 || list[0].Kind != LinkUnknown || list[1].Kind != LinkTwice || list[2].Kind != LinkControl {
+		t.Errorf("three problems: %v", err)
+	}
+	var s Scenario
+	var le *LinkError
+	if err := s.Set("zz", "1"); !errors.As(err, &le) || le.Kind != LinkUnknown || !strings.Contains(linkWorded(err), "not a Fieldhead parameter") {
+		t.Errorf("Set of an unknown parameter: %v", err)
 	}
 }
 

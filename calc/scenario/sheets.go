@@ -26,10 +26,11 @@ type SheetLine struct {
 	Line  int    // 1-based line number in the file
 	Title string // the title written before the tab
 	Scen  Scenario
-	Note  string // what was wrong with a link read only in part ("" when whole)
+	Err   error // what was wrong with a link read only in part (nil when whole), worded by present
 }
 
-// LineError is a line of a sheets file that could not be read at all.
+// LineError is a line of a sheets file that could not be read at all:
+// Err is a *LinkError (LinkNone, LinkEmpty) or what Parse returned.
 type LineError struct {
 	Line int
 	Err  error
@@ -38,7 +39,7 @@ type LineError struct {
 func (e LineError) Error() string { return fmt.Sprintf("line %d: %v", e.Line, e.Err) }
 
 // ReadSheets reads a sheets file. Every line that holds a usable link is
-// returned (with Note saying what of it was not understood); every line
+// returned (with Err saying what of it was not understood); every line
 // that holds none is reported by its number, and the others are read all
 // the same.
 func ReadSheets(text string) ([]SheetLine, []LineError) {
@@ -56,13 +57,13 @@ func ReadSheets(text string) ([]SheetLine, []LineError) {
 		}
 		q := QueryOf(link)
 		if q == "" {
-			bad = append(bad, LineError{n, fmt.Errorf("no link after the title")})
+			bad = append(bad, LineError{n, &LinkError{Kind: LinkNone}})
 			continue
 		}
 		sc, err := Parse(q)
 		if sc.Encode() == "" {
 			if err == nil {
-				err = fmt.Errorf("the link holds no value of a sheet")
+				err = &LinkError{Kind: LinkEmpty}
 			}
 			bad = append(bad, LineError{n, err})
 			continue
@@ -71,9 +72,7 @@ func ReadSheets(text string) ([]SheetLine, []LineError) {
 		if !sc.Has("name") && sl.Title != "" && utf8.ValidString(sl.Title) && printable(sl.Title) {
 			_ = sl.Scen.Set("name", sl.Title) // a link without a title takes the line's
 		}
-		if err != nil {
-			sl.Note = err.Error()
-		}
+		sl.Err = err
 		out = append(out, sl)
 	}
 	return out, bad

@@ -8,4 +8,5 @@ import (
 func init() {
 	scenario.ErrorTextForTest = present.ErrorText
 	scenario.WarningTextForTest = present.WarningText
+	scenario.LinkErrorTextForTest = present.LinkErrorText
 }

@@ -22,3 +22,15 @@ func warningWords(w Warning, us bool) string {
 
 // worded is an error as the page words it, after its field's name.
 func worded(fe *calc.FieldError, us bool) string { return fe.Field + ": " + ErrorTextForTest(fe, us) }
+
+// LinkErrorTextForTest words an error of Parse or of a sheets-file line as
+// the page does (set like ErrorTextForTest).
+var LinkErrorTextForTest = func(err error) string { return err.Error() }
+
+// linkWorded is a link error as the page words it, "" for none.
+func linkWorded(err error) string {
+	if err == nil {
+		return ""
+	}
+	return LinkErrorTextForTest(err)
+}
