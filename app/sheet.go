@@ -46,7 +46,9 @@ type sheet struct {
 // scenario from the link, else from localStorage, else the demo.
 func newSheet() app.Composer {
 	s := &sheet{}
-	if app.IsServer {
+	if app.IsServer { // the site writer's page: the demo, drawn before the wasm runs (loader.go)
+		s.adopt(scenario.Demo(), "")
+		s.wide = chartWidth()
 		return s
 	}
 	u := app.Window().URL()
@@ -355,16 +357,13 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 // Render draws the page.
 func (s *sheet) Render() (ui app.UI) {
 	defer s.containRender(&ui)
-	if !s.loaded {
-		return app.Div().ID("sheet").Class("sheet").Body(
-			&topBar{},
-			app.Main().Body(app.P().Class("starting").Text("Starting the calculator…")),
-			cautions(present.Cautions),
-		)
-	}
 	s.testPanic("render")
 	vm := &s.vm
-	return app.Div().ID("sheet").Class("sheet view-"+vm.View).Body(
+	root := app.Div().ID("sheet").Class("sheet view-" + vm.View)
+	if !s.loaded { // the site writer's copy: shown, not usable, until the wasm draws (loader.go)
+		root = root.Class("prerendered").Attr("inert", true)
+	}
+	return root.Body(
 		s.printHead(),
 		&topBar{S: s, Tabs: vm.Tabs, Units: vm.Units},
 		app.Div().Class("notices").Body(s.faultBanner(), s.updateBanner(), s.storeBanner()), // always there: a notice must not move the inputs
