@@ -122,9 +122,13 @@ func newHandler(prefix, version string, wasmSize int64) *app.Handler {
 			SVG:      "/web/icon.svg",
 		},
 		Styles:             []string{"/web/fieldhead.css"},
-		CacheableResources: []string{"/web/prerender.js", "/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
+		CacheableResources: []string{"/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
 		RawHeaders: []string{
-			`<script src="` + prefix + `/web/prerender.js"></script>`, // blocking: before the first paint (loader.go)
+			// Blocking: before the first paint (loader.go). Not in the worker's
+			// list: with it there, TestOfflineAndUpdate's new worker never
+			// installed (cause not found); offline it comes from the HTTP cache
+			// (hashed, immutable) or fails, and the demo stays hidden.
+			`<script src="` + prefix + `/web/prerender.js"></script>`,
 			preloadWasm(prefix),
 			`<meta name="color-scheme" content="light">`,
 			`<meta name="format-detection" content="telephone=no">`,

@@ -359,20 +359,22 @@ func (s *sheet) Render() (ui app.UI) {
 	defer s.containRender(&ui)
 	s.testPanic("render")
 	vm := &s.vm
-	root := app.Div().ID("sheet").Class("sheet view-" + vm.View)
-	if !s.loaded { // the site writer's copy: shown, not usable, until the wasm draws (loader.go)
-		root = root.Class("prerendered").Attr("inert", true)
+	root, lay, pre := app.Div().ID("sheet").Class("sheet view-"+vm.View), s.layout(), func(d app.HTMLDiv) app.HTMLDiv { return d }
+	h1 := vm.Name + " — Fieldhead"
+	if !s.loaded { // the site writer's copy: shown, its boxes and buttons inert until the wasm draws (loader.go)
+		root, pre, h1 = root.Class("prerendered"), func(d app.HTMLDiv) app.HTMLDiv { return d.Attr("inert", true) }, "Fieldhead"
+		lay = pre(lay.(app.HTMLDiv))
 	}
 	return root.Body(
 		s.printHead(),
 		&topBar{S: s, Tabs: vm.Tabs, Units: vm.Units},
 		app.Div().Class("notices").Body(s.faultBanner(), s.updateBanner(), s.storeBanner()), // always there: a notice must not move the inputs
-		app.Div().Class("titlerow").Attr("role", "region").Aria("label", "sheet").Body(&field{S: s, F: vm.Title}, s.shareRow()),
+		pre(app.Div().Class("titlerow")).Attr("role", "region").Aria("label", "sheet").Body(&field{S: s, F: vm.Title}, s.shareRow()),
 		s.linkProblem(),
 		app.Main().Body(
-			app.H1().Class("sr").Text(vm.Name+" — Fieldhead"),
+			app.H1().Class("sr").Text(h1),
 			app.Div().Class("notices").Body(others(vm.Others)), // a stable slot: the list appearing must not re-create the inputs
-			s.layout()),
+			lay),
 		cautions(vm.Cautions),
 		s.printFoot(),
 	)
