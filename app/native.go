@@ -122,13 +122,9 @@ func newHandler(prefix, version string, wasmSize int64) *app.Handler {
 			SVG:      "/web/icon.svg",
 		},
 		Styles:             []string{"/web/fieldhead.css"},
-		CacheableResources: []string{"/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
+		CacheableResources: []string{"/web/prerender.js", "/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
 		RawHeaders: []string{
-			// Blocking: before the first paint (loader.go). Not in the worker's
-			// list: with it there, TestOfflineAndUpdate's new worker never
-			// installed (cause not found); offline it comes from the HTTP cache
-			// (hashed, immutable) or fails, and the demo stays hidden.
-			`<script src="` + prefix + `/web/prerender.js"></script>`,
+			`<script src="` + prefix + `/web/prerender.js"></script>`, // blocking: before the first paint (loader.go)
 			preloadWasm(prefix),
 			`<meta name="color-scheme" content="light">`,
 			`<meta name="format-detection" content="telephone=no">`,
