@@ -13,14 +13,10 @@ type topBar struct {
 	Tabs, Units []present.Button
 }
 
-// Render draws the bar; before the program runs (S nil) it shows the name
-// alone.
+// Render draws the bar.
 func (t *topBar) Render() (ui app.UI) {
 	defer containPart(t.S, "the top bar", &ui)
 	brand := app.Div().Class("brand").Body(app.Raw(brandMark), app.Span().Text("Fieldhead"))
-	if t.S == nil {
-		return app.Header().Class("topbar").Body(brand)
-	}
 	tabs := make([]app.UI, len(t.Tabs))
 	for i, b := range t.Tabs {
 		tabs[i] = button(t.S, b)

@@ -48,6 +48,20 @@ func patchLoader(js string) (string, error) {
 	return js, nil
 }
 
+// patchLoaderHTML replaces go-app's loader, a full-window cover over the
+// demo sheet the site writer drew (sheet.go), by a small polite status note
+// of ours in a corner, with the ids app.js writes to. web/prerender.js, a
+// blocking script in <head>, shows the demo only where the wasm will draw
+// it too: a bare link on a device that keeps no sheet.
+func patchLoaderHTML(page []byte) ([]byte, error) {
+	loader := regexp.MustCompile(`(?s)<aside [^>]*id="app-wasm-loader"[^>]*>.*?</aside>`) // attributes in any order
+	if n := len(loader.FindAllIndex(page, -1)); n != 1 {
+		return nil, fmt.Errorf("patching go-app's page: its loader found %d times, want once", n)
+	}
+	return loader.ReplaceAll(page, []byte(`<div id="app-wasm-loader" role="status"><span id="app-wasm-loader-icon" class="goapp-spin"></span>`+
+		`<span id="app-wasm-loader-label">Fieldhead is starting…</span></div>`)), nil
+}
+
 // patchSiteLoader applies patchLoader to the site's app.js.
 func patchSiteLoader(out string) error {
 	p := filepath.Join(out, "app.js")

@@ -122,8 +122,9 @@ func newHandler(prefix, version string, wasmSize int64) *app.Handler {
 			SVG:      "/web/icon.svg",
 		},
 		Styles:             []string{"/web/fieldhead.css"},
-		CacheableResources: []string{"/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
+		CacheableResources: []string{"/web/prerender.js", "/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
 		RawHeaders: []string{
+			`<script src="` + prefix + `/web/prerender.js"></script>`, // blocking: before the first paint (loader.go)
 			preloadWasm(prefix),
 			`<meta name="color-scheme" content="light">`,
 			`<meta name="format-detection" content="telephone=no">`,
@@ -289,6 +290,9 @@ func fixMetadata(out, prefix string) error {
 			}
 			return tag
 		})
+		if page, err = patchLoaderHTML(page); err != nil {
+			return fmt.Errorf("%s: %w", p, err)
+		}
 		return os.WriteFile(p, page, 0o644)
 	})
 }

@@ -138,8 +138,8 @@ func TestOfflineAndUpdate(t *testing.T) {
 	}
 	b.waitResult()
 	if !b.poll(`document.getElementById("update") !== null`, 60*time.Second) {
-		t.Fatalf("no update offered after a changed build; version %s, caches %s", b.js(`goappGetenv("GOAPP_VERSION")`),
-			b.js(`caches.keys().then((k) => k.join(", "))`))
+		keys, _ := chromedp.Run(b.ctx, chromedp.Evaluate[string](`caches.keys().then((k) => k.join(", "))`, chromedp.EvalAwaitPromise))
+		t.Fatalf("no update offered after a changed build; version %s, caches %s", b.js(`goappGetenv("GOAPP_VERSION")`), keys)
 	}
 	if got := b.js(`goappGetenv("GOAPP_VERSION")`); got != v1 {
 		t.Errorf("before applying, the page runs %s, want the old %s", got, v1)

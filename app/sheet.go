@@ -46,7 +46,9 @@ type sheet struct {
 // scenario from the link, else from localStorage, else the demo.
 func newSheet() app.Composer {
 	s := &sheet{}
-	if app.IsServer {
+	if app.IsServer { // the site writer's page: the demo, drawn before the wasm runs (loader.go)
+		s.adopt(scenario.Demo(), "")
+		s.wide = chartWidth()
 		return s
 	}
 	u := app.Window().URL()
@@ -352,25 +354,24 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 // Render draws the page.
 func (s *sheet) Render() (ui app.UI) {
 	defer s.containRender(&ui)
-	if !s.loaded {
-		return app.Div().ID("sheet").Class("sheet").Body(
-			&topBar{},
-			app.Main().Body(app.P().Class("starting").Text("Starting the calculator…")),
-			cautions(present.Cautions),
-		)
-	}
 	s.testPanic("render")
 	vm := &s.vm
-	return app.Div().ID("sheet").Class("sheet view-"+vm.View).Body(
+	root, lay, pre := app.Div().ID("sheet").Class("sheet view-"+vm.View), s.layout(), func(d app.HTMLDiv) app.HTMLDiv { return d }
+	h1 := vm.Name + " — Fieldhead"
+	if !s.loaded { // the site writer's copy: shown, its boxes and buttons inert until the wasm draws (loader.go)
+		root, pre, h1 = root.Class("prerendered"), func(d app.HTMLDiv) app.HTMLDiv { return d.Attr("inert", true) }, "Fieldhead"
+		lay = pre(lay.(app.HTMLDiv))
+	}
+	return root.Body(
 		s.printHead(),
 		&topBar{S: s, Tabs: vm.Tabs, Units: vm.Units},
 		app.Div().Class("notices").Body(s.faultBanner(), s.updateBanner(), s.storeBanner()), // always there: a notice must not move the inputs
-		app.Div().Class("titlerow").Attr("role", "region").Aria("label", "sheet").Body(&field{S: s, F: vm.Title}, s.shareRow()),
+		pre(app.Div().Class("titlerow")).Attr("role", "region").Aria("label", "sheet").Body(&field{S: s, F: vm.Title}, s.shareRow()),
 		s.linkProblem(),
 		app.Main().Body(
-			app.H1().Class("sr").Text(vm.Name+" — Fieldhead"),
+			app.H1().Class("sr").Text(h1),
 			app.Div().Class("notices").Body(others(vm.Others)), // a stable slot: the list appearing must not re-create the inputs
-			s.layout()),
+			lay),
 		cautions(vm.Cautions),
 		s.printFoot(),
 	)

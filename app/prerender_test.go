@@ -1,0 +1,207 @@
+//go:build !wasm
+
+package main
+
+import (
+	"fmt"
+	"os"
+	"path/filepath"
+	"regexp"
+	"strings"
+	"testing"
+	"time"
+
+	"github.com/chromedp/cdproto/network"
+	"github.com/chromedp/chromedp"
+
+	"fieldhead/calc/scenario"
+	"fieldhead/calc/scenario/present"
+
+	"github.com/maxence-charriere/go-app/v10/pkg/app"
+)
+
+// demoAnswer is the demo's answer as the sheet words it (the page drawn by
+// the site writer shows it; scenario.Demo and present.Build decide it).
+func demoAnswer(t *testing.T) string {
+	t.Helper()
+	var d scenario.Draft
+	d.Reset(scenario.Demo())
+	a, _ := present.Build(&d, scenario.Evaluate(d.Scen)).Text("answer-value")
+	if a == "" || a == "—" {
+		t.Fatalf("the demo has no answer (%q): the checks below would prove nothing", a)
+	}
+	return a
+}
+
+// TestPrerenderedPage: the written page holds the demo sheet with its
+// answer, inert, go-app's full-window loader replaced by our small status
+// note, and the script that decides whether the demo may be shown.
+// (Source: this project's rule for the page before the wasm runs, issue
+// 13 item 5; `inert` and role=status as the HTML and WAI-ARIA 1.2
+// specifications define them.)
+func TestPrerenderedPage(t *testing.T) {
+	dir := t.TempDir()
+	registerRoutes()
+	if err := app.GenerateStaticWebsite(dir, newHandler("", "test", 0)); err != nil {
+		t.Fatal(err)
+	}
+	if err := fixMetadata(dir, ""); err != nil { // patchLoaderHTML too
+		t.Fatal(err)
+	}
+	b, err := os.ReadFile(filepath.Join(dir, "index.html"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	page := string(b)
+	want := demoAnswer(t)
+	for _, s := range []string{
+		`<div id="app-wasm-loader" role="status">`,
+	} {
+		if !strings.Contains(page, s) {
+			t.Errorf("index.html lacks %s", s)
+		}
+	}
+	// go-app writes attributes in map order: look at the tag whole.
+	if !regexp.MustCompile(`<div [^>]*id="answer-value"[^>]*>` + regexp.QuoteMeta(want) + `<`).MatchString(page) {
+		t.Errorf("index.html lacks the demo's answer %s", want)
+	}
+	root := regexp.MustCompile(`<div [^>]*id="sheet"[^>]*>`).FindString(page)
+	title := regexp.MustCompile(`<div [^>]*class="titlerow"[^>]*>`).FindString(page)
+	if !strings.Contains(root, "prerendered") || !strings.Contains(title, " inert") {
+		t.Errorf("the written sheet is not marked prerendered, its title row inert: %s %s", root, title)
+	}
+	if strings.Contains(page, "goapp-app-info") {
+		t.Error("index.html still has go-app's full-window loader")
+	}
+	head, _, _ := strings.Cut(page, "</head>")
+	if !strings.Contains(head, `<script src="/web/prerender.js"></script>`) {
+		t.Error("the prerender script is not a blocking script in <head>: the demo could show on a share link")
+	}
+}
+
+// TestBeforeWasm opens the site in Chromium with the wasm's request
+// blocked, then allowed: a bare visit on a fresh device shows the demo's
+// answer from the written page at once; a share link, or a device that
+// keeps a sheet, shows no demo answer before the wasm draws its own
+// sheet. Screenshots at 768×1024 and 390×844, before and after.
+// (Source: issue 13 item 5 and this project's rule that no answer is
+// shown that is not the link's; the demo answer from present.Build.)
+func TestBeforeWasm(t *testing.T) {
+	site := testSite(t)
+	b := newTab(t)
+	origin := newSiteServer(t, site).URL
+	want := demoAnswer(t)
+	block := func(on bool) {
+		var pats []*network.BlockPattern
+		if on {
+			pats = []*network.BlockPattern{{URLPattern: "*://*:*/*.wasm", Block: true}}
+		}
+		if _, err := chromedp.Call(b.ctx, network.SetBlockedURLs, network.SetBlockedURLsParams{URLPatterns: pats}); err != nil {
+			t.Fatalf("blocking the wasm: %v", err)
+		}
+	}
+	open := func(u string) {
+		if err := chromedp.Do(b.ctx, chromedp.Navigate(u)); err != nil {
+			t.Fatalf("opening %s: %v", u, err)
+		}
+	}
+	shows := func(s string) bool { return b.jsBool(fmt.Sprintf("document.body.innerText.includes(%q)", s)) }
+	size := func(w, h int64) {
+		if err := chromedp.Do(b.ctx, chromedp.EmulateViewport(w, h)); err != nil {
+			t.Fatal(err)
+		}
+	}
+	// Where the answer card is: its top, and its distance below the share
+	// row (whose install button, once the browser offers it, is the one
+	// thing above the card the written page cannot know).
+	cardTop := `(() => { const c = document.querySelector("#answer-card").getBoundingClientRect(); return Math.round(c.top + scrollY) + " " + Math.round(c.top - document.querySelector(".share").getBoundingClientRect().bottom); })()`
+
+	// axe-core (Deque's rules, as TestAxe runs them) on the page before the wasm.
+	axeNone := func(where string) {
+		vs, _ := b.runAxe(axeScript(t))
+		for _, v := range vs {
+			t.Errorf("%s: axe-core rule %s (%s, %d elements): %s\n  %s", where, v.ID, v.Impact, v.Count, v.Help, strings.Join(v.Nodes, "\n  "))
+		}
+	}
+
+	block(true)
+	tops := map[int64]string{}
+	for _, vp := range [][2]int64{{768, 1024}, {390, 844}} {
+		size(vp[0], vp[1])
+		open(origin + "/")
+		if !b.poll(`document.getElementById("app-wasm-loader-label") !== null`, 10*time.Second) {
+			t.Fatal("the page has no starting note")
+		}
+		time.Sleep(300 * time.Millisecond) // the blocked fetch fails, app.js writes the error in the note
+		if b.jsBool("window.fieldheadFirstResult > 0") {
+			t.Fatal("the wasm ran although its request was blocked")
+		}
+		if got := b.text("#answer-value"); got != want || !shows(want) {
+			t.Errorf("%d px, wasm blocked, bare visit: answer %q (shown: %v), want the demo's %q", vp[0], got, shows(want), want)
+		}
+		note := b.js(`(() => { const r = document.getElementById("app-wasm-loader").getBoundingClientRect(); return r.width + "×" + r.height; })()`)
+		if b.jsBool(`document.getElementById("app-wasm-loader").getBoundingClientRect().height > 80`) {
+			t.Errorf("%d px: the starting note is %s px, not a small note", vp[0], note)
+		}
+		if !b.jsBool(`[...document.querySelectorAll("#sheet input, #sheet select, #sheet textarea, #sheet .share button")].every((e) => e.closest("[inert]"))`) {
+			t.Error("a box or button of the written sheet is not inert: what is typed into it would be lost when the wasm draws")
+		}
+		tops[vp[0]] = b.js(cardTop)
+		t.Logf("%d×%d, wasm blocked: answer %q shown, note %s px (%q), answer card at, below the share row: %s px", vp[0], vp[1], want, note, b.text("#app-wasm-loader-label"), tops[vp[0]])
+		b.shot(fmt.Sprintf("before-wasm-%d", vp[0]))
+		axeNone(fmt.Sprintf("%d px, wasm blocked, bare visit", vp[0]))
+	}
+
+	// A share link (another sheet), and a bare visit on a device keeping a sheet.
+	sc := scenario.Demo()
+	if err := sc.Set("z2", "31 m"); err != nil {
+		t.Fatal(err)
+	}
+	var d scenario.Draft
+	d.Reset(sc)
+	linkAnswer, _ := present.Build(&d, scenario.Evaluate(sc)).Text("answer-value")
+	share := origin + "/?" + sc.Encode()
+	open(share)
+	time.Sleep(300 * time.Millisecond)
+	if shows(want) || b.jsBool(`getComputedStyle(document.querySelector("#answer-value")).visibility !== "hidden"`) {
+		t.Errorf("a share link showed the demo's answer %q before the wasm ran", want)
+	}
+	if !shows("Fieldhead is starting") && !shows("Failed") {
+		t.Error("a share link shows no starting note")
+	}
+	b.shot("before-wasm-share-390")
+	axeNone("390 px, wasm blocked, share link")
+	b.js(`localStorage.setItem("` + storageKey + `", "z2=31m"); ""`)
+	open(origin + "/")
+	time.Sleep(300 * time.Millisecond)
+	if shows(want) {
+		t.Errorf("a device keeping a sheet showed the demo's answer %q before the wasm ran", want)
+	}
+
+	// The wasm takes over: the demo on a fresh device, then the link's sheet.
+	block(false)
+	b.js(`localStorage.clear(); ""`) // no wasm has run yet to keep a sheet again
+	for _, vp := range [][2]int64{{768, 1024}, {390, 844}} {
+		size(vp[0], vp[1])
+		b.js(`window.fieldheadFirstResult = 0; ""`)
+		b.navigate(origin + "/")
+		if got := b.text("#answer-value"); got != want {
+			t.Errorf("%d px, after the wasm: answer %q, want %q", vp[0], got, want)
+		}
+		if b.jsBool(`document.getElementById("app-wasm-loader") !== null || document.querySelector("#sheet [inert], .prerendered") !== null`) {
+			t.Error("after the wasm the starting note or the inert sheet remains")
+		}
+		after := b.js(cardTop)
+		t.Logf("%d×%d, live: answer card at, below the share row: %s px (written page: %s px)", vp[0], vp[1], after, tops[vp[0]])
+		if strings.Fields(after)[1] != strings.Fields(tops[vp[0]])[1] {
+			t.Errorf("%d px: the answer card moved against the share row when the wasm drew (%s → %s px)", vp[0], tops[vp[0]], after)
+		}
+		b.shot(fmt.Sprintf("after-wasm-%d", vp[0]))
+	}
+	b.js(`window.fieldheadFirstResult = 0; ""`)
+	b.navigate(share)
+	if got := b.text("#answer-value"); got != linkAnswer || got == want {
+		t.Errorf("after the wasm, the share link's answer is %q, want %q", got, linkAnswer)
+	}
+	b.noProblems("before and after the wasm")
+}
