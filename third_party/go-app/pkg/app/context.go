@@ -2,12 +2,10 @@ package app
 
 import (
 	"context"
-	"encoding/json"
 	"net/url"
 	"strings"
 	"time"
 
-	"github.com/google/uuid"
 	"github.com/maxence-charriere/go-app/v10/pkg/errors"
 )
 
@@ -86,7 +84,7 @@ func (ctx Context) DeviceID() string {
 		return id
 	}
 
-	id = uuid.NewString()
+	id = newID()
 	if err := ctx.localStorage.Set("/go-app/deviceID", id); err != nil {
 		panic(errors.New("creating device id failed").Wrap(err))
 	}
@@ -150,7 +148,7 @@ func (ctx Context) SessionStorage() BrowserStorage {
 
 // Encrypt enciphers a value using AES encryption.
 func (ctx Context) Encrypt(v any) ([]byte, error) {
-	b, err := json.Marshal(v)
+	b, err := jsonMarshal(v)
 	if err != nil {
 		return nil, errors.New("encoding value failed").Wrap(err)
 	}
@@ -169,7 +167,7 @@ func (ctx Context) Decrypt(crypted []byte, v any) error {
 		return errors.New("decrypting value failed").Wrap(err)
 	}
 
-	if err := json.Unmarshal(b, v); err != nil {
+	if err := jsonUnmarshal(b, v); err != nil {
 		return errors.New("decoding value failed").Wrap(err)
 	}
 	return nil

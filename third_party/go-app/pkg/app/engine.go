@@ -3,7 +3,6 @@ package app
 import (
 	"bytes"
 	"context"
-	"encoding/json"
 	"net/url"
 	"reflect"
 	"strings"
@@ -178,7 +177,7 @@ func (e *engineX) mailTo(v *url.URL) bool {
 
 func (e *engineX) internalURL(v *url.URL) bool {
 	if e.internalURLs == nil {
-		json.Unmarshal([]byte(Getenv("GOAPP_INTERNAL_URLS")), &e.internalURLs)
+		jsonUnmarshal([]byte(Getenv("GOAPP_INTERNAL_URLS")), &e.internalURLs)
 	}
 
 	url := v.String()

@@ -1,8 +1,6 @@
 package app
 
 import (
-	"encoding/json"
-
 	"github.com/maxence-charriere/go-app/v10/pkg/errors"
 )
 
@@ -142,7 +140,7 @@ func (s NotificationService) RequestPermission() NotificationPermission {
 
 // New creates and displays a notification to the user.
 func (s NotificationService) New(n Notification) {
-	notification, _ := json.Marshal(n)
+	notification, _ := jsonMarshal(n)
 	Window().Call("goappNewNotification", string(notification))
 }
 
@@ -168,7 +166,7 @@ func (s NotificationService) Subscribe(vapIDPublicKey string) (NotificationSubsc
 	}
 
 	var sub NotificationSubscription
-	err := json.Unmarshal([]byte(jsSub), &sub)
+	err := jsonUnmarshal([]byte(jsSub), &sub)
 	if err != nil {
 		return NotificationSubscription{}, errors.
 			New("failed to decode push notification subscription").Wrap(err)

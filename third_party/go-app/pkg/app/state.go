@@ -1,12 +1,10 @@
 package app
 
 import (
-	"encoding/json"
 	"reflect"
 	"sync"
 	"time"
 
-	"github.com/google/uuid"
 	"github.com/maxence-charriere/go-app/v10/pkg/errors"
 )
 
@@ -56,9 +54,9 @@ func (s State) Broadcast() State {
 }
 
 type storableState struct {
-	Value          json.RawMessage `json:",omitempty"`
-	EncryptedValue []byte          `json:",omitempty"`
-	ExpiresAt      time.Time       `json:",omitempty"`
+	Value          jsonRawMessage `json:",omitempty"`
+	EncryptedValue []byte         `json:",omitempty"`
+	ExpiresAt      time.Time      `json:",omitempty"`
 }
 
 // Observer represents a mechanism to monitor and react to changes in a state.
@@ -208,7 +206,7 @@ func (m *stateManager) getStoredState(ctx Context, state string, receiver any) e
 	if len(value.EncryptedValue) != 0 {
 		return ctx.Decrypt(value.EncryptedValue, receiver)
 	} else if len(value.Value) != 0 {
-		return json.Unmarshal(value.Value, receiver)
+		return jsonUnmarshal(value.Value, receiver)
 	}
 	return nil
 }
@@ -299,7 +297,7 @@ func (m *stateManager) persist(s State, encrypt bool) State {
 		}
 		value.EncryptedValue = b
 	} else {
-		b, err := json.Marshal(s.value)
+		b, err := jsonMarshal(s.value)
 		if err != nil {
 			Log(errors.New("persisting state failed").
 				WithTag("state", s.name).
@@ -329,7 +327,7 @@ func (m *stateManager) broadcast(s State) State {
 		return s
 	}
 
-	b, err := json.Marshal(s.value)
+	b, err := jsonMarshal(s.value)
 	if err != nil {
 		Log(errors.New("encoding broadcast state failed").
 			WithTag("state", s.name).
@@ -353,7 +351,7 @@ func (m *stateManager) initBroadcast(ctx Context) {
 		}
 		broadcastChannel = broadcastChannel.New("go-app-broadcast-states")
 		m.broadcastChannel = broadcastChannel
-		m.broadcastStoreID = uuid.NewString()
+		m.broadcastStoreID = newID()
 
 		handleBroadcast := FuncOf(func(this Value, args []Value) any {
 			m.handleBroadcast(ctx, args[0].Get("data"))
@@ -389,7 +387,7 @@ func (m *stateManager) handleBroadcast(ctx Context, data Value) {
 				return
 			}
 
-			if err := json.Unmarshal(value, o.receiver); err != nil {
+			if err := jsonUnmarshal(value, o.receiver); err != nil {
 				Log(errors.New("storing broadcast state value into receiver failed").
 					WithTag("state", state).
 					WithTag("observer-type", reflect.TypeOf(o.source)).

@@ -1,7 +1,6 @@
 package app
 
 import (
-	"encoding/json"
 	"sync"
 
 	"github.com/maxence-charriere/go-app/v10/pkg/errors"
@@ -60,7 +59,7 @@ func newMemoryStorage() *memoryStorage {
 }
 
 func (s *memoryStorage) Set(k string, v any) error {
-	b, err := json.Marshal(v)
+	b, err := jsonMarshal(v)
 	if err != nil {
 		return err
 	}
@@ -80,7 +79,7 @@ func (s *memoryStorage) Get(k string, v any) error {
 	}
 
 	s.mu.RUnlock()
-	return json.Unmarshal(d, v)
+	return jsonUnmarshal(d, v)
 }
 
 func (s *memoryStorage) Del(k string) {
@@ -138,7 +137,7 @@ func (s *jsStorage) Set(k string, v any) (err error) {
 	s.mutex.Lock()
 	defer s.mutex.Unlock()
 
-	b, err := json.Marshal(v)
+	b, err := jsonMarshal(v)
 	if err != nil {
 		return err
 	}
@@ -156,7 +155,7 @@ func (s *jsStorage) Get(k string, v any) error {
 		return nil
 	}
 
-	return json.Unmarshal([]byte(item.String()), v)
+	return jsonUnmarshal([]byte(item.String()), v)
 }
 
 func (s *jsStorage) Del(k string) {

@@ -1,7 +1,6 @@
 package app
 
 import (
-	"encoding/json"
 	"fmt"
 	"reflect"
 	"strconv"
@@ -116,7 +115,7 @@ func AppendClass(class string, v ...string) string {
 }
 
 func jsonString(v any) string {
-	b, err := json.Marshal(v)
+	b, err := jsonMarshal(v)
 	if err != nil {
 		panic(errors.New("converting value to json string failed").Wrap(err))
 	}

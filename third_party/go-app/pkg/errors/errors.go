@@ -1,7 +1,6 @@
 package errors
 
 import (
-	"encoding/json"
 	"errors"
 	"fmt"
 	"path/filepath"
@@ -21,15 +20,13 @@ func init() {
 // SetInlineEncoder is a helper function that set the error encoder to
 // json.Marshal.
 func SetInlineEncoder() {
-	Encoder = json.Marshal
+	Encoder = inlineEncoder
 }
 
 // SetIndentEncoder is a helper function that set the error encoder to a
 // function that uses json.MarshalIndent.
 func SetIndentEncoder() {
-	Encoder = func(v any) ([]byte, error) {
-		return json.MarshalIndent(v, "", "  ")
-	}
+	Encoder = indentEncoder
 }
 
 // Unwrap returns the result of calling the Unwrap method on err, if err's type
