@@ -59,9 +59,8 @@ func (s *sheet) shareRow() app.UI {
 	return app.Div().Class("share").Body(body...)
 }
 
-// act is a button of the page's own (not of the view model). Not
-// inlined: go-app's element builders are, and a copy per button made the
-// wasm larger.
+// act is a button of the page's own (not of the view model); not inlined,
+// as a copy of go-app's builders per button made the wasm larger.
 //
 //go:noinline
 func act(id, class, text string, h app.EventHandler) app.UI {
@@ -77,13 +76,9 @@ func pageTitle(name string) string {
 	return name + " — Fieldhead"
 }
 
-// Installing. go-app's app.js keeps the browser's beforeinstallprompt
-// event (and stops the browser's own banner); the sheet offers its own
-// button while the browser would install the site, and drops it once the
-// site is installed or the prompt is used. Apple's browsers have no prompt
-// (installing is "Add to Home Screen" in their share menu): no button.
-
-// installable reports whether the browser has offered installation.
+// installable reports whether the browser has offered installation: go-app
+// keeps beforeinstallprompt for our own button. Apple's browsers have no
+// prompt ("Add to Home Screen" in their share menu), so no button there.
 func installable(ctx app.Context) bool {
 	return app.IsClient && ctx.IsAppInstallable() && !ctx.IsAppleBrowser()
 }
@@ -106,12 +101,9 @@ func (s *sheet) onInstall(ctx app.Context, e app.Event) {
 }
 
 // quietFirstInstall stops go-app's "has been updated, reload" message on a
-// page that no service worker served: on a first visit our worker installs
-// and takes the page over (clients.claim, worker.go), which go-app's
-// app.js takes for an update. A real update still shows: update.go checks
-// the caches on the worker's controllerchange. (app.js signals through
-// window.goappOnUpdate; a signal before the program started is go-app's
-// to report and is not caught here.)
+// page no service worker served: our worker's clients.claim on a first
+// visit looks like an update to app.js. A real update still shows (update.go
+// checks the caches on controllerchange); a signal before start is missed.
 func quietFirstInstall() {
 	if !app.IsClient {
 		return
