@@ -382,6 +382,8 @@ func (c *countingWriter) Write(b []byte) (int, error) {
 // figure in #answer-value (window.fieldheadShown, ms since navigation).
 const shownJS = `(() => {
   const check = () => {
+    // The written page's demo answer (.prerendered) is not the live one.
+    if (document.querySelector(".prerendered")) return false;
     const el = document.getElementById("answer-value");
     const t = el ? el.textContent.trim() : "";
     if (t === "" || t === "—") return false;
