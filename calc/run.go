@@ -131,8 +131,8 @@ func (r Run) lumped() Run {
 // (unknown key, negative count, bad K override, a diameter outside the
 // method's range, re not positive) or "k" (bad ExtraK).
 func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
-	if !frCheckNonNeg(r.ExtraK) {
-		return nil, 0, NewFieldError("k", Negative).Got(Num(r.ExtraK))
+	if err := r.checkFittings(); err != nil {
+		return nil, 0, err
 	}
 	sum := r.ExtraK
 	if r.extraK1 > 0 && !math.IsInf(re, 1) {
@@ -141,19 +141,9 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 	var out []FittingK
 	ft := 0.0 // Crane's f_T at the run's diameter, once found
 	for _, fc := range r.Fittings {
-		f := frFitting(fc.Key)
-		if f == nil {
-			_, err := LookupFitting(fc.Key)
-			return nil, 0, err
-		}
-		if fc.Count < 0 {
-			return nil, 0, NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(float64(fc.Count))).Because(ReasonFittingCount)
-		}
+		f := frFitting(fc.Key) // known: checkFittings
 		fk := FittingK{Key: f.Key, Count: fc.Count}
 		if fc.Override {
-			if !frCheckNonNeg(fc.K) {
-				return nil, 0, NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(fc.K)).Because(ReasonFittingK)
-			}
 			fk.K, fk.Method, fk.Formula = fc.K, "given", "K = "+frG(fc.K)
 		} else {
 			err := frCheckKInputs(r.Diameter, re)
@@ -173,6 +163,27 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 		out = append(out, fk)
 	}
 	return out, sum, nil
+}
+
+// checkFittings checks what does not depend on the size: ExtraK, and each
+// fitting's key, count and given K.
+func (r Run) checkFittings() error {
+	if !frCheckNonNeg(r.ExtraK) {
+		return NewFieldError("k", Negative).Got(Num(r.ExtraK))
+	}
+	for _, fc := range r.Fittings {
+		if frFitting(fc.Key) == nil {
+			_, err := LookupFitting(fc.Key)
+			return err
+		}
+		if fc.Count < 0 {
+			return NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(float64(fc.Count))).Because(ReasonFittingCount)
+		}
+		if fc.Override && !frCheckNonNeg(fc.K) {
+			return NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(fc.K)).Because(ReasonFittingK)
+		}
+	}
+	return nil
 }
 
 // anyFitting reports whether a fitting of the run, present and not given

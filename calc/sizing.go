@@ -83,19 +83,8 @@ func SizeRun(r Run, fl Fluid, q float64, sizes []PipeSize, lim SizingLimits) ([]
 			return nil, err
 		}
 	}
-	if !frCheckNonNeg(r.ExtraK) {
-		return nil, NewFieldError("k", Negative).Got(Num(r.ExtraK))
-	}
-	for _, fc := range r.Fittings {
-		if _, err := LookupFitting(fc.Key); err != nil {
-			return nil, err
-		}
-		if fc.Count < 0 {
-			return nil, NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(float64(fc.Count))).Because(ReasonFittingCount)
-		}
-		if fc.Override && !frCheckNonNeg(fc.K) {
-			return nil, NewFieldError("fit", Negative).Typed(fc.Key).Got(Num(fc.K)).Because(ReasonFittingK)
-		}
+	if err := r.checkFittings(); err != nil {
+		return nil, err
 	}
 	out := make([]SizingRow, len(sizes))
 	for i, p := range sizes {

@@ -158,19 +158,28 @@ func (e *eval) pressure(param string, unknown, solve calc.Unknown, ok *bool) flo
 // absolute decides whether a pressure is absolute: its unit's suffix wins,
 // then the ref parameter (g or a), then gauge.
 func (e *eval) absolute(refParam string, ref calc.PressureRef) (bool, bool) {
+	abs, ok := isAbsolute(e.s.Get(refParam), ref)
+	if !ok {
+		e.bad(refParam, calc.UnknownChoice).Typed(e.s.Get(refParam))
+	}
+	return abs, ok
+}
+
+// isAbsolute is the rule of absolute without recording anything: false
+// for ok when refText is neither blank, g nor a (and the unit has no suffix).
+func isAbsolute(refText string, ref calc.PressureRef) (abs, ok bool) {
 	switch ref {
 	case calc.Absolute:
 		return true, true
 	case calc.Gauge:
 		return false, true
 	}
-	switch strings.TrimSpace(e.s.Get(refParam)) {
+	switch strings.TrimSpace(refText) {
 	case "", "g":
 		return false, true
 	case "a":
 		return true, true
 	}
-	e.bad(refParam, calc.UnknownChoice).Typed(e.s.Get(refParam))
 	return false, false
 }
 

@@ -328,16 +328,11 @@ func (e *eval) linePressure() (float64, LiquidSource, bool) {
 		if err != nil {
 			continue
 		}
-		switch strings.TrimSpace(e.s.Get(pt + "ref")) {
-		case "a":
-			if ref == calc.RefUnspecified {
-				ref = calc.Absolute
-			}
-		case "", "g":
-		default:
+		abs, good := isAbsolute(e.s.Get(pt+"ref"), ref) // a bad ref is the balance's to report
+		if !good {
 			continue
 		}
-		if ref != calc.Absolute {
+		if !abs {
 			p += site
 		}
 		sum += p

@@ -1,6 +1,7 @@
 package present
 
 import (
+	"math"
 	"strconv"
 	"strings"
 
@@ -150,7 +151,7 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 		return "+ " + b.head(v)
 	}
 	src := "pressure on the source surface (" + b.absolute(n.PressureHead*b.r.Fluid.Density*calc.StandardGravity) + ")"
-	if b.r.SitePressure > 0 && abs(n.PressureHead*b.r.Fluid.Density*calc.StandardGravity-b.r.SitePressure) < 1 {
+	if b.r.SitePressure > 0 && math.Abs(n.PressureHead*b.r.Fluid.Density*calc.StandardGravity-b.r.SitePressure) < 1 {
 		src = "atmosphere on the source surface (site pressure " + b.absolute(b.r.SitePressure) + ")"
 	}
 	static := "source surface above the pump centreline"
@@ -187,13 +188,6 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 		)
 	}
 	return level, Block{Kind: BlockFacts, ID: "npsh-facts", Class: "facts", Facts: fs}, text("note-text", "npsh-note", b.caution(n.Note))
-}
-
-func abs(x float64) float64 {
-	if x < 0 {
-		return -x
-	}
-	return x
 }
 
 // npshCard is NPSH available against required, from the suction side
