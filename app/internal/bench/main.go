@@ -20,6 +20,10 @@
 //     painted; the bytes the server sent until the service worker had
 //     installed (status lines, headers, bodies as sent); then, in the same
 //     profile on the same link, another never-seen link.
+//   - phone_bare_written_answer_ms, phone_bare_live_answer_ms: a fresh
+//     profile opens the bare page (no query) on the same link and CPU, to
+//     the end of the first frame that paints the written page's demo answer
+//     (window.fieldheadPreShown in shownJS), and to the live answer.
 //   - repeat_visit_ms: on loopback, 4× CPU, a new navigation to the link
 //     with the worker in control and the compiled wasm cached; median.
 //   - cold_load_ms: a new Chromium with a fresh profile for each load, CPU
@@ -91,6 +95,7 @@ const (
 	budgetWasmBrotli   = 1.5e6 // bytes
 	budgetWasmGzip     = 2.0e6 // bytes
 	budgetPhoneFirst   = 10000 // ms, first visit to first answer, phone-class link
+	budgetBareWritten  = 2000  // ms, first visit to the bare page's written answer, phone-class link
 	budgetColdLoad     = 800   // ms
 	budgetOfflineLoad  = 300   // ms
 	budgetEditP95      = 25    // ms
@@ -119,6 +124,7 @@ var (
 	benchtime  = flag.String("benchtime", "1s", "go test -benchtime for the calc benchmarks")
 	wasmSrc    = flag.String("app", "./app", "the app package, built unstripped to read the wasm's composition")
 	phoneOnly  = flag.Bool("phone-only", false, "only the phone-class figures and the sizes (to compare builds quickly)")
+	bareOnly   = flag.Bool("bare-only", false, "only the bare page's first visit on the phone-class link")
 	editOnly   = flag.Bool("edits-only", false, "only the edit figures, on one loaded page (to compare builds quickly)")
 	partsOf    = flag.String("parts", "", "only list the code of this wasm (built without -s) by package, largest first")
 	profileTop = flag.Int("profile", 0, "with -edits-only: list this many functions of Chromium's CPU profile of the timed edits")
@@ -165,6 +171,11 @@ func main() {
 		}
 		return
 	}
+	if *bareOnly {
+		r.bare(origin)
+		r.print()
+		return
+	}
 	if *editOnly {
 		editsOnly(origin + "/?" + scenario.Demo().Encode())
 		return
@@ -179,6 +190,9 @@ func main() {
 
 	log.Print("browser: first and repeat visit on a phone-class link …")
 	r.phone(origin, wire)
+
+	log.Print("browser: first visit to the bare page on a phone-class link …")
+	r.bare(origin)
 
 	log.Print("browser: can Chromium keep the compiled wasm …")
 	r.codeCache(neverSeen(origin, 3))
@@ -380,7 +394,20 @@ func (c *countingWriter) Write(b []byte) (int, error) {
 
 // shownJS records, in the page, the end of the first frame that paints a
 // figure in #answer-value (window.fieldheadShown, ms since navigation).
+//
+// It also records, in window.fieldheadPreShown, when the written page's own
+// answer (.prerendered #answer-value) was first painted: what a bare link
+// shows before the wasm runs.
 const shownJS = `(() => {
+  // The paint of the written answer, by the Element Timing API (the
+  // figure carries elementtiming="answer-value").
+  new PerformanceObserver((list) => {
+    for (const e of list.getEntries()) {
+      if (e.identifier === "answer-value" && e.element && e.element.closest(".prerendered") && !window.fieldheadPreShown) {
+        window.fieldheadPreShown = e.renderTime || e.loadTime;
+      }
+    }
+  }).observe({type: "element", buffered: true});
   const check = () => {
     // The written page's demo answer (.prerendered) is not the live one.
     if (document.querySelector(".prerendered")) return false;
@@ -594,6 +621,42 @@ func neverSeen(origin string, n int) string {
 	_ = sc.Set("z2", strconv.Itoa(240+n)+"m")
 	_ = sc.Set("q", strconv.Itoa(38+n)+"L/s")
 	return origin + "/?" + sc.Encode()
+}
+
+// bare measures a first visit to the bare page (no query: the written
+// page's demo sheet) on the phone-class link with the CPU slowed: to its
+// written answer painted, and to the live answer.
+func (r *report) bare(origin string) {
+	s, err := newSession()
+	if err != nil {
+		log.Fatal(err)
+	}
+	defer s.cancel()
+	if err := s.phoneLink(); err != nil {
+		log.Fatal(err)
+	}
+	if err := chromedp.Do(s.ctx, chromedp.Navigate(origin+"/")); err != nil {
+		log.Fatal(err)
+	}
+	live, err := s.waitShown()
+	if err != nil {
+		log.Fatalf("phone-class bare page: %v", err)
+	}
+	pre, err := chromedp.Run(s.ctx, chromedp.Evaluate[float64]("window.fieldheadPreShown || 0"))
+	if err != nil || pre == 0 {
+		log.Fatalf("phone-class bare page: the written answer was never painted (%v)", err)
+	}
+	log.Printf("  phone-class bare page: written answer %.0f ms, live %.0f ms", pre, live)
+	// Where the time went: each fetch's start and end, and the first paint.
+	timeline, _ := chromedp.Run(s.ctx, chromedp.Evaluate[string](`performance.getEntries().filter(e => e.entryType === "resource" || e.entryType === "paint").
+	  map(e => (e.name.split("/").pop() || "/") + " " + Math.round(e.startTime) + "–" + Math.round(e.responseEnd || e.startTime)).join(", ")`))
+	log.Printf("  phone-class bare page timeline, ms: %s", timeline)
+	th := fmt.Sprintf("%g× CPU", *throttle)
+	link := fmt.Sprintf("%.1f Mbps, %d ms RTT, %s", phoneDownBytesPerS*8/1e6, phoneRTTms, th)
+	r.JSON["phone_bare_written_answer_ms"] = round1(pre)
+	r.JSON["phone_bare_live_answer_ms"] = round1(live)
+	r.row("first visit, bare page → written answer painted, ms ("+link+")", f0(pre), "≤ 2 000", ptr(pre <= budgetBareWritten))
+	r.row("first visit, bare page → live answer, ms ("+link+")", f0(live), "", nil)
 }
 
 // codeCache shows whether the page lets Chromium keep the compiled wasm
