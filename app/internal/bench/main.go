@@ -597,6 +597,19 @@ func (s *browserSession) offline() error {
 	return errors.New("no service worker to take offline")
 }
 
+// phoneSession starts a session on the phone-class link.
+func phoneSession() *browserSession {
+	s, err := newSession()
+	if err != nil {
+		log.Fatal(err)
+	}
+	if err := s.phoneLink(); err != nil {
+		s.cancel()
+		log.Fatal(err)
+	}
+	return s
+}
+
 // phoneLink slows the page's network to the brief's phone-class link.
 func (s *browserSession) phoneLink() error {
 	params := network.EmulateNetworkConditionsByRuleParams{MatchedNetworkConditions: []*network.Conditions{{
@@ -627,14 +640,8 @@ func neverSeen(origin string, n int) string {
 // page's demo sheet) on the phone-class link with the CPU slowed: to its
 // written answer painted, and to the live answer.
 func (r *report) bare(origin string) {
-	s, err := newSession()
-	if err != nil {
-		log.Fatal(err)
-	}
+	s := phoneSession()
 	defer s.cancel()
-	if err := s.phoneLink(); err != nil {
-		log.Fatal(err)
-	}
 	if err := chromedp.Do(s.ctx, chromedp.Navigate(origin+"/")); err != nil {
 		log.Fatal(err)
 	}
@@ -703,14 +710,8 @@ func (r *report) codeCache(link string) {
 // worker had installed, and then a repeat visit (another never-seen link)
 // on the same link.
 func (r *report) phone(origin string, wire *meter) {
-	s, err := newSession()
-	if err != nil {
-		log.Fatal(err)
-	}
+	s := phoneSession()
 	defer s.cancel()
-	if err := s.phoneLink(); err != nil {
-		log.Fatal(err)
-	}
 	wire.take()
 	if err := chromedp.Do(s.ctx, chromedp.Navigate(neverSeen(origin, 1))); err != nil {
 		log.Fatal(err)
