@@ -5,6 +5,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"unicode"
 
 	"fieldhead/calc"
 )
@@ -156,11 +157,39 @@ func (d *Draft) RemoveRow(row int) {
 }
 
 // SurveyPoint is one row of a pasted survey: a chainage and an elevation,
-// as typed (in the sheet's length unit).
+// as typed, in the units the header row names for their columns (ChainUnit,
+// ElevUnit: a length unit's symbol) or, where it names none, in the sheet's
+// length unit ("").
 type SurveyPoint struct {
 	Line                int // 1-based line of the pasted text
 	Chainage, Elevation float64
 	ChainText, ElevText string
+	ChainUnit, ElevUnit string
+}
+
+// headerUnit is the length unit a header cell names ("Chainage (ft)",
+// "Level [m]", "elevation in ft", "km"): the last of its lengthWords,
+// inside brackets if there are any; "" when it names none.
+func headerUnit(cell string) string {
+	if i := strings.IndexAny(cell, "(["); i >= 0 {
+		cell = cell[i+1:]
+	}
+	us := lengthWords(cell)
+	if len(us) == 0 {
+		return ""
+	}
+	return us[len(us)-1]
+}
+
+// lengthWords are the words of text that are length units, as symbols.
+func lengthWords(text string) []string {
+	var us []string
+	for _, w := range strings.FieldsFunc(text, func(r rune) bool { return unicode.IsSpace(r) || strings.ContainsRune("()[],;:", r) }) {
+		if u, err := calc.LookupUnit(w); err == nil && u.Dim == calc.Length {
+			us = append(us, u.Symbol)
+		}
+	}
+	return us
 }
 
 // ParseSurvey reads a table of chainage and elevation as a spreadsheet
@@ -168,7 +197,9 @@ type SurveyPoint struct {
 // semicolon or a comma (the first of these the text holds, in that order;
 // spaces when it holds none), further columns ignored. Where the
 // separator is not a comma a decimal comma is read as a point. A first row
-// that is not numbers is a header and skipped; blank lines are skipped.
+// that is not numbers is a header: the length units its two cells name are
+// those of the columns (see headerUnit), and it is skipped; blank lines are
+// skipped.
 // Each other row that cannot be used is a problem naming its line: a cell
 // that is not a number, a missing elevation, a chainage not beyond the
 // previous point's. The good rows are returned.
@@ -196,6 +227,7 @@ func ParseSurvey(text string) (pts []SurveyPoint, problems []string) {
 		return v, c, err == nil && !math.IsInf(v, 0) && !math.IsNaN(v) && math.Abs(v) < 1e7
 	}
 	first := true
+	var cu, eu string // the header's units
 	for i, l := range lines {
 		if strings.TrimSpace(l) == "" {
 			continue
@@ -213,7 +245,22 @@ func ParseSurvey(text string) (pts []SurveyPoint, problems []string) {
 		c, ct, okc := num(cs[0])
 		z, zt, okz := num(cs[1])
 		switch {
+		case header && !okc && !okz && sep != "":
+			cu, eu = headerUnit(cs[0]), headerUnit(cs[1])
+			continue
 		case header && !okc && !okz:
+			// Spaces part the columns and the words alike: one unit named
+			// is both columns', two are each column's, more cannot be told apart.
+			switch us := lengthWords(l); len(us) {
+			case 0:
+			case 1:
+				cu, eu = us[0], us[0]
+			case 2:
+				cu, eu = us[0], us[1]
+			default:
+				problems = append(problems, fmt.Sprintf("line %d: the header names the units %s and cannot be read column by column; the figures are taken in the sheet's length unit",
+					i+1, strings.Join(us, ", ")))
+			}
 			continue
 		case !okc:
 			problems = append(problems, fmt.Sprintf("line %d: the chainage %q is not a number", i+1, strings.TrimSpace(cs[0])))
@@ -226,7 +273,7 @@ func ParseSurvey(text string) (pts []SurveyPoint, problems []string) {
 				i+1, ct, pts[len(pts)-1].ChainText))
 			continue
 		}
-		pts = append(pts, SurveyPoint{Line: i + 1, Chainage: c, Elevation: z, ChainText: ct, ElevText: zt})
+		pts = append(pts, SurveyPoint{Line: i + 1, Chainage: c, Elevation: z, ChainText: ct, ElevText: zt, ChainUnit: cu, ElevUnit: eu})
 	}
 	return pts, problems
 }
@@ -236,7 +283,10 @@ func ParseSurvey(text string) (pts []SurveyPoint, problems []string) {
 // end elevation is the second point's and whose length is the slope
 // length between them, sqrt(Δchainage² + Δelevation²), since a surveyor's
 // chainage is measured on the horizontal and friction goes with the length
-// of pipe laid. Figures are in the sheet's length unit.
+// of pipe laid. Figures are in the sheet's length unit, or in the units the
+// survey's header row names: lengths then in the chainage column's unit,
+// elevations in the elevation column's, to the millimetre (a note says
+// which units were read).
 //
 // Segment k of the sheet takes the k-th run of the survey: its length and
 // end elevation change, its pipe, wall, fittings and components stay. New
@@ -268,6 +318,19 @@ func (d *Draft) PasteProfile(text string) bool {
 		d.AddSegment()
 	}
 	lu, zu := DefaultUnit("l", d.US()), DefaultUnit("z1", d.US())
+	if u := pts[0].ChainUnit; u != "" && u != lu {
+		lu = u
+		d.SurveyNotes = append(d.SurveyNotes, "the header gives the chainage in "+u+": lengths are written in "+u)
+	}
+	if u := pts[0].ElevUnit; u != "" && u != zu {
+		zu = u
+		d.SurveyNotes = append(d.SurveyNotes, "the header gives the elevation in "+u+": elevations are written in "+u)
+	}
+	// The elevation difference in the chainage's unit (a ratio of exactly
+	// 1 when the units are the same), and the millimetre in that unit.
+	lunit, _ := calc.LookupUnit(lu)
+	zunit, _ := calc.LookupUnit(zu)
+	ratio, mm := zunit.Factor/lunit.Factor, math.Pow(10, 3+math.Ceil(math.Log10(lunit.Factor)))
 	before := d.Scen.Encode()
 	n := len(pts) - 1
 	for d.ShownSegments() < n {
@@ -275,8 +338,8 @@ func (d *Draft) PasteProfile(text string) bool {
 	}
 	for k := 1; k <= n; k++ {
 		a, b := pts[k-1], pts[k]
-		dc, dz := b.Chainage-a.Chainage, b.Elevation-a.Elevation
-		l := math.Round(math.Hypot(dc, dz)*1000) / 1000
+		dc, dz := b.Chainage-a.Chainage, (b.Elevation-a.Elevation)*ratio
+		l := math.Round(math.Hypot(dc, dz)*mm) / mm
 		d.set(SegmentParam(k, "l"), strconv.FormatFloat(l, 'f', -1, 64)+lu)
 		d.set(SegmentParam(k, "z"), b.ElevText+zu)
 	}

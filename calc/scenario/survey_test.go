@@ -88,3 +88,56 @@ func TestPasteProfileKeepsTheSheet(t *testing.T) {
 		t.Errorf("one point: notes %q", d.SurveyNotes)
 	}
 }
+
+// TestPasteProfileHeaderUnits: a header row that names length units sets
+// the columns' units (never a silent reading in the sheet's unit): lengths
+// are written in the chainage's unit, elevations in the elevation's, to the
+// millimetre. Slope lengths by python3 math.hypot: hypot(100, 11.5) =
+// 100.659…; hypot(0.1 km, 3.5 m = 0.0035 km) = 0.1000612… km;
+// hypot(30, 1.2) = 30.024.
+func TestPasteProfileHeaderUnits(t *testing.T) {
+	tests := []struct {
+		name, us, text string
+		want           map[string]string
+		notes          []string
+	}{
+		{"feet on an SI sheet", "si", "Chainage (ft)\tElevation (ft)\n0\t700\n100\t711.5\n",
+			map[string]string{"s1.l": "100.659ft", "s1.z": "711.5ft", "z1": "700ft"},
+			[]string{"chainage in ft", "elevation in ft"}},
+		{"km and m, semicolons, decimal commas", "si", "Chainage [km];Level [m]\n0;212\n0,1;215,5\n",
+			map[string]string{"s1.l": "0.100061km", "s1.z": "215.5m", "z1": "212m"},
+			[]string{"chainage in km"}},
+		{"metres on a US sheet", "us", "station (m),elevation in m\n0,10\n30,11.2\n",
+			map[string]string{"s1.l": "30.024m", "s1.z": "11.2m", "z1": "10m"},
+			[]string{"chainage in m", "elevation in m"}},
+		{"spaces, one unit for both", "si", "chainage elevation (ft)\n0 700\n100 711.5\n",
+			map[string]string{"s1.l": "100.659ft", "s1.z": "711.5ft"}, []string{"chainage in ft", "elevation in ft"}},
+		{"the sheet's own unit: no note", "si", "Chainage (m)\tElevation (m)\n0\t700\n100\t711.5\n",
+			map[string]string{"s1.l": "100.659m", "s1.z": "711.5m"}, nil},
+		{"spaces, units that cannot be told apart", "si", "chainage in ft elevation in ft\n0 700\n100 711.5\n",
+			map[string]string{"s1.l": "100.659m", "s1.z": "711.5m"},
+			[]string{"line 1: the header names the units in, ft, in, ft and cannot be read column by column"}},
+	}
+	for _, tt := range tests {
+		d := NewDraft(Scenario{})
+		_ = d.Scen.Set("units", tt.us)
+		if !d.PasteProfile(tt.text) {
+			t.Errorf("%s: nothing changed", tt.name)
+			continue
+		}
+		for k, v := range tt.want {
+			if got := d.Scen.Get(k); got != v {
+				t.Errorf("%s: %s = %q, want %q", tt.name, k, got, v)
+			}
+		}
+		notes := strings.Join(d.SurveyNotes, "|")
+		for _, n := range tt.notes {
+			if !strings.Contains(notes, n) {
+				t.Errorf("%s: notes %q lack %q", tt.name, notes, n)
+			}
+		}
+		if tt.notes == nil && notes != "" {
+			t.Errorf("%s: notes %q, want none", tt.name, notes)
+		}
+	}
+}

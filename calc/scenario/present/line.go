@@ -343,7 +343,7 @@ func (b *builder) surveyBox() Block {
 	lu, zu := scenario.DefaultUnit("l", b.us), scenario.DefaultUnit("z1", b.us)
 	return Block{Kind: BlockSurvey, Survey: &Survey{ID: "survey-text", Title: "Make the segments from a survey",
 		Label: "Chainage and elevation, one point a line (" + lu + ", " + zu + ")",
-		Hint: "Paste two columns from a spreadsheet (tab, semicolon or comma separated; a header row is skipped). " +
+		Hint: "Paste two columns from a spreadsheet (tab, semicolon or comma separated). A header row is skipped; length units it names, as in “Chainage (ft)”, are used for their column. " +
 			"Each pair of points becomes a segment: its length the slope length between them, its end the second point's elevation. " +
 			"Segments already here keep their pipe, fittings and components; new ones take the last segment's pipe.",
 		Text: b.d.Survey, Notes: b.d.SurveyNotes, Open: len(b.d.SurveyNotes) > 0,
