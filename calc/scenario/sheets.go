@@ -15,8 +15,9 @@ import (
 //
 // One sheet per line: its title, a tab, and its link — the query string,
 // or a whole share link (https://…/?…) from which the query is taken. A
-// line without a tab is a link alone. Lines that start with # are notes,
-// and blank lines are skipped. The title is for the reader: the sheet's
+// line without a tab is a link alone. Lines that start with # and hold no
+// tab are notes (a sheet's line always holds one, so a title may start
+// with #), and blank lines are skipped. The title is for the reader: the sheet's
 // own title is the name parameter of its link (a link without one takes
 // the line's title). Text is UTF-8; a title
 // holds no tab (a link cannot hold one either).
@@ -48,7 +49,7 @@ func ReadSheets(text string) ([]SheetLine, []LineError) {
 	for i, line := range strings.Split(strings.ReplaceAll(text, "\r\n", "\n"), "\n") {
 		n := i + 1
 		line = strings.TrimRight(line, "\r")
-		if strings.TrimSpace(line) == "" || strings.HasPrefix(strings.TrimSpace(line), "#") {
+		if t := strings.TrimSpace(line); t == "" || strings.HasPrefix(t, "#") && !strings.Contains(line, "\t") {
 			continue
 		}
 		title, link, hasTab := strings.Cut(line, "\t")
@@ -95,7 +96,7 @@ func QueryOf(link string) string {
 func WriteSheets(note string, sheets []Scenario) string {
 	var b strings.Builder
 	if note != "" {
-		b.WriteString("# " + strings.ReplaceAll(note, "\n", " ") + "\n")
+		b.WriteString("# " + strings.NewReplacer("\n", " ", "\r", " ", "\t", " ").Replace(note) + "\n")
 	}
 	for _, s := range sheets {
 		title := strings.Map(func(r rune) rune {
