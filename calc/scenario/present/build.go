@@ -209,7 +209,7 @@ func (b *builder) warnsAbout(p string) bool {
 // caution words a warning from calc: by its Code, or its sentence.
 func (b *builder) caution(w calc.Warning) string {
 	if w.Code != calc.CautionText {
-		return WarningText(w.Code, w.Figures, b.us)
+		return warningText(w.Code, w.Figures, b.us, b.view())
 	}
 	return w.Words(b.figure)
 }

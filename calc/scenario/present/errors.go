@@ -904,16 +904,31 @@ func (w wording) gotShare() string {
 // a sheet in US units (us) or SI; "" for CautionText, whose sentence the
 // caller words with Words.
 func WarningText(c calc.Caution, figs []calc.Figure, us bool) string {
+	return warningText(c, figs, us, "")
+}
+
+// warningText is WarningText on a sheet open on view, where a pointer to
+// another view words the place on this one instead.
+func warningText(c calc.Caution, figs []calc.Figure, us bool, view string) string {
 	cw, ok := cautionWords[c]
 	if !ok {
 		return ""
 	}
-	return cw(cautioning{figs: figs, w: wording{fe: &calc.FieldError{}, us: us}})
+	return cw(cautioning{figs: figs, w: wording{fe: &calc.FieldError{}, us: us}, view: view})
 }
 
 type cautioning struct {
 	figs []calc.Figure
 	w    wording
+	view string // the view the sheet is open on ("" when unknown)
+}
+
+// npsh points to the suction card: on the Pump view, or on this one.
+func (c cautioning) npsh() string {
+	if c.view == "pump" {
+		return "the cavitation check (NPSH) on this view says whether the pump has margin"
+	}
+	return "check the NPSH on the Pump view"
 }
 
 // f words figure i in the sheet's units, "?" if absent.
@@ -1105,7 +1120,7 @@ var cautionWords = map[calc.Caution]func(c cautioning) string{
 		return c.inlet() + stillBreaks + "the column breaks and the pump cannot prime or run; set the pump lower or raise the supply"
 	},
 	calc.CautionInletSuction: func(c cautioning) string {
-		return c.inlet() + c.belowCrown("the suction is below atmospheric pressure: air leaks in at joints and seals; check the NPSH on the Pump view")
+		return c.inlet() + c.belowCrown("the suction is below atmospheric pressure: air leaks in at joints and seals; "+c.npsh())
 	},
 	calc.CautionHighPointBreaks: func(c cautioning) string {
 		return c.highPoint() + c.breaks("the column breaks (vapour pockets, a siphon that stops, cavitation and hammer when it rejoins). The pipe runs full",

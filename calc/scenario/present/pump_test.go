@@ -630,3 +630,34 @@ func TestPumpChart(t *testing.T) {
 		t.Errorf("chart without a data sheet: %+v", bl)
 	}
 }
+
+// TestSuctionCautionPointsHere: the demo's pump draws from a wet well below
+// it (suction below atmospheric at the inlet, a caution of this project's);
+// the caution points to the cavitation check on the Pump view from other
+// views, and to the one beside it on the Pump view itself.
+func TestSuctionCautionPointsHere(t *testing.T) {
+	for view, want := range map[string]string{"pump": "the cavitation check (NPSH) on this view", "line": "check the NPSH on the Pump view"} {
+		s := scenario.Demo()
+		_ = s.Set("view", view)
+		d := scenario.NewDraft(s)
+		sh := Build(&d, scenario.Evaluate(s))
+		found := false
+		for _, c := range sh.Cards {
+			for _, b := range c.Blocks {
+				if b.Kind == BlockWarnings {
+					for _, it := range b.Items {
+						if strings.Contains(it, "below atmospheric pressure") {
+							found = true
+							if !strings.Contains(it, want) {
+								t.Errorf("%s view: %q lacks %q", view, it, want)
+							}
+						}
+					}
+				}
+			}
+		}
+		if !found {
+			t.Errorf("%s view: no suction caution", view)
+		}
+	}
+}
