@@ -252,6 +252,12 @@ func (b *builder) segmentTable() Block {
 	}
 	l := br.Line
 	cols := []string{"segment", "velocity", "Reynolds number", "regime", "friction factor f", "pipe friction", "fittings (ΣK)", "change of diameter"}
+	// A line of one bore has no losses at changes of diameter: a column of
+	// zeros would only push the table past a tablet's width.
+	changes := l.TransitionLoss != 0
+	if !changes {
+		cols = cols[:len(cols)-1]
+	}
 	hasCmp := false
 	t := &Table{ID: "seg-table", Class: "grid figures", Head: cols}
 	cell := func(col int, text string) Cell { return Cell{Text: text, Label: cols[col]} }
@@ -267,8 +273,11 @@ func (b *builder) segmentTable() Block {
 			cell(4, f),
 			cell(5, b.head(r.MajorLoss)),
 			cell(6, b.head(r.MinorLoss)+" ("+calc.FormatNumber(r.SumK, 3)+")"),
-			cell(7, b.head(r.TransitionLoss)),
 		}})
+		if changes {
+			last := &t.Rows[len(t.Rows)-1]
+			last.Cells = append(last.Cells, cell(7, b.head(r.TransitionLoss)))
+		}
 		// A component is a row of its own under its segment, so the
 		// table keeps its width on a tablet.
 		for _, c := range r.Components {
@@ -279,13 +288,16 @@ func (b *builder) segmentTable() Block {
 	}
 	total := "friction and fittings, point 1 to point 2"
 	t.Foot = []Row{{Head: "whole line", HeadSpan: 5, Class: "sum", Cells: []Cell{
-		cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss)), cell(7, b.head(l.TransitionLoss))}}}
+		cell(5, b.head(l.MajorLoss)), cell(6, b.head(l.MinorLoss))}}}
+	if changes {
+		t.Foot[0].Cells = append(t.Foot[0].Cells, cell(7, b.head(l.TransitionLoss)))
+	}
 	if hasCmp {
 		total = "friction, fittings and components, point 1 to point 2"
 		t.Foot = append(t.Foot, Row{Head: "components: " + b.head(l.ComponentLoss), HeadSpan: len(cols), Class: "sum cmp"})
 	}
 	t.Foot = append(t.Foot, Row{Head: total, HeadSpan: 5, Class: "sum total", Cells: []Cell{
-		{ID: "seg-total", Text: b.head(l.TotalLoss), Span: 3}}})
+		{ID: "seg-total", Text: b.head(l.TotalLoss), Span: len(cols) - 5}}})
 	return Block{Kind: BlockTable, Table: t}
 }
 

@@ -81,11 +81,20 @@ func TestComponentsOnTheSheet(t *testing.T) {
 	if text = sheetText(sh); !strings.Contains(text, "chiller 15.05 ft (6.527 psi)") {
 		t.Errorf("US line view lacks the chiller in ft and psi")
 	}
-	sh, _ = sheetOf(t, scenario.Demo(), "line")
-	for _, c := range sh.Cards {
-		for _, b := range c.Blocks {
-			if b.Table != nil && b.Table.ID == "seg-table" && len(b.Table.Head) != 8 {
-				t.Errorf("the demo's loss table has %d columns", len(b.Table.Head))
+	// Components take rows, not columns; the change-of-diameter column is
+	// there only when the line changes bore (the demo's does not).
+	reducer, _ := scenario.Parse(q + "&s2.l=50m&s2.d=80mm&s2.eps=0.05mm")
+	for _, tt := range []struct {
+		name string
+		sc   scenario.Scenario
+		cols int
+	}{{"the demo", scenario.Demo(), 7}, {"a line with a reducer", reducer, 8}} {
+		sh, _ = sheetOf(t, tt.sc, "line")
+		for _, c := range sh.Cards {
+			for _, b := range c.Blocks {
+				if b.Table != nil && b.Table.ID == "seg-table" && len(b.Table.Head) != tt.cols {
+					t.Errorf("%s: the loss table has %d columns, want %d", tt.name, len(b.Table.Head), tt.cols)
+				}
 			}
 		}
 	}
