@@ -20,6 +20,7 @@ import (
 //     code only for a module compiled from the fetched response itself, so
 //     the wrapper made every load compile the whole module again. The
 //     label stays, without a percentage (newHandler's LoadingLabel).
+//   - A mark, fieldhead-wasm-ready, once the module is instantiated (make bench).
 //   - The service worker is registered once the wasm is running, not
 //     before the download starts: its installation then takes every file
 //     from the HTTP cache (worker.go) instead of downloading the site a
@@ -37,7 +38,7 @@ func patchLoader(js string) (string, error) {
 			regexp.MustCompile(`(?m)^goappInitServiceWorker\(\);\n`), ""},
 		{"the start of the wasm",
 			regexp.MustCompile(`(\n(\s*)go\.run\(wasm\.instance\);\n\s*loader\.remove\(\);\n)`),
-			"${1}${2}goappInitServiceWorker(); // Fieldhead: after the wasm (loader.go)\n"},
+			"\n${2}performance.mark(\"fieldhead-wasm-ready\"); // Fieldhead: compiled (make bench times the phases)${1}${2}goappInitServiceWorker(); // Fieldhead: after the wasm (loader.go)\n"},
 	}
 	for _, s := range steps {
 		if n := len(s.re.FindAllStringIndex(js, -1)); n != 1 {

@@ -33,6 +33,9 @@
 //     in the page by a MutationObserver, then requestAnimationFrame and a
 //     posted message (which runs after that frame's paint). Median of the
 //     loads.
+//   - cold_load_phases_ms, offline_reload_phases_ms: the medians of each
+//     load's phases (see phases): wasm fetched, compiled, Go started, sheet
+//     mounted, answer painted.
 //   - offline_reload_ms: one visit, then the network emulated offline for
 //     the page and the service worker (Network.emulateNetworkConditionsByRule,
 //     emulateOfflineServiceWorker), reload, the same end point; 4× CPU
@@ -573,6 +576,52 @@ func (s *browserSession) waitShown() (float64, error) {
 	}
 }
 
+// phases splits a load, in ms from navigation start: the wasm's bytes in
+// (its fetch's responseEnd), compiled and instantiated (app.js's mark
+// fieldhead-wasm-ready), the Go program started (its mark fieldhead-main),
+// the sheet mounted (drawn into the DOM: window.fieldheadFirstResult, set in
+// the sheet's OnMount) and the answer painted (shownJS). 0 for one not seen.
+type phases struct {
+	WasmFetched  float64 `json:"wasm_fetched"`
+	WasmCompiled float64 `json:"wasm_compiled"`
+	GoMain       float64 `json:"go_main"`
+	Mounted      float64 `json:"mounted"`
+	Answer       float64 `json:"answer"`
+}
+
+func (p phases) String() string {
+	return fmt.Sprintf("wasm fetched %.0f, compiled %.0f, Go started %.0f, sheet mounted %.0f, answer painted %.0f",
+		p.WasmFetched, p.WasmCompiled, p.GoMain, p.Mounted, p.Answer)
+}
+
+const phasesJS = `(() => {
+  const mark = (n) => { const e = performance.getEntriesByName(n)[0]; return e ? e.startTime : 0; };
+  const w = performance.getEntriesByType("resource").find((e) => e.name.endsWith(".wasm"));
+  return [w ? w.responseEnd : 0, mark("fieldhead-wasm-ready"), mark("fieldhead-main"), window.fieldheadFirstResult || 0, window.fieldheadShown || 0];
+})()`
+
+// loadPhases reads the phases of the load the page just made.
+func (s *browserSession) loadPhases() phases {
+	v, err := chromedp.Run(s.ctx, chromedp.Evaluate[[]float64](phasesJS))
+	if err != nil || len(v) != 5 {
+		log.Fatalf("the load's phases: %v", err)
+	}
+	return phases{round1(v[0]), round1(v[1]), round1(v[2]), round1(v[3]), round1(v[4])}
+}
+
+// medianPhases is each phase's median over the loads.
+func medianPhases(ps []phases) phases {
+	col := func(f func(phases) float64) float64 {
+		var xs []float64
+		for _, p := range ps {
+			xs = append(xs, f(p))
+		}
+		return round1(median(xs))
+	}
+	return phases{col(func(p phases) float64 { return p.WasmFetched }), col(func(p phases) float64 { return p.WasmCompiled }),
+		col(func(p phases) float64 { return p.GoMain }), col(func(p phases) float64 { return p.Mounted }), col(func(p phases) float64 { return p.Answer })}
+}
+
 // offline takes the page and its service worker off the network.
 func (s *browserSession) offline() error {
 	on := true
@@ -653,7 +702,9 @@ func (r *report) bare(origin string) {
 	if err != nil || pre == 0 {
 		log.Fatalf("phone-class bare page: the written answer was never painted (%v)", err)
 	}
-	log.Printf("  phone-class bare page: written answer %.0f ms, live %.0f ms", pre, live)
+	ph := s.loadPhases()
+	log.Printf("  phone-class bare page: written answer %.0f ms, live %.0f ms (%s)", pre, live, ph)
+	r.JSON["phone_bare_phases_ms"] = ph
 	// Where the time went: each fetch's start and end, and the first paint.
 	timeline, _ := chromedp.Run(s.ctx, chromedp.Evaluate[string](`performance.getEntries().filter(e => e.entryType === "resource" || e.entryType === "paint").
 	  map(e => (e.name.split("/").pop() || "/") + " " + Math.round(e.startTime) + "–" + Math.round(e.responseEnd || e.startTime)).join(", ")`))
@@ -768,6 +819,7 @@ func (r *report) phone(origin string, wire *meter) {
 // visit fetched.
 func (r *report) browser(link, origin string) []string {
 	var cold []float64
+	var coldPh, offPh []phases
 	var fetched []string
 	for i := 0; i < *loads; i++ {
 		s, err := newSession()
@@ -782,7 +834,8 @@ func (r *report) browser(link, origin string) []string {
 			log.Fatalf("cold load %d: %v", i+1, err)
 		}
 		cold = append(cold, ms)
-		log.Printf("  cold load %d: %.0f ms", i+1, ms)
+		coldPh = append(coldPh, s.loadPhases())
+		log.Printf("  cold load %d: %.0f ms (%s)", i+1, ms, coldPh[i])
 		if i == 0 {
 			if err := s.waitWorker(); err != nil {
 				log.Fatalf("cold load: the service worker never took control: %v", err)
@@ -829,7 +882,8 @@ func (r *report) browser(link, origin string) []string {
 			log.Fatalf("offline reload %d: %v", i+1, err)
 		}
 		off = append(off, ms)
-		log.Printf("  offline reload %d: %.0f ms", i+1, ms)
+		offPh = append(offPh, s.loadPhases())
+		log.Printf("  offline reload %d: %.0f ms (%s)", i+1, ms, offPh[i])
 	}
 
 	// Edits, still offline (the page needs no network to compute).
@@ -857,6 +911,10 @@ func (r *report) browser(link, origin string) []string {
 	r.JSON["offline_reload_ms"] = round1(offMed)
 	r.JSON["edit_p50_ms"] = round1(p50)
 	r.JSON["edit_p95_ms"] = round1(p95)
+	r.JSON["cold_load_phases_ms"] = medianPhases(coldPh)
+	r.JSON["offline_reload_phases_ms"] = medianPhases(offPh)
+	r.notes = append(r.notes, "a load, medians of the runs, ms from navigation start: cold "+medianPhases(coldPh).String()+
+		"; offline reload "+medianPhases(offPh).String())
 	r.JSON["cold_load_runs_ms"] = roundAll(cold)
 	r.JSON["offline_reload_runs_ms"] = roundAll(off)
 	repMed := median(repeat)
