@@ -61,7 +61,9 @@ type Scenario struct {
 func Parse(query string) (Scenario, error) {
 	s := Scenario{raw: map[string]string{}}
 	query = strings.ReplaceAll(strings.TrimPrefix(query, "?"), "&amp;", "&") // as a mail program may write "&"
-	if len(query) > MaxQueryBytes {
+	// The check field (Sign) comes on top of a canonical query of at most
+	// MaxQueryBytes: a signed link of a sheet at the limit reads back.
+	if len(query) > MaxQueryBytes+signBytes {
 		return s, &LinkError{Kind: LinkTooLong, Size: len(query), Limit: MaxQueryBytes}
 	}
 	if query == "" {
@@ -255,6 +257,9 @@ func (s Scenario) Sign() string {
 	}
 	return CheckParam + "=" + checksum(q) + "&" + q
 }
+
+// signBytes is the length Sign adds: "ck=" + 8 hex digits + "&".
+const signBytes = len(CheckParam) + 1 + 8 + 1
 
 func checksum(q string) string { return fmt.Sprintf("%08x", crc32IEEE(q)) }
 
