@@ -71,7 +71,10 @@ func ReadSheets(text string) ([]SheetLine, []LineError) {
 		}
 		sl := SheetLine{Line: n, Title: strings.TrimSpace(title), Scen: sc}
 		if !sc.Has("name") && sl.Title != "" && utf8.ValidString(sl.Title) && printable(sl.Title) {
-			_ = sl.Scen.Set("name", sl.Title) // a link without a title takes the line's
+			_ = sl.Scen.Set("name", sl.Title)          // a link without a title takes the line's
+			if len(sl.Scen.Encode()) > MaxQueryBytes { // unless the link could then not be shared
+				_ = sl.Scen.Set("name", "")
+			}
 		}
 		sl.Err = err
 		out = append(out, sl)
