@@ -328,9 +328,12 @@ func (d *Draft) PasteProfile(text string) bool {
 	}
 	// The elevation difference in the chainage's unit (a ratio of exactly
 	// 1 when the units are the same), and the millimetre in that unit.
-	lunit, _ := calc.LookupUnit(lu)
-	zunit, _ := calc.LookupUnit(zu)
-	ratio, mm := zunit.Factor/lunit.Factor, math.Pow(10, 3+math.Ceil(math.Log10(lunit.Factor)))
+	ratio, mm := 1.0, 1000.0
+	lunit, errl := calc.LookupUnit(lu)
+	zunit, errz := calc.LookupUnit(zu)
+	if errl == nil && errz == nil && lunit.Factor > 0 && zunit.Factor > 0 { // always, for units LookupUnit named
+		ratio, mm = zunit.Factor/lunit.Factor, math.Pow(10, 3+math.Ceil(math.Log10(lunit.Factor)))
+	}
 	before := d.Scen.Encode()
 	n := len(pts) - 1
 	for d.ShownSegments() < n {
