@@ -10,7 +10,9 @@ import (
 	"unicode/utf8"
 )
 
-// MaxQueryBytes is the longest query string Parse accepts. A real scenario is
+// MaxQueryBytes is the longest query string Parse accepts, not counting the
+// check field Sign writes before it, and the longest canonical query
+// (Encode) a link may carry. A real scenario is
 // well under 1 KB; the limit keeps a damaged or hostile link from costing
 // the page anything.
 const MaxQueryBytes = 8 << 10
@@ -61,10 +63,10 @@ type Scenario struct {
 func Parse(query string) (Scenario, error) {
 	s := Scenario{raw: map[string]string{}}
 	query = strings.ReplaceAll(strings.TrimPrefix(query, "?"), "&amp;", "&") // as a mail program may write "&"
-	// The check field (Sign) comes on top of a canonical query of at most
-	// MaxQueryBytes: a signed link of a sheet at the limit reads back.
-	if len(query) > MaxQueryBytes+signBytes {
-		return s, &LinkError{Kind: LinkTooLong, Size: len(query), Limit: MaxQueryBytes}
+	// The limit is on the sheet, not on the check field Sign puts before
+	// it: a signed link of a sheet at the limit reads back.
+	if n := len(query) - signedPrefix(query); n > MaxQueryBytes {
+		return s, &LinkError{Kind: LinkTooLong, Size: n, Limit: MaxQueryBytes}
 	}
 	if query == "" {
 		return s, nil
@@ -258,8 +260,15 @@ func (s Scenario) Sign() string {
 	return CheckParam + "=" + checksum(q) + "&" + q
 }
 
-// signBytes is the length Sign adds: "ck=" + 8 hex digits + "&".
-const signBytes = len(CheckParam) + 1 + 8 + 1
+// signedPrefix is the length of the check field Sign writes first
+// ("ck=" + 8 hex digits + "&"), 0 when query does not start with one.
+func signedPrefix(query string) int {
+	field, _, ok := strings.Cut(query, "&")
+	if !ok || !strings.HasPrefix(field, CheckParam+"=") {
+		return 0
+	}
+	return len(field) + 1
+}
 
 func checksum(q string) string { return fmt.Sprintf("%08x", crc32IEEE(q)) }
 

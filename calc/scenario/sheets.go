@@ -99,16 +99,21 @@ func QueryOf(link string) string {
 func WriteSheets(note string, sheets []Scenario) string {
 	var b strings.Builder
 	if note != "" {
-		b.WriteString("# " + strings.NewReplacer("\n", " ", "\r", " ", "\t", " ").Replace(note) + "\n")
+		b.WriteString("# " + oneLine(note) + "\n")
 	}
 	for _, s := range sheets {
-		title := strings.Map(func(r rune) rune {
-			if r == '\t' || r == '\n' || r == '\r' {
-				return ' '
-			}
-			return r
-		}, strings.TrimSpace(s.Get("name")))
-		b.WriteString(title + "\t" + s.Sign() + "\n") // an untitled sheet's line starts with the tab
+		b.WriteString(oneLine(strings.TrimSpace(s.Get("name"))) + "\t" + s.Sign() + "\n") // an untitled sheet's line starts with the tab
 	}
 	return b.String()
+}
+
+// oneLine writes tabs and line breaks as spaces: a note or a title is one
+// field of one line.
+func oneLine(s string) string {
+	return strings.Map(func(r rune) rune {
+		if r == '\t' || r == '\n' || r == '\r' {
+			return ' '
+		}
+		return r
+	}, s)
 }

@@ -646,6 +646,11 @@ func (s *browserSession) offline() error {
 	return errors.New("no service worker to take offline")
 }
 
+// phoneLabel names the phone-class link and the CPU slow-down in a row.
+func phoneLabel() string {
+	return fmt.Sprintf("%.1f Mbps, %d ms RTT, %g× CPU", phoneDownBytesPerS*8/1e6, phoneRTTms, *throttle)
+}
+
 // phoneSession starts a session on the phone-class link.
 func phoneSession() *browserSession {
 	s, err := newSession()
@@ -709,8 +714,7 @@ func (r *report) bare(origin string) {
 	timeline, _ := chromedp.Run(s.ctx, chromedp.Evaluate[string](`performance.getEntries().filter(e => e.entryType === "resource" || e.entryType === "paint").
 	  map(e => (e.name.split("/").pop() || "/") + " " + Math.round(e.startTime) + "–" + Math.round(e.responseEnd || e.startTime)).join(", ")`))
 	log.Printf("  phone-class bare page timeline, ms: %s", timeline)
-	th := fmt.Sprintf("%g× CPU", *throttle)
-	link := fmt.Sprintf("%.1f Mbps, %d ms RTT, %s", phoneDownBytesPerS*8/1e6, phoneRTTms, th)
+	link := phoneLabel()
 	r.JSON["phone_bare_written_answer_ms"] = round1(pre)
 	r.JSON["phone_bare_live_answer_ms"] = round1(live)
 	r.row("first visit, bare page → written answer painted, ms ("+link+")", f0(pre), "≤ 2 000", ptr(pre <= budgetBareWritten))
@@ -789,8 +793,7 @@ func (r *report) phone(origin string, wire *meter) {
 	log.Printf("  phone-class repeat visit: %.0f ms", repeat)
 	again, _, _ := wire.take()
 
-	th := fmt.Sprintf("%g× CPU", *throttle)
-	link := fmt.Sprintf("%.1f Mbps, %d ms RTT, %s", phoneDownBytesPerS*8/1e6, phoneRTTms, th)
+	link := phoneLabel()
 	r.JSON["phone_first_visit_ms"] = round1(first)
 	r.JSON["phone_repeat_visit_ms"] = round1(repeat)
 	r.JSON["phone_repeat_visit_wire_bytes"] = again
