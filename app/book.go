@@ -246,7 +246,7 @@ func (bk *book) importSheets(text string) {
 			continue
 		}
 		r := record{ID: newID(), Title: strings.TrimSpace(l.Scen.Get("name")), Link: l.Scen.Sign(),
-			Answer: present.Headline(l.Scen, scenario.Evaluate(l.Scen)), Created: nowMs(), Edited: nowMs()}
+			Answer: present.Headline(l.Scen, scenario.Evaluate(scenario.Read(l.Scen))), Created: nowMs(), Edited: nowMs()}
 		bk.kept = append([]record{r}, bk.kept...)
 		if bk.db != nil {
 			storePut(bk.db, r, func(problem string) {

@@ -313,7 +313,7 @@ func TestDamagedLinks(t *testing.T) {
 	if len(signed) < 1600 {
 		t.Fatalf("the long link is only %d characters", len(signed))
 	}
-	want := scenario.Evaluate(long)
+	want := scenario.Evaluate(scenario.Read(long))
 	d := scenario.NewDraft(long)
 	answer, _ := present.Build(&d, want).Text("answer-value")
 

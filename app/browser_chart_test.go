@@ -36,7 +36,7 @@ func TestBrowserFieldCheckUS(t *testing.T) {
 			t.Fatalf("%s: %v", kv[0], err)
 		}
 	}
-	want := scenario.Evaluate(sc)
+	want := scenario.Evaluate(scenario.Read(sc))
 	if want.Field == nil || want.FieldBands == nil || want.Acceptance == nil || !want.US {
 		t.Fatalf("the sheet does not give a US field check with bands and a verdict: %v", want.Errors)
 	}

@@ -30,7 +30,7 @@ func TestBrowserLinePump(t *testing.T) {
 	srv := newSiteServer(t, site)
 
 	demo := scenario.Demo()
-	want := scenario.Evaluate(demo)
+	want := scenario.Evaluate(scenario.Read(demo))
 	if want.Balance == nil || want.Balance.Line == nil || want.Pump == nil || want.Pump.Operating == nil ||
 		want.NPSH == nil || want.Field == nil {
 		t.Fatalf("the demo does not evaluate in full: %v", want.Errors)
@@ -231,7 +231,7 @@ func TestBrowserLinePump(t *testing.T) {
 	}
 
 	// 5. The turbine demo: output at the flow and at the best flow.
-	tw := scenario.Evaluate(scenario.TurbineDemo())
+	tw := scenario.Evaluate(scenario.Read(scenario.TurbineDemo()))
 	if tw.Turbine == nil || tw.BestTurbine == nil {
 		t.Fatalf("the turbine demo does not evaluate: %v", tw.Errors)
 	}

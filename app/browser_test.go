@@ -187,7 +187,7 @@ func TestBrowser(t *testing.T) {
 
 	// What the core says for the demo (the page must show the same).
 	demo := scenario.Demo()
-	want := scenario.Evaluate(demo)
+	want := scenario.Evaluate(scenario.Read(demo))
 	if want.Balance == nil || want.Balance.Line == nil {
 		t.Fatalf("the demo does not evaluate: %v", want.Errors)
 	}
@@ -300,7 +300,7 @@ func TestBrowser(t *testing.T) {
 		t.Fatal(err)
 	}
 	var warnings []string
-	fr := scenario.Evaluate(fast)
+	fr := scenario.Evaluate(scenario.Read(fast))
 	worded := func(w calc.Warning) string {
 		if w.Code != calc.CautionText {
 			return present.WarningText(w.Code, w.Figures, fr.US)
@@ -379,7 +379,7 @@ func TestBrowser(t *testing.T) {
 			t.Fatal(err)
 		}
 	}
-	wantSingle := scenario.Evaluate(single)
+	wantSingle := scenario.Evaluate(scenario.Read(single))
 	if wantSingle.Run == nil || wantSingle.Balance == nil {
 		t.Fatalf("the single-run link does not evaluate: %v", wantSingle.Errors)
 	}
@@ -466,7 +466,7 @@ func TestBrowser(t *testing.T) {
 	if err := other.Set("q", "40L/s"); err != nil {
 		t.Fatal(err)
 	}
-	wantOther := scenario.Evaluate(other)
+	wantOther := scenario.Evaluate(scenario.Read(other))
 	if wantOther.Balance == nil {
 		t.Fatalf("the offline scenario does not evaluate: %v", wantOther.Errors)
 	}

@@ -397,7 +397,7 @@ func TestChartContrast(t *testing.T) {
 	for _, view := range []string{"pump", "line"} {
 		_ = sc.Set("view", view)
 		d := scenario.NewDraft(sc)
-		sh := present.Build(&d, scenario.Evaluate(sc))
+		sh := present.Build(&d, scenario.Evaluate(scenario.Read(sc)))
 		var svg string
 		for _, c := range sh.Cards {
 			for _, bl := range c.Blocks {

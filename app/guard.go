@@ -43,7 +43,7 @@ func (s *sheet) contain(what string) {
 				s.vm = present.Sheet{View: s.vm.View, Name: s.vm.Name, Cautions: present.Cautions}
 			}
 		}()
-		s.res = scenario.Evaluate(s.d.Scen)
+		s.res = scenario.Evaluate(scenario.Read(s.d.Scen))
 		s.vm = present.Build(&s.d, s.res)
 	}()
 }

@@ -26,7 +26,7 @@ func TestContainNative(t *testing.T) {
 	if s.fault == nil || s.fault.what != "testing the guard" || !strings.Contains(s.fault.msg, "nil map") {
 		t.Fatalf("fault recorded as %+v", s.fault)
 	}
-	if want := scenario.Evaluate(s.d.Scen); s.res.Balance == nil || want.Balance == nil || s.res.Balance.Value != want.Balance.Value {
+	if want := scenario.Evaluate(scenario.Read(s.d.Scen)); s.res.Balance == nil || want.Balance == nil || s.res.Balance.Value != want.Balance.Value {
 		t.Errorf("after the panic the figures should be those of the inputs")
 	}
 
@@ -70,7 +70,7 @@ func TestPanicContainment(t *testing.T) {
 	srv := newSiteServer(t, site)
 	demo := scenario.Demo()
 	b.navigate(srv.URL + "/?" + demo.Encode())
-	want := scenario.Evaluate(demo)
+	want := scenario.Evaluate(scenario.Read(demo))
 	if want.Balance == nil {
 		t.Fatalf("the demo does not evaluate: %v", want.Errors)
 	}
@@ -106,7 +106,7 @@ func TestPanicContainment(t *testing.T) {
 	// The figures match the boxes (the guard recomputed them).
 	edited := demo.Clone()
 	_ = edited.Set("z2", "252m")
-	if we := scenario.Evaluate(edited); we.Balance != nil {
+	if we := scenario.Evaluate(scenario.Read(edited)); we.Balance != nil {
 		if got := b.waitText("#answer-value", show(we)); got != show(we) {
 			t.Errorf("after the contained panic the answer is %q, want %q for the boxes shown", got, show(we))
 		}

@@ -36,7 +36,7 @@ func TestOfflineAndUpdate(t *testing.T) {
 
 	sc := scenario.Demo()
 	_ = sc.Set("z2", "250m")
-	want := scenario.Evaluate(sc)
+	want := scenario.Evaluate(scenario.Read(sc))
 	if want.Balance == nil {
 		t.Fatalf("the scenario does not evaluate: %v", want.Errors)
 	}
@@ -101,7 +101,7 @@ func TestOfflineAndUpdate(t *testing.T) {
 	}
 	edited := sc.Clone()
 	_ = edited.Set("z2", "249m")
-	we := scenario.Evaluate(edited)
+	we := scenario.Evaluate(scenario.Read(edited))
 	b.typeInto("#in-z2", "249")
 	if we.Balance != nil {
 		if got := b.waitText("#answer-value", show(we)); got != show(we) {

@@ -26,7 +26,7 @@ func demoAnswer(t *testing.T) string {
 	t.Helper()
 	var d scenario.Draft
 	d.Reset(scenario.Demo())
-	a, _ := present.Build(&d, scenario.Evaluate(d.Scen)).Text("answer-value")
+	a, _ := present.Build(&d, scenario.Evaluate(scenario.Read(d.Scen))).Text("answer-value")
 	if a == "" || a == "—" {
 		t.Fatalf("the demo has no answer (%q): the checks below would prove nothing", a)
 	}
@@ -159,7 +159,7 @@ func TestBeforeWasm(t *testing.T) {
 	}
 	var d scenario.Draft
 	d.Reset(sc)
-	linkAnswer, _ := present.Build(&d, scenario.Evaluate(sc)).Text("answer-value")
+	linkAnswer, _ := present.Build(&d, scenario.Evaluate(scenario.Read(sc))).Text("answer-value")
 	share := origin + "/?" + sc.Encode()
 	open(share)
 	time.Sleep(300 * time.Millisecond)

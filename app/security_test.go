@@ -132,7 +132,7 @@ func TestSecurity(t *testing.T) {
 	if err := sc.Set("name", title); err != nil {
 		t.Fatal(err)
 	}
-	want := scenario.Evaluate(sc)
+	want := scenario.Evaluate(scenario.Read(sc))
 	b.navigate(origin + "/?" + sc.Encode())
 	if want.Balance != nil {
 		if got, w := b.text("#answer-value"), scenario.Show(want.Balance.Value, calc.Length, want.US); got != w {

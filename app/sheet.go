@@ -157,7 +157,7 @@ func (s *sheet) adopt(sc scenario.Scenario, linkErr string) {
 // scenario in the URL and in localStorage.
 func (s *sheet) evaluate() {
 	s.testPanic("evaluate")
-	s.res = scenario.Evaluate(s.d.Scen)
+	s.res = scenario.Evaluate(scenario.Read(s.d.Scen))
 	s.query = s.d.Scen.Sign()
 	s.build()
 	s.save()

@@ -64,6 +64,7 @@ const (
 	CautionOperatingOffRegion  // the operating point Figures[0] lies outside the preferred region Figures[1] to Figures[2] (shares Figures[3]–Figures[4] of the best-efficiency flow)
 	CautionMeasuredOffRegion   // the measured flow, as CautionOperatingOffRegion
 	CautionSuctionLossZero     // no line of segments: the suction losses are taken as zero
+	CautionNPSHCurveCut        // the NPSH available cannot be worked out from flow Figures[0] on: its curve stops there
 	CautionMotorEffHigh        // a motor efficiency Figures[0] is above the Figures[1] the best large motors hardly reach
 	CautionTurbineNeedsHt      // the turbine's output needs the balance solved for the turbine head
 	CautionLastSegmentEnd      // the last segment ends at Figures[0] but point 2 is at Figures[1]

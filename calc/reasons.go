@@ -136,6 +136,9 @@ const (
 	ReasonVelocityBand // BelowLimit: the velocity band's high end (Value) must be above its low end (Min)
 	ReasonRunSegment   // OutOfRange: the segment shown (Input) must be one of the line's, Min to Max
 	ReasonSizingClass  // UnknownChoice: Input is not a pipe class of any catalogue
+
+	// Reading the inputs.
+	ReasonBothSides // Inconsistent: both ways of giving one value are given (Other names the other side's); give one
 	reasonEnd
 )
 

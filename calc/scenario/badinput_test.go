@@ -101,7 +101,7 @@ func TestBadLinks(t *testing.T) {
 			case tc.linkErr != "" && (err == nil || !strings.Contains(linkWorded(err), tc.linkErr)):
 				t.Errorf("link error %q, want it to contain %q", linkWorded(err), tc.linkErr)
 			}
-			r := Evaluate(s)
+			r := Evaluate(Read(s))
 			if tc.param != "" {
 				fe, ok := r.Errors[tc.param]
 				m := ""
@@ -198,7 +198,7 @@ func TestSlipWarnings(t *testing.T) {
 		{"a measured flow below the preferred region", "qm", "below the preferred operating region", demo("qm", "30L/s")},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			r := Evaluate(tc.s)
+			r := Evaluate(Read(tc.s))
 			if len(r.Errors) > 0 {
 				t.Fatalf("errors %v", r.Errors)
 			}

@@ -1,9 +1,6 @@
 package scenario
 
 import (
-	"math"
-	"strings"
-
 	"fieldhead/calc"
 )
 
@@ -12,7 +9,7 @@ var balanceParams = []string{"p1", "p2", "z1", "z2", "v1", "v2", "d1", "d2", "hp
 
 func (e *eval) wantsBalance() bool {
 	for _, p := range balanceParams {
-		if e.s.Has(p) {
+		if e.has(p) {
 			return true
 		}
 	}
@@ -23,25 +20,28 @@ func (e *eval) wantsBalance() bool {
 // Result.Balance (and Result.Run when the run sets the friction).
 func (e *eval) balance(run *RunResult, line *calc.Line) {
 	solve := calc.SolvePumpHead
-	if e.s.Has("solve") {
-		u, err := calc.ParseUnknown(strings.TrimSpace(e.s.Get("solve")))
+	if e.has("solve") {
+		u, err := calc.ParseUnknown(e.in.Choice("solve"))
 		if err != nil {
 			e.failErr("solve", err)
 			return
 		}
 		solve = u
 	}
+	if !e.siteKnown() {
+		return // the site's own error says why
+	}
 	if e.res.Fluid == nil {
 		return // the liquid's own error says why
 	}
-	if e.s.Has("l") && run == nil {
+	if e.has("l") && run == nil {
 		return // the run's errors say why
 	}
-	if e.s.SegmentCount() > 0 && line == nil {
+	if e.in.Segments > 0 && line == nil {
 		return // the segments' errors say why
 	}
 	b := calc.Balance{Fluid: *e.res.Fluid, SitePressure: e.res.SitePressure, Unknown: solve}
-	switch e.s.Get("alpha") {
+	switch e.in.Choice("alpha") {
 	case "", "auto":
 		b.Alpha = calc.AlphaFromRegime
 	case "1":
@@ -49,8 +49,7 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 	case "pl":
 		b.Alpha = calc.AlphaProfile
 	default:
-		e.bad("alpha", calc.UnknownChoice).Typed(e.s.Get("alpha"))
-		return
+		return // Read reported it
 	}
 	ok := true
 	need := func(param string, unknown calc.Unknown) float64 {
@@ -81,11 +80,10 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 		if len(line.Segments) > 1 {
 			b.PumpAfter = 1
 		}
-		if e.s.Has("pafter") {
-			n, err := number("pafter", e.s.Get("pafter"))
-			if err != nil || n != math.Trunc(n) || n < 0 || int(n) > len(line.Segments) {
-				e.bad("pafter", calc.OutOfRange).Typed(e.s.Get("pafter")).Within(calc.Num(0), calc.Num(float64(len(line.Segments)))).Because(calc.ReasonPumpAfter)
-				return
+		if e.has("pafter") {
+			n, ok := e.quantity("pafter")
+			if !ok {
+				return // Read reported it
 			}
 			b.PumpAfter = int(n)
 		}
@@ -126,87 +124,43 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 	}
 }
 
-// pressure reads p1 or p2 as absolute Pa, honouring pNref and a gauge or
-// absolute unit suffix (psig, bara, kPa(a)…).
+// pressure is p1 or p2 as absolute Pa: gauge or absolute as Read settled
+// it, a gauge pressure on the site pressure.
 func (e *eval) pressure(param string, unknown, solve calc.Unknown, ok *bool) float64 {
 	if solve == unknown {
 		return 0
 	}
-	text := e.s.Get(param)
-	if strings.TrimSpace(text) == "" {
-		e.bad(param, calc.Missing)
-		*ok = false
-		return 0
-	}
-	p, ref, err := calc.ParsePressure(param, text, DefaultUnit(param, e.us))
-	if err != nil {
-		e.failErr(param, err)
-		*ok = false
-		return 0
-	}
-	abs, good := e.absolute(param+"ref", ref)
+	p, good := e.quantity(param)
 	if !good {
 		*ok = false
 		return 0
 	}
-	if abs {
+	if e.in.vals[param].Abs {
 		return p
 	}
 	return p + e.res.SitePressure
 }
 
-// absolute decides whether a pressure is absolute: its unit's suffix wins,
-// then the ref parameter (g or a), then gauge.
-func (e *eval) absolute(refParam string, ref calc.PressureRef) (bool, bool) {
-	abs, ok := isAbsolute(e.s.Get(refParam), ref)
-	if !ok {
-		e.bad(refParam, calc.UnknownChoice).Typed(e.s.Get(refParam))
-	}
-	return abs, ok
-}
-
-// isAbsolute is the rule of absolute without recording anything: false
-// for ok when refText is neither blank, g nor a (and the unit has no suffix).
-func isAbsolute(refText string, ref calc.PressureRef) (abs, ok bool) {
-	switch ref {
-	case calc.Absolute:
-		return true, true
-	case calc.Gauge:
-		return false, true
-	}
-	switch strings.TrimSpace(refText) {
-	case "", "g":
-		return false, true
-	case "a":
-		return true, true
-	}
-	return false, false
-}
-
-// point reads the velocity or diameter of point n.
+// point reads the velocity or the diameter of point n, whichever side of
+// its group the inputs use.
 func (e *eval) point(n string, p *calc.Point, ok *bool) {
-	switch {
-	case e.s.Has("d" + n):
+	if e.in.Side("pt"+n) == "d" {
 		d, good := e.quantity("d" + n)
-		if good && !(d > 0) {
-			e.bad("d"+n, calc.NotPositive).Got(calc.Fig(d, calc.Length))
-			good = false
-		}
 		*ok = *ok && good
 		p.D = d
-	default:
-		v, good := e.quantity("v" + n)
-		*ok = *ok && good
-		p.V = v
+		return
 	}
+	v, good := e.quantity("v" + n)
+	*ok = *ok && good
+	p.V = v
 }
 
 // optionalHead reads hp or ht; absent means no such machine.
 func (e *eval) optionalHead(param string, unknown, solve calc.Unknown, ok *bool) float64 {
-	if solve == unknown || !e.s.Has(param) {
+	if solve == unknown {
 		return 0
 	}
-	v, good := e.quantity(param)
+	v, good := e.optional(param)
 	*ok = *ok && good
 	return v
 }

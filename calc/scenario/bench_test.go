@@ -7,7 +7,7 @@ import "testing"
 func BenchmarkEvaluateDemo(b *testing.B) {
 	s := Demo()
 	for i := 0; i < b.N; i++ {
-		if r := Evaluate(s); len(r.Errors) > 0 {
+		if r := Evaluate(Read(s)); len(r.Errors) > 0 {
 			b.Fatal(r.Errors)
 		}
 	}

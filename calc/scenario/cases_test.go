@@ -565,9 +565,15 @@ func TestCases(t *testing.T) {
 			if err != nil {
 				t.Fatalf("%s:%d: the case's link does not parse: %v", c.file, c.line, err)
 			}
-			r := Evaluate(s)
+			r := Evaluate(Read(s))
 			for _, e := range c.expects {
 				got, text, err := observable(r, e.key)
+				if e.op == "is" && e.text == "not computed" {
+					if err == nil {
+						t.Errorf("%s:%d: %s was computed (%q, %g); want it left out (source: %s)", c.file, e.line, e.key, text, got, c.source)
+					}
+					continue
+				}
 				if err != nil {
 					t.Errorf("%s:%d: %s: %v (source: %s)", c.file, e.line, e.key, err, c.source)
 					continue

@@ -1,30 +1,22 @@
 package scenario
 
-import (
-	"errors"
-
-	"fieldhead/calc"
-)
+import "fieldhead/calc"
 
 // convert reads cv as a pressure (any unit, water columns included) or as a
 // head of the liquid (a length), and shows it every way.
 func (e *eval) convert() {
-	text := e.s.Get("cv")
+	v, ok := e.in.Value("cv")
+	if !ok {
+		return
+	}
+	if !e.siteKnown() {
+		return // the site's own error says why
+	}
 	var gauge, abs, head float64
-	p, ref, err := calc.ParsePressure("cv", text, DefaultUnit("cv", e.us))
-	isHead := false
-	if err != nil {
-		h, herr := calc.Parse("cv", text, calc.Length, "")
-		if herr != nil {
-			var fe *calc.FieldError
-			if errors.As(err, &fe) {
-				fe.Reason = calc.ReasonOrHead
-			}
-			e.failErr("cv", err)
-			return
-		}
-		isHead = true
-		head = h
+	p := v.SI
+	isHead := v.Dim == calc.Length
+	if isHead {
+		head = v.SI
 	}
 	fl := e.res.Fluid
 	if fl == nil {
@@ -40,15 +32,11 @@ func (e *eval) convert() {
 	if isHead {
 		gauge = head * rhog
 		abs = gauge + site
-		if e.s.Get("cvref") == "a" {
+		if e.in.Choice("cvref") == "a" {
 			abs, gauge = gauge, gauge-site
 		}
 	} else {
-		isAbs, ok := e.absolute("cvref", ref)
-		if !ok {
-			return
-		}
-		if isAbs {
+		if v.Abs {
 			abs, gauge = p, p-site
 		} else {
 			gauge, abs = p, p+site

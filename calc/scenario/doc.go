@@ -50,7 +50,9 @@
 // whatever the line's). That pressure is, in this order: pl when given
 // (gauge on the site pressure unless absolute); else the mean of the
 // absolute pressures of the points whose pressure is typed (p1 and p2, but
-// not the one being solved for); else the site pressure. A stated pl below
+// not the one being solved for); else the site pressure. When the one it
+// needs is in error (a point's pressure, pl, the site) the liquid is left
+// out, never taken at another pressure. A stated pl below
 // the vapour pressure or above the formulation's range (10 MPa for both
 // liquids) is an error on pl; a mean of the points outside the range is an
 // error on pl asking for it; one below the vapour pressure takes the

@@ -73,6 +73,14 @@ func (d *Draft) Box(param string) (box, unit string) {
 	return box, unit
 }
 
+// Typed is param's value as the person typed it (kept whole in the
+// scenario), for a record of the inputs; "" when blank.
+func (d *Draft) Typed(param string) string { return d.Scen.Get(param) }
+
+// Cells is a list parameter's values as typed, one per cell, and the
+// list's unit (Scenario.Cells).
+func (d *Draft) Cells(param string) ([]string, string) { return d.Scen.Cells(param) }
+
 // unitFor is the unit a number typed into param's empty box is taken in.
 func (d *Draft) unitFor(param string) string {
 	if u := d.Unit[param]; u != "" {

@@ -155,7 +155,7 @@ func TestEveryErrorAtOnce(t *testing.T) {
 	_ = s.Set("s2.l", "long")
 	_ = s.Set("liq", "mercury")
 	_ = s.Set("ph", "62,59,x,44,33m")
-	r := Evaluate(s)
+	r := Evaluate(Read(s))
 	for _, p := range []string{"t", "q", "s2.l", "liq", "ph"} {
 		if r.Errors[p] == nil {
 			t.Errorf("no problem reported on %s (have %v)", p, r.Errors)
@@ -169,14 +169,14 @@ func TestDraftGaugePipeBySize(t *testing.T) {
 	// inside diameter is the catalogue's (ASME B36.10M, NPS 8 schedule 40:
 	// OD 219.1 mm, wall 8.18 mm), giving the same head as the diameter typed.
 	d := NewDraft(Demo())
-	before := Evaluate(d.Scen).Field
+	before := Evaluate(Read(d.Scen)).Field
 	d.Switch("gsp", "nps")
 	if d.Scen.Has("ds") || d.SideOf("gsp") != "nps" {
 		t.Fatalf("switched: ds %q, side %q", d.Scen.Get("ds"), d.SideOf("gsp"))
 	}
 	d.Choose("dsn", "8")
 	d.Choose("dss", "40")
-	after := Evaluate(d.Scen)
+	after := Evaluate(Read(d.Scen))
 	if after.Field == nil || before == nil {
 		t.Fatalf("no field check: %v", after.Errors)
 	}

@@ -12,35 +12,25 @@ import (
 // seaLevel is the ISO 2533 standard sea-level pressure, Pa.
 const seaLevel = 101325.0
 
-// eval carries one evaluation: the scenario, its unit system and the
-// result being filled.
+// eval carries one evaluation: the inputs, and the result being filled.
 type eval struct {
-	s       Scenario
+	in      *Inputs
 	us      bool
 	res     *Result
 	runSpec calc.Run      // the pipe run as read, when run() returned non-nil
 	bal     *calc.Balance // the balance as read, before solving
 }
 
-// Evaluate computes every part of the scenario whose inputs are present.
-// It never fails as a whole: a bad or missing input is reported under its
-// parameter in Result.Errors and only the parts that need it are left nil.
-func Evaluate(s Scenario) Result {
-	res := Result{Errors: map[string]*calc.FieldError{}}
-	e := &eval{s: s, res: &res}
-	switch u := strings.TrimSpace(s.Get("units")); u {
-	case "", "si":
-	case "us":
-		e.us = true
-	default:
-		e.bad("units", calc.UnknownChoice).Typed(u)
+// Evaluate computes every part of the scenario whose inputs are present
+// and usable. It never fails as a whole: a bad or missing input is
+// reported under its parameter in Result.Errors, and every part that
+// reads it (Uses) is left nil. in is what Read made of a scenario.
+func Evaluate(in Inputs) Result {
+	res := Result{Errors: make(map[string]*calc.FieldError, len(in.Problems)), Inputs: in, US: in.US}
+	for k, fe := range in.Problems {
+		res.Errors[k] = fe
 	}
-	res.US = e.us
-	if n := s.Get("name"); n != "" && (!printable(n) || len(n) > 200) {
-		e.bad("name", calc.AboveLimit).AtMost(calc.Num(200)).Because(calc.ReasonTitle)
-	}
-
-	e.checkAll()
+	e := &eval{in: &res.Inputs, us: in.US, res: &res}
 	e.site()
 	e.liquid()
 	run := e.run()
@@ -48,7 +38,7 @@ func Evaluate(s Scenario) Result {
 	if e.wantsBalance() {
 		e.balance(run, line)
 	}
-	if res.Line == nil && line != nil && res.Fluid != nil && s.Has("q") {
+	if res.Line == nil && line != nil && res.Fluid != nil && e.has("q") {
 		// The line's own losses still show when the balance cannot be solved.
 		if q, ok := e.quantity("q"); ok {
 			if lr, err := line.Evaluate(*res.Fluid, q); err == nil {
@@ -58,9 +48,8 @@ func Evaluate(s Scenario) Result {
 			}
 		}
 	}
-	if res.Run == nil && run != nil && res.Fluid != nil && s.Has("q") {
-		q, ok := e.quantity("q")
-		if ok {
+	if res.Run == nil && run != nil && res.Fluid != nil && e.has("q") {
+		if q, ok := e.quantity("q"); ok {
 			e.evalRun(run, q)
 		}
 	}
@@ -73,11 +62,14 @@ func Evaluate(s Scenario) Result {
 	}
 	e.turbine()
 	e.surge(run, line)
-	if s.Has("cv") {
+	if e.has("cv") {
 		e.convert()
 	}
 	return res
 }
+
+// has reports whether param is given (usable or not).
+func (e *eval) has(param string) bool { return e.in.Given(param) }
 
 func oneOf(v string, cs []Choice) bool {
 	for _, c := range cs {
@@ -88,19 +80,45 @@ func oneOf(v string, cs []Choice) bool {
 	return false
 }
 
-// bad records a problem of kind k with a parameter (the first one
-// recorded for it is kept) and returns it for its data to be added.
-func (e *eval) bad(param string, k calc.Kind) *calc.FieldError {
+// problems holds the problems of one evaluation or one reading, keyed by
+// parameter; the first recorded for a parameter is kept.
+type problems map[string]*calc.FieldError
+
+// bad records a problem of kind k with param and returns it for its data
+// to be added.
+func (ps problems) bad(param string, k calc.Kind) *calc.FieldError {
 	fe := calc.NewFieldError(param, k)
-	e.record(fe)
+	ps.record(fe)
 	return fe
 }
 
-// recordOther records an error that is not a *calc.FieldError (none is
-// expected) under param, its Go text kept as a last resort.
-func (e *eval) recordOther(param string, err error) {
-	e.record(&calc.FieldError{Field: param, Kind: calc.KindOther, Msg: err.Error()})
+// record keeps the first problem recorded for its field.
+func (ps problems) record(fe *calc.FieldError) {
+	if _, ok := ps[fe.Field]; !ok {
+		ps[fe.Field] = fe
+	}
 }
+
+// failAt records err under param whatever field calc named: used where one
+// calc field ("fit", "d") stands for several parameters ("s2.fit"). An
+// error that is not a *calc.FieldError (none is expected) keeps its Go
+// text as a last resort.
+func (ps problems) failAt(param string, err error) {
+	var fe *calc.FieldError
+	if errors.As(err, &fe) {
+		c := *fe
+		c.Field, c.Segment = param, 0
+		ps.record(&c)
+		return
+	}
+	ps.record(&calc.FieldError{Field: param, Kind: calc.KindOther, Msg: err.Error()})
+}
+
+func (e *eval) bad(param string, k calc.Kind) *calc.FieldError {
+	return problems(e.res.Errors).bad(param, k)
+}
+func (e *eval) record(fe *calc.FieldError)     { problems(e.res.Errors).record(fe) }
+func (e *eval) failAt(param string, err error) { problems(e.res.Errors).failAt(param, err) }
 
 // atItem marks err as about the 1-based item i of a list.
 func atItem(err error, i int) error {
@@ -111,20 +129,13 @@ func atItem(err error, i int) error {
 	return err
 }
 
-// record keeps the first problem recorded for its field.
-func (e *eval) record(fe *calc.FieldError) {
-	if _, ok := e.res.Errors[fe.Field]; !ok {
-		e.res.Errors[fe.Field] = fe
-	}
-}
-
 // failErr records an error under the parameter it concerns: the one a
 // *calc.FieldError names when that is a parameter of the link (a
 // segment's field under that segment's parameter), else param.
 func (e *eval) failErr(param string, err error) {
 	var fe *calc.FieldError
 	if !errors.As(err, &fe) {
-		e.recordOther(param, err)
+		e.failAt(param, err)
 		return
 	}
 	c := *fe
@@ -135,19 +146,6 @@ func (e *eval) failErr(param string, err error) {
 		c.Field = fe.Field
 	}
 	e.record(&c)
-}
-
-// failAt records err under param whatever field calc named: used where one
-// calc field ("fit", "d") stands for several parameters ("s2.fit").
-func (e *eval) failAt(param string, err error) {
-	var fe *calc.FieldError
-	if errors.As(err, &fe) {
-		c := *fe
-		c.Field, c.Segment = param, 0
-		e.record(&c)
-		return
-	}
-	e.recordOther(param, err)
 }
 
 // linkName is the link's name of a field calc names in a run ("length"
@@ -174,21 +172,23 @@ func (e *eval) warnCalc(topic string, w calc.Warning) {
 	e.res.Warnings = append(e.res.Warnings, Warning{Param: p, Topic: topic, Segment: w.Segment, Code: w.Code, Text: w.Text, Figures: w.Figures})
 }
 
-// quantity parses a dimensioned parameter into SI. A missing value is an
-// error that asks for it.
+// quantity is a needed parameter's value in SI (or a plain number's).
+// An absent one is an error that asks for it; a Bad one's problem is
+// already recorded.
 func (e *eval) quantity(param string) (float64, bool) {
-	p, _, _ := Lookup(param)
-	text := e.s.Get(param)
-	if strings.TrimSpace(text) == "" {
+	v, ok := e.in.vals[param]
+	if !ok {
 		e.bad(param, calc.Missing)
 		return 0, false
 	}
-	v, err := calc.Parse(param, text, p.Dim, DefaultUnit(param, e.us))
-	if err != nil {
-		e.failErr(param, err)
-		return 0, false
-	}
-	return v, true
+	return v.SI, !v.Bad
+}
+
+// optional is an optional parameter's value: 0 and true when absent,
+// false when Bad.
+func (e *eval) optional(param string) (float64, bool) {
+	v, ok := e.in.vals[param]
+	return v.SI, !ok || !v.Bad
 }
 
 // missingMsg says what to enter for a needed parameter that is absent.
@@ -198,35 +198,41 @@ func missingMsg(param string) string {
 }
 
 // site finds the site's barometric pressure: typed, from altitude, or the
-// standard sea level with a warning.
+// standard sea level with a warning when neither is given. With the one
+// given in error (or both given) the site pressure stays unknown (0), and
+// so does everything that needs it.
 func (e *eval) site() {
-	switch {
-	case e.s.Has("baro"):
-		if p, ok := e.quantity("baro"); ok {
-			if !(p > 0) {
-				e.bad("baro", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
-				return
-			}
-			e.res.SitePressure, e.res.SiteFrom = p, SiteBarometer
-		}
-	case e.s.Has("alt"):
-		if z, ok := e.quantity("alt"); ok {
-			p, err := calc.StandardAtmosphere(z)
-			if err != nil {
-				e.failErr("alt", err)
-				return
-			}
-			e.res.SitePressure, e.res.SiteFrom = p, SiteAltitude
-		}
-	default:
+	if !e.has("alt") && !e.has("baro") {
 		e.res.SitePressure, e.res.SiteFrom = seaLevel, SiteStandard
 		e.warnCalc("site", calc.Warn("alt", calc.CautionStandardAtmosphere, calc.Fig(seaLevel, calc.Pressure)))
+		return
 	}
+	side := e.in.Side("site")
+	v, ok := e.in.Value(side)
+	if !ok {
+		return
+	}
+	if side == "baro" {
+		e.res.SitePressure, e.res.SiteFrom = v.SI, SiteBarometer
+		return
+	}
+	p, err := calc.StandardAtmosphere(v.SI)
+	if err != nil {
+		e.failErr("alt", err) // Read checked the range: not expected
+		return
+	}
+	e.res.SitePressure, e.res.SiteFrom = p, SiteAltitude
 }
+
+// siteKnown reports whether the site pressure is known.
+func (e *eval) siteKnown() bool { return e.res.SitePressure > 0 }
 
 // liquid builds the fluid at its temperature.
 func (e *eval) liquid() {
-	switch liq := strings.TrimSpace(e.s.Get("liq")); liq {
+	if e.in.Bad("liq") {
+		return
+	}
+	switch liq := e.in.Choice("liq"); liq {
 	case "", "water", "seawater":
 		t, ok := e.quantity("t")
 		if !ok {
@@ -291,26 +297,25 @@ func (e *eval) liquid() {
 
 // linePressure is the absolute pressure water's and seawater's properties
 // are taken at: pl when given, else the mean of the points' typed
-// pressures, else the site pressure (doc.go). A bad pl is an error on pl;
-// a point's bad pressure is left to the balance to report, and the mean is
-// then of the others.
+// pressures, else the site pressure (doc.go). ok is false when the one it
+// needs cannot be used (in error, or a gauge pressure at an unknown site):
+// the properties are never taken at another pressure than the sheet says.
 func (e *eval) linePressure() (float64, LiquidSource, bool) {
 	site := e.res.SitePressure
-	if site == 0 {
-		site = seaLevel
+	absolute := func(v Value) (float64, bool) {
+		if v.Abs {
+			return v.SI, true
+		}
+		return v.SI + site, e.siteKnown()
 	}
-	if e.s.Has("pl") {
-		p, ref, err := calc.ParsePressure("pl", e.s.Get("pl"), DefaultUnit("pl", e.us))
-		if err != nil {
-			e.failErr("pl", err)
+	if e.has("pl") {
+		v, ok := e.in.Value("pl")
+		if !ok {
 			return 0, 0, false
 		}
-		abs, good := e.absolute("plref", ref)
-		if !good {
+		p, ok := absolute(v)
+		if !ok {
 			return 0, 0, false
-		}
-		if !abs {
-			p += site
 		}
 		if !(p > 0) {
 			e.bad("pl", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
@@ -318,22 +323,19 @@ func (e *eval) linePressure() (float64, LiquidSource, bool) {
 		}
 		return p, LiquidTyped, true
 	}
-	solve := strings.TrimSpace(e.s.Get("solve"))
+	solve := e.in.Choice("solve")
 	sum, n := 0.0, 0
 	for _, pt := range []string{"p1", "p2"} {
-		if solve == pt || strings.TrimSpace(e.s.Get(pt)) == "" {
+		if solve == pt || !e.has(pt) {
 			continue
 		}
-		p, ref, err := calc.ParsePressure(pt, e.s.Get(pt), DefaultUnit(pt, e.us))
-		if err != nil {
-			continue
+		v, ok := e.in.Value(pt)
+		if !ok {
+			return 0, 0, false
 		}
-		abs, good := isAbsolute(e.s.Get(pt+"ref"), ref) // a bad ref is the balance's to report
-		if !good {
-			continue
-		}
-		if !abs {
-			p += site
+		p, ok := absolute(v)
+		if !ok {
+			return 0, 0, false
 		}
 		sum += p
 		n++
@@ -341,7 +343,7 @@ func (e *eval) linePressure() (float64, LiquidSource, bool) {
 	if n > 0 {
 		return sum / float64(n), LiquidPoints, true
 	}
-	return site, LiquidSite, true
+	return site, LiquidSite, e.siteKnown()
 }
 
 // evalRun evaluates the pipe run at flow q for the Run view.

@@ -13,11 +13,11 @@ func (e *eval) glycol(liq string) {
 	if liq == "pg" {
 		g = calc.PropyleneGlycol
 	}
-	mix := &GlycolMix{Glycol: g, ByVolume: e.s.Has("glyv")}
 	share := "gly"
-	if mix.ByVolume {
+	if e.in.Side("gly") == "v" {
 		share = "glyv"
 	}
+	mix := &GlycolMix{Glycol: g, ByVolume: share == "glyv"}
 	v, okShare := e.quantity(share)
 	t, okT := e.quantity("t")
 	if !okShare {
@@ -38,23 +38,26 @@ func (e *eval) glycol(liq string) {
 	if meant, slip := calc.FractionSlip(v); slip {
 		e.warnCalc("liquid", calc.Warn(share, calc.CautionGlycolSlip, calc.Num(v), calc.Num(meant/100)))
 	}
-	mix.FreezingPoint, _ = calc.GlycolFreezingPoint(g, mix.MassFraction)
+	mix.FreezingPoint, err = calc.GlycolFreezingPoint(g, mix.MassFraction)
+	if err != nil {
+		e.failAt(share, err)
+		return
+	}
 	e.res.Glycol = mix
-	if !okT {
+	if !okT || !e.siteKnown() {
 		return
 	}
 	p := e.res.SitePressure
-	if p == 0 {
-		p = seaLevel
-	}
 	fl, err := calc.GlycolMix(g, mix.MassFraction, t, p)
 	var fe *calc.FieldError
 	if errors.As(err, &fe) && fe.Field == "p" {
 		// boiling at the site pressure: as for water, the properties are
 		// taken at the mix's vapour pressure, with a warning
-		pv, _ := calc.GlycolMix(g, mix.MassFraction, t, calc.GlycolMaxPressure)
-		e.warnCalc("liquid", calc.Warn("t", calc.CautionGlycolBoiling))
-		fl, err = calc.GlycolMix(g, mix.MassFraction, t, pv.VapourPressure)
+		var pv calc.Fluid
+		if pv, err = calc.GlycolMix(g, mix.MassFraction, t, calc.GlycolMaxPressure); err == nil {
+			e.warnCalc("liquid", calc.Warn("t", calc.CautionGlycolBoiling))
+			fl, err = calc.GlycolMix(g, mix.MassFraction, t, pv.VapourPressure)
+		}
 	}
 	if err != nil {
 		e.failAt("t", err)

@@ -16,7 +16,7 @@ func TestGlycolDraft(t *testing.T) {
 	d := NewDraft(Demo())
 	d.Choose("liq", "pg")
 	d.Type("gly", "30")
-	r := Evaluate(d.Scen)
+	r := Evaluate(Read(d.Scen))
 	if r.Glycol == nil || r.Glycol.MassFraction != 0.3 || r.Glycol.ByVolume || r.Fluid == nil {
 		t.Fatalf("pg 30 %% by mass: %+v, errors %v", r.Glycol, r.Errors)
 	}
@@ -28,7 +28,7 @@ func TestGlycolDraft(t *testing.T) {
 	if d.Scen.Has("gly") || d.Scen.Get("glyv") != "30%" {
 		t.Fatalf("by volume: link %s", d.Scen.Encode())
 	}
-	r = Evaluate(d.Scen)
+	r = Evaluate(Read(d.Scen))
 	want, _ := calc.GlycolMassFraction(calc.PropyleneGlycol, 0.3)
 	if r.Glycol == nil || !r.Glycol.ByVolume || math.Abs(r.Glycol.MassFraction-want) > 1e-15 || !(want > 0.3) {
 		t.Fatalf("pg 30 %% by volume: %+v, want %v by mass", r.Glycol, want)
@@ -39,7 +39,7 @@ func TestGlycolDraft(t *testing.T) {
 	}
 	// Water again: the share stays in the link but is not used.
 	d.Choose("liq", "water")
-	if r := Evaluate(d.Scen); r.Glycol != nil || r.Fluid == nil || !strings.HasPrefix(r.Fluid.Name, "water") {
+	if r := Evaluate(Read(d.Scen)); r.Glycol != nil || r.Fluid == nil || !strings.HasPrefix(r.Fluid.Name, "water") {
 		t.Errorf("water with a glycol share left in the link: %+v", r.Glycol)
 	}
 }

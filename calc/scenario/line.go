@@ -13,11 +13,11 @@ import (
 // are none or one is bad (its errors are recorded). z2 is the elevation of
 // point 2, where the last segment ends unless its sN.z says otherwise.
 func (e *eval) line() *calc.Line {
-	n := e.s.SegmentCount()
+	n := e.in.Segments
 	if n == 0 {
 		return nil
 	}
-	if e.s.Has("l") {
+	if e.has("l") {
 		e.bad("l", calc.Inconsistent).With("s1.l").Because(calc.ReasonRunOrSegments)
 		return nil
 	}
@@ -25,28 +25,23 @@ func (e *eval) line() *calc.Line {
 	ok := true
 	for i := 1; i <= n; i++ {
 		pre := fmt.Sprintf("s%d.", i)
-		if !e.s.Has(pre + "l") {
+		if !e.has(pre + "l") {
 			e.bad(pre+"l", calc.Missing).Because(calc.ReasonSegmentGap)
 			ok = false
 			continue
 		}
 		spec, _, good := e.readRun(pre)
 		seg := calc.Segment{Run: spec}
-		if e.s.Has(pre + "cmp") {
-			cs, err := ParseComponents(e.s.Get(pre + "cmp"))
-			if err != nil {
-				e.failAt(pre+"cmp", err)
-				good = false
-			}
-			seg.Components = cs
-		}
+		cmp, g := e.optionalValue(pre + "cmp")
+		good = good && g
+		seg.Components = cmp.Components
 		zp := pre + "z"
 		switch {
-		case e.s.Has(zp):
+		case e.has(zp):
 			z, g := e.quantity(zp)
 			good = good && g
 			seg.EndZ = z
-		case i == n && e.s.Has("z2"):
+		case i == n && e.has("z2"):
 			z, g := e.quantity("z2")
 			good = good && g
 			seg.EndZ = z
@@ -60,7 +55,7 @@ func (e *eval) line() *calc.Line {
 	if !ok {
 		return nil
 	}
-	if e.s.Has("z2") && e.s.Has(fmt.Sprintf("s%d.z", n)) {
+	if e.has("z2") && e.has(SegmentParam(n, "z")) {
 		if z2, good := e.quantity("z2"); good && math.Abs(z2-ln.Segments[n-1].EndZ) > 0.01 {
 			e.warnCalc("line", calc.Warn(SegmentParam(n, "z"), calc.CautionLastSegmentEnd, calc.Fig(ln.Segments[n-1].EndZ, calc.Length), calc.Fig(z2, calc.Length)))
 		}

@@ -80,7 +80,7 @@ func TestComponentsInTheSheet(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	r := Evaluate(s)
+	r := Evaluate(Read(s))
 	if r.Balance == nil {
 		t.Fatalf("errors %v", r.Errors)
 	}
@@ -94,7 +94,7 @@ func TestComponentsInTheSheet(t *testing.T) {
 		t.Errorf("budget components %v", labels)
 	}
 	s, _ = Parse(base + "&s2.cmp=valve:cv0")
-	r = Evaluate(s)
+	r = Evaluate(Read(s))
 	if m := r.Errors["s2.cmp"]; m == nil || m.Reason != calc.ReasonValveCoefficient || !strings.Contains(worded(m, false), `"valve"`) || s.Get("s2.cmp") != "valve:cv0" {
 		t.Errorf("errors %v", r.Errors)
 	}

@@ -473,15 +473,12 @@ func LookupGroup(key string) (Group, bool) {
 }
 
 // CurrentSide is the side of group g a scenario uses: the one whose
-// parameters it holds, else chosen (when it names a side), else the
-// default.
+// parameters it holds (the first such when both sides are held, which Read
+// reports as a problem on each), else chosen (when it names a side), else
+// the default. Read resolves groups by the same rule (sideOf).
 func (s Scenario) CurrentSide(g Group, chosen string) string {
-	for _, sd := range g.Sides {
-		for _, p := range sd.Params {
-			if s.Has(p) {
-				return sd.Key
-			}
-		}
+	if side, _ := s.sideOf(g); side != "" {
+		return side
 	}
 	for _, sd := range g.Sides {
 		if sd.Key == chosen {

@@ -1,9 +1,7 @@
 package scenario
 
 import (
-	"errors"
 	"math"
-	"strings"
 
 	"fieldhead/calc"
 )
@@ -40,7 +38,7 @@ type PumpResult struct {
 // pump reads the data sheet, speed and arrangement, then finds the
 // operating point on the balance's line.
 func (e *eval) pump() {
-	if !e.s.Has("pq") && !e.s.Has("ph") {
+	if !e.has("pq") && !e.has("ph") {
 		return
 	}
 	pr := &PumpResult{Speed: 1, Count: 1}
@@ -49,28 +47,20 @@ func (e *eval) pump() {
 	if !ok1 || !ok2 {
 		return
 	}
-	if len(qs) != len(hs) {
-		e.bad("ph", calc.WrongCount).Given(len(hs)).AtMost(calc.Num(float64(len(qs)))).With("pq")
-		return
-	}
 	pts := make([]calc.PumpPoint, len(qs))
 	for i := range qs {
 		pts[i] = calc.PumpPoint{Q: qs[i], H: hs[i]}
 	}
 	for _, opt := range []string{"peff", "pnpsh"} {
-		if !e.s.Has(opt) {
+		if !e.has(opt) {
 			continue
 		}
 		vs, ok := e.list(opt)
 		if !ok {
 			return
 		}
-		if len(vs) != len(qs) {
-			e.bad(opt, calc.WrongCount).Given(len(vs)).AtMost(calc.Num(float64(len(qs)))).With("pq")
-			return
-		}
-		if opt == "peff" && !e.sheetEfficiencies(vs) {
-			return
+		if opt == "peff" {
+			e.sheetEfficiencies(vs)
 		}
 		for i, v := range vs {
 			if opt == "peff" {
@@ -93,13 +83,7 @@ func (e *eval) pump() {
 		name string
 		v    *float64
 	}{{"nrat", &pr.Rated}, {"fmains", &pr.Mains}} {
-		if e.s.Has(ref.name) {
-			if v, ok := e.quantity(ref.name); ok && v > 0 {
-				*ref.v = v
-			} else if ok {
-				e.bad(ref.name, calc.NotPositive)
-			}
-		}
+		*ref.v = e.in.Num(ref.name) // 0 when absent or Bad
 	}
 	spd, ok := e.speed()
 	if !ok {
@@ -112,13 +96,12 @@ func (e *eval) pump() {
 		return
 	}
 	pr.Single, pr.Curve = single, single
-	switch a := strings.TrimSpace(e.s.Get("pumps")); a {
+	if e.in.Bad("pumps") {
+		return // Read reported it
+	}
+	switch a := e.in.Choice("pumps"); a {
 	case "", "1":
 	default:
-		if len(a) != 2 || a[0] < '2' || a[0] > '8' || (a[1] != 'p' && a[1] != 's') {
-			e.bad("pumps", calc.UnknownChoice).Typed(a).Because(calc.ReasonPumpsCount)
-			return
-		}
 		pr.Count, pr.Parallel = int(a[0]-'0'), a[1] == 'p'
 		c, err := single.Combine(pr.Count, pr.Parallel)
 		if err != nil {
@@ -166,7 +149,7 @@ func (e *eval) pump() {
 // else the duty flow q; NPSHr is typed (npshr), else the data sheet's at
 // that flow. With a balance it also gives NPSHa over the chart's flows.
 func (e *eval) npsh(line *calc.Line) {
-	if !e.s.Has("zp") || e.res.Fluid == nil {
+	if !e.has("zp") || e.res.Fluid == nil || !e.siteKnown() {
 		return
 	}
 	fl := *e.res.Fluid
@@ -190,16 +173,12 @@ func (e *eval) npsh(line *calc.Line) {
 		q, haveQ = pr.Operating.Q, true
 	case e.bal != nil && e.bal.Unknown != calc.SolveFlow:
 		q, haveQ = e.bal.Q, true
-	case e.s.Has("q"):
+	case e.has("q"):
 		q, haveQ = e.quantity("q")
 	}
-	typed := e.s.Has("hs")
+	typed := e.has("hs")
 	if typed {
 		v, good := e.quantity("hs")
-		if good && v < 0 {
-			e.bad("hs", calc.Negative).Got(calc.Fig(v, calc.Length))
-			good = false
-		}
 		ok = ok && good
 		src.SuctionLoss = v
 	}
@@ -215,7 +194,7 @@ func (e *eval) npsh(line *calc.Line) {
 		}
 	}
 	switch {
-	case e.s.Has("npshr"):
+	case e.in.Side("npsh") == "typed" && e.has("npshr"):
 		v, good := e.quantity("npshr")
 		ok = ok && good
 		src.NPSHr = v
@@ -258,13 +237,17 @@ func (e *eval) npsh(line *calc.Line) {
 		e.warnCalc("npsh", calc.Warn("hs", calc.CautionSuctionLossZero))
 	}
 	if pr != nil {
+		// The curve stops at the first flow it cannot be worked out at (the
+		// suction side's own limits, e.g. a Reynolds number beyond the
+		// friction formula's): the chart draws what is known, and says so.
 		for _, p := range pr.System {
 			x, err := in(p.Q)
-			if err != nil {
-				return
+			var a calc.NPSHResult
+			if err == nil {
+				a, err = calc.NPSH(fl, x)
 			}
-			a, err := calc.NPSH(fl, x)
 			if err != nil {
+				e.warnCalc("npsh", calc.Warn("zp", calc.CautionNPSHCurveCut, calc.Fig(p.Q, calc.Flow)))
 				return
 			}
 			pr.NPSHa = append(pr.NPSHa, calc.CurvePoint{Q: p.Q, H: a.Available})
@@ -281,27 +264,27 @@ type NPSHSuction struct {
 }
 
 // pumpAfter is the segment of line the pump follows: pafter, else after
-// segment 1 of a line of two or more, else at point 1. −1 (and an error)
-// when pafter is not a segment of the line.
+// segment 1 of a line of two or more, else at point 1. −1 when pafter is
+// in error (Read reported it).
 func (e *eval) pumpAfter(line *calc.Line) int {
-	n := len(line.Segments)
-	if !e.s.Has("pafter") {
-		if n > 1 {
+	if !e.has("pafter") {
+		if len(line.Segments) > 1 {
 			return 1
 		}
 		return 0
 	}
-	v, err := number("pafter", e.s.Get("pafter"))
-	if err != nil || v != math.Trunc(v) || v < 0 || int(v) > n {
-		e.bad("pafter", calc.OutOfRange).Typed(e.s.Get("pafter")).Within(calc.Num(0), calc.Num(float64(n))).Because(calc.ReasonPumpAfter)
+	v, ok := e.in.Value("pafter")
+	if !ok {
 		return -1
 	}
-	return int(v)
+	return int(v.SI)
 }
 
-// field works out the pump's performance from gauge readings.
+// field works out the pump's performance from gauge readings. The motor
+// efficiency feeds only the pump-alone figures: in error, the rest of the
+// check still stands.
 func (e *eval) field() {
-	if !e.s.Has("qm") && !e.s.Has("ps") && !e.s.Has("pd") {
+	if !e.has("qm") && !e.has("ps") && !e.has("pd") {
 		return
 	}
 	if e.res.Fluid == nil {
@@ -309,19 +292,16 @@ func (e *eval) field() {
 	}
 	ok := true
 	gauge := func(param string) float64 {
-		text := e.s.Get(param)
-		if strings.TrimSpace(text) == "" {
-			e.bad(param, calc.Missing)
+		p, good := e.quantity(param)
+		if !good {
 			ok = false
 			return 0
 		}
-		p, ref, err := calc.ParsePressure(param, text, DefaultUnit(param, e.us))
-		if err != nil {
-			e.failErr(param, err)
-			ok = false
-			return 0
-		}
-		if ref == calc.Absolute {
+		if e.in.vals[param].Abs {
+			if !e.siteKnown() {
+				ok = false
+				return 0
+			}
 			p -= e.res.SitePressure
 		}
 		return p
@@ -331,34 +311,29 @@ func (e *eval) field() {
 		ok = ok && good
 		return v
 	}
-	bore := func(d, nps, sch string) float64 {
-		if !e.s.Has(nps) && !e.s.Has(sch) {
+	bore := func(group, d, nps, sch string) float64 {
+		if e.in.Side(group) == "d" || !e.has(nps) && !e.has(sch) {
 			return get(d)
 		}
-		ps, err := calc.LookupPipe(strings.TrimSpace(e.s.Get(nps)), strings.TrimSpace(e.s.Get(sch)))
-		if err != nil {
-			field := nps
-			var fe *calc.FieldError
-			if errors.As(err, &fe) && fe.Field == "sch" {
-				field = sch
-			}
-			e.failAt(field, err)
-			ok = false
+		v, good := e.in.Value(nps)
+		if s, g := e.in.Value(sch); g && s.Pipe != nil {
+			v, good = s, true
+		}
+		if !good || v.Pipe == nil {
+			ok = false // Read reported it
 			return 0
 		}
-		return ps.ID
+		return v.Pipe.ID
 	}
 	r := calc.FieldReadings{Ps: gauge("ps"), Pd: gauge("pd"), Zs: get("zs"), Zd: get("zd"),
-		Ds: bore("ds", "dsn", "dss"), Dd: bore("dd", "ddn", "dds"), Q: get("qm")}
-	if e.s.Has("pin") {
+		Ds: bore("gsp", "ds", "dsn", "dss"), Dd: bore("gdp", "dd", "ddn", "dds"), Q: get("qm")}
+	if e.has("pin") {
 		r.PowerIn = get("pin")
 	}
-	if e.s.Has("etam") {
-		v, good := e.share("etam")
-		ok = ok && good
-		r.MotorEff = v
-		if v > calc.MotorEfficiencyHigh && v <= 1 {
-			e.warnCalc("field", calc.Warn("etam", calc.CautionMotorEffHigh, calc.Num(v), calc.Num(calc.MotorEfficiencyHigh)))
+	if v, good := e.in.Value("etam"); good {
+		r.MotorEff = v.SI
+		if v.SI > calc.MotorEfficiencyHigh && v.SI <= 1 {
+			e.warnCalc("field", calc.Warn("etam", calc.CautionMotorEffHigh, calc.Num(v.SI), calc.Num(calc.MotorEfficiencyHigh)))
 		}
 	}
 	if !ok {
@@ -388,10 +363,10 @@ func (e *eval) field() {
 // gives the most output, when the balance solves for the turbine head and
 // an efficiency is given.
 func (e *eval) turbine() {
-	if !e.s.Has("etat") || e.bal == nil {
+	if !e.has("etat") || e.bal == nil {
 		return
 	}
-	eff, ok := e.share("etat")
+	eff, ok := e.quantity("etat")
 	if !ok {
 		return
 	}
@@ -421,7 +396,7 @@ func (e *eval) turbine() {
 // view): solving the line at 41 flows for each is most of an evaluation,
 // and an edit on another view need not wait for it.
 func (e *eval) drawsCurves() bool {
-	switch e.s.Get("view") {
+	switch e.in.View {
 	case "", "pump", "report":
 		return true
 	}

@@ -47,37 +47,15 @@ func isFrequency(u string) bool {
 	return err == nil && unit.Dim == calc.Frequency
 }
 
-// share reads an efficiency typed in %: a value of 1.5 % or less is
-// refused as a fraction typed into a percentage box (calc.FractionSlip),
-// with the percentage it probably meant.
-func (e *eval) share(param string) (float64, bool) {
-	v, ok := e.quantity(param)
-	if !ok {
-		return 0, false
-	}
-	if meant, slip := calc.FractionSlip(v); slip {
-		e.bad(param, calc.OutOfRange).Got(calc.Num(v)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
-		return 0, false
-	}
-	return v, true
-}
-
-// sheetEfficiencies checks the data sheet's efficiency list for slips and
-// implausible values.
-func (e *eval) sheetEfficiencies(vs []float64) bool {
-	for i, v := range vs {
-		if meant, slip := calc.FractionSlip(v); slip {
-			e.bad("peff", calc.OutOfRange).At(i+1).Got(calc.Num(v)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
-			return false
-		}
-	}
+// sheetEfficiencies warns of an implausibly high data-sheet efficiency
+// (Read refused fractions typed into the percentage boxes).
+func (e *eval) sheetEfficiencies(vs []float64) {
 	for i, v := range vs {
 		if v > calc.PumpEfficiencyHigh && v <= 1 {
 			e.warnCalc("pump", calc.Warn("peff", calc.CautionSheetEffHigh, calc.Num(float64(i+1)), calc.Num(v), calc.Num(calc.PumpEfficiencyHigh)))
 			break
 		}
 	}
-	return true
 }
 
 // speed reads the speed as a share of the data sheet's: typed in %, in
@@ -86,38 +64,29 @@ func (e *eval) sheetEfficiencies(vs []float64) bool {
 // motor's speed follows the supply frequency nearly in proportion, common
 // practice). Above 100 % it warns of overspeed.
 func (e *eval) speed() (float64, bool) {
-	if !e.s.Has("spd") {
+	if !e.has("spd") {
 		return 1, true
 	}
-	text := e.s.Get("spd")
-	_, u := Split(text)
-	ratio := 0.0
-	if isFrequency(u) {
-		v, err := calc.Parse("spd", text, calc.Frequency, "")
-		if err != nil {
-			e.failErr("spd", err)
-			return 0, false
-		}
-		unit, _ := calc.LookupUnit(u)
+	v, ok := e.in.Value("spd")
+	if !ok {
+		return 0, false
+	}
+	ratio := v.SI
+	if v.Dim == calc.Frequency {
+		unit, _ := calc.LookupUnit(v.Unit)
 		ref := "nrat"
 		if unit.Symbol == "Hz" {
 			ref = "fmains"
 		}
-		if !e.s.Has(ref) {
+		if !e.has(ref) {
 			e.bad("spd", calc.Missing).With(ref).Typed(unit.Symbol).Because(calc.ReasonSpeedReference)
 			return 0, false
 		}
 		base, ok := e.quantity(ref)
-		if !ok || !(base > 0) {
-			return 0, false // pump() reported it
-		}
-		ratio = v / base
-	} else {
-		v, ok := e.quantity("spd")
 		if !ok {
-			return 0, false
+			return 0, false // Read reported it
 		}
-		ratio = v
+		ratio = v.SI / base
 	}
 	if ratio > 1 && ratio <= calc.PumpSpeedRatioMax {
 		e.warnCalc("pump", calc.Warn("spd", calc.CautionOverspeed, calc.Num(ratio)))
@@ -158,8 +127,8 @@ func (e *eval) regionCheck(b *calc.BEP, q float64, param, topic string) {
 // speedFor solves for the speed at which the pumps deliver the flow qsp,
 // or the head hsp, on the line.
 func (e *eval) speedFor(pr *PumpResult) {
-	byHead := e.s.Has("hsp")
-	if (!e.s.Has("qsp") && !byHead) || e.bal == nil || e.bal.Unknown != calc.SolvePumpHead {
+	byHead := e.in.Side("spfor") == "h"
+	if (!e.has("qsp") && !e.has("hsp")) || e.bal == nil || e.bal.Unknown != calc.SolvePumpHead {
 		return
 	}
 	var q float64
@@ -209,19 +178,10 @@ func (e *eval) speedFor(pr *PumpResult) {
 // measured input when there is one, else from the operating point (its
 // shaft power, over the motor efficiency when given).
 func (e *eval) energy() {
-	hours, tariff := 0.0, 0.0
-	for _, p := range []struct {
-		name string
-		v    *float64
-	}{{"hours", &hours}, {"tariff", &tariff}} {
-		if !e.s.Has(p.name) {
-			continue
-		}
-		v, err := number(p.name, e.s.Get(p.name))
-		if err != nil {
-			return // checkAll reported it
-		}
-		*p.v = v
+	hours, ok1 := e.optional("hours")
+	tariff, ok2 := e.optional("tariff")
+	if !ok1 || !ok2 {
+		return // Read reported it
 	}
 	var er EnergyResult
 	switch f := e.res.Field; {
@@ -230,8 +190,12 @@ func (e *eval) energy() {
 	case e.res.Pump != nil && e.res.Pump.Operating != nil && e.res.Pump.Operating.ShaftPower > 0:
 		op := e.res.Pump.Operating
 		er = EnergyResult{Power: op.ShaftPower, Shaft: true, Q: op.Q, H: op.H}
-		if e.s.Has("etam") {
-			if m, ok := e.share("etam"); ok && m > 0 {
+		if e.has("etam") {
+			m, ok := e.quantity("etam")
+			if !ok {
+				return // Read reported it: the power drawn is not known
+			}
+			if m > 0 {
 				er.Power, er.Shaft = op.ShaftPower/m, false
 			}
 		}
@@ -256,7 +220,7 @@ var accuracyParams = []string{"gcs", "gss", "gcd", "gsd", "uqm", "upin", "uz"}
 func (e *eval) bands(fc calc.FieldCheck) {
 	given := false
 	for _, p := range accuracyParams {
-		given = given || e.s.Has(p)
+		given = given || e.has(p)
 	}
 	if !given {
 		return
@@ -264,7 +228,7 @@ func (e *eval) bands(fc calc.FieldCheck) {
 	var a calc.Accuracy
 	ok := true
 	read := func(p string, v *float64) {
-		if !e.s.Has(p) {
+		if !e.has(p) {
 			return
 		}
 		x, good := e.quantity(p)
@@ -280,13 +244,13 @@ func (e *eval) bands(fc calc.FieldCheck) {
 	read("uz", &a.Height)
 	for _, pair := range [][2]string{{"gcs", "gss"}, {"gcd", "gsd"}} {
 		for i, p := range pair {
-			if e.s.Has(p) && !e.s.Has(pair[1-i]) {
+			if e.has(p) && !e.has(pair[1-i]) {
 				e.bad(pair[1-i], calc.Missing).With(p).Because(calc.ReasonGoTogether)
 				ok = false
 			}
 		}
 	}
-	if a.Power > 0 && !e.s.Has("pin") {
+	if a.Power > 0 && !e.has("pin") {
 		e.warnCalc("field", calc.Warn("upin", calc.CautionPowerAccuracyUnused))
 	}
 	if !ok {
@@ -302,10 +266,10 @@ func (e *eval) bands(fc calc.FieldCheck) {
 
 // accept judges the field check under the chosen grade.
 func (e *eval) accept(fc calc.FieldCheck) {
-	if !e.s.Has("grade") {
+	if !e.has("grade") {
 		return
 	}
-	g, ok := calc.LookupGrade(e.s.Get("grade"))
+	g, ok := calc.LookupGrade(e.in.Choice("grade"))
 	if !ok {
 		return // checkAll reported it
 	}

@@ -12,6 +12,10 @@ type Result struct {
 
 	US bool // the scenario asks for US customary units
 
+	// Inputs is what the results were worked out from: the scenario as
+	// Read made it.
+	Inputs Inputs
+
 	Fluid        *calc.Fluid // the liquid at its temperature
 	SitePressure float64     // Pa absolute
 	SiteFrom     SiteSource  // how the site pressure was found

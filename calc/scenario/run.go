@@ -3,8 +3,6 @@ package scenario
 import (
 	"errors"
 	"math"
-	"strconv"
-	"strings"
 
 	"fieldhead/calc"
 )
@@ -12,7 +10,7 @@ import (
 // run reads the single pipe run, or returns nil when none is described
 // (its length l is the sign of one).
 func (e *eval) run() *RunResult {
-	if !e.s.Has("l") {
+	if !e.has("l") {
 		return nil
 	}
 	spec, meta, ok := e.readRun("")
@@ -23,126 +21,95 @@ func (e *eval) run() *RunResult {
 	return meta
 }
 
-// readRun reads the parameters of a pipe run named with prefix pre ("" for
-// the single run, "s2." for segment 2). The friction method and a typed
-// Hazen–Williams C are shared by every run of the scenario.
+// readRun makes the pipe run named with prefix pre ("" for the single run,
+// "s2." for segment 2) from its inputs, each group on the side the inputs
+// use. The friction method and a typed Hazen–Williams C are shared by every
+// run of the scenario.
 func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 	p := func(f string) string { return pre + f }
 	r := &RunResult{}
 	ok := true
-	positive := func(param, what string) float64 {
-		v, good := e.quantity(param)
-		if good && !(v > 0) {
-			e.bad(param, calc.NotPositive).Got(calc.Fig(v, calc.Length))
-			good = false
-		}
-		ok = ok && good
-		return v
-	}
 	// A length of zero is a run of fittings alone (a valve set), as calc
-	// allows.
-	if l, good := e.quantity(p("l")); !good {
-		ok = false
-	} else if l < 0 {
-		e.bad(p("l"), calc.Negative).Got(calc.Fig(l, calc.Length))
-		ok = false
-	} else {
-		r.Length = l
-	}
+	// allows; Read refused a negative one.
+	l, good := e.quantity(p("l"))
+	ok = ok && good
+	r.Length = l
 	switch {
-	case e.s.Has(p("d")):
-		r.Diameter = positive(p("d"), "the inside diameter")
-	case e.s.Has(p("nps")) || e.s.Has(p("sch")):
-		ps, err := calc.LookupPipe(strings.TrimSpace(e.s.Get(p("nps"))), strings.TrimSpace(e.s.Get(p("sch"))))
-		if err != nil {
-			field := p("nps")
-			var fe *calc.FieldError
-			if errors.As(err, &fe) && fe.Field == "sch" {
-				field = p("sch")
-			}
-			e.failAt(field, err)
-			ok = false
-		} else {
-			r.Pipe = &ps
-			r.Diameter = ps.ID
-		}
+	case e.in.Side(p("pipe")) == "d" || !e.has(p("nps")) && !e.has(p("sch")):
+		d, good := e.quantity(p("d"))
+		ok = ok && good
+		r.Diameter = d
 	default:
-		e.bad(p("d"), calc.Missing)
-		ok = false
+		v, good := e.in.Value(p("nps"))
+		if sch, g := e.in.Value(p("sch")); g && sch.Pipe != nil {
+			v, good = sch, true
+		}
+		if !good || v.Pipe == nil {
+			if !e.in.AnyBad(p("nps"), p("sch")) {
+				e.bad(p("nps"), calc.Missing) // Read looks a size up only with both
+			}
+			ok = false
+			break
+		}
+		r.Pipe = v.Pipe
+		r.Diameter = v.Pipe.ID
 	}
 	var mat *calc.Material
-	if e.s.Has(p("mat")) {
-		m, err := calc.LookupMaterial(strings.TrimSpace(e.s.Get(p("mat"))))
-		if err != nil {
-			e.failAt(p("mat"), err)
-			ok = false
-		} else {
-			mat = &m
-			r.Material = mat
-		}
+	if e.has(p("mat")) {
+		v, good := e.in.Value(p("mat"))
+		ok = ok && good
+		mat = v.Material
+		r.Material = mat
 	}
 	method := calc.MethodColebrook
-	if e.s.Has("fm") {
-		m, err := calc.ParseFrictionMethod(strings.TrimSpace(e.s.Get("fm")))
+	if e.has("fm") {
+		m, err := calc.ParseFrictionMethod(e.in.Choice("fm"))
 		if err != nil {
-			e.failAt("fm", err)
-			ok = false
+			ok = false // Read reported it
 		}
 		method = m
 	}
 	switch {
-	case e.s.Has(p("eps")):
-		if eps, good := e.quantity(p("eps")); good {
-			if eps < 0 {
-				e.bad(p("eps"), calc.Negative).Got(calc.Fig(eps, calc.Length))
-				ok = false
-			}
-			r.Roughness = eps
-		} else {
-			ok = false
-		}
+	case e.has(p("eps")):
+		eps, good := e.quantity(p("eps"))
+		ok = ok && good
+		r.Roughness = eps
 	case mat != nil:
 		r.Roughness = mat.Roughness
-	case method != calc.MethodHazenWilliams:
+	case method != calc.MethodHazenWilliams && !e.in.Bad(p("mat")):
 		e.bad(p("eps"), calc.Missing)
 		ok = false
 	}
 	hc := 0.0
 	switch {
-	case e.s.Has("chw"):
-		c, err := number("chw", e.s.Get("chw"))
-		if err != nil || !(c > 0) {
-			e.bad("chw", calc.NotPositive).Typed(e.s.Get("chw"))
-			ok = false
-		}
+	case e.has("chw"):
+		c, good := e.quantity("chw")
+		ok = ok && good
 		hc = c
 	case mat != nil:
 		hc = mat.HazenC
 	}
-	if method == calc.MethodHazenWilliams && !(hc > 0) {
+	if method == calc.MethodHazenWilliams && !(hc > 0) && !e.in.Bad("chw") {
 		e.bad("chw", calc.Missing).With("mat")
 		ok = false
 	}
-	fits, err := ParseFittings(e.s.Get(p("fit")))
-	if err != nil {
-		e.failAt(p("fit"), err)
-		ok = false
-	}
-	extra := 0.0
-	if e.s.Has(p("k")) {
-		k, err := number(p("k"), e.s.Get(p("k")))
-		if err != nil || k < 0 {
-			e.bad(p("k"), calc.Negative).Typed(e.s.Get(p("k")))
-			ok = false
-		}
-		extra = k
-	}
+	fit, good := e.optionalValue(p("fit"))
+	ok = ok && good
+	extra, good := e.optional(p("k"))
+	ok = ok && good
 	if !ok {
 		return calc.Run{}, nil, false
 	}
 	spec := calc.Run{Length: r.Length, Diameter: r.Diameter, Roughness: r.Roughness,
-		Fittings: fits, ExtraK: extra, Method: method, HazenC: hc}
+		Fittings: fit.Fittings, ExtraK: extra, Method: method, HazenC: hc}
 	return spec, r, true
+}
+
+// optionalValue is an optional parameter as read: the zero Value and true
+// when absent, false when Bad.
+func (e *eval) optionalValue(param string) (Value, bool) {
+	v, ok := e.in.vals[param]
+	return v, !ok || !v.Bad
 }
 
 // RunView is what the Run view shows: one run (the single run, or a
@@ -172,24 +139,21 @@ type Sizing struct {
 // line (segment 1 when not given), else the single run, and its sizing
 // table.
 func (e *eval) runView(line *calc.Line) {
-	if e.s.Get("view") != "regime" || e.res.Fluid == nil {
+	if e.in.View != "regime" || e.res.Fluid == nil {
 		return
 	}
 	rv := &RunView{}
 	pre := ""
 	var spec calc.Run
 	switch {
-	case line != nil || e.s.SegmentCount() > 0:
-		n := e.s.SegmentCount()
+	case line != nil || e.in.Segments > 0:
 		rv.Segment = 1
-		if t := strings.TrimSpace(e.s.Get("rseg")); t != "" {
-			k, err := strconv.Atoi(t)
-			if err != nil || k < 1 || k > n {
-				e.bad("rseg", calc.OutOfRange).Typed(t).Within(calc.Num(1), calc.Num(float64(n))).Because(calc.ReasonRunSegment)
-				e.res.RunView = rv
+		if e.has("rseg") {
+			if e.in.Bad("rseg") {
+				e.res.RunView = rv // Read reported it
 				return
 			}
-			rv.Segment = k
+			rv.Segment = e.in.RunSegment()
 		}
 		pre = SegmentParam(rv.Segment, "")
 		e.res.RunView = rv
@@ -212,7 +176,7 @@ func (e *eval) runView(line *calc.Line) {
 			w.Segment = rv.Segment
 			e.warnCalc("runview", w)
 		}
-	case e.s.Has("l"):
+	case e.has("l"):
 		e.res.RunView = rv
 		if e.res.Run == nil {
 			return // the run's or the flow's errors say why
@@ -228,7 +192,10 @@ func (e *eval) runView(line *calc.Line) {
 // else the run's own class; the marks vlo, vhi and grad, else the
 // defaults of calc.DefaultSizingLimits (common practice).
 func (e *eval) sizing(rv *RunView, spec calc.Run, pre string, q float64) {
-	class := strings.TrimSpace(e.s.Get("szsch"))
+	if e.in.Bad("szsch") {
+		return
+	}
+	class := e.in.Choice("szsch")
 	if class == "" && rv.Run.Pipe != nil {
 		class = rv.Run.Pipe.Schedule
 	}
@@ -255,20 +222,15 @@ func (e *eval) sizing(rv *RunView, spec calc.Run, pre string, q float64) {
 	for _, p := range []struct {
 		name string
 		v    *float64
-	}{{"vlo", &lim.VelocityLow}, {"vhi", &lim.VelocityHigh}} {
-		if e.s.Has(p.name) {
+	}{{"vlo", &lim.VelocityLow}, {"vhi", &lim.VelocityHigh}, {"grad", &lim.GradientMax}} {
+		if e.has(p.name) {
 			v, good := e.quantity(p.name)
 			ok = ok && good
 			*p.v = v
 		}
 	}
-	if e.s.Has("grad") {
-		g, err := number("grad", e.s.Get("grad"))
-		if err != nil || !(g > 0) {
-			e.bad("grad", calc.NotPositive).Typed(e.s.Get("grad"))
-			ok = false
-		}
-		lim.GradientMax = g / 100
+	if e.has("grad") {
+		lim.GradientMax /= 100 // typed per 100 of length
 	}
 	if !ok {
 		return

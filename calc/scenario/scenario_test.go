@@ -102,13 +102,13 @@ func TestLenientPercent(t *testing.T) {
 	if s.Get("spd") != "90%" || s.Get("peff") != "0,50,70%" || s.Get("p1") != "%zz" {
 		t.Errorf("got spd=%q peff=%q p1=%q", s.Get("spd"), s.Get("peff"), s.Get("p1"))
 	}
-	if r := Evaluate(s); r.Errors["p1"] == nil || !strings.HasPrefix(r.Errors["p1"].Error(), "p1:") {
+	if r := Evaluate(Read(s)); r.Errors["p1"] == nil || !strings.HasPrefix(r.Errors["p1"].Error(), "p1:") {
 		t.Errorf("p1=%%zz: want a message on p1, got %v", r.Errors)
 	}
 }
 
 func TestDemo(t *testing.T) {
-	r := Evaluate(Demo())
+	r := Evaluate(Read(Demo()))
 	if len(r.Errors) > 0 {
 		t.Fatalf("the demo has errors: %v", r.Errors)
 	}
@@ -119,10 +119,10 @@ func TestDemo(t *testing.T) {
 	// The curves are worked out for the views that draw them (drawsCurves).
 	pumpView := Demo()
 	_ = pumpView.Set("view", "pump")
-	if len(r.Pump.System) != 0 || len(Evaluate(pumpView).Pump.System) == 0 {
+	if len(r.Pump.System) != 0 || len(Evaluate(Read(pumpView)).Pump.System) == 0 {
 		t.Errorf("the system curve: %d points on the Balance view, want none; none on the Pump view", len(r.Pump.System))
 	}
-	if t2 := Evaluate(TurbineDemo()); len(t2.Errors) > 0 || t2.Turbine == nil || t2.BestTurbine == nil {
+	if t2 := Evaluate(Read(TurbineDemo())); len(t2.Errors) > 0 || t2.Turbine == nil || t2.BestTurbine == nil {
 		t.Errorf("the turbine demo: errors %v, turbine %v", t2.Errors, t2.Turbine)
 	}
 	// Sanity, not a reference: the static lift is 39 m, so the pump head
@@ -192,7 +192,7 @@ func TestBadInputs(t *testing.T) {
 			t.Errorf("%s: the link itself failed: %v", tc.query, err)
 			continue
 		}
-		r := Evaluate(s)
+		r := Evaluate(Read(s))
 		if tc.param != "" {
 			fe, ok := r.Errors[tc.param]
 			if !ok {
@@ -318,7 +318,7 @@ func FuzzScenario(f *testing.F) {
 	f.Add(TurbineDemo().Encode() + "&tc=1e-300s&wall=1e-300mm&epipe=1e300GPa&kliq=1e300GPa&cr=2&dv=1e300m/s")
 	f.Fuzz(func(t *testing.T, q string) {
 		s, _ := Parse(q)
-		r := Evaluate(s)
+		r := Evaluate(Read(s))
 		checkFinite(t, fmt.Sprintf("%.60q", q), r)
 		for p, fe := range r.Errors {
 			// A "?" stands for a missing word unless the user typed it
@@ -341,7 +341,7 @@ func FuzzScenario(f *testing.F) {
 func ExampleEvaluate() {
 	s, _ := Parse("liq=water&t=20C&alt=0m&p1=0kPa&z1=10m&v1=0&p2=150kPa&z2=18m&d2=50mm" +
 		"&q=4L/s&solve=hp&l=60m&d=50mm&mat=pvc&fit=elbow90:3,gate:1")
-	r := Evaluate(s)
+	r := Evaluate(Read(s))
 	fmt.Println("pump head", ShowParam("hp", r.Balance.Value, false))
 	fmt.Println("regime", r.Run.Regime, "at Re", calc.FormatNumber(r.Run.Reynolds, 4))
 	// Output:

@@ -3,7 +3,6 @@ package scenario
 import (
 	"errors"
 	"math"
-	"strings"
 
 	"fieldhead/calc"
 )
@@ -39,49 +38,33 @@ type SurgePipe struct {
 // is given: the liquid's bulk modulus, each pipe's wall and modulus, then
 // calc.Surge.
 func (e *eval) surge(run *RunResult, line *calc.Line) {
-	if !e.s.Has("tc") || e.res.Fluid == nil {
+	if !e.has("tc") || e.res.Fluid == nil || !e.siteKnown() {
 		return
 	}
 	tc, ok := e.quantity("tc")
-	if ok && !(tc > 0) {
-		e.bad("tc", calc.NotPositive).Got(calc.Fig(tc, calc.Duration))
-		ok = false
-	}
 	k, from, good := e.bulkModulus()
 	ok = ok && good
-	dv := 0.0
-	if e.s.Has("dv") {
-		v, good := e.quantity("dv")
-		if good && !(v > 0) {
-			e.bad("dv", calc.NotPositive).Got(calc.Fig(v, calc.Velocity)).Because(calc.ReasonVelocityChange)
-			good = false
-		}
-		ok, dv = ok && good, v
-	}
+	dv, good := e.optional("dv")
+	ok = ok && good
 	c := 1.0
-	if e.s.Has("cr") {
-		v, err := number("cr", e.s.Get("cr"))
-		if err != nil || !(v > 0 && v <= 2) {
-			fe := e.bad("cr", calc.OutOfRange).Within(calc.Num(0), calc.Num(2)).Because(calc.ReasonRestraint)
-			if err != nil {
-				fe.Typed(e.s.Get("cr"))
-			} else {
-				fe.Got(calc.Num(v))
-			}
-			ok = false
-		}
-		c = v
+	if e.has("cr") {
+		v, good := e.quantity("cr")
+		ok, c = ok && good, v
 	}
 	pipes, good := e.surgePipes(run, line, c)
 	if !ok || !good {
 		return
 	}
+	// The flow stopped: the balance's, else the flow typed; none (the
+	// velocity change typed instead) leaves calc to ask for one.
 	q := 0.0
 	switch {
 	case e.res.Balance != nil:
 		q = e.res.Balance.Q
-	case e.s.Has("q"):
-		q, _ = e.quantity("q")
+	case e.has("q"):
+		if q, ok = e.quantity("q"); !ok {
+			return // Read reported it: no surge from a flow in error
+		}
 	}
 	for i := range pipes {
 		d := pipes[i].Diameter
@@ -120,17 +103,13 @@ func (e *eval) surge(run *RunResult, line *calc.Line) {
 // bulkModulus is the liquid's bulk modulus: typed (kliq), else from the
 // speed of sound of water or seawater; another liquid needs it typed.
 func (e *eval) bulkModulus() (float64, string, bool) {
-	if e.s.Has("kliq") {
+	if e.has("kliq") {
 		k, ok := e.quantity("kliq")
-		if ok && !(k > 0) {
-			e.bad("kliq", calc.NotPositive).Got(calc.Fig(k, calc.Pressure)).Because(calc.ReasonBulkModulus, calc.Fig(2.2e9, calc.Pressure))
-			return 0, "", false
-		}
 		return k, "typed", ok
 	}
 	fl := e.res.Fluid
 	p := math.Max(e.res.SitePressure, fl.VapourPressure)
-	switch strings.TrimSpace(e.s.Get("liq")) {
+	switch e.in.Choice("liq") {
 	case "", "water":
 		k, err := calc.WaterBulkModulus(fl.Temperature, p)
 		if err != nil {
@@ -168,28 +147,20 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 	case run != nil && e.runSpec.Diameter > 0:
 		specs = append(specs, spec{"", e.runSpec.Length, e.runSpec.Diameter})
 	default:
-		if !e.s.Has("l") && e.s.SegmentCount() == 0 {
+		if !e.has("l") && e.in.Segments == 0 {
 			e.bad("tc", calc.Missing).Because(calc.ReasonSurgePipe)
 		}
 		return nil, false
 	}
 	ok := true
 	wall, typedWall := 0.0, false
-	if e.s.Has("wall") {
+	if e.has("wall") {
 		w, good := e.quantity("wall")
-		if good && !(w > 0) {
-			e.bad("wall", calc.NotPositive).Got(calc.Fig(w, calc.Length))
-			good = false
-		}
 		ok, wall, typedWall = ok && good, w, good
 	}
 	mod, typedMod := 0.0, false
-	if e.s.Has("epipe") {
+	if e.has("epipe") {
 		m, good := e.quantity("epipe")
-		if good && !(m > 0) {
-			e.bad("epipe", calc.NotPositive).Got(calc.Fig(m, calc.Pressure)).Because(calc.ReasonWallModulus, calc.Fig(200e9, calc.Pressure), calc.Fig(1e9, calc.Pressure))
-			good = false
-		}
 		ok, mod, typedMod = ok && good, m, good
 	}
 	var out []SurgePipe
@@ -199,9 +170,9 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 		case typedWall:
 			p.Wall, p.WallFrom = wall, "typed"
 		default:
-			ps, err := calc.LookupPipe(strings.TrimSpace(e.s.Get(sp.pre+"nps")), strings.TrimSpace(e.s.Get(sp.pre+"sch")))
-			if err != nil || !(e.s.Has(sp.pre+"nps") || e.s.Has(sp.pre+"sch")) || e.s.Has(sp.pre+"d") {
-				if !e.s.Has("wall") {
+			ps := e.in.vals[sp.pre+"nps"].Pipe
+			if ps == nil || e.in.Side(sp.pre+"pipe") == "d" {
+				if !e.has("wall") {
 					e.bad("wall", calc.Missing).Because(calc.ReasonSurgeWall)
 				}
 				ok = false
@@ -215,9 +186,9 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 		case typedMod:
 			p.Modulus, p.ModulusFrom = mod, "typed"
 		default:
-			m, err := calc.LookupMaterial(strings.TrimSpace(e.s.Get(sp.pre + "mat")))
-			if err != nil || !e.s.Has(sp.pre+"mat") || m.Modulus == 0 {
-				if !e.s.Has("epipe") {
+			m := e.in.vals[sp.pre+"mat"].Material
+			if m == nil || m.Modulus == 0 {
+				if !e.has("epipe") {
 					e.bad("epipe", calc.Missing).Because(calc.ReasonSurgeModulus)
 				}
 				ok = false

@@ -30,7 +30,7 @@ func (b *builder) balanceView() []Card {
 func (b *builder) solvedText(v float64) string {
 	switch p := b.solve(); p {
 	case "p1", "p2":
-		if b.s.Get(p+"ref") == "a" {
+		if b.in.Choice(p+"ref") == "a" {
 			return b.absolute(v)
 		}
 		return b.gauge(v - b.r.SitePressure)
@@ -79,7 +79,7 @@ func (b *builder) answerLines() []string {
 	}
 	switch p := b.solve(); p {
 	case "p1", "p2":
-		if b.s.Get(p+"ref") == "a" {
+		if b.in.Choice(p+"ref") == "a" {
 			out = append(out, b.gauge(br.Value-b.r.SitePressure))
 		} else {
 			out = append(out, b.absolute(br.Value))
@@ -130,7 +130,7 @@ func (b *builder) pointCard(n, role string) Card {
 // betweenCard holds the flow, the heads and the friction between the points.
 func (b *builder) betweenCard() Card {
 	blocks := []Block{fields(b.quantity("q", "", ""), b.quantity("hp", "", ""), b.quantity("ht", "", ""))}
-	if n := b.s.SegmentCount(); n > 0 {
+	if n := b.in.Segments; n > 0 {
 		blocks = append(blocks, b.lineSummary(n))
 	} else {
 		blocks = append(blocks, b.toggle("fric"))

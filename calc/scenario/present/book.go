@@ -32,7 +32,7 @@ type BookState struct {
 // conversion; "no answer yet" without any.
 func Headline(s scenario.Scenario, r scenario.Result) string {
 	d := scenario.NewDraft(s)
-	b := &builder{d: &d, s: s, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
+	b := &builder{d: &d, in: &r.Inputs, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
 	switch {
 	case r.Balance != nil:
 		label := strings.ToLower(solveLabels[b.solve()][:1]) + solveLabels[b.solve()][1:]

@@ -19,7 +19,7 @@ import (
 // builder carries one Build.
 type builder struct {
 	d      *scenario.Draft
-	s      scenario.Scenario
+	in     *scenario.Inputs // what the result was worked out from
 	r      scenario.Result
 	us     bool
 	shown  map[string]bool // parameters a card draws (their problems are shown there)
@@ -38,11 +38,11 @@ var Views = []struct{ Key, Hint string }{
 }
 
 // Build makes the view model of a sheet: d is the sheet being edited and r
-// its result (scenario.Evaluate(d.Scen)).
+// its result (scenario.Evaluate(scenario.Read(d.Scen))).
 func Build(d *scenario.Draft, r scenario.Result) Sheet {
-	b := &builder{d: d, s: d.Scen, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
+	b := &builder{d: d, in: &r.Inputs, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
 	sh := Sheet{View: b.view(), US: b.us, Cautions: Cautions, Methods: methodsFor(b.us)}
-	sh.Name = strings.TrimSpace(b.s.Get("name"))
+	sh.Name = b.in.Choice("name")
 	if sh.Name == "" {
 		sh.Name = "Untitled sheet"
 	}
@@ -83,7 +83,7 @@ func Build(d *scenario.Draft, r scenario.Result) Sheet {
 
 // view is the view the scenario opens on.
 func (b *builder) view() string {
-	v := b.s.Get("view")
+	v := b.in.Choice("view")
 	for _, w := range Views {
 		if w.Key == v {
 			return v
@@ -94,7 +94,7 @@ func (b *builder) view() string {
 
 // solve is the parameter the balance solves for.
 func (b *builder) solve() string {
-	if v := b.s.Get("solve"); v != "" {
+	if v := b.in.Choice("solve"); v != "" {
 		return v
 	}
 	return calc.SolvePumpHead.String()
@@ -368,7 +368,7 @@ func (b *builder) unitOptions(p, box, unit string) []Option {
 // kept and said to be unknown.
 func (b *builder) picker(p, label, blank string) Field {
 	f := b.field(p, FieldPicker, label, "")
-	cur := b.s.Get(p)
+	cur, _ := b.d.Box(p)
 	f.Options = choiceOptions(scenario.Choices(p), cur, blank)
 	return f
 }
@@ -402,7 +402,7 @@ func (b *builder) plain(p, label, hint string, numeric bool) Field {
 // ref is the gauge/absolute choice of a pressure.
 func (b *builder) ref(p string) Field {
 	f := b.field(p, FieldRef, "pressure reference", "")
-	cur := b.s.Get(p)
+	cur, _ := b.d.Box(p)
 	if cur == "" {
 		cur = "g"
 	}

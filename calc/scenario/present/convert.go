@@ -2,7 +2,6 @@ package present
 
 import (
 	"strconv"
-	"strings"
 
 	"fieldhead/calc"
 	"fieldhead/calc/scenario"
@@ -11,7 +10,7 @@ import (
 // liquidCard is the liquid, its temperature and the site pressure.
 func (b *builder) liquidCard() Card {
 	blocks := []Block{fields(b.picker("liq", "", ""))}
-	switch strings.TrimSpace(b.s.Get("liq")) {
+	switch b.in.Choice("liq") {
 	case "custom":
 		blocks = append(blocks, fields(b.quantity("rho", "", ""), b.quantity("mu", "", ""), b.quantity("pv", "", "")))
 	case "eg", "pg":
@@ -71,7 +70,7 @@ func (b *builder) fluidLine() string {
 func (b *builder) fluidName() string {
 	f := b.r.Fluid
 	at := " at " + b.show(f.Temperature, calc.Temperature) + " and " + b.absolute(f.Pressure) + " (" + liquidNotes[b.r.LiquidFrom] + ")"
-	switch strings.TrimSpace(b.s.Get("liq")) {
+	switch b.in.Choice("liq") {
 	case "custom":
 		return "liquid of the typed properties"
 	case "seawater":
@@ -157,7 +156,7 @@ func (b *builder) convertCard() Card {
 func (b *builder) pipePickers(pre string) Block {
 	sch := b.picker(pre+"sch", "Pipe class", "choose…")
 	nps := b.picker(pre+"nps", "Size", "choose…")
-	class := strings.TrimSpace(b.s.Get(pre + "sch"))
+	class := b.in.Choice(pre + "sch")
 	for _, c := range calc.Catalogues() {
 		sizes, err := c.Sizes(class)
 		if err != nil {
@@ -167,7 +166,8 @@ func (b *builder) pipePickers(pre string) Block {
 		for _, p := range sizes {
 			choices = append(choices, scenario.Choice{Value: p.NPS, Label: sizeName(p)})
 		}
-		nps.Options = choiceOptions(choices, b.s.Get(pre+"nps"), "choose…")
+		cur, _ := b.d.Box(pre + "nps")
+		nps.Options = choiceOptions(choices, cur, "choose…")
 	}
 	return fields(sch, nps)
 }

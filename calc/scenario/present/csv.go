@@ -22,11 +22,11 @@ type csvColumn struct {
 
 // csvColumns are the inputs and headline results of a sheet.
 var csvColumns = []csvColumn{
-	{head: "title", plain: true, value: func(s scenario.Scenario, _ scenario.Result) (float64, string, bool) {
-		return 0, s.Get("name"), true
+	{head: "title", plain: true, value: func(_ scenario.Scenario, r scenario.Result) (float64, string, bool) {
+		return 0, r.Inputs.Choice("name"), true
 	}},
-	{head: "liquid", plain: true, value: func(s scenario.Scenario, r scenario.Result) (float64, string, bool) {
-		l := s.Get("liq")
+	{head: "liquid", plain: true, value: func(_ scenario.Scenario, r scenario.Result) (float64, string, bool) {
+		l := r.Inputs.Choice("liq")
 		if l == "" {
 			l = "water"
 		}
@@ -72,13 +72,7 @@ var csvColumns = []csvColumn{
 		return r.NPSH.Margin, "", true
 	}},
 	{head: "measured pump head", param: "hp", value: field(func(f *calc.FieldCheck) (float64, bool) { return f.Head, true })},
-	{head: "measured flow", param: "qm", value: func(s scenario.Scenario, r scenario.Result) (float64, string, bool) {
-		if r.Field == nil {
-			return 0, "", false
-		}
-		q, err := calc.Parse("qm", s.Get("qm"), calc.Flow, scenario.DefaultUnit("qm", r.US))
-		return q, "", err == nil
-	}},
+	{head: "measured flow", param: "qm", value: field(func(f *calc.FieldCheck) (float64, bool) { return f.Q, true })},
 	{head: "wire-to-water efficiency", param: "peff", value: field(func(f *calc.FieldCheck) (float64, bool) { return f.Efficiency, f.Efficiency > 0 })},
 	{head: "pump efficiency from the readings", param: "peff", value: field(func(f *calc.FieldCheck) (float64, bool) { return f.PumpEfficiency, f.PumpEfficiency > 0 })},
 	{head: "head below (−) or above the data sheet", param: "hp", value: field(func(f *calc.FieldCheck) (float64, bool) { return f.Deviation, f.HasCurve })},
@@ -155,7 +149,7 @@ func ResultsCSV(sheets []scenario.Scenario, us bool) string {
 	head = append(head, "link")
 	writeCSV(&b, head)
 	for _, s := range sheets {
-		r := scenario.Evaluate(s)
+		r := scenario.Evaluate(scenario.Read(s))
 		row := make([]string, 0, len(head))
 		for i, c := range csvColumns {
 			v, text, ok := c.value(s, r)

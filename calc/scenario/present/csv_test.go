@@ -44,7 +44,7 @@ func TestResultsCSV(t *testing.T) {
 				t.Errorf("column %q has no unit", head[i])
 			}
 		}
-		r := scenario.Evaluate(sheets[0])
+		r := scenario.Evaluate(scenario.Read(sheets[0]))
 		u, _ := calc.LookupUnit(scenario.DefaultUnit("hp", us))
 		got, err := strconv.ParseFloat(rows[1][col[headU]], 64)
 		if want := u.FromSI(r.Balance.PumpHead); err != nil || calc.FormatNumber(got, 6) != calc.FormatNumber(want, 6) {

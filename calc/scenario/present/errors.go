@@ -574,6 +574,9 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 	calc.ReasonProfileExponent: func(w wording) string {
 		return "the profile exponent n = " + w.figs(0) + " from Re " + w.val() + " is outside " + w.min() + "…" + w.max()
 	},
+	calc.ReasonBothSides: func(w wording) string {
+		return "give one of " + w.subject() + " or the " + label(w.fe.Other) + ", not both: switch to the one you mean and clear the other"
+	},
 	calc.ReasonRunOrSegments: func(w wording) string {
 		return "give either a single pipe run (length, diameter…) or a line of segments, not both"
 	},
@@ -1072,6 +1075,9 @@ var cautionWords = map[calc.Caution]func(c cautioning) string{
 	calc.CautionMeasuredOffRegion:  func(c cautioning) string { return c.offRegion("the measured flow") },
 	calc.CautionSuctionLossZero: func(c cautioning) string {
 		return "no suction loss typed and no line of segments: the suction losses are taken as zero; type the suction loss, or describe the suction pipe as segment 1 with the pump after it"
+	},
+	calc.CautionNPSHCurveCut: func(c cautioning) string {
+		return "the NPSH available cannot be worked out from " + c.f(0) + " on (the suction side's losses are out of their method's range there): its curve stops at that flow"
 	},
 	calc.CautionMotorEffHigh: func(c cautioning) string {
 		return "a motor efficiency of " + c.sh(0) + " is above the " + c.sh(1) + " that even the best large motors hardly reach: check the nameplate"

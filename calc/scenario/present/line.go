@@ -133,7 +133,8 @@ func (b *builder) lineInputs() []string {
 // pumpPlace is the choice of where the pump sits on the line.
 func (b *builder) pumpPlace(n int) Field {
 	f := b.field("pafter", FieldPicker, "", "")
-	cur := strings.TrimSpace(b.s.Get("pafter"))
+	cur, _ := b.d.Box("pafter")
+	cur = strings.TrimSpace(cur)
 	choices := []scenario.Choice{}
 	for k := 0; k <= n; k++ {
 		v := strconv.Itoa(k)
@@ -159,14 +160,14 @@ func (b *builder) pumpPlace(n int) Field {
 // the vocabulary's default: after segment 1 when there are two or more,
 // else at point 1. −1 when pafter cannot be read.
 func (b *builder) pumpAfter() int {
-	if v := strings.TrimSpace(b.s.Get("pafter")); v != "" {
+	if v := b.in.Choice("pafter"); v != "" {
 		k, err := strconv.Atoi(v)
 		if err != nil || k < 0 {
 			return -1
 		}
 		return k
 	}
-	if b.s.SegmentCount() > 1 {
+	if b.in.Segments > 1 {
 		return 1
 	}
 	return 0
@@ -307,12 +308,12 @@ func (b *builder) segmentList() Card {
 	n := b.d.ShownSegments()
 	pump := b.pumpAfter()
 	br := b.r.Balance
-	hasPump := b.solve() == "hp" || b.s.Has("hp") || b.s.Has("pq")
+	hasPump := b.solve() == "hp" || b.in.Given("hp") || b.in.Given("pq")
 	elev := func(p string, z float64) string {
 		switch {
 		case br != nil:
 			return "elevation " + b.param(p, z) + " (on the Balance view)"
-		case b.s.Has(p):
+		case b.in.Given(p):
 			return "elevation " + b.asEntered(p) + " (on the Balance view)"
 		}
 		return "elevation not given (on the Balance view)"
@@ -323,7 +324,7 @@ func (b *builder) segmentList() Card {
 	}
 	pumpNode := func() Block {
 		detail := "(its data sheet is on the Pump view)"
-		if b.s.Has("zp") {
+		if b.in.Given("zp") {
 			detail = "centreline " + b.asEntered("zp")
 		}
 		return Block{Kind: BlockNode, Node: &Node{ID: "pump-node", Num: "▲", Title: "Pump", Detail: detail, Pump: true}}
@@ -341,7 +342,7 @@ func (b *builder) segmentList() Card {
 	}
 	blocks = append(blocks, Block{Kind: BlockNode, Node: &Node{ID: "node-2", Num: "2", Title: "Point 2", Detail: elev("z2", z2)}})
 	label := "Add a segment"
-	if n == 0 && b.s.Has("l") {
+	if n == 0 && b.in.Given("l") {
 		label = "Make the pipe run segment 1"
 	}
 	blocks = append(blocks, Block{Kind: BlockButtons, Buttons: []Button{{ID: "seg-add", Text: "+ " + label, Class: "act",
@@ -372,7 +373,7 @@ func (b *builder) segmentCard(n, count int) Card {
 	}
 	confirm := ""
 	for _, f := range scenario.SegmentFields {
-		if b.s.Has(p(f)) {
+		if b.in.Given(p(f)) {
 			confirm = "Remove segment " + num + " and its values?"
 		}
 	}
@@ -451,8 +452,9 @@ func (b *builder) lineSummary(n int) Block {
 // fittings is the fitting editor of p ("fit", "s2.fit").
 func (b *builder) fittings(p string) Block {
 	b.shown[p] = true
-	list, err := scenario.ParseFittings(b.s.Get(p))
-	f := &Fittings{Param: p, AddID: "add-fit", Usable: err == nil, Open: err != nil || b.r.Errors[p] != nil}
+	v, ok := b.in.Value(p)
+	list := v.Fittings
+	f := &Fittings{Param: p, AddID: "add-fit", Usable: ok || !b.in.Given(p), Open: b.in.Bad(p) || b.r.Errors[p] != nil}
 	if p != "fit" {
 		f.AddID = "add-" + DomID(p)
 	}
@@ -494,7 +496,7 @@ func fittingName(key string) string {
 // ("45L/s" → "45 L/s"); one typed without a unit names the default unit it
 // is taken in.
 func (b *builder) asEntered(p string) string {
-	raw := strings.TrimSpace(b.s.Get(p))
+	raw := strings.TrimSpace(b.d.Typed(p))
 	row, _, _ := scenario.Lookup(p)
 	if row.Kind != scenario.KindQuantity {
 		return raw

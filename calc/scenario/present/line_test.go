@@ -107,7 +107,7 @@ func TestSurveyBox(t *testing.T) {
 	_ = sc.Set("view", "line")
 	d := scenario.NewDraft(sc)
 	d.PasteProfile("0\t212\nx\t213\n640\t251\n")
-	sh := Build(&d, scenario.Evaluate(d.Scen))
+	sh := Build(&d, scenario.Evaluate(scenario.Read(d.Scen)))
 	var s *Survey
 	for _, c := range sh.Cards {
 		for _, b := range c.Blocks {

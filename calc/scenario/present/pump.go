@@ -26,7 +26,7 @@ func (b *builder) pumpView() []Card {
 	}
 	cards := []Card{b.operatingCard(), b.npshCard(), b.pumpChartCard(), b.dataSheetCard(), b.pumpSetupCard(),
 		b.liquidCard(), b.fieldCard(), b.energyCard()}
-	if b.s.Has("etat") {
+	if b.in.Given("etat") {
 		cards = append(cards, b.turbineCard())
 	}
 	return cards
@@ -40,7 +40,7 @@ func (b *builder) operatingCard() Card {
 	switch {
 	case pr == nil:
 		a.Why = "Enter the pump's data sheet below: at least three flows and heads."
-		if b.s.Has("pq") || b.s.Has("ph") {
+		if b.in.Given("pq") || b.in.Given("ph") {
 			a.Why = b.toCheck("pq", "ph", "peff", "pnpsh", "spd", "pumps")
 		}
 	case pr.Operating == nil:
@@ -178,7 +178,7 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 	}
 	if n.Level != calc.NPSHUnrated {
 		from := "typed"
-		if !b.s.Has("npshr") {
+		if !b.in.Given("npshr") {
 			from = "data sheet, at " + b.param("q", b.r.NPSHFlow)
 		}
 		fs = append(fs,
@@ -195,9 +195,9 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 // pump requires, each box in the card.
 func (b *builder) npshCard() Card {
 	why := "Enter the pump centreline elevation to work out the NPSH available."
-	if b.s.Has("zp") {
+	if b.in.Given("zp") {
 		ps := []string{"zp", "p1", "p1ref", "z1", "hs", "pafter", "npshr", "pnpsh", "t", "liq", "rho", "pv", "alt", "baro"}
-		if !b.s.Has("hs") {
+		if !b.in.Given("hs") {
 			ps = append(ps, "q") // the suction loss from the segments needs it
 		}
 		why = b.toCheck(ps...)
@@ -205,7 +205,7 @@ func (b *builder) npshCard() Card {
 	typed := b.d.SideOf("npsh") == "typed"
 	level, facts, note := b.npshBlocks()
 	suction := Block{Kind: BlockEmpty}
-	if n := b.s.SegmentCount(); n > 0 && !b.s.Has("hs") {
+	if n := b.in.Segments; n > 0 && !b.in.Given("hs") {
 		suction = fields(b.pumpPlace(n))
 	}
 	return Card{ID: "npsh", Class: "npsh", Title: "Cavitation check (NPSH), suction side", Blocks: []Block{
@@ -402,13 +402,13 @@ func (b *builder) dataSheetCard() Card {
 		b.shown[c.param] = true
 		ds.Columns = append(ds.Columns, Column{Param: c.param, Head: c.head, Name: c.name, Optional: c.optional,
 			UnitID: "unit-" + c.param, Units: b.unitOptions(c.param, "", b.d.ListUnit(c.param)), Error: b.problem(c.param)})
-		vs, _ := b.s.Cells(c.param)
+		vs, _ := b.d.Cells(c.param)
 		for len(vs) < n {
 			vs = append(vs, "")
 		}
 		cells[c.param] = vs
 		f := b.field(c.param, FieldPlain, "Data-sheet "+c.name+" ("+c.param+"), comma separated, unit after the last", "")
-		f.Box = b.s.Get(c.param)
+		f.Box, _ = b.d.Box(c.param)
 		if b.d.Edit == c.param {
 			f.Box = b.d.Text
 		}

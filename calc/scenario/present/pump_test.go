@@ -19,7 +19,7 @@ func sheetOf(t *testing.T, sc scenario.Scenario, view string) (Sheet, scenario.R
 		t.Fatal(err)
 	}
 	d := scenario.NewDraft(sc)
-	r := scenario.Evaluate(d.Scen)
+	r := scenario.Evaluate(scenario.Read(d.Scen))
 	return Build(&d, r), r
 }
 
@@ -550,8 +550,8 @@ func TestPumpChart(t *testing.T) {
 	for _, tc := range demos(t, sheetCase{"two in parallel at 90 %", with(t, scenario.Demo(), "pumps", "2p", "spd", "90%")}) {
 		t.Run(tc.name, func(t *testing.T) {
 			d := scenario.NewDraft(with(t, tc.sc, "view", "pump"))
-			r := scenario.Evaluate(d.Scen)
-			b := &builder{d: &d, s: d.Scen, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
+			r := scenario.Evaluate(scenario.Read(d.Scen))
+			b := &builder{d: &d, in: &r.Inputs, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
 			bl := b.pumpChart("pump-chart", "caption")
 			if bl.Kind != BlockChart || bl.Chart == nil || bl.Chart.Kind != "pump" {
 				t.Fatalf("no pump chart: %+v", bl)
@@ -624,8 +624,8 @@ func TestPumpChart(t *testing.T) {
 	}
 	// Without a pump curve there is no chart.
 	d := scenario.NewDraft(with(t, scenario.Demo(), "pq", "", "ph", "", "peff", "", "pnpsh", ""))
-	r := scenario.Evaluate(d.Scen)
-	b := &builder{d: &d, s: d.Scen, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
+	r := scenario.Evaluate(scenario.Read(d.Scen))
+	b := &builder{d: &d, in: &r.Inputs, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
 	if bl := b.pumpChart("pump-chart", ""); bl.Kind != BlockEmpty {
 		t.Errorf("chart without a data sheet: %+v", bl)
 	}
@@ -640,7 +640,7 @@ func TestSuctionCautionPointsHere(t *testing.T) {
 		s := scenario.Demo()
 		_ = s.Set("view", view)
 		d := scenario.NewDraft(s)
-		sh := Build(&d, scenario.Evaluate(s))
+		sh := Build(&d, scenario.Evaluate(scenario.Read(s)))
 		found := false
 		for _, c := range sh.Cards {
 			for _, b := range c.Blocks {

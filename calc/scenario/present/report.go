@@ -15,7 +15,7 @@ import (
 
 // reportView is the Report view.
 func (b *builder) reportView() []Card {
-	name := strings.TrimSpace(b.s.Get("name"))
+	name := b.in.Choice("name")
 	if name == "" {
 		name = "Untitled sheet"
 	}
@@ -67,14 +67,15 @@ func (b *builder) methodLines() []string {
 // unit named when none was typed, lists spaced, fittings and choices in
 // words.
 func (b *builder) inputValue(p string) string {
-	raw := strings.TrimSpace(b.s.Get(p))
+	raw := strings.TrimSpace(b.d.Typed(p))
 	base := p
 	if _, f := scenario.SegmentOf(p); f != "" {
 		base = f
 	}
 	switch base {
 	case "fit":
-		if list, err := scenario.ParseFittings(raw); err == nil && len(list) > 0 {
+		if v, ok := b.in.Value(p); ok && len(v.Fittings) > 0 {
+			list := v.Fittings
 			parts := make([]string, 0, len(list))
 			for _, e := range list {
 				parts = append(parts, strconv.Itoa(e.Count)+" × "+fittingName(e.Key))
@@ -83,7 +84,7 @@ func (b *builder) inputValue(p string) string {
 		}
 		return raw
 	case "pq", "ph", "peff", "pnpsh":
-		cells, unit := b.s.Cells(p)
+		cells, unit := b.d.Cells(p)
 		if unit == "" {
 			unit = scenario.DefaultUnit(p, b.us)
 		}
@@ -113,7 +114,7 @@ func (b *builder) inputValue(p string) string {
 func (b *builder) reportInputs() Card {
 	t := &Table{ID: "report-inputs", Class: "grid inputs", Head: []string{"input", "in the link", "value as entered"}}
 	for _, p := range scenario.Params {
-		if p == "view" || p == "name" || !b.s.Has(p) {
+		if p == "view" || p == "name" || !b.in.Given(p) {
 			continue
 		}
 		b.shown[p] = true
@@ -123,7 +124,7 @@ func (b *builder) reportInputs() Card {
 		}
 		t.Rows = append(t.Rows, Row{Head: scenario.Label(p), Cells: []Cell{{Text: p, Label: "in the link"}, val}})
 	}
-	n := b.s.SegmentCount()
+	n := b.in.Segments
 	return Card{ID: "report-inputs-card", Class: "rsec", Title: "Inputs", Blocks: []Block{
 		{Kind: BlockTable, Table: t},
 		maybe(n > 0, Block{Kind: BlockHeading, Text: "Segments of the line, from point 1"}),
@@ -154,15 +155,15 @@ func (b *builder) segmentInputs(n int) Block {
 			for _, f := range c.fields {
 				p := scenario.SegmentParam(i, f)
 				b.shown[p] = true
-				if b.s.Has(p) {
+				if b.in.Given(p) {
 					v := b.inputValue(p)
 					switch f {
 					case "nps":
 						// The size in its catalogue's notation (NPS, OD, DN,
 						// inch) when the pair names a catalogue pipe.
 						v = "size " + v
-						if p, err := calc.LookupPipe(b.s.Get(p), b.s.Get(scenario.SegmentParam(i, "sch"))); err == nil {
-							v = sizeName(p)
+						if ps := b.pipeOf(scenario.SegmentParam(i, "")); ps != nil {
+							v = sizeName(*ps)
 						}
 					}
 					parts = append(parts, v)
@@ -199,7 +200,7 @@ func (b *builder) reportResults() Card {
 		switch p := b.solve(); p {
 		case "p1", "p2":
 			alt := b.absolute(br.Value)
-			if b.s.Get(p+"ref") == "a" {
+			if b.in.Choice(p+"ref") == "a" {
 				alt = b.gauge(br.Value - b.r.SitePressure)
 			}
 			main += " (" + alt + ")"
@@ -310,7 +311,7 @@ func (b *builder) fittingKTable() Block {
 		for i, sg := range br.Line.Segments {
 			all = append(all, where{"segment " + strconv.Itoa(i+1), sg.Fittings})
 		}
-	} else if r := b.r.Run; r != nil && b.s.SegmentCount() == 0 {
+	} else if r := b.r.Run; r != nil && b.in.Segments == 0 {
 		all = append(all, where{"pipe run", r.Fittings})
 	}
 	cols := []string{"where", "fitting", "count", "K each", "method"}

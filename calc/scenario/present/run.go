@@ -40,7 +40,7 @@ func (b *builder) runFields(pre string, withFlow bool) []Block {
 		out = append(out, fields(b.picker(pre+"mat", "", "choose…")))
 	}
 	out = append(out, b.fittings(pre+"fit"), fields(b.plain(pre+"k", "", "", true), b.picker("fm", "", "")))
-	if b.s.Get("fm") == calc.MethodHazenWilliams.String() {
+	if b.in.Choice("fm") == calc.MethodHazenWilliams.String() {
 		out = append(out, fields(b.plain("chw", "", "", true)))
 	}
 	return out
@@ -52,14 +52,25 @@ func (b *builder) runSegment() int {
 	if rv := b.r.RunView; rv != nil {
 		return rv.Segment
 	}
-	n := b.s.SegmentCount()
+	n := b.in.Segments
 	if n == 0 {
 		return 0
 	}
-	if k, err := strconv.Atoi(strings.TrimSpace(b.s.Get("rseg"))); err == nil && k >= 1 && k <= n {
-		return k
+	return b.in.RunSegment()
+}
+
+// pipeOf is the pipe size the run of prefix pre ("" or "s2.") names by
+// nominal size and schedule, nil when it names none or it is in error.
+func (b *builder) pipeOf(pre string) *calc.PipeSize {
+	if b.in.Side(pre+"pipe") == "d" {
+		return nil
 	}
-	return 1
+	for _, p := range []string{pre + "nps", pre + "sch"} {
+		if v, ok := b.in.Value(p); ok && v.Pipe != nil {
+			return v.Pipe
+		}
+	}
+	return nil
 }
 
 // regimeView is the Run view: the loss of the run shown, its inputs, the
@@ -79,7 +90,7 @@ func (b *builder) regimeView() []Card {
 // segmentPicker is the choice of the segment the Run view shows, each
 // named by its length and pipe as typed.
 func (b *builder) segmentPicker(seg int) Block {
-	n := b.s.SegmentCount()
+	n := b.in.Segments
 	if n == 0 {
 		return Block{Kind: BlockEmpty}
 	}
@@ -88,19 +99,19 @@ func (b *builder) segmentPicker(seg int) Block {
 	for k := 1; k <= n; k++ {
 		pre := scenario.SegmentParam(k, "")
 		label := "segment " + strconv.Itoa(k)
-		if b.s.Has(pre + "l") {
+		if b.in.Given(pre + "l") {
 			label += ": " + b.asEntered(pre+"l")
 		}
-		ps, err := calc.LookupPipe(strings.TrimSpace(b.s.Get(pre+"nps")), strings.TrimSpace(b.s.Get(pre+"sch")))
+		ps := b.pipeOf(pre)
 		switch {
-		case b.s.Has(pre+"nps") && err == nil:
-			label += ", " + sizeName(ps) + " " + scenario.ClassName(ps.Catalogue, ps.Schedule)
-		case b.s.Has(pre + "d"):
+		case ps != nil:
+			label += ", " + sizeName(*ps) + " " + scenario.ClassName(ps.Catalogue, ps.Schedule)
+		case b.in.Given(pre + "d"):
 			label += ", " + b.asEntered(pre+"d") + " bore"
 		}
 		cs = append(cs, scenario.Choice{Value: strconv.Itoa(k), Label: label})
 	}
-	cur := strings.TrimSpace(b.s.Get("rseg"))
+	cur := b.in.Choice("rseg")
 	if cur == "" {
 		cur = strconv.Itoa(seg)
 	}
@@ -229,7 +240,7 @@ func (b *builder) sizingCard() Card {
 		sz = rv.Sizing
 	}
 	blank := "the run's own class"
-	if sz != nil && !b.s.Has("szsch") {
+	if sz != nil && !b.in.Given("szsch") {
 		blank += ": " + scenario.ClassName(sz.Catalogue.Key, sz.Class)
 	}
 	c := Card{ID: "sizing", Class: "sizing", Title: "Sizes compared", Blocks: []Block{
@@ -238,7 +249,7 @@ func (b *builder) sizingCard() Card {
 	}}
 	if sz == nil {
 		why := "Needs the run's result above, and a pipe class to compare (the run's own when it is picked by size)."
-		if rv != nil && rv.Run != nil && !b.s.Has("szsch") {
+		if rv != nil && rv.Run != nil && !b.in.Given("szsch") {
 			why = "Pick the pipe class whose sizes to compare."
 		}
 		return appendBlocks(c, text("muted", "sizing-why", why), Block{Kind: BlockEmpty}, Block{Kind: BlockEmpty})

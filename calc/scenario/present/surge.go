@@ -2,7 +2,6 @@ package present
 
 import (
 	"strconv"
-	"strings"
 
 	"fieldhead/calc"
 )
@@ -17,7 +16,7 @@ const surgeScreening = "Screening estimate only: a transient analysis and a lice
 // wantsSurge reports whether the sheet has a pipe between the points (or
 // asks for a surge), so that the surge card is offered.
 func (b *builder) wantsSurge() bool {
-	return b.s.Has("tc") || b.s.Has("l") || b.s.SegmentCount() > 0
+	return b.in.Given("tc") || b.in.Given("l") || b.in.Segments > 0
 }
 
 // surgeCard is the surge of a closure at point 2: its inputs, the
@@ -32,16 +31,16 @@ func (b *builder) surgeCard() Card {
 	case sr != nil:
 		a = &Answer{Label: "At most this rise: the closure is slower than 2L/a",
 			Values: []Value{{"surge-dp", b.show(sr.DeltaP, calc.Pressure)}, {"surge-dh", b.head(sr.DeltaH)}}}
-	case b.s.Has("tc"):
+	case b.in.Given("tc"):
 		a = &Answer{None: true, NoneID: "surge-dp", Label: "Pressure rise on a fast closure",
 			Why: b.toCheck("tc", "dv", "wall", "epipe", "kliq", "cr", "q", "t")}
 	}
-	liq := strings.TrimSpace(b.s.Get("liq"))
+	liq := b.in.Choice("liq")
 	facts := b.surgeFacts()
 	return Card{ID: "surge", Title: "Surge on a fast closure at point 2", Blocks: []Block{
 		fields(b.quantity("tc", "", ""), b.quantity("dv", "", "")),
 		fields(b.quantity("wall", "", ""), b.quantity("epipe", "", "")),
-		maybe(liq == "custom" || b.s.Has("kliq"), fields(b.quantity("kliq", "", ""))),
+		maybe(liq == "custom" || b.in.Given("kliq"), fields(b.quantity("kliq", "", ""))),
 		fields(b.plain("cr", "", "", true)),
 		{Kind: BlockLevel, ID: "surge-caution", Class: "lvl-caution", Text: surgeScreening},
 		maybe(a == nil, text("muted", "", "Give the valve's closing time for a screening figure of water hammer: the wave speed, its round trip 2L/a and the Joukowsky rise.")),
