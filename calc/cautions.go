@@ -99,7 +99,10 @@ const (
 	CautionBoilingAtLine    // the water boils at the pressure taken for its properties (Figures[0], absolute); taken at the saturation pressure Figures[1]
 	CautionGlycolSlip       // a glycol share Figures[0] (a share) protects against almost no frost; Figures[1] the share probably meant
 	CautionGlycolBoiling    // the glycol mix boils at the site pressure; its properties are taken at its vapour pressure
-	CautionGlycolInhibitors // commercial glycols differ from the pure mixes computed (recalled constants)
+	CautionGlycolInhibitors // commercial glycols differ from the pure mixes computed
+
+	// A glycol mix above the source's tables.
+	CautionGlycolExtrapolated // the mix at Figures[0] is above Figures[1], where Melinder's (2010) tables stop: its properties are the fits extrapolated
 	cautionEnd
 )
 
@@ -188,6 +191,7 @@ var cautionNames = [...]string{"text",
 	"glycol slip",
 	"glycol boiling",
 	"glycol inhibitors",
+	"glycol extrapolated",
 }
 
 // Warn builds a Warning about field of caution c quoting figs.

@@ -109,8 +109,12 @@
 // 40 °C up to 10 MPa: Sharqawy et al. (2010), compressed in the ratio of
 // pure water's IF97 densities. Both take the absolute pressure in the line
 // (Fluid.Pressure records it). Outside a formulation's range the functions
-// return an error; they never extrapolate. A custom liquid takes typed
-// properties.
+// return an error; they never extrapolate. Glycol–water mixes (ethylene and
+// propylene glycol, 0 to 60 % by mass) follow Melinder's (2010) fits from
+// the freezing point to 40 °C, where the source's tables stop, and the
+// fits extrapolated from there to 100 °C (GlycolState.Extrapolated says
+// so); the density is compressed as seawater's. A custom liquid takes
+// typed properties.
 //
 // # Errors
 //

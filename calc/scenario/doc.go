@@ -61,10 +61,12 @@
 // A glycol mix (liq=eg or pg) below its freezing point, or with a share
 // outside the range, is an error on t, gly or glyv. Every glycol mix
 // carries a warning on liq that a commercial (inhibited) glycol differs and
-// that its maker's data sheet governs; the mix's properties are recalled
-// constants (from memory), its vapour pressure Raoult's law. A share of
-// 1.5 % or less draws a warning naming the share probably meant (0.3 typed
-// for 30 %). Result.Glycol holds the share both ways and the freezing point.
+// that its maker's data sheet governs; the mix's properties are Melinder's
+// (2010) fits, its vapour pressure Raoult's law. Above 40 °C, where the
+// source's tables stop, the fits are extrapolated and t carries a warning
+// saying so. A share of 1.5 % or less draws a warning naming the share
+// probably meant (0.3 typed for 30 %). Result.Glycol holds the share both
+// ways and the freezing point.
 //
 // The two points of the energy balance (n = 1 in, 2 out):
 //

@@ -64,5 +64,8 @@ func (e *eval) glycol(liq string) {
 		return
 	}
 	e.res.Fluid, e.res.LiquidFrom = &fl, LiquidSite
+	if fl.Temperature > calc.GlycolFitMaxTemperature+1e-9 {
+		e.warnCalc("liquid", calc.Warn("t", calc.CautionGlycolExtrapolated, calc.Fig(fl.Temperature, calc.Temperature), calc.Fig(calc.GlycolFitMaxTemperature, calc.Temperature)))
+	}
 	e.warnCalc("liquid", calc.Warn("liq", calc.CautionGlycolInhibitors))
 }

@@ -25,7 +25,7 @@ func (b *builder) liquidCard() Card {
 	blocks = append(blocks, text("computed", "fluid", b.fluidLine()))
 	if g := b.r.Glycol; g != nil {
 		blocks = append(blocks, Block{Kind: BlockFacts, ID: "glycol-facts", Class: "facts", Facts: []Fact{
-			{ID: "glycol-freezing", Label: "freezes at", Value: b.show(g.FreezingPoint, calc.Temperature) + " (from memory)", Key: true},
+			{ID: "glycol-freezing", Label: "freezes at", Value: b.show(g.FreezingPoint, calc.Temperature), Key: true},
 			{ID: "glycol-share", Label: "glycol share", Value: glycolShare(g)},
 		}})
 	}
@@ -207,7 +207,7 @@ func (b *builder) liquidFacts() []Fact {
 		{Label: "vapour pressure", Value: pv},
 	}
 	if g := b.r.Glycol; g != nil {
-		fs = append(fs, Fact{Label: "freezes at", Value: b.show(g.FreezingPoint, calc.Temperature) + " (from memory)"},
+		fs = append(fs, Fact{Label: "freezes at", Value: b.show(g.FreezingPoint, calc.Temperature)},
 			Fact{Label: "glycol share", Value: glycolShare(g)})
 	}
 	return fs

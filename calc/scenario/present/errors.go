@@ -1161,7 +1161,10 @@ var cautionWords = map[calc.Caution]func(c cautioning) string{
 		return "the glycol mix is at or above its boiling point at the site pressure; its properties are taken at its vapour pressure"
 	},
 	calc.CautionGlycolInhibitors: func(c cautioning) string {
-		return "commercial glycols carry inhibitors and dyes and differ from the pure mixes computed here, whose constants are recalled values (from memory): the maker's data sheet governs density, viscosity and freezing point"
+		return "commercial glycols carry inhibitors and dyes and differ from the pure mixes computed here (Melinder's published fits): the maker's data sheet governs density, viscosity and freezing point"
+	},
+	calc.CautionGlycolExtrapolated: func(c cautioning) string {
+		return "at " + c.f(0) + " the glycol mix is above " + c.f(1) + ", where the published tables stop: its density and viscosity are the fits carried beyond their range: estimates, to be checked against the maker's data"
 	},
 }
 
