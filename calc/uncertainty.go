@@ -87,21 +87,21 @@ func (fc FieldCheck) Uncertainty(fl Fluid, a Accuracy) (FieldBands, error) {
 		Term{"pd", up(a.ClassD, a.SpanD)},
 		Term{"zs", a.Height},
 		Term{"zd", a.Height},
-		Term{"qm", 2 * fc.VelocityHead / fc.Q * uq},
+		Term{"qm", math.Abs(2 * fc.VelocityHead / fc.Q * uq)},
 	)
 	power := band(
 		Term{"ps", rhog * fc.Q * up(a.ClassS, a.SpanS)},
 		Term{"pd", rhog * fc.Q * up(a.ClassD, a.SpanD)},
 		Term{"zs", rhog * fc.Q * a.Height},
 		Term{"zd", rhog * fc.Q * a.Height},
-		Term{"qm", rhog * (fc.Head + 2*fc.VelocityHead) * uq},
+		Term{"qm", math.Abs(rhog * (fc.Head + 2*fc.VelocityHead) * uq)},
 	)
 	out := FieldBands{Flow: band(Term{"qm", uq}), Head: head, Power: power}
 	if fc.Efficiency > 0 {
 		share := func(eta float64) Band {
 			terms := make([]Term, 0, len(power.Terms)+1)
 			for _, t := range power.Terms {
-				terms = append(terms, Term{t.Field, t.U / fc.HydraulicPower * eta})
+				terms = append(terms, Term{t.Field, math.Abs(t.U / fc.HydraulicPower * eta)})
 			}
 			return band(append(terms, Term{"pin", eta * a.Power})...)
 		}
