@@ -190,6 +190,43 @@ func TestPumpTestAgainstScipy(t *testing.T) {
 	}
 }
 
+func TestPumpTestSheetAgainstScipy(t *testing.T) {
+	// Source: python3-scipy 1.10 (Debian): the five-point test of
+	// TestPumpTestAgainstScipy (H, E there) against the demo pump's data
+	// sheet with efficiencies of our own; the largest shortfalls by
+	// bounded minimisation between the knots, and at the ends:
+	//
+	//	from scipy.optimize import minimize_scalar
+	//	SQ = [0, .02, .04, .055, .07]
+	//	SH = PchipInterpolator(SQ, [62, 59, 52, 44, 33])
+	//	SE = PchipInterpolator(SQ, [0, .55, .74, .72, .60])
+	//	k = sorted(set(x) | {.02, .04, .055})
+	//	for S, T in ((SH, H), (SE, E)):
+	//	    r = [minimize_scalar(lambda q: -(S(q)-T(q)), bounds=(a, b), method='bounded',
+	//	         options={'xatol': 1e-12}) for a, b in zip(k, k[1:])]
+	//	    ends = [(-(float(S(q)-T(q))), q) for q in (k[0], k[-1])]
+	//	    print(min([(float(rr.fun), float(rr.x)) for rr in r] + ends))
+	//	# head: 11.673066003813847 m at 0.06; efficiency: 0.10477746903243934 at 0.06
+	c, err := FitPump([]PumpPoint{{0, 62, 0, 0}, {0.02, 59, 0.55, 0}, {0.04, 52, 0.74, 0}, {0.055, 44, 0.72, 0}, {0.07, 33, 0.60, 0}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	pt, err := CheckPumpTest(Fluid{Density: 998.6}, scipySetup, scipyReadings, &c)
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := pt.Sheet
+	if !pt.HasSheet || !s.HasEff || s.From != 0.015 || s.To != 0.06 {
+		t.Fatalf("%+v", s)
+	}
+	if s.Head.Flow != 0.06 || math.Abs(s.Head.Short-11.673066003813847) > 1e-9 || s.Head.U != pt.Points[4].HeadU {
+		t.Errorf("head %+v", s.Head)
+	}
+	if s.Eff.Flow != 0.06 || math.Abs(s.Eff.Short-0.10477746903243934) > 1e-12 || s.Eff.U != pt.Points[4].EffU {
+		t.Errorf("efficiency %+v", s.Eff)
+	}
+}
+
 func TestAcceptGuaranteeByHand(t *testing.T) {
 	// Source: a worked case by hand. Four readings on the straight line
 	// H = 60 − 500·Q (Q in m³/s) with pump efficiencies on η = 0.5 + 5·Q;
@@ -583,6 +620,35 @@ func walkFloats(t *testing.T, path string, v reflect.Value) {
 	case reflect.Pointer:
 		if !v.IsNil() {
 			walkFloats(t, path, v.Elem())
+		}
+	}
+}
+
+func TestUncertaintyFallingVelocityHead(t *testing.T) {
+	// Source: JCGM 100:2008 (GUM) §5.1.3: a reading's part of a result's
+	// uncertainty is |c_i|·u(x_i), never negative. A pump whose discharge
+	// pipe is wider than its suction pipe loses velocity head: with
+	// 50 L/s, 80 mm in and 200 mm out, hv = (Vd² − Vs²)/(2g) ≈ −4.92 m,
+	// and a 5 % flow meter's part is |2·hv/Q|·0.05·Q ≈ 0.49 m, far above
+	// the gauge heights' 0.01 m: the flow meter dominates.
+	fl := Fluid{Density: 1000}
+	fc, err := CheckPump(fl, FieldReadings{Pd: 400e3, Ds: 0.08, Dd: 0.2, Q: 0.05}, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, err := fc.Uncertainty(fl, Accuracy{Flow: 0.05, Height: 0.01})
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := math.Abs(2 * fc.VelocityHead / fc.Q * 0.05 * fc.Q)
+	if fc.VelocityHead > -4.9 || b.Head.Dominant() != "qm" || math.Abs(b.Head.Terms[0].U-want) > 1e-12 {
+		t.Errorf("hv %g m, terms %+v", fc.VelocityHead, b.Head.Terms)
+	}
+	for _, bd := range []Band{b.Head, b.Power} {
+		for _, tm := range bd.Terms {
+			if tm.U < 0 {
+				t.Errorf("negative term %+v", tm)
+			}
 		}
 	}
 }

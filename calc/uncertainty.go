@@ -17,7 +17,7 @@ type Accuracy struct {
 
 // Term is one reading's part of a result's uncertainty: Field names the
 // reading ("ps", "pd", "zs", "zd", "qm", "pin"); U is the part, in the
-// result's own unit.
+// result's own unit, never negative (|c_i|·u(x_i), JCGM 100:2008 §5.1.3).
 type Term struct {
 	Field string
 	U     float64
