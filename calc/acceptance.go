@@ -65,11 +65,20 @@ func (v Verdict) String() string {
 }
 
 // Judgement is one quantity judged against its tolerance: the allowed
-// range (Low, High; High may be +Inf for a lower limit only), and the
-// verdict for the measured value ± band.
+// range Low to High, and the verdict for the measured value ± band. A
+// lower limit alone (an efficiency) has NoUpperLimit set and High 0:
+// every figure stays finite.
 type Judgement struct {
-	Verdict   Verdict
-	Low, High float64
+	Verdict      Verdict
+	Low, High    float64
+	NoUpperLimit bool
+}
+
+// judgeAtLeast places value ± band against a lower limit alone.
+func judgeAtLeast(value, band, low float64) Judgement {
+	j := judge(value, band, low, math.MaxFloat64)
+	j.High, j.NoUpperLimit = 0, true
+	return j
 }
 
 // judge places value ± band against [low, high].
@@ -118,7 +127,7 @@ func Accept(fc FieldCheck, bands FieldBands, g Grade) (a Acceptance, ok bool) {
 	a.Head = judge(fc.Head, bands.Head.U, hg*(1+g.HeadLow), hg*(1+g.HeadHigh))
 	if fc.HasEffDeviation {
 		eg := fc.CurveEfficiency
-		a.Efficiency = judge(fc.PumpEfficiency, bands.Pump.U, eg*(1+g.EffLow), math.Inf(1))
+		a.Efficiency = judgeAtLeast(fc.PumpEfficiency, bands.Pump.U, eg*(1+g.EffLow))
 	}
 	switch {
 	case a.Head.Verdict == Outside || a.Efficiency.Verdict == Outside:

@@ -84,15 +84,31 @@ func (p pchip) eval(t float64) float64 {
 	if t >= p.x[n-1] {
 		return p.y[n-1]
 	}
-	k := 0
+	k, s, c0, c1 := p.piece(t)
+	return ((c0*s+c1)*s+p.d[k])*s + p.y[k]
+}
+
+// slope returns the interpolant's derivative at t, which must lie in
+// [x[0], x[n−1]]; at a data abscissa it is the slope d[k] there (the
+// pieces meet with equal slopes: the curve is C¹).
+func (p pchip) slope(t float64) float64 {
+	n := len(p.x)
+	if t >= p.x[n-1] {
+		return p.d[n-1]
+	}
+	k, s, c0, c1 := p.piece(t)
+	return (3*c0*s+2*c1)*s + p.d[k]
+}
+
+// piece finds the interval k holding t (below x[n−1]) and the cubic there
+// in powers of s = t − x[k]: y[k] + d[k]·s + c1·s² + c0·s³.
+func (p pchip) piece(t float64) (k int, s, c0, c1 float64) {
+	n := len(p.x)
 	for k < n-2 && t >= p.x[k+1] {
 		k++
 	}
 	h := p.x[k+1] - p.x[k]
 	slope := (p.y[k+1] - p.y[k]) / h
 	c := (p.d[k] + p.d[k+1] - 2*slope) / h
-	c0 := c / h
-	c1 := (slope-p.d[k])/h - c
-	s := t - p.x[k]
-	return ((c0*s+c1)*s+p.d[k])*s + p.y[k]
+	return k, t - p.x[k], c / h, (slope-p.d[k])/h - c
 }

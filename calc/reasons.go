@@ -83,6 +83,7 @@ const (
 	ReasonHeadNeverReached  // NoSolution: the line needs less than Figures[0] at every flow up to Figures[1]
 	ReasonHeadForEnergy     // NotPositive: an energy per volume and head needs a head above zero (Value)
 	ReasonGoTogether        // Missing: a gauge's accuracy class and span (Other) go together
+	ReasonFlowTwice         // Inconsistent: test reading Item has the flow (Value) of reading Figures[0] (an item number); each flow once
 
 	// Turbines.
 	ReasonNoGrossHead    // NoSolution: the gross head (Value) is not positive
@@ -224,6 +225,7 @@ var reasonNames = [...]string{"none",
 	"head never reached",
 	"head for energy",
 	"go together",
+	"flow twice",
 	"no gross head",
 	"output unbound",
 	"turbine no zero",

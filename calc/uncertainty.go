@@ -17,7 +17,7 @@ type Accuracy struct {
 
 // Term is one reading's part of a result's uncertainty: Field names the
 // reading ("ps", "pd", "zs", "zd", "qm", "pin"); U is the part, in the
-// result's own unit.
+// result's own unit, never negative (|c_i|·u(x_i), JCGM 100:2008 §5.1.3).
 type Term struct {
 	Field string
 	U     float64
@@ -87,21 +87,21 @@ func (fc FieldCheck) Uncertainty(fl Fluid, a Accuracy) (FieldBands, error) {
 		Term{"pd", up(a.ClassD, a.SpanD)},
 		Term{"zs", a.Height},
 		Term{"zd", a.Height},
-		Term{"qm", 2 * fc.VelocityHead / fc.Q * uq},
+		Term{"qm", math.Abs(2 * fc.VelocityHead / fc.Q * uq)},
 	)
 	power := band(
 		Term{"ps", rhog * fc.Q * up(a.ClassS, a.SpanS)},
 		Term{"pd", rhog * fc.Q * up(a.ClassD, a.SpanD)},
 		Term{"zs", rhog * fc.Q * a.Height},
 		Term{"zd", rhog * fc.Q * a.Height},
-		Term{"qm", rhog * (fc.Head + 2*fc.VelocityHead) * uq},
+		Term{"qm", math.Abs(rhog * (fc.Head + 2*fc.VelocityHead) * uq)},
 	)
 	out := FieldBands{Flow: band(Term{"qm", uq}), Head: head, Power: power}
 	if fc.Efficiency > 0 {
 		share := func(eta float64) Band {
 			terms := make([]Term, 0, len(power.Terms)+1)
 			for _, t := range power.Terms {
-				terms = append(terms, Term{t.Field, t.U / fc.HydraulicPower * eta})
+				terms = append(terms, Term{t.Field, math.Abs(t.U / fc.HydraulicPower * eta)})
 			}
 			return band(append(terms, Term{"pin", eta * a.Power})...)
 		}
