@@ -264,6 +264,7 @@ var reasonNames = [...]string{"none",
 	"velocity band",
 	"run segment",
 	"sizing class",
+	"both sides",
 }
 
 // countErr reports n items where min to max are accepted (TooFew or

@@ -574,6 +574,9 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 	calc.ReasonProfileExponent: func(w wording) string {
 		return "the profile exponent n = " + w.figs(0) + " from Re " + w.val() + " is outside " + w.min() + "…" + w.max()
 	},
+	calc.ReasonFlowTwice: func(w wording) string {
+		return "this reading's flow (" + w.val() + ") is that of reading " + w.figs(0) + ": give each flow once, or drop one of the two"
+	},
 	calc.ReasonBothSides: func(w wording) string {
 		return "give one of " + w.subject() + " or the " + label(w.fe.Other) + ", not both: switch to the one you mean and clear the other"
 	},
