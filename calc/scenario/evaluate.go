@@ -65,6 +65,14 @@ func Evaluate(in Inputs) Result {
 	if e.has("cv") {
 		e.convert()
 	}
+	// The table of what each part reads has the last word: a part that
+	// reads an input in error is left out, whatever path computed it
+	// (TestUsesExactly keeps the evaluators and the table in step).
+	for _, p := range Parts() {
+		if res.Has(p) && res.Inputs.AnyBad(res.Inputs.Uses(p)...) {
+			res.drop(p)
+		}
+	}
 	return res
 }
 

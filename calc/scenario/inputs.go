@@ -584,3 +584,13 @@ func (s Scenario) sideOf(g Group) (side string, both bool) {
 	}
 	return side, false
 }
+
+// sortedGiven lists the parameters given, in link order.
+func (in *Inputs) sortedGiven() []string {
+	out := make([]string, 0, len(in.vals))
+	for k := range in.vals {
+		out = append(out, k)
+	}
+	sortByLink(out)
+	return out
+}

@@ -51,18 +51,17 @@ func (e *eval) pump() {
 	for i := range qs {
 		pts[i] = calc.PumpPoint{Q: qs[i], H: hs[i]}
 	}
+	// The efficiencies and NPSH required are optional: one in error leaves
+	// the head curve and what reads only it standing, without them.
 	for _, opt := range []string{"peff", "pnpsh"} {
-		if !e.has(opt) {
+		vs, ok := e.in.Value(opt)
+		if !ok {
 			continue
 		}
-		vs, ok := e.list(opt)
-		if !ok {
-			return
-		}
 		if opt == "peff" {
-			e.sheetEfficiencies(vs)
+			e.sheetEfficiencies(vs.List)
 		}
-		for i, v := range vs {
+		for i, v := range vs.List {
 			if opt == "peff" {
 				pts[i].Eff = v
 			} else {
@@ -183,10 +182,13 @@ func (e *eval) npsh(line *calc.Line) {
 		src.SuctionLoss = v
 	}
 	after := 0
-	if !typed && line != nil {
-		after = e.pumpAfter(line)
+	if !typed && e.in.Segments > 0 {
+		after = e.pumpAfter(e.in.Segments)
 		if after < 0 {
 			return
+		}
+		if after > 0 && line == nil {
+			return // the segments' own errors say why: no suction loss of zero in their place
 		}
 		if after > 0 && !haveQ {
 			e.quantity("q") // says the flow is needed
@@ -194,10 +196,11 @@ func (e *eval) npsh(line *calc.Line) {
 		}
 	}
 	switch {
+	case e.in.AnyBad("npshr", "pnpsh"):
+		// The NPSH required in error: the NPSH available stands, unrated
+		// (the box says why); no margin from a value in error.
 	case e.in.Side("npsh") == "typed" && e.has("npshr"):
-		v, good := e.quantity("npshr")
-		ok = ok && good
-		src.NPSHr = v
+		src.NPSHr = e.in.Num("npshr")
 	case pr != nil && pr.Operating != nil:
 		src.NPSHr = pr.Operating.NPSHr
 	case pr != nil && pr.Curve.HasNPSHr() && haveQ:
@@ -233,7 +236,7 @@ func (e *eval) npsh(line *calc.Line) {
 	e.res.NPSH = &r
 	e.res.NPSHFlow = q
 	e.res.NPSHSuction = NPSHSuction{Typed: typed, After: after}
-	if !typed && line == nil {
+	if !typed && e.in.Segments == 0 {
 		e.warnCalc("npsh", calc.Warn("hs", calc.CautionSuctionLossZero))
 	}
 	if pr != nil {
@@ -263,12 +266,12 @@ type NPSHSuction struct {
 	After int
 }
 
-// pumpAfter is the segment of line the pump follows: pafter, else after
+// pumpAfter is the segment the pump follows, of a line of that many: pafter, else after
 // segment 1 of a line of two or more, else at point 1. −1 when pafter is
 // in error (Read reported it).
-func (e *eval) pumpAfter(line *calc.Line) int {
+func (e *eval) pumpAfter(segments int) int {
 	if !e.has("pafter") {
-		if len(line.Segments) > 1 {
+		if segments > 1 {
 			return 1
 		}
 		return 0

@@ -185,6 +185,8 @@ func (e *eval) energy() {
 	}
 	var er EnergyResult
 	switch f := e.res.Field; {
+	case e.measuredEnergy() && (f == nil || !(f.Efficiency > 0 && f.Head > 0)):
+		return // readings with a power meter: their energy or none, never the duty's in its place
 	case f != nil && f.Efficiency > 0 && f.Head > 0:
 		er = EnergyResult{Measured: true, Power: f.HydraulicPower / f.Efficiency, Q: f.Q, H: f.Head}
 	case e.res.Pump != nil && e.res.Pump.Operating != nil && e.res.Pump.Operating.ShaftPower > 0:
@@ -209,6 +211,12 @@ func (e *eval) energy() {
 	}
 	er.Energy = en
 	e.res.Energy = &er
+}
+
+// measuredEnergy reports whether the energy is the readings': gauge
+// readings with the motor's electrical input.
+func (e *eval) measuredEnergy() bool {
+	return e.has("pin") && (e.has("qm") || e.has("ps") || e.has("pd"))
 }
 
 // accuracyParams are the instruments' accuracies of a field check.
