@@ -178,7 +178,12 @@ func normUnit(s string) string {
 			n = strings.ReplaceAll(n, p[0], p[1])
 		}
 	}
-	return strings.Trim(n, ".")
+	// A symbol of dots and spaces alone is no unit at all, never the plain
+	// number's empty symbol ("4 ..." is not 4).
+	if t := strings.Trim(n, "."); t != "" || strings.TrimSpace(s) == "" {
+		return t
+	}
+	return strings.TrimSpace(s)
 }
 
 // LookupUnit finds a unit by its symbol or one of its common spellings:

@@ -4,7 +4,9 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"reflect"
 	"regexp"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -226,31 +228,71 @@ func TestBadInputs(t *testing.T) {
 // checkFinite fails on a NaN or Inf in a result reported as computed.
 func checkFinite(t *testing.T, what string, r Result) {
 	t.Helper()
-	bad := func(name string, v float64) {
+	walkFloats(reflect.ValueOf(r), "Result", map[uintptr]bool{}, func(path string, v float64) {
 		if math.IsNaN(v) || math.IsInf(v, 0) {
-			t.Errorf("%s: %s is %v in a result reported as valid", what, name, v)
+			t.Errorf("%s: %s is %v", what, path, v)
+		}
+	})
+}
+
+// walkFloats calls f for every float64 reachable from v: fields (exported
+// or not), pointers, slices, arrays, maps and interfaces, each pointer
+// once.
+func walkFloats(v reflect.Value, path string, seen map[uintptr]bool, f func(string, float64)) {
+	switch v.Kind() {
+	case reflect.Float64, reflect.Float32:
+		f(path, v.Float())
+	case reflect.Pointer:
+		if v.IsNil() || seen[v.Pointer()] {
+			return
+		}
+		seen[v.Pointer()] = true
+		walkFloats(v.Elem(), path, seen, f)
+	case reflect.Interface:
+		if !v.IsNil() {
+			walkFloats(v.Elem(), path, seen, f)
+		}
+	case reflect.Struct:
+		for i := 0; i < v.NumField(); i++ {
+			walkFloats(v.Field(i), path+"."+v.Type().Field(i).Name, seen, f)
+		}
+	case reflect.Slice, reflect.Array:
+		for i := 0; i < v.Len(); i++ {
+			walkFloats(v.Index(i), path+"["+strconv.Itoa(i)+"]", seen, f)
+		}
+	case reflect.Map:
+		it := v.MapRange()
+		for it.Next() {
+			walkFloats(it.Value(), path+"["+fmt.Sprint(it.Key())+"]", seen, f)
 		}
 	}
-	if r.Fluid != nil {
-		bad("density", r.Fluid.Density)
-		bad("viscosity", r.Fluid.Viscosity)
-	}
-	bad("site pressure", r.SitePressure)
-	if r.Run != nil {
-		bad("run velocity", r.Run.Velocity)
-		bad("run loss", r.Run.TotalLoss)
-		bad("run f", r.Run.Friction)
-	}
-	if b := r.Balance; b != nil {
-		bad("balance value", b.Value)
-		bad("pump power", b.PumpPower)
-		for _, it := range b.Budget {
-			bad("budget "+it.Key, it.Head)
+}
+
+// checkBoxesReadBack: the text every box shows, with its picker's unit,
+// reads back to the value Read used (a box always shows what the result
+// was worked out from).
+func checkBoxesReadBack(t *testing.T, what string, s Scenario) {
+	t.Helper()
+	d := NewDraft(s)
+	in := Read(s)
+	for _, p := range in.sortedGiven() {
+		v, ok := in.Value(p)
+		row, _, _ := Lookup(p)
+		if !ok || row.Kind != KindQuantity {
+			continue
 		}
-	}
-	if c := r.Convert; c != nil {
-		bad("convert gauge", c.Gauge)
-		bad("convert head", c.Head)
+		box, unit := d.Box(p)
+		back := Scenario{raw: map[string]string{p: compose(p, box, unit)}}
+		for _, ctx := range []string{"units", "liq", p + "ref"} {
+			if c := s.Get(ctx); c != "" {
+				back.raw[ctx] = c
+			}
+		}
+		back2 := Read(back)
+		w, ok := back2.Value(p)
+		if !ok || w.SI != v.SI || w.Abs != v.Abs || w.Dim != v.Dim {
+			t.Errorf("%s: the box of %s shows %q %q, which reads as %v (%v), not the %v Read used", what, p, box, unit, w.SI, ok, v.SI)
+		}
 	}
 }
 
@@ -320,6 +362,7 @@ func FuzzScenario(f *testing.F) {
 		s, _ := Parse(q)
 		r := Evaluate(Read(s))
 		checkFinite(t, fmt.Sprintf("%.60q", q), r)
+		checkBoxesReadBack(t, fmt.Sprintf("%.60q", q), s)
 		for p, fe := range r.Errors {
 			// A "?" stands for a missing word unless the user typed it
 			// (echoed in quotes).
