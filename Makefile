@@ -59,10 +59,14 @@ vet:
 unit:
 	$(GO) test $$($(GO) list ./... | grep -v '^fieldhead/app$$')
 
-# The page checks' JavaScript tools (axe-core), exactly as package-lock.json
-# pins them, into node_modules/ (not in git).
+# The page checks' JavaScript tools (axe-core), exactly as
+# app/testdata/package-lock.json pins them, into app/testdata/node_modules/
+# (not in git). They live beside the tests that read them, in a testdata
+# folder, which go list ./... (and so go vet and go test) never walks.
+NPM_DIR := app/testdata
+
 npm:
-	npm ci --no-audit --no-fund
+	npm ci --prefix $(NPM_DIR) --no-audit --no-fund
 
 browser: site npm
 	FIELDHEAD_BROWSER=1 FIELDHEAD_SITE="$(abspath $(SITE))" $(GO) test -count=1 -v ./app

@@ -15,4 +15,4 @@ require (
 	github.com/google/uuid v1.6.0 // indirect
 )
 
-replace github.com/maxence-charriere/go-app/v10 => ./third_party/go-app
+replace github.com/maxence-charriere/go-app/v10 => ./app/third_party/go-app

@@ -19,19 +19,21 @@ import (
 )
 
 // The page checked by axe-core (Deque's open-source rules engine, pinned
-// in package.json and package-lock.json, installed by `npm ci`). Its
-// script is read from node_modules and evaluated in the page through the
-// DevTools protocol: the page's Content-Security-Policy admits scripts of
-// its own origin only, so axe is injected, never loaded by URL.
+// in app/testdata/package.json and package-lock.json, installed into
+// app/testdata/node_modules by `make npm`). Its script is read from disk
+// and evaluated in the page through the DevTools protocol: the page's
+// Content-Security-Policy admits scripts of its own origin only, so axe is
+// injected, never loaded by URL.
 
-// axeScript is node_modules/axe-core/axe.min.js, or a skip (a failure
-// under FIELDHEAD_BROWSER=1) when `npm ci` has not run.
+// axeScript is testdata/node_modules/axe-core/axe.min.js (tests run in
+// app/), or a skip (a failure under FIELDHEAD_BROWSER=1) when `make npm`
+// has not run.
 func axeScript(t *testing.T) string {
 	t.Helper()
-	path := filepath.Join("..", "node_modules", "axe-core", "axe.min.js")
+	path := filepath.Join("testdata", "node_modules", "axe-core", "axe.min.js")
 	b, err := os.ReadFile(path)
 	if err != nil {
-		needBrowser(t, "axe-core is not installed: run `npm ci` in the repository (%v)", err)
+		needBrowser(t, "axe-core is not installed: run `make npm` (npm ci --prefix app/testdata) (%v)", err)
 	}
 	return string(b)
 }

@@ -112,9 +112,12 @@ func (c *card) block(b *present.Block) app.UI {
 	case present.BlockCard:
 		return &card{S: c.S, C: *b.Card}
 	case present.BlockImport:
-		return app.Div().Class("field").Body(
-			app.Label().For(b.ID).Class("lbl").Text(b.Text),
-			app.Input().Type("file").ID(b.ID).Class("file").Accept(".txt,text/plain").OnChange(c.S.onImport))
+		// The browser's own file input is a small button with its own words;
+		// it lies, transparent, over a face of ours that shows the label at
+		// touch size (as a picker lies over .pickface).
+		return app.Div().Class("field filepick").Body(
+			app.Input().Type("file").ID(b.ID).Class("file").Accept(".txt,text/plain").OnChange(c.S.onImport),
+			app.Label().For(b.ID).Class("fileface").Text(b.Text))
 	case present.BlockSurvey:
 		return &survey{S: c.S, V: *b.Survey}
 	case present.BlockList:

@@ -15,8 +15,10 @@ import (
 	"testing"
 )
 
-// The go-app copy in third_party/go-app differs from the upstream release
-// only by third_party/go-app.diff (why: third_party/README.md).
+// The go-app copy in app/third_party/go-app differs from the upstream
+// release only by app/third_party/go-app.diff (why: app/third_party/README.md).
+// It is a module of its own, so `go vet ./...` and `go test ./...` leave it
+// alone; go.mod's replace points at it.
 
 const (
 	goappModule  = "github.com/maxence-charriere/go-app/v10"
@@ -101,7 +103,7 @@ func goappDiff(upstream, ours string) (string, error) {
 
 // TestGoAppPatch: the go-app module Fieldhead builds with (go.mod's
 // replace) is the upstream release changed by exactly the diff written
-// down in third_party/go-app.diff. Set FIELDHEAD_WRITE_PATCH=1 to rewrite
+// down in app/third_party/go-app.diff. Set FIELDHEAD_WRITE_PATCH=1 to rewrite
 // that file after changing the copy on purpose. (Source: the upstream
 // release through the Go module proxy, checked against goappSum.)
 func TestGoAppPatch(t *testing.T) {
@@ -119,14 +121,14 @@ func TestGoAppPatch(t *testing.T) {
 	if mod.Sum != goappSum {
 		t.Fatalf("upstream %s@%s has checksum %s, want %s", goappModule, goappVersion, mod.Sum, goappSum)
 	}
-	got, err := goappDiff(mod.Dir, filepath.Join("..", "third_party", "go-app"))
+	got, err := goappDiff(mod.Dir, filepath.Join("third_party", "go-app"))
 	if err != nil {
 		t.Fatal(err)
 	}
 	if got == "" {
 		t.Fatal("the copy equals upstream: drop the replace in go.mod instead")
 	}
-	recorded := filepath.Join("..", "third_party", "go-app.diff")
+	recorded := filepath.Join("third_party", "go-app.diff")
 	if os.Getenv("FIELDHEAD_WRITE_PATCH") == "1" {
 		if err := os.WriteFile(recorded, []byte(got), 0o644); err != nil {
 			t.Fatal(err)
@@ -137,13 +139,13 @@ func TestGoAppPatch(t *testing.T) {
 		t.Fatal(err)
 	}
 	if got != string(want) {
-		t.Errorf("third_party/go-app differs from upstream by more or less than third_party/go-app.diff; the diff now is:\n%s", got)
+		t.Errorf("app/third_party/go-app differs from upstream by more or less than app/third_party/go-app.diff; the diff now is:\n%s", got)
 	}
 	gomod, err := os.ReadFile(filepath.Join("..", "go.mod"))
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !strings.Contains(string(gomod), "replace "+goappModule+" => ./third_party/go-app") {
+	if !strings.Contains(string(gomod), "replace "+goappModule+" => ./app/third_party/go-app") {
 		t.Error("go.mod does not replace go-app with the copy")
 	}
 }
@@ -167,10 +169,10 @@ func TestWasmPackages(t *testing.T) {
 		switch {
 		case d == "net/http", strings.HasPrefix(d, "net/http/"), d == "crypto/tls", d == "crypto/x509",
 			strings.HasPrefix(d, "github.com/andybalholm/brotli"), d == "compress/gzip",
-			// Each took KBs of the wasm for a few lines of use (third_party/README.md, present's writeCSV,
+			// Each took KBs of the wasm for a few lines of use (app/third_party/README.md, present's writeCSV,
 			// scenario's crc32IEEE).
 			d == "regexp", d == "encoding/csv", d == "hash/crc32", d == "bufio",
-			// go-app's states, storage values, encryption and notifications, unused here (third_party/README.md).
+			// go-app's states, storage values, encryption and notifications, unused here (app/third_party/README.md).
 			d == "encoding/json", d == "crypto", strings.HasPrefix(d, "crypto/"), d == "github.com/google/uuid",
 			d == "database/sql/driver":
 			t.Errorf("the wasm links %s", d)

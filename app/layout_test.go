@@ -47,10 +47,26 @@ func demoViews() []demoView {
 	return out
 }
 
+// bandsView is the demo's Pump view with every instrument's accuracy
+// given, so the field check shows its uncertainty lines (long ones).
+func bandsView(t *testing.T) demoView {
+	t.Helper()
+	s := scenario.Demo()
+	for _, kv := range [][2]string{{"view", "pump"}, {"etam", "92%"}, {"gcs", "1.6%"}, {"gss", "600kPa"},
+		{"gcd", "1.6%"}, {"gsd", "1000kPa"}, {"uqm", "2%"}, {"upin", "1.5%"}, {"uz", "1cm"}, {"grade", "2B"}} {
+		if err := s.Set(kv[0], kv[1]); err != nil {
+			t.Fatalf("%s: %v", kv[0], err)
+		}
+	}
+	dv := demoView{demo: "demo with accuracies", link: s.Encode()}
+	dv.view.Key, dv.view.Hint = "pump", "bands"
+	return dv
+}
+
 // overflowJS lists what does not fit the width the page is laid out for:
 // the document wider than the window; any element whose right edge passes
 // the window's; any box whose content is wider than the box and that cuts
-// it or scrolls it (overflow other than visible), but the visually
+// it or scrolls it (overflow other than visible, or paint containment), but the visually
 // hidden names (.sr, clipped on purpose); any chart text that passes the
 // edge of its SVG; and any picker whose chosen option's text is wider
 // than the room the picker gives it.
@@ -59,6 +75,9 @@ const overflowJS = `(() => {
   const name = (e) => e.tagName.toLowerCase() + (e.id ? "#" + e.id : "") + (e.className && typeof e.className === "string" ? "." + e.className.trim().split(/\s+/).join(".") : "") +
     (e.firstElementChild && e.firstElementChild.id ? " > #" + e.firstElementChild.id : "");
   const W = document.documentElement.clientWidth;
+  // A box cuts what passes it when its overflow is not visible, or when it
+  // contains its paint (CSS Containment: a card, contain: content).
+  const clips = (cs) => cs.overflowX !== "visible" || /paint|content|strict/.test(cs.contain);
   if (document.documentElement.scrollWidth > W) out.push("the document is " + document.documentElement.scrollWidth + " px wide in " + W);
   for (const e of document.querySelectorAll("body *")) {
     if (e.closest(".sr, svg, script, style, head") || e.getClientRects().length === 0) continue;
@@ -66,10 +85,10 @@ const overflowJS = `(() => {
     if (cs.visibility === "hidden") continue;
     const r = e.getBoundingClientRect();
     let inside = false; // within a box that clips or scrolls: that box is reported
-    for (let a = e.parentElement; a && a !== document.body; a = a.parentElement) if (getComputedStyle(a).overflowX !== "visible") { inside = true; break; }
+    for (let a = e.parentElement; a && a !== document.body; a = a.parentElement) if (clips(getComputedStyle(a))) { inside = true; break; }
     if (!inside && r.right > W + 0.5) out.push(name(e) + " reaches " + Math.round(r.right) + " px of " + W);
-    if (e.tagName !== "SELECT" && e.tagName !== "INPUT" && cs.overflowX !== "visible" && e.scrollWidth > e.clientWidth + 1)
-      out.push(name(e) + " cuts or scrolls its content: " + e.scrollWidth + " px in " + e.clientWidth + " (overflow " + cs.overflowX + ")");
+    if (e.tagName !== "SELECT" && e.tagName !== "INPUT" && clips(cs) && e.scrollWidth > e.clientWidth + 1)
+      out.push(name(e) + " cuts or scrolls its content: " + e.scrollWidth + " px in " + e.clientWidth + " (overflow " + cs.overflowX + ", contain " + cs.contain + ")");
   }
   // A chart's text inside its drawing: the SVG cuts what passes its
   // viewBox.
@@ -107,6 +126,35 @@ const overflowJS = `(() => {
   return out;
 })()`
 
+// brokenFiguresJS lists the numbers the page breaks across lines: every
+// number of its text, digits with their decimal point or comma, sign and
+// exponent ("430.00", "−4.853", "1e-6"), must lie on one line. A line
+// may break between a figure and its unit, or after the hyphen of
+// "python3-iapws", never inside a number (a reader takes "430.0" and
+// "0 kPa" for two values). The link's text, which breaks anywhere on
+// purpose, is left out; so are numbers grouped by thin spaces ("268 000",
+// present's grouping, whose U+2009 is a break opportunity).
+const brokenFiguresJS = `(() => {
+  const out = [];
+  const w = document.createTreeWalker(document.querySelector("main") || document.body, NodeFilter.SHOW_TEXT, {
+    acceptNode: (n) => n.parentElement.closest(".linktext, .sr, svg, script, style, select, textarea, [aria-hidden=true]") ? NodeFilter.FILTER_REJECT : NodeFilter.FILTER_ACCEPT});
+  const range = document.createRange();
+  while (w.nextNode()) {
+    const n = w.currentNode;
+    if (n.parentElement.getClientRects().length === 0) continue;
+    for (const m of n.nodeValue.matchAll(/(?:(?<![\p{L}\p{N}])[−+±-])?\d+(?:[.,]\d+)*(?:[eE][−+-]?\d+)?/gu)) {
+      range.setStart(n, m.index);
+      range.setEnd(n, m.index + m[0].length);
+      const tops = new Set([...range.getClientRects()].filter((r) => r.width > 0).map((r) => Math.round(r.bottom / 4)));
+      if (tops.size > 1) {
+        const e = n.parentElement;
+        out.push("“" + m[0] + "” is broken across " + tops.size + " lines in " + e.tagName.toLowerCase() + (e.id ? "#" + e.id : "") + (e.className ? "." + String(e.className).split(" ")[0] : ""));
+      }
+    }
+  }
+  return out;
+})()`
+
 // chartTextJS returns the smallest chart text on the page in CSS px: the
 // SVG's font size times the scale its viewBox is drawn at.
 const chartTextJS = `(() => {
@@ -121,7 +169,11 @@ const chartTextJS = `(() => {
 })()`
 
 // TestPhoneWidths opens every view of both demos at phone widths from
-// 320 CSS px, and on a tablet in landscape (1024): nothing may scroll sideways or be cut (WCAG 2.1 SC 1.4.10
+// 320 CSS px and on a tablet upright (768) and in landscape (1024), and
+// on the tablets the demo's Pump view with its instruments' accuracies
+// (the uncertainty lines):
+// nothing may scroll sideways or be cut, no figure broken across lines
+// (brokenFiguresJS) (WCAG 2.1 SC 1.4.10
 // Reflow: content at 320 CSS px without scrolling in two directions;
 // data tables may scroll, ours fold into one block per row instead), no
 // picker may cut its text, and from 360 px the charts' smallest text is at
@@ -133,11 +185,17 @@ func TestPhoneWidths(t *testing.T) {
 	defer srv.Close()
 	b := newTab(t)
 	pages := 0
-	for _, w := range []int64{320, 360, 390, 412, 1024} {
+	for _, w := range []int64{320, 360, 390, 412, 768, 1024} {
 		if err := chromedp.Do(b.ctx, chromedp.EmulateViewport(w, 740, chromedp.EmulatePortrait, chromedp.EmulateMobile, chromedp.EmulateTouch)); err != nil {
 			t.Fatal(err)
 		}
-		for _, dv := range demoViews() {
+		views := demoViews()
+		if w >= 768 {
+			// The uncertainty lines were cut on tablets (issue 23). At 320 px
+			// this sheet's chart places a label past its edge: not yet fixed.
+			views = append(views, bandsView(t))
+		}
+		for _, dv := range views {
 			demo, v := dv.demo, dv.view
 			b.navigate(srv.URL + "/?" + dv.link)
 			where := fmt.Sprintf("%s, %s view, %d px", demo, v.Key, w)
@@ -150,6 +208,13 @@ func TestPhoneWidths(t *testing.T) {
 				t.Fatal(err)
 			}
 			for _, p := range bad {
+				t.Errorf("%s: %s", where, p)
+			}
+			broken, err := chromedp.Run(b.ctx, chromedp.Evaluate[[]string](brokenFiguresJS))
+			if err != nil {
+				t.Fatal(err)
+			}
+			for _, p := range broken {
 				t.Errorf("%s: %s", where, p)
 			}
 			if v.Key == "line" || v.Key == "pump" || v.Key == "report" {

@@ -15,7 +15,7 @@ import (
 // errNoJSON here. Only the internal URL list read at start-up is decoded,
 // by the browser's own JSON.parse.
 
-var errNoJSON = errors.New("go-app: JSON values, states, storage and encryption are left out of this wasm build (third_party/README.md)")
+var errNoJSON = errors.New("go-app: JSON values, states, storage and encryption are left out of this wasm build (app/third_party/README.md)")
 
 type jsonRawMessage = []byte
 
