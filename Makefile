@@ -16,9 +16,10 @@ DIST   ?= dist
 PREFIX ?=
 ADDR   ?= :8000
 
-# Debian packages the checks need: the browser for the page test, the
+# Debian packages the checks need: the browser for the page test (with
+# poppler-utils and zbar-tools to read the printed record), the
 # reference libraries for make refs and the reference checks.
-APT_PKGS := chromium python3-iapws python3-mpmath python3-scipy python3-fluids python3-gsw python3-uncertainties units
+APT_PKGS := chromium poppler-utils zbar-tools python3-iapws python3-mpmath python3-scipy python3-fluids python3-gsw python3-uncertainties units
 
 .PHONY: all run site wasm dist test deps npm fmt vet unit fuzz browser bench refs refs-check clean
 

@@ -8,6 +8,7 @@ require (
 	github.com/chromedp/chromedp v0.23.0
 	github.com/martinlindhe/unit v0.0.0-20230420213220-4adfd7d0a0d6
 	github.com/maxence-charriere/go-app/v10 v10.1.11
+	rsc.io/qr v0.2.0
 )
 
 require (

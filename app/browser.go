@@ -119,11 +119,38 @@ func (s *sheet) fallbackCopy(ctx app.Context) {
 	})
 }
 
-// onPrint opens the browser's print dialog; the print stylesheet turns the
-// page into a sheet.
+// onPrint prints the record of the sheet, the Report, from any view: the
+// Report is drawn, the browser's print dialog opened once it is on the
+// page, and the view open before comes back when the dialog closes
+// (afterprint). The print stylesheet turns the Report into a sheet.
 func (s *sheet) onPrint(ctx app.Context, e app.Event) {
 	defer s.contain("opening the print dialog")
-	app.Window().Call("print")
+	back := s.vm.View
+	if back == "report" {
+		app.Window().Call("print")
+		return
+	}
+	s.d.Choose("view", "report")
+	s.evaluate()
+	ctx.Defer(func(ctx app.Context) { // after the Report is drawn
+		defer s.contain("printing the report")
+		win := app.Window()
+		var done app.Func
+		done = app.FuncOf(func(app.Value, []app.Value) any {
+			win.Call("removeEventListener", "afterprint", done)
+			done.Release()
+			ctx.Dispatch(func(ctx app.Context) {
+				defer s.contain("returning from the print dialog")
+				if s.vm.View == "report" { // not moved meanwhile
+					s.d.Choose("view", back)
+					s.evaluate()
+				}
+			})
+			return nil
+		})
+		win.Call("addEventListener", "afterprint", done)
+		win.Call("print")
+	})
 }
 
 // onDemo opens the demo as a sheet of its own.

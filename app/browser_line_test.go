@@ -59,7 +59,7 @@ func TestBrowserLinePump(t *testing.T) {
 	// charts counts the inline SVG images inside sel.
 	charts := func(sel string) string {
 		t.Helper()
-		return b.js(fmt.Sprintf("String(document.querySelectorAll(%q).length)", sel+` svg[role="img"]`))
+		return b.js(fmt.Sprintf("String(document.querySelectorAll(%q).length)", sel+` .chart:not(.print-only) svg[role="img"]`))
 	}
 	// noScroll checks that the page is no wider than the screen (a page
 	// too wide also widens a phone's layout viewport, so both are read).

@@ -68,6 +68,9 @@ func (c *card) block(b *present.Block) app.UI {
 		if b.Text == "" && len(b.Buttons) == 0 {
 			return app.Div().Class("slot")
 		}
+		if b.ID == "report-url" {
+			return linkRecord(b.Text)
+		}
 		if b.Class == "rtitle" {
 			return app.H1().ID(b.ID).Text(b.Text)
 		}
@@ -92,7 +95,11 @@ func (c *card) block(b *present.Block) app.UI {
 	case present.BlockTable:
 		return table(b.Table)
 	case present.BlockChart:
-		return chartFigure(b.Chart)
+		w := c.W
+		if w == 0 {
+			w = chartWidth()
+		}
+		return chartFigure(b.Chart, w, c.S != nil && c.S.vm.View == "report")
 	case present.BlockButtons:
 		cls := b.Class
 		if cls == "" {

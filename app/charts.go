@@ -45,17 +45,35 @@ func chartWidthFor(w int) int {
 	return max(280, min(720, vb))
 }
 
-// chartSVG draws a chart of the view model as SVG text.
-func chartSVG(c *present.Chart) string {
+// Print draws the charts for paper, wider than the screen's widest (720):
+// at the text width of A4 (182 mm, 688 CSS px) or Letter (187.9 mm) the
+// smallest text, 14 viewBox px, is 12 CSS px or 9 pt there, and the pump
+// chart with its two panels below (140 px each at least) stays short
+// enough to share a page with its headings and caption.
+const (
+	printChartWidth    = 800
+	printPumpHeight    = 290
+	printProfileHeight = 340
+)
+
+// chartSVG draws a chart of the view model as SVG text, w viewBox px wide;
+// print asks for the paper's proportions.
+func chartSVG(c *present.Chart, w int, print bool) string {
 	if c.Kind == "pump" {
-		return pumpChart(c).SVG()
+		return pumpChart(c, w, print).SVG()
 	}
-	return profileChart(c).SVG()
+	return profileChart(c, w, print).SVG()
 }
 
-// chartFigure draws a chart with its caption.
-func chartFigure(c *present.Chart) app.UI {
-	body := []app.UI{app.Div().Class("chart").Body(app.Raw(chartSVG(c)))}
+// chartFigure draws a chart with its caption, w viewBox px wide. With
+// paper, the printed sheet (the Report) also holds a copy drawn for paper,
+// shown in print only: the screen's copy, drawn for a phone, would print
+// narrow or tall.
+func chartFigure(c *present.Chart, w int, paper bool) app.UI {
+	body := []app.UI{app.Div().Class(classIf("chart", paper, "screen-only")).Body(app.Raw(chartSVG(c, w, false)))}
+	if paper {
+		body = append(body, app.Div().Class("chart print-only").Body(app.Raw(chartSVG(c, printChartWidth, true))))
+	}
 	if c.Caption != "" {
 		body = append(body, app.P().Class("caption").Text(c.Caption))
 	}
@@ -77,9 +95,12 @@ func bands(bs []present.Band) []chart.Band {
 }
 
 // pumpChart is the pump and system chart.
-func pumpChart(c *present.Chart) chart.Chart {
+func pumpChart(c *present.Chart, w int, print bool) chart.Chart {
 	in := chart.PumpSystemInput{Title: c.Title, FlowLabel: c.XLabel, HeadLabel: c.YLabel,
-		EfficiencyLabel: c.Y2Label, NPSHLabel: c.Y3Label, Bands: bands(c.Bands), Width: chartWidth(), Height: 460}
+		EfficiencyLabel: c.Y2Label, NPSHLabel: c.Y3Label, Bands: bands(c.Bands), Width: w, Height: 460}
+	if print {
+		in.Height = printPumpHeight
+	}
 	for _, cu := range c.Curves {
 		switch cu.Role {
 		case present.RolePump, present.RolePumpBase:
@@ -113,9 +134,12 @@ func pumpChart(c *present.Chart) chart.Chart {
 }
 
 // profileChart is the grade lines along the line.
-func profileChart(c *present.Chart) chart.Chart {
+func profileChart(c *present.Chart, w int, print bool) chart.Chart {
 	in := chart.ProfileInput{Title: c.Title, DistanceLabel: c.XLabel, HeadLabel: c.YLabel, Bands: bands(c.Bands),
-		Width: chartWidth(), Height: 440}
+		Width: w, Height: 440}
+	if print {
+		in.Height = printProfileHeight
+	}
 	for _, cu := range c.Curves {
 		if len(cu.X) > 0 && in.Distance == nil {
 			in.Distance = cu.X

@@ -1,6 +1,8 @@
 package main
 
 import (
+	"strconv"
+
 	"fieldhead/calc/scenario/present"
 
 	"github.com/maxence-charriere/go-app/v10/pkg/app"
@@ -171,9 +173,15 @@ func cautions(list []string) app.UI {
 
 // printHead and printFoot appear on the printed sheet only.
 func (s *sheet) printHead() app.UI {
-	return app.Div().Class("print-only printhead").Body(
-		app.Div().Class("ph-name").Text("Fieldhead — "+s.vm.Name),
-		app.Div().Class("ph-date").Text("Printed "+nowText()),
+	var note app.UI
+	if s.vm.View != "report" { // printed with the browser's own command, not Print sheet
+		note = app.P().Class("print-note").Text("This is the input form of one view. Print sheet prints the whole record: inputs, results, charts, link and signatures.")
+	}
+	return app.Div().Class("print-only").Body(
+		app.Div().Class("printhead").Body(
+			app.Div().Class("ph-name").Text("Fieldhead — "+s.vm.Name),
+			app.Div().Class("ph-date").Text("Printed "+nowText())),
+		note,
 	)
 }
 
@@ -189,5 +197,48 @@ func (s *sheet) printFoot() app.UI {
 	return app.Div().Class("print-only printfoot").Body(
 		app.P().Body(append([]app.UI{app.Strong().Text("Methods (listed on the Report view): ")}, names...)...),
 		app.P().Body(app.Strong().Text("This sheet as a link: "), app.Span().Class("linktext").Text(s.link())),
+	)
+}
+
+// linkRecord draws the share link on the Report: its QR code beside a
+// short form a person can read off the paper; the whole link on the screen
+// only (printed, it ran over eight lines).
+func linkRecord(link string) app.UI {
+	code := qrSVG(link, "QR code of this sheet's link")
+	say := "Scan the code with a phone's camera to open this calculation; the whole link has " + strconv.Itoa(len(link)) + " characters."
+	if code == "" {
+		say = "The link is too long for a QR code (" + strconv.Itoa(len(link)) + " characters): open the sheet on the device it was made on and use Copy link."
+	}
+	var qr app.UI = app.Div().Class("slot")
+	if code != "" {
+		qr = app.Div().Class("qrbox").Body(app.Raw(code))
+	}
+	return app.Div().Class("linkrec").Body(qr,
+		app.Div().Class("linkwords").Body(
+			app.P().Class("linkshort").ID("report-short-url").Text(shortLink(link)),
+			app.P().Class("muted small").Text(say),
+			app.P().Class("linktext screen-only").ID("report-url").Text(link),
+		),
+	)
+}
+
+// signoff is the Report's place for the people who did and saw the test,
+// filled in by hand on the printed sheet: a commissioning record is signed.
+func (s *sheet) signoff() app.UI {
+	if s.vm.View != "report" {
+		return nil
+	}
+	who := func(role string) app.UI {
+		line := func(what string) app.UI {
+			return app.Div().Class("signfield").Body(app.Div().Class("signline"), app.Span().Class("signlabel").Text(what))
+		}
+		return app.Div().Class("signrow").Body(app.H3().Text(role),
+			app.Div().Class("signfields").Body(line("name"), line("signature"), line("date")))
+	}
+	return app.Section().Class("card rsec signoff").ID("signoff").Body(
+		app.H2().Text("Signed for the record"),
+		app.P().Class("muted small").Text("Filled in by hand on the printed sheet, by whoever made the readings and whoever saw them made."),
+		who("Tested by"),
+		who("Witnessed by"),
 	)
 }

@@ -402,7 +402,7 @@ func TestChartContrast(t *testing.T) {
 		for _, c := range sh.Cards {
 			for _, bl := range c.Blocks {
 				if bl.Chart != nil {
-					svg += chartSVG(bl.Chart)
+					svg += chartSVG(bl.Chart, chartWidth(), false) + chartSVG(bl.Chart, printChartWidth, true)
 				}
 			}
 		}

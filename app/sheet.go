@@ -371,7 +371,7 @@ func (s *sheet) Render() (ui app.UI) {
 		app.Main().Body(
 			app.H1().Class("sr").Text(h1),
 			app.Div().Class("notices").Body(others(vm.Others)), // a stable slot: the list appearing must not re-create the inputs
-			lay),
+			lay, s.signoff()),
 		cautions(vm.Cautions),
 		s.printFoot(),
 	)
