@@ -115,6 +115,33 @@ type selectBox struct {
 	List      bool   // the unit of a data-sheet column
 	Fit       bool   // the picker that adds a fitting
 	S         *sheet // the sheet whose handlers it calls (compared by pointer)
+
+	keys app.Func // the fitting picker's own key listener (focus.go)
+}
+
+// OnMount gives the fitting picker a key listener of its own, which runs
+// as the key is pressed (see sheet.fitKeyDown).
+func (b *selectBox) OnMount(ctx app.Context) {
+	if !b.Fit || !app.IsClient {
+		return
+	}
+	el := ctx.JSSrc()
+	b.keys = app.FuncOf(func(_ app.Value, args []app.Value) any {
+		if len(args) > 0 && b.S != nil && b.Fit {
+			b.S.fitKeyDown(args[0], el, b.Param)
+		}
+		return nil
+	})
+	el.Call("addEventListener", "keydown", b.keys)
+	el.Call("addEventListener", "keypress", b.keys)
+}
+
+// OnDismount removes the key listener.
+func (b *selectBox) OnDismount() {
+	if b.keys != nil {
+		b.keys.Release()
+		b.keys = nil
+	}
 }
 
 // Render draws the select.
@@ -125,8 +152,6 @@ func (b *selectBox) Render() app.UI {
 	}
 	var h app.EventHandler
 	switch {
-	case b.Fit:
-		h = b.S.onPicked(b.Param, "fit")
 	case b.List:
 		h = b.S.onPicked(b.Param, "list-unit")
 	case b.Unit:
@@ -134,7 +159,12 @@ func (b *selectBox) Render() app.UI {
 	default:
 		h = b.S.onPicked(b.Param, "choose")
 	}
-	sel := app.Select().ID(b.ID).Class(b.Class).OnChange(h, app.EventScope(b.Param, b.Unit, b.List, b.Fit))
+	sel := app.Select().ID(b.ID).Class(b.Class)
+	if b.Fit { // adds only on an explicit choice (focus.go)
+		sel = sel.OnChange(b.S.onFitChange(b.Param), app.EventScope(b.Param, b.Fit)).OnBlur(b.S.onFitBlur)
+	} else {
+		sel = sel.OnChange(h, app.EventScope(b.Param, b.Unit, b.List, b.Fit))
+	}
 	if b.Label != "" {
 		sel = sel.Aria("label", b.Label)
 	}

@@ -40,6 +40,8 @@ type sheet struct {
 	pending  bool        // a write of the sheet is put off (save)
 	edits    int         // edits so far, for save to see a pause
 	install  bool        // the browser offers to install the site (chrome.go)
+	fitKey   string      // the last key on the closed fitting picker (focus.go)
+	fitKeyAt float64     // its event's timeStamp, ms
 }
 
 // newSheet is the route's component. In the browser it restores the
@@ -270,8 +272,8 @@ func (s *sheet) onBox(p string) app.EventHandler {
 	}
 }
 
-// onPicked handles a picker: a unit, a choice, a data-sheet column's unit
-// or a fitting to add.
+// onPicked handles a picker: a unit, a choice or a data-sheet column's
+// unit (the fitting picker has its own handlers, focus.go).
 func (s *sheet) onPicked(p, kind string) app.EventHandler {
 	return func(ctx app.Context, e app.Event) {
 		defer s.contain("changing " + scenario.Label(p))
@@ -284,11 +286,6 @@ func (s *sheet) onPicked(p, kind string) app.EventHandler {
 			s.d.PickUnit(p, v)
 		case "list-unit":
 			s.d.SetListUnit(p, v)
-		case "fit":
-			if v == "" {
-				return
-			}
-			s.d.StepFitting(p, v, +1)
 		default:
 			s.d.Choose(p, v)
 		}
@@ -317,6 +314,11 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 		if confirm != "" && !app.Window().Call("confirm", confirm).Bool() {
 			return
 		}
+		view := s.vm.View
+		defer func() {
+			ids, follow := s.focusTargets(a)
+			s.refocus(s.vm.View != view, s.vm.View, ids, follow)
+		}()
 		switch a.Do {
 		case "choose":
 			s.d.Choose(a.Param, a.Value)
