@@ -26,6 +26,10 @@ import (
 //     from the HTTP cache (worker.go) instead of downloading the site a
 //     second time alongside the page on a slow link, and nothing the page
 //     needs waits for it.
+//   - A wasm that cannot be fetched or started (a first visit offline, a
+//     download cut or blocked) is said in our words, the spinner stopped,
+//     with a button that tries again (loadFailedJS); go-app wrote the
+//     browser's own error ("TypeError: Failed to fetch") beside a spinner.
 func patchLoader(js string) (string, error) {
 	steps := []struct {
 		what string
@@ -39,6 +43,9 @@ func patchLoader(js string) (string, error) {
 		{"the start of the wasm",
 			regexp.MustCompile(`(\n(\s*)go\.run\(wasm\.instance\);\n\s*loader\.remove\(\);\n)`),
 			"\n${2}performance.mark(\"fieldhead-wasm-ready\"); // Fieldhead: compiled (make bench times the phases)${1}${2}goappInitServiceWorker(); // Fieldhead: after the wasm (loader.go)\n"},
+		{"the failed start",
+			regexp.MustCompile(`\} catch \(err\) \{\n(\s*)loaderIcon\.className = "goapp-logo";\n\s*loaderLabel\.innerText = err;\n(\s*console\.error\("loading wasm failed: ", err\);\n)`),
+			"} catch (err) {\n${2}${1}fieldheadLoadFailed(loader, loaderIcon, loaderLabel); // Fieldhead: in our words, with a retry (loader.go)\n"},
 	}
 	for _, s := range steps {
 		if n := len(s.re.FindAllStringIndex(js, -1)); n != 1 {
@@ -46,8 +53,48 @@ func patchLoader(js string) (string, error) {
 		}
 		js = s.re.ReplaceAllString(js, s.repl)
 	}
-	return js, nil
+	return js + loadFailedJS, nil
 }
+
+// loadFailedJS ends app.js: what the corner note says, moved above the
+// sheet, when the wasm could not be fetched or started. The written page stays as it is (the demo on
+// a bare visit, readable; a link's sheet stays hidden, as no answer but
+// the link's may show); the note stops turning, says what happened and
+// what to do, and its button runs go-app's start again without reloading
+// the page (which, offline on a first visit, would show the browser's
+// error page instead of the demo).
+const loadFailedJS = `
+// Fieldhead: the wasm did not load (app/loader.go).
+function fieldheadLoadFailed(loader, icon, label) {
+  const demo = document.documentElement.classList.contains("demo-page");
+  const offline = navigator.onLine === false;
+  loader.classList.add("failed");
+  loader.setAttribute("role", "alert");
+  document.body.prepend(loader); // above the sheet, in the page's flow: it covers nothing
+  icon.className = "stopped";
+  label.textContent = "Fieldhead could not start: " +
+    (offline ? "this device is offline and has not kept the program yet. " : "its program did not download. ") +
+    (demo ? "The demo sheet below can be read but not changed." : "This link's sheet can be shown only once it starts.") +
+    " Check the connection, then try again.";
+  let retry = document.getElementById("app-wasm-retry");
+  if (!retry) {
+    retry = document.createElement("button");
+    retry.type = "button";
+    retry.id = "app-wasm-retry";
+    retry.className = "act";
+    retry.textContent = "Try again";
+    retry.addEventListener("click", () => {
+      retry.remove();
+      loader.classList.remove("failed");
+      loader.setAttribute("role", "status");
+      icon.className = "goapp-spin";
+      label.textContent = "Fieldhead is starting…";
+      goappInitWebAssembly();
+    });
+    loader.append(retry);
+  }
+}
+`
 
 // patchLoaderHTML replaces go-app's loader, a full-window cover over the
 // demo sheet the site writer drew (sheet.go), by a small polite status note

@@ -91,15 +91,7 @@ func TestBeforeWasm(t *testing.T) {
 	b := newTab(t)
 	origin := newSiteServer(t, site).URL
 	want := demoAnswer(t)
-	block := func(on bool) {
-		var pats []*network.BlockPattern
-		if on {
-			pats = []*network.BlockPattern{{URLPattern: "*://*:*/*.wasm", Block: true}}
-		}
-		if _, err := chromedp.Call(b.ctx, network.SetBlockedURLs, network.SetBlockedURLsParams{URLPatterns: pats}); err != nil {
-			t.Fatalf("blocking the wasm: %v", err)
-		}
-	}
+	block := func(on bool) { blockWasm(t, b, on) }
 	open := func(u string) {
 		if err := chromedp.Do(b.ctx, chromedp.Navigate(u)); err != nil {
 			t.Fatalf("opening %s: %v", u, err)
@@ -140,7 +132,7 @@ func TestBeforeWasm(t *testing.T) {
 			t.Errorf("%d px, wasm blocked, bare visit: answer %q (shown: %v), want the demo's %q", vp[0], got, shows(want), want)
 		}
 		note := b.js(`(() => { const r = document.getElementById("app-wasm-loader").getBoundingClientRect(); return r.width + "×" + r.height; })()`)
-		if b.jsBool(`document.getElementById("app-wasm-loader").getBoundingClientRect().height > 80`) {
+		if b.jsBool(`(() => { const n = document.getElementById("app-wasm-loader"); return !n.classList.contains("failed") && n.getBoundingClientRect().height > 80; })()`) {
 			t.Errorf("%d px: the starting note is %s px, not a small note", vp[0], note)
 		}
 		if !b.jsBool(`[...document.querySelectorAll("#sheet input, #sheet select, #sheet textarea, #sheet .share button")].every((e) => e.closest("[inert]"))`) {
@@ -166,7 +158,7 @@ func TestBeforeWasm(t *testing.T) {
 	if shows(want) || b.jsBool(`getComputedStyle(document.querySelector("#answer-value")).visibility !== "hidden"`) {
 		t.Errorf("a share link showed the demo's answer %q before the wasm ran", want)
 	}
-	if !shows("Fieldhead is starting") && !shows("Failed") {
+	if !shows("Fieldhead is starting") && !shows("Fieldhead could not start") {
 		t.Error("a share link shows no starting note")
 	}
 	b.shot("before-wasm-share-390")
@@ -204,4 +196,85 @@ func TestBeforeWasm(t *testing.T) {
 		t.Errorf("after the wasm, the share link's answer is %q, want %q", got, linkAnswer)
 	}
 	b.noProblems("before and after the wasm")
+}
+
+// TestFailedLoad opens the site with the wasm's request blocked, as on a
+// first visit offline: the corner note says in words that Fieldhead could
+// not start and what to do, stops turning, leaves the written demo
+// readable (not covered), and offers a button that, the wasm allowed
+// again, starts the sheet without reloading the page. A share link's note
+// says its sheet waits for the start. Screenshots before and after.
+func TestFailedLoad(t *testing.T) {
+	site := testSite(t)
+	b := newTab(t)
+	origin := newSiteServer(t, site).URL
+	want := demoAnswer(t)
+	block := func(on bool) { blockWasm(t, b, on) }
+	block(true)
+	for _, vp := range [][2]int64{{390, 844}, {1024, 768}} {
+		if err := chromedp.Do(b.ctx, chromedp.EmulateViewport(vp[0], vp[1])); err != nil {
+			t.Fatal(err)
+		}
+		if err := chromedp.Do(b.ctx, chromedp.Navigate(origin+"/")); err != nil {
+			t.Fatal(err)
+		}
+		if !b.poll(`document.getElementById("app-wasm-retry") !== null`, 20*time.Second) {
+			t.Fatalf("%d px: no retry button after the wasm failed; the note says %q", vp[0], b.js(`(document.getElementById("app-wasm-loader") || {}).innerText || ""`))
+		}
+		note := b.text("#app-wasm-loader-label")
+		if !strings.Contains(note, "Fieldhead could not start") || !strings.Contains(note, "demo") || strings.Contains(note, "TypeError") {
+			t.Errorf("%d px: the note says %q", vp[0], note)
+		}
+		if b.jsBool(`(() => { const i = document.getElementById("app-wasm-loader-icon"); return i.classList.contains("goapp-spin") || (i.getClientRects().length > 0 && getComputedStyle(i).animationName !== "none"); })()`) {
+			t.Errorf("%d px: the spinner still turns", vp[0])
+		}
+		if got := b.text("#answer-value"); got != want {
+			t.Errorf("%d px: the written demo's answer is %q, want %q", vp[0], got, want)
+		}
+		if b.jsBool(`(() => { const a = document.getElementById("answer-value").getBoundingClientRect(), n = document.getElementById("app-wasm-loader").getBoundingClientRect(); return a.bottom > n.top && a.top < n.bottom && a.right > n.left && a.left < n.right; })()`) {
+			t.Errorf("%d px: the note covers the demo's answer", vp[0])
+		}
+		if b.jsBool(`(() => { const r = document.getElementById("app-wasm-retry").getBoundingClientRect(); return r.width < 44 || r.height < 44; })()`) {
+			t.Errorf("%d px: the retry button is under 44 × 44 px", vp[0])
+		}
+		b.shot(fmt.Sprintf("failed-load-%d", vp[0]))
+	}
+	block(false)
+	if err := clickID(b, "app-wasm-retry"); err != nil {
+		t.Fatal(err)
+	}
+	b.waitResult()
+	if got := b.text("#answer-value"); got != want {
+		t.Errorf("after trying again: answer %q, want %q", got, want)
+	}
+	if b.jsBool(`document.getElementById("app-wasm-loader") !== null`) {
+		t.Error("after trying again the note remains")
+	}
+	b.shot("failed-load-retried")
+
+	// A share link: its sheet waits for the start.
+	block(true)
+	sc := scenario.Demo()
+	_ = sc.Set("z2", "31 m")
+	if err := chromedp.Do(b.ctx, chromedp.Navigate(origin+"/?"+sc.Encode())); err != nil {
+		t.Fatal(err)
+	}
+	if !b.poll(`document.getElementById("app-wasm-retry") !== null`, 20*time.Second) {
+		t.Fatal("a share link: no retry button after the wasm failed")
+	}
+	if note := b.text("#app-wasm-loader-label"); !strings.Contains(note, "link's sheet") {
+		t.Errorf("a share link: the note says %q", note)
+	}
+}
+
+// blockWasm makes the page's requests for the wasm fail (on) or go through.
+func blockWasm(t *testing.T, b *tab, on bool) {
+	t.Helper()
+	var pats []*network.BlockPattern
+	if on {
+		pats = []*network.BlockPattern{{URLPattern: "*://*:*/*.wasm", Block: true}}
+	}
+	if _, err := chromedp.Call(b.ctx, network.SetBlockedURLs, network.SetBlockedURLsParams{URLPatterns: pats}); err != nil {
+		t.Fatalf("blocking the wasm: %v", err)
+	}
 }

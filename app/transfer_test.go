@@ -76,6 +76,10 @@ func TestPatchLoader(t *testing.T) {
 	if run < 0 || reg < run {
 		t.Error("the worker is not registered after the wasm starts")
 	}
+	if fail := strings.Index(js, "fieldheadLoadFailed(loader, loaderIcon, loaderLabel); // Fieldhead"); fail < 0 || strings.Contains(js, "loaderLabel.innerText = err") ||
+		!strings.Contains(js, "function fieldheadLoadFailed(") {
+		t.Error("a failed start still writes the browser's error, not ours")
+	}
 	if _, err := patchLoader(js); err == nil {
 		t.Error("patching twice should fail: the texts it replaces are gone")
 	}
