@@ -8,6 +8,7 @@ import (
 	"crypto/sha256"
 	"encoding/hex"
 	"io"
+	"io/fs"
 	"net/http"
 	"net/http/httptest"
 	"os"
@@ -280,4 +281,58 @@ func gunzip(t *testing.T, b []byte) []byte {
 		t.Errorf("gzip: %v", err)
 	}
 	return d
+}
+
+// TestSiteWrittenAlike writes the site twice from the same inputs (the
+// same wasm bytes, assets and prefix) and compares every file: a page
+// written differently would change its ETag and make every browser fetch
+// it again after a build that changed nothing (go-app kept an element's
+// attributes in a map, written in the map's changing order). It also
+// finds no boolean attribute written as ="false", which HTML reads as
+// true: the written demo's unit pickers showed their last unit ("212 in"
+// for 212 m).
+func TestSiteWrittenAlike(t *testing.T) {
+	dir := t.TempDir()
+	wasm := filepath.Join(dir, "app.wasm")
+	if err := os.WriteFile(wasm, []byte("\x00asm\x01\x00\x00\x00"), 0o644); err != nil { // the header of an empty module (WebAssembly core spec, 5.5.16)
+		t.Fatal(err)
+	}
+	read := func(site string) map[string][]byte {
+		files := map[string][]byte{}
+		err := filepath.WalkDir(site, func(p string, d fs.DirEntry, err error) error {
+			if err != nil || d.IsDir() || d.Type()&fs.ModeSymlink != 0 {
+				return err
+			}
+			rel, _ := filepath.Rel(site, p)
+			files[rel], err = os.ReadFile(p)
+			return err
+		})
+		if err != nil {
+			t.Fatal(err)
+		}
+		return files
+	}
+	var sites []map[string][]byte
+	for _, name := range []string{"a", "b"} {
+		site := filepath.Join(dir, name)
+		if err := writeSite(site, wasm, filepath.Join("..", "web"), "/tools/fh"); err != nil {
+			t.Fatal(err)
+		}
+		sites = append(sites, read(site))
+	}
+	if len(sites[0]) != len(sites[1]) {
+		t.Fatalf("the two writes hold %d and %d files", len(sites[0]), len(sites[1]))
+	}
+	for name, a := range sites[0] {
+		if !bytes.Equal(a, sites[1][name]) {
+			t.Errorf("%s differs between two writes of the same inputs", name)
+		}
+	}
+	page := string(sites[0]["index.html"])
+	if m := regexp.MustCompile(`\s(selected|disabled|hidden|checked|readonly|inert|open)="false"`).FindAllString(page, -1); len(m) > 0 {
+		t.Errorf("index.html writes %d boolean attributes as =\"false\" (true in HTML): %q", len(m), m[0])
+	}
+	if !regexp.MustCompile(`<option selected value="m">m</option>`).MatchString(page) || strings.Count(page, `<option selected value="in">`) > 0 {
+		t.Error("the written demo's elevation picker does not show metres alone as chosen")
+	}
 }

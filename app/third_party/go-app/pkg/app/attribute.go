@@ -112,3 +112,14 @@ func setJSAttribute(jsElement Value, name, value string) {
 func deleteJSAttribute(jsElement Value, name string) {
 	jsElement.Call("removeAttribute", name)
 }
+
+// isBooleanAttribute reports whether name is an HTML boolean attribute, one
+// whose presence means true whatever its value.
+func isBooleanAttribute(name string) bool {
+	switch name {
+	case "async", "autofocus", "autoplay", "checked", "default", "defer", "disabled", "hidden", "inert",
+		"ismap", "loop", "multiple", "muted", "open", "readonly", "required", "reversed", "selected":
+		return true
+	}
+	return false
+}

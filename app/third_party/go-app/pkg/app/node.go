@@ -5,6 +5,7 @@ import (
 	"html"
 	"io"
 	"reflect"
+	"slices"
 	"strconv"
 	"time"
 
@@ -700,8 +701,19 @@ func (m nodeManager) encodeHTML(ctx Context, w *bytes.Buffer, depth int, v HTML)
 	m.encodeIndent(w, depth)
 	w.WriteByte('<')
 	w.WriteString(v.Tag())
-	for name, value := range v.attrs() {
-		m.encodeHTMLAttribute(ctx, w, name, value)
+	// In name order, so that the same page is written byte for byte the
+	// same (a map's order changes from run to run); a boolean attribute
+	// set to false is left out (in HTML its presence alone makes it true).
+	attrs := v.attrs()
+	names := make([]string, 0, len(attrs))
+	for name := range attrs {
+		names = append(names, name)
+	}
+	slices.Sort(names)
+	for _, name := range names {
+		if value := attrs[name]; value != "false" || !isBooleanAttribute(name) {
+			m.encodeHTMLAttribute(ctx, w, name, value)
+		}
 	}
 	w.WriteByte('>')
 
