@@ -189,7 +189,7 @@ func siAfterNumber(s string) []string {
 			continue
 		}
 		j := i + 1
-		for j < len(rs) && (rs[j] == ' ' || rs[j] == '\u2009' || rs[j] == '\u00a0') {
+		for j < len(rs) && (rs[j] == ' ' || rs[j] == '\u2009' || rs[j] == '\u202f' || rs[j] == '\u00a0') {
 			j++
 		}
 		k := j

@@ -142,7 +142,7 @@ const brokenFiguresJS = `(() => {
   while (w.nextNode()) {
     const n = w.currentNode;
     if (n.parentElement.getClientRects().length === 0) continue;
-    for (const m of n.nodeValue.matchAll(/(?:(?<![\p{L}\p{N}])[−+±-])?\d+(?:[.,]\d+)*(?:[eE][−+-]?\d+)?/gu)) {
+    for (const m of n.nodeValue.matchAll(/(?:(?<![\p{L}\p{N}])[−+±-])?\d+(?:[.,\u2009\u202f]\d+)*(?:[eE][−+-]?\d+)?/gu)) {
       range.setStart(n, m.index);
       range.setEnd(n, m.index + m[0].length);
       const tops = new Set([...range.getClientRects()].filter((r) => r.width > 0).map((r) => Math.round(r.bottom / 4)));

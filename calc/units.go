@@ -58,7 +58,7 @@ var dimInfos = [...]dimInfo{
 	Mass:               {"mass", "a", "12 kg"},
 	Duration:           {"duration", "a", "30 s"},
 	SpecificEnergy:     {"specific energy", "a", "0.45 kWh/m³"},
-	SpecificEnergyHead: {"specific energy per head", "a", "0.4 kWh/(m³·100m)"},
+	SpecificEnergyHead: {"specific energy per head", "a", "0.4 kWh/(m³·100 m)"},
 	Frequency:          {"speed or frequency", "a", "1450 rpm"},
 }
 

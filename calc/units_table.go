@@ -128,8 +128,8 @@ var unitTable = []unitEntry{
 	{Unit: Unit{"kWh/m³", SpecificEnergy, cvKWh, 0, "kilowatt-hour per cubic metre"}, defSI: true},
 	{Unit: Unit{"kWh/kgal", SpecificEnergy, cvKWh / (1000 * cvUSGallon), 0, "kilowatt-hour per thousand US gallons"}, defUS: true},
 
-	{Unit: Unit{"kWh/(m³·100m)", SpecificEnergyHead, cvKWh / 100, 0, "kilowatt-hour per cubic metre and 100 m of head"}, defSI: true},
-	{Unit: Unit{"kWh/(kgal·100ft)", SpecificEnergyHead, cvKWh / (1000 * cvUSGallon * 100 * cvFoot), 0, "kilowatt-hour per thousand US gallons and 100 ft of head"}, defUS: true},
+	{Unit: Unit{"kWh/(m³·100 m)", SpecificEnergyHead, cvKWh / 100, 0, "kilowatt-hour per cubic metre and 100 m of head"}, aliases: []string{"kWh/(m³·100m)"}, defSI: true},
+	{Unit: Unit{"kWh/(kgal·100 ft)", SpecificEnergyHead, cvKWh / (1000 * cvUSGallon * 100 * cvFoot), 0, "kilowatt-hour per thousand US gallons and 100 ft of head"}, aliases: []string{"kWh/(kgal·100ft)"}, defUS: true},
 
 	{Unit: Unit{"rpm", Frequency, 1 / cvMinute, 0, "revolutions per minute"}, aliases: []string{"r/min", "rev/min", "min-1"}, defSI: true, defUS: true},
 	{Unit: Unit{"Hz", Frequency, 1, 0, "hertz"}, aliases: []string{"hz"}},

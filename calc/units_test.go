@@ -124,8 +124,8 @@ func TestUnitSP811(t *testing.T) {
 		// Energy per volume: kilowatt hour (kW·h) = 3.6 E+06 J, exact; gallon (U.S.) = 3.785 412 E-03 m³; NIST SP 811 (2008) App. B, from memory.
 		{"kWh/m³", "3.6 E+06", true, 0, false},
 		{"kWh/kgal", "3.785 412 E-03", false, 3.6e6 / 1000, true},
-		{"kWh/(m³·100m)", "3.6 E+06", true, 0.01, false},
-		{"kWh/(kgal·100ft)", "3.785 412 E-03", false, 3.6e6 / 1000 / (100 * 0.3048), true},
+		{"kWh/(m³·100 m)", "3.6 E+06", true, 0.01, false},
+		{"kWh/(kgal·100 ft)", "3.785 412 E-03", false, 3.6e6 / 1000 / (100 * 0.3048), true},
 		// Revolutions per minute as a rate, 1/(60 s) (minute, SP 811 App. B, exact); hertz is the SI unit.
 		{"rpm", "6.0 E+01", true, 0, true},
 		{"Hz", "1.0 E+00", true, 0, false},
@@ -321,7 +321,7 @@ func TestUnitsForOrder(t *testing.T) {
 	us := map[string]bool{"ft": true, "in": true, "psi": true, "ksi": true, "ftH2O": true, "inH2O": true, "inHg": true,
 		"ft/s": true, "gpm": true, "cfs": true, "MGD": true, "°F": true, "lb/ft³": true, "ft²/s": true,
 		"hp": true, "hp(E)": true, "ft²": true, "in²": true, "lb": true,
-		"kWh/kgal": true, "kWh/(kgal·100ft)": true}
+		"kWh/kgal": true, "kWh/(kgal·100 ft)": true}
 	for d := Dimensionless; d <= Frequency; d++ {
 		list := UnitsFor(d)
 		if list[0] != DefaultUnit(d, false) {

@@ -250,8 +250,18 @@ func (e *eval) liquid() {
 		if !ok {
 			return
 		}
+		props := calc.Water
+		if liq == "seawater" {
+			props = calc.Seawater
+		}
 		psat, err := calc.SaturationPressure(t)
 		if err != nil {
+			// The liquid's own range is narrower than the saturation
+			// line's: quote it, as a temperature above it does.
+			var fe *calc.FieldError
+			if _, lerr := props(t, 1e5); errors.As(lerr, &fe) && fe.Field == "t" {
+				err = lerr
+			}
 			e.failErr("t", err)
 			return
 		}
@@ -262,10 +272,6 @@ func (e *eval) liquid() {
 			}
 			e.warnCalc("liquid", calc.Warn("t", calc.CautionBoilingAtLine, calc.Fig(p, calc.Pressure), calc.Fig(psat, calc.Pressure)))
 			p, from = psat, LiquidSaturation
-		}
-		props := calc.Water
-		if liq == "seawater" {
-			props = calc.Seawater
 		}
 		fl, err := props(t, p)
 		if err != nil {

@@ -141,7 +141,8 @@ func (b *builder) figure(f calc.Figure) string { return b.show(f.Value, f.Dim) }
 func percent(v float64) string { return calc.FormatValue(v, "%", 4) }
 
 // plainNumber writes a dimensionless number for reading at a glance:
-// three significant digits, thousands grouped with thin spaces.
+// three significant digits, thousands grouped with narrow no-break spaces
+// (U+202F; a thin space, U+2009, let a line break inside the number).
 func plainNumber(x float64) string {
 	if math.IsNaN(x) || math.IsInf(x, 0) {
 		return "—"
@@ -157,7 +158,7 @@ func plainNumber(x float64) string {
 	}
 	for i, c := range digits {
 		if i > 0 && (len(digits)-i)%3 == 0 {
-			out.WriteString("\u2009")
+			out.WriteString("\u202f") // narrow no-break space: a line never breaks inside the number
 		}
 		out.WriteRune(c)
 	}

@@ -158,8 +158,25 @@ func (w wording) absolute(f calc.Figure) string {
 }
 
 func (w wording) val() string { return w.ownOf(w.fe.Value) }
-func (w wording) min() string { return w.ownOf(w.fe.Min) }
-func (w wording) max() string { return w.ownOf(w.fe.Max) }
+func (w wording) min() string { return limit(w.ownOf(w.fe.Min)) }
+func (w wording) max() string { return limit(w.ownOf(w.fe.Max)) }
+
+// limit writes a limit without the zeros its figure was padded with:
+// a limit is an exact number ("0.6 m", "0 °C", not "0.6000 m", "0.000 °C").
+func limit(s string) string {
+	num, unit, _ := strings.Cut(s, " ")
+	if !strings.Contains(num, ".") || strings.ContainsAny(num, "eE") {
+		return s
+	}
+	num = strings.TrimRight(strings.TrimRight(num, "0"), ".")
+	if num == "−0" || num == "-0" {
+		num = "0"
+	}
+	if unit == "" {
+		return num
+	}
+	return num + " " + unit
+}
 
 // ownOf words f as own does, "?" when the error lacks it.
 func (w wording) ownOf(f *calc.Figure) string {

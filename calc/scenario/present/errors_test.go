@@ -88,7 +88,9 @@ func TestErrorTextNamesAndUnits(t *testing.T) {
 		{calc.NewFieldError("hsp", calc.Missing).With("pq"), false, "give the " + scenario.Label("pq") + " first"},
 		{calc.NewFieldError("t", calc.OutsideValidity).Got(calc.Fig(400, calc.Temperature)).
 			Within(calc.Fig(273.15, calc.Temperature), calc.Fig(373.15, calc.Temperature)).Because(calc.ReasonWaterProperties), true,
-			"the water temperature must be from 32.00 °F to 212.0 °F; got 260.3 °F"},
+			"the water temperature must be from 32 °F to 212 °F; got 260.3 °F"}, // a limit exact, without padding zeros: 273.15 K = 32 °F and 373.15 K = 212 °F by definition
+		{calc.NewFieldError("d1", calc.OutOfRange).Got(calc.Fig(2.5, calc.Length)).Within(calc.Fig(0.6, calc.Length), calc.Fig(2, calc.Length)), false,
+			"the " + scenario.Label("d1") + " must be from 600 mm to 2000 mm; got " + scenario.ShowParam("d1", 2.5, false)},
 		{calc.NewFieldError("etam", calc.OutOfRange).Got(calc.Num(1.2)).Within(calc.Num(0), calc.Num(1)).Because(calc.ReasonEfficiency), false,
 			"the motor efficiency must be above 0 and at most 100 %; got 120 %"},
 		{calc.NewFieldError("peff", calc.OutOfRange).At(2).Got(calc.Num(0.0052)).Because(calc.ReasonFractionTyped, calc.Num(0.52)), false,
@@ -207,6 +209,25 @@ func TestCautionWords(t *testing.T) {
 	} {
 		if got := WarningText(c.c, c.figs, c.us); got != c.want {
 			t.Errorf("%v (us %v):\n got %q\nwant %q", c.c, c.us, got, c.want)
+		}
+	}
+}
+
+// TestWaterTemperatureLimits: a water temperature below the range quotes
+// the same range as one above it, the liquid's own (0–100 °C, calc.Water's
+// documented range), not the wider saturation line's.
+func TestWaterTemperatureLimits(t *testing.T) {
+	for _, tv := range []string{"-40C", "250C"} {
+		sc := scenario.Demo()
+		if err := sc.Set("t", tv); err != nil {
+			t.Fatal(err)
+		}
+		fe := scenario.Evaluate(scenario.Read(sc)).Errors["t"]
+		if fe == nil {
+			t.Fatalf("t=%s: no error", tv)
+		}
+		if got := ErrorText(fe, false); !strings.Contains(got, "from 0 °C to 100 °C") {
+			t.Errorf("t=%s: %q", tv, got)
 		}
 	}
 }

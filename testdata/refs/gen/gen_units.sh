@@ -104,8 +104,8 @@ h|hr|s|-
 d|day|s|-
 kWh/m³|kWh/m^3|J/m^3|-
 kWh/kgal|kWh/(1000 usgallon)|J/m^3|-
-kWh/(m³·100m)|kWh/(m^3 100 m)|J/m^4|-
-kWh/(kgal·100ft)|kWh/(1000 usgallon 100 ft)|J/m^4|-
+kWh/(m³·100 m)|kWh/(m^3 100 m)|J/m^4|-
+kWh/(kgal·100 ft)|kWh/(1000 usgallon 100 ft)|J/m^4|-
 rpm|1/min|Hz|-
 Hz|Hz|Hz|-
 ROWS
