@@ -260,6 +260,8 @@ func TestUnitLookupAliases(t *testing.T) {
 		"mm2/s": "mm²/s", "cSt": "cSt", "cst": "cSt", "ft2/s": "ft²/s",
 		"hp": "hp", "HP": "hp", "hpE": "hp(E)", "hp(E)": "hp(E)", "kW": "kW", "kw": "kW",
 		"%": "%", "": "",
+		// the spellings before the space in the units of energy per head
+		"kWh/(m³·100m)": "kWh/(m³·100 m)", "kWh/(kgal·100ft)": "kWh/(kgal·100 ft)",
 		"ML/d": "ML/d", "MGD": "MGD", "mgd": "MGD", "cfs": "cfs", "ft³/s": "cfs",
 		"h": "h", "hr": "h", "min": "min",
 	} {
