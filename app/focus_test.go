@@ -19,7 +19,8 @@ import (
 // keyboard alone (WCAG 2.1 SC 2.1.1 Keyboard, 2.4.3 Focus Order): after
 // adding, moving and removing a segment the focus is on the control that
 // belongs to the same segment, or the next sensible one, never dropped to
-// the page; a view opened by a button or a tab is shown from its top with
+// the page (a data-sheet point likewise); a view opened by a button or a
+// tab is shown from its top with
 // the focus on its tab; the picker that adds a fitting adds only on an
 // explicit choice (Enter, or a pick from its list), not for each arrow key
 // that browses it closed, and shows its placeholder again afterwards.
@@ -125,6 +126,22 @@ func TestFocusAfterActions(t *testing.T) {
 	if got := count(); got != before+2 {
 		t.Errorf("a pick from the list made %d fittings, want %d", got, before+2)
 	}
+
+	// The data sheet on the Pump view: a new point's first cell, then the
+	// remove button of the point that takes a removed one's place.
+	press("view-pump", kb.Enter)
+	rows := func() int {
+		n, _ := strconv.Atoi(b.js(`String(document.querySelectorAll("#datasheet tbody tr").length)`))
+		return n
+	}
+	r := rows()
+	press("row-add", kb.Enter)
+	if rows() != r+1 {
+		t.Fatalf("Enter on Add a point made %d rows of %d", rows(), r)
+	}
+	want("adding a data-sheet point", fmt.Sprintf("in-pq-%d", r))
+	press("row-del-2", kb.Enter)
+	want("removing data-sheet point 2", "row-del-2")
 
 	// Views: a button that opens another view, and a tab, from below.
 	press("view-balance", kb.Enter)
