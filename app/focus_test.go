@@ -20,10 +20,10 @@ import (
 // adding, moving and removing a segment the focus is on the control that
 // belongs to the same segment, or the next sensible one, never dropped to
 // the page (a data-sheet point likewise); a view opened by a button or a
-// tab is shown from its top with
-// the focus on its tab; the picker that adds a fitting adds only on an
-// explicit choice (Enter, or a pick from its list), not for each arrow key
-// that browses it closed, and shows its placeholder again afterwards.
+// tab is shown from its top with the focus on its tab; the picker that
+// adds a fitting adds only on an explicit choice (Enter, or a pick from its
+// list), not for each arrow key that browses it closed, and shows its
+// placeholder again afterwards.
 func TestFocusAfterActions(t *testing.T) {
 	site := testSite(t)
 	srv := httptest.NewServer(siteHandler(site, ""))
