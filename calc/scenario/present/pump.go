@@ -150,8 +150,8 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 		}
 		return "+ " + b.head(v)
 	}
-	src := "pressure on the source surface (" + b.absolute(n.PressureHead*b.r.Fluid.Density*calc.StandardGravity) + ")"
-	if b.r.SitePressure > 0 && math.Abs(n.PressureHead*b.r.Fluid.Density*calc.StandardGravity-b.r.SitePressure) < 1 {
+	src := "pressure on the source surface (" + b.absolute(n.SurfacePressure) + ")"
+	if b.r.SitePressure > 0 && math.Abs(n.SurfacePressure-b.r.SitePressure) < 1 {
 		src = "atmosphere on the source surface (site pressure " + b.absolute(b.r.SitePressure) + ")"
 	}
 	static := "source surface above the pump centreline"

@@ -143,7 +143,7 @@ func (b *builder) runCard(seg int) Card {
 			Block{Kind: BlockEmpty}, Block{Kind: BlockEmpty}, b.warnings(nil, "run", "runview", "liquid")}
 		return c
 	}
-	dp := r.TotalLoss * fl.Density * calc.StandardGravity
+	dp := r.PressureDrop
 	a := &Answer{Label: "Lost at " + b.param("q", r.Flow) + ": head, and pressure drop",
 		Values: []Value{{"answer-value", b.head(r.TotalLoss)}, {"run-dp", b.show(dp, calc.Pressure)}},
 		Subs:   []string{"pipe friction " + b.head(r.MajorLoss) + " + fittings " + b.head(r.MinorLoss) + " (ΣK " + calc.FormatNumber(r.SumK, 3) + ")"}}
@@ -163,7 +163,7 @@ func (b *builder) runCard(seg int) Card {
 		rough += " (" + r.Material.Name + ")"
 	}
 	facts := []Fact{
-		{ID: "run-grad", Label: "pipe friction per " + hundred(b.us), Value: b.head(gradient(r) * 100), Key: true},
+		{ID: "run-grad", Label: "pipe friction per " + hundred(b.us), Value: b.head(r.Gradient * 100), Key: true},
 		{ID: "run-v", Label: "mean velocity", Value: b.show(r.Velocity, calc.Velocity)},
 		{ID: "run-re", Label: "Reynolds number and regime", Value: plainNumber(r.Reynolds) + ", " + r.Regime.String() + " flow"},
 		{Label: "Darcy friction factor f", Value: friction},
@@ -195,14 +195,6 @@ func hundred(us bool) string {
 	return "100 m of pipe"
 }
 
-// gradient is the run's pipe-friction loss per length of pipe, m per m.
-func gradient(r *scenario.RunResult) float64 {
-	if r.Diameter <= 0 {
-		return 0
-	}
-	return r.Friction * r.Velocity * r.Velocity / (2 * calc.StandardGravity * r.Diameter)
-}
-
 // runKTable lists the run's fittings with the K used for each at the
 // run's size and the head they lose; an empty block without fittings.
 func (b *builder) runKTable(r *scenario.RunResult) Block {
@@ -214,12 +206,11 @@ func (b *builder) runKTable(r *scenario.RunResult) Block {
 	// A plain grid: names wrap in the answer's narrow column, and on the
 	// narrowest phones each name stands above its three figures.
 	t := &Table{ID: "run-fits", Class: "grid", Head: cols}
-	hv := r.Velocity * r.Velocity / (2 * calc.StandardGravity)
 	for _, k := range r.Fittings {
 		t.Rows = append(t.Rows, Row{Head: fittingName(k.Key), Cells: []Cell{
 			{Text: strconv.Itoa(k.Count), Label: cols[1]},
 			{Text: calc.FormatNumber(k.K, 3), Label: cols[2]},
-			{Text: b.head(float64(k.Count) * k.K * hv), Label: cols[3]},
+			{Text: b.head(k.Head), Label: cols[3]},
 		}})
 	}
 	return Block{Kind: BlockTable, Table: t}
