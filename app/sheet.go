@@ -2,7 +2,6 @@ package main
 
 import (
 	"errors"
-	"strconv"
 	"strings"
 
 	"fieldhead/calc/scenario"
@@ -323,8 +322,7 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 		case "switch":
 			s.d.Switch(a.Param, a.Value)
 		case "seg-move":
-			delta, _ := strconv.Atoi(a.Value)
-			s.d.MoveSegment(a.N, delta)
+			s.d.MoveSegment(a.N, a.Step)
 		case "seg-remove":
 			s.d.RemoveSegment(a.N)
 		case "seg-add":

@@ -378,8 +378,8 @@ func (b *builder) segmentCard(n, count int) Card {
 		}
 	}
 	c := Card{ID: "seg-" + num, Class: "seg", Num: num, Title: "Segment " + num, Controls: []Button{
-		{ID: "seg-up-" + num, Text: "↑", Label: "move segment " + num + " up", Class: "step", Disabled: n == 1, Act: Action{Do: "seg-move", N: n, Value: "-1"}},
-		{ID: "seg-down-" + num, Text: "↓", Label: "move segment " + num + " down", Class: "step", Disabled: n == count, Act: Action{Do: "seg-move", N: n, Value: "+1"}},
+		{ID: "seg-up-" + num, Text: "↑", Label: "move segment " + num + " up", Class: "step", Disabled: n == 1, Act: Action{Do: "seg-move", N: n, Step: -1}},
+		{ID: "seg-down-" + num, Text: "↓", Label: "move segment " + num + " down", Class: "step", Disabled: n == count, Act: Action{Do: "seg-move", N: n, Step: +1}},
 		{ID: "seg-del-" + num, Text: "✕", Label: "remove segment " + num, Class: "step", Confirm: confirm, Act: Action{Do: "seg-remove", N: n}},
 	}}
 	blocks := []Block{fields(b.quantity(p("l"), "", ""), b.quantity(p("z"), "", zHint)), b.toggle(p("pipe"))}

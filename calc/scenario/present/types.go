@@ -130,6 +130,7 @@ type Action struct {
 	Param string // the parameter, group or fitting list acted on
 	Value string // the value chosen, the side, or the fitting key
 	N     int    // a segment number, a row, a step (+1, −1)
+	Step  int    // a segment's move: −1 up, +1 down
 }
 
 // Button is a push button.
