@@ -229,3 +229,25 @@ func TestHighPointAtPumpInlet(t *testing.T) {
 		t.Errorf("warnings %+v", r.Warnings)
 	}
 }
+
+// TestFullFlowTurbulentCrown: a gravity main over a crest 8 m above the
+// supply in turbulent flow. Source: python3-mpmath, the root of the crest
+// crown's pressure p_site + ρg(z1 − hf − V²/2g − z − D/2) = p_v with
+// Colebrook-White friction, testdata/refs/gen/gen_linechecks.py (the
+// case "crest 8 m above the supply" of testdata/cases/ref-highpoint.case).
+func TestFullFlowTurbulentCrown(t *testing.T) {
+	fl := Fluid{Name: "water", Density: 1000, Viscosity: 1e-3, VapourPressure: 2340}
+	b := Balance{Fluid: fl, SitePressure: 101325, In: Point{P: 101325, Z: 100}, Out: Point{P: 101325, Z: 60},
+		Line: &Line{Segments: []Segment{
+			{Run: Run{Length: 2000, Diameter: 0.2, Roughness: 5e-5}, EndZ: 108},
+			{Run: Run{Length: 3000, Diameter: 0.2, Roughness: 5e-5}, EndZ: 60},
+		}}, Unknown: SolveFlow}
+	r, err := b.Solve()
+	if err != nil {
+		t.Fatal(err)
+	}
+	const want = 0.0139932481759755 // m³/s, mpmath
+	if !r.FullFlowKnown || wtRelErr(r.FullFlow, want) > 1e-9 || r.FullFlowErr != nil {
+		t.Errorf("full flow %.15g (known %v, %v), mpmath %.15g", r.FullFlow, r.FullFlowKnown, r.FullFlowErr, want)
+	}
+}
