@@ -140,6 +140,13 @@ const (
 
 	// Reading the inputs.
 	ReasonBothSides // Inconsistent: both ways of giving one value are given (Other names the other side's); give one
+
+	// Loops, heat and control valves.
+	ReasonSeawaterSalinity        // OutOfRange: a seawater salinity (Value, kg/kg) from Min to Max, the seawater correlations' range
+	ReasonNoTemperatureDifference // Inconsistent: the supply and return temperatures (Value) are equal: no heat is carried
+	ReasonValveFactor             // OutOfRange: a valve's FL or xFz (Value) must be above Min (0) and at most Max (1)
+	ReasonValveInletBoils         // BelowLimit: a valve's inlet pressure (Value) must be above the liquid's vapour pressure (Min)
+	ReasonColumnBreaksNoFlow      // NoSolution: the column breaks at a high point even with no flow (Figures[0] the segment), so no flow keeps the pipe full
 	reasonEnd
 )
 
@@ -265,6 +272,11 @@ var reasonNames = [...]string{"none",
 	"run segment",
 	"sizing class",
 	"both sides",
+	"seawater salinity",
+	"no temperature difference",
+	"valve factor",
+	"valve inlet boils",
+	"column breaks no flow",
 }
 
 // countErr reports n items where min to max are accepted (TooFew or
