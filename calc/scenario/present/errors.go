@@ -614,6 +614,25 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 	calc.ReasonRunSegment: func(w wording) string {
 		return "the line has segments " + count(w.fe.Min) + " to " + count(w.fe.Max) + "; pick one of them (got " + quote(w.fe.Input) + ")"
 	},
+	calc.ReasonSeawaterSalinity: func(w wording) string {
+		return "the salinity must be from " + gPerKg(w.fe.Min) + " to " + gPerKg(w.fe.Max) + ", the range the seawater equations are fitted over; got " + gPerKg(w.fe.Value)
+	},
+	calc.ReasonNoTemperatureDifference: func(w wording) string {
+		return "the supply and return temperatures are both " + w.val() + ": a flow carries heat only across a difference of temperature"
+	},
+	calc.ReasonValveFactor: func(w wording) string {
+		return w.subject() + " must be above 0 and at most 1: read it from the valve maker's data sheet" + w.got()
+	},
+	calc.ReasonValveInletBoils: func(w wording) string {
+		return "the pressure at the valve inlet (" + w.val() + ") must be above the liquid's vapour pressure (" + w.min() + ")"
+	},
+	calc.ReasonColumnBreaksNoFlow: func(w wording) string {
+		seg := "?"
+		if f := w.figAt(0); f != nil {
+			seg = plainNumber(f.Value)
+		}
+		return "no flow keeps this line full: even standing still, the pressure at the high point of segment " + seg + " is down to the liquid's vapour pressure"
+	},
 	calc.ReasonSizingClass: func(w wording) string {
 		return quote(w.fe.Input) + " is not a pipe class of the catalogues; choose a schedule or class listed under Schedule or class"
 	},
@@ -945,6 +964,22 @@ func (c cautioning) f(i int) string {
 	return c.w.fig(c.figs[i])
 }
 
+// num words figure i, a plain number (an authority, a ratio).
+func (c cautioning) num(i int) string {
+	if i >= len(c.figs) {
+		return "?"
+	}
+	return plainNumber(c.figs[i].Value)
+}
+
+// gPerKg words a salinity (kg/kg) in g/kg, "?" when the error lacks it.
+func gPerKg(f *calc.Figure) string {
+	if f == nil {
+		return "?"
+	}
+	return plainNumber(f.Value*1000) + " g/kg"
+}
+
 // pc words figure i, a share (0.76), as a percentage.
 func (c cautioning) pc(i int) string {
 	if i >= len(c.figs) {
@@ -969,6 +1004,18 @@ func (c cautioning) npshGuidance(least int) string {
 
 // cautionWords words each caution.
 var cautionWords = map[calc.Caution]func(c cautioning) string{
+	calc.CautionValveAuthorityLow: func(c cautioning) string {
+		return "the control valve's authority is " + c.num(0) + ", below " + c.num(1) + ", the least usually accepted (common practice, from memory): it will control poorly over much of its travel; a valve with a larger drop when fully open raises it"
+	},
+	calc.CautionValveAuthorityBelowAim: func(c cautioning) string {
+		return "the control valve's authority is " + c.num(0) + ", short of the usual aim of about " + c.num(1) + " (common practice, from memory)"
+	},
+	calc.CautionValveChoked: func(c cautioning) string {
+		return "the drop across the control valve (" + c.f(0) + ") reaches the drop at which its flow chokes (" + c.f(1) + ", IEC 60534-2-1): the flow through it cannot rise above " + c.f(2) + " at this opening; expect cavitation, noise and erosion, and ask the valve's maker"
+	},
+	calc.CautionValveCavitation: func(c cautioning) string {
+		return "the drop across the control valve (" + c.f(0) + ") is past the drop at which cavitation begins (" + c.f(1) + ", from the valve's xFz, IEC 60534-2-1): expect noise and wear, and ask the valve's maker"
+	},
 	calc.CautionNoFlow: func(c cautioning) string { return "no flow: all losses are zero" },
 	calc.CautionFittingSizes: func(c cautioning) string {
 		return "inside diameter " + c.f(0) + " is outside the sizes the fitting methods were published for (about " + c.f(1) + "–" + c.f(2) + "): their K values are extrapolated"
