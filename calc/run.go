@@ -80,11 +80,11 @@ type RunResult struct {
 	// f·V²/(2g·D), m per m (the larger bound in transitional flow).
 	Gradient float64
 	// PressureDrop is TotalLoss as a pressure of the liquid, ρ·g·TotalLoss, Pa.
-	PressureDrop float64
-	TotalLoss                 float64 // MajorLoss + MinorLoss (the larger bound in transitional flow)
-	TotalLossLow              float64 // transitional flow: total with the smaller friction bound
-	TotalLossHigh             float64 // transitional flow: total with the larger bound (= TotalLoss)
-	SumK                      float64 // ΣK of the fittings plus ExtraK
+	PressureDrop  float64
+	TotalLoss     float64 // MajorLoss + MinorLoss (the larger bound in transitional flow)
+	TotalLossLow  float64 // transitional flow: total with the smaller friction bound
+	TotalLossHigh float64 // transitional flow: total with the larger bound (= TotalLoss)
+	SumK          float64 // ΣK of the fittings plus ExtraK
 	// Fittings lists the K used for each kind of fitting, in the run's
 	// order: at the run's diameter and Reynolds number (fully turbulent
 	// at zero flow).

@@ -31,7 +31,7 @@ type TurbineResult struct {
 	// StaticInletHead is StaticInlet as a head of the liquid, m.
 	StaticInletHead float64
 	Balance         BalanceResult
-	Warnings    []Warning
+	Warnings        []Warning
 }
 
 // checkTurbineEff validates a turbine efficiency (field "etat").

@@ -102,7 +102,7 @@ type ConvertResult struct {
 	Head     float64 // m of the liquid at its temperature (gauge)
 	// AbsoluteHead is Absolute as a head of the liquid, m (0 without a liquid).
 	AbsoluteHead float64
-	Rows     []ConvertRow
+	Rows         []ConvertRow
 }
 
 // ConvertRow is one line of the conversion table.
