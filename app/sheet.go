@@ -331,6 +331,8 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 			s.d.AddRow()
 		case "row-remove":
 			s.d.RemoveRow(a.N)
+		case "keep":
+			s.d.Keep(a.Param)
 		case "fit-step":
 			s.d.StepFitting(a.Param, a.Value, a.N)
 		default:

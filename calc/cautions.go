@@ -97,7 +97,6 @@ const (
 
 	// The liquid.
 	CautionBoilingAtLine    // the water boils at the pressure taken for its properties (Figures[0], absolute); taken at the saturation pressure Figures[1]
-	CautionGlycolSlip       // a glycol share Figures[0] (a share) protects against almost no frost; Figures[1] the share probably meant
 	CautionGlycolBoiling    // the glycol mix boils at the site pressure; its properties are taken at its vapour pressure
 	CautionGlycolInhibitors // commercial glycols differ from the pure mixes computed
 
@@ -195,7 +194,6 @@ var cautionNames = [...]string{"text",
 	"surge column parts",
 	"surge dv above flow",
 	"boiling at line",
-	"glycol slip",
 	"glycol boiling",
 	"glycol inhibitors",
 	"glycol extrapolated",

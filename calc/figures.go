@@ -30,7 +30,6 @@ var cautionFigureDims = map[Caution][]Dimension{
 	CautionFittingSizes:           {Length, Length, Length},
 	CautionFlowOffSheet:           {Flow, Flow, Flow},
 	CautionGlycolExtrapolated:     {Temperature, Temperature},
-	CautionGlycolSlip:             {Dimensionless, Dimensionless},
 	CautionHazenSmallPipe:         {Length},
 	CautionHeadNotPositive:        {Length},
 	CautionHighPointAir:           {Dimensionless, Dimensionless, Length, Length, Length},
@@ -68,6 +67,7 @@ var cautionFigureDims = map[Caution][]Dimension{
 }
 
 var reasonFigureDims = map[Reason][]Dimension{
+	ReasonAccuracySlip:       {Dimensionless},
 	ReasonColumnBreaksNoFlow: {Dimensionless},
 	ReasonBoils:              {Temperature},
 	ReasonBulkModulus:        {Pressure},

@@ -139,7 +139,9 @@ const (
 	ReasonSizingClass  // UnknownChoice: Input is not a pipe class of any catalogue
 
 	// Reading the inputs.
-	ReasonBothSides // Inconsistent: both ways of giving one value are given (Other names the other side's); give one
+	ReasonBothSides    // Inconsistent: both ways of giving one value are given (Other names the other side's); give one
+	ReasonUnitSlip     // OutOfRange: Input (the number typed) in Choices[0] is Value, implausibly small for the field: Choices[1] was probably meant
+	ReasonAccuracySlip // OutOfRange: an accuracy (Value, a share) finer than any field instrument's; Figures[0] the share probably meant
 
 	// Loops, heat and control valves.
 	ReasonSeawaterSalinity        // OutOfRange: a seawater salinity (Value, kg/kg) from Min to Max, the seawater correlations' range
@@ -272,6 +274,8 @@ var reasonNames = [...]string{"none",
 	"run segment",
 	"sizing class",
 	"both sides",
+	"unit slip",
+	"accuracy slip",
 	"seawater salinity",
 	"no temperature difference",
 	"valve factor",

@@ -151,11 +151,54 @@ func compose(param, text, unit string) string {
 	return num + unit
 }
 
-// set stores text as param's value and reports whether it changed.
+// set stores text as param's value and reports whether it changed. A
+// value kept as typed (Keep) that changes is no longer kept: the new one
+// is judged afresh.
 func (d *Draft) set(param, text string) bool {
 	before := d.Scen.Get(param)
 	_ = d.Scen.Set(param, text)
-	return d.Scen.Get(param) != before
+	changed := d.Scen.Get(param) != before
+	if changed && param != KeepParam {
+		d.markKept(param, false)
+	}
+	return changed
+}
+
+// Keep keeps param's value as typed though it looks like a slip (a 415 Pa
+// gauge reading, a 0.02 % meter): the link lists it under keep, and the
+// value is taken as it stands until it changes.
+func (d *Draft) Keep(param string) {
+	d.endEdit()
+	d.markKept(param, true)
+}
+
+// markKept adds param to the keep list, or takes it off.
+func (d *Draft) markKept(param string, on bool) {
+	var names []string
+	found := false
+	for _, n := range strings.Split(d.Scen.Get(KeepParam), ",") {
+		n = strings.TrimSpace(n)
+		switch {
+		case n == "":
+		case n == param:
+			found = true
+			if on {
+				names = append(names, n)
+			}
+		default:
+			names = append(names, n)
+		}
+	}
+	if on && !found {
+		if _, _, ok := Lookup(param); !ok {
+			return
+		}
+		names = append(names, param)
+	}
+	if !on && !found {
+		return
+	}
+	_ = d.Scen.Set(KeepParam, strings.Join(names, ","))
 }
 
 // PickUnit sets the unit of param's box; a unit typed in the box gives way

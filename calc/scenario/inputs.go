@@ -141,6 +141,7 @@ func Read(s Scenario) Inputs {
 		in.View = v.Text
 	}
 	r.pressureRefs()
+	r.slips()
 	r.groups()
 	r.lookups()
 	r.counts()
@@ -322,16 +323,6 @@ func ownLimits(base, text string, v Value) *calc.FieldError {
 	case "cr":
 		if !(v.SI > 0 && v.SI <= 2) {
 			return calc.NewFieldError(base, calc.OutOfRange).Got(calc.Num(v.SI)).Within(calc.Num(0), calc.Num(2)).Because(calc.ReasonRestraint)
-		}
-	case "etam", "etat":
-		if meant, slip := calc.FractionSlip(v.SI); slip {
-			return calc.NewFieldError(base, calc.OutOfRange).Got(calc.Num(v.SI)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
-		}
-	case "peff":
-		for i, x := range v.List {
-			if meant, slip := calc.FractionSlip(x); slip {
-				return calc.NewFieldError(base, calc.OutOfRange).At(i+1).Got(calc.Num(x)).Because(calc.ReasonFractionTyped, calc.Num(meant/100))
-			}
 		}
 	}
 	return nil

@@ -191,6 +191,9 @@ var Table = []Param{
 	q("epipe", "wall's elastic modulus", "Wall's elastic modulus", "(blank: from the material)", calc.Pressure, "GPa", "ksi", "enter the elastic modulus of the pipe wall"),
 	q("kliq", "liquid's bulk modulus", "Liquid's bulk modulus", "(blank for water and seawater)", calc.Pressure, "GPa", "ksi", "enter the liquid's bulk modulus"),
 	{Name: "cr", Label: "restraint factor", Box: "Restraint factor c", Hint: "(blank: 1, expansion joints throughout)", Kind: KindNumber},
+
+	// The values kept as typed though they look like slips (slips.go).
+	{Name: KeepParam, Label: "values kept as typed", Kind: KindText},
 }
 
 func q(name, label, box, hint string, dim calc.Dimension, si, us, missing string) Param {

@@ -312,8 +312,13 @@ func (b *builder) field(p string, kind FieldKind, label, hint string) Field {
 	if hint == "" {
 		hint = row.Hint
 	}
-	return Field{Param: p, Kind: kind, ID: "in-" + DomID(p), Label: label, Hint: hint,
+	f := Field{Param: p, Kind: kind, ID: "in-" + DomID(p), Label: label, Hint: hint,
 		Placeholder: row.Placeholder, Error: b.problem(p), Warn: b.warnsAbout(p)}
+	if scenario.Slippable(b.r.Errors[p]) {
+		f.Keep = &Button{ID: "keep-" + DomID(p), Text: "Keep as typed", Label: "keep the " + scenario.Label(p) + " as typed", Class: "act",
+			Act: Action{Do: "keep", Param: p}}
+	}
+	return f
 }
 
 // quantity is the box and unit picker of a value; when p is the balance's

@@ -577,6 +577,16 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 	calc.ReasonFlowTwice: func(w wording) string {
 		return "this reading's flow (" + w.val() + ") is that of reading " + w.figs(0) + ": give each flow once, or drop one of the two"
 	},
+	calc.ReasonUnitSlip: func(w wording) string {
+		typed, meant := w.fe.Input, "?"
+		if len(w.fe.Choices) == 2 {
+			typed, meant = w.fe.Input+" "+w.fe.Choices[0], w.fe.Input+" "+w.fe.Choices[1]
+		}
+		return typed + " is only " + w.val() + ", far less than any " + label(w.fe.Field) + ": did you mean " + meant + "? If " + typed + " is right, keep it as typed"
+	},
+	calc.ReasonAccuracySlip: func(w wording) string {
+		return "an accuracy of ±" + shareOf(w.fe.Value) + " is finer than any field instrument's: a fraction was probably typed into the percentage box; did you mean ±" + shareOf(w.figAt(0)) + "? If it is right, keep it as typed"
+	},
 	calc.ReasonBothSides: func(w wording) string {
 		return "give one of " + w.subject() + " or the " + label(w.fe.Other) + ", not both: switch to the one you mean and clear the other"
 	},
@@ -1203,9 +1213,6 @@ var cautionWords = map[calc.Caution]func(c cautioning) string{
 	},
 	calc.CautionBoilingAtLine: func(c cautioning) string {
 		return "the water is at or above its boiling point at the pressure taken for its properties (" + c.abs(0) + "); they are taken at the saturation pressure (" + c.abs(1) + ")"
-	},
-	calc.CautionGlycolSlip: func(c cautioning) string {
-		return "a glycol share of " + c.sh(0) + " protects against almost no frost: if a fraction was typed, the share meant is probably " + c.sh(1)
 	},
 	calc.CautionGlycolBoiling: func(c cautioning) string {
 		return "the glycol mix is at or above its boiling point at the site pressure; its properties are taken at its vapour pressure"

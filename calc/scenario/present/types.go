@@ -114,6 +114,7 @@ type Field struct {
 	Numeric     bool
 	Options     []Option // the unit picker (FieldQuantity) or the choices (FieldPicker, FieldRef)
 	Error       string   // why the value cannot be used, worded, "" when fine
+	Keep        *Button  // keeps a value that looks like a slip as typed; nil unless it does
 	Warn        bool     // a warning about the results names this value
 	Solved      string   // FieldSolved: the answer
 }
@@ -126,7 +127,7 @@ type Option struct {
 
 // Action is what a button does to the sheet.
 type Action struct {
-	Do    string // choose, switch, seg-move, seg-remove, seg-add, row-add, row-remove, fit-step
+	Do    string // choose, switch, seg-move, seg-remove, seg-add, row-add, row-remove, fit-step, keep
 	Param string // the parameter, group or fitting list acted on
 	Value string // the value chosen, the side, or the fitting key
 	N     int    // a segment number, a row, a step (+1, −1)
