@@ -408,7 +408,7 @@ func (b *builder) dataSheetCard() Card {
 		}
 		cells[c.param] = vs
 		f := b.field(c.param, FieldPlain, "Data-sheet "+c.name+" ("+c.param+"), comma separated, unit after the last", "")
-		f.Box, _ = b.d.Box(c.param)
+		f.Box = b.d.Typed(c.param)
 		if b.d.Edit == c.param {
 			f.Box = b.d.Text
 		}
