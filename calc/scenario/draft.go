@@ -73,6 +73,10 @@ func (d *Draft) Box(param string) (box, unit string) {
 	return box, unit
 }
 
+// View is the view the sheet is open on, as its link names it ("" none):
+// the page's state, not an input of the results.
+func (d *Draft) View() string { return strings.TrimSpace(d.Scen.Get("view")) }
+
 // Typed is param's value as the person typed it (kept whole in the
 // scenario), for a record of the inputs; "" when blank.
 func (d *Draft) Typed(param string) string { return d.Scen.Get(param) }

@@ -83,7 +83,7 @@ func Build(d *scenario.Draft, r scenario.Result) Sheet {
 
 // view is the view the scenario opens on.
 func (b *builder) view() string {
-	v := b.in.Choice("view")
+	v := b.d.View()
 	for _, w := range Views {
 		if w.Key == v {
 			return v
