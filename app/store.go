@@ -19,7 +19,9 @@ const (
 	dbStore   = "sheets"
 )
 
-// record is one kept sheet.
+// record is one kept sheet. Edited is when it was last edited, carried
+// through sheets files (scenario.KeptSheet); 0 when not known (a sheet
+// imported from a file of the older form, which gave no edit time).
 type record struct {
 	ID, Title, Link, Answer string
 	Created, Edited         float64 // ms since 1970
