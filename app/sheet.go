@@ -339,7 +339,7 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 			if !strings.HasPrefix(a.Do, "book-") {
 				return
 			}
-			if sc := s.bk.act(a, s.d.US()); sc != nil {
+			if sc := s.bk.act(a); sc != nil {
 				s.adopt(*sc, "")
 				return
 			}

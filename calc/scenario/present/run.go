@@ -163,7 +163,7 @@ func (b *builder) runCard(seg int) Card {
 		rough += " (" + r.Material.Name + ")"
 	}
 	facts := []Fact{
-		{ID: "run-grad", Label: "pipe friction per " + hundred(b.us), Value: b.head(r.Gradient * 100), Key: true},
+		{ID: "run-grad", Label: "pipe friction per " + hundred(b.us), Value: b.perHundred(r.Gradient), Key: true},
 		{ID: "run-v", Label: "mean velocity", Value: b.show(r.Velocity, calc.Velocity)},
 		{ID: "run-re", Label: "Reynolds number and regime", Value: plainNumber(r.Reynolds) + ", " + r.Regime.String() + " flow"},
 		{Label: "Darcy friction factor f", Value: friction},
@@ -185,6 +185,13 @@ func perHundred(us bool) string { return "per " + strings.TrimSuffix(hundred(us)
 // short writes a default for a hint: two significant digits.
 func (b *builder) short(v float64, dim calc.Dimension) string {
 	return calc.FormatValue(v, calc.DefaultUnit(dim, b.us).Symbol, 2)
+}
+
+// perHundred writes a friction gradient (m per m) as the head lost over
+// 100 of the sheet's length unit, in that unit: 0.005 is 0.5 m per 100 m
+// and 0.5 ft per 100 ft (not 100 m's head written in ft).
+func (b *builder) perHundred(gradient float64) string {
+	return b.head(gradient * 100 * calc.DefaultUnit(calc.Length, b.us).Factor)
 }
 
 // hundred is "100 m" or "100 ft" of pipe.
@@ -325,7 +332,7 @@ func (b *builder) sizingTable(rv *scenario.RunView, sz *scenario.Sizing) Block {
 			{Text: b.param("d", row.Pipe.ID), Label: cols[2]},
 			{Text: b.show(r.Velocity, calc.Velocity), Label: cols[3]},
 			{Text: plainNumber(r.Reynolds), Label: cols[4]},
-			{Text: b.head(row.Gradient * 100), Label: cols[5]},
+			{Text: b.perHundred(row.Gradient), Label: cols[5]},
 			{Text: b.head(r.TotalLoss), Label: cols[6]},
 		}})
 	}
