@@ -142,6 +142,7 @@ const (
 	ReasonBothSides    // Inconsistent: both ways of giving one value are given (Other names the other side's); give one
 	ReasonUnitSlip     // OutOfRange: Input (the number typed) in Choices[0] is Value, implausibly small for the field: Choices[1] was probably meant
 	ReasonAccuracySlip // OutOfRange: an accuracy (Value, a share) finer than any field instrument's; Figures[0] the share probably meant
+	ReasonDamagedValue // NotANumber: the value (Input) holds a line break or another control character no link writes: damaged in transit
 
 	// Loops, heat and control valves.
 	ReasonSeawaterSalinity        // OutOfRange: a seawater salinity (Value, kg/kg) from Min to Max, the seawater correlations' range
@@ -276,6 +277,7 @@ var reasonNames = [...]string{"none",
 	"both sides",
 	"unit slip",
 	"accuracy slip",
+	"damaged value",
 	"seawater salinity",
 	"no temperature difference",
 	"valve factor",

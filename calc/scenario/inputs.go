@@ -5,6 +5,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"unicode"
 
 	"fieldhead/calc"
 )
@@ -187,6 +188,13 @@ func (r *reader) read(name, text string) Value {
 	}
 	t := strings.TrimSpace(text)
 	v := Value{Text: t}
+	if strings.IndexFunc(text, unicode.IsControl) >= 0 {
+		// Kept verbatim for its box; never read (a line break inside
+		// "flow meter" is damage, not a value).
+		r.bad(name, calc.NotANumber).Typed(strconv.QuoteToASCII(text)).Because(calc.ReasonDamagedValue)
+		v.Bad = true
+		return v
+	}
 	var err error
 	switch p.Kind {
 	case KindQuantity:

@@ -587,6 +587,9 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 	calc.ReasonAccuracySlip: func(w wording) string {
 		return "an accuracy of ±" + shareOf(w.fe.Value) + " is finer than any field instrument's: a fraction was probably typed into the percentage box; did you mean ±" + shareOf(w.figAt(0)) + "? If it is right, keep it as typed"
 	},
+	calc.ReasonDamagedValue: func(w wording) string {
+		return "this value holds a line break or another character no link writes (" + w.fe.Input + "): the link was probably damaged on its way, by a chat or mail program; check it against the sender's and type it again"
+	},
 	calc.ReasonBothSides: func(w wording) string {
 		return "give one of " + w.subject() + " or the " + label(w.fe.Other) + ", not both: switch to the one you mean and clear the other"
 	},
