@@ -88,6 +88,9 @@ func notes(s *sheet, x present.Field) []app.UI {
 		out = append(out, app.P().ID("err-"+present.DomID(x.Param)).Class("msg err").Attr("role", "alert").Body(
 			app.Span().Class("tag").Text("Check"), app.Text(" "+x.Error)))
 	}
+	if x.Suspect != "" {
+		out = append(out, app.P().Class("msg warn suspect").Body(app.Span().Class("tag").Text("Check"), app.Text(" "+x.Suspect)))
+	}
 	if x.Keep != nil {
 		out = append(out, app.P().Class("msg keep").Body(button(s, *x.Keep)))
 	}

@@ -28,7 +28,23 @@ type Draft struct {
 	// not be used, SurveyNotes what PasteProfile said of it (see there).
 	Survey      string
 	SurveyNotes []string
+	// Unverified is set for a sheet opened from a link that arrived
+	// damaged: every figure is shown unverified until the person confirms
+	// the values (Verify). Suspect lists the values the link's check names
+	// as possibly altered (DamagedLink.Suspect).
+	Unverified bool
+	Suspect    []string
 }
+
+// Damaged marks the sheet as opened from a damaged link (d from Parse):
+// unverified, with the values its check suspects.
+func (d *Draft) Damaged(dl *DamagedLink) {
+	d.Unverified, d.Suspect = true, append([]string(nil), dl.Suspect...)
+}
+
+// Verify records that the person checked the values of a sheet opened
+// from a damaged link: its figures are shown as answers again.
+func (d *Draft) Verify() { d.Unverified, d.Suspect = false, nil }
 
 // NewDraft starts editing sc with nothing held aside.
 func NewDraft(sc Scenario) Draft { return Draft{Scen: sc} }

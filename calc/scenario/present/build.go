@@ -8,6 +8,7 @@ package present
 
 import (
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -78,6 +79,11 @@ func Build(d *scenario.Draft, r scenario.Result) Sheet {
 		sh.Cards = b.balanceView()
 	}
 	sh.Others = b.others(sh.View)
+	if d.Unverified {
+		sh.Unverified = "This sheet came from a link that arrived damaged, so no figure on it can be trusted yet. " +
+			"Check the values marked at their boxes (and any the banner names) against the sender's, then confirm them."
+		sh.Verify = Button{ID: "verify", Text: "The values are right", Label: "confirm that the values are the sender's", Class: "act", Act: Action{Do: "verify"}}
+	}
 	return sh
 }
 
@@ -314,6 +320,9 @@ func (b *builder) field(p string, kind FieldKind, label, hint string) Field {
 	}
 	f := Field{Param: p, Kind: kind, ID: "in-" + DomID(p), Label: label, Hint: hint,
 		Placeholder: row.Placeholder, Error: b.problem(p), Warn: b.warnsAbout(p)}
+	if b.d.Unverified && slices.Contains(b.d.Suspect, p) {
+		f.Suspect = "this value may have been altered on the way (the link's check names it): check it against the sender's"
+	}
 	if scenario.Slippable(b.r.Errors[p]) {
 		f.Keep = &Button{ID: "keep-" + DomID(p), Text: "Keep as typed", Label: "keep the " + scenario.Label(p) + " as typed", Class: "act",
 			Act: Action{Do: "keep", Param: p}}

@@ -20,6 +20,11 @@ type Sheet struct {
 	Others   []string
 	Cautions []string
 	Methods  []Method
+	// Unverified says, for a sheet opened from a damaged link, that every
+	// figure is unverified and what to do; "" for a sound sheet. Verify
+	// confirms the values.
+	Unverified string
+	Verify     Button
 }
 
 // Card is one card of a view.
@@ -115,6 +120,7 @@ type Field struct {
 	Options     []Option // the unit picker (FieldQuantity) or the choices (FieldPicker, FieldRef)
 	Error       string   // why the value cannot be used, worded, "" when fine
 	Keep        *Button  // keeps a value that looks like a slip as typed; nil unless it does
+	Suspect     string   // the damaged link's check names this value as possibly altered, worded; "" otherwise
 	Warn        bool     // a warning about the results names this value
 	Solved      string   // FieldSolved: the answer
 }
