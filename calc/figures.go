@@ -9,13 +9,26 @@ package calc
 
 // FigureDims lists the dimensions of the figures a warning of this
 // caution carries, in order; nil for none.
-func (c Caution) FigureDims() []Dimension { return cautionFigureDims[c] }
+func (c Caution) FigureDims() []Dimension {
+	if int(c) < len(cautionFigureDims) {
+		return cautionFigureDims[c]
+	}
+	return nil
+}
 
 // FigureDims lists the dimensions of the figures an error of this reason
 // carries after its named ones (Value, Min, Max), in order; nil for none.
-func (r Reason) FigureDims() []Dimension { return reasonFigureDims[r] }
+func (r Reason) FigureDims() []Dimension {
+	if int(r) < len(reasonFigureDims) {
+		return reasonFigureDims[r]
+	}
+	return nil
+}
 
-var cautionFigureDims = map[Caution][]Dimension{
+// The tables are arrays indexed by code, laid out as data (a map is built
+// by code at start-up).
+
+var cautionFigureDims = [...][]Dimension{
 	CautionValveAuthorityLow:      {Dimensionless, Dimensionless},
 	CautionValveAuthorityBelowAim: {Dimensionless, Dimensionless},
 	CautionValveChoked:            {Pressure, Pressure, Flow},
@@ -66,7 +79,7 @@ var cautionFigureDims = map[Caution][]Dimension{
 	CautionWireLow:                {Dimensionless, Dimensionless},
 }
 
-var reasonFigureDims = map[Reason][]Dimension{
+var reasonFigureDims = [...][]Dimension{
 	ReasonAccuracySlip:       {Dimensionless},
 	ReasonColumnBreaksNoFlow: {Dimensionless},
 	ReasonBoils:              {Temperature},

@@ -325,7 +325,7 @@ func count(f *calc.Figure) string {
 
 // text words the error: its reason's wording, else its kind's.
 func (w wording) text() string {
-	if r, ok := reasonWords[w.fe.Reason]; ok && w.fe.Reason != calc.ReasonNone {
+	if r := reasonWording(w.fe.Reason); r != nil && w.fe.Reason != calc.ReasonNone {
 		return r(w)
 	}
 	return w.kindText()
@@ -425,7 +425,18 @@ func (w wording) kindText() string {
 }
 
 // reasonWords words the specific cases.
-var reasonWords = map[calc.Reason]func(w wording) string{
+// reasonWording is the wording of reason r, nil for none.
+func reasonWording(r calc.Reason) func(w wording) string {
+	if int(r) < len(reasonWords) {
+		return reasonWords[r]
+	}
+	return nil
+}
+
+// reasonWords and cautionWords are arrays indexed by the code, not maps:
+// the compiler lays them out as data, where a map of this size is built by
+// code at start-up (tens of KB of the wasm).
+var reasonWords = [...]func(w wording) string{
 	calc.ReasonGrouping: func(w wording) string {
 		return w.expected() + "; " + quote(w.fe.Input) + " has more than one separator; write the digits without grouping, e.g. 1250.5"
 	},
@@ -948,10 +959,10 @@ func WarningText(c calc.Caution, figs []calc.Figure, us bool) string {
 // warningText is WarningText on a sheet open on view, where a pointer to
 // another view words the place on this one instead.
 func warningText(c calc.Caution, figs []calc.Figure, us bool, view string) string {
-	cw, ok := cautionWords[c]
-	if !ok {
+	if int(c) >= len(cautionWords) || cautionWords[c] == nil {
 		return ""
 	}
+	cw := cautionWords[c]
 	return cw(cautioning{figs: figs, w: wording{fe: &calc.FieldError{}, us: us}, view: view})
 }
 
@@ -1016,7 +1027,7 @@ func (c cautioning) npshGuidance(least int) string {
 }
 
 // cautionWords words each caution.
-var cautionWords = map[calc.Caution]func(c cautioning) string{
+var cautionWords = [...]func(c cautioning) string{
 	calc.CautionValveAuthorityLow: func(c cautioning) string {
 		return "the control valve's authority is " + c.num(0) + ", below " + c.num(1) + ", the least usually accepted (common practice, from memory): it will control poorly over much of its travel; a valve with a larger drop when fully open raises it"
 	},
