@@ -132,9 +132,9 @@ func (bk *book) card() present.Card {
 }
 
 // act handles the site book's buttons; a sheet to open is returned (its
-// id is then the open one's), nil otherwise. us is the unit system of the
-// results table.
-func (bk *book) act(a present.Action, us bool) *scenario.Scenario {
+// id is then the open one's), nil otherwise. The results table's unit
+// system is the button's (a.Value "us" or "si"), never the open sheet's.
+func (bk *book) act(a present.Action) *scenario.Scenario {
 	find := func(id string) (record, bool) {
 		for _, r := range bk.kept {
 			if r.ID == id {
@@ -193,25 +193,50 @@ func (bk *book) act(a present.Action, us bool) *scenario.Scenario {
 			bk.state.Selected = map[string]bool{}
 		}
 		bk.state.Selected[a.Value] = !bk.state.Selected[a.Value]
-	case "book-export", "book-csv":
-		var scens []scenario.Scenario
-		for _, r := range bk.kept {
-			if len(bk.state.Selected) == 0 || bk.state.Selected[r.ID] || noneSelected(bk) {
-				if sc, err := scenario.Parse(r.Link); err == nil {
-					scens = append(scens, sc)
-				}
-			}
-		}
-		day := time.Now().Format("2006-01-02")
-		if a.Do == "book-export" {
-			note := "Fieldhead sheets · " + strconv.Itoa(len(scens)) + " · exported " + time.Now().Format("2006-01-02 15:04") +
-				" · one per line: title, a tab, the link"
-			download("fieldhead-sheets-"+day+".txt", "text/plain;charset=utf-8", scenario.WriteSheets(note, scens))
-		} else {
-			download("fieldhead-results-"+day+".csv", "text/csv;charset=utf-8", present.ResultsCSV(scens, us))
-		}
+	case "book-export":
+		now := time.Now()
+		download("fieldhead-sheets-"+now.Format("2006-01-02")+".txt", "text/plain;charset=utf-8", bk.sheetsFile(now))
+	case "book-csv":
+		us := a.Value == "us"
+		download("fieldhead-results-"+map[bool]string{true: "us", false: "si"}[us]+"-"+time.Now().Format("2006-01-02")+".csv",
+			"text/csv;charset=utf-8", bk.resultsTable(us))
 	}
 	return nil
+}
+
+// chosen are the sheets to export, newest first: those selected, or all
+// when none is, each with its edit time (zero when not known).
+func (bk *book) chosen() []scenario.KeptSheet {
+	var out []scenario.KeptSheet
+	for _, r := range bk.kept {
+		if len(bk.state.Selected) == 0 || bk.state.Selected[r.ID] || noneSelected(bk) {
+			if sc, err := scenario.Parse(r.Link); err == nil {
+				out = append(out, scenario.KeptSheet{Scen: sc, Edited: editedTime(r.Edited)})
+			}
+		}
+	}
+	return out
+}
+
+// sheetsFile is the sheets file of the chosen sheets, exported at now.
+func (bk *book) sheetsFile(now time.Time) string {
+	kept := bk.chosen()
+	note := "Fieldhead sheets · " + strconv.Itoa(len(kept)) + " · exported " + now.Format("2006-01-02 15:04") +
+		" · one per line: title, a tab, the link, a tab, when it was last edited"
+	return scenario.WriteKept(note, kept)
+}
+
+// resultsTable is the results table of the chosen sheets, in US customary
+// units or SI (present.ResultsCSV): the same text `-eval` writes from
+// their sheets file.
+func (bk *book) resultsTable(us bool) string { return present.ResultsCSV(bk.chosen(), us) }
+
+// editedTime is a record's edit time (ms since 1970), zero when not known.
+func editedTime(ms float64) time.Time {
+	if ms <= 0 {
+		return time.Time{}
+	}
+	return time.UnixMilli(int64(ms)).UTC()
 }
 
 func noneSelected(bk *book) bool {
@@ -223,13 +248,16 @@ func noneSelected(bk *book) bool {
 	return true
 }
 
-// sortKept puts the kept sheets newest first.
+// sortKept puts the kept sheets newest first; those whose edit time is
+// not known (0) last, in the order they came.
 func sortKept(rs []record) {
-	sort.Slice(rs, func(i, j int) bool { return rs[i].Edited > rs[j].Edited })
+	sort.SliceStable(rs, func(i, j int) bool { return rs[i].Edited > rs[j].Edited })
 }
 
 // importSheets adds the sheets of a sheets file: a sheet already kept
-// (same link) is not added twice; bad lines are reported by number.
+// (same link) is not added twice; bad lines are reported by number. Each
+// keeps the edit time its line gives (not known, 0, on an older file's
+// line), not the time of the import.
 func (bk *book) importSheets(text string) {
 	lines, bad := scenario.ReadSheets(text)
 	added, same := 0, 0
@@ -245,9 +273,13 @@ func (bk *book) importSheets(text string) {
 			same++
 			continue
 		}
+		var edited float64
+		if !l.Edited.IsZero() {
+			edited = float64(l.Edited.UnixMilli())
+		}
 		r := record{ID: newID(), Title: strings.TrimSpace(l.Scen.Get("name")), Link: l.Scen.Sign(),
-			Answer: present.Headline(l.Scen, scenario.Evaluate(scenario.Read(l.Scen))), Created: nowMs(), Edited: nowMs()}
-		bk.kept = append([]record{r}, bk.kept...)
+			Answer: present.Headline(l.Scen, scenario.Evaluate(scenario.Read(l.Scen))), Created: nowMs(), Edited: edited}
+		bk.kept = append(bk.kept, r)
 		if bk.db != nil {
 			storePut(bk.db, r, func(problem string) {
 				if problem != "" {
@@ -257,6 +289,7 @@ func (bk *book) importSheets(text string) {
 		}
 		added++
 	}
+	sortKept(bk.kept)
 	bk.state.Notice = present.ImportNotice(added, same, bad)
 }
 

@@ -48,11 +48,30 @@ func hasString(list []string, s string) bool {
 	return false
 }
 
+// savedFile clicks the button sel and waits for the one file the page
+// saves into dir under a name matching pattern; its path and bytes.
+func savedFile(t *testing.T, b *tab, sel, dir, pattern string) (string, []byte) {
+	t.Helper()
+	b.js(fmt.Sprintf(`(document.querySelector(%q).click(), "")`, sel))
+	for deadline := time.Now().Add(10 * time.Second); time.Now().Before(deadline); time.Sleep(100 * time.Millisecond) {
+		if m, _ := filepath.Glob(filepath.Join(dir, pattern)); len(m) == 1 {
+			data, err := os.ReadFile(m[0])
+			if err != nil {
+				t.Fatal(err)
+			}
+			return m[0], data
+		}
+	}
+	t.Fatalf("%s saved no file %s", sel, pattern)
+	return "", nil
+}
+
 // TestSiteBook: sheets are kept on the device and nothing is lost — edit
 // sheet A, open a link to B, and A is still in the book with its edit; New
 // sheet and Demo keep everything; delete and undo; a sheets file saved from
 // the book and added in a fresh profile gives the same sheets; with the
-// store blocked the sheet still computes and says it cannot be kept.
+// store blocked the sheet still computes and says it cannot be kept. The
+// results table the page saves is -eval's on the saved sheets file.
 // (This project's rules for kept sheets; the sheets file format is
 // scenario.WriteSheets'.)
 func TestSiteBook(t *testing.T) {
@@ -112,24 +131,26 @@ func TestSiteBook(t *testing.T) {
 		Behavior: browser.SetDownloadBehaviorBehaviorAllow, DownloadPath: dir}); err != nil {
 		t.Fatal(err)
 	}
-	b.js(`(document.querySelector("#book-export").click(), "")`)
-	var file string
-	for deadline := time.Now().Add(10 * time.Second); time.Now().Before(deadline) && file == ""; time.Sleep(100 * time.Millisecond) {
-		m, _ := filepath.Glob(filepath.Join(dir, "fieldhead-sheets-*.txt"))
-		if len(m) == 1 {
-			file = m[0]
-		}
-	}
-	if file == "" {
-		t.Fatal("no sheets file was saved")
-	}
-	text, err := os.ReadFile(file)
-	if err != nil {
-		t.Fatal(err)
-	}
+	file, text := savedFile(t, b, "#book-export", dir, "fieldhead-sheets-*.txt")
 	lines, bad := scenario.ReadSheets(string(text))
 	if len(bad) > 0 || len(lines) != len(before) {
 		t.Errorf("the sheets file holds %d sheets (%v bad) for %d kept", len(lines), bad, len(before))
+	}
+	for _, l := range lines {
+		if l.Edited.IsZero() {
+			t.Errorf("line %d of the sheets file has no edit time", l.Line)
+		}
+	}
+
+	// The results table in US units, as the page saves it (the Blob's
+	// bytes), is the one -eval writes from the sheets file, byte for byte.
+	_, saved := savedFile(t, b, "#book-csv-us", dir, "fieldhead-results-us-*.csv")
+	var evalOut, evalErrs strings.Builder
+	if err := evalCSV(file, true, &evalOut, &evalErrs); err != nil {
+		t.Fatal(err)
+	}
+	if string(saved) != evalOut.String() || !strings.HasPrefix(string(saved), "\uFEFF") {
+		t.Errorf("the page's results table differs from -eval's:\n%q\nwant\n%q", saved, evalOut.String())
 	}
 
 	c := newTab(t)
@@ -149,6 +170,19 @@ func TestSiteBook(t *testing.T) {
 	}
 	if !strings.Contains(c.text("#book-notice"), "Added") {
 		t.Errorf("no notice of what was added: %q", c.text("#book-notice"))
+	}
+	if strings.Contains(c.text("main"), "edit time not known") {
+		t.Error("a sheet added from the file lost its edit time")
+	}
+	if err := chromedp.Do(c.ctx, chromedp.EmulateViewport(768, 1024), chromedp.Sleep(300*time.Millisecond)); err != nil {
+		t.Fatal(err)
+	}
+	full, err := chromedp.Run(c.ctx, chromedp.FullScreenshot(100))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if err := os.WriteFile(filepath.Join(c.shots, "site-book-768.png"), full, 0o644); err != nil {
+		t.Fatal(err)
 	}
 
 	// The store blocked: the sheet computes and says it cannot be kept.

@@ -339,4 +339,30 @@ func TestDamagedLinks(t *testing.T) {
 		t.Errorf("the &amp; link shows %q (want %q) or a banner", got, answer)
 	}
 	b.shot("damaged-link")
+
+	// A chat broke a line inside a value: the value stays in its box,
+	// flagged there, the banner names it, and no figure reads as an answer
+	// until the values are confirmed.
+	broken := strings.Replace(signed, "s2.fit=gate", "s2.fit=ga%0Ate", 1)
+	onLine := long.Clone()
+	_ = onLine.Set("view", "line")
+	b.navigate(srv.URL + "/?" + strings.Replace(onLine.Sign(), "s2.fit=gate", "s2.fit=ga%0Ate", 1))
+	if !b.jsBool(`document.querySelector("#unverified") !== null && document.querySelector("#sheet.unverified") !== null`) {
+		t.Error("a damaged link's sheet is not marked unverified")
+	}
+	if got := b.text("#link-error"); !strings.Contains(got, "(s2.fit)") {
+		t.Errorf("the banner does not name the damaged value: %q", got)
+	}
+	if got := b.js(`(document.querySelector("#err-s2-fit") || {textContent: "none"}).textContent`); !strings.Contains(got, "line break") {
+		t.Errorf("the damaged fittings are not flagged at their box: %q", got)
+	}
+	b.navigate(srv.URL + "/?" + broken)
+	if got := b.js(`getComputedStyle(document.querySelector("#answer-value")).textDecorationLine`); got != "line-through" {
+		t.Errorf("the headline of an unverified sheet is drawn as an answer (text-decoration %q)", got)
+	}
+	b.shot("damaged-link-unverified")
+	b.js(`(document.querySelector("#verify").click(), "")`)
+	if !b.poll(`document.querySelector("#unverified") === null`, 5*time.Second) {
+		t.Error("confirming the values left the sheet unverified")
+	}
 }

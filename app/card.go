@@ -164,7 +164,7 @@ func button(s *sheet, b present.Button) app.UI {
 		el = el.Text(b.Text)
 	}
 	a := b.Act
-	return el.OnClick(s.onConfirmed(a, b.Confirm), app.EventScope(a.Do, a.Param, a.Value, a.N))
+	return el.OnClick(s.onConfirmed(a, b.Confirm), app.EventScope(a.Do, a.Param, a.Value, a.N, a.Step))
 }
 
 // answer draws a card's headline figure, or why there is none.

@@ -133,6 +133,16 @@ func (s *sheet) linkProblem() app.UI {
 	)
 }
 
+// unverified says that a sheet from a damaged link has no trusted figure
+// yet, with the button that confirms its values; it prints too.
+func (s *sheet) unverified() app.UI {
+	if s.vm.Unverified == "" {
+		return nil
+	}
+	return app.Div().Class("banner unverified-note").ID("unverified").Attr("role", "alert").Body(
+		app.Span().Class("tag").Text("Unverified"), app.Text(" "+s.vm.Unverified+" "), button(s, s.vm.Verify))
+}
+
 // storeBanner says when sheets cannot be kept on this device.
 func (s *sheet) storeBanner() app.UI {
 	if s.bk.problem == "" || s.vm.View == "book" {

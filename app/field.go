@@ -31,14 +31,14 @@ func (f *field) Render() (ui app.UI) {
 				OnClick(f.S.onAct(present.Action{Do: "choose", Param: x.Param, Value: o.Value}), app.EventScope(x.Param, o.Value)))
 		}
 		return app.Div().Class("ref").Body(append([]app.UI{
-			app.Div().Class("segs small").Attr("role", "group").Aria("label", x.Label).Body(btns...)}, notes(x)...)...)
+			app.Div().Class("segs small").Attr("role", "group").Aria("label", x.Label).Body(btns...)}, notes(f.S, x)...)...)
 	case present.FieldSolved:
 		return app.Div().Class("field is-unknown").ID("f-" + present.DomID(x.Param)).Body(append([]app.UI{
 			app.Div().Class("lbl").Text(x.Label),
 			app.Div().Class("solved").ID("solved-"+x.Param).Body(
 				app.Span().Class("tag").Text("Unknown"),
 				app.Span().Class("solved-val").Text(x.Solved)),
-		}, notes(x)...)...)
+		}, notes(f.S, x)...)...)
 	}
 	bad := x.Error != ""
 	var body []app.UI
@@ -76,17 +76,23 @@ func (f *field) Render() (ui app.UI) {
 				&selectBox{ID: "unit-" + present.DomID(x.Param), Class: "unit", Label: "unit of " + x.Label, Options: x.Options, Param: x.Param, Unit: true, S: f.S})}
 		}
 	}
-	body = append(body, notes(x)...)
+	body = append(body, notes(f.S, x)...)
 	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + present.DomID(x.Param)).Body(body...)
 }
 
 // notes draws a field's problem beside it, and a pointer to the warnings
 // when one is about its value.
-func notes(x present.Field) []app.UI {
+func notes(s *sheet, x present.Field) []app.UI {
 	var out []app.UI
 	if x.Error != "" {
 		out = append(out, app.P().ID("err-"+present.DomID(x.Param)).Class("msg err").Attr("role", "alert").Body(
 			app.Span().Class("tag").Text("Check"), app.Text(" "+x.Error)))
+	}
+	if x.Suspect != "" {
+		out = append(out, app.P().Class("msg warn suspect").Body(app.Span().Class("tag").Text("Check"), app.Text(" "+x.Suspect)))
+	}
+	if x.Keep != nil {
+		out = append(out, app.P().Class("msg keep").Body(button(s, *x.Keep)))
 	}
 	if x.Warn {
 		out = append(out, app.P().Class("msg warn").Body(

@@ -2,7 +2,6 @@ package main
 
 import (
 	"errors"
-	"strconv"
 	"strings"
 
 	"fieldhead/calc/scenario"
@@ -70,6 +69,10 @@ func newSheet() app.Composer {
 		s.damaged = errors.As(err, &d) && u.RawQuery != ""
 		sc, msg = keepSavedSheet(sc, msg, u.RawQuery != "")
 		s.adopt(sc, msg)
+		if s.damaged {
+			s.d.Damaged(d)
+			s.build() // worded again, unverified
+		}
 	}
 	s.loaded = true
 	s.wide = chartWidth()
@@ -325,8 +328,7 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 		case "switch":
 			s.d.Switch(a.Param, a.Value)
 		case "seg-move":
-			delta, _ := strconv.Atoi(a.Value)
-			s.d.MoveSegment(a.N, delta)
+			s.d.MoveSegment(a.N, a.Step)
 		case "seg-remove":
 			s.d.RemoveSegment(a.N)
 		case "seg-add":
@@ -335,13 +337,17 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 			s.d.AddRow()
 		case "row-remove":
 			s.d.RemoveRow(a.N)
+		case "keep":
+			s.d.Keep(a.Param)
+		case "verify":
+			s.d.Verify()
 		case "fit-step":
 			s.d.StepFitting(a.Param, a.Value, a.N)
 		default:
 			if !strings.HasPrefix(a.Do, "book-") {
 				return
 			}
-			if sc := s.bk.act(a, s.d.US()); sc != nil {
+			if sc := s.bk.act(a); sc != nil {
 				s.adopt(*sc, "")
 				return
 			}
@@ -359,6 +365,9 @@ func (s *sheet) Render() (ui app.UI) {
 	s.testPanic("render")
 	vm := &s.vm
 	root, lay, pre := app.Div().ID("sheet").Class("sheet view-"+vm.View), s.layout(), func(d app.HTMLDiv) app.HTMLDiv { return d }
+	if vm.Unverified != "" {
+		root = root.Class("unverified")
+	}
 	h1 := vm.Name + " — Fieldhead"
 	if !s.loaded { // the site writer's copy: shown, its boxes and buttons inert until the wasm draws (loader.go)
 		root, pre, h1 = root.Class("prerendered"), func(d app.HTMLDiv) app.HTMLDiv { return d.Attr("inert", true) }, "Fieldhead"
@@ -370,6 +379,7 @@ func (s *sheet) Render() (ui app.UI) {
 		app.Div().Class("notices").Body(s.faultBanner(), s.updateBanner(), s.storeBanner()), // always there: a notice must not move the inputs
 		pre(app.Div().Class("titlerow")).Attr("role", "region").Aria("label", "sheet").Body(&field{S: s, F: vm.Title}, s.shareRow()),
 		s.linkProblem(),
+		s.unverified(),
 		app.Main().Body(
 			app.H1().Class("sr").Text(h1),
 			app.Div().Class("notices").Body(others(vm.Others)), // a stable slot: the list appearing must not re-create the inputs

@@ -19,7 +19,9 @@ const (
 	dbStore   = "sheets"
 )
 
-// record is one kept sheet.
+// record is one kept sheet. Edited is when it was last edited, carried
+// through sheets files (scenario.KeptSheet); 0 when not known (a sheet
+// imported from a file of the older form, which gave no edit time).
 type record struct {
 	ID, Title, Link, Answer string
 	Created, Edited         float64 // ms since 1970
@@ -155,10 +157,14 @@ func storeDelete(db app.Value, id string, done func(problem string)) {
 	tx.Set("onabort", once(func(app.Value) { done("the sheet could not be deleted: " + errorName(tx)) }))
 }
 
-// download offers text as a file of the given name and type.
+// download offers text as a file of the given name and type. The text
+// goes over as bytes: a Go string reaches JavaScript through a TextDecoder,
+// which drops a leading byte-order mark (the results table's).
 func download(name, mime, text string) {
 	defer func() { _ = recover() }()
-	blob := app.Window().Get("Blob").New([]any{text}, map[string]any{"type": mime})
+	bytes := app.Window().Get("Uint8Array").New(len(text))
+	app.CopyBytesToJS(bytes, []byte(text))
+	blob := app.Window().Get("Blob").New([]any{bytes}, map[string]any{"type": mime})
 	u := app.Window().Get("URL").Call("createObjectURL", blob)
 	a := app.Window().Get("document").Call("createElement", "a")
 	a.Set("href", u)

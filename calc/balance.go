@@ -150,10 +150,13 @@ type BalanceResult struct {
 	// HighPoints are the stretches of the line where the HGL falls below
 	// the pipe crown or the vapour-pressure line, one per stretch. When
 	// the column breaks at one and FullFlowKnown is true, FullFlow is the
-	// largest flow the line carries full, m³/s (see Balance.fullFlow).
+	// largest flow the line carries full, m³/s (see Balance.fullFlow);
+	// when the column breaks and FullFlowKnown is false, FullFlowErr (a
+	// *FieldError naming "q") says why that flow is not known.
 	HighPoints    []HighPoint
 	FullFlow      float64
 	FullFlowKnown bool
+	FullFlowErr   error
 	// PumpAfter is the pump's place on the line as used for the profile.
 	PumpAfter int
 

@@ -97,12 +97,17 @@ const (
 
 	// The liquid.
 	CautionBoilingAtLine    // the water boils at the pressure taken for its properties (Figures[0], absolute); taken at the saturation pressure Figures[1]
-	CautionGlycolSlip       // a glycol share Figures[0] (a share) protects against almost no frost; Figures[1] the share probably meant
 	CautionGlycolBoiling    // the glycol mix boils at the site pressure; its properties are taken at its vapour pressure
 	CautionGlycolInhibitors // commercial glycols differ from the pure mixes computed
 
 	// A glycol mix above the source's tables.
 	CautionGlycolExtrapolated // the mix at Figures[0] is above Figures[1], where Melinder's (2010) tables stop: its properties are the fits extrapolated
+
+	// Control valves.
+	CautionValveAuthorityLow      // the valve's authority Figures[0] (a share) is below the usual minimum Figures[1] (common practice)
+	CautionValveAuthorityBelowAim // the valve's authority Figures[0] (a share) is below the usual aim Figures[1] (common practice)
+	CautionValveChoked            // the drop Figures[0] across the valve reaches the choked drop Figures[1]: the flow is limited to Figures[2] (IEC 60534-2-1)
+	CautionValveCavitation        // the drop Figures[0] reaches the incipient-cavitation drop Figures[1] = xFz·(p1 − pv) (IEC 60534-2-1)
 	cautionEnd
 )
 
@@ -189,10 +194,13 @@ var cautionNames = [...]string{"text",
 	"surge column parts",
 	"surge dv above flow",
 	"boiling at line",
-	"glycol slip",
 	"glycol boiling",
 	"glycol inhibitors",
 	"glycol extrapolated",
+	"valve authority low",
+	"valve authority below aim",
+	"valve choked",
+	"valve cavitation",
 }
 
 // Warn builds a Warning about field of caution c quoting figs.

@@ -19,17 +19,18 @@ const (
 // definitions of NIST SP 811):
 //
 //   - Kv is the flow of water in m³/h that passes with a pressure drop of
-//     1 bar (10⁵ Pa), the water at a density of 1000 kg/m³;
+//     1 bar (10⁵ Pa);
 //   - Cv is the flow of water in US gallons per minute that passes with a
-//     drop of 1 psi, the water taken at the same reference density.
+//     drop of 1 psi.
 //
-// So Cv = Kv · (m³/h in gpm) · sqrt(psi in bar) = 1.156…·Kv.
+// So Cv = Kv · (m³/h in gpm) · sqrt(psi in bar) = 1.156…·Kv. Another
+// liquid's drop scales with its relative density ρ1/ρ0, ρ0 the density of
+// water at 15 °C (IEC 60534-2-1; ValveRefDensity).
 const (
 	kvFlowUnit   = 1.0 / 3600                               // m³/s in one m³/h
 	kvDropUnit   = 1e5                                      // Pa in one bar
 	cvFlowUnit   = 231 * 0.0254 * 0.0254 * 0.0254 / 60      // m³/s in one US gal/min (231 in³ exactly)
 	cvDropUnit   = 0.45359237 * 9.80665 / (0.0254 * 0.0254) // Pa in one psi (lbf/in²)
-	valveRefRho  = 1000.0                                   // kg/m³, the reference density of the definitions
 	componentMax = 1e9                                      // bound on a given coefficient, flow or drop (SI)
 )
 
@@ -56,9 +57,10 @@ func KvFromCv(cv float64) float64 {
 // not the valve's rated one). Its drop, from the definition of Kv
 // (IEC 60534-1) and the sizing equation for incompressible, non-choked
 // turbulent flow (IEC 60534-2-1, piping geometry factor 1: a valve of the
-// pipe's size; the equation's form and the reference density of
-// 1000 kg/m³ in both standards are from memory), is Δp = 1 bar · (Q/(Kv m³/h))² · ρ/(1000 kg/m³). Choked
-// flow and cavitation in the valve are not checked.
+// pipe's size; the equation's form from memory, checked against
+// python3-fluids), is Δp = 1 bar · (Q/(Kv m³/h))² · ρ/ρ0, ρ0 = 999.10 kg/m³
+// the density of water at 15 °C (ValveRefDensity). Choked flow and
+// cavitation in the valve are checked by CheckValveLiquid, not here.
 type Component struct {
 	Name      string
 	Kind      ComponentKind
@@ -137,7 +139,7 @@ func (c Component) Loss(rho, q float64) (ComponentLoss, error) {
 		}
 	case ComponentValve:
 		r := q / (c.Kv * kvFlowUnit)
-		out.Pressure = kvDropUnit * r * r * rho / valveRefRho
+		out.Pressure = kvDropUnit * r * r * rho / ValveRefDensity()
 		out.Head = out.Pressure / rhog
 	}
 	return out, nil

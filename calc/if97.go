@@ -147,7 +147,7 @@ func if97Region1Properties(tK, pPa float64) if97Region1Props {
 		h:  rt * g.tau * g.gt,
 		u:  rt * (g.tau*g.gt - g.pi*g.gp),
 		s:  if97R * (g.tau*g.gt - g.g),
-		cp: -if97R * g.tau * g.tau * g.gtt,
+		cp: -if97R * g.tau * g.tau * g.gtt, // as if97Region1HeatCapacityCore
 		w:  math.Sqrt(rt * g.gp * g.gp / (d*d/(g.tau*g.tau*g.gtt) - g.gpp)),
 	}
 }
@@ -167,17 +167,45 @@ func if97Region1DensityCore(tK, pPa float64) float64 {
 // Outside it the result is a *FieldError naming "t" or "p"; nothing is
 // extrapolated.
 func IF97Region1Density(tK, pPa float64) (float64, error) {
+	if err := if97Region1Check(tK, pPa); err != nil {
+		return 0, err
+	}
+	return if97Region1DensityCore(tK, pPa), nil
+}
+
+// IF97Region1HeatCapacity returns the specific isobaric heat capacity cp
+// of liquid water in J/(kg·K) from the same fundamental equation,
+// cp = −R·τ²·γ_ττ (IF97 Table 3), for temperature tK in kelvin and
+// absolute pressure pPa in pascals. Range and errors as
+// IF97Region1Density. cp is finite throughout region 1; it rises steeply
+// only near 350 °C, close to the critical point.
+func IF97Region1HeatCapacity(tK, pPa float64) (float64, error) {
+	if err := if97Region1Check(tK, pPa); err != nil {
+		return 0, err
+	}
+	return if97Region1HeatCapacityCore(tK, pPa), nil
+}
+
+// if97Region1HeatCapacityCore is cp from region 1 without range checks.
+func if97Region1HeatCapacityCore(tK, pPa float64) float64 {
+	g := if97Region1Gibbs(tK, pPa)
+	return -if97R * g.tau * g.tau * g.gtt
+}
+
+// if97Region1Check refuses a state outside region 1 with a *FieldError
+// naming "t" or "p".
+func if97Region1Check(tK, pPa float64) error {
 	if math.IsNaN(tK) || tK < if97Tmin || tK > if97R1Tmax {
-		return 0, NewFieldError("t", OutsideValidity).Got(Fig(tK, Temperature)).Within(Fig(if97Tmin, Temperature), Fig(if97R1Tmax, Temperature)).Because(ReasonIF97)
+		return NewFieldError("t", OutsideValidity).Got(Fig(tK, Temperature)).Within(Fig(if97Tmin, Temperature), Fig(if97R1Tmax, Temperature)).Because(ReasonIF97)
 	}
 	if math.IsNaN(pPa) || pPa <= 0 || pPa > if97R1Pmax {
-		return 0, NewFieldError("p", AboveLimit).Got(Fig(pPa, Pressure)).AtMost(Fig(if97R1Pmax, Pressure)).Because(ReasonIF97)
+		return NewFieldError("p", AboveLimit).Got(Fig(pPa, Pressure)).AtMost(Fig(if97R1Pmax, Pressure)).Because(ReasonIF97)
 	}
 	ps := if97SaturationPressureCore(tK)
 	if tK <= if97Tcrit && pPa < ps {
-		return 0, NewFieldError("p", BelowLimit).Got(Fig(pPa, Pressure)).AtLeast(Fig(ps, Pressure)).Because(ReasonBoils, Fig(tK, Temperature))
+		return NewFieldError("p", BelowLimit).Got(Fig(pPa, Pressure)).AtLeast(Fig(ps, Pressure)).Because(ReasonBoils, Fig(tK, Temperature))
 	}
-	return if97Region1DensityCore(tK, pPa), nil
+	return nil
 }
 
 // if97Region4 holds the coefficients n1…n10 of the IF97 saturation equation

@@ -18,9 +18,11 @@ type HighPoint struct {
 	// BelowCrown is how far the HGL lies below the pipe crown (the pipe's
 	// elevation plus half its inside diameter), m; ≤ 0 when it does not.
 	BelowCrown float64
-	// Pressure is the absolute pressure in the pipe there, Pa, from the
-	// HGL. Where Breaks is true it is not a pressure the liquid can hold
-	// (it may be below zero): show it as "below the vapour pressure".
+	// Pressure is the absolute pressure at the pipe's crown there, Pa,
+	// from the HGL (the lowest in the cross-section; at the line's two
+	// ends, whose elevations are points 1 and 2, the pressure at that
+	// elevation). Where Breaks is true it is not a pressure the liquid can
+	// hold (it may be below zero): show it as "below the vapour pressure".
 	Pressure float64
 	// Breaks is true when Pressure is at or below the vapour pressure (or
 	// zero): the liquid column breaks there.
@@ -66,24 +68,39 @@ func (b Balance) gradeNodes(in PointState, hp float64, lr *LineResult) []Profile
 	return nodes
 }
 
+// crown is the height of the pipe's crown above node n's elevation, half
+// the inside diameter, or 0 at the line's two ends (total its length):
+// their elevations are those of points 1 and 2, often a tank's surface
+// rather than the pipe.
+func (b Balance) crown(n ProfileNode, total float64) float64 {
+	if n.Distance == 0 || n.Distance == total || n.Segment < 1 {
+		return 0
+	}
+	return b.Line.Segments[n.Segment-1].Diameter / 2
+}
+
 // highPoints finds the high points of a profile (nodes as gradeNodes builds
-// them; point 1, nodes[0], is checked by the balance itself). The crown is
-// not checked at the line's two ends: their elevations are those of points
-// 1 and 2, often a tank's surface rather than the pipe.
+// them; point 1, nodes[0], is checked by the balance itself). Both checks
+// take the crown, where the pressure in a full pipe is lowest: the HGL
+// below it (sub-atmospheric) and the pressure there at or below the vapour
+// pressure (the column breaks). The centreline would put the break half a
+// diameter of head too late: the unsafe side.
 func (b Balance) highPoints(nodes []ProfileNode, pumpHead float64) []HighPoint {
 	pv := b.Fluid.VapourPressure
+	rhog := b.Fluid.Density * StandardGravity
 	total := b.Line.Length()
 	var out []HighPoint
 	in := false
 	for k := 1; k < len(nodes); k++ {
 		n := nodes[k]
 		seg := n.Segment
-		d := b.Line.Segments[seg-1].Diameter
-		below := n.Z + d/2 - n.HGL
-		if n.Distance == 0 || n.Distance == total {
+		c := b.crown(n, total)
+		below := n.Z + c - n.HGL
+		if c == 0 {
 			below = 0
 		}
-		breaks := n.Pressure <= pv || n.Pressure <= 0
+		p := n.Pressure - rhog*c
+		breaks := p <= pv || p <= 0
 		if below <= 0 && !breaks {
 			in = false
 			continue
@@ -92,7 +109,7 @@ func (b Balance) highPoints(nodes []ProfileNode, pumpHead float64) []HighPoint {
 		// pair (k odd), its end otherwise; the node a pump after the last
 		// segment adds is that segment's end too.
 		hp := HighPoint{Segment: seg, AtEnd: k%2 == 0 || k > 2*len(b.Line.Segments), Distance: n.Distance, Z: n.Z,
-			BelowCrown: below, Pressure: n.Pressure, Breaks: breaks}
+			BelowCrown: below, Pressure: p, Breaks: breaks}
 		hp.AtPump = pumpHead > 0 && k%2 == 0 && k <= 2*len(b.Line.Segments) && seg == b.PumpAfter
 		if !in {
 			out = append(out, hp)
@@ -100,7 +117,7 @@ func (b Balance) highPoints(nodes []ProfileNode, pumpHead float64) []HighPoint {
 			continue
 		}
 		last := &out[len(out)-1]
-		if n.Pressure < last.Pressure {
+		if p < last.Pressure {
 			*last = hp
 		}
 		last.Breaks = last.Breaks || breaks
@@ -109,18 +126,29 @@ func (b Balance) highPoints(nodes []ProfileNode, pumpHead float64) []HighPoint {
 }
 
 // fullFlow returns the largest flow the line carries with the pipe full
-// (no node at or below the vapour pressure), with point 1's total head and
-// the pump head held as in r and the surplus head at smaller flows taken
-// up at point 2 (a throttling valve at the outlet): the flow at which the
-// lowest pressure along the line equals the vapour pressure, by Brent's
-// method over [0, r.Q]. The pressure at every node falls as the flow rises
-// (more friction upstream, more velocity head), so the root is unique. ok
-// is false when even no flow keeps the column whole (a high point above
-// the static level from point 1 less the vapour head) or when the flow
-// cannot be bracketed.
-func (b Balance) fullFlow(r *BalanceResult) (q float64, ok bool) {
+// (no node's crown at or below the vapour pressure, as highPoints checks),
+// with point 1's total head and the pump head held as in r and the surplus
+// head at smaller flows taken up at point 2 (a throttling valve at the
+// outlet): the flow at which the lowest crown pressure along the line
+// equals the vapour pressure, by Brent's method over [0, r.Q]. The
+// pressure at every node falls as the flow rises (more friction upstream,
+// more velocity head), so the root is unique.
+//
+// Errors, as *FieldError naming "q": NoSolution with
+// ReasonColumnBreaksNoFlow when even no flow keeps the column whole (a
+// high point above the static level from point 1 less the vapour head;
+// Figures[0] the segment of the lowest crown pressure); NotPositive when
+// r.Q is not above zero; NotConverged when the root cannot be found; or
+// the error of evaluating the line at a smaller flow.
+func (b Balance) fullFlow(r *BalanceResult) (float64, error) {
+	if !(r.Q > 0) {
+		return 0, NewFieldError("q", NotPositive).Got(Fig(r.Q, Flow))
+	}
 	pv := math.Max(b.Fluid.VapourPressure, 0)
+	rhog := b.Fluid.Density * StandardGravity
+	total := b.Line.Length()
 	var evalErr error
+	lowest := 0 // the segment of the lowest crown pressure at the last flow tried
 	f := func(q float64) float64 {
 		lr, err := b.Line.Evaluate(b.Fluid, q)
 		if err != nil {
@@ -130,22 +158,27 @@ func (b Balance) fullFlow(r *BalanceResult) (q float64, ok bool) {
 		nodes := b.gradeNodes(r.In, r.PumpHead, &lr)
 		pmin := math.Inf(1)
 		for _, n := range nodes[1:] {
-			pmin = math.Min(pmin, n.Pressure)
+			if p := n.Pressure - rhog*b.crown(n, total); p < pmin {
+				pmin, lowest = p, n.Segment
+			}
 		}
 		return pmin - pv
 	}
-	if !(r.Q > 0) {
-		return 0, false
+	if f0 := f(0); evalErr == nil && f0 <= 0 {
+		return 0, NewFieldError("q", NoSolution).Because(ReasonColumnBreaksNoFlow, Num(float64(lowest)))
 	}
 	q, err := brent(f, 0, r.Q, r.Q*1e-12)
-	if err != nil || evalErr != nil {
-		return 0, false
+	switch {
+	case evalErr != nil:
+		return 0, evalErr
+	case err != nil:
+		return 0, NewFieldError("q", NotConverged).Got(Fig(r.Q, Flow))
 	}
-	return q, true
+	return q, nil
 }
 
 // highPointWarnings words one warning per high point, and the full-pipe
-// flow when the column breaks (fq, fok as fullFlow returns them).
+// flow fq when the column breaks and fok (fullFlow found it).
 func highPointWarnings(hps []HighPoint, q, fq float64, fok bool) []Warning {
 	var out []Warning
 	for _, hp := range hps {

@@ -37,7 +37,7 @@ func lineAlpha(mode AlphaMode, rr *RunResult) float64 {
 // profile builds the EGL/HGL profile of a balance with a line, from the
 // solved result r (point heads, pump head) and the line evaluated at the
 // solution's flow. It sets r.HighPoints (see HighPoint) and, when the
-// column breaks at one, r.FullFlow (see fullFlow), and words one warning
+// column breaks at one, r.FullFlow or r.FullFlowErr (see fullFlow), and words one warning
 // per high point.
 //
 // The first node is point 1 itself. Each segment then has a node at its
@@ -56,10 +56,10 @@ func (b Balance) profile(r *BalanceResult, lr *LineResult) ([]ProfileNode, []War
 	for _, hp := range r.HighPoints {
 		broken = broken || hp.Breaks
 	}
-	fok := false
 	if broken {
-		r.FullFlow, fok = b.fullFlow(r)
-		r.FullFlowKnown = fok
+		var err error
+		r.FullFlow, err = b.fullFlow(r)
+		r.FullFlowKnown, r.FullFlowErr = err == nil, err
 	}
-	return nodes, highPointWarnings(r.HighPoints, r.Q, r.FullFlow, fok)
+	return nodes, highPointWarnings(r.HighPoints, r.Q, r.FullFlow, r.FullFlowKnown)
 }

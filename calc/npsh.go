@@ -62,6 +62,9 @@ type NPSHResult struct {
 	// for a suction lift), the suction losses and the vapour pressure.
 	// Available = PressureHead + StaticHead − LossHead − VapourHead.
 	PressureHead, StaticHead, LossHead, VapourHead float64
+	// SurfacePressure is the absolute pressure on the source surface, Pa
+	// (PressureHead's pressure).
+	SurfacePressure float64
 
 	Available float64 // NPSHa, m
 	Required  float64 // NPSHr, m (0 when not given)
@@ -103,7 +106,7 @@ func NPSH(fl Fluid, in NPSHInput) (NPSHResult, error) {
 		return NPSHResult{}, NewFieldError("npshr", Negative).Got(Fig(in.NPSHr, Length))
 	}
 	rg := fl.Density * StandardGravity
-	r := NPSHResult{Required: in.NPSHr, PressureHead: in.SurfacePressure / rg, StaticHead: in.SurfaceZ - in.PumpZ,
+	r := NPSHResult{Required: in.NPSHr, SurfacePressure: in.SurfacePressure, PressureHead: in.SurfacePressure / rg, StaticHead: in.SurfaceZ - in.PumpZ,
 		LossHead: in.SuctionLoss, VapourHead: fl.VapourPressure / rg}
 	r.Available = (in.SurfacePressure-fl.VapourPressure)/rg + in.SurfaceZ - in.PumpZ - in.SuctionLoss
 	minMargin := Fig(NPSHMarginMin, Length)

@@ -139,7 +139,17 @@ const (
 	ReasonSizingClass  // UnknownChoice: Input is not a pipe class of any catalogue
 
 	// Reading the inputs.
-	ReasonBothSides // Inconsistent: both ways of giving one value are given (Other names the other side's); give one
+	ReasonBothSides    // Inconsistent: both ways of giving one value are given (Other names the other side's); give one
+	ReasonUnitSlip     // OutOfRange: Input (the number typed) in Choices[0] is Value, implausibly small for the field: Choices[1] was probably meant
+	ReasonAccuracySlip // OutOfRange: an accuracy (Value, a share) finer than any field instrument's; Figures[0] the share probably meant
+	ReasonDamagedValue // NotANumber: the value (Input) holds a line break or another control character no link writes: damaged in transit
+
+	// Loops, heat and control valves.
+	ReasonSeawaterSalinity        // OutOfRange: a seawater salinity (Value, kg/kg) from Min to Max, the seawater correlations' range
+	ReasonNoTemperatureDifference // Inconsistent: the supply and return temperatures (Value) are equal: no heat is carried
+	ReasonValveFactor             // OutOfRange: a valve's FL or xFz (Value) must be above Min (0) and at most Max (1)
+	ReasonValveInletBoils         // BelowLimit: a valve's inlet pressure (Value) must be above the liquid's vapour pressure (Min)
+	ReasonColumnBreaksNoFlow      // NoSolution: the column breaks at a high point even with no flow (Figures[0] the segment), so no flow keeps the pipe full
 	reasonEnd
 )
 
@@ -265,6 +275,14 @@ var reasonNames = [...]string{"none",
 	"run segment",
 	"sizing class",
 	"both sides",
+	"unit slip",
+	"accuracy slip",
+	"damaged value",
+	"seawater salinity",
+	"no temperature difference",
+	"valve factor",
+	"valve inlet boils",
+	"column breaks no flow",
 }
 
 // countErr reports n items where min to max are accepted (TooFew or

@@ -38,6 +38,9 @@ type FittingK struct {
 	Method  string  // "Crane TP-410", "Hooper 2-K", "fixed" or "given"
 	Formula string  // e.g. "K = 8·f_T"; for a given K, "K = 0.12"
 	Source  string  // the table's source; empty for a given K
+	// Head is the head all Count of them lose at the run's velocity,
+	// Count·K·V²/(2g), m (RunResult.Fittings only; 0 at zero flow).
+	Head float64
 }
 
 // Run is one straight pipe run of constant inside diameter with its
@@ -72,10 +75,16 @@ type RunResult struct {
 	FrictionLow, FrictionHigh float64 // bounds in transitional flow; equal to Friction otherwise
 	MajorLoss                 float64 // pipe friction, f·(L/D)·V²/(2g)
 	MinorLoss                 float64 // fittings, ΣK·V²/(2g)
-	TotalLoss                 float64 // MajorLoss + MinorLoss (the larger bound in transitional flow)
-	TotalLossLow              float64 // transitional flow: total with the smaller friction bound
-	TotalLossHigh             float64 // transitional flow: total with the larger bound (= TotalLoss)
-	SumK                      float64 // ΣK of the fittings plus ExtraK
+	VelocityHead              float64 // V²/(2g), m
+	// Gradient is the head lost to pipe friction per length of pipe,
+	// f·V²/(2g·D), m per m (the larger bound in transitional flow).
+	Gradient float64
+	// PressureDrop is TotalLoss as a pressure of the liquid, ρ·g·TotalLoss, Pa.
+	PressureDrop  float64
+	TotalLoss     float64 // MajorLoss + MinorLoss (the larger bound in transitional flow)
+	TotalLossLow  float64 // transitional flow: total with the smaller friction bound
+	TotalLossHigh float64 // transitional flow: total with the larger bound (= TotalLoss)
+	SumK          float64 // ΣK of the fittings plus ExtraK
 	// Fittings lists the K used for each kind of fitting, in the run's
 	// order: at the run's diameter and Reynolds number (fully turbulent
 	// at zero flow).
@@ -312,7 +321,10 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	}
 	hv := v * v / (2 * StandardGravity)
 	ld := r.Length / r.Diameter
-	res.MinorLoss = sumK * hv
+	res.MinorLoss, res.VelocityHead = sumK*hv, hv
+	for i := range res.Fittings {
+		res.Fittings[i].Head = float64(res.Fittings[i].Count) * res.Fittings[i].K * hv
+	}
 
 	switch res.Regime {
 	case Laminar:
@@ -357,13 +369,15 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	}
 	res.MajorLoss = res.Friction * ld * hv
 	res.TotalLoss = res.MajorLoss + res.MinorLoss
+	res.Gradient = res.Friction * hv / r.Diameter
+	res.PressureDrop = res.TotalLoss * fl.Density * StandardGravity
 	res.TotalLossLow = res.FrictionLow*ld*hv + res.MinorLoss
 	res.TotalLossHigh = res.FrictionHigh*ld*hv + res.MinorLoss
 	switch {
 	case v < RunVelocityLow:
-		res.Warnings = append(res.Warnings, Warn("q", CautionVelocityLow, Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
+		res.Warnings = append(res.Warnings, Warn("q", CautionVelocityLow, Fig(v, Velocity), Fig(RunVelocityLow, Velocity), Fig(RunVelocityHigh, Velocity)))
 	case v > RunVelocityHigh:
-		res.Warnings = append(res.Warnings, Warn("q", CautionVelocityHigh, Fig(v, Velocity), Fig(0.3, Velocity), Fig(3, Velocity)))
+		res.Warnings = append(res.Warnings, Warn("q", CautionVelocityHigh, Fig(v, Velocity), Fig(RunVelocityLow, Velocity), Fig(RunVelocityHigh, Velocity)))
 	}
 	return res, nil
 }

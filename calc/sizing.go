@@ -97,7 +97,7 @@ func SizeRun(r Run, fl Fluid, q float64, sizes []PipeSize, lim SizingLimits) ([]
 			continue
 		}
 		out[i].Run = res
-		out[i].Gradient = res.Friction * res.Velocity * res.Velocity / (2 * StandardGravity * p.ID)
+		out[i].Gradient = res.Gradient
 		out[i].InBand = res.Velocity >= lim.VelocityLow && res.Velocity <= lim.VelocityHigh
 		out[i].UnderMax = out[i].Gradient <= lim.GradientMax
 	}

@@ -18,7 +18,24 @@ const (
 	// flagged: the best large induction motors reach about 97 % (common
 	// practice, from memory).
 	MotorEfficiencyHigh = 0.98
+	// AccuracyPlausibleMin is the smallest instrument accuracy taken as
+	// typed, 0.1 % (a share): the finest classes of EN 837-1 test gauges
+	// (class 0.1) and of flow and power meters used in the field are about
+	// that fine (common practice, from memory); "0.02" typed into a
+	// percentage box (0.02 %) is a fraction meant as 2 %.
+	AccuracyPlausibleMin = 0.001
 )
+
+// AccuracySlip reports whether accuracy v (a share, as read from a
+// percentage box) is finer than any field instrument's, and the percentage
+// then probably meant ("2" for 0.0002). Zero and negative values are not
+// slips (they are judged elsewhere).
+func AccuracySlip(v float64) (meant float64, slip bool) {
+	if v > 0 && v < AccuracyPlausibleMin {
+		return v * 1e4, true
+	}
+	return 0, false
+}
 
 // FractionSlip reports whether share v (as read from a percentage box:
 // "0.78 %" is 0.0078) looks like a fraction typed where a percentage was

@@ -28,8 +28,10 @@ type TurbineResult struct {
 	// p1 (gauge) + ρ·g·(z1 − z2), Pa. It is what the turbine's inlet valve
 	// and the pipe there hold at rest, before any surge.
 	StaticInlet float64
-	Balance     BalanceResult
-	Warnings    []Warning
+	// StaticInletHead is StaticInlet as a head of the liquid, m.
+	StaticInletHead float64
+	Balance         BalanceResult
+	Warnings        []Warning
 }
 
 // checkTurbineEff validates a turbine efficiency (field "etat").
@@ -65,6 +67,7 @@ func Turbine(b Balance, eff float64) (TurbineResult, error) {
 		r.LossShare, r.NetShare = r.Losses/r.GrossHead, r.NetHead/r.GrossHead
 	}
 	r.StaticInlet = br.In.P - b.SitePressure + rhog*(br.In.Z-br.Out.Z)
+	r.StaticInletHead = r.StaticInlet / rhog
 	if r.GrossHead <= 0 {
 		r.Warnings = append(r.Warnings, Warn("z1", CautionNoGrossHead, Fig(r.GrossHead, Length)))
 	} else if r.NetHead <= 0 {

@@ -16,6 +16,7 @@ const (
 	cvHour     = float64(unit.Hour)             // 3600 s
 	cvDay      = float64(unit.Day)              // 86 400 s
 	cvKWh      = 3.6e6                          // J per kWh, exact
+	cvCalIT    = 4.1868                         // J per calorie (International Table), exact
 
 	// Conventional densities of the manometer liquids (ISO 31-3, as used
 	// by NIST SP 811 for the "conventional" water and mercury units).
@@ -30,6 +31,15 @@ const (
 	cvFahr0     = 459.67 * cvFahrFac                            // K at 0 °F
 	cvWaterCol  = cvRhoWater * StandardGravity                  // Pa per metre of water
 	cvMercuryCl = cvRhoMercury * StandardGravity                // Pa per metre of mercury
+
+	// The British thermal unit (International Table) heats a pound of
+	// water by 1 °F as the IT calorie heats a gram by 1 K:
+	// 1055.055 852 62 J, exact. A ton of refrigeration is 12 000 Btu/h
+	// (the heat that melts a short ton of ice at 0 °C in a day,
+	// rounded), 3.516 852 8 kW.
+	cvBtuIT   = cvCalIT * cvPound * 1000 * cvFahrFac // J
+	cvBtuPerH = cvBtuIT / cvHour                     // W
+	cvTonRef  = 12000 * cvBtuPerH                    // W
 )
 
 // unitEntry is one row of the unit catalogue.
@@ -108,6 +118,8 @@ var unitTable = []unitEntry{
 	{Unit: Unit{"MW", Power, float64(unit.Megawatt), 0, "megawatt"}, noFold: true},
 	{Unit: Unit{"hp", Power, cvHorsePwr, 0, "horsepower (mechanical, 550 ft·lbf/s)"}, defUS: true},
 	{Unit: Unit{"hp(E)", Power, cvElecHP, 0, "horsepower (electric, 746 W)"}, aliases: []string{"hpE"}},
+	{Unit: Unit{"Btu/h", Power, cvBtuPerH, 0, "British thermal unit (IT) per hour"}, aliases: []string{"Btu/hr", "Btuh", "BTUH"}},
+	{Unit: Unit{"TR", Power, cvTonRef, 0, "ton of refrigeration (12 000 Btu/h)"}, aliases: []string{"ton", "tons", "RT"}},
 
 	{Unit: Unit{"m²", Area, float64(unit.SquareMeter), 0, "square metre"}, defSI: true},
 	{Unit: Unit{"cm²", Area, float64(unit.SquareCentimeter), 0, "square centimetre"}},

@@ -103,24 +103,26 @@ func TestUnitSP811(t *testing.T) {
 		{"St", "1.0 E-04", true, 0, false},          // stokes (St), NIST SP 811 (2008) App. B, exact, from memory
 		{"ft²/s", "9.290 304 E-02", true, 0, false}, // square foot per second (ft²/s), NIST SP 811 (2008) App. B, exact, from memory
 
-		{"W", "1.0 E+00", true, 0, false},         // SI unit
-		{"kW", "1.0 E+03", true, 0, false},        // SI prefix kilo
-		{"MW", "1.0 E+06", true, 0, false},        // SI prefix mega
-		{"hp", "7.456 999 E+02", false, 0, false}, // horsepower (550 ft·lbf/s), NIST SP 811 (2008) App. B, from memory
-		{"hp(E)", "7.46 E+02", true, 0, false},    // horsepower (electric), NIST SP 811 (2008) App. B, exact, from memory
-		{"m²", "1.0 E+00", true, 0, false},        // SI unit
-		{"cm²", "1.0 E-04", true, 0, false},       // SI prefix centi, squared
-		{"mm²", "1.0 E-06", true, 0, false},       // SI prefix milli, squared
-		{"ft²", "9.290 304 E-02", true, 0, false}, // square foot (ft²), NIST SP 811 (2008) App. B, exact, from memory
-		{"in²", "6.4516 E-04", true, 0, false},    // square inch (in²), NIST SP 811 (2008) App. B, exact, from memory
-		{"kg", "1.0 E+00", true, 0, false},        // SI base unit
-		{"g", "1.0 E-03", true, 0, false},         // SI prefix milli (of the kilogram)
-		{"t", "1.0 E+03", true, 0, false},         // ton, metric (t), NIST SP 811 (2008) App. B, exact, from memory
-		{"lb", "4.535 924 E-01", false, 0, false}, // pound (avoirdupois) (lb), NIST SP 811 (2008) App. B, from memory
-		{"s", "1.0 E+00", true, 0, false},         // SI base unit
-		{"min", "6.0 E+01", true, 0, false},       // minute (min), NIST SP 811 (2008) App. B, exact, from memory
-		{"h", "3.6 E+03", true, 0, false},         // hour (h), NIST SP 811 (2008) App. B, exact, from memory
-		{"d", "8.64 E+04", true, 0, false},        // day (d), NIST SP 811 (2008) App. B, exact, from memory
+		{"W", "1.0 E+00", true, 0, false},            // SI unit
+		{"kW", "1.0 E+03", true, 0, false},           // SI prefix kilo
+		{"MW", "1.0 E+06", true, 0, false},           // SI prefix mega
+		{"hp", "7.456 999 E+02", false, 0, false},    // horsepower (550 ft·lbf/s), NIST SP 811 (2008) App. B, from memory
+		{"hp(E)", "7.46 E+02", true, 0, false},       // horsepower (electric), NIST SP 811 (2008) App. B, exact, from memory
+		{"Btu/h", "2.930 711 E-01", false, 0, false}, // British thermal unit_IT per hour (Btu_IT/h), NIST SP 811 (2008) App. B, from memory
+		{"TR", "3.516 853 E+03", false, 0, false},    // ton of refrigeration (12 000 Btu_IT/h), NIST SP 811 (2008) App. B, from memory
+		{"m²", "1.0 E+00", true, 0, false},           // SI unit
+		{"cm²", "1.0 E-04", true, 0, false},          // SI prefix centi, squared
+		{"mm²", "1.0 E-06", true, 0, false},          // SI prefix milli, squared
+		{"ft²", "9.290 304 E-02", true, 0, false},    // square foot (ft²), NIST SP 811 (2008) App. B, exact, from memory
+		{"in²", "6.4516 E-04", true, 0, false},       // square inch (in²), NIST SP 811 (2008) App. B, exact, from memory
+		{"kg", "1.0 E+00", true, 0, false},           // SI base unit
+		{"g", "1.0 E-03", true, 0, false},            // SI prefix milli (of the kilogram)
+		{"t", "1.0 E+03", true, 0, false},            // ton, metric (t), NIST SP 811 (2008) App. B, exact, from memory
+		{"lb", "4.535 924 E-01", false, 0, false},    // pound (avoirdupois) (lb), NIST SP 811 (2008) App. B, from memory
+		{"s", "1.0 E+00", true, 0, false},            // SI base unit
+		{"min", "6.0 E+01", true, 0, false},          // minute (min), NIST SP 811 (2008) App. B, exact, from memory
+		{"h", "3.6 E+03", true, 0, false},            // hour (h), NIST SP 811 (2008) App. B, exact, from memory
+		{"d", "8.64 E+04", true, 0, false},           // day (d), NIST SP 811 (2008) App. B, exact, from memory
 		// Energy per volume: kilowatt hour (kW·h) = 3.6 E+06 J, exact; gallon (U.S.) = 3.785 412 E-03 m³; NIST SP 811 (2008) App. B, from memory.
 		{"kWh/m³", "3.6 E+06", true, 0, false},
 		{"kWh/kgal", "3.785 412 E-03", false, 3.6e6 / 1000, true},
@@ -259,6 +261,7 @@ func TestUnitLookupAliases(t *testing.T) {
 		"kg/m3": "kg/m³", "kg/m^3": "kg/m³", "lb/ft3": "lb/ft³",
 		"mm2/s": "mm²/s", "cSt": "cSt", "cst": "cSt", "ft2/s": "ft²/s",
 		"hp": "hp", "HP": "hp", "hpE": "hp(E)", "hp(E)": "hp(E)", "kW": "kW", "kw": "kW",
+		"Btu/h": "Btu/h", "BTU/h": "Btu/h", "btu/hr": "Btu/h", "BTUH": "Btu/h", "TR": "TR", "ton": "TR", "tons": "TR", "RT": "TR",
 		"%": "%", "": "",
 		// the spellings before the space in the units of energy per head
 		"kWh/(m³·100m)": "kWh/(m³·100 m)", "kWh/(kgal·100ft)": "kWh/(kgal·100 ft)",
@@ -322,7 +325,7 @@ func TestUnitsForOrder(t *testing.T) {
 	// with the metric default.
 	us := map[string]bool{"ft": true, "in": true, "psi": true, "ksi": true, "ftH2O": true, "inH2O": true, "inHg": true,
 		"ft/s": true, "gpm": true, "cfs": true, "MGD": true, "°F": true, "lb/ft³": true, "ft²/s": true,
-		"hp": true, "hp(E)": true, "ft²": true, "in²": true, "lb": true,
+		"hp": true, "hp(E)": true, "Btu/h": true, "TR": true, "ft²": true, "in²": true, "lb": true,
 		"kWh/kgal": true, "kWh/(kgal·100 ft)": true}
 	for d := Dimensionless; d <= Frequency; d++ {
 		list := UnitsFor(d)

@@ -88,7 +88,8 @@ func TestBadLinks(t *testing.T) {
 		{"a glycol mix with no share", with("liq=pg"), "", "gly", "glycol share", "liq=pg", false},
 		{"a glycol mix below its freezing point", with("liq=pg", "gly=30%", "t=-20C"), "", "t", "freezes at -12.79 °C", "t=-20C", false},
 		{"a glycol mix above 100 °C", with("liq=eg", "gly=30%", "t=120C"), "", "t", "freezing point", "t=120C", false},
-		{"a glycol share typed as a fraction", with("liq=pg", "gly=0.3"), "", "", "", "gly=0.3", true},
+		{"a glycol share typed as a fraction", with("liq=pg", "gly=0.3"), "", "gly", "30 %", "gly=0.3", false},
+		{"a glycol share typed as a fraction, kept", with("liq=pg", "gly=0.3", "keep=gly"), "", "", "", "gly=0.3", true},
 		{"a velocity so large the head overflows", with("v1=1e200m/s"), "", "", "", "v1=1e200m/s", false},
 		{"a pressure so large the head overflows", with("p1=1e300kPa", "p2=-1e300kPa", "solve=ht"), "", "", "", "p1=1e300kPa", false},
 	}

@@ -46,6 +46,9 @@ func (e *eval) convert() {
 		}
 	}
 	cr := &ConvertResult{Gauge: gauge, Absolute: abs, Head: head}
+	if rhog > 0 {
+		cr.AbsoluteHead = abs / rhog
+	}
 	row := func(label, unit string, v float64) {
 		cr.Rows = append(cr.Rows, ConvertRow{Label: label, Text: calc.FormatValue(v, unit, 5)})
 	}

@@ -238,10 +238,22 @@
 //
 // The link's integrity field (see CheckParam, Sign):
 //
-//	ck      eight hex digits, the CRC-32 of the canonical query, written
-//	        first by "Copy link"; a link whose ck does not match what
-//	        arrived (cut or altered on the way) is reported as damaged,
-//	        with what was read. Links typed by hand may leave it out.
+//	ck      written first by "Copy link": eight hex digits, the CRC-32 of
+//	        the canonical query, a dot, one character per block of about
+//	        four values (each value is in two blocks, by its name), a dot
+//	        and the number of values, e.g. ck=1f0c22aa.Qx3d-kPbZ_0e.42. A
+//	        link whose ck does not match what arrived (cut or altered on
+//	        the way) is reported as damaged, naming the values whose both
+//	        blocks fail and whether a value was lost; its sheet is
+//	        unverified until the person confirms the values. Links signed
+//	        with the eight hex digits alone (before the blocks) still read
+//	        and find damage without naming values; links typed by hand may
+//	        leave ck out. A value holding a line break or another control
+//	        character is kept verbatim and refused at its box.
+//	keep    the values kept as typed though they look like slips (a
+//	        gauge reading typed in Pa, a fraction in a percentage box, an
+//	        accuracy finer than 0.1 %): their names, comma separated.
+//	        A kept value that changes is judged again.
 //
 // A mail program's "&amp;" in place of "&" reads as "&".
 //

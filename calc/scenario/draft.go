@@ -28,7 +28,23 @@ type Draft struct {
 	// not be used, SurveyNotes what PasteProfile said of it (see there).
 	Survey      string
 	SurveyNotes []string
+	// Unverified is set for a sheet opened from a link that arrived
+	// damaged: every figure is shown unverified until the person confirms
+	// the values (Verify). Suspect lists the values the link's check names
+	// as possibly altered (DamagedLink.Suspect).
+	Unverified bool
+	Suspect    []string
 }
+
+// Damaged marks the sheet as opened from a damaged link (d from Parse):
+// unverified, with the values its check suspects.
+func (d *Draft) Damaged(dl *DamagedLink) {
+	d.Unverified, d.Suspect = true, append([]string(nil), dl.Suspect...)
+}
+
+// Verify records that the person checked the values of a sheet opened
+// from a damaged link: its figures are shown as answers again.
+func (d *Draft) Verify() { d.Unverified, d.Suspect = false, nil }
 
 // NewDraft starts editing sc with nothing held aside.
 func NewDraft(sc Scenario) Draft { return Draft{Scen: sc} }
@@ -72,6 +88,10 @@ func (d *Draft) Box(param string) (box, unit string) {
 	}
 	return box, unit
 }
+
+// View is the view the sheet is open on, as its link names it ("" none):
+// the page's state, not an input of the results.
+func (d *Draft) View() string { return strings.TrimSpace(d.Scen.Get("view")) }
 
 // Typed is param's value as the person typed it (kept whole in the
 // scenario), for a record of the inputs; "" when blank.
@@ -151,11 +171,54 @@ func compose(param, text, unit string) string {
 	return num + unit
 }
 
-// set stores text as param's value and reports whether it changed.
+// set stores text as param's value and reports whether it changed. A
+// value kept as typed (Keep) that changes is no longer kept: the new one
+// is judged afresh.
 func (d *Draft) set(param, text string) bool {
 	before := d.Scen.Get(param)
 	_ = d.Scen.Set(param, text)
-	return d.Scen.Get(param) != before
+	changed := d.Scen.Get(param) != before
+	if changed && param != KeepParam {
+		d.markKept(param, false)
+	}
+	return changed
+}
+
+// Keep keeps param's value as typed though it looks like a slip (a 415 Pa
+// gauge reading, a 0.02 % meter): the link lists it under keep, and the
+// value is taken as it stands until it changes.
+func (d *Draft) Keep(param string) {
+	d.endEdit()
+	d.markKept(param, true)
+}
+
+// markKept adds param to the keep list, or takes it off.
+func (d *Draft) markKept(param string, on bool) {
+	var names []string
+	found := false
+	for _, n := range strings.Split(d.Scen.Get(KeepParam), ",") {
+		n = strings.TrimSpace(n)
+		switch {
+		case n == "":
+		case n == param:
+			found = true
+			if on {
+				names = append(names, n)
+			}
+		default:
+			names = append(names, n)
+		}
+	}
+	if on && !found {
+		if _, _, ok := Lookup(param); !ok {
+			return
+		}
+		names = append(names, param)
+	}
+	if !on && !found {
+		return
+	}
+	_ = d.Scen.Set(KeepParam, strings.Join(names, ","))
 }
 
 // PickUnit sets the unit of param's box; a unit typed in the box gives way

@@ -35,9 +35,6 @@ func (e *eval) glycol(liq string) {
 		e.failAt(share, err)
 		return
 	}
-	if meant, slip := calc.FractionSlip(v); slip {
-		e.warnCalc("liquid", calc.Warn(share, calc.CautionGlycolSlip, calc.Num(v), calc.Num(meant/100)))
-	}
 	mix.FreezingPoint, err = calc.GlycolFreezingPoint(g, mix.MassFraction)
 	if err != nil {
 		e.failAt(share, err)

@@ -1,6 +1,7 @@
 package scenario
 
 import (
+	"math"
 	"strconv"
 	"strings"
 
@@ -191,6 +192,9 @@ var Table = []Param{
 	q("epipe", "wall's elastic modulus", "Wall's elastic modulus", "(blank: from the material)", calc.Pressure, "GPa", "ksi", "enter the elastic modulus of the pipe wall"),
 	q("kliq", "liquid's bulk modulus", "Liquid's bulk modulus", "(blank for water and seawater)", calc.Pressure, "GPa", "ksi", "enter the liquid's bulk modulus"),
 	{Name: "cr", Label: "restraint factor", Box: "Restraint factor c", Hint: "(blank: 1, expansion joints throughout)", Kind: KindNumber},
+
+	// The values kept as typed though they look like slips (slips.go).
+	{Name: KeepParam, Label: "values kept as typed", Kind: KindText},
 }
 
 func q(name, label, box, hint string, dim calc.Dimension, si, us, missing string) Param {
@@ -261,17 +265,26 @@ func ClassName(catalogue, class string) string {
 }
 
 // gradeChoices are ISO 9906's acceptance grades with their head and
-// efficiency tolerances (from memory).
+// efficiency tolerances (from memory), each written to at most three
+// significant digits: 0.07·100 is 7.000000000000001 in binary floating
+// point, and a label shows the tolerance, not the arithmetic.
 func gradeChoices() []Choice {
+	pct := func(share float64) string {
+		t := strconv.FormatFloat(math.Abs(share*100), 'g', 3, 64)
+		if share < 0 {
+			t = "−" + t
+		}
+		return t + " %"
+	}
 	var out []Choice
 	for _, g := range calc.Grades {
 		eff := "η not below the guarantee"
 		if g.EffLow < 0 {
-			eff = "η " + strconv.FormatFloat(g.EffLow*100, 'g', -1, 64) + " %"
+			eff = "η " + pct(g.EffLow)
 		}
-		head := "H ±" + strconv.FormatFloat(g.HeadHigh*100, 'g', -1, 64) + " %"
+		head := "H ±" + pct(g.HeadHigh)
 		if g.HeadLow == 0 {
-			head = "H 0 to +" + strconv.FormatFloat(g.HeadHigh*100, 'g', -1, 64) + " %"
+			head = "H 0 to +" + pct(g.HeadHigh)
 		}
 		out = append(out, Choice{g.Name, "grade " + g.Name + ": " + head + ", " + eff + " (" + g.Use + ")"})
 	}

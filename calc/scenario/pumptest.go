@@ -116,12 +116,13 @@ func (e *eval) regionCheck(b *calc.BEP, q float64, param, topic string) {
 		return
 	}
 	lo, hi := b.Region()
-	c := calc.CautionOperatingOffRegion
+	w := calc.Warn(param, calc.CautionOperatingOffRegion, calc.Fig(q, calc.Flow), calc.Fig(lo, calc.Flow), calc.Fig(hi, calc.Flow),
+		calc.Num(calc.PreferredRegionLow), calc.Num(calc.PreferredRegionHigh))
 	if param != "q" {
-		c = calc.CautionMeasuredOffRegion
+		w = calc.Warn(param, calc.CautionMeasuredOffRegion, calc.Fig(q, calc.Flow), calc.Fig(lo, calc.Flow), calc.Fig(hi, calc.Flow),
+			calc.Num(calc.PreferredRegionLow), calc.Num(calc.PreferredRegionHigh))
 	}
-	e.warnCalc(topic, calc.Warn(param, c, calc.Fig(q, calc.Flow), calc.Fig(lo, calc.Flow), calc.Fig(hi, calc.Flow),
-		calc.Num(calc.PreferredRegionLow), calc.Num(calc.PreferredRegionHigh)))
+	e.warnCalc(topic, w)
 }
 
 // speedFor solves for the speed at which the pumps deliver the flow qsp,

@@ -100,7 +100,9 @@ type ConvertResult struct {
 	Gauge    float64 // Pa, relative to the site pressure
 	Absolute float64 // Pa
 	Head     float64 // m of the liquid at its temperature (gauge)
-	Rows     []ConvertRow
+	// AbsoluteHead is Absolute as a head of the liquid, m (0 without a liquid).
+	AbsoluteHead float64
+	Rows         []ConvertRow
 }
 
 // ConvertRow is one line of the conversion table.

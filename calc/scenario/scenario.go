@@ -79,7 +79,7 @@ func Parse(query string) (Scenario, error) {
 			continue
 		}
 		k, v, hasValue := strings.Cut(part, "=")
-		if k == CheckParam {
+		if k == CheckParam || i == firstPart(parts) && mangledCheck(k, v) {
 			check = v
 			continue
 		}
@@ -101,7 +101,7 @@ func Parse(query string) (Scenario, error) {
 			errs = append(errs, &LinkError{Kind: LinkNotUTF8, Name: errName(key)})
 			continue
 		}
-		if strings.IndexFunc(val, unicode.IsControl) >= 0 {
+		if strings.IndexFunc(key, unicode.IsControl) >= 0 {
 			errs = append(errs, &LinkError{Kind: LinkControl, Name: errName(key)})
 			continue
 		}
@@ -112,6 +112,11 @@ func Parse(query string) (Scenario, error) {
 		if _, dup := s.raw[key]; dup {
 			errs = append(errs, &LinkError{Kind: LinkTwice, Name: errName(key)})
 			continue
+		}
+		// A value holding a control character (a line break a chat put in
+		// it) is kept verbatim, for its box to show and Read to flag.
+		if strings.IndexFunc(val, unicode.IsControl) >= 0 {
+			errs = append(errs, &LinkError{Kind: LinkControl, Name: errName(key)})
 		}
 		s.raw[key] = val
 	}
@@ -250,14 +255,126 @@ func errName(k string) string {
 const CheckParam = "ck"
 
 // Sign returns the canonical query with its integrity field before it:
-// ck=, the CRC-32 (IEEE) of the canonical query in eight hex digits, then
-// the query.
+// ck=, the CRC-32 (IEEE) of the canonical query in eight hex digits, a
+// dot, one character per block of parameters (blockChecks), a dot and the
+// number of values, then the query. The blocks and the count let a
+// damaged link say which values may be altered and whether one is lost;
+// a link signed before them (eight hex digits alone) still reads, and
+// says only that it is damaged.
 func (s Scenario) Sign() string {
 	q := s.Encode()
 	if q == "" {
 		return ""
 	}
-	return CheckParam + "=" + checksum(q) + "&" + q
+	return CheckParam + "=" + checksum(q) + "." + s.blockChecks(blockCount(len(s.raw))) + "." + strconv.Itoa(len(s.raw)) + "&" + q
+}
+
+// blockAlphabet writes one block's check: six bits of its CRC-32.
+const blockAlphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789-_"
+
+// blockCount is the number of blocks for n parameters: about four each,
+// so a check names at most a handful of values and adds a quarter of a
+// character per value to the link.
+func blockCount(n int) int { return max(1, (n+3)/4) }
+
+// blocksOf are the two blocks whose checks cover a parameter, chosen by
+// its name alone, so that a value lost in transit does not move the
+// others'. A value is suspect only when both its blocks fail: an altered
+// value fails its two, and the others in them mostly have a sound one.
+func blocksOf(name string, blocks int) [2]int {
+	a := int(crc32IEEE(name) % uint32(blocks))
+	b := int(crc32IEEE(name+"#") % uint32(blocks))
+	if a == b {
+		b = (a + 1) % blocks
+	}
+	return [2]int{a, b}
+}
+
+// blockChecks writes, for each of the given number of blocks, the check
+// of its parameters: name=value (as Encode writes them) joined by & in
+// link order.
+func (s Scenario) blockChecks(blocks int) string {
+	texts := make([]strings.Builder, blocks)
+	for _, k := range s.sortedKeys() {
+		for _, i := range blocksOf(k, blocks) {
+			b := &texts[i]
+			if b.Len() > 0 {
+				b.WriteByte('&')
+			}
+			b.WriteString(k + "=" + escape(s.raw[k]))
+		}
+	}
+	out := make([]byte, blocks)
+	for i := range texts {
+		out[i] = blockAlphabet[crc32IEEE(texts[i].String())&63]
+	}
+	return string(out)
+}
+
+// sortedKeys lists the parameters held, in link order.
+func (s Scenario) sortedKeys() []string {
+	keys := make([]string, 0, len(s.raw))
+	for k := range s.raw {
+		keys = append(keys, k)
+	}
+	sortByLink(keys)
+	return keys
+}
+
+// suspects lists the parameters held whose two blocks' checks do not
+// match blocks (the block part of a check field), and whether a value was
+// lost: fewer values than count (the count part, "" when not given), or a
+// failing block that no suspect explains.
+func (s Scenario) suspects(blocks, count string) (names []string, lost bool) {
+	if n, err := strconv.Atoi(count); err == nil && n != len(s.raw) {
+		lost = true
+	}
+	if blocks == "" || strings.Trim(blocks, blockAlphabet) != "" {
+		return nil, lost
+	}
+	got := s.blockChecks(len(blocks))
+	bad := map[int]bool{}
+	for i := range blocks {
+		if got[i] != blocks[i] {
+			bad[i] = true
+		}
+	}
+	explained := map[int]bool{}
+	for _, k := range s.sortedKeys() {
+		if bs := blocksOf(k, len(blocks)); bad[bs[0]] && bad[bs[1]] {
+			names = append(names, k)
+			explained[bs[0]], explained[bs[1]] = true, true
+		}
+	}
+	return names, lost || len(explained) < len(bad)
+}
+
+// firstPart is the index of the first non-empty part of a link.
+func firstPart(parts []string) int {
+	for i, p := range parts {
+		if p != "" {
+			return i
+		}
+	}
+	return -1
+}
+
+// mangledCheck reports whether the first field of a link, k=v, is the
+// check field with its name altered in transit (a letter dropped or its
+// case changed): v has the form Sign writes, and k is what is left of
+// "ck". A sound link's first value never has that form.
+func mangledCheck(k, v string) bool {
+	whole, rest, withBlocks := strings.Cut(v, ".")
+	if len(whole) != 8 || strings.Trim(whole, "0123456789abcdef") != "" {
+		return false
+	}
+	if withBlocks {
+		blocks, count, ok := strings.Cut(rest, ".")
+		if _, err := strconv.Atoi(count); !ok || err != nil || strings.Trim(blocks, blockAlphabet) != "" {
+			return false
+		}
+	}
+	return len(k) <= 2 && strings.Trim(strings.ToLower(k), "ck") == ""
 }
 
 // signedPrefix is the length of the check field Sign writes first
@@ -293,6 +410,12 @@ type DamagedLink struct {
 	Mismatch bool   // the integrity field does not match what was read
 	Read     int    // values read
 	Last     string // the last parameter read, in link order
+	// Suspect lists the values read whose block's check does not match:
+	// among them are the altered ones. Lost is true when a block none of
+	// them is in fails too: a value was lost whole (or its name altered).
+	// Both are empty for a link signed without blocks.
+	Suspect []string
+	Lost    bool
 }
 
 // Error is a terse form for logs and tests; what users read comes from
@@ -308,7 +431,9 @@ func (d *DamagedLink) Error() string {
 // damage reports a damaged link: a check that does not match, or an end
 // inside a parameter.
 func (s Scenario) damage(check, cut string) *DamagedLink {
-	mismatch := check != "" && check != checksum(s.Encode())
+	whole, rest, _ := strings.Cut(check, ".")
+	blocks, count, _ := strings.Cut(rest, ".")
+	mismatch := check != "" && whole != checksum(s.Encode())
 	if !mismatch && cut == "" {
 		return nil
 	}
@@ -318,6 +443,9 @@ func (s Scenario) damage(check, cut string) *DamagedLink {
 	}
 	sortByLink(keys)
 	d := &DamagedLink{Cut: truncate(cut), Mismatch: mismatch, Read: len(keys)}
+	if mismatch {
+		d.Suspect, d.Lost = s.suspects(blocks, count)
+	}
 	if len(keys) > 0 {
 		d.Last = keys[len(keys)-1]
 	}

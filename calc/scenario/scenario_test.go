@@ -6,6 +6,7 @@ import (
 	"math"
 	"reflect"
 	"regexp"
+	"slices"
 	"strconv"
 	"strings"
 	"testing"
@@ -372,8 +373,13 @@ func FuzzScenario(f *testing.F) {
 				t.Errorf("%q: message %q on %s does not name its field", q, m, p)
 			}
 		}
-		// The link survives a round trip.
+		// The link survives a round trip; a value holding a control
+		// character is kept, and reported again.
 		s2, err := Parse(s.Encode())
+		var list LinkErrors
+		if errors.As(err, &list) && !slices.ContainsFunc(list, func(e *LinkError) bool { return e.Kind != LinkControl }) {
+			err = nil
+		}
 		if err != nil || s2.Encode() != s.Encode() {
 			t.Errorf("%q: round trip failed: %v", q, err)
 		}

@@ -3,6 +3,7 @@ package scenario
 import (
 	"fmt"
 	"strings"
+	"time"
 	"unicode/utf8"
 )
 
@@ -10,12 +11,16 @@ import (
 // person can read and any machine can import. Its format, Fieldhead's own:
 //
 //	# Fieldhead sheets · 3 sheets · exported 2026-12-02 14:05
-//	Alder Flats BS-3, wet well to Crest reservoir	view=balance&units=si&name=…&ck=1a2b3c4d
-//	Larkspur Hollow spring box to turbine	view=pump&units=si&name=…
+//	Alder Flats BS-3, wet well to Crest reservoir	view=balance&units=si&name=…&ck=1a2b3c4d	edited 2026-12-01T09:40:12Z
+//	Larkspur Hollow spring box to turbine	view=pump&units=si&name=…	edited 2026-11-28T16:02:55Z
 //
-// One sheet per line: its title, a tab, and its link — the query string,
-// or a whole share link (https://…/?…) from which the query is taken. A
-// line without a tab is a link alone. Lines that start with # and hold no
+// One sheet per line: its title, a tab, its link — the query string, or a
+// whole share link (https://…/?…) from which the query is taken — and,
+// since the edit time is kept, a tab and "edited " with the time the sheet
+// was last edited (RFC 3339, UTC, whole seconds). Older files have no edit
+// time: a line of title and link, or a line without a tab, which is a link
+// alone; both keep reading, with the edit time not known. Fields after the
+// third are left for later forms and skipped. Lines that start with # and hold no
 // tab are notes (a sheet's line always holds one, so a title may start
 // with #), and blank lines are skipped. The title is for the reader: the sheet's
 // own title is the name parameter of its link (a link without one takes
@@ -27,8 +32,25 @@ type SheetLine struct {
 	Line  int    // 1-based line number in the file
 	Title string // the title written before the tab
 	Scen  Scenario
-	Err   error // what was wrong with a link read only in part (nil when whole), worded by present
+	// Edited is when the sheet was last edited, UTC; zero when the line
+	// does not say (an older file) or says it in a form not understood.
+	Edited time.Time
+	Err    error // what was wrong with a link read only in part (nil when whole), worded by present
 }
+
+// KeptSheet is a sheet to write to a sheets file: its scenario and when it
+// was last edited (zero: not known, and not written).
+type KeptSheet struct {
+	Scen   Scenario
+	Edited time.Time
+}
+
+// editedPrefix starts a line's edit-time field.
+const editedPrefix = "edited "
+
+// editedLayout is the edit time's form in a sheets file: RFC 3339 in UTC,
+// to the second.
+const editedLayout = "2006-01-02T15:04:05Z"
 
 // LineError is a line of a sheets file that could not be read at all:
 // Err is a *LinkError (LinkNone, LinkEmpty) or what Parse returned.
@@ -52,9 +74,14 @@ func ReadSheets(text string) ([]SheetLine, []LineError) {
 		if t := strings.TrimSpace(line); t == "" || strings.HasPrefix(t, "#") && !strings.Contains(line, "\t") {
 			continue
 		}
-		title, link, hasTab := strings.Cut(line, "\t")
-		if !hasTab {
-			title, link = "", line
+		fields := strings.Split(line, "\t")
+		title, link := "", line
+		var edited time.Time
+		if len(fields) > 1 {
+			title, link = fields[0], fields[1]
+		}
+		if len(fields) > 2 {
+			edited = readEdited(fields[2])
 		}
 		q := QueryOf(link)
 		if q == "" {
@@ -69,7 +96,7 @@ func ReadSheets(text string) ([]SheetLine, []LineError) {
 			bad = append(bad, LineError{n, err})
 			continue
 		}
-		sl := SheetLine{Line: n, Title: strings.TrimSpace(title), Scen: sc}
+		sl := SheetLine{Line: n, Title: strings.TrimSpace(title), Scen: sc, Edited: edited}
 		if !sc.Has("name") && sl.Title != "" && utf8.ValidString(sl.Title) && printable(sl.Title) {
 			_ = sl.Scen.Set("name", sl.Title)          // a link without a title takes the line's
 			if len(sl.Scen.Encode()) > MaxQueryBytes { // unless the link could then not be shared
@@ -95,17 +122,50 @@ func QueryOf(link string) string {
 	return strings.ReplaceAll(link, "&amp;", "&")
 }
 
-// WriteSheets writes sheets as a sheets file, after a first note line.
+// readEdited reads a line's edit-time field; zero when it is not one.
+func readEdited(f string) time.Time {
+	v, ok := strings.CutPrefix(strings.TrimSpace(f), editedPrefix)
+	if !ok {
+		return time.Time{}
+	}
+	t, err := time.Parse(time.RFC3339, strings.TrimSpace(v))
+	if err != nil {
+		return time.Time{}
+	}
+	return t.UTC()
+}
+
+// WriteSheets writes sheets as a sheets file, after a first note line,
+// without edit times.
 func WriteSheets(note string, sheets []Scenario) string {
+	kept := make([]KeptSheet, len(sheets))
+	for i, s := range sheets {
+		kept[i].Scen = s
+	}
+	return WriteKept(note, kept)
+}
+
+// WriteKept writes sheets as a sheets file, after a first note line, each
+// with its edit time when known.
+func WriteKept(note string, sheets []KeptSheet) string {
 	var b strings.Builder
 	if note != "" {
 		b.WriteString("# " + oneLine(note) + "\n")
 	}
-	for _, s := range sheets {
-		b.WriteString(oneLine(strings.TrimSpace(s.Get("name"))) + "\t" + s.Sign() + "\n") // an untitled sheet's line starts with the tab
+	for _, k := range sheets {
+		s := k.Scen
+		b.WriteString(oneLine(strings.TrimSpace(s.Get("name"))) + "\t" + s.Sign()) // an untitled sheet's line starts with the tab
+		if !k.Edited.IsZero() {
+			b.WriteString("\t" + editedPrefix + EditedText(k.Edited))
+		}
+		b.WriteString("\n")
 	}
 	return b.String()
 }
+
+// EditedText writes an edit time as a sheets file does: RFC 3339, UTC, to
+// the second.
+func EditedText(t time.Time) string { return t.UTC().Format(editedLayout) }
 
 // oneLine writes tabs and line breaks as spaces: a note or a title is one
 // field of one line.

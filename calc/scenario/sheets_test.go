@@ -4,6 +4,7 @@ import (
 	"errors"
 	"strings"
 	"testing"
+	"time"
 )
 
 // TestSheetsFileRoundTrip: sheets written out read back as the same
@@ -122,6 +123,7 @@ func TestSignedLinks(t *testing.T) {
 func FuzzSheets(f *testing.F) {
 	f.Add(WriteSheets("note", []Scenario{Demo(), TurbineDemo()}))
 	f.Add("Pit\tq=45L/s&amp;t=18C\n\n# x\nhttps://h/?ck=00000000&z1=3m\nbad\t%zz")
+	f.Add("Pit\tz1=3m\tedited 2026-12-01T09:40:12.5+02:00\textra\n\tz2=4m\tedited 0001-01-01T00:00:00Z")
 	f.Fuzz(func(t *testing.T, text string) {
 		got, bad := ReadSheets(text)
 		for _, b := range bad {
@@ -130,10 +132,71 @@ func FuzzSheets(f *testing.F) {
 			}
 		}
 		for _, sl := range got {
-			back, _ := ReadSheets(WriteSheets("", []Scenario{sl.Scen}))
-			if len(back) != 1 || back[0].Scen.Encode() != sl.Scen.Encode() {
-				t.Errorf("line %d does not read back: %q", sl.Line, sl.Scen.Encode())
+			back, _ := ReadSheets(WriteKept("", []KeptSheet{{Scen: sl.Scen, Edited: sl.Edited}}))
+			if len(back) != 1 || back[0].Scen.Encode() != sl.Scen.Encode() || !back[0].Edited.Equal(sl.Edited.Truncate(time.Second)) {
+				t.Errorf("line %d does not read back: %q, edited %v", sl.Line, sl.Scen.Encode(), sl.Edited)
 			}
 		}
 	})
+}
+
+// TestSheetsFileEditTime: each sheet's edit time is written after its link
+// (RFC 3339, UTC, to the second) and read back; one not known is not
+// written; a field that is not an edit time, or fields after it, leave the
+// sheet read with its time not known or as given.
+func TestSheetsFileEditTime(t *testing.T) {
+	at := time.Date(2026, 12, 1, 9, 40, 12, 345e6, time.FixedZone("UTC+2", 2*3600))
+	text := WriteKept("note", []KeptSheet{{Scen: Demo(), Edited: at}, {Scen: TurbineDemo()}})
+	want := "\t" + Demo().Sign() + "\tedited 2026-12-01T07:40:12Z\n"
+	if !strings.Contains(text, want) {
+		t.Errorf("the demo's line lacks %q:\n%s", want, text)
+	}
+	got, bad := ReadSheets(text)
+	if len(bad) > 0 || len(got) != 2 {
+		t.Fatalf("read %d sheets, problems %v", len(got), bad)
+	}
+	if w := at.Truncate(time.Second).UTC(); !got[0].Edited.Equal(w) || got[0].Edited.Location() != time.UTC {
+		t.Errorf("edited %v, want %v", got[0].Edited, w)
+	}
+	if !got[1].Edited.IsZero() || strings.Count(text, "\tedited ") != 1 {
+		t.Errorf("a sheet without an edit time reads %v:\n%s", got[1].Edited, text)
+	}
+	for _, c := range []struct {
+		line string
+		want time.Time
+	}{
+		{"Pit\tz1=3m\tedited 2026-12-01T09:40:12+02:00", time.Date(2026, 12, 1, 7, 40, 12, 0, time.UTC)},
+		{"Pit\tz1=3m\tedited 2026-12-01T09:40:12Z\tlater field", time.Date(2026, 12, 1, 9, 40, 12, 0, time.UTC)},
+		{"Pit\tz1=3m\tedited yesterday", time.Time{}},
+		{"Pit\tz1=3m\t2026-12-01T09:40:12Z", time.Time{}},
+	} {
+		got, bad := ReadSheets(c.line)
+		if len(bad) > 0 || len(got) != 1 || got[0].Scen.Get("z1") != "3m" || !got[0].Edited.Equal(c.want) {
+			t.Errorf("%q: read %+v, problems %v", c.line, got, bad)
+		}
+	}
+}
+
+// TestSheetsFileOlderForms: sheets files written before the edit time was
+// kept still read, sheet for sheet, with the edit time not known: the
+// form the site book exported (a note, then title, a tab and the link),
+// and a file of bare links, one per line.
+func TestSheetsFileOlderForms(t *testing.T) {
+	demo, turbine := Demo(), TurbineDemo()
+	older := "# Fieldhead sheets · 2 · exported 2026-10-02 14:05 · one per line: title, a tab, the link\n" +
+		demo.Get("name") + "\t" + demo.Sign() + "\n" +
+		turbine.Get("name") + "\t" + turbine.Sign() + "\n"
+	bare := "https://example.org/fieldhead/?" + demo.Sign() + "\r\n" + turbine.Encode() + "\r\n"
+	for name, text := range map[string]string{"title and link": older, "bare links": bare} {
+		got, bad := ReadSheets(text)
+		if len(bad) > 0 || len(got) != 2 {
+			t.Errorf("%s: read %d sheets, problems %v", name, len(got), bad)
+			continue
+		}
+		for i, want := range []Scenario{demo, turbine} {
+			if got[i].Scen.Encode() != want.Encode() || got[i].Err != nil || !got[i].Edited.IsZero() {
+				t.Errorf("%s, sheet %d: %+v", name, i+1, got[i])
+			}
+		}
+	}
 }

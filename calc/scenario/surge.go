@@ -23,6 +23,9 @@ type SurgeResult struct {
 	// without a solved balance (the figures are then rises only).
 	Static      float64
 	StaticKnown bool
+	// Peak is Static + the rise, Pa gauge; StaticHead and PeakHead are
+	// Static and Peak as heads of the liquid, m. All 0 unless StaticKnown.
+	Peak, StaticHead, PeakHead float64
 }
 
 // SurgePipe is one pipe of the surge estimate with where its wall figures
@@ -93,7 +96,14 @@ func (e *eval) surge(run *RunResult, line *calc.Line) {
 		return
 	}
 	out.SurgeResult = r
-	out.Static = in.Static - e.res.SitePressure
+	if out.StaticKnown {
+		rhog := fl.Density * calc.StandardGravity
+		out.Static = in.Static - e.res.SitePressure
+		out.Peak = out.Static + r.DeltaP
+		out.StaticHead, out.PeakHead = out.Static/rhog, out.Peak/rhog
+	} else {
+		out.Static = in.Static - e.res.SitePressure
+	}
 	e.res.Surge = out
 	for _, w := range r.Warnings {
 		e.warnCalc("surge", w)

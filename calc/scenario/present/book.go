@@ -4,6 +4,7 @@ import (
 	"strconv"
 	"strings"
 
+	"fieldhead/calc"
 	"fieldhead/calc/scenario"
 )
 
@@ -13,7 +14,7 @@ import (
 type Kept struct {
 	ID      string
 	Title   string
-	Edited  string // when it was last edited, as the page words it
+	Edited  string // when it was last edited, as the page words it; "" when not known (an older sheets file)
 	Link    string // its signed query
 	Answer  string // its headline answer when last saved
 	Current bool   // the sheet open now
@@ -28,8 +29,9 @@ type BookState struct {
 }
 
 // Headline is a sheet's headline answer in a few words, in its units:
-// the balance's unknown, else the field check's head, else the
-// conversion; "no answer yet" without any.
+// the balance's unknown, else the field check's head, else NPSH available
+// and its margin, else the run's friction, else the conversion; "no answer
+// yet" without any.
 func Headline(s scenario.Scenario, r scenario.Result) string {
 	d := scenario.NewDraft(s)
 	b := &builder{d: &d, in: &r.Inputs, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
@@ -43,12 +45,26 @@ func Headline(s scenario.Scenario, r scenario.Result) string {
 		return out
 	case r.Field != nil:
 		return "pump head measured " + b.head(r.Field.Head)
-	case r.Run != nil:
-		return "friction head of the run " + b.head(r.Run.TotalLoss)
+	case r.NPSH != nil:
+		out := "NPSH available " + b.head(r.NPSH.Available)
+		if r.NPSH.Level != calc.NPSHUnrated {
+			out += ", margin " + b.head(r.NPSH.Margin) + " (" + npshWord(r.NPSH.Level) + ")"
+		}
+		return out
+	case theRun(&r) != nil:
+		return "friction head of the run " + b.head(theRun(&r).TotalLoss)
 	case r.Convert != nil:
 		return "converted: " + b.gauge(r.Convert.Gauge)
 	}
 	return "no answer yet"
+}
+
+// editedText says when a kept sheet was last edited.
+func editedText(when string) string {
+	if when == "" {
+		return "edit time not known (from an older sheets file)"
+	}
+	return "edited " + when
 }
 
 // Book is the card of the site book: the search box, each kept sheet whose
@@ -79,7 +95,7 @@ func Book(kept []Kept, st BookState) Card {
 			title = "Untitled sheet"
 		}
 		c := Card{ID: "kept-" + k.ID, Class: "kept", Title: title, Blocks: []Block{
-			text("muted", "", "edited "+k.Edited+map[bool]string{true: " · open now", false: ""}[k.Current]),
+			text("muted", "", editedText(k.Edited)+map[bool]string{true: " · open now", false: ""}[k.Current]),
 			text("computed", "", k.Answer),
 			{Kind: BlockButtons, Class: "actions", Buttons: []Button{
 				{ID: "book-open-" + k.ID, Text: "Open", Class: "act main", Disabled: k.Current, Act: Action{Do: "book-open", Value: k.ID}},
@@ -115,10 +131,11 @@ func Book(kept []Kept, st BookState) Card {
 	}
 	blocks = append(blocks,
 		Block{Kind: BlockHeading, Text: "Take sheets elsewhere"},
-		text("muted", "", "A sheets file is plain text: one line per sheet, its title and its link. The results table opens in any spreadsheet: one row per sheet, units in the header."),
+		text("muted", "", "A sheets file is plain text: one line per sheet, its title, its link and when it was last edited. The results table opens in any spreadsheet: one row per sheet, every figure in the one unit system picked here, named in its column's head, whatever units each sheet is kept in."),
 		Block{Kind: BlockButtons, Class: "actions", Buttons: []Button{
 			{ID: "book-export", Text: "Save " + which + " as a sheets file", Class: "act", Disabled: len(kept) == 0, Act: Action{Do: "book-export"}},
-			{ID: "book-csv", Text: "Save " + which + " as a results table (CSV)", Class: "act", Disabled: len(kept) == 0, Act: Action{Do: "book-csv"}},
+			{ID: "book-csv", Text: "Save " + which + " as a results table in SI units (CSV)", Class: "act", Disabled: len(kept) == 0, Act: Action{Do: "book-csv", Value: "si"}},
+			{ID: "book-csv-us", Text: "Save " + which + " as a results table in US units (CSV)", Class: "act", Disabled: len(kept) == 0, Act: Action{Do: "book-csv", Value: "us"}},
 		}},
 		Block{Kind: BlockImport, ID: "book-import", Text: "Add the sheets of a sheets file"},
 	)

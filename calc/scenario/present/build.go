@@ -8,6 +8,7 @@ package present
 
 import (
 	"math"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -78,12 +79,17 @@ func Build(d *scenario.Draft, r scenario.Result) Sheet {
 		sh.Cards = b.balanceView()
 	}
 	sh.Others = b.others(sh.View)
+	if d.Unverified {
+		sh.Unverified = "This sheet came from a link that arrived damaged, so no figure on it can be trusted yet. " +
+			"Check the values marked at their boxes (and any the banner names) against the sender's, then confirm them."
+		sh.Verify = Button{ID: "verify", Text: "The values are right", Label: "confirm that the values are the sender's", Class: "act", Act: Action{Do: "verify"}}
+	}
 	return sh
 }
 
 // view is the view the scenario opens on.
 func (b *builder) view() string {
-	v := b.in.Choice("view")
+	v := b.d.View()
 	for _, w := range Views {
 		if w.Key == v {
 			return v
@@ -313,8 +319,16 @@ func (b *builder) field(p string, kind FieldKind, label, hint string) Field {
 	if hint == "" {
 		hint = row.Hint
 	}
-	return Field{Param: p, Kind: kind, ID: "in-" + DomID(p), Label: label, Hint: hint,
+	f := Field{Param: p, Kind: kind, ID: "in-" + DomID(p), Label: label, Hint: hint,
 		Placeholder: row.Placeholder, Error: b.problem(p), Warn: b.warnsAbout(p)}
+	if b.d.Unverified && slices.Contains(b.d.Suspect, p) {
+		f.Suspect = "this value may have been altered on the way (the link's check names it): check it against the sender's"
+	}
+	if scenario.Slippable(b.r.Errors[p]) {
+		f.Keep = &Button{ID: "keep-" + DomID(p), Text: "Keep as typed", Label: "keep the " + scenario.Label(p) + " as typed", Class: "act",
+			Act: Action{Do: "keep", Param: p}}
+	}
+	return f
 }
 
 // quantity is the box and unit picker of a value; when p is the balance's

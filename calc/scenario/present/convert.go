@@ -139,7 +139,7 @@ func (b *builder) convertCard() Card {
 		case r.unit == "", r.liquid && b.r.Fluid == nil:
 			continue
 		case r.label == "head of this liquid (absolute)":
-			r.v = cr.Absolute / (b.r.Fluid.Density * calc.StandardGravity)
+			r.v = cr.AbsoluteHead
 		}
 		row(r.label, r.unit, r.v)
 	}

@@ -342,7 +342,7 @@ func count(f *calc.Figure) string {
 
 // text words the error: its reason's wording, else its kind's.
 func (w wording) text() string {
-	if r, ok := reasonWords[w.fe.Reason]; ok && w.fe.Reason != calc.ReasonNone {
+	if r := reasonWording(w.fe.Reason); r != nil && w.fe.Reason != calc.ReasonNone {
 		return r(w)
 	}
 	return w.kindText()
@@ -442,7 +442,18 @@ func (w wording) kindText() string {
 }
 
 // reasonWords words the specific cases.
-var reasonWords = map[calc.Reason]func(w wording) string{
+// reasonWording is the wording of reason r, nil for none.
+func reasonWording(r calc.Reason) func(w wording) string {
+	if int(r) < len(reasonWords) {
+		return reasonWords[r]
+	}
+	return nil
+}
+
+// reasonWords and cautionWords are arrays indexed by the code, not maps:
+// the compiler lays them out as data, where a map of this size is built by
+// code at start-up (tens of KB of the wasm).
+var reasonWords = [...]func(w wording) string{
 	calc.ReasonGrouping: func(w wording) string {
 		return w.expected() + "; " + quote(w.fe.Input) + " has more than one separator; write the digits without grouping, e.g. 1250.5"
 	},
@@ -594,6 +605,19 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 	calc.ReasonFlowTwice: func(w wording) string {
 		return "this reading's flow (" + w.val() + ") is that of reading " + w.figs(0) + ": give each flow once, or drop one of the two"
 	},
+	calc.ReasonUnitSlip: func(w wording) string {
+		typed, meant := w.fe.Input, "?"
+		if len(w.fe.Choices) == 2 {
+			typed, meant = w.fe.Input+" "+w.fe.Choices[0], w.fe.Input+" "+w.fe.Choices[1]
+		}
+		return typed + " is only " + w.val() + ", far less than any " + label(w.fe.Field) + ": did you mean " + meant + "? If " + typed + " is right, keep it as typed"
+	},
+	calc.ReasonAccuracySlip: func(w wording) string {
+		return "an accuracy of ±" + shareOf(w.fe.Value) + " is finer than any field instrument's: a fraction was probably typed into the percentage box; did you mean ±" + shareOf(w.figAt(0)) + "? If it is right, keep it as typed"
+	},
+	calc.ReasonDamagedValue: func(w wording) string {
+		return "this value holds a line break or another character no link writes (" + w.fe.Input + "): the link was probably damaged on its way, by a chat or mail program; check it against the sender's and type it again"
+	},
 	calc.ReasonBothSides: func(w wording) string {
 		return "give one of " + w.subject() + " or the " + label(w.fe.Other) + ", not both: switch to the one you mean and clear the other"
 	},
@@ -630,6 +654,25 @@ var reasonWords = map[calc.Reason]func(w wording) string{
 	},
 	calc.ReasonRunSegment: func(w wording) string {
 		return "the line has segments " + count(w.fe.Min) + " to " + count(w.fe.Max) + "; pick one of them (got " + quote(w.fe.Input) + ")"
+	},
+	calc.ReasonSeawaterSalinity: func(w wording) string {
+		return "the salinity must be from " + gPerKg(w.fe.Min) + " to " + gPerKg(w.fe.Max) + ", the range the seawater equations are fitted over; got " + gPerKg(w.fe.Value)
+	},
+	calc.ReasonNoTemperatureDifference: func(w wording) string {
+		return "the supply and return temperatures are both " + w.val() + ": a flow carries heat only across a difference of temperature"
+	},
+	calc.ReasonValveFactor: func(w wording) string {
+		return w.subject() + " must be above 0 and at most 1: read it from the valve maker's data sheet" + w.got()
+	},
+	calc.ReasonValveInletBoils: func(w wording) string {
+		return "the pressure at the valve inlet (" + w.val() + ") must be above the liquid's vapour pressure (" + w.min() + ")"
+	},
+	calc.ReasonColumnBreaksNoFlow: func(w wording) string {
+		seg := "?"
+		if f := w.figAt(0); f != nil {
+			seg = plainNumber(f.Value)
+		}
+		return "no flow keeps this line full: even standing still, the pressure at the high point of segment " + seg + " is down to the liquid's vapour pressure"
 	},
 	calc.ReasonSizingClass: func(w wording) string {
 		return quote(w.fe.Input) + " is not a pipe class of the catalogues; choose a schedule or class listed under Schedule or class"
@@ -933,10 +976,10 @@ func WarningText(c calc.Caution, figs []calc.Figure, us bool) string {
 // warningText is WarningText on a sheet open on view, where a pointer to
 // another view words the place on this one instead.
 func warningText(c calc.Caution, figs []calc.Figure, us bool, view string) string {
-	cw, ok := cautionWords[c]
-	if !ok {
+	if int(c) >= len(cautionWords) || cautionWords[c] == nil {
 		return ""
 	}
+	cw := cautionWords[c]
 	return cw(cautioning{figs: figs, w: wording{fe: &calc.FieldError{}, us: us}, view: view})
 }
 
@@ -962,6 +1005,22 @@ func (c cautioning) f(i int) string {
 	return c.w.fig(c.figs[i])
 }
 
+// num words figure i, a plain number (an authority, a ratio).
+func (c cautioning) num(i int) string {
+	if i >= len(c.figs) {
+		return "?"
+	}
+	return plainNumber(c.figs[i].Value)
+}
+
+// gPerKg words a salinity (kg/kg) in g/kg, "?" when the error lacks it.
+func gPerKg(f *calc.Figure) string {
+	if f == nil {
+		return "?"
+	}
+	return plainNumber(f.Value*1000) + " g/kg"
+}
+
 // pc words figure i, a share (0.76), as a percentage.
 func (c cautioning) pc(i int) string {
 	if i >= len(c.figs) {
@@ -985,7 +1044,19 @@ func (c cautioning) npshGuidance(least int) string {
 }
 
 // cautionWords words each caution.
-var cautionWords = map[calc.Caution]func(c cautioning) string{
+var cautionWords = [...]func(c cautioning) string{
+	calc.CautionValveAuthorityLow: func(c cautioning) string {
+		return "the control valve's authority is " + c.num(0) + ", below " + c.num(1) + ", the least usually accepted (common practice, from memory): it will control poorly over much of its travel; a valve with a larger drop when fully open raises it"
+	},
+	calc.CautionValveAuthorityBelowAim: func(c cautioning) string {
+		return "the control valve's authority is " + c.num(0) + ", short of the usual aim of about " + c.num(1) + " (common practice, from memory)"
+	},
+	calc.CautionValveChoked: func(c cautioning) string {
+		return "the drop across the control valve (" + c.f(0) + ") reaches the drop at which its flow chokes (" + c.f(1) + ", IEC 60534-2-1): the flow through it cannot rise above " + c.f(2) + " at this opening; expect cavitation, noise and erosion, and ask the valve's maker"
+	},
+	calc.CautionValveCavitation: func(c cautioning) string {
+		return "the drop across the control valve (" + c.f(0) + ") is past the drop at which cavitation begins (" + c.f(1) + ", from the valve's xFz, IEC 60534-2-1): expect noise and wear, and ask the valve's maker"
+	},
 	calc.CautionNoFlow: func(c cautioning) string { return "no flow: all losses are zero" },
 	calc.CautionFittingSizes: func(c cautioning) string {
 		return "inside diameter " + c.f(0) + " is outside the sizes the fitting methods were published for (about " + c.f(1) + "–" + c.f(2) + "): their K values are extrapolated"
@@ -1173,9 +1244,6 @@ var cautionWords = map[calc.Caution]func(c cautioning) string{
 	},
 	calc.CautionBoilingAtLine: func(c cautioning) string {
 		return "the water is at or above its boiling point at the pressure taken for its properties (" + c.abs(0) + "); they are taken at the saturation pressure (" + c.abs(1) + ")"
-	},
-	calc.CautionGlycolSlip: func(c cautioning) string {
-		return "a glycol share of " + c.sh(0) + " protects against almost no frost: if a fraction was typed, the share meant is probably " + c.sh(1)
 	},
 	calc.CautionGlycolBoiling: func(c cautioning) string {
 		return "the glycol mix is at or above its boiling point at the site pressure; its properties are taken at its vapour pressure"

@@ -1,6 +1,7 @@
 package present
 
 import (
+	"reflect"
 	"strings"
 	"testing"
 
@@ -17,7 +18,7 @@ func TestEveryKindAndReasonWorded(t *testing.T) {
 	// wording that quotes any of them is exercised in both systems.
 	full := func(field string, k calc.Kind, r calc.Reason) *calc.FieldError {
 		fe := calc.NewFieldError(field, k).Got(calc.Fig(0.3, calc.Length)).Within(calc.Fig(0.2, calc.Length), calc.Fig(0.5, calc.Length)).
-			Because(r, calc.Fig(0.045, calc.Flow), calc.Fig(31, calc.Length), calc.Fig(0.04, calc.Flow), calc.Fig(29, calc.Length)).
+			Because(r, declared(r.FigureDims())...).
 			Typed("12x").With("q").Given(2)
 		fe.Dim, fe.UnitDim = calc.Length, calc.Pressure
 		return fe
@@ -50,7 +51,7 @@ func TestEveryKindAndReasonWorded(t *testing.T) {
 		}
 	}
 	for _, r := range calc.Reasons() {
-		if _, ok := reasonWords[r]; !ok {
+		if reasonWording(r) == nil {
 			t.Errorf("reason %v has no wording", r)
 			continue
 		}
@@ -67,8 +68,8 @@ func TestEveryKindAndReasonWorded(t *testing.T) {
 	for _, c := range calc.Cautions() {
 		_ = WarningText(c, nil, true)
 	}
-	if len(reasonWords) != len(calc.Reasons()) {
-		t.Errorf("%d wordings for %d reasons", len(reasonWords), len(calc.Reasons()))
+	if n := worded(reasonWords[:]); n != len(calc.Reasons()) {
+		t.Errorf("%d wordings for %d reasons", n, len(calc.Reasons()))
 	}
 }
 
@@ -158,10 +159,12 @@ func TestParseErrorWords(t *testing.T) {
 // here, in both unit systems, with no placeholder left and no SI unit
 // after a figure on a US sheet.
 func TestEveryCautionWorded(t *testing.T) {
-	figs := []calc.Figure{calc.Fig(7.2, calc.Length), calc.Fig(3.1, calc.Length), calc.Fig(4.1, calc.Length), calc.Num(2.3), calc.Fig(0.6, calc.Length), calc.Fig(0.02, calc.Flow)}
+	figs := declared([]calc.Dimension{calc.Length, calc.Length, calc.Length, calc.Dimensionless, calc.Length, calc.Flow})
 	for _, c := range calc.Cautions() {
 		for _, us := range []bool{false, true} {
-			s := WarningText(c, figs, us)
+			// Exactly the figures the caution declares: a wording that
+			// reads one more shows a placeholder and fails here.
+			s := WarningText(c, declared(c.FigureDims()), us)
 			if s == "" || strings.Contains(s, "?") {
 				t.Errorf("%v (us %v): %q", c, us, s)
 			}
@@ -170,12 +173,28 @@ func TestEveryCautionWorded(t *testing.T) {
 			}
 		}
 	}
-	if len(cautionWords) != len(calc.Cautions()) {
-		t.Errorf("%d wordings for %d cautions", len(cautionWords), len(calc.Cautions()))
+	if n := worded(cautionWords[:]); n != len(calc.Cautions()) {
+		t.Errorf("%d wordings for %d cautions", n, len(calc.Cautions()))
 	}
 	if WarningText(calc.CautionText, figs, false) != "" {
 		t.Error("a warning of text is worded by its own Words")
 	}
+}
+
+// declared makes one plausible figure of each dimension, in order.
+func declared(dims []calc.Dimension) []calc.Figure {
+	values := map[calc.Dimension]float64{calc.Length: 3.1, calc.Flow: 0.02, calc.Pressure: 120e3, calc.Velocity: 1.5,
+		calc.Dimensionless: 2.3, calc.Temperature: 300, calc.Density: 998, calc.DynamicViscosity: 1e-3,
+		calc.Power: 30e3, calc.Duration: 2, calc.Frequency: 24.2, calc.KinematicViscosity: 1e-6}
+	out := make([]calc.Figure, len(dims))
+	for i, d := range dims {
+		v, ok := values[d]
+		if !ok {
+			v = 1
+		}
+		out[i] = calc.Fig(v+float64(i)/10, d)
+	}
+	return out
 }
 
 // TestCautionWords: the wording of calc's warnings as an SI sheet shows
@@ -211,6 +230,17 @@ func TestCautionWords(t *testing.T) {
 			t.Errorf("%v (us %v):\n got %q\nwant %q", c.c, c.us, got, c.want)
 		}
 	}
+}
+
+// worded counts the codes a wording table words.
+func worded[F any](fs []F) int {
+	n := 0
+	for _, f := range fs {
+		if any(f) != nil && !reflect.ValueOf(f).IsNil() {
+			n++
+		}
+	}
+	return n
 }
 
 // TestWaterTemperatureLimits: a water temperature below the range quotes

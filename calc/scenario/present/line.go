@@ -1,6 +1,7 @@
 package present
 
 import (
+	"errors"
 	"strconv"
 	"strings"
 
@@ -70,6 +71,11 @@ func (b *builder) fullFlowAnswer() (a Answer, ok bool) {
 		return a, false
 	}
 	if !br.FullFlowKnown {
+		if why := b.fullFlowFailed(); why != "" {
+			return Answer{Label: "Flow (the unknown): the most the line carries full was not found",
+				Values: []Value{{"answer-value", "not found"}},
+				Subs:   []string{why, "a full pipe would carry " + b.param("q", br.Q)}}, true
+		}
 		return Answer{Label: "Flow (the unknown): the line cannot run full",
 			Values: []Value{{"answer-value", "none full"}},
 			Subs:   []string{"below vapour pressure — column breaks at a high point even with no flow (see the warning); a full pipe would carry " + b.param("q", br.Q)}}, true
@@ -78,6 +84,20 @@ func (b *builder) fullFlowAnswer() (a Answer, ok bool) {
 		Values: []Value{{"answer-value", b.param("q", br.FullFlow)}},
 		Subs: []string{"limited by a high point, where the pressure would fall below vapour pressure — column breaks beyond this flow (see the warning)",
 			"the balance with the pipe full past the high point would give " + b.param("q", br.Q) + ", which it cannot carry"}}, true
+}
+
+// fullFlowFailed words why the largest full flow was not found, "" when
+// it was, or when none exists (the column breaks even with no flow).
+func (b *builder) fullFlowFailed() string {
+	br := b.r.Balance
+	var fe *calc.FieldError
+	if br.FullFlowKnown || br.FullFlowErr == nil || errors.As(br.FullFlowErr, &fe) && fe.Reason == calc.ReasonColumnBreaksNoFlow {
+		return ""
+	}
+	if fe == nil {
+		return br.FullFlowErr.Error()
+	}
+	return ErrorText(fe, b.us)
 }
 
 // brokenColumn reports whether the column breaks at a high point.
@@ -111,6 +131,9 @@ func (b *builder) highPointFacts() []Fact {
 	}
 	if b.brokenColumn() {
 		v := "none: the column breaks even with no flow"
+		if why := b.fullFlowFailed(); why != "" {
+			v = "not found: " + why
+		}
 		if br.FullFlowKnown {
 			v = b.param("q", br.FullFlow) + " (the surplus head taken by a valve at point 2)"
 		}
@@ -378,8 +401,8 @@ func (b *builder) segmentCard(n, count int) Card {
 		}
 	}
 	c := Card{ID: "seg-" + num, Class: "seg", Num: num, Title: "Segment " + num, Controls: []Button{
-		{ID: "seg-up-" + num, Text: "↑", Label: "move segment " + num + " up", Class: "step", Disabled: n == 1, Act: Action{Do: "seg-move", N: n, Value: "-1"}},
-		{ID: "seg-down-" + num, Text: "↓", Label: "move segment " + num + " down", Class: "step", Disabled: n == count, Act: Action{Do: "seg-move", N: n, Value: "+1"}},
+		{ID: "seg-up-" + num, Text: "↑", Label: "move segment " + num + " up", Class: "step", Disabled: n == 1, Act: Action{Do: "seg-move", N: n, Step: -1}},
+		{ID: "seg-down-" + num, Text: "↓", Label: "move segment " + num + " down", Class: "step", Disabled: n == count, Act: Action{Do: "seg-move", N: n, Step: +1}},
 		{ID: "seg-del-" + num, Text: "✕", Label: "remove segment " + num, Class: "step", Confirm: confirm, Act: Action{Do: "seg-remove", N: n}},
 	}}
 	blocks := []Block{fields(b.quantity(p("l"), "", ""), b.quantity(p("z"), "", zHint)), b.toggle(p("pipe"))}

@@ -96,10 +96,22 @@ func damagedText(d *scenario.DamagedLink) string {
 		why = "it ends in the middle of a value (" + d.Cut + ")"
 	}
 	read := "nothing could be read"
-	if d.Read > 0 {
+	switch {
+	case len(d.Suspect) > 0 && d.Cut == "":
+		names := make([]string, len(d.Suspect))
+		for i, p := range d.Suspect {
+			names[i] = scenario.Label(p) + " (" + p + ")"
+		}
+		read = strconv.Itoa(d.Read) + " values were read; the ones that may be altered are among these: " + strings.Join(names, ", ")
+		if d.Lost {
+			read += "; and a value may be missing"
+		}
+	case d.Lost && d.Cut == "":
+		read = strconv.Itoa(d.Read) + " values were read and match; a value is missing, or its name was altered"
+	case d.Read > 0:
 		read = strconv.Itoa(d.Read) + " values were read, the last " + scenario.Label(d.Last) + " (" + d.Last + "); what followed it is missing or altered"
 	}
-	return "the link arrived damaged — " + why + ": " + read + ". Ask for the link again, or copy it whole."
+	return "the link arrived damaged — " + why + ": " + read + ". Every figure is unverified until you check those values and confirm them. Ask for the link again, or copy it whole."
 }
 
 // LinkBanner is the page's notice of a link not read whole, after its

@@ -1,6 +1,7 @@
 package present
 
 import (
+	"errors"
 	"strings"
 	"testing"
 
@@ -106,4 +107,60 @@ func TestLinkNotices(t *testing.T) {
 	if got := LinkRefused("y", false); !strings.HasSuffix(got, "this is the demo") {
 		t.Errorf("refused %q", got)
 	}
+}
+
+// TestUnverifiedSheet: a sheet opened from a damaged link says so, with
+// the button that confirms its values, and marks the values its check
+// suspects at their boxes; confirming clears both.
+func TestUnverifiedSheet(t *testing.T) {
+	sc := scenario.Demo()
+	_ = sc.Set("view", "line")
+	s, err := scenario.Parse(strings.Replace(sc.Sign(), "s2.fit=gate", "s2.fit=ga%0Ate", 1))
+	var dl *scenario.DamagedLink
+	if !errors.As(err, &dl) {
+		t.Fatalf("not damaged: %v", err)
+	}
+	d := scenario.NewDraft(s)
+	d.Damaged(dl)
+	sh := Build(&d, scenario.Evaluate(scenario.Read(s)))
+	if sh.Unverified == "" || sh.Verify.Act.Do != "verify" {
+		t.Errorf("no unverified notice or confirm button: %q %+v", sh.Unverified, sh.Verify)
+	}
+	if f, ok := fieldOf(sh, "s2.fit"); !ok || f.Suspect == "" || f.Error == "" {
+		t.Errorf("segment 2's fittings are not marked at their box: %+v", f)
+	}
+	d.Verify()
+	if sh := Build(&d, scenario.Evaluate(scenario.Read(s))); sh.Unverified != "" {
+		t.Error("still unverified after the values were confirmed")
+	}
+}
+
+// fieldOf finds the box of param on a built sheet.
+func fieldOf(sh Sheet, param string) (Field, bool) {
+	var in func(c Card) (Field, bool)
+	in = func(c Card) (Field, bool) {
+		for _, b := range c.Blocks {
+			fs := b.Fields
+			if b.Fittings != nil {
+				fs = append(fs, b.Fittings.AsText)
+			}
+			for _, f := range fs {
+				if f.Param == param {
+					return f, true
+				}
+			}
+			if b.Card != nil {
+				if f, ok := in(*b.Card); ok {
+					return f, true
+				}
+			}
+		}
+		return Field{}, false
+	}
+	for _, c := range sh.Cards {
+		if f, ok := in(c); ok {
+			return f, true
+		}
+	}
+	return Field{}, false
 }

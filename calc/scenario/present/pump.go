@@ -150,8 +150,8 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 		}
 		return "+ " + b.head(v)
 	}
-	src := "pressure on the source surface (" + b.absolute(n.PressureHead*b.r.Fluid.Density*calc.StandardGravity) + ")"
-	if b.r.SitePressure > 0 && math.Abs(n.PressureHead*b.r.Fluid.Density*calc.StandardGravity-b.r.SitePressure) < 1 {
+	src := "pressure on the source surface (" + b.absolute(n.SurfacePressure) + ")"
+	if b.r.SitePressure > 0 && math.Abs(n.SurfacePressure-b.r.SitePressure) < 1 {
 		src = "atmosphere on the source surface (site pressure " + b.absolute(b.r.SitePressure) + ")"
 	}
 	static := "source surface above the pump centreline"
@@ -408,7 +408,7 @@ func (b *builder) dataSheetCard() Card {
 		}
 		cells[c.param] = vs
 		f := b.field(c.param, FieldPlain, "Data-sheet "+c.name+" ("+c.param+"), comma separated, unit after the last", "")
-		f.Box, _ = b.d.Box(c.param)
+		f.Box = b.d.Typed(c.param)
 		if b.d.Edit == c.param {
 			f.Box = b.d.Text
 		}

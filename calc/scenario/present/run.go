@@ -143,7 +143,7 @@ func (b *builder) runCard(seg int) Card {
 			Block{Kind: BlockEmpty}, Block{Kind: BlockEmpty}, b.warnings(nil, "run", "runview", "liquid")}
 		return c
 	}
-	dp := r.TotalLoss * fl.Density * calc.StandardGravity
+	dp := r.PressureDrop
 	a := &Answer{Label: "Lost at " + b.param("q", r.Flow) + ": head, and pressure drop",
 		Values: []Value{{"answer-value", b.head(r.TotalLoss)}, {"run-dp", b.show(dp, calc.Pressure)}},
 		Subs:   []string{"pipe friction " + b.head(r.MajorLoss) + " + fittings " + b.head(r.MinorLoss) + " (ΣK " + calc.FormatNumber(r.SumK, 3) + ")"}}
@@ -163,7 +163,7 @@ func (b *builder) runCard(seg int) Card {
 		rough += " (" + r.Material.Name + ")"
 	}
 	facts := []Fact{
-		{ID: "run-grad", Label: "pipe friction per " + hundred(b.us), Value: b.head(gradient(r) * 100), Key: true},
+		{ID: "run-grad", Label: "pipe friction per " + hundred(b.us), Value: b.perHundred(r.Gradient), Key: true},
 		{ID: "run-v", Label: "mean velocity", Value: b.show(r.Velocity, calc.Velocity)},
 		{ID: "run-re", Label: "Reynolds number and regime", Value: plainNumber(r.Reynolds) + ", " + r.Regime.String() + " flow"},
 		{Label: "Darcy friction factor f", Value: friction},
@@ -187,20 +187,19 @@ func (b *builder) short(v float64, dim calc.Dimension) string {
 	return calc.FormatValue(v, calc.DefaultUnit(dim, b.us).Symbol, 2)
 }
 
+// perHundred writes a friction gradient (m per m) as the head lost over
+// 100 of the sheet's length unit, in that unit: 0.005 is 0.5 m per 100 m
+// and 0.5 ft per 100 ft (not 100 m's head written in ft).
+func (b *builder) perHundred(gradient float64) string {
+	return b.head(gradient * 100 * calc.DefaultUnit(calc.Length, b.us).Factor)
+}
+
 // hundred is "100 m" or "100 ft" of pipe.
 func hundred(us bool) string {
 	if us {
 		return "100 ft of pipe"
 	}
 	return "100 m of pipe"
-}
-
-// gradient is the run's pipe-friction loss per length of pipe, m per m.
-func gradient(r *scenario.RunResult) float64 {
-	if r.Diameter <= 0 {
-		return 0
-	}
-	return r.Friction * r.Velocity * r.Velocity / (2 * calc.StandardGravity * r.Diameter)
 }
 
 // runKTable lists the run's fittings with the K used for each at the
@@ -214,12 +213,11 @@ func (b *builder) runKTable(r *scenario.RunResult) Block {
 	// A plain grid: names wrap in the answer's narrow column, and on the
 	// narrowest phones each name stands above its three figures.
 	t := &Table{ID: "run-fits", Class: "grid", Head: cols}
-	hv := r.Velocity * r.Velocity / (2 * calc.StandardGravity)
 	for _, k := range r.Fittings {
 		t.Rows = append(t.Rows, Row{Head: fittingName(k.Key), Cells: []Cell{
 			{Text: strconv.Itoa(k.Count), Label: cols[1]},
 			{Text: calc.FormatNumber(k.K, 3), Label: cols[2]},
-			{Text: b.head(float64(k.Count) * k.K * hv), Label: cols[3]},
+			{Text: b.head(k.Head), Label: cols[3]},
 		}})
 	}
 	return Block{Kind: BlockTable, Table: t}
@@ -334,7 +332,7 @@ func (b *builder) sizingTable(rv *scenario.RunView, sz *scenario.Sizing) Block {
 			{Text: b.param("d", row.Pipe.ID), Label: cols[2]},
 			{Text: b.show(r.Velocity, calc.Velocity), Label: cols[3]},
 			{Text: plainNumber(r.Reynolds), Label: cols[4]},
-			{Text: b.head(row.Gradient * 100), Label: cols[5]},
+			{Text: b.perHundred(row.Gradient), Label: cols[5]},
 			{Text: b.head(r.TotalLoss), Label: cols[6]},
 		}})
 	}

@@ -68,14 +68,14 @@ func (b *builder) surgeFacts() []Fact {
 		{ID: "surge-dv", Label: "velocity stopped", Value: b.show(sr.DeltaV, calc.Velocity)},
 	}
 	if sr.StaticKnown {
-		peak := sr.Static + sr.DeltaP
+		peak := sr.Peak
 		peakLabel, lowLabel := "peak: static + rise", "low swing: static − rise"
 		if !sr.Fast {
 			peakLabel, lowLabel = "peak, at most: static + rise", "low swing, at its lowest: static − rise"
 		}
 		out = append(out,
-			Fact{ID: "surge-static", Label: "static pressure at point 2, flow stopped", Value: b.gauge(sr.Static) + " (" + b.head(sr.Static/b.rhoG()) + ")"},
-			Fact{ID: "surge-peak", Label: peakLabel, Value: b.gauge(peak) + " (" + b.head(peak/b.rhoG()) + ")" + b.timesStatic(peak, sr.Static), Key: true},
+			Fact{ID: "surge-static", Label: "static pressure at point 2, flow stopped", Value: b.gauge(sr.Static) + " (" + b.head(sr.StaticHead) + ")"},
+			Fact{ID: "surge-peak", Label: peakLabel, Value: b.gauge(peak) + " (" + b.head(sr.PeakHead) + ")" + b.timesStatic(peak, sr.Static), Key: true},
 		)
 		low := "reaches the vapour pressure: the liquid column may part and rejoin with a blow larger than the rise above"
 		if !sr.ColumnParts {
@@ -117,14 +117,6 @@ func (b *builder) surgeFacts() []Fact {
 	return out
 }
 
-// rhoG is ρ·g of the sheet's liquid (1 without one, never used then).
-func (b *builder) rhoG() float64 {
-	if f := b.r.Fluid; f != nil {
-		return f.Density * calc.StandardGravity
-	}
-	return 1
-}
-
 // timesStatic says how many times the static pressure a peak is.
 func (b *builder) timesStatic(peak, static float64) string {
 	if !(static > 0) {
@@ -145,7 +137,7 @@ func (b *builder) hydroFacts(t *calc.TurbineResult) []Fact {
 		{ID: "turb-loss-share", Label: "line losses as a share of the gross head", Value: percent(t.LossShare)},
 		{ID: "turb-net-share", Label: "net head as a share of the gross head", Value: percent(t.NetShare)},
 		{ID: "turb-static", Label: "pressure at the turbine inlet with no flow, at point 2's level: what the inlet valve and the pipe there hold at rest, before any surge",
-			Value: b.gauge(t.StaticInlet) + " (" + b.head(t.StaticInlet/b.rhoG()) + ")", Key: true},
+			Value: b.gauge(t.StaticInlet) + " (" + b.head(t.StaticInletHead) + ")", Key: true},
 	}
 	if best := b.r.BestTurbine; best != nil {
 		out = append(out, Fact{ID: "turb-best-note",

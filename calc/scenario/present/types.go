@@ -20,6 +20,11 @@ type Sheet struct {
 	Others   []string
 	Cautions []string
 	Methods  []Method
+	// Unverified says, for a sheet opened from a damaged link, that every
+	// figure is unverified and what to do; "" for a sound sheet. Verify
+	// confirms the values.
+	Unverified string
+	Verify     Button
 }
 
 // Card is one card of a view.
@@ -114,6 +119,8 @@ type Field struct {
 	Numeric     bool
 	Options     []Option // the unit picker (FieldQuantity) or the choices (FieldPicker, FieldRef)
 	Error       string   // why the value cannot be used, worded, "" when fine
+	Keep        *Button  // keeps a value that looks like a slip as typed; nil unless it does
+	Suspect     string   // the damaged link's check names this value as possibly altered, worded; "" otherwise
 	Warn        bool     // a warning about the results names this value
 	Solved      string   // FieldSolved: the answer
 }
@@ -126,10 +133,11 @@ type Option struct {
 
 // Action is what a button does to the sheet.
 type Action struct {
-	Do    string // choose, switch, seg-move, seg-remove, seg-add, row-add, row-remove, fit-step
+	Do    string // choose, switch, seg-move, seg-remove, seg-add, row-add, row-remove, fit-step, keep
 	Param string // the parameter, group or fitting list acted on
 	Value string // the value chosen, the side, or the fitting key
 	N     int    // a segment number, a row, a step (+1, −1)
+	Step  int    // a segment's move: −1 up, +1 down
 }
 
 // Button is a push button.

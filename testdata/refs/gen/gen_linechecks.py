@@ -5,8 +5,9 @@ carries full (ref-highpoint.case), components on segments
 
 Components (python3-mpmath and GNU units): a drop rated at a flow scales
 with the flow squared, dp = dp_r (Q/Q_r)^2 (or a head h_r (Q/Q_r)^2); a
-control valve by Kv (IEC 60534-1: m^3/h of water of 1000 kg/m^3 at 1 bar)
-drops dp = 1 bar (Q/Kv)^2 rho/1000; a Cv (ANSI/ISA-75.01.01: US gal/min at
+control valve by Kv (IEC 60534-1: m^3/h of water at 1 bar) drops
+dp = 1 bar (Q/Kv)^2 rho/rho0, rho0 water at 15 degC (IEC 60534-2-1), here
+python3-iapws' IAPWS97(T=288.15, P=0.101325).rho; a Cv (ANSI/ISA-75.01.01: US gal/min at
 1 psi) is turned into a Kv by GNU units' (gallon/min)^2/psi in
 (m^3/hr)^2/bar.  The pipe's friction is Darcy-Weisbach with
 Colebrook-White.  The expected pump head is the friction plus the
@@ -14,9 +15,10 @@ components' drops as heads of the liquid (equal levels, both ends open).
 
 High points (python3-mpmath, mp.dps = 40): a gravity main from an open
 tank (gauge 0 at its surface z1, no velocity) over a crest.  With the
-surplus head taken at the outlet, the pressure at the crest (the end of
-segment 1) at flow Q is
-    p = p_site + rho g (z1 - hf1(Q) - V^2/(2g) - z_crest)
+surplus head taken at the outlet, the pressure at the crest's crown (the
+end of segment 1, half the inside diameter D above its centreline) at
+flow Q is
+    p = p_site + rho g (z1 - hf1(Q) - V^2/(2g) - z_crest - D/2)
 (alpha = 1, turbulent), hf1 = f (L/D) V^2/(2g) with f from Colebrook-White
 (Lambert-W closed form).  The largest flow with the column whole is the
 root of p = p_v, found by mpmath.findroot.  g = 9.80665 m/s^2.
@@ -27,6 +29,8 @@ Run with /usr/bin/python3 testdata/refs/gen/gen_linechecks.py
 
 import os
 import sys
+
+from iapws import IAPWS97
 
 sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
 import gen_cases  # noqa: E402  (its Writer, sig, colebrook; its cases run only as a script)
@@ -47,7 +51,7 @@ class Writer(gen_cases.Writer):
 def highpoint_cases():
     w = Writer("ref-highpoint.case",
                "a gravity main over a crest: where the column breaks and the largest flow the line carries full",
-               "python3-mpmath (crest pressure p_site + rho g (z1 - hf - V^2/2g - z) = p_v solved by findroot; "
+               "python3-mpmath (crest crown pressure p_site + rho g (z1 - hf - V^2/2g - z - D/2) = p_v solved by findroot; "
                "Darcy-Weisbach with Colebrook-White)")
     rho, mu = mp.mpf(1000), mp.mpf("0.001")
     site = mp.mpf(101325)
@@ -63,7 +67,7 @@ def highpoint_cases():
             v = q / area
             f = colebrook(rho * v * dd / mu, ee / dd)
             hf = f * ll / dd * v * v / (2 * G)
-            return site + rho * G * (mp.mpf(z1) - hf - v * v / (2 * G) - mp.mpf(zc)) - pvv
+            return site + rho * G * (mp.mpf(z1) - hf - v * v / (2 * G) - mp.mpf(zc) - dd / 2) - pvv
 
         q = mp.findroot(crest, mp.mpf("0.01"))
         assert abs(crest(q)) < mp.mpf(10) ** -20
@@ -81,8 +85,10 @@ def highpoint_cases():
 def component_cases():
     w = Writer("ref-components.case",
                "components on a segment: drops rated at a flow and control valves by Cv or Kv",
-               "python3-mpmath and GNU units (dp = dp_r (Q/Q_r)^2; Kv per IEC 60534-1, Cv per ANSI/ISA-75.01.01, "
-               "Cv to Kv by GNU units; Darcy-Weisbach with Colebrook-White)")
+               "python3-mpmath, python3-iapws and GNU units (dp = dp_r (Q/Q_r)^2; Kv per IEC 60534-1, Cv per "
+               "ANSI/ISA-75.01.01, Cv to Kv by GNU units, relative density to water at 15 degC per IEC 60534-2-1 "
+               "with IAPWS-IF97; Darcy-Weisbach with Colebrook-White)")
+    rho0 = mp.mpf(repr(IAPWS97(T=288.15, P=0.101325).rho))
     kv_per_cv = mp.sqrt(units("(gallon/min)^2/psi", "(m^3/hr)^2/bar"))
     mu = mp.mpf("0.0025")
     for name, rho, q, cmp, drops in [
@@ -104,7 +110,7 @@ def component_cases():
                 h += mp.mpf(a) * (qv / mp.mpf(b[0])) ** 2
             else:
                 kv = mp.mpf(a) * (kv_per_cv if kind == "cv" else 1)
-                h += 100000 * (qv * 3600 / kv) ** 2 * rhov / 1000 / (rhov * G)
+                h += 100000 * (qv * 3600 / kv) ** 2 * rhov / rho0 / (rhov * G)
         query = ("liq=custom&rho=%skg/m3&mu=2.5mPa.s&pv=2kPa&baro=101.325kPa&p1=0kPa&v1=0m/s&p2=0kPa&v2=0m/s"
                  "&z1=10m&z2=10m&q=%sL/s&solve=hp&s1.l=200m&s1.d=100mm&s1.eps=0.05mm&s1.cmp=%s" % (rho, q, cmp))
         w.case(name, query, ["balance.value = %s m ± 1e-9 rel" % sig(h)])

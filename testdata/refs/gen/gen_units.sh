@@ -89,6 +89,8 @@ W|W|W|-
 MW|MW|W|-
 hp|horsepower|W|-
 hp(E)|electrichorsepower|W|-
+Btu/h|btu_IT/hr|W|-
+TR|tonref|W|-
 m²|m^2|m^2|-
 cm²|cm^2|m^2|-
 mm²|mm^2|m^2|-
