@@ -21,9 +21,8 @@ func (s *sheet) focusTargets(a present.Action) (ids []string, follow bool) {
 	num := strconv.Itoa
 	switch a.Do {
 	case "seg-move":
-		delta, _ := strconv.Atoi(a.Value)
-		n := num(a.N + delta)
-		if delta < 0 {
+		n := num(a.N + a.Step)
+		if a.Step < 0 {
 			return []string{"seg-up-" + n, "seg-down-" + n}, true
 		}
 		return []string{"seg-down-" + n, "seg-up-" + n}, true
