@@ -68,6 +68,10 @@ type Component struct {
 	RatedHead float64 // m of the flowing liquid at RatedFlow (ComponentRated, head form)
 	RatedFlow float64 // m³/s (ComponentRated)
 	Kv        float64 // m³/h at 1 bar (ComponentValve)
+	// FL and XFz are a ComponentValve's liquid pressure recovery factor
+	// and incipient-cavitation factor from its data sheet, for
+	// CheckValveLiquid; 0 when not given. They do not change the drop.
+	FL, XFz float64
 }
 
 // ComponentLoss is a component's drop at one flow.

@@ -150,6 +150,9 @@ const (
 	ReasonValveFactor             // OutOfRange: a valve's FL or xFz (Value) must be above Min (0) and at most Max (1)
 	ReasonValveInletBoils         // BelowLimit: a valve's inlet pressure (Value) must be above the liquid's vapour pressure (Min)
 	ReasonColumnBreaksNoFlow      // NoSolution: the column breaks at a high point even with no flow (Figures[0] the segment), so no flow keeps the pipe full
+	ReasonLoopUnknown             // Inconsistent: a closed loop solves for the pump head or the flow only (no points, no static head)
+	ReasonHeatLiquid              // Inconsistent: a load and its flow need the liquid's specific heat: water, seawater or a glycol mix, not typed properties
+	ReasonValveNeedsStatic        // Missing: a valve's IEC 60534-2-1 check needs the loop's static pressure (the pressure at its inlet)
 	reasonEnd
 )
 
@@ -283,6 +286,9 @@ var reasonNames = [...]string{"none",
 	"valve factor",
 	"valve inlet boils",
 	"column breaks no flow",
+	"loop unknown",
+	"heat liquid",
+	"valve needs static",
 }
 
 // countErr reports n items where min to max are accepted (TooFew or

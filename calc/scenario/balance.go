@@ -8,6 +8,9 @@ import (
 var balanceParams = []string{"p1", "p2", "z1", "z2", "v1", "v2", "d1", "d2", "hp", "ht", "hf", "solve"}
 
 func (e *eval) wantsBalance() bool {
+	if e.isLoop() {
+		return true
+	}
 	for _, p := range balanceParams {
 		if e.has(p) {
 			return true
@@ -19,6 +22,15 @@ func (e *eval) wantsBalance() bool {
 // balance reads the two points and the heads, solves, and fills
 // Result.Balance (and Result.Run when the run sets the friction).
 func (e *eval) balance(run *RunResult, line *calc.Line) {
+	if e.isLoop() {
+		if !e.siteKnown() || e.res.Fluid == nil || e.has("l") && run == nil || e.in.Segments > 0 && line == nil {
+			return // their own errors say why
+		}
+		if b, ok := e.loopBalance(run, line); ok {
+			e.solveBalance(b, run)
+		}
+		return
+	}
 	solve := calc.SolvePumpHead
 	if e.has("solve") {
 		u, err := calc.ParseUnknown(e.in.Choice("solve"))
@@ -64,7 +76,11 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 	b.Out.P = e.pressure("p2", calc.SolveP2, solve, &ok)
 	b.In.Z = need("z1", calc.SolveZ1)
 	b.Out.Z = need("z2", calc.SolveZ2)
-	b.Q = need("q", calc.SolveFlow)
+	if solve != calc.SolveFlow {
+		q, good := e.flow()
+		ok = ok && good
+		b.Q = q
+	}
 	e.point("1", &b.In, &ok)
 	e.point("2", &b.Out, &ok)
 	b.PumpHead = e.optionalHead("hp", calc.SolvePumpHead, solve, &ok)
@@ -100,6 +116,13 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 	if !ok {
 		return
 	}
+	e.solveBalance(b, run)
+}
+
+// solveBalance solves b and fills Result.Balance (and Result.Run when the
+// run sets the friction).
+func (e *eval) solveBalance(b calc.Balance, run *RunResult) {
+	solve := b.Unknown
 	e.bal = &b
 	br, err := b.Solve()
 	if err != nil {

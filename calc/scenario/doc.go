@@ -236,6 +236,26 @@
 //	cr      the restraint factor c, a plain number (blank: 1, a pipe with
 //	        expansion joints; 1 − ν² for one anchored throughout)
 //
+// Heating and cooling loops (loop.go, heat.go, valve.go):
+//
+//	loop    1 for a closed loop (the two points are one, at the pump's
+//	        inlet: no static head; p1, z1, v1… are kept but unread), 0 or
+//	        blank for a line between two points
+//	pexp    the loop's static pressure where its expansion vessel or
+//	        pressurisation unit connects (pexpref g or a), for NPSH, the
+//	        valves' check and the liquid's pressure; zexp that
+//	        connection's elevation, on the datum of zp
+//	load    a heating or cooling load, e.g. 250kW, 850000Btu/h, 70TR: the
+//	        flow is worked out from it (either q or load, group qby);
+//	tsup    the supply and return temperatures; with q instead of load,
+//	tret    the load the flow carries is shown
+//	dpc     the drop of the circuit the control valves vary (blank: the
+//	        rest of the line), for their authority
+//	sal     seawater's absolute salinity in g/kg, 0–120 (blank: 35)
+//
+// A control valve's FL and xFz follow its Kv or Cv in sN.cmp:
+// valve:kv40 fl0.9 xfz0.45.
+//
 // The link's integrity field (see CheckParam, Sign):
 //
 //	ck      written first by "Copy link": eight hex digits, the CRC-32 of

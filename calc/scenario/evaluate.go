@@ -33,14 +33,15 @@ func Evaluate(in Inputs) Result {
 	e := &eval{in: &res.Inputs, us: in.US, res: &res}
 	e.site()
 	e.liquid()
+	e.heatFromLoad()
 	run := e.run()
 	line := e.line()
-	if e.wantsBalance() {
+	if e.wantsBalance() && !e.in.Bad("loop") {
 		e.balance(run, line)
 	}
-	if res.Line == nil && line != nil && res.Fluid != nil && e.has("q") {
+	if res.Line == nil && line != nil && res.Fluid != nil && e.hasFlow() {
 		// The line's own losses still show when the balance cannot be solved.
-		if q, ok := e.quantity("q"); ok {
+		if q, ok := e.flow(); ok {
 			if lr, err := line.Evaluate(*res.Fluid, q); err == nil {
 				res.Line = &lr
 			} else {
@@ -48,11 +49,13 @@ func Evaluate(in Inputs) Result {
 			}
 		}
 	}
-	if res.Run == nil && run != nil && res.Fluid != nil && e.has("q") {
-		if q, ok := e.quantity("q"); ok {
+	if res.Run == nil && run != nil && res.Fluid != nil && e.hasFlow() {
+		if q, ok := e.flow(); ok {
 			e.evalRun(run, q)
 		}
 	}
+	e.heatOfFlow()
+	e.valves()
 	e.runView(line)
 	e.pump()
 	e.npsh(line)
@@ -252,7 +255,11 @@ func (e *eval) liquid() {
 		}
 		props := calc.Water
 		if liq == "seawater" {
-			props = calc.Seawater
+			if e.in.Bad("sal") {
+				return // Read reported it
+			}
+			sal := e.salinity()
+			props = func(t, p float64) (calc.Fluid, error) { return calc.SeawaterAt(t, p, sal) }
 		}
 		psat, err := calc.SaturationPressure(t)
 		if err != nil {
@@ -336,6 +343,22 @@ func (e *eval) linePressure() (float64, LiquidSource, bool) {
 			return 0, 0, false
 		}
 		return p, LiquidTyped, true
+	}
+	if e.isLoop() {
+		// A closed loop's level is its static pressure at the connection
+		// of its expansion vessel or pressurisation unit.
+		if !e.has("pexp") {
+			return site, LiquidSite, e.siteKnown()
+		}
+		v, ok := e.in.Value("pexp")
+		if !ok {
+			return 0, 0, false
+		}
+		p, ok := absolute(v)
+		if !ok || !(p > 0) {
+			return 0, 0, false
+		}
+		return p, LiquidLoop, true
 	}
 	solve := e.in.Choice("solve")
 	sum, n := 0.0, 0

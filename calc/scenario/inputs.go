@@ -116,7 +116,7 @@ func (in *Inputs) AnyBad(params ...string) bool {
 var lookedUp = map[string]bool{"nps": true, "sch": true, "mat": true, "dsn": true, "dss": true, "ddn": true, "dds": true}
 
 // refParams names the gauge/absolute switch of the pressures that take one.
-var refParams = map[string]string{"p1": "p1ref", "p2": "p2ref", "pl": "plref", "cv": "cvref"}
+var refParams = map[string]string{"p1": "p1ref", "p2": "p2ref", "pl": "plref", "cv": "cvref", "pexp": "pexpref"}
 
 // Read reads every parameter of s exactly once. It never fails: problems
 // are in Inputs.Problems.
@@ -327,6 +327,18 @@ func ownLimits(base, text string, v Value) *calc.FieldError {
 	case "epipe":
 		if !(v.SI > 0) {
 			return calc.NewFieldError(base, calc.NotPositive).Got(calc.Fig(v.SI, calc.Pressure)).Because(calc.ReasonWallModulus, calc.Fig(200e9, calc.Pressure), calc.Fig(1e9, calc.Pressure))
+		}
+	case "sal":
+		if !(v.SI >= 0 && v.SI <= calc.SeawaterMaxSalinity*1000) {
+			return calc.NewFieldError(base, calc.OutOfRange).Got(calc.Num(v.SI/1000)).Within(calc.Num(0), calc.Num(calc.SeawaterMaxSalinity)).Because(calc.ReasonSeawaterSalinity)
+		}
+	case "load":
+		if v.SI < 0 {
+			return calc.NewFieldError(base, calc.Negative).Got(calc.Fig(v.SI, calc.Power))
+		}
+	case "dpc":
+		if v.SI < 0 {
+			return calc.NewFieldError(base, calc.Negative).Got(calc.Fig(v.SI, calc.Pressure))
 		}
 	case "cr":
 		if !(v.SI > 0 && v.SI <= 2) {

@@ -13,6 +13,8 @@ var groupCases = map[string]struct {
 	base  string
 	sides map[string]string // side key → its parameters as a query
 }{
+	"qby": {"view=balance&liq=water&t=10C&loop=1&l=100m&nps=3&sch=40&mat=steel&tsup=7C&tret=12C",
+		map[string]string{"q": "q=5L/s", "load": "load=100kW"}},
 	"pt1": {"view=balance&liq=water&t=20C&p1=100kPa&z1=0m&p2=0kPa&z2=0m&v2=0m/s&q=5L/s&solve=hp&hf=0m",
 		map[string]string{"v": "v1=2m/s", "d": "d1=50mm"}},
 	"pt2": {"view=balance&liq=water&t=20C&p1=100kPa&z1=0m&v1=0m/s&p2=0kPa&z2=0m&q=5L/s&solve=hp&hf=0m",

@@ -21,8 +21,20 @@ func (e *eval) line() *calc.Line {
 		e.bad("l", calc.Inconsistent).With("s1.l").Because(calc.ReasonRunOrSegments)
 		return nil
 	}
+	if e.in.Bad("loop") {
+		return nil // Read reported it: open or closed decides the levels
+	}
 	ln := &calc.Line{}
 	ok := true
+	// A closed loop ends where it starts; a segment whose end is not
+	// given is level with the one before.
+	loop := e.isLoop()
+	prevZ, good := 0.0, true
+	if loop {
+		prevZ, good = e.loopStartZ()
+		ok = ok && good
+	}
+	startZ := prevZ
 	for i := 1; i <= n; i++ {
 		pre := fmt.Sprintf("s%d.", i)
 		if !e.has(pre + "l") {
@@ -37,6 +49,13 @@ func (e *eval) line() *calc.Line {
 		seg.Components = cmp.Components
 		zp := pre + "z"
 		switch {
+		case loop && i == n:
+			seg.EndZ = startZ
+			if z, typed := e.in.Value(zp); typed && math.Abs(z.SI-startZ) > 0.01 {
+				e.warnCalc("line", calc.Warn(zp, calc.CautionLastSegmentEnd, calc.Fig(z.SI, calc.Length), calc.Fig(startZ, calc.Length)))
+			}
+		case loop && !e.has(zp):
+			seg.EndZ = prevZ
 		case e.has(zp):
 			z, g := e.quantity(zp)
 			good = good && g
@@ -50,12 +69,13 @@ func (e *eval) line() *calc.Line {
 			good = false
 		}
 		ok = ok && good
+		prevZ = seg.EndZ
 		ln.Segments = append(ln.Segments, seg)
 	}
 	if !ok {
 		return nil
 	}
-	if e.has("z2") && e.has(SegmentParam(n, "z")) {
+	if !loop && e.has("z2") && e.has(SegmentParam(n, "z")) {
 		if z2, good := e.quantity("z2"); good && math.Abs(z2-ln.Segments[n-1].EndZ) > 0.01 {
 			e.warnCalc("line", calc.Warn(SegmentParam(n, "z"), calc.CautionLastSegmentEnd, calc.Fig(ln.Segments[n-1].EndZ, calc.Length), calc.Fig(z2, calc.Length)))
 		}
@@ -75,7 +95,10 @@ const componentNameMax = 40
 //     liquid (3.2m, 10ft), the flow with its unit (12L/s, 190gpm);
 //   - cvN or kvN: a control valve by its flow coefficient at its present
 //     opening, Cv in US gal/min at 1 psi or Kv in m³/h at 1 bar (cv25,
-//     kv40).
+//     kv40), followed, space separated, by its data sheet's liquid
+//     pressure recovery factor flN and incipient-cavitation factor xfzN
+//     when known (kv40 fl0.9 xfz0.45), each above 0 and at most 1, for
+//     the IEC 60534-2-1 check.
 //
 // "chiller:45kPa@12L/s,coil:3.2m@12L/s,valve:kv40" is a chiller, a coil
 // and a control valve. Numbers take a decimal point; units are required.
@@ -103,13 +126,44 @@ func ParseComponents(text string) ([]calc.Component, error) {
 		low := strings.ToLower(spec)
 		switch {
 		case strings.HasPrefix(low, "cv") || strings.HasPrefix(low, "kv"):
-			v, err := strconv.ParseFloat(strings.TrimSpace(spec[2:]), 64)
+			// The coefficient, then the data sheet's factors if given:
+			// "kv40 fl0.9 xfz0.45" (an older link's bare "kv40" reads the same).
+			words := strings.Fields(spec[2:])
+			if len(words) == 0 {
+				return nil, bad(calc.NotANumber, calc.ReasonValveNumber, name, spec)
+			}
+			v, err := strconv.ParseFloat(words[0], 64)
 			if err != nil {
 				return nil, bad(calc.NotANumber, calc.ReasonValveNumber, name, spec)
 			}
 			c.Kind, c.Kv = calc.ComponentValve, v
 			if low[0] == 'c' {
 				c.Kv = calc.KvFromCv(v)
+			}
+			for _, w := range words[1:] {
+				lw := strings.ToLower(w)
+				var dst *float64
+				var num string
+				switch {
+				case strings.HasPrefix(lw, "xfz"):
+					dst, num = &c.XFz, w[3:]
+				case strings.HasPrefix(lw, "fl"):
+					dst, num = &c.FL, w[2:]
+				default:
+					return nil, bad(calc.UnknownChoice, calc.ReasonComponentSpec, name, spec)
+				}
+				f, err := strconv.ParseFloat(strings.TrimPrefix(num, "="), 64)
+				if err != nil {
+					return nil, bad(calc.NotANumber, calc.ReasonValveNumber, name, w)
+				}
+				if !(f > 0 && f <= 1) {
+					field := "fl"
+					if dst == &c.XFz {
+						field = "xfz"
+					}
+					return nil, calc.NewFieldError("cmp", calc.OutOfRange).Typed(name+":"+w).Got(calc.Num(f)).Within(calc.Num(0), calc.Num(1)).Because(calc.ReasonValveFactor).With(field)
+				}
+				*dst = f
 			}
 		case strings.Contains(spec, "@"):
 			dropText, flowText, _ := strings.Cut(spec, "@")

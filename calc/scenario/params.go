@@ -64,7 +64,7 @@ var Table = []Param{
 	{Name: "name", Label: "sheet title", Box: "Sheet title", Hint: "(site, equipment, date)", Kind: KindText},
 
 	{Name: "liq", Label: "liquid", Box: "Liquid", Kind: KindChoice, choices: func() []Choice {
-		return []Choice{{"water", "Water"}, {"seawater", "Seawater, 35 g/kg"}, {"eg", "Ethylene glycol in water"},
+		return []Choice{{"water", "Water"}, {"seawater", "Seawater or brine"}, {"eg", "Ethylene glycol in water"},
 			{"pg", "Propylene glycol in water"}, {"custom", "Other liquid (typed properties)"}}
 	}},
 	grp(q("gly", "glycol share by mass", "Glycol share", "(% by mass)", calc.Dimensionless, "%", "%", "enter the glycol share of the mix, e.g. 30 % by mass"), "gly"),
@@ -89,7 +89,7 @@ var Table = []Param{
 	grp(q("v2", "velocity at 2", "Mean velocity", "(0 at a tank surface)", calc.Velocity, "m/s", "ft/s", "enter the velocity at point 2 (0 for a large tank surface), or its diameter"), "pt2"),
 	grp(q("d2", "diameter at 2", "Inside diameter", "(velocity = flow ÷ area)", calc.Length, "mm", "in", "enter the inside diameter at point 2"), "pt2"),
 
-	q("q", "flow", "Flow", "", calc.Flow, "L/s", "gpm", "enter the flow"),
+	grp(q("q", "flow", "Flow", "", calc.Flow, "L/s", "gpm", "enter the flow, or the heat load it carries"), "qby"),
 	q("hp", "pump head", "Pump head", "(added; blank if none)", calc.Length, "m", "ft", "enter the pump head (0 if there is no pump)"),
 	q("ht", "turbine head", "Turbine head", "(taken; blank if none)", calc.Length, "m", "ft", "enter the turbine head (0 if there is no turbine)"),
 	grp(q("hf", "friction head", "Friction head", "(all losses, 1 to 2)", calc.Length, "m", "ft", "enter the friction head, or describe the pipe run to compute it"), "fric"),
@@ -192,6 +192,24 @@ var Table = []Param{
 	q("epipe", "wall's elastic modulus", "Wall's elastic modulus", "(blank: from the material)", calc.Pressure, "GPa", "ksi", "enter the elastic modulus of the pipe wall"),
 	q("kliq", "liquid's bulk modulus", "Liquid's bulk modulus", "(blank for water and seawater)", calc.Pressure, "GPa", "ksi", "enter the liquid's bulk modulus"),
 	{Name: "cr", Label: "restraint factor", Box: "Restraint factor c", Hint: "(blank: 1, expansion joints throughout)", Kind: KindNumber},
+
+	// Heating and cooling loops (loop.go, heat.go, valve.go): a closed
+	// loop's switch and its static pressure, the flow from a heat load,
+	// the control valves' circuit, and a seawater or brine's salinity.
+	{Name: "loop", Label: "kind of line", Box: "The line is", Kind: KindChoice, choices: func() []Choice {
+		return []Choice{{"0", "between two points"}, {"1", "a closed loop"}}
+	}},
+	q("pexp", "loop's static pressure", "Static pressure of the loop", "(where the expansion vessel or pressurisation unit connects; for NPSH and the valves)",
+		calc.Pressure, "kPa", "psi", "enter the loop's static pressure where its expansion vessel or pressurisation unit connects"),
+	ref("pexpref", "gauge/absolute of the loop's static pressure"),
+	q("zexp", "elevation of the vessel's connection", "Elevation of that connection", "(same datum as the pump's)", calc.Length, "m", "ft",
+		"enter the elevation where the expansion vessel or pressurisation unit connects"),
+	grp(q("load", "heat load", "Heat load", "(heating or cooling)", calc.Power, "kW", "Btu/h", "enter the heating or cooling load the flow carries"), "qby"),
+	q("tsup", "supply temperature", "Supply temperature", "(to the load)", calc.Temperature, "°C", "°F", "enter the supply temperature (the liquid going to the load)"),
+	q("tret", "return temperature", "Return temperature", "(from the load)", calc.Temperature, "°C", "°F", "enter the return temperature (the liquid coming back from the load)"),
+	q("dpc", "drop of the valve's circuit", "Drop of the circuit the valves control", "(blank: the rest of the line)", calc.Pressure, "kPa", "psi",
+		"enter the pressure drop of the circuit whose flow the valve varies, without the valve"),
+	{Name: "sal", Label: "salinity", Box: "Salinity", Hint: "(g/kg, absolute; blank: 35)", Kind: KindNumber},
 
 	// The values kept as typed though they look like slips (slips.go).
 	{Name: KeepParam, Label: "values kept as typed", Kind: KindText},
@@ -456,6 +474,7 @@ var Groups = []Group{
 	{"gdp", "Pipe at the discharge gauge given by", []Side{{"d", "inside diameter", []string{"dd"}}, {"nps", "nominal size", []string{"ddn", "dds"}}}},
 	{"spfor", "Speed change to reach", []Side{{"q", "a flow", []string{"qsp"}}, {"h", "a head", []string{"hsp"}}}},
 	{"npsh", "NPSH required", []Side{{"sheet", "from the data sheet", []string{"pnpsh"}}, {"typed", "typed in", []string{"npshr"}}}},
+	{"qby", "Flow given as", []Side{{"q", "a flow", []string{"q"}}, {"load", "a heat load", []string{"load"}}}},
 }
 
 // LookupGroup returns a group by key; "s2.pipe" is the pipe group of

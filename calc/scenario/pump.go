@@ -148,7 +148,7 @@ func (e *eval) pump() {
 // else the duty flow q; NPSHr is typed (npshr), else the data sheet's at
 // that flow. With a balance it also gives NPSHa over the chart's flows.
 func (e *eval) npsh(line *calc.Line) {
-	if !e.has("zp") || e.res.Fluid == nil || !e.siteKnown() {
+	if !e.has("zp") || e.res.Fluid == nil || !e.siteKnown() || e.in.Bad("loop") {
 		return
 	}
 	fl := *e.res.Fluid
@@ -156,7 +156,13 @@ func (e *eval) npsh(line *calc.Line) {
 	zp, good := e.quantity("zp")
 	ok = ok && good
 	src := calc.NPSHInput{PumpZ: zp}
-	if b := e.bal; b != nil && b.Unknown != calc.SolveP1 && b.Unknown != calc.SolveZ1 {
+	if e.isLoop() {
+		// The loop's static pressure at its vessel's connection, carried
+		// by elevation to the pump's inlet.
+		p, z, good := e.loopStatic()
+		ok = ok && good
+		src.SurfacePressure, src.SurfaceZ = p, z
+	} else if b := e.bal; b != nil && b.Unknown != calc.SolveP1 && b.Unknown != calc.SolveZ1 {
 		src.SurfacePressure, src.SurfaceZ = b.In.P, b.In.Z
 	} else {
 		src.SurfacePressure = e.pressure("p1", calc.SolveP1, calc.SolvePumpHead, &ok)
@@ -172,8 +178,8 @@ func (e *eval) npsh(line *calc.Line) {
 		q, haveQ = pr.Operating.Q, true
 	case e.bal != nil && e.bal.Unknown != calc.SolveFlow:
 		q, haveQ = e.bal.Q, true
-	case e.has("q"):
-		q, haveQ = e.quantity("q")
+	case e.hasFlow():
+		q, haveQ = e.flow()
 	}
 	typed := e.has("hs")
 	if typed {
@@ -191,7 +197,7 @@ func (e *eval) npsh(line *calc.Line) {
 			return // the segments' own errors say why: no suction loss of zero in their place
 		}
 		if after > 0 && !haveQ {
-			e.quantity("q") // says the flow is needed
+			e.flow() // says the flow is needed
 			ok = false
 		}
 	}

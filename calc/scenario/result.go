@@ -54,6 +54,12 @@ type Result struct {
 	Turbine     *calc.TurbineResult // the turbine's output at the flow
 	BestTurbine *calc.TurbineResult // at the flow that gives the most output
 	Surge       *SurgeResult        // a closure at point 2, when a closure time is given
+	// Heat is the load the flow carries between the supply and return
+	// temperatures, or the flow worked out from a load (heat.go).
+	Heat *Heat
+	// Valves are the line's control valves at the flow: authority and the
+	// IEC 60534-2-1 check (valve.go).
+	Valves []ValveResult
 }
 
 // Warning is a caution about a result. Param names the input it concerns,
@@ -130,6 +136,7 @@ const (
 	LiquidSite                           // the site pressure: no pl and no point pressure
 	LiquidSaturation                     // the vapour pressure: the points' mean or the site pressure lay below it
 	LiquidTypedProps                     // a liquid of typed properties: no pressure
+	LiquidLoop                           // a closed loop's static pressure (pexp) at its connection
 )
 
 // GlycolMix is the make-up of a glycol–water mix and its freezing point.

@@ -161,7 +161,7 @@ func (e *eval) runView(line *calc.Line) {
 		if !ok {
 			return
 		}
-		q, ok := e.quantity("q")
+		q, ok := e.flow()
 		if !ok {
 			return
 		}

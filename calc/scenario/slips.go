@@ -46,7 +46,7 @@ const (
 // (TestSlipTableCoversEveryField).
 var slipRules = map[string]slipRule{
 	"p1": slipPascals, "p2": slipPascals, "pl": slipPascals, "ps": slipPascals, "pd": slipPascals,
-	"baro": slipPascals, "gss": slipPascals, "gsd": slipPascals,
+	"baro": slipPascals, "gss": slipPascals, "gsd": slipPascals, "pexp": slipPascals,
 	"epipe": slipGigapascals, "kliq": slipGigapascals,
 	"etam": slipShare, "etat": slipShare, "peff": slipShare, "gly": slipGlycol, "glyv": slipGlycol, "spd": slipShare,
 	"gcs": slipAccuracy, "gcd": slipAccuracy, "uqm": slipAccuracy, "upin": slipAccuracy,
@@ -54,8 +54,9 @@ var slipRules = map[string]slipRule{
 
 // slipExempt are the pressures and percentages with no slip rule, and why.
 var slipExempt = map[string]string{
-	"pv": "a vapour pressure may be a few pascals (a cold liquid, an oil)",
-	"cv": "the Convert view converts whatever it is given, small or not",
+	"pv":  "a vapour pressure may be a few pascals (a cold liquid, an oil)",
+	"cv":  "the Convert view converts whatever it is given, small or not",
+	"dpc": "a small circuit's drop may well be a few thousand pascals, and some gauges read in Pa",
 }
 
 // KeepParam is the parameter listing the values kept as typed though they

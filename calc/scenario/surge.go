@@ -64,8 +64,8 @@ func (e *eval) surge(run *RunResult, line *calc.Line) {
 	switch {
 	case e.res.Balance != nil:
 		q = e.res.Balance.Q
-	case e.has("q"):
-		if q, ok = e.quantity("q"); !ok {
+	case e.hasFlow():
+		if q, ok = e.flow(); !ok {
 			return // Read reported it: no surge from a flow in error
 		}
 	}
@@ -117,8 +117,10 @@ func (e *eval) bulkModulus() (float64, string, bool) {
 		k, ok := e.quantity("kliq")
 		return k, "typed", ok
 	}
+	// At the pressure the density was taken at: the wave speed is
+	// √(K/ρ), both of one state of the liquid.
 	fl := e.res.Fluid
-	p := math.Max(e.res.SitePressure, fl.VapourPressure)
+	p := math.Max(fl.Pressure, fl.VapourPressure)
 	switch e.in.Choice("liq") {
 	case "", "water":
 		k, err := calc.WaterBulkModulus(fl.Temperature, p)
@@ -128,6 +130,9 @@ func (e *eval) bulkModulus() (float64, string, bool) {
 		}
 		return k, "if97", true
 	case "seawater":
+		if e.salinity() != calc.SeawaterSalinity {
+			break // Mackenzie's sound speed is taken at 35 g/kg only
+		}
 		k, err := calc.SeawaterBulkModulus(fl.Temperature, p)
 		if err != nil {
 			e.failErr("t", err)

@@ -28,12 +28,14 @@ const (
 	PartTurbine                    // Turbine
 	PartSurge                      // Surge
 	PartConvert                    // Convert
+	PartHeat                       // Heat: the load a flow carries, or the flow for a load
+	PartValves                     // Valves: authority and the IEC 60534-2-1 check
 	partEnd
 )
 
 var partNames = [...]string{"", "site", "liquid", "run", "line", "balance", "run view", "sizing", "pump",
 	"operating point", "speed for a duty", "NPSH", "field check", "pump-alone efficiency", "bands",
-	"acceptance", "energy", "turbine", "surge", "convert"}
+	"acceptance", "energy", "turbine", "surge", "convert", "heat", "valves"}
 
 // String names the part in words, for test messages and logs.
 func (p Part) String() string {
@@ -93,6 +95,10 @@ func (r *Result) Has(p Part) bool {
 		return r.Surge != nil
 	case PartConvert:
 		return r.Convert != nil
+	case PartHeat:
+		return r.Heat != nil
+	case PartValves:
+		return len(r.Valves) > 0
 	}
 	return false
 }
@@ -151,6 +157,10 @@ func (r *Result) drop(p Part) {
 		r.Surge = nil
 	case PartConvert:
 		r.Convert = nil
+	case PartHeat:
+		r.Heat = nil
+	case PartValves:
+		r.Valves = nil
 	}
 }
 
@@ -171,7 +181,18 @@ type uses struct {
 	out  []string
 }
 
-func (u *uses) add(params ...string) { u.out = append(u.out, params...) }
+// add adds params; the flow, when the sheet gives it as a heat load, is
+// the load's and its temperatures'.
+func (u *uses) add(params ...string) {
+	for _, p := range params {
+		if p == "q" && u.in.Side("qby") == "load" {
+			u.out = append(u.out, "load")
+			u.part(PartHeat)
+			continue
+		}
+		u.out = append(u.out, p)
+	}
+}
 
 // side adds the parameters of the side of group g in use.
 func (u *uses) side(g string) {
@@ -213,8 +234,45 @@ func (u *uses) run(pre string) {
 	}
 }
 
+// loopBalance adds what a closed loop's balance reads: its flow or pump
+// head, its start's elevation, its static pressure when given, and its
+// line or run.
+func (u *uses) loopBalance() {
+	in := u.in
+	u.add("loop", "solve", "alpha", "ht", "zp", "pafter")
+	if in.Choice("solve") == "q" {
+		u.add("hp")
+	} else {
+		u.add("q")
+	}
+	if in.Given("pexp") || in.Given("zexp") {
+		u.add("zexp")
+		u.pressureAt("pexp")
+	}
+	u.part(PartSite)
+	u.part(PartLiquid)
+	u.friction()
+}
+
+// friction adds what sets the balance's friction: the line, else the
+// single run or the friction typed.
+func (u *uses) friction() {
+	if u.in.Segments > 0 {
+		u.line()
+		return
+	}
+	u.side("fric")
+	if u.in.Side("fric") == "run" {
+		u.run("")
+	}
+}
+
 // line adds every segment's parameters.
 func (u *uses) line() {
+	u.add("loop") // a loop's segments end level and where it starts
+	if u.in.IsLoop() {
+		u.add("zp")
+	}
 	for i := 1; i <= u.in.Segments; i++ {
 		u.run(SegmentParam(i, ""))
 	}
@@ -256,9 +314,19 @@ func (u *uses) part(p Part) {
 			return
 		}
 		u.add("t")
+		if in.Choice("liq") == "seawater" {
+			u.add("sal")
+		}
 		switch {
 		case in.Given("pl"):
 			u.pressureAt("pl")
+		case in.IsLoop():
+			u.add("loop")
+			if in.Given("pexp") {
+				u.pressureAt("pexp")
+			} else {
+				u.part(PartSite)
+			}
 		case in.Given("p1") && solve != "p1" || in.Given("p2") && solve != "p2":
 			for _, pt := range []string{"p1", "p2"} {
 				if in.Given(pt) && solve != pt {
@@ -277,21 +345,17 @@ func (u *uses) part(p Part) {
 		u.add("q")
 		u.part(PartLiquid)
 	case PartBalance:
-		u.add("solve", "alpha", "z1", "z2", "q", "hp", "ht", "pafter")
+		if in.IsLoop() {
+			u.loopBalance()
+			return
+		}
+		u.add("loop", "solve", "alpha", "z1", "z2", "q", "hp", "ht", "pafter")
 		u.pressureAt("p1")
 		u.pressureAt("p2")
 		u.side("pt1")
 		u.side("pt2")
 		u.part(PartLiquid)
-		switch {
-		case in.Segments > 0:
-			u.line()
-		default:
-			u.side("fric")
-			if in.Side("fric") == "run" {
-				u.run("")
-			}
-		}
+		u.friction()
 	case PartRunView:
 		u.add("view", "rseg", "q")
 		if in.Segments > 0 {
@@ -315,8 +379,14 @@ func (u *uses) part(p Part) {
 		u.side("spfor")
 		u.part(PartOperating)
 	case PartNPSH:
-		u.add("zp", "hs", "z1", "q")
-		u.pressureAt("p1")
+		u.add("loop", "zp", "hs", "q")
+		if in.IsLoop() {
+			u.add("loop", "zexp")
+			u.pressureAt("pexp")
+		} else {
+			u.add("z1")
+			u.pressureAt("p1")
+		}
 		u.part(PartLiquid)
 		if !in.Given("hs") && in.Segments > 0 {
 			u.add("pafter")
@@ -364,6 +434,20 @@ func (u *uses) part(p Part) {
 		} else {
 			u.run("")
 		}
+	case PartHeat:
+		u.add("tsup", "tret")
+		u.part(PartLiquid)
+		switch {
+		case in.Side("qby") == "load":
+			u.out = append(u.out, "load")
+		case solve == "q" && (in.IsLoop() || in.Given("hp")):
+			u.part(PartBalance)
+		default:
+			u.add("q")
+		}
+	case PartValves:
+		u.add("dpc")
+		u.part(PartBalance)
 	case PartConvert:
 		u.add("cv", "cvref")
 		u.part(PartSite)

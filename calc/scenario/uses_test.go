@@ -13,8 +13,16 @@ func usesBases(t *testing.T) map[string]Scenario {
 	run := "view=regime&liq=water&t=18C&alt=210m&p1=0kPa&z1=212m&v1=0m/s&p2=0kPa&z2=251m&v2=0m/s&q=45L/s&solve=hp" +
 		"&l=640m&nps=8&sch=40&mat=steel&fit=gate:2,exit:1&k=0.5&tc=2s&cr=1&szsch=40&vlo=0.6m/s&vhi=2.4m/s&grad=4"
 	field := Demo().Encode() + "&view=pump&etam=93%&gcs=1%&gss=200kPa&gcd=1%&gsd=1000kPa&uqm=2%&upin=1%&uz=10mm&grade=2B&hours=4000&tariff=0.12&tc=3s"
+	// Closed loops: a flow typed and its load, the static pressure, a
+	// checked valve and its circuit; a load giving the flow; seawater of
+	// a stated salinity.
+	loop := "loop=1&liq=pg&gly=30%&t=7C&q=12L/s&tsup=7C&tret=12C&pexp=150kPa&pexpref=g&zexp=10m&zp=0m&dpc=90kPa&alt=100m" +
+		"&s1.l=60m&s1.nps=3&s1.sch=40&s1.mat=steel&s1.fit=elbow90:6&s1.z=4m&s2.l=60m&s2.nps=3&s2.sch=40&s2.mat=steel" +
+		"&s2.cmp=chiller:45kPa@12L/s,valve:kv40 fl0.9 xfz0.4&pq=0,10,15L/s&ph=40,35,25m&pnpsh=2,3,4m"
+	load := "loop=1&liq=water&t=7C&load=250kW&tsup=7C&tret=12C&baro=100kPa&l=120m&nps=3&sch=40&mat=steel&fit=gate:2&tc=2s"
+	sea := "liq=seawater&sal=60&t=20C&q=20L/s&p1=0kPa&z1=0m&v1=0m/s&p2=0kPa&z2=10m&v2=0m/s&solve=hp&l=100m&nps=4&sch=40&mat=steel&pl=200kPa"
 	out := map[string]Scenario{"demo": Demo(), "turbine": TurbineDemo()}
-	for name, q := range map[string]string{"run": run, "field": strings.Replace(field, "view=balance&", "", 1)} {
+	for name, q := range map[string]string{"run": run, "field": strings.Replace(field, "view=balance&", "", 1), "loop": loop, "load": load, "sea": sea} {
 		s, err := Parse(q)
 		if err != nil {
 			t.Fatalf("%s: %v", name, err)

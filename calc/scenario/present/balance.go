@@ -18,6 +18,9 @@ var solveLabels = map[string]string{
 // points, what lies between them, the liquid and where the head goes.
 func (b *builder) balanceView() []Card {
 	cards := []Card{b.answerCard(), b.pointCard("1", "in"), b.pointCard("2", "out"), b.betweenCard(), b.liquidCard(), b.budgetCard()}
+	if b.isLoop() {
+		cards = []Card{b.answerCard(), b.loopCard(), b.betweenCard(), b.liquidCard(), b.budgetCard()}
+	}
 	if b.wantsSurge() {
 		cards = append(cards, b.surgeCard())
 	}
@@ -45,6 +48,9 @@ func (b *builder) answerCard() Card {
 	cur := b.solve()
 	var btns []Button
 	for _, c := range scenario.Choices("solve") {
+		if b.isLoop() && c.Value != "hp" && c.Value != "q" {
+			continue // a loop has no points to solve for
+		}
 		btns = append(btns, Button{ID: "solve-" + c.Value, Text: c.Label, Class: "seg", On: c.Value == cur,
 			Act: Action{Do: "choose", Param: "solve", Value: c.Value}})
 	}
@@ -62,11 +68,15 @@ func (b *builder) answerCard() Card {
 	} else {
 		a.None, a.Why = true, b.toCheck(balanceInputs()...)
 	}
+	if b.isLoop() {
+		a.Label += " · closed loop"
+	}
 	return Card{ID: "answer-card", Class: "answer-card", Title: "Solve for", Blocks: []Block{
 		{Kind: BlockButtons, Class: "solve-grid", Buttons: btns},
 		maybe(b.problem("solve") != "", text("msg err", "err-solve", b.problem("solve"))),
 		{Kind: BlockAnswer, ID: "answer", Answer: a},
 		b.warnings(nil, "balance", "run", "site", "liquid"),
+		b.loopSwitch(),
 	}}
 }
 
@@ -129,8 +139,14 @@ func (b *builder) pointCard(n, role string) Card {
 
 // betweenCard holds the flow, the heads and the friction between the points.
 func (b *builder) betweenCard() Card {
-	blocks := []Block{fields(b.quantity("q", "", ""), b.quantity("hp", "", ""), b.quantity("ht", "", ""))}
-	if n := b.in.Segments; n > 0 {
+	blocks := append(b.flowFields(), fields(b.quantity("hp", "", ""), b.quantity("ht", "", "")))
+	title := "Between the points"
+	if b.isLoop() {
+		blocks, title = append(b.flowFields(), fields(b.quantity("hp", "", ""))), "Round the loop"
+	}
+	if pipe := b.loopPipe(); b.isLoop() && pipe != nil {
+		blocks = append(blocks, pipe...)
+	} else if n := b.in.Segments; n > 0 {
 		blocks = append(blocks, b.lineSummary(n))
 	} else {
 		blocks = append(blocks, b.toggle("fric"))
@@ -147,7 +163,8 @@ func (b *builder) betweenCard() Card {
 		}
 	}
 	blocks = append(blocks, fields(b.picker("alpha", "", "")))
-	return Card{ID: "between", Class: "between", Title: "Between the points", Blocks: blocks}
+	blocks = append(blocks, b.valveBlocks()...)
+	return Card{ID: "between", Class: "between", Title: title, Blocks: blocks}
 }
 
 // budgetCard is "Where the head goes": each term of the balance as a bar.

@@ -21,6 +21,9 @@ func (b *builder) liquidCard() Card {
 		blocks = append(blocks, b.toggle("gly"), fields(b.quantity(share, "", ""), b.quantity("t", "", "")))
 	default:
 		blocks = append(blocks, fields(b.quantity("t", "", "")), fields(b.quantity("pl", "", "")), fields(b.ref("plref")))
+		if b.in.Choice("liq") == "seawater" {
+			blocks = append(blocks, fields(b.plain("sal", "", "", true)))
+		}
 	}
 	blocks = append(blocks, text("computed", "fluid", b.fluidLine()))
 	if g := b.r.Glycol; g != nil {

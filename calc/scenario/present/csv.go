@@ -220,6 +220,39 @@ var csvColumns = []csvColumn{
 		return 0, strings.Join(parts, "; "), len(parts) > 0
 	}},
 
+	// Loops: the heat the flow carries, the control valves.
+	{head: "line kind", part: scenario.PartBalance, value: txt(func(r *scenario.Result) string {
+		if r.Inputs.IsLoop() {
+			return "closed loop"
+		}
+		return "two points"
+	})},
+	{head: "heat load carried", part: scenario.PartHeat, kind: csvFigure, param: "load", value: fig(func(r *scenario.Result) (float64, bool) { return r.Heat.Load, true })},
+	{head: "flow carrying the load", part: scenario.PartHeat, kind: csvFigure, param: "q", value: fig(func(r *scenario.Result) (float64, bool) { return r.Heat.Flow, true })},
+	{head: "control valves: authority, each", part: scenario.PartValves, value: txt(func(r *scenario.Result) string {
+		parts := make([]string, 0, len(r.Valves))
+		for _, v := range r.Valves {
+			parts = append(parts, "segment "+strconv.Itoa(v.Segment)+" "+v.Name+": "+csvNumberText(v.Authority.N))
+		}
+		return strings.Join(parts, "; ")
+	})},
+	{head: "control valves: choked or cavitating", part: scenario.PartValves, value: txt(func(r *scenario.Result) string {
+		var parts []string
+		for _, v := range r.Valves {
+			switch {
+			case v.Check == nil:
+				parts = append(parts, v.Name+": not checked")
+			case v.Check.Choked:
+				parts = append(parts, v.Name+": choked")
+			case v.Check.Cavitation:
+				parts = append(parts, v.Name+": cavitating")
+			default:
+				parts = append(parts, v.Name+": neither")
+			}
+		}
+		return strings.Join(parts, "; ")
+	})},
+
 	// The run and its sizing.
 	{head: "run: velocity", part: scenario.PartRun, or: scenario.PartRunView, kind: csvFigure, dim: calc.Velocity, value: fig(func(r *scenario.Result) (float64, bool) { return theRun(r).Velocity, true })},
 	{head: "run: Reynolds number", part: scenario.PartRun, or: scenario.PartRunView, kind: csvNumber, value: fig(func(r *scenario.Result) (float64, bool) { return theRun(r).Reynolds, true })},

@@ -662,7 +662,24 @@ var reasonWords = [...]func(w wording) string{
 		return "the supply and return temperatures are both " + w.val() + ": a flow carries heat only across a difference of temperature"
 	},
 	calc.ReasonValveFactor: func(w wording) string {
+		if w.fe.Input != "" {
+			name, _, _ := strings.Cut(w.fe.Input, ":")
+			what := "FL (the liquid pressure recovery factor)"
+			if w.fe.Other == "xfz" {
+				what = "xFz (the incipient-cavitation factor)"
+			}
+			return quote(name) + ": the valve's " + what + " must be above 0 and at most 1: read it from the valve maker's data sheet" + w.got()
+		}
 		return w.subject() + " must be above 0 and at most 1: read it from the valve maker's data sheet" + w.got()
+	},
+	calc.ReasonLoopUnknown: func(w wording) string {
+		return "a closed loop has no points, levels or static head to solve for: solve for the pump head, or for the flow a pump head gives"
+	},
+	calc.ReasonHeatLiquid: func(w wording) string {
+		return "a heat load and its flow need the liquid's specific heat, which a liquid of typed properties does not give: pick water, seawater or a glycol mix"
+	},
+	calc.ReasonValveNeedsStatic: func(w wording) string {
+		return "a valve's check for choked flow and cavitation needs the pressure at its inlet: enter the loop's static pressure where its expansion vessel or pressurisation unit connects, and that connection's elevation"
 	},
 	calc.ReasonValveInletBoils: func(w wording) string {
 		return "the pressure at the valve inlet (" + w.val() + ") must be above the liquid's vapour pressure (" + w.min() + ")"

@@ -210,6 +210,27 @@ func (b *builder) reportResults() Card {
 			{Label: "at a flow of", Value: b.param("q", br.Q)},
 			{Label: "friction and fittings", Value: b.head(br.FrictionHead)},
 		}}
+		if b.isLoop() {
+			answer.Facts = append(answer.Facts, Fact{ID: "report-loop", Label: "line", Value: "closed loop: no static head, the pump head is the friction, fittings and components round the loop"})
+		}
+		if h := b.r.Heat; h != nil {
+			answer.Facts = append(answer.Facts, Fact{Label: "heat load carried", Value: b.param("load", h.Load)})
+		}
+		for _, v := range b.r.Valves {
+			st := "not checked for choked flow"
+			if c := v.Check; c != nil {
+				switch {
+				case c.Choked:
+					st = "CHOKED (IEC 60534-2-1)"
+				case c.Cavitation:
+					st = "CAVITATING (IEC 60534-2-1)"
+				default:
+					st = "not choked (IEC 60534-2-1)"
+				}
+			}
+			answer.Facts = append(answer.Facts, Fact{Label: "valve " + v.Name, Value: "authority " + calc.FormatNumber(v.Authority.N, 2) + " · " + st,
+				Key: v.Check != nil && (v.Check.Choked || v.Check.Cavitation)})
+		}
 		t := &Table{ID: "report-budget", Class: "grid", Head: []string{"term", "side", "head", "as pressure"}}
 		for _, it := range br.Budget {
 			if it.Head == 0 {
