@@ -28,12 +28,15 @@ const (
 	PartTurbine                    // Turbine
 	PartSurge                      // Surge
 	PartConvert                    // Convert
+	PartTest                       // Test: the readings as a test at several points
+	PartGuarantee                  // Guarantee: the test judged by the guarantee point
 	partEnd
 )
 
 var partNames = [...]string{"", "site", "liquid", "run", "line", "balance", "run view", "sizing", "pump",
 	"operating point", "speed for a duty", "NPSH", "field check", "pump-alone efficiency", "bands",
-	"acceptance", "energy", "turbine", "surge", "convert"}
+	"acceptance", "energy", "turbine", "surge", "convert",
+	"test", "guarantee"}
 
 // String names the part in words, for test messages and logs.
 func (p Part) String() string {
@@ -93,6 +96,10 @@ func (r *Result) Has(p Part) bool {
 		return r.Surge != nil
 	case PartConvert:
 		return r.Convert != nil
+	case PartTest:
+		return r.Test != nil
+	case PartGuarantee:
+		return r.Guarantee != nil
 	}
 	return false
 }
@@ -151,6 +158,10 @@ func (r *Result) drop(p Part) {
 		r.Surge = nil
 	case PartConvert:
 		r.Convert = nil
+	case PartTest:
+		r.Test, r.Guarantee = nil, nil
+	case PartGuarantee:
+		r.Guarantee = nil
 	}
 }
 
@@ -364,11 +375,44 @@ func (u *uses) part(p Part) {
 		} else {
 			u.run("")
 		}
+	case PartTest:
+		u.readings()
+		u.add("zs", "zd", "etam")
+		u.add(accuracyParams...)
+		if len(in.ReadingsGiven()) == 1 {
+			u.add("qg") // one reading is judged only at a guarantee flow
+		}
+		u.side("gsp")
+		u.side("gdp")
+		u.part(PartLiquid)
+	case PartGuarantee:
+		u.add("grade", "qg", "hg", "etag")
+		u.part(PartTest)
+		if !in.Given("qg") {
+			u.add("q")
+		}
+		if !in.Given("hg") || !in.Given("etag") {
+			u.part(PartPump) // the data sheet's head or efficiency at the guarantee flow
+		}
 	case PartConvert:
 		u.add("cv", "cvref")
 		u.part(PartSite)
 		if v, ok := in.vals["cv"]; ok && v.Dim == calc.Length {
 			u.part(PartLiquid) // a head of the liquid
+		}
+	}
+}
+
+// readings adds every reading's parameters, and the site for a gauge
+// read absolute.
+func (u *uses) readings() {
+	for _, k := range u.in.ReadingsGiven() {
+		for _, f := range readingFields {
+			p := ReadingParam(f, k)
+			u.add(p)
+			if v, ok := u.in.vals[p]; ok && v.Abs {
+				u.part(PartSite)
+			}
 		}
 	}
 }

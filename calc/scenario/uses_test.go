@@ -8,12 +8,19 @@ import (
 
 // usesBases are whole sheets to break one input at a time: the demo (line,
 // pump, readings, NPSH), the turbine demo, and single-run sheets with the
-// Run view, surge, accuracies, acceptance and energy.
+// Run view, surge, accuracies, acceptance and energy; a test at five flows
+// judged by the duty flow (PumpTestDemo); one reading by a typed guarantee.
 func usesBases(t *testing.T) map[string]Scenario {
 	run := "view=regime&liq=water&t=18C&alt=210m&p1=0kPa&z1=212m&v1=0m/s&p2=0kPa&z2=251m&v2=0m/s&q=45L/s&solve=hp" +
 		"&l=640m&nps=8&sch=40&mat=steel&fit=gate:2,exit:1&k=0.5&tc=2s&cr=1&szsch=40&vlo=0.6m/s&vhi=2.4m/s&grad=4"
 	field := Demo().Encode() + "&view=pump&etam=93%&gcs=1%&gss=200kPa&gcd=1%&gsd=1000kPa&uqm=2%&upin=1%&uz=10mm&grade=2B&hours=4000&tariff=0.12&tc=3s"
-	out := map[string]Scenario{"demo": Demo(), "turbine": TurbineDemo()}
+	out := map[string]Scenario{"demo": Demo(), "turbine": TurbineDemo(), "test": PumpTestDemo()}
+	// One reading judged by a typed guarantee point, read absolute.
+	one := Demo()
+	for _, kv := range [][2]string{{"ps", "83kPa(a)"}, {"qg", "45L/s"}, {"hg", "50m"}, {"etag", "72%"}, {"grade", "1B"}, {"uqm", "2%"}} {
+		_ = one.Set(kv[0], kv[1])
+	}
+	out["one"] = one
 	for name, q := range map[string]string{"run": run, "field": strings.Replace(field, "view=balance&", "", 1)} {
 		s, err := Parse(q)
 		if err != nil {

@@ -181,6 +181,7 @@ func commissioningSheets(t *testing.T) []scenario.KeptSheet {
 			"&qsp=40L/s&nrat=1450rpm&fmains=50Hz&hours=4000&tariff=0.15&tc=5s&s2.cmp=flowmeter:20kPa@45L/s")},
 		{Scen: parseSheet(t, "name=New%20main&liq=water&t=15C&view=regime&q=35L/s&l=1200m&nps=8&sch=40&mat=steel&szsch=40")},
 		{Scen: scenario.TurbineDemo()},
+		{Scen: scenario.PumpTestDemo()},
 		{Scen: parseSheet(t, "liq=custom&rho=1000kg/m3&mu=1mPa.s&pv=2.34kPa&baro=101.325kPa&p1=0kPa&v1=0m/s&p2=0kPa&v2=0m/s&z1=100m&z2=60m&solve=q&s1.l=2000m&s1.d=200mm&s1.eps=0.05mm&s1.z=108m&s2.l=3000m&s2.d=200mm&s2.eps=0.05mm")},
 	}
 }
