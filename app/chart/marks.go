@@ -356,6 +356,11 @@ func appendShape(b []byte, s Shape, x, y float64, col string) []byte {
 		b = append(b, `" r="4.2" fill="`...)
 		b = append(b, col...)
 		return append(b, `" stroke="`+paper+`" stroke-width="1.2"/>`...)
+	case Gem:
+		b = poly(b, 0, -7.5, 7.5, 0, 0, 7.5, -7.5, 0)
+		b = append(b, `" fill="`...)
+		b = append(b, col...)
+		return append(b, `" stroke="`+paper+`" stroke-width="1.5" stroke-linejoin="round"/>`...)
 	case Peak:
 		b = poly(b, 0, -9, 8, 5, -8, 5)
 		b = append(b, `" fill="`...)

@@ -131,3 +131,24 @@ func TestReadingErrorsNamed(t *testing.T) {
 		t.Error("415 Pa on reading 2's suction gauge is not caught as a slip")
 	}
 }
+
+// TestDraftReadings: a reading added shows empty boxes; one removed moves
+// the later readings up, with their values.
+func TestDraftReadings(t *testing.T) {
+	d := NewDraft(PumpTestDemo())
+	if n := d.ShownReadings(); n != 5 {
+		t.Fatalf("%d readings shown, want 5", n)
+	}
+	d.AddReading()
+	if n := d.ShownReadings(); n != 6 || d.Scen.Has("qm6") {
+		t.Errorf("after AddReading: %d shown, qm6 %q", n, d.Scen.Get("qm6"))
+	}
+	d.RemoveReading(3)
+	if got := d.Scen.Get("qm3"); got != "50L/s" || d.Scen.Has("qm5") || d.ShownReadings() != 5 {
+		t.Errorf("after removing reading 3: qm3 %q, qm5 %q, %d shown", got, d.Scen.Get("qm5"), d.ShownReadings())
+	}
+	d.RemoveReading(1) // the field check's own: not removed
+	if !d.Scen.Has("qm") {
+		t.Error("reading 1 removed")
+	}
+}
