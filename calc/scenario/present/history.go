@@ -42,7 +42,7 @@ func historyCard(h scenario.History, n int, us bool) Card {
 	pump.Role, pump.Name = RoleHistoryPumpEff, "pump alone"
 	wire.Role, wire.Name = RoleHistoryWireEff, "wire to water"
 	energy.Role, energy.Name = RoleHistoryEnergy, "per volume"
-	t := &Table{ID: id + "-table", Class: "grid figures", Head: []string{"sheet", "date", "flow", "head", "pump efficiency", "wire-to-water", "energy per volume", "yearly cost of the efficiency lost"}}
+	t := &Table{ID: id + "-table", Class: "grid figures", Head: []string{"sheet", "date", "flow", "head", "pump efficiency", "wire-to-water", "energy", "yearly cost of η lost"}}
 	for _, e := range h.Entries {
 		x := days(e)
 		if e.Head > 0 {
@@ -65,13 +65,11 @@ func historyCard(h scenario.History, n int, us bool) Card {
 		}
 		flow := dash(e.Flow > 0, scenario.Show(e.Flow, calc.Flow, us))
 		if e.AtDuty {
-			flow += " (duty, from the tested curve)"
-		} else if e.Flow > 0 {
-			flow += " (reading 1)"
+			flow += ", duty"
 		}
 		cost := "—"
 		if e.Lost != nil {
-			cost = calc.FormatNumber(e.Lost.YearCost, 4) + " (" + calc.FormatNumber(e.Lost.YearEnergy/3.6e6, 4) + " kWh)"
+			cost = calc.FormatNumber(e.Lost.YearCost, 4)
 		}
 		title := e.Title
 		if title == "" {
@@ -97,7 +95,7 @@ func historyCard(h scenario.History, n int, us bool) Card {
 		scenario.BaseDataSheet: "The cost of the efficiency lost is the extra electrical input for the same hydraulic power at each sheet's wire-to-water efficiency instead of the data sheet's pump efficiency at its flow times the motor's, over the sheet's running hours at its tariff (as the energy card has them), in the tariff's currency. A negative figure is a saving.",
 		scenario.BaseFirstTest: "The cost of the efficiency lost is the extra electrical input for the same hydraulic power at each sheet's wire-to-water efficiency instead of the first test's (" + percent(h.Entries[0].WireEff) + "), over the sheet's running hours at its tariff (as the energy card has them), in the tariff's currency. A negative figure is a saving.",
 	}[h.Base]
-	note := "Each row is a kept sheet whose pump tag is " + h.Tag + ", dated by its last edit. The head is read off the tested curve at the duty flow when the sheet has a test at several flows covering it, else it is reading 1's own, at its own flow (a head at another flow is not the same point of the curve: compare like with like). Flows are in " + qu.Symbol + "."
+	note := "Each row is a kept sheet whose pump tag is " + h.Tag + ", dated by its last edit. The head is read off the tested curve at the duty flow (marked duty beside the flow) when the sheet has a test at several flows covering it, else it is reading 1's own, at its own flow (a head at another flow is not the same point of the curve: compare like with like). Flows are in " + qu.Symbol + "."
 	if h.Undated > 0 {
 		note += " " + strconv.Itoa(h.Undated) + " more sheet(s) of this tag have no known edit time (from an older sheets file) and are left out."
 	}

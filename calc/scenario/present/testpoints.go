@@ -45,7 +45,7 @@ func (b *builder) testTable() Block {
 	if t == nil {
 		return Block{Kind: BlockEmpty}
 	}
-	tb := &Table{ID: "test-table", Class: "grid figures", Head: []string{"reading", "flow", "pump head", "pump efficiency", "wire-to-water", "head below (−) or above the data sheet"}}
+	tb := &Table{ID: "test-table", Class: "grid figures", Head: []string{"reading", "flow", "pump head", "pump efficiency", "wire-to-water", "head vs data sheet"}}
 	for i, p := range t.Points {
 		k := strconv.Itoa(t.Reading[i])
 		c := p.Check
@@ -64,10 +64,10 @@ func (b *builder) testTable() Block {
 			wire = percent(c.Efficiency)
 		}
 		if c.HasCurve {
-			dev = b.head(c.Deviation) + " (" + calc.FormatNumber(c.DeviationPct, 3) + " %)"
+			dev = b.head(c.Deviation)
 		}
 		cells := []Cell{{Text: b.param("qm", c.Q), Label: "flow"}, {ID: "test-head-" + k, Text: head, Label: "pump head"},
-			{Text: eff, Label: "pump efficiency"}, {Text: wire, Label: "wire-to-water"}, {Text: dev, Label: "against the data sheet"}}
+			{Text: eff, Label: "pump efficiency"}, {Text: wire, Label: "wire-to-water"}, {Text: dev, Label: "head vs data sheet"}}
 		tb.Rows = append(tb.Rows, Row{Head: "reading " + k, Cells: cells})
 	}
 	return Block{Kind: BlockTable, ID: "test-table", Table: tb}
