@@ -131,6 +131,18 @@ func (bk *book) card() present.Card {
 	return present.Book(kept, st)
 }
 
+// histories are the history cards of the pump tags among all kept
+// sheets, in US customary units or SI.
+func (bk *book) histories(us bool) []present.Card {
+	var all []scenario.KeptSheet
+	for _, r := range bk.kept {
+		if sc, err := scenario.Parse(r.Link); err == nil {
+			all = append(all, scenario.KeptSheet{Scen: sc, Edited: editedTime(r.Edited)})
+		}
+	}
+	return present.HistoryCards(all, us)
+}
+
 // act handles the site book's buttons; a sheet to open is returned (its
 // id is then the open one's), nil otherwise. The results table's unit
 // system is the button's (a.Value "us" or "si"), never the open sheet's.

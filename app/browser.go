@@ -159,13 +159,9 @@ func (s *sheet) onDemo(ctx app.Context, e app.Event) {
 	s.openNew(scenario.Demo()) // the open sheet stays in the site book
 }
 
-// onBlank starts an empty sheet on the same view and unit system; the open
-// one stays kept.
+// onBlank starts a new sheet on the same view and unit system, for the
+// same site and pump (scenario.NextSheet); the open one stays kept.
 func (s *sheet) onBlank(ctx app.Context, e app.Event) {
 	defer s.contain("starting a new sheet")
-	var sc scenario.Scenario
-	for _, p := range []string{"view", "units"} {
-		_ = sc.Set(p, s.d.Scen.Get(p))
-	}
-	s.openNew(sc) // the open sheet stays in the site book
+	s.openNew(scenario.NextSheet(s.d.Scen)) // the open sheet stays in the site book
 }

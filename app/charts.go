@@ -59,8 +59,11 @@ const (
 // chartSVG draws a chart of the view model as SVG text, w viewBox px wide;
 // print asks for the paper's proportions.
 func chartSVG(c *present.Chart, w int, print bool) string {
-	if c.Kind == "pump" {
+	switch c.Kind {
+	case "pump":
 		return pumpChart(c, w, print).SVG()
+	case "history":
+		return historyChart(c, w).SVG()
 	}
 	return profileChart(c, w, print).SVG()
 }
@@ -117,6 +120,12 @@ func pumpChart(c *present.Chart, w int, print bool) chart.Chart {
 			in.NPSHRequired = curve(cu)
 		case present.RoleNPSHAvailable:
 			in.NPSHAvailable = curve(cu)
+		case present.RoleTested:
+			in.Tested = curve(cu)
+		case present.RoleTestedBand:
+			in.TestedBand = append(in.TestedBand, curve(cu))
+		case present.RoleOriginLine:
+			in.Origin = curve(cu)
 		}
 	}
 	for _, m := range c.Markers {
@@ -126,6 +135,11 @@ func pumpChart(c *present.Chart, w int, print bool) chart.Chart {
 			in.Peaks = append(in.Peaks, mk)
 		case present.MarkMeasured:
 			in.Measured = append(in.Measured, mk)
+		case present.MarkGuarantee:
+			in.Guarantee = &mk
+			if x := m.Cross; x != nil {
+				in.Cross = &chart.TolCross{X: m.X, Y: m.Y, X0: x.X0, X1: x.X1, Y0: x.Y0, Y1: x.Y1}
+			}
 		default:
 			in.Operating = append(in.Operating, mk)
 		}
@@ -163,4 +177,39 @@ func profileChart(c *present.Chart, w int, print bool) chart.Chart {
 		in.Nodes = append(in.Nodes, mk)
 	}
 	return chart.ProfileChart(in)
+}
+
+// historyChart is a pump's history: head against the days since its
+// first sheet, with strips for its efficiencies and its energy per volume
+// (the chart language of the pump chart: readings from the site are open
+// rings, what they work out to the accent line).
+func historyChart(c *present.Chart, w int) chart.Chart {
+	out := chart.Chart{Title: c.Title, XLabel: c.XLabel, YLabel: c.YLabel, XMin: chart.Fix(0), Direct: true,
+		Width: w, Height: 300}
+	eff := &chart.Chart{YLabel: c.Y2Label, YMin: chart.Fix(0), Height: 160}
+	energy := &chart.Chart{YLabel: c.Y3Label, YMin: chart.Fix(0), Height: 140}
+	line := func(cu present.Curve, st chart.Style, key string) chart.Series {
+		return chart.Series{Name: cu.Name, X: cu.X, Y: cu.Y, Style: st, Accent: true, Key: key}
+	}
+	for _, cu := range c.Curves {
+		switch cu.Role {
+		case present.RoleHistoryHead:
+			s := line(cu, chart.Solid, "history-head")
+			s.Heavy = true
+			out.Series = append(out.Series, s, chart.Series{X: cu.X, Y: cu.Y, Style: chart.Points, Shape: chart.Ring, Key: "history-readings"})
+		case present.RoleHistoryPumpEff:
+			eff.Series = append(eff.Series, line(cu, chart.Solid, "history-pump-eff"))
+		case present.RoleHistoryWireEff:
+			eff.Series = append(eff.Series, line(cu, chart.Dashed, "history-wire-eff"))
+		case present.RoleHistoryEnergy:
+			energy.Series = append(energy.Series, line(cu, chart.Solid, "history-energy"))
+		}
+	}
+	last := &out
+	for _, st := range []*chart.Chart{eff, energy} {
+		if len(st.Series) > 0 {
+			last.Lower, last = st, st
+		}
+	}
+	return out
 }

@@ -237,7 +237,7 @@ func (s *sheet) flush() {
 func (s *sheet) build() {
 	s.vm = present.Build(&s.d, s.res)
 	if s.vm.View == "book" {
-		s.vm.Cards = []present.Card{s.bk.card()}
+		s.vm.Cards = append([]present.Card{s.bk.card()}, s.bk.histories(s.d.US())...)
 	}
 	if s.vm.View == "report" {
 		s.vm.SetText("report-url", s.link())
@@ -337,6 +337,10 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 			s.d.AddRow()
 		case "row-remove":
 			s.d.RemoveRow(a.N)
+		case "reading-add":
+			s.d.AddReading()
+		case "reading-remove":
+			s.d.RemoveReading(a.N)
 		case "keep":
 			s.d.Keep(a.Param)
 		case "verify":

@@ -108,6 +108,10 @@ const (
 	CautionValveAuthorityBelowAim // the valve's authority Figures[0] (a share) is below the usual aim Figures[1] (common practice)
 	CautionValveChoked            // the drop Figures[0] across the valve reaches the choked drop Figures[1]: the flow is limited to Figures[2] (IEC 60534-2-1)
 	CautionValveCavitation        // the drop Figures[0] reaches the incipient-cavitation drop Figures[1] = xFz·(p1 − pv) (IEC 60534-2-1)
+
+	// A pump test judged by its guarantee point.
+	CautionGuaranteeNoFlow // a grade and a test, but no guarantee flow (qg) nor duty flow (q) to judge it at
+	CautionGuaranteeNoHead // no guarantee head typed, and no data sheet covering the guarantee flow Figures[0]
 	cautionEnd
 )
 
@@ -201,6 +205,8 @@ var cautionNames = [...]string{"text",
 	"valve authority below aim",
 	"valve choked",
 	"valve cavitation",
+	"guarantee no flow",
+	"guarantee no head",
 }
 
 // Warn builds a Warning about field of caution c quoting figs.

@@ -33,6 +33,7 @@ var cautionFigureDims = [...][]Dimension{
 	CautionValveAuthorityBelowAim: {Dimensionless, Dimensionless},
 	CautionValveChoked:            {Pressure, Pressure, Flow},
 	CautionValveCavitation:        {Pressure, Pressure},
+	CautionGuaranteeNoHead:        {Flow},
 	CautionOperatingOffRegion:     {Flow, Flow, Flow, Dimensionless, Dimensionless},
 	CautionMeasuredOffRegion:      {Flow, Flow, Flow, Dimensionless, Dimensionless},
 	CautionColumnBreaks:           {Pressure, Length, Pressure}, // no call site today; as its comment says

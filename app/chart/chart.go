@@ -55,6 +55,9 @@ const (
 	// Peak is a filled triangle standing on the point: the top of a curve
 	// (the best-efficiency point).
 	Peak
+	// Gem is a filled diamond: a figure given on paper that is a target
+	// (a contract's guarantee point).
+	Gem
 )
 
 // Series is one named polyline. X and Y are paired by index (the shorter

@@ -60,6 +60,7 @@ type renderer struct {
 	xfLo, xfHi bool
 	pl         placer         // labels placed so far, and what they avoid
 	labelBoxes []rect         // every label box drawn, for tests
+	markLabels []markLabel    // each marker's label and its mark, for tests
 	bandLabels []pendingLabel // placed before the markers' labels
 	labels     bool           // some marker has a label (line pieces are then kept)
 	markerN    int            // Points series seen, for automatic shapes

@@ -239,8 +239,19 @@ func (r *renderer) placeLabels(b []byte, labels []pendingLabel) ([]byte, []strin
 		if i < 0 && l.spots == nil {
 			i = r.pl.place(r.pl.scan(l.x, l.y, w+4, h), px, py)
 		}
+		if i >= 0 && l.spots == nil {
+			// A marker's label stays by its mark: one the scan put farther
+			// off is numbered instead (its leader would cross the plot).
+			box := r.pl.taken[len(r.pl.taken)-1]
+			if nx, ny := box.nearest(l.x, l.y); math.Hypot(nx-l.x, ny-l.y) > labelReach {
+				r.pl.taken, i = r.pl.taken[:len(r.pl.taken)-1], -1
+			}
+		}
 		if i < 0 {
 			notes = append(notes, joinLines(l.lines))
+			if l.spots == nil {
+				r.markLabels = append(r.markLabels, markLabel{x: l.x, y: l.y, text: joinLines(l.lines), numbered: true})
+			}
 			// The note's number beside the point, where it finds room (the
 			// note's own text names the point's figures in any case).
 			n := itoa(len(notes))
@@ -255,6 +266,7 @@ func (r *renderer) placeLabels(b []byte, labels []pendingLabel) ([]byte, []strin
 		box := r.pl.taken[len(r.pl.taken)-1]
 		r.labelBoxes = append(r.labelBoxes, box)
 		if l.spots == nil {
+			r.markLabels = append(r.markLabels, markLabel{x: l.x, y: l.y, box: box, text: joinLines(l.lines)})
 			// A leader from the point to the label when it sits off.
 			if nx, ny, far := box.leader(l.x, l.y); far {
 				b = append(b, `<path d="`...)
@@ -356,6 +368,11 @@ func appendShape(b []byte, s Shape, x, y float64, col string) []byte {
 		b = append(b, `" r="4.2" fill="`...)
 		b = append(b, col...)
 		return append(b, `" stroke="`+paper+`" stroke-width="1.2"/>`...)
+	case Gem:
+		b = poly(b, 0, -7.5, 7.5, 0, 0, 7.5, -7.5, 0)
+		b = append(b, `" fill="`...)
+		b = append(b, col...)
+		return append(b, `" stroke="`+paper+`" stroke-width="1.5" stroke-linejoin="round"/>`...)
 	case Peak:
 		b = poly(b, 0, -9, 8, 5, -8, 5)
 		b = append(b, `" fill="`...)

@@ -96,6 +96,20 @@ func (pl *placer) place(cands []rect, x, y float64) int {
 	return best
 }
 
+// labelReach is the farthest a marker's label may sit from its mark
+// (viewBox px, box edge to point); farther, it is numbered at the mark and
+// written under the plot.
+const labelReach = 100
+
+// markLabel is a marker's label as placed: its mark (x, y) and its box,
+// or numbered under the plot.
+type markLabel struct {
+	x, y     float64
+	box      rect
+	text     string
+	numbered bool
+}
+
 // leaderReach is how far a label may sit from its point without a leader.
 const leaderReach = 24
 

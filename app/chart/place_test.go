@@ -122,3 +122,40 @@ func TestUncertaintyBoxSize(t *testing.T) {
 		t.Error("the measured point is not drawn as an open circle")
 	}
 }
+
+// TestLabelsByTheirMarks measures the distance from each marker's label to
+// its mark (box edge to point, viewBox px) on the demo's pump chart and on
+// a test at five flows with a guarantee point, at a tablet's and a phone's
+// width: each is at most labelReach, or the label is numbered under the
+// plot. The figures are invented.
+func TestLabelsByTheirMarks(t *testing.T) {
+	test := demoPumpInput()
+	for i, p := range [][2]float64{{20, 58}, {30, 54.2}, {41, 46.7}, {50, 40.7}, {58, 34}} {
+		test.Measured = append(test.Measured, Marker{X: p[0], Y: p[1], DX: 0.8, DY: 1.2,
+			Label: fmt.Sprintf("reading %d\n%.1f L/s, %.1f m", i+1, p[0], p[1])})
+	}
+	test.Tested = Curve{Name: "tested", X: []float64{20, 30, 41, 50, 58}, Y: []float64{58, 54.2, 46.7, 40.7, 34}}
+	test.Guarantee = &Marker{X: 45, Y: 49.7, Label: "guarantee\n45 L/s, 49.7 m"}
+	test.Cross = &TolCross{X: 45, Y: 49.7, X0: 41.4, X1: 48.6, Y0: 47.2, Y1: 52.1}
+	for _, w := range []int{720, 360} {
+		for name, in := range map[string]PumpSystemInput{"demo": demoPumpInput(), "test": test} {
+			in.Width = w
+			r, _ := rendered(PumpSystemChart(in))
+			if len(r.markLabels) == 0 {
+				t.Fatalf("%s %d: no marker labels", name, w)
+			}
+			for _, m := range r.markLabels {
+				if m.numbered {
+					t.Logf("%s %d: %q numbered under the plot", name, w, m.text)
+					continue
+				}
+				nx, ny := m.box.nearest(m.x, m.y)
+				d := math.Hypot(nx-m.x, ny-m.y)
+				t.Logf("%s %d: %q %.1f px from its mark", name, w, m.text, d)
+				if d > labelReach {
+					t.Errorf("%s %d: %q sits %.1f px from its mark, more than %d", name, w, m.text, d, labelReach)
+				}
+			}
+		}
+	}
+}

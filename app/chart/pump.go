@@ -1,5 +1,7 @@
 package chart
 
+import "math"
+
 // Curve is one named line for the canned charts: X and Y paired by index,
 // NaN to break the line. An empty Curve (no points) is left out.
 type Curve struct {
@@ -46,6 +48,17 @@ type PumpSystemInput struct {
 	// Measured are measured points: small open ink rings, each with its
 	// uncertainty box when its DX or DY is set.
 	Measured []Marker
+	// Tested is a test's head curve through its readings: medium solid
+	// accent (worked out from the site), named at its end; TestedBand its
+	// band's two edges, thin dotted accent, unnamed.
+	Tested     Curve
+	TestedBand []Curve
+	// Guarantee is a guarantee point: a filled ink diamond (given on
+	// paper) with its tolerance cross, two solid ink bars (Cross); Origin
+	// the line from the origin through it, thin dash-dot ink.
+	Guarantee *Marker
+	Cross     *TolCross
+	Origin    Curve
 	// Bands are flow ranges: hatched (beyond the data sheet, unstable), or
 	// tinted when Tint is set (the preferred operating region); or
 	// zero-width guides.
@@ -68,6 +81,10 @@ type PumpSystemInput struct {
 	Accent        string
 	Width, Height int
 }
+
+// TolCross is a tolerance cross in data units: the flow bar from X0 to X1 at
+// head Y, the head bar from Y0 to Y1 at flow X.
+type TolCross struct{ X, Y, X0, X1, Y0, Y1 float64 }
 
 // PumpSystemChart builds the pump-and-system chart: head against flow with
 // the pump curve(s), the system curve(s), the operating point(s), optional
@@ -117,6 +134,26 @@ func PumpSystemChart(in PumpSystemInput) Chart {
 	}
 	if !in.DataPoints.empty() {
 		c.Series = append(c.Series, Series{Name: in.DataPoints.Name, X: in.DataPoints.X, Y: in.DataPoints.Y, Style: Points, Shape: Dot, Key: "data"})
+	}
+	if !in.Tested.empty() {
+		c.Series = append(c.Series, Series{Name: in.Tested.Name, X: in.Tested.X, Y: in.Tested.Y, Accent: true, Key: "tested"})
+	}
+	for _, e := range in.TestedBand {
+		if !e.empty() {
+			c.Series = append(c.Series, Series{X: e.X, Y: e.Y, Style: Dotted, Accent: true, Key: "tested-band"})
+		}
+	}
+	if !in.Origin.empty() {
+		c.Series = append(c.Series, Series{X: in.Origin.X, Y: in.Origin.Y, Style: DashDot, Key: "origin-line"})
+	}
+	if x := in.Cross; x != nil {
+		nan := math.NaN()
+		c.Series = append(c.Series, Series{X: []float64{x.X0, x.X1, nan, x.X, x.X}, Y: []float64{x.Y, x.Y, nan, x.Y0, x.Y1}, Heavy: true, Key: "cross"})
+	}
+	if m := in.Guarantee; m != nil {
+		g := *m
+		g.Shape, g.Key, g.Accent = Gem, "guarantee", false
+		c.Markers = append(c.Markers, g)
 	}
 	for i, m := range in.Operating {
 		if i == 0 {

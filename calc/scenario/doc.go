@@ -207,6 +207,32 @@
 //	          (tolerance factors from memory); the verdict is within,
 //	          outside, or "this test cannot tell" with the reading to improve
 //
+// A test at several points: the discharge valve throttled, a reading at
+// each flow with the same instruments and gauges. Reading 1 is qm, ps, pd
+// and pin above; readings 2 to 8 are numbered (so a sheet of one reading
+// is written as it always was, and a decimal comma stays a decimal comma):
+//
+//	qm2 … qm8    the flow of reading 2 … 8, e.g. qm2=30L/s
+//	ps2 … ps8    its suction gauge, gauge or absolute as ps
+//	pd2 … pd8    its discharge gauge
+//	pin2 … pin8  the motor's electrical input (optional; needed at every
+//	             reading for the tested efficiency curve)
+//
+// From two readings on the tested head curve (and efficiency curve) runs
+// through them by the data sheet's monotone interpolation, with its band.
+// With a grade, the test is judged by the guarantee point (ISO 9906's
+// tolerance cross; one reading only with qg given):
+//
+//	qg      guarantee flow (blank: the duty flow q)
+//	hg      guarantee head (blank: the data sheet's at qg)
+//	etag    guaranteed efficiency of the pump alone (blank: the data
+//	        sheet's at qg; none: efficiency not judged)
+//
+// The pump's tag gathers the sheets of one pump into its history in the
+// site book:
+//
+//	tag     e.g. BS-3 P1 (free text)
+//
 // Energy per volume pumped (from the measured input, else the operating
 // point), with an optional yearly cost:
 //

@@ -24,6 +24,7 @@ type Draft struct {
 	Stash      map[string]string // parameter → value kept while its group's other side is used
 	Segments   int               // segment cards shown, at least the scenario's (a new one may be empty)
 	Rows       int               // data-sheet rows shown, at least the lists' length
+	Readings   int               // test readings shown, at least the highest given (ShownReadings)
 	// Survey is a pasted survey table kept while some of its rows could
 	// not be used, SurveyNotes what PasteProfile said of it (see there).
 	Survey      string

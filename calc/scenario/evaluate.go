@@ -60,6 +60,8 @@ func Evaluate(in Inputs) Result {
 	e.pump()
 	e.npsh(line)
 	e.field()
+	e.test()
+	e.guarantee()
 	if e.res.Fluid != nil {
 		e.energy()
 	}

@@ -264,7 +264,7 @@ func (r *reader) quantity(name, base, t string, p Param) (Value, error) {
 	def := DefaultUnit(name, r.in.US)
 	var err error
 	switch {
-	case refParams[base] != "" || base == "ps" || base == "pd":
+	case refParams[base] != "" || isGauge(base):
 		var ref calc.PressureRef
 		v.SI, ref, err = calc.ParsePressure(name, t, def)
 		if err != nil && name == "cv" {

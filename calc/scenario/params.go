@@ -181,6 +181,21 @@ var Table = []Param{
 	q("upin", "power meter accuracy", "Power meter accuracy", "(± % of reading; optional)", calc.Dimensionless, "%", "%", "enter the power meter's accuracy in % of reading"),
 	q("uz", "gauge height accuracy", "Gauge heights known to", "(± each; optional)", calc.Length, "mm", "in", "enter how well each gauge's height is known"),
 	{Name: "grade", Label: "acceptance grade", Box: "Acceptance grade", Hint: "(ISO 9906; factors from memory)", Kind: KindChoice, choices: gradeChoices},
+	// A test at several points (pumptests.go): readings 2 to
+	// calc.TestMaxReadings, each a flow, two gauges and the motor's
+	// input, taken with the instruments above; reading 1 is qm, ps, pd
+	// and pin. Then the guarantee point the test is judged against.
+	rq(2), rps(2), rpd(2), rpin(2),
+	rq(3), rps(3), rpd(3), rpin(3),
+	rq(4), rps(4), rpd(4), rpin(4),
+	rq(5), rps(5), rpd(5), rpin(5),
+	rq(6), rps(6), rpd(6), rpin(6),
+	rq(7), rps(7), rpd(7), rpin(7),
+	rq(8), rps(8), rpd(8), rpin(8),
+	q("qg", "guarantee flow", "Guarantee flow", "(blank: the duty flow)", calc.Flow, "L/s", "gpm", "enter the guaranteed flow"),
+	q("hg", "guarantee head", "Guarantee head", "(blank: the data sheet's at that flow)", calc.Length, "m", "ft", "enter the guaranteed head"),
+	q("etag", "guarantee efficiency", "Guarantee efficiency", "(pump alone; blank: the data sheet's)", calc.Dimensionless, "%", "%", "enter the guaranteed efficiency of the pump alone"),
+	{Name: "tag", Label: "pump tag", Box: "Pump tag", Hint: "(e.g. BS-3 P1; sheets of one tag make its history)", Kind: KindText, Placeholder: "BS-3 P1"},
 	{Name: "hours", Label: "running hours per year", Box: "Running hours per year", Hint: "(optional, for a yearly cost)", Kind: KindNumber},
 	{Name: "tariff", Label: "energy tariff per kWh", Box: "Energy tariff per kWh", Hint: "(any currency; optional)", Kind: KindNumber},
 	q("etat", "turbine-and-generator efficiency", "Turbine-and-generator efficiency", "", calc.Dimensionless, "%", "%", "enter the turbine-and-generator efficiency"),

@@ -301,18 +301,8 @@ func (e *eval) field() {
 	}
 	ok := true
 	gauge := func(param string) float64 {
-		p, good := e.quantity(param)
-		if !good {
-			ok = false
-			return 0
-		}
-		if e.in.vals[param].Abs {
-			if !e.siteKnown() {
-				ok = false
-				return 0
-			}
-			p -= e.res.SitePressure
-		}
+		p, good := e.gaugeReading(param)
+		ok = ok && good
 		return p
 	}
 	get := func(param string) float64 {
@@ -321,18 +311,9 @@ func (e *eval) field() {
 		return v
 	}
 	bore := func(group, d, nps, sch string) float64 {
-		if e.in.Side(group) == "d" || !e.has(nps) && !e.has(sch) {
-			return get(d)
-		}
-		v, good := e.in.Value(nps)
-		if s, g := e.in.Value(sch); g && s.Pipe != nil {
-			v, good = s, true
-		}
-		if !good || v.Pipe == nil {
-			ok = false // Read reported it
-			return 0
-		}
-		return v.Pipe.ID
+		v, good := e.gaugeBore(group, d, nps, sch)
+		ok = ok && good
+		return v
 	}
 	r := calc.FieldReadings{Ps: gauge("ps"), Pd: gauge("pd"), Zs: get("zs"), Zd: get("zd"),
 		Ds: bore("gsp", "ds", "dsn", "dss"), Dd: bore("gdp", "dd", "ddn", "dds"), Q: get("qm")}
@@ -366,6 +347,38 @@ func (e *eval) field() {
 	}
 	e.bands(fc)
 	e.accept(fc)
+}
+
+// gaugeReading is a gauge's reading as a gauge pressure, Pa: an absolute
+// one less the site pressure.
+func (e *eval) gaugeReading(param string) (float64, bool) {
+	p, good := e.quantity(param)
+	if !good {
+		return 0, false
+	}
+	if e.in.vals[param].Abs {
+		if !e.siteKnown() {
+			return 0, false
+		}
+		p -= e.res.SitePressure
+	}
+	return p, true
+}
+
+// gaugeBore is the pipe's inside diameter at a gauge, m: typed, or the
+// nominal size's and schedule's.
+func (e *eval) gaugeBore(group, d, nps, sch string) (float64, bool) {
+	if e.in.Side(group) == "d" || !e.has(nps) && !e.has(sch) {
+		return e.quantity(d)
+	}
+	v, good := e.in.Value(nps)
+	if s, g := e.in.Value(sch); g && s.Pipe != nil {
+		v, good = s, true
+	}
+	if !good || v.Pipe == nil {
+		return 0, false // Read reported it
+	}
+	return v.Pipe.ID, true
 }
 
 // turbine works out the turbine's output at the flow and the flow that

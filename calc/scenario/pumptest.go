@@ -227,15 +227,34 @@ var accuracyParams = []string{"gcs", "gss", "gcd", "gsd", "uqm", "upin", "uz"}
 // results, when any accuracy is given. A gauge class needs its span and a
 // span its class.
 func (e *eval) bands(fc calc.FieldCheck) {
-	given := false
+	a, given, ok := e.accuracy()
+	if !given {
+		return
+	}
+	if a.Power > 0 && !e.has("pin") {
+		e.warnCalc("field", calc.Warn("upin", calc.CautionPowerAccuracyUnused))
+	}
+	if !ok {
+		return
+	}
+	tu, err := fc.Uncertainty(*e.res.Fluid, a)
+	if err != nil {
+		e.failErr("uqm", err)
+		return
+	}
+	e.res.FieldBands = &tu
+}
+
+// accuracy reads the instruments' accuracies: given is false when none
+// is, ok false when one cannot be used (reported).
+func (e *eval) accuracy() (a calc.Accuracy, given, ok bool) {
 	for _, p := range accuracyParams {
 		given = given || e.has(p)
 	}
 	if !given {
-		return
+		return a, false, true
 	}
-	var a calc.Accuracy
-	ok := true
+	ok = true
 	read := func(p string, v *float64) {
 		if !e.has(p) {
 			return
@@ -259,18 +278,7 @@ func (e *eval) bands(fc calc.FieldCheck) {
 			}
 		}
 	}
-	if a.Power > 0 && !e.has("pin") {
-		e.warnCalc("field", calc.Warn("upin", calc.CautionPowerAccuracyUnused))
-	}
-	if !ok {
-		return
-	}
-	tu, err := fc.Uncertainty(*e.res.Fluid, a)
-	if err != nil {
-		e.failErr("uqm", err)
-		return
-	}
-	e.res.FieldBands = &tu
+	return a, true, ok
 }
 
 // accept judges the field check under the chosen grade.

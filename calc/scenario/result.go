@@ -49,7 +49,12 @@ type Result struct {
 	FieldBands *calc.FieldBands
 	// Acceptance is the field check judged under the chosen ISO 9906
 	// grade, nil without a grade or a data sheet to compare with.
-	Acceptance  *calc.Acceptance
+	Acceptance *calc.Acceptance
+	// Test is the readings as a test at several points (two or more, or
+	// one judged by a guarantee flow), Guarantee the test judged against
+	// the guarantee point under the grade.
+	Test        *TestResult
+	Guarantee   *GuaranteeResult
 	Energy      *EnergyResult       // energy per volume pumped (measured, else at the operating point)
 	Turbine     *calc.TurbineResult // the turbine's output at the flow
 	BestTurbine *calc.TurbineResult // at the flow that gives the most output

@@ -30,12 +30,15 @@ const (
 	PartConvert                    // Convert
 	PartHeat                       // Heat: the load a flow carries, or the flow for a load
 	PartValves                     // Valves: authority and the IEC 60534-2-1 check
+	PartTest                       // Test: the readings as a test at several points
+	PartGuarantee                  // Guarantee: the test judged by the guarantee point
 	partEnd
 )
 
 var partNames = [...]string{"", "site", "liquid", "run", "line", "balance", "run view", "sizing", "pump",
 	"operating point", "speed for a duty", "NPSH", "field check", "pump-alone efficiency", "bands",
-	"acceptance", "energy", "turbine", "surge", "convert", "heat", "valves"}
+	"acceptance", "energy", "turbine", "surge", "convert", "heat", "valves",
+	"test", "guarantee"}
 
 // String names the part in words, for test messages and logs.
 func (p Part) String() string {
@@ -99,6 +102,10 @@ func (r *Result) Has(p Part) bool {
 		return r.Heat != nil
 	case PartValves:
 		return len(r.Valves) > 0
+	case PartTest:
+		return r.Test != nil
+	case PartGuarantee:
+		return r.Guarantee != nil
 	}
 	return false
 }
@@ -161,6 +168,10 @@ func (r *Result) drop(p Part) {
 		r.Heat = nil
 	case PartValves:
 		r.Valves = nil
+	case PartTest:
+		r.Test, r.Guarantee = nil, nil
+	case PartGuarantee:
+		r.Guarantee = nil
 	}
 }
 
@@ -448,11 +459,44 @@ func (u *uses) part(p Part) {
 	case PartValves:
 		u.add("dpc")
 		u.part(PartBalance)
+	case PartTest:
+		u.readings()
+		u.add("zs", "zd", "etam")
+		u.add(accuracyParams...)
+		if len(in.ReadingsGiven()) == 1 {
+			u.add("qg") // one reading is judged only at a guarantee flow
+		}
+		u.side("gsp")
+		u.side("gdp")
+		u.part(PartLiquid)
+	case PartGuarantee:
+		u.add("grade", "qg", "hg", "etag")
+		u.part(PartTest)
+		if !in.Given("qg") {
+			u.add("q")
+		}
+		if !in.Given("hg") || !in.Given("etag") {
+			u.part(PartPump) // the data sheet's head or efficiency at the guarantee flow
+		}
 	case PartConvert:
 		u.add("cv", "cvref")
 		u.part(PartSite)
 		if v, ok := in.vals["cv"]; ok && v.Dim == calc.Length {
 			u.part(PartLiquid) // a head of the liquid
+		}
+	}
+}
+
+// readings adds every reading's parameters, and the site for a gauge
+// read absolute.
+func (u *uses) readings() {
+	for _, k := range u.in.ReadingsGiven() {
+		for _, f := range readingFields {
+			p := ReadingParam(f, k)
+			u.add(p)
+			if v, ok := u.in.vals[p]; ok && v.Abs {
+				u.part(PartSite)
+			}
 		}
 	}
 }

@@ -8,7 +8,8 @@ import (
 
 // usesBases are whole sheets to break one input at a time: the demo (line,
 // pump, readings, NPSH), the turbine demo, and single-run sheets with the
-// Run view, surge, accuracies, acceptance and energy.
+// Run view, surge, accuracies, acceptance and energy; a test at five flows
+// judged by the duty flow (PumpTestDemo); one reading by a typed guarantee.
 func usesBases(t *testing.T) map[string]Scenario {
 	run := "view=regime&liq=water&t=18C&alt=210m&p1=0kPa&z1=212m&v1=0m/s&p2=0kPa&z2=251m&v2=0m/s&q=45L/s&solve=hp" +
 		"&l=640m&nps=8&sch=40&mat=steel&fit=gate:2,exit:1&k=0.5&tc=2s&cr=1&szsch=40&vlo=0.6m/s&vhi=2.4m/s&grad=4"
@@ -21,7 +22,13 @@ func usesBases(t *testing.T) map[string]Scenario {
 		"&s2.cmp=chiller:45kPa@12L/s,valve:kv40 fl0.9 xfz0.4&pq=0,10,15L/s&ph=40,35,25m&pnpsh=2,3,4m"
 	load := "loop=1&liq=water&t=7C&load=250kW&tsup=7C&tret=12C&baro=100kPa&l=120m&nps=3&sch=40&mat=steel&fit=gate:2&tc=2s"
 	sea := "liq=seawater&sal=60&t=20C&q=20L/s&p1=0kPa&z1=0m&v1=0m/s&p2=0kPa&z2=10m&v2=0m/s&solve=hp&l=100m&nps=4&sch=40&mat=steel&pl=200kPa"
-	out := map[string]Scenario{"demo": Demo(), "turbine": TurbineDemo()}
+	out := map[string]Scenario{"demo": Demo(), "turbine": TurbineDemo(), "test": PumpTestDemo()}
+	// One reading judged by a typed guarantee point, read absolute.
+	one := Demo()
+	for _, kv := range [][2]string{{"ps", "83kPa(a)"}, {"qg", "45L/s"}, {"hg", "50m"}, {"etag", "72%"}, {"grade", "1B"}, {"uqm", "2%"}} {
+		_ = one.Set(kv[0], kv[1])
+	}
+	out["one"] = one
 	for name, q := range map[string]string{"run": run, "field": strings.Replace(field, "view=balance&", "", 1), "loop": loop, "load": load, "sea": sea} {
 		s, err := Parse(q)
 		if err != nil {

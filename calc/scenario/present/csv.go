@@ -130,6 +130,7 @@ func speedIn(f func(pr *scenario.PumpResult) float64) func(*scenario.Result) (fl
 var csvColumns = []csvColumn{
 	// The sheet.
 	{head: "title", value: txt(func(r *scenario.Result) string { return r.Inputs.Choice("name") })},
+	{head: "pump tag", value: txt(func(r *scenario.Result) string { return r.Inputs.Choice("tag") })},
 	{head: "sheet's own units", value: txt(func(r *scenario.Result) string { return map[bool]string{true: "US", false: "SI"}[r.US] })},
 
 	// The liquid and the site.
@@ -356,6 +357,32 @@ var csvColumns = []csvColumn{
 	})},
 
 	// Energy.
+	// The test at several points and its guarantee verdict.
+	{head: "test: readings", part: scenario.PartTest, kind: csvNumber, value: fig(func(r *scenario.Result) (float64, bool) { return float64(len(r.Test.Points)), true })},
+	{head: "test: lowest flow", part: scenario.PartTest, kind: csvFigure, param: "qm", value: fig(func(r *scenario.Result) (float64, bool) { return r.Test.MinFlow(), true })},
+	{head: "test: highest flow", part: scenario.PartTest, kind: csvFigure, param: "qm", value: fig(func(r *scenario.Result) (float64, bool) { return r.Test.MaxFlow(), true })},
+	{head: "test: largest head shortfall from the data sheet", part: scenario.PartTest, kind: csvFigure, param: "hp", value: fig(func(r *scenario.Result) (float64, bool) {
+		return r.Test.Sheet.Head.Short, r.Test.HasSheet
+	})},
+	{head: "test: flow of the largest head shortfall", part: scenario.PartTest, kind: csvFigure, param: "qm", value: fig(func(r *scenario.Result) (float64, bool) {
+		return r.Test.Sheet.Head.Flow, r.Test.HasSheet
+	})},
+	{head: "test: largest pump efficiency shortfall", part: scenario.PartTest, kind: csvFigure, param: "peff", unitNote: "% points", value: fig(func(r *scenario.Result) (float64, bool) {
+		return r.Test.Sheet.Eff.Short, r.Test.HasSheet && r.Test.Sheet.HasEff
+	})},
+	{head: "guarantee: flow", part: scenario.PartGuarantee, kind: csvFigure, param: "qg", value: fig(func(r *scenario.Result) (float64, bool) { return r.Guarantee.Guarantee.Q, true })},
+	{head: "guarantee: head", part: scenario.PartGuarantee, kind: csvFigure, param: "hg", value: fig(func(r *scenario.Result) (float64, bool) { return r.Guarantee.Guarantee.H, true })},
+	{head: "guarantee: pump efficiency", part: scenario.PartGuarantee, kind: csvFigure, param: "etag", value: fig(func(r *scenario.Result) (float64, bool) {
+		return r.Guarantee.Guarantee.Eff, r.Guarantee.Guarantee.Eff > 0
+	})},
+	{head: "guarantee: grade", part: scenario.PartGuarantee, value: txt(func(r *scenario.Result) string { return r.Guarantee.Grade.Name })},
+	{head: "guarantee: flow and head verdict", part: scenario.PartGuarantee, value: txt(func(r *scenario.Result) string { return r.Guarantee.FlowHead.String() })},
+	{head: "guarantee: pump efficiency where the curve meets the origin line", part: scenario.PartGuarantee, kind: csvFigure, param: "etag", value: fig(func(r *scenario.Result) (float64, bool) {
+		e := r.Guarantee.Efficiency
+		return e.Value, e.Status == calc.EffRead
+	})},
+	{head: "guarantee: verdict", part: scenario.PartGuarantee, value: txt(func(r *scenario.Result) string { return r.Guarantee.Verdict.String() })},
+
 	{head: "energy per volume pumped", part: scenario.PartEnergy, kind: csvFigure, dim: calc.SpecificEnergy, value: fig(func(r *scenario.Result) (float64, bool) { return r.Energy.PerVolume, true })},
 	{head: "energy per volume and head", part: scenario.PartEnergy, kind: csvFigure, dim: calc.SpecificEnergyHead, value: fig(func(r *scenario.Result) (float64, bool) { return r.Energy.PerVolumeHead, true })},
 	{head: "energy basis", part: scenario.PartEnergy, value: txt(func(r *scenario.Result) string {

@@ -181,6 +181,7 @@ func commissioningSheets(t *testing.T) []scenario.KeptSheet {
 			"&qsp=40L/s&nrat=1450rpm&fmains=50Hz&hours=4000&tariff=0.15&tc=5s&s2.cmp=flowmeter:20kPa@45L/s")},
 		{Scen: parseSheet(t, "name=New%20main&liq=water&t=15C&view=regime&q=35L/s&l=1200m&nps=8&sch=40&mat=steel&szsch=40")},
 		{Scen: scenario.TurbineDemo()},
+		{Scen: scenario.PumpTestDemo()},
 		{Scen: parseSheet(t, "liq=custom&rho=1000kg/m3&mu=1mPa.s&pv=2.34kPa&baro=101.325kPa&p1=0kPa&v1=0m/s&p2=0kPa&v2=0m/s&z1=100m&z2=60m&solve=q&s1.l=2000m&s1.d=200mm&s1.eps=0.05mm&s1.z=108m&s2.l=3000m&s2.d=200mm&s2.eps=0.05mm")},
 		{Scen: parseSheet(t, "name=Loop&loop=1&liq=pg&gly=30%25&t=7C&q=12L/s&tsup=7C&tret=12C&pexp=150kPa&zexp=10m&zp=0m"+
 			"&s1.l=120m&s1.nps=3&s1.sch=40&s1.mat=steel&s1.fit=elbow90:6,gate:2&s1.cmp=chiller:45kPa@12L/s,coil:3.2m@12L/s,valve:kv40%20fl0.9%20xfz0.4")},

@@ -1223,6 +1223,12 @@ var cautionWords = [...]func(c cautioning) string{
 	calc.CautionGradeNeedsSheet: func(c cautioning) string {
 		return "the acceptance grade needs the data sheet's head at the measured flow: give the data sheet, covering that flow"
 	},
+	calc.CautionGuaranteeNoFlow: func(c cautioning) string {
+		return "a grade is chosen but there is no flow to judge the test at: give the guarantee flow, or the duty flow on the Balance view"
+	},
+	calc.CautionGuaranteeNoHead: func(c cautioning) string {
+		return "no guarantee head at " + c.f(0) + ": type it, or give a data sheet that covers that flow"
+	},
 	calc.CautionConvertBelowZero: func(c cautioning) string {
 		return "this is at or below absolute zero pressure, which no liquid can sustain: check the value and whether it is gauge or absolute"
 	},

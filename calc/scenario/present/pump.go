@@ -25,7 +25,7 @@ func (b *builder) pumpView() []Card {
 		}}}
 	}
 	cards := []Card{b.operatingCard(), b.npshCard(), b.pumpChartCard(), b.dataSheetCard(), b.pumpSetupCard(),
-		b.liquidCard(), b.fieldCard(), b.energyCard()}
+		b.liquidCard(), b.fieldCard(), b.testCard(), b.energyCard()}
 	if b.in.Given("etat") {
 		cards = append(cards, b.turbineCard())
 	}
@@ -240,6 +240,7 @@ func (b *builder) pumpChartCard() Card {
 		}
 		caption += "."
 	}
+	caption += b.testCaption()
 	if pr != nil && pr.SpeedFor != nil {
 		caption += " A thinner accent curve is the pump at the speed that meets the flow asked for."
 	}
@@ -335,7 +336,8 @@ func (b *builder) pumpChart(id, caption string) Block {
 		ch.Markers = append(ch.Markers, Marker{X: qu.FromSI(bep.Q), Y: hu.FromSI(bep.H), Role: MarkPeak,
 			Label: "best efficiency\n" + b.param("q", bep.Q) + ", " + percent(bep.Eff)})
 	}
-	if f := b.r.Field; f != nil && f.Head > 0 {
+	b.testChart(ch, qu, hu)
+	if f := b.r.Field; f != nil && f.Head > 0 && b.r.Test == nil {
 		label := "measured\n" + b.param("qm", f.Q) + ", " + b.head(f.Head)
 		m := Marker{X: qu.FromSI(f.Q), Y: hu.FromSI(f.Head), Role: MarkMeasured}
 		if u := b.r.FieldBands; u != nil {
@@ -487,6 +489,7 @@ func (b *builder) speedFacts() Block {
 func (b *builder) fieldCard() Card {
 	facts := b.fieldFacts()
 	return Card{ID: "field", Title: "Field check from gauge readings", Blocks: []Block{
+		fields(b.plain("tag", "", "", false)),
 		fields(b.quantity("ps", "", ""), b.quantity("pd", "", "")),
 		fields(b.quantity("zs", "", ""), b.quantity("zd", "", "")),
 		b.toggle("gsp"),

@@ -232,6 +232,18 @@ const (
 	RoleHGL
 	RoleVapour
 	RoleSpeed // the pump at another speed (the speed that meets a flow)
+	// The test at several flows: its tested head curve, the band's upper
+	// and lower edges, and the line from the origin through the
+	// guarantee point.
+	RoleTested
+	RoleTestedBand
+	RoleOriginLine
+	// A pump's history (Kind "history"): head, efficiencies and energy
+	// per volume against the days since its first sheet.
+	RoleHistoryHead
+	RoleHistoryPumpEff
+	RoleHistoryWireEff
+	RoleHistoryEnergy
 )
 
 // Curve is one line of a chart.
@@ -250,7 +262,13 @@ type Marker struct {
 	// DX and DY are a measured point's ± in flow and head (display
 	// units), 0 when unknown.
 	DX, DY float64
+	// Cross is a guarantee point's tolerance cross (display units): the
+	// flow bar from X0 to X1 at Y, the head bar from Y0 to Y1 at X.
+	Cross *Cross
 }
+
+// Cross is the tolerance cross of ISO 9906 about a guarantee point.
+type Cross struct{ X0, X1, Y0, Y1 float64 }
 
 // MarkRole says what a marker of the pump chart is.
 type MarkRole uint8
@@ -259,6 +277,7 @@ const (
 	MarkOperating MarkRole = iota // worked out: where pump and line meet
 	MarkPeak                      // the best-efficiency point of the data sheet
 	MarkMeasured                  // the field check's reading
+	MarkGuarantee                 // the guarantee point, with its tolerance cross (Marker.Cross)
 )
 
 // Band is a shaded range of x; X1 below X0 means "to the right edge".

@@ -1,0 +1,110 @@
+//go:build !wasm
+
+package main
+
+import (
+	"encoding/json"
+	"os"
+	"path/filepath"
+	"strconv"
+	"testing"
+	"time"
+
+	"fieldhead/calc/scenario"
+	"fieldhead/calc/scenario/present"
+
+	"github.com/chromedp/chromedp"
+)
+
+// TestBrowserPumpTestHistory enters three readings on the demo's Pump view
+// (with accuracies, the motor's efficiency and grade 2B), and sees the
+// tested curve on the chart and the guarantee verdict the view model gives
+// (this checks that the page and the core agree, not the physics); then
+// imports three dated sheets of one pump tag (scenario.HistoryDemo) and
+// sees the history with its chart and a cost figure. Screenshots at 768
+// and 390 px: pumptest-<w>.png, history-<w>.png.
+func TestBrowserPumpTestHistory(t *testing.T) {
+	site := testSite(t)
+	b := newTab(t)
+	srv := newSiteServer(t, site)
+	sc := scenario.Demo()
+	for _, kv := range [][2]string{{"view", "pump"}, {"etam", "93%"}, {"gcs", "1%"}, {"gss", "200kPa"}, {"gcd", "1%"},
+		{"gsd", "1000kPa"}, {"uqm", "2%"}, {"upin", "1%"}, {"uz", "10mm"}, {"grade", "2B"}} {
+		_ = sc.Set(kv[0], kv[1])
+	}
+	want := sc.Clone()
+	readings := [][4]string{{"20", "-12", "548", "21.5"}, {"30", "-14", "508", "26"}}
+	for i, r := range readings {
+		k := string(rune('2' + i))
+		for j, f := range []string{"qm", "ps", "pd", "pin"} {
+			_ = want.Set(f+k, r[j]+[]string{"L/s", "kPa", "kPa", "kW"}[j])
+		}
+	}
+	res := scenario.Evaluate(scenario.Read(want))
+	if res.Guarantee == nil {
+		t.Fatalf("the sheet has no guarantee verdict: %v", res.Errors)
+	}
+	d := scenario.NewDraft(want)
+	verdict, _ := present.Build(&d, res).Text("guarantee-level")
+
+	for _, w := range []int{768, 390} {
+		if err := chromedp.Do(b.ctx, chromedp.EmulateViewport(int64(w), 1024)); err != nil {
+			t.Fatal(err)
+		}
+		b.navigate(srv.URL + "/?" + sc.Encode())
+		for i, r := range readings {
+			k := string(rune('2' + i))
+			if !b.poll(`document.querySelector("#reading-add") !== null`, 5*time.Second) {
+				t.Fatal("no button to add a reading")
+			}
+			b.js(`(document.querySelector("#reading-add").click(), "")`)
+			if !b.poll(`document.querySelector("#in-qm`+k+`") !== null`, 5*time.Second) {
+				t.Fatalf("no box for reading %s", k)
+			}
+			for j, f := range []string{"qm", "ps", "pd", "pin"} {
+				b.typeInto("#in-"+f+k, r[j])
+			}
+		}
+		quoted, _ := json.Marshal(verdict)
+		if !b.poll(`(document.querySelector("#guarantee-level") || {}).textContent === `+string(quoted), 10*time.Second) {
+			t.Errorf("%d px: the verdict shows %q, the view model %q", w, b.js(`(document.querySelector("#guarantee-level") || {}).textContent || ""`), verdict)
+		}
+		if !b.poll(`document.querySelector('#pump-chart svg [data-series="tested"]') !== null && document.querySelectorAll('#pump-chart svg [data-mark="measured"]').length === 3 && document.querySelector('#pump-chart svg [data-series="cross"]') !== null`, 5*time.Second) {
+			t.Errorf("%d px: the chart lacks the tested curve, three readings or the cross", w)
+		}
+		if got := b.js(`String(document.querySelectorAll("#test-table tbody tr").length)`); got != "3" {
+			t.Errorf("%d px: the test table has %s rows, want 3", w, got)
+		}
+		b.js(`(document.querySelector('#pump-chart').scrollIntoView(), "")`)
+		b.shot("pumptest-chart-" + strconv.Itoa(w))
+		b.js(`(document.querySelector('#test').scrollIntoView(), "")`)
+		b.shot("pumptest-card-" + strconv.Itoa(w))
+	}
+
+	// The history: three dated sheets of one tag, imported.
+	file := filepath.Join(t.TempDir(), "history.txt")
+	if err := os.WriteFile(file, []byte(scenario.WriteKept("history", scenario.HistoryDemo())), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	b.navigate(srv.URL + "/?view=book")
+	if !b.poll(`document.querySelector("#book-import") !== null`, 10*time.Second) {
+		t.Fatal("no import in the site book")
+	}
+	if err := chromedp.Do(b.ctx, chromedp.SetUploadFiles(chromedp.CSS("#book-import"), []string{file})); err != nil {
+		t.Fatal(err)
+	}
+	if !b.poll(`document.querySelector("#history-1 svg") !== null && document.querySelectorAll("#history-1-table tbody tr").length === 3`, 10*time.Second) {
+		t.Fatalf("no history of three sheets: %s", b.js(`(document.querySelector("#history-1") || {}).textContent || "none"`))
+	}
+	if got := b.text("#history-1-cost-3"); got == "" || got == "—" {
+		t.Errorf("the last visit has no cost figure: %q", got)
+	}
+	for _, w := range []int{768, 390} {
+		if err := chromedp.Do(b.ctx, chromedp.EmulateViewport(int64(w), 1024)); err != nil {
+			t.Fatal(err)
+		}
+		time.Sleep(300 * time.Millisecond)
+		b.js(`(document.querySelector('#history-1').scrollIntoView(), "")`)
+		b.shot("history-" + strconv.Itoa(w))
+	}
+}
