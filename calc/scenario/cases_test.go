@@ -401,6 +401,74 @@ func observable(r Result, key string) (float64, string, error) {
 			}
 			return 0, "", nil
 		}
+	case "heat":
+		h := r.Heat
+		if h == nil {
+			return miss()
+		}
+		switch name {
+		case "q":
+			return h.Flow, "", nil
+		case "load":
+			return h.Load, "", nil
+		case "mass":
+			return h.MassFlow, "", nil
+		case "rho":
+			return h.Props.Density, "", nil
+		case "cp":
+			return h.Props.HeatCapacity, "", nil
+		case "tmean":
+			return h.Props.Temperature, "", nil
+		}
+	case "valve":
+		// valve.N.field: the line's Nth control valve, counted from point 1.
+		num, field, _ := strings.Cut(name, ".")
+		n, err := strconv.Atoi(num)
+		if err != nil || n < 1 {
+			return 0, "", fmt.Errorf("valve key %q: want valve.N.field", key)
+		}
+		if n > len(r.Valves) {
+			return 0, "", fmt.Errorf("valve %d not computed (%d valves; errors: %v)", n, len(r.Valves), r.Errors)
+		}
+		v := r.Valves[n-1]
+		switch field {
+		case "drop":
+			return v.Drop, "", nil
+		case "head":
+			return v.Head, "", nil
+		case "circuit":
+			return v.CircuitDrop, "", nil
+		case "authority":
+			return v.Authority.N, "", nil
+		case "inlet":
+			return v.Inlet, "", nil
+		}
+		ck := v.Check
+		if ck == nil {
+			return 0, "", fmt.Errorf("valve %d: no IEC 60534-2-1 check (FL %g, inlet %g Pa; errors: %v)", n, v.FL, v.Inlet, r.Errors)
+		}
+		yes := func(b bool) (float64, string, error) {
+			if b {
+				return 1, "", nil
+			}
+			return 0, "", nil
+		}
+		switch field {
+		case "ff":
+			return ck.FF, "", nil
+		case "chokeddrop":
+			return ck.ChokedDrop, "", nil
+		case "chokedflow":
+			return ck.ChokedFlow, "", nil
+		case "flow":
+			return ck.Flow, "", nil
+		case "choked":
+			return yes(ck.Choked)
+		case "incipient":
+			return ck.IncipientDrop, "", nil
+		case "cavitation":
+			return yes(ck.Cavitation)
+		}
 	case "convert":
 		c := r.Convert
 		if c == nil {
