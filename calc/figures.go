@@ -85,6 +85,7 @@ var reasonFigureDims = [...][]Dimension{
 	ReasonColumnBreaksNoFlow: {Dimensionless},
 	ReasonBoils:              {Temperature},
 	ReasonBulkModulus:        {Pressure},
+	ReasonBulkSalinity:       {Dimensionless},
 	ReasonFirstPointBelow:    {Flow, Length, Length},
 	ReasonFlowTwice:          {Dimensionless},
 	ReasonFractionTyped:      {Dimensionless},

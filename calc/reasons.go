@@ -153,6 +153,8 @@ const (
 	ReasonLoopUnknown             // Inconsistent: a closed loop solves for the pump head or the flow only (no points, no static head)
 	ReasonHeatLiquid              // Inconsistent: a load and its flow need the liquid's specific heat: water, seawater or a glycol mix, not typed properties
 	ReasonValveNeedsStatic        // Missing: a valve's IEC 60534-2-1 check needs the loop's static pressure (the pressure at its inlet)
+	ReasonValveFactorTwice        // Inconsistent: a valve's FL or xFz (Other) given twice in one component ("name:spec" Input)
+	ReasonBulkSalinity            // Missing: seawater's bulk modulus is known only at the standard salinity; Value the sheet's salinity (kg/kg)
 	reasonEnd
 )
 
@@ -289,6 +291,8 @@ var reasonNames = [...]string{"none",
 	"loop unknown",
 	"heat liquid",
 	"valve needs static",
+	"valve factor twice",
+	"bulk salinity",
 }
 
 // countErr reports n items where min to max are accepted (TooFew or

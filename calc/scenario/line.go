@@ -143,24 +143,26 @@ func ParseComponents(text string) ([]calc.Component, error) {
 			for _, w := range words[1:] {
 				lw := strings.ToLower(w)
 				var dst *float64
-				var num string
+				var num, field string
 				switch {
 				case strings.HasPrefix(lw, "xfz"):
-					dst, num = &c.XFz, w[3:]
+					dst, num, field = &c.XFz, w[3:], "xfz"
 				case strings.HasPrefix(lw, "fl"):
-					dst, num = &c.FL, w[2:]
+					dst, num, field = &c.FL, w[2:], "fl"
 				default:
 					return nil, bad(calc.UnknownChoice, calc.ReasonComponentSpec, name, spec)
 				}
+				// The factor's own name goes with the error (Other), so
+				// the words say which one could not be read.
 				f, err := strconv.ParseFloat(strings.TrimPrefix(num, "="), 64)
-				if err != nil {
-					return nil, bad(calc.NotANumber, calc.ReasonValveNumber, name, w)
+				if err != nil || math.IsNaN(f) || math.IsInf(f, 0) {
+					return nil, calc.NewFieldError("cmp", calc.NotANumber).Typed(name + ":" + w).Because(calc.ReasonValveNumber).With(field)
+				}
+				if *dst != 0 {
+					// Typed twice: neither is taken over the other.
+					return nil, calc.NewFieldError("cmp", calc.Inconsistent).Typed(name + ":" + spec).Because(calc.ReasonValveFactorTwice).With(field)
 				}
 				if !(f > 0 && f <= 1) {
-					field := "fl"
-					if dst == &c.XFz {
-						field = "xfz"
-					}
 					return nil, calc.NewFieldError("cmp", calc.OutOfRange).Typed(name+":"+w).Got(calc.Num(f)).Within(calc.Num(0), calc.Num(1)).Because(calc.ReasonValveFactor).With(field)
 				}
 				*dst = f

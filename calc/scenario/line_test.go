@@ -99,3 +99,84 @@ func TestComponentsInTheSheet(t *testing.T) {
 		t.Errorf("errors %v", r.Errors)
 	}
 }
+
+// TestParseValveFactors reads a control valve's data-sheet factors after its
+// Kv or Cv (doc.go: valve:kv40 fl0.9 xfz0.45). IEC 60534-2-1 defines FL and
+// xFz as ratios of pressure differences, so each lies above 0 and at most 1;
+// the figures are the typed ones, the Cv's Kv is calc.KvFromCv (checked
+// against GNU units in calc).
+func TestParseValveFactors(t *testing.T) {
+	good := []struct {
+		text        string
+		kv, fl, xfz float64
+	}{
+		{"valve:kv40", 40, 0, 0}, // an older link's bare Kv reads as before
+		{"valve:kv40 fl0.9 xfz0.45", 40, 0.9, 0.45},
+		{"valve:kv40 xfz0.45 fl0.9", 40, 0.9, 0.45}, // in either order
+		{"valve:KV40 FL0.9 XFZ0.45", 40, 0.9, 0.45}, // in capitals
+		{"valve:kv40 fl=0.85", 40, 0.85, 0},
+		{"valve: kv 40  fl1 ", 40, 1, 0}, // 1 is allowed: no recovery at all
+		{"trim:cv46 xfz0.3", calc.KvFromCv(46), 0, 0.3},
+	}
+	for _, g := range good {
+		cs, err := ParseComponents(g.text)
+		if err != nil || len(cs) != 1 {
+			t.Errorf("%q: %+v, %v", g.text, cs, err)
+			continue
+		}
+		c := cs[0]
+		if c.Kind != calc.ComponentValve || math.Abs(c.Kv-g.kv) > 1e-12*g.kv || c.FL != g.fl || c.XFz != g.xfz {
+			t.Errorf("%q: Kv %g FL %g xFz %g, want %g %g %g", g.text, c.Kv, c.FL, c.XFz, g.kv, g.fl, g.xfz)
+		}
+	}
+	// Each bad factor is an error on cmp naming the component and which
+	// factor, with the figure typed; never taken silently.
+	bad := []struct {
+		text   string
+		kind   calc.Kind
+		reason calc.Reason
+		other  string
+		msg    string
+	}{
+		{"valve:kv40 fl0", calc.OutOfRange, calc.ReasonValveFactor, "fl", `"valve": the valve's FL (the liquid pressure recovery factor) must be above 0 and at most 1: read it from the valve maker's data sheet; got 0`},
+		{"valve:kv40 fl1.2", calc.OutOfRange, calc.ReasonValveFactor, "fl", "FL (the liquid pressure recovery factor) must be above 0 and at most 1: read it from the valve maker's data sheet; got 1.2"},
+		{"valve:kv40 fl-0.5", calc.OutOfRange, calc.ReasonValveFactor, "fl", "got −0.5"},
+		{"valve:kv40 fl1e-400", calc.OutOfRange, calc.ReasonValveFactor, "fl", "got 0"},
+		{"valve:kv40 xfz0", calc.OutOfRange, calc.ReasonValveFactor, "xfz", "xFz (the incipient-cavitation factor) must be above 0 and at most 1"},
+		{"valve:kv40 fl0.9 xfz1.5", calc.OutOfRange, calc.ReasonValveFactor, "xfz", "xFz (the incipient-cavitation factor) must be above 0 and at most 1: read it from the valve maker's data sheet; got 1.5"},
+		{"valve:kv40 flx", calc.NotANumber, calc.ReasonValveNumber, "fl", `"valve": the valve's FL (the liquid pressure recovery factor) must be a number above 0 and at most 1 from its data sheet, as in valve:kv40 fl0.9 xfz0.45; got "flx"`},
+		{"valve:kv40 xfz", calc.NotANumber, calc.ReasonValveNumber, "xfz", `the valve's xFz (the incipient-cavitation factor) must be a number`},
+		{"valve:kv40 flNaN", calc.NotANumber, calc.ReasonValveNumber, "fl", `got "flNaN"`},
+		{"valve:kv40 xfzInf", calc.NotANumber, calc.ReasonValveNumber, "xfz", `got "xfzInf"`},
+		{"valve:kv40 fl0.9 fl0.8", calc.Inconsistent, calc.ReasonValveFactorTwice, "fl", `"valve": the valve's FL (the liquid pressure recovery factor) is given twice in "kv40 fl0.9 fl0.8": keep the one from its data sheet`},
+		{"valve:kv40 xfz0.4 fl0.9 xfz0.5", calc.Inconsistent, calc.ReasonValveFactorTwice, "xfz", "xFz (the incipient-cavitation factor) is given twice"},
+		{"valve:kv40 fx0.9", calc.UnknownChoice, calc.ReasonComponentSpec, "", `"valve": "kv40 fx0.9" is neither drop@flow`},
+		// A decimal comma starts another component: FL reads as 0.
+		{"valve:kv40 fl0,9", calc.OutOfRange, calc.ReasonValveFactor, "fl", "got 0"},
+	}
+	for _, b := range bad {
+		_, err := ParseComponents(b.text)
+		fe, ok := err.(*calc.FieldError)
+		if !ok || fe.Field != "cmp" || fe.Kind != b.kind || fe.Reason != b.reason || fe.Other != b.other || !strings.Contains(worded(fe, false), b.msg) {
+			t.Errorf("%q: %v (other %q, words %q), want a cmp error %v (%v) naming %q with %q", b.text, err, otherOf(fe), worded(fe, false), b.kind, b.reason, b.other, b.msg)
+		}
+	}
+	// In a sheet, the error stays on the segment's box and the link keeps
+	// the text as typed.
+	s, err := Parse("liq=water&t=20C&baro=101.325kPa&loop=1&q=12L/s&s1.l=50m&s1.nps=3&s1.sch=40&s1.mat=steel&s1.cmp=valve:kv40%20fl1.2")
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := Evaluate(Read(s))
+	if m := r.Errors["s1.cmp"]; m == nil || m.Reason != calc.ReasonValveFactor || s.Get("s1.cmp") != "valve:kv40 fl1.2" {
+		t.Errorf("in a sheet: errors %v, s1.cmp %q", r.Errors, s.Get("s1.cmp"))
+	}
+}
+
+// otherOf is fe's Other, "" for no error.
+func otherOf(fe *calc.FieldError) string {
+	if fe == nil {
+		return ""
+	}
+	return fe.Other
+}

@@ -130,8 +130,10 @@ func (e *eval) bulkModulus() (float64, string, bool) {
 		}
 		return k, "if97", true
 	case "seawater":
-		if e.salinity() != calc.SeawaterSalinity {
-			break // Mackenzie's sound speed is taken at 35 g/kg only
+		if sal := e.salinity(); sal != calc.SeawaterSalinity {
+			// Mackenzie's sound speed is taken at 35 g/kg only.
+			e.bad("kliq", calc.Missing).Got(calc.Num(sal)).Because(calc.ReasonBulkSalinity, calc.Num(calc.SeawaterSalinity))
+			return 0, "", false
 		}
 		k, err := calc.SeawaterBulkModulus(fl.Temperature, p)
 		if err != nil {

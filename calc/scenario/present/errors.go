@@ -664,13 +664,17 @@ var reasonWords = [...]func(w wording) string{
 	calc.ReasonValveFactor: func(w wording) string {
 		if w.fe.Input != "" {
 			name, _, _ := strings.Cut(w.fe.Input, ":")
-			what := "FL (the liquid pressure recovery factor)"
-			if w.fe.Other == "xfz" {
-				what = "xFz (the incipient-cavitation factor)"
-			}
-			return quote(name) + ": the valve's " + what + " must be above 0 and at most 1: read it from the valve maker's data sheet" + w.got()
+			return quote(name) + ": the valve's " + valveFactorName(w.fe.Other) + " must be above 0 and at most 1: read it from the valve maker's data sheet" + w.got()
 		}
 		return w.subject() + " must be above 0 and at most 1: read it from the valve maker's data sheet" + w.got()
+	},
+	calc.ReasonValveFactorTwice: func(w wording) string {
+		name, spec, _ := strings.Cut(w.fe.Input, ":")
+		return quote(name) + ": the valve's " + valveFactorName(w.fe.Other) + " is given twice in " + quote(spec) + ": keep the one from its data sheet"
+	},
+	calc.ReasonBulkSalinity: func(w wording) string {
+		return "enter the liquid's bulk modulus for the surge estimate: seawater's is known here only at " + gPerKg(w.figAt(0)) +
+			", and this sheet's salinity is " + gPerKg(w.fe.Value)
 	},
 	calc.ReasonLoopUnknown: func(w wording) string {
 		return "a closed loop has no points, levels or static head to solve for: solve for the pump head, or for the flow a pump head gives"
@@ -841,6 +845,9 @@ var reasonWords = [...]func(w wording) string{
 	},
 	calc.ReasonValveNumber: func(w wording) string {
 		name, spec, _ := strings.Cut(w.fe.Input, ":")
+		if f := valveFactorName(w.fe.Other); f != "" {
+			return quote(name) + ": the valve's " + f + " must be a number above 0 and at most 1 from its data sheet, as in " + name + ":kv40 fl0.9 xfz0.45; got " + quote(spec)
+		}
 		kv := "kv"
 		if strings.HasPrefix(strings.ToLower(spec), "cv") {
 			kv = "cv"
@@ -1031,6 +1038,18 @@ func (c cautioning) num(i int) string {
 }
 
 // gPerKg words a salinity (kg/kg) in g/kg, "?" when the error lacks it.
+// valveFactorName names a control valve's data-sheet factor by its field
+// ("fl" or "xfz") as the words of an error do; "" for another field.
+func valveFactorName(field string) string {
+	switch field {
+	case "fl":
+		return "FL (the liquid pressure recovery factor)"
+	case "xfz":
+		return "xFz (the incipient-cavitation factor)"
+	}
+	return ""
+}
+
 func gPerKg(f *calc.Figure) string {
 	if f == nil {
 		return "?"
