@@ -1,6 +1,9 @@
 package scenario
 
 import (
+	"math"
+	"strconv"
+	"strings"
 	"testing"
 
 	"fieldhead/calc"
@@ -188,5 +191,127 @@ func TestDraftGaugePipeBySize(t *testing.T) {
 	d.Switch("gsp", "d")
 	if d.Scen.Get("ds") != "202.7mm" || d.Scen.Has("dsn") {
 		t.Errorf("switched back: ds %q, dsn %q", d.Scen.Get("ds"), d.Scen.Get("dsn"))
+	}
+}
+
+// TestDraftLoopSwitch: the kind-of-line switch (loop) is a choice of the
+// Draft. A closed loop leaves the points' values in the link, unread, and
+// the head is the loop's losses alone; switching back gives the open line's
+// head again. By the energy balance (the brief's, in head form) with equal
+// pressures and both points at rest, the open line needs z2 − z1 more than
+// the same pipe as a loop.
+func TestDraftLoopSwitch(t *testing.T) {
+	var blank Scenario
+	d := NewDraft(blank)
+	for _, kv := range [][2]string{{"liq", "water"}, {"t", "10C"}, {"baro", "101.325kPa"},
+		{"p1", "0kPa"}, {"z1", "100m"}, {"v1", "0m/s"}, {"p2", "0kPa"}, {"z2", "112m"}, {"v2", "0m/s"},
+		{"q", "12L/s"}, {"s1.l", "120m"}, {"s1.nps", "3"}, {"s1.sch", "40"}, {"s1.mat", "steel"},
+		{"s1.fit", "elbow90:4"}, {"s1.cmp", "coil:3.2m@12L/s"}} {
+		d.Choose(kv[0], kv[1])
+	}
+	head := func(what string) (hp, hf float64) {
+		t.Helper()
+		r := Evaluate(Read(d.Scen))
+		if r.Balance == nil {
+			t.Fatalf("%s: no balance; errors %v", what, r.Errors)
+		}
+		return r.Balance.PumpHead, r.Balance.FrictionHead
+	}
+	open, hf := head("open line")
+	if math.Abs(open-(12+hf)) > 1e-9*open {
+		t.Errorf("open line: pump head %.9g m, want z2 − z1 + losses = %.9g m", open, 12+hf)
+	}
+
+	d.Choose("loop", "1")
+	boxesMatch(t, "loop switched on", &d)
+	loop, loopHf := head("closed loop")
+	if math.Abs(loop-loopHf) > 1e-9*loop || math.Abs(open-loop-12) > 1e-9*open {
+		t.Errorf("closed loop: pump head %.9g m (losses %.9g m), want the open line's %.9g m less z2 − z1 = 12 m", loop, loopHf, open)
+	}
+	for _, p := range []string{"p1", "z1", "v1", "p2", "z2", "v2"} {
+		if !d.Scen.Has(p) {
+			t.Errorf("closed loop: %s left the link; nothing typed is lost", p)
+		}
+	}
+	if !strings.Contains(d.Scen.Encode(), "loop=1") {
+		t.Errorf("closed loop: link %q has no loop=1", d.Scen.Encode())
+	}
+
+	// A loop solves for the pump head or the flow only: another unknown is
+	// an error on solve, and the choice stays in the link.
+	d.Choose("solve", "z2")
+	r := Evaluate(Read(d.Scen))
+	if m := r.Errors["solve"]; m == nil || m.Reason != calc.ReasonLoopUnknown || d.Scen.Get("solve") != "z2" {
+		t.Errorf("loop solving for z2: errors %v, solve %q", r.Errors, d.Scen.Get("solve"))
+	}
+	d.Choose("solve", "q")
+	d.Choose("hp", strconv.FormatFloat(loop, 'g', 17, 64)+"m")
+	if r := Evaluate(Read(d.Scen)); r.Balance == nil || math.Abs(r.Balance.Q-0.012) > 1e-9 {
+		t.Errorf("loop solving for the flow at its own head: %+v, errors %v", r.Balance, r.Errors)
+	}
+	d.Choose("solve", "hp")
+
+	d.Choose("loop", "0")
+	boxesMatch(t, "loop switched off", &d)
+	if back, _ := head("open line again"); back != open {
+		t.Errorf("back to an open line: pump head %.12g m, want %.12g m as before", back, open)
+	}
+	if d.Scen.Get("z2") != "112m" || d.Scen.Get("z1") != "100m" {
+		t.Errorf("back to an open line: z1 %q, z2 %q", d.Scen.Get("z1"), d.Scen.Get("z2"))
+	}
+}
+
+// TestDraftLoadSwitch: the flow is given as a flow or as a heat load
+// (group qby). Switching keeps the other side's value aside and brings it
+// back; the flow a load needs is Q = P/(ρ·cp·|ΔT|) (the steady-flow energy
+// balance of a liquid), so the load the worked-out flow carries is the load
+// typed.
+func TestDraftLoadSwitch(t *testing.T) {
+	var blank Scenario
+	d := NewDraft(blank)
+	for _, kv := range [][2]string{{"loop", "1"}, {"liq", "water"}, {"t", "7C"}, {"baro", "101.325kPa"},
+		{"q", "12L/s"}, {"tsup", "7C"}, {"tret", "12C"}, {"l", "120m"}, {"nps", "3"}, {"sch", "40"}, {"mat", "steel"}} {
+		d.Choose(kv[0], kv[1])
+	}
+	r := Evaluate(Read(d.Scen))
+	if r.Heat == nil || r.Heat.FromLoad || r.Balance == nil {
+		t.Fatalf("flow typed: heat %+v, errors %v", r.Heat, r.Errors)
+	}
+	carried := r.Heat.Load // the load 12 L/s carries from 7 to 12 °C
+
+	d.Switch("qby", "load")
+	boxesMatch(t, "switched to a load", &d)
+	if d.Scen.Has("q") || d.SideOf("qby") != "load" {
+		t.Fatalf("switched to a load: q %q, side %q", d.Scen.Get("q"), d.SideOf("qby"))
+	}
+	// No load yet: with neither side given the link cannot say which was
+	// meant, so the flow is missing, in words that offer the load too.
+	r = Evaluate(Read(d.Scen))
+	if m := r.Errors["q"]; m == nil || !strings.Contains(worded(m, false), "heat load") || r.Balance != nil {
+		t.Errorf("no load typed: errors %v, balance %+v", r.Errors, r.Balance)
+	}
+	d.Type("load", strconv.FormatFloat(carried/1000, 'g', 17, 64))
+	if got := d.Scen.Get("load"); !strings.HasSuffix(got, "kW") {
+		t.Errorf("a load typed takes the default unit: %q", got)
+	}
+	r = Evaluate(Read(d.Scen))
+	if r.Heat == nil || !r.Heat.FromLoad || r.Balance == nil {
+		t.Fatalf("load typed: heat %+v, errors %v", r.Heat, r.Errors)
+	}
+	if math.Abs(r.Heat.Flow-0.012) > 1e-12 || math.Abs(r.Balance.Q-r.Heat.Flow) > 1e-15 {
+		t.Errorf("the load 12 L/s carries gives back %.15g m³/s (balance %.15g), want 0.012", r.Heat.Flow, r.Balance.Q)
+	}
+	if h := r.Heat; math.Abs(h.Load-h.Flow*h.Props.Density*h.Props.HeatCapacity*5) > 1e-9*h.Load {
+		t.Errorf("P = ρ·Q·cp·ΔT does not hold: %+v", h)
+	}
+
+	d.Switch("qby", "q")
+	boxesMatch(t, "switched back to a flow", &d)
+	if d.Scen.Get("q") != "12L/s" || d.Scen.Has("load") {
+		t.Errorf("back to a flow: q %q, load %q", d.Scen.Get("q"), d.Scen.Get("load"))
+	}
+	d.Switch("qby", "load")
+	if !strings.HasSuffix(d.Scen.Get("load"), "kW") || d.Scen.Has("q") {
+		t.Errorf("the load again: load %q, q %q", d.Scen.Get("load"), d.Scen.Get("q"))
 	}
 }
