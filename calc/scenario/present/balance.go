@@ -71,8 +71,14 @@ func (b *builder) answerCard() Card {
 	if b.isLoop() {
 		a.Label += " · closed loop"
 	}
+	// A loop offers two unknowns: a grid of two columns, so no empty
+	// cells sit in the frame beside them.
+	grid := "solve-grid"
+	if b.isLoop() {
+		grid += " two"
+	}
 	return Card{ID: "answer-card", Class: "answer-card", Title: "Solve for", Blocks: []Block{
-		{Kind: BlockButtons, Class: "solve-grid", Buttons: btns},
+		{Kind: BlockButtons, Class: grid, Buttons: btns},
 		maybe(b.problem("solve") != "", text("msg err", "err-solve", b.problem("solve"))),
 		{Kind: BlockAnswer, ID: "answer", Answer: a},
 		b.warnings(nil, "balance", "run", "site", "liquid"),

@@ -1,0 +1,45 @@
+package present
+
+import (
+	"strings"
+	"testing"
+
+	"fieldhead/calc/scenario"
+)
+
+// TestSolveGridOfALoop: the solve-for row offers every unknown on a line
+// between two points and only the pump head and the flow on a closed loop
+// (a loop has no points or static head to solve for), laid out two to a
+// row so that no empty cell sits inside the frame (web/fieldhead.css
+// .solve-grid.two). This project's own layout rule, no external source.
+func TestSolveGridOfALoop(t *testing.T) {
+	grid := func(sc scenario.Scenario) Block {
+		t.Helper()
+		sh, _ := sheetOf(t, sc, "balance")
+		for _, bl := range card(t, sh.Cards, "answer-card").Blocks {
+			if bl.Kind == BlockButtons && strings.HasPrefix(bl.Class, "solve-grid") {
+				return bl
+			}
+		}
+		t.Fatal("no solve-for row")
+		return Block{}
+	}
+	ids := func(bl Block) string {
+		var out []string
+		for _, b := range bl.Buttons {
+			out = append(out, b.ID)
+		}
+		return strings.Join(out, " ")
+	}
+	open := grid(scenario.Demo())
+	if open.Class != "solve-grid" || len(open.Buttons)%4 != 0 || len(open.Buttons) != len(scenario.Choices("solve")) {
+		t.Errorf("open line: class %q, %d buttons (%s): want every unknown, rows of four filled", open.Class, len(open.Buttons), ids(open))
+	}
+	loop := grid(with(t, scenario.Demo(), "loop", "1"))
+	if loop.Class != "solve-grid two" || ids(loop) != "solve-hp solve-q" {
+		t.Errorf("closed loop: class %q, buttons %s; want solve-grid two with solve-hp solve-q", loop.Class, ids(loop))
+	}
+	if !loop.Buttons[0].On {
+		t.Errorf("closed loop: the pump head (the demo's unknown) is not the one chosen")
+	}
+}
