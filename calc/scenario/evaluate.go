@@ -73,9 +73,11 @@ func Evaluate(in Inputs) Result {
 	// The table of what each part reads has the last word: a part that
 	// reads an input in error is left out, whatever path computed it
 	// (TestUsesExactly keeps the evaluators and the table in step).
-	for _, p := range Parts() {
-		if res.Has(p) && res.Inputs.AnyBad(res.Inputs.Uses(p)...) {
-			res.drop(p)
+	if res.Inputs.anyBad {
+		for _, p := range Parts() {
+			if res.Has(p) && res.Inputs.AnyBad(res.Inputs.Uses(p)...) {
+				res.drop(p)
+			}
 		}
 	}
 	return res

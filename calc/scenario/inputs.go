@@ -30,8 +30,9 @@ type Inputs struct {
 	// Problems holds what is wrong with each input, keyed by parameter.
 	Problems map[string]*calc.FieldError
 
-	vals  map[string]Value
-	sides map[string]string
+	vals   map[string]Value
+	sides  map[string]string
+	anyBad bool // some value is Bad
 }
 
 // Value is one parameter as read.
@@ -131,8 +132,7 @@ func Read(s Scenario) Inputs {
 		r.bad("units", calc.UnknownChoice).Typed(u)
 	}
 	in.Segments = s.SegmentCount()
-	for _, name := range allParams {
-		text := s.Get(name)
+	for name, text := range s.raw {
 		if strings.TrimSpace(text) == "" {
 			continue
 		}
@@ -154,6 +154,7 @@ func Read(s Scenario) Inputs {
 			v.Bad = true
 			in.vals[name] = v
 		}
+		in.anyBad = in.anyBad || in.vals[name].Bad
 	}
 	return in
 }

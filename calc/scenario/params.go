@@ -4,6 +4,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"sync"
 
 	"fieldhead/calc"
 )
@@ -494,7 +495,34 @@ var Groups = []Group{
 
 // LookupGroup returns a group by key; "s2.pipe" is the pipe group of
 // segment 2, with that segment's parameters.
+// Groups are looked up on every reading and every edit: the segments'
+// are made once, on first use, and shared (callers must not change them).
 func LookupGroup(key string) (Group, bool) {
+	groupsOnce.Do(func() {
+		groupIndex = map[string]Group{}
+		for _, g := range Groups {
+			groupIndex[g.Key] = g
+			if !isSegmentGroup(g) {
+				continue
+			}
+			for i := 1; i <= MaxSegments; i++ {
+				if sg, ok := makeGroup(SegmentParam(i, g.Key)); ok {
+					groupIndex[sg.Key] = sg
+				}
+			}
+		}
+	})
+	g, ok := groupIndex[key]
+	return g, ok
+}
+
+var (
+	groupsOnce sync.Once
+	groupIndex map[string]Group
+)
+
+// makeGroup builds the group of key, a segment's from the table's row.
+func makeGroup(key string) (Group, bool) {
 	n, base := splitSegment(key)
 	if n == 0 {
 		base = key
