@@ -66,7 +66,7 @@ func (b *builder) answerCard() Card {
 			a.Label, a.Values, a.Subs = full.Label, full.Values, append(full.Subs, a.Subs...)
 		}
 	} else {
-		a.None, a.Why = true, b.toCheck(balanceInputs()...)
+		a.None, a.Why = true, b.whyNone(scenario.PartBalance)
 	}
 	if b.isLoop() {
 		a.Label += " · closed loop"
@@ -239,13 +239,3 @@ func (b *builder) budgetLabel(key, fallback string) string {
 	return fallback
 }
 
-// balanceInputs are the parameters the balance may depend on.
-func balanceInputs() []string {
-	var out []string
-	for _, p := range scenario.Params {
-		if p != "cv" && p != "cvref" {
-			out = append(out, p)
-		}
-	}
-	return out
-}

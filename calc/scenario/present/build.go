@@ -188,6 +188,10 @@ func (b *builder) named(p string) string {
 }
 
 // toCheck says which of params have problems, or that inputs are missing.
+// whyNone says why part has no answer: the inputs it reads (scenario's
+// table of them, Inputs.Uses) that are in error or missing.
+func (b *builder) whyNone(part scenario.Part) string { return b.toCheck(b.in.Uses(part)...) }
+
 func (b *builder) toCheck(params ...string) string {
 	var names []string
 	seen := map[string]bool{}

@@ -110,7 +110,7 @@ func (b *builder) convertCard() Card {
 	cr := b.r.Convert
 	if cr == nil {
 		c.Blocks = []Block{{Kind: BlockAnswer, ID: "answer", Answer: &Answer{None: true, NoneID: "answer-value",
-			Why: b.toCheck("cv", "cvref", "liq", "t", "rho", "mu", "pv", "alt", "baro")}}}
+			Why: b.whyNone(scenario.PartConvert)}}}
 		return c
 	}
 	t := &Table{ID: "answer", Class: "conv"}

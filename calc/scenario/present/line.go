@@ -24,7 +24,7 @@ func (b *builder) lineCard() Card {
 	if br == nil || br.Line == nil {
 		a.None, a.Why = true, "Describe the pipe below as segments, from point 1 to point 2."
 		if n > 0 {
-			a.Why = b.toCheck(b.lineInputs()...)
+			a.Why = b.whyNone(scenario.PartBalance)
 		}
 	} else {
 		l := br.Line
@@ -138,17 +138,6 @@ func (b *builder) highPointFacts() []Fact {
 			v = b.param("q", br.FullFlow) + " (the surplus head taken by a valve at point 2)"
 		}
 		out = append(out, Fact{ID: "full-flow", Label: "largest flow the line carries full", Value: v, Key: true})
-	}
-	return out
-}
-
-// lineInputs are the parameters the line's result depends on.
-func (b *builder) lineInputs() []string {
-	out := balanceInputs()
-	for n := 1; n <= b.d.ShownSegments(); n++ {
-		for _, f := range scenario.SegmentFields {
-			out = append(out, scenario.SegmentParam(n, f))
-		}
 	}
 	return out
 }

@@ -41,7 +41,7 @@ func (b *builder) operatingCard() Card {
 	case pr == nil:
 		a.Why = "Enter the pump's data sheet below: at least three flows and heads."
 		if b.in.Given("pq") || b.in.Given("ph") {
-			a.Why = b.toCheck("pq", "ph", "peff", "pnpsh", "spd", "pumps")
+			a.Why = b.whyNone(scenario.PartPump)
 		}
 	case pr.Operating == nil:
 		for _, p := range []string{"pq", "ph", "spd", "pumps"} {
@@ -51,7 +51,7 @@ func (b *builder) operatingCard() Card {
 			}
 		}
 		if a.Why == "" {
-			a.Why = b.toCheck(balanceInputs()...)
+			a.Why = b.whyNone(scenario.PartOperating)
 		}
 	default:
 		op := pr.Operating
@@ -196,11 +196,7 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 func (b *builder) npshCard() Card {
 	why := "Enter the pump centreline elevation to work out the NPSH available."
 	if b.in.Given("zp") {
-		ps := []string{"zp", "p1", "p1ref", "z1", "hs", "pafter", "npshr", "pnpsh", "t", "liq", "rho", "pv", "alt", "baro"}
-		if !b.in.Given("hs") {
-			ps = append(ps, "q") // the suction loss from the segments needs it
-		}
-		why = b.toCheck(ps...)
+		why = b.whyNone(scenario.PartNPSH)
 	}
 	typed := b.d.SideOf("npsh") == "typed"
 	level, facts, note := b.npshBlocks()
@@ -700,7 +696,7 @@ func (b *builder) turbineCard() Card {
 	case t != nil:
 		a = &Answer{Label: "Output at " + b.param("q", t.Q), Values: []Value{{"turb-power", b.show(t.Power, calc.Power)}}}
 	case solved:
-		a = &Answer{None: true, NoneID: "turb-power", Why: b.toCheck(b.lineInputs()...)}
+		a = &Answer{None: true, NoneID: "turb-power", Why: b.whyNone(scenario.PartTurbine)}
 	}
 	facts := b.turbineFacts()
 	offer := t == nil && !solved

@@ -247,7 +247,7 @@ func (b *builder) reportResults() Card {
 		}
 		budget = Block{Kind: BlockTable, Table: t}
 	} else {
-		answer = text("muted", "", "The energy balance has no answer: "+b.toCheck(balanceInputs()...))
+		answer = text("muted", "", "The energy balance has no answer: "+b.whyNone(scenario.PartBalance))
 	}
 	line := br != nil && br.Line != nil
 	kt := b.fittingKTable()

@@ -123,10 +123,8 @@ func (b *builder) segmentPicker(seg int) Block {
 // flow, then how it splits, the K of each fitting and the flow's regime.
 func (b *builder) runCard(seg int) Card {
 	c := Card{ID: "run-answer", Class: "answer-card", Title: "Loss in the run"}
-	pre := ""
 	if seg > 0 {
 		c.Title = "Loss in segment " + strconv.Itoa(seg)
-		pre = scenario.SegmentParam(seg, "")
 	}
 	picker := b.segmentPicker(seg)
 	var r *scenario.RunResult
@@ -135,11 +133,7 @@ func (b *builder) runCard(seg int) Card {
 	}
 	fl := b.r.Fluid
 	if r == nil || fl == nil {
-		ps := []string{"liq", "t", "rho", "mu", "pv", "q", "rseg", "fm", "chw"}
-		for _, f := range []string{"l", "d", "nps", "sch", "mat", "eps", "fit", "k"} {
-			ps = append(ps, pre+f)
-		}
-		c.Blocks = []Block{picker, {Kind: BlockAnswer, ID: "answer", Answer: &Answer{None: true, NoneID: "answer-value", Why: b.toCheck(ps...)}},
+		c.Blocks = []Block{picker, {Kind: BlockAnswer, ID: "answer", Answer: &Answer{None: true, NoneID: "answer-value", Why: b.whyNone(scenario.PartRunView)}},
 			Block{Kind: BlockEmpty}, Block{Kind: BlockEmpty}, b.warnings(nil, "run", "runview", "liquid")}
 		return c
 	}

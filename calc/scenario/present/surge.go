@@ -4,6 +4,7 @@ import (
 	"strconv"
 
 	"fieldhead/calc"
+	"fieldhead/calc/scenario"
 )
 
 // Surge on a fast closure at point 2 (the Balance view and the report),
@@ -33,7 +34,7 @@ func (b *builder) surgeCard() Card {
 			Values: []Value{{"surge-dp", b.show(sr.DeltaP, calc.Pressure)}, {"surge-dh", b.head(sr.DeltaH)}}}
 	case b.in.Given("tc"):
 		a = &Answer{None: true, NoneID: "surge-dp", Label: "Pressure rise on a fast closure",
-			Why: b.toCheck("tc", "dv", "wall", "epipe", "kliq", "cr", "q", "t")}
+			Why: b.whyNone(scenario.PartSurge)}
 	}
 	liq := b.in.Choice("liq")
 	facts := b.surgeFacts()
