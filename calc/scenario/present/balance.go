@@ -238,4 +238,3 @@ func (b *builder) budgetLabel(key, fallback string) string {
 	}
 	return fallback
 }
-
