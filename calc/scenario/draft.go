@@ -29,9 +29,11 @@ type Draft struct {
 	// (see switchUnits), so switching back gives back what was typed.
 	Was map[string]unitMemo
 	// Survey is a pasted survey table kept while some of its rows could
-	// not be used, SurveyNotes what PasteProfile said of it (see there).
+	// not be used, SurveyNotes what PasteProfile said of it (see there),
+	// SurveyMade the line saying what it made.
 	Survey      string
 	SurveyNotes []string
+	SurveyMade  string
 	// Unverified is set for a sheet opened from a link that arrived
 	// damaged: every figure is shown unverified until the person confirms
 	// the values (Verify). Suspect lists the values the link's check names
