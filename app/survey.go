@@ -22,6 +22,13 @@ func (c *survey) Render() (ui app.UI) {
 	for i, n := range v.Notes {
 		notes[i] = app.Li().Text(n)
 	}
+	// The pipe button keeps its place (hidden when every segment has a
+	// pipe): go-app matches elements by position.
+	pipe := app.Button().Type("button").ID("survey-pipe").Class("act").Hidden(v.Pipe.Text == "")
+	if v.Pipe.Text != "" {
+		pipe = pipe.ID(v.Pipe.ID).Class(v.Pipe.Class).Disabled(v.Pipe.Disabled).Title(v.Pipe.Hint).
+			Aria("describedby", v.ID+"-made").OnClick(c.onPipe)
+	}
 	return app.Details().Class("astext survey").Open(v.Open).Body(
 		app.Summary().Text(v.Title),
 		app.Div().Class("field").Body(
@@ -30,8 +37,18 @@ func (c *survey) Render() (ui app.UI) {
 				Attr("autocomplete", "off").Aria("describedby", v.ID+"-hint").Text(v.Text),
 			app.P().ID(v.ID+"-hint").Class("muted").Text(v.Hint)),
 		app.Button().Type("button").ID(v.Button.ID).Class(v.Button.Class).Text(v.Button.Text).OnClick(c.onPaste),
+		app.P().ID(v.ID+"-made").Class("survey-made").Aria("live", "polite").Text(v.Made),
+		pipe.Text(v.Pipe.Text),
 		app.Ul().Class("msg warn survey-notes").Aria("live", "polite").Body(notes...),
 	)
+}
+
+// onPipe gives segment 1's pipe to the segments without one.
+func (c *survey) onPipe(ctx app.Context, e app.Event) {
+	defer c.S.contain("giving segment 1's pipe to the other segments")
+	c.S.d.GivePipe()
+	c.S.copyNote = ""
+	c.S.evaluate()
 }
 
 // onPaste makes the segments from the box's text; a paste whose every row

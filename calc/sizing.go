@@ -22,10 +22,30 @@ type SizingLimits struct {
 	GradientMax               float64 // largest pipe-friction gradient, m per m, > 0
 }
 
+// The same marks as a US sheet states them, each a round figure of its own
+// rather than the metric one converted (0.6–2.4 m/s would read 1.97–7.87
+// ft/s): a band of 2 to 8 ft/s (common practice for pumped water lines,
+// from memory), in m/s. The gradient, a ratio, is SizingGradientMax in
+// both: 4 ft per 100 ft (common practice, from memory).
+const (
+	SizingVelocityLowUS  = 2 * 0.3048 // m/s: 2 ft/s (1 ft = 0.3048 m exactly, NIST SP 811)
+	SizingVelocityHighUS = 8 * 0.3048 // m/s: 8 ft/s
+)
+
 // DefaultSizingLimits returns SizingVelocityLow, SizingVelocityHigh and
 // SizingGradientMax.
 func DefaultSizingLimits() SizingLimits {
 	return SizingLimits{SizingVelocityLow, SizingVelocityHigh, SizingGradientMax}
+}
+
+// DefaultSizingLimitsFor returns the defaults a sheet in US customary
+// units (us) or in SI uses: SizingVelocityLowUS, SizingVelocityHighUS and
+// SizingGradientMax, or DefaultSizingLimits.
+func DefaultSizingLimitsFor(us bool) SizingLimits {
+	if us {
+		return SizingLimits{SizingVelocityLowUS, SizingVelocityHighUS, SizingGradientMax}
+	}
+	return DefaultSizingLimits()
 }
 
 // SizingRow is one size of a sizing table.

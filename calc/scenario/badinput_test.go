@@ -86,7 +86,7 @@ func TestBadLinks(t *testing.T) {
 		{"a glycol share by volume above the range", with("liq=eg", "glyv=65%"), "", "glyv", "by volume", "glyv=65%", false},
 		{"a glycol share in a unit of its own", with("liq=eg", "gly=30kg"), "", "gly", "", "gly=30kg", false},
 		{"a glycol mix with no share", with("liq=pg"), "", "gly", "glycol share", "liq=pg", false},
-		{"a glycol mix below its freezing point", with("liq=pg", "gly=30%", "t=-20C"), "", "t", "freezes at -12.79 °C", "t=-20C", false},
+		{"a glycol mix below its freezing point", with("liq=pg", "gly=30%", "t=-20C"), "", "t", "freezes at −12.79 °C", "t=-20C", false},
 		{"a glycol mix above 100 °C", with("liq=eg", "gly=30%", "t=120C"), "", "t", "freezing point", "t=120C", false},
 		{"a glycol share typed as a fraction", with("liq=pg", "gly=0.3"), "", "gly", "30 %", "gly=0.3", false},
 		{"a glycol share typed as a fraction, kept", with("liq=pg", "gly=0.3", "keep=gly"), "", "", "", "gly=0.3", true},

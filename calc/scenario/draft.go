@@ -25,10 +25,15 @@ type Draft struct {
 	Segments   int               // segment cards shown, at least the scenario's (a new one may be empty)
 	Rows       int               // data-sheet rows shown, at least the lists' length
 	Readings   int               // test readings shown, at least the highest given (ShownReadings)
+	// Was holds each value's text before and after the last unit switch
+	// (see switchUnits), so switching back gives back what was typed.
+	Was map[string]unitMemo
 	// Survey is a pasted survey table kept while some of its rows could
-	// not be used, SurveyNotes what PasteProfile said of it (see there).
+	// not be used, SurveyNotes what PasteProfile said of it (see there),
+	// SurveyMade the line saying what it made.
 	Survey      string
 	SurveyNotes []string
+	SurveyMade  string
 	// Unverified is set for a sheet opened from a link that arrived
 	// damaged: every figure is shown unverified until the person confirms
 	// the values (Verify). Suspect lists the values the link's check names
@@ -238,9 +243,15 @@ func (d *Draft) PickUnit(param, unit string) {
 	d.set(param, num+unit)
 }
 
-// Choose sets a choice, a count or any parameter to text as it is.
+// Choose sets a choice, a count or any parameter to text as it is. The
+// unit system ("units") is switched by the one rule of draft_units.go:
+// every box's value is rewritten in the new system's units.
 func (d *Draft) Choose(param, text string) {
 	d.endEdit()
+	if param == "units" {
+		d.switchUnits(text)
+		return
+	}
 	d.set(param, text)
 }
 

@@ -291,20 +291,24 @@ func ParseSurvey(text string) (pts []SurveyPoint, problems []string) {
 // Segment k of the sheet takes the k-th run of the survey: its length and
 // end elevation change, its pipe, wall, fittings and components stay. New
 // segments take the pipe and wall of the sheet's last segment (as Add a
-// segment does); a sheet with a single run makes it segment 1 first. A
-// sheet with more segments than the survey keeps the further ones as they
-// are (a note says so). Point 1's elevation is set from the first point
-// when the sheet has none; one already given is kept (it may be a water
-// surface) and a note says so.
+// segment does); a sheet with a single run makes it segment 1 first. The
+// fittings that belong at the line's end (the exit, see lineEnd) leave the
+// sheet's last segment for the survey's last, so no exit is left mid-line;
+// those of the line's start stay on segment 1. A sheet with more segments
+// than the survey keeps the further ones as they are (a note says so).
+// Point 1's elevation is set from the first point when the sheet has none;
+// one already given is kept (it may be a water surface) and a note says
+// so. When segments lack a pipe, GivePipe gives them segment 1's.
 //
-// It reports whether the scenario changed. SurveyNotes holds the problems
-// and notes; Survey keeps the pasted text while a row could not be used,
-// so nothing pasted is lost. A survey of fewer than two good points, or
-// of more than MaxSegments+1, changes nothing.
+// It reports whether the scenario changed. SurveyMade says what was made
+// (how many segments, which were new, which fittings moved); SurveyNotes
+// holds the problems and notes; Survey keeps the pasted text while a row
+// could not be used, so nothing pasted is lost. A survey of fewer than two
+// good points, or of more than MaxSegments+1, changes nothing.
 func (d *Draft) PasteProfile(text string) bool {
 	d.endEdit()
 	pts, notes := ParseSurvey(text)
-	d.Survey, d.SurveyNotes = text, notes
+	d.Survey, d.SurveyNotes, d.SurveyMade = text, notes, ""
 	switch {
 	case len(pts) < 2:
 		d.SurveyNotes = append(d.SurveyNotes, "a profile needs at least two points (rows of chainage and elevation); nothing was changed")
@@ -336,9 +340,11 @@ func (d *Draft) PasteProfile(text string) bool {
 	}
 	before := d.Scen.Encode()
 	n := len(pts) - 1
+	had := d.Scen.SegmentCount()
 	for d.ShownSegments() < n {
 		d.AddSegment()
 	}
+	moved := d.moveEndFittings(had, n)
 	for k := 1; k <= n; k++ {
 		a, b := pts[k-1], pts[k]
 		dc, dz := b.Chainage-a.Chainage, (b.Elevation-a.Elevation)*ratio
@@ -354,10 +360,196 @@ func (d *Draft) PasteProfile(text string) bool {
 	if extra := d.ShownSegments() - n; extra > 0 {
 		d.SurveyNotes = append(d.SurveyNotes, fmt.Sprintf("segments %d to %d are kept as they were; remove them if the survey replaces them", n+1, n+extra))
 	}
+	d.SurveyMade = d.madeLine(len(pts), had, n, moved)
 	if len(notes) == 0 {
 		d.Survey = ""
 	}
 	return d.Scen.Encode() != before
+}
+
+// lineEnd says where a fitting belongs on a line: −1 at its start (an
+// entrance from the source, a foot valve on the suction's inlet), +1 at
+// its end (the exit into a reservoir), 0 anywhere (common practice: an
+// entrance and a foot valve are where the line leaves its source, the
+// exit loss where it enters the receiving tank).
+func lineEnd(key string) int {
+	switch key {
+	case "entry_sharp", "entry_round", "entry_reentrant", "foot", "foot_hinged":
+		return -1
+	case "exit":
+		return +1
+	}
+	return 0
+}
+
+// moveEndFittings moves the fittings of the line's end from segment from
+// (the sheet's last before a paste) to segment to (the survey's last),
+// adding them to any it has; it returns those moved, worded ("1 exit").
+// A fitting list that cannot be read stays as it is (its box says why).
+func (d *Draft) moveEndFittings(from, to int) []string {
+	if from < 1 || to <= from {
+		return nil
+	}
+	src, dst := SegmentParam(from, "fit"), SegmentParam(to, "fit")
+	list, err := ParseFittings(d.Scen.Get(src))
+	there, err2 := ParseFittings(d.Scen.Get(dst))
+	if err != nil || err2 != nil {
+		return nil
+	}
+	var keep []calc.FittingCount
+	var moved []string
+	for _, f := range list {
+		if lineEnd(f.Key) <= 0 {
+			keep = append(keep, f)
+			continue
+		}
+		there = append(there, f)
+		moved = append(moved, fmt.Sprintf("%d %s", f.Count, f.Key))
+	}
+	if len(moved) > 0 {
+		d.set(src, FormatFittings(keep))
+		d.set(dst, FormatFittings(there))
+	}
+	return moved
+}
+
+// madeLine says what a paste of points points made of a sheet that had
+// segments before it: the segments set and added, which have no pipe yet,
+// and the line-end fittings moved to segment n, the last.
+func (d *Draft) madeLine(points, had, n int, moved []string) string {
+	s := fmt.Sprintf("Made %s from the survey's %d points", plural(n, "segment"), points)
+	kept := min(had, n)
+	if kept > 0 {
+		s += fmt.Sprintf(": %s took new lengths and ends, keeping %s pipe and fittings", span(1, kept), its(kept))
+	}
+	if kept < n {
+		sep := ", "
+		if kept > 0 {
+			sep = "; "
+		}
+		s += sep + span(kept+1, n) + is(n-kept) + " new"
+		if kept > 0 && d.HasPipe(kept) {
+			s += fmt.Sprintf(", with the pipe of segment %d", kept)
+		}
+	}
+	s += "."
+	if len(moved) > 0 {
+		s += fmt.Sprintf(" The line's end fittings (%s) moved from segment %d to segment %d, the last.", strings.Join(moved, ", "), had, n)
+	}
+	without := len(d.WithoutPipe())
+	if !d.complete(1) {
+		without++
+	}
+	if without > 0 {
+		s += " " + plural(without, "segment") + map[bool]string{true: " has", false: " have"}[without == 1] + " no pipe yet"
+		if d.HasPipe(1) {
+			s += ": “Give segment 1's pipe to the others” completes them."
+		} else {
+			s += ": give segment 1 its pipe, then “Give segment 1's pipe to the others”."
+		}
+	}
+	return s
+}
+
+// plural is "1 segment" or "11 segments".
+func plural(n int, what string) string {
+	if n == 1 {
+		return "1 " + what
+	}
+	return strconv.Itoa(n) + " " + what + "s"
+}
+
+// span is "segment 3" or "segments 3 to 11".
+func span(a, b int) string {
+	if a == b {
+		return "segment " + strconv.Itoa(a)
+	}
+	return "segments " + strconv.Itoa(a) + " to " + strconv.Itoa(b)
+}
+
+func its(n int) string {
+	if n == 1 {
+		return "its"
+	}
+	return "their"
+}
+
+func is(n int) string {
+	if n == 1 {
+		return " is"
+	}
+	return " are"
+}
+
+// pipeFields and wallFields are a segment's either/or groups of its pipe
+// (a bore, or a nominal size and schedule) and of its wall (a material or
+// a roughness).
+var pipeFields, wallFields = []string{"d", "nps", "sch"}, []string{"mat", "eps"}
+
+// given reports whether segment n holds any of fields.
+func (d *Draft) given(n int, fields []string) bool {
+	for _, f := range fields {
+		if d.Scen.Has(SegmentParam(n, f)) {
+			return true
+		}
+	}
+	return false
+}
+
+// HasPipe reports whether segment n has a pipe (a bore or a nominal size)
+// or a wall (a material or a roughness) to give.
+func (d *Draft) HasPipe(n int) bool { return d.given(n, pipeFields) || d.given(n, wallFields) }
+
+// complete reports whether segment n has both a pipe and a wall.
+func (d *Draft) complete(n int) bool { return d.given(n, pipeFields) && d.given(n, wallFields) }
+
+// WithoutPipe lists the segments after the first that lack a pipe or a
+// wall: those GivePipe would complete.
+func (d *Draft) WithoutPipe() []int {
+	var out []int
+	for k := 2; k <= d.ShownSegments(); k++ {
+		if !d.complete(k) {
+			out = append(out, k)
+		}
+	}
+	return out
+}
+
+// GivePipe gives segment 1's pipe (bore, or nominal size and schedule)
+// to every later segment that has none, and its wall (material or
+// roughness) to every later segment that has none, with the sides picked;
+// a pipe or wall already given is never replaced. It returns the segments
+// completed, and says so in SurveyMade.
+func (d *Draft) GivePipe() []int {
+	d.endEdit()
+	var done []int
+	if !d.HasPipe(1) {
+		return nil
+	}
+	for _, k := range d.WithoutPipe() {
+		changed := false
+		for _, g := range []struct {
+			name   string
+			fields []string
+		}{{"pipe", pipeFields}, {"rough", wallFields}} {
+			if d.given(k, g.fields) || !d.given(1, g.fields) {
+				continue
+			}
+			for _, f := range g.fields {
+				changed = d.set(SegmentParam(k, f), d.Scen.Get(SegmentParam(1, f))) || changed
+			}
+			if side := d.Side[SegmentParam(1, g.name)]; side != "" {
+				d.Side[SegmentParam(k, g.name)] = side
+			}
+		}
+		if changed {
+			done = append(done, k)
+		}
+	}
+	if len(done) > 0 {
+		d.SurveyMade = fmt.Sprintf("Segment 1's pipe given to %s without one.", plural(len(done), "segment"))
+	}
+	return done
 }
 
 // sameValue reports whether text ("212.0m", "212") is the value v in unit

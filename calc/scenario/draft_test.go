@@ -92,8 +92,8 @@ func TestDraftBoxesAreTheScenario(t *testing.T) {
 	}
 	d.Choose("units", "us")
 	boxesMatch(t, "units switched", &d)
-	if _, unit := d.Box("q"); unit != "L/s" {
-		t.Errorf("after the switch the flow's unit shows %q; a value keeps the unit it was typed in", unit)
+	if box, unit := d.Box("q"); box != "713" || unit != "gpm" {
+		t.Errorf("after the switch the flow's box shows %q %q, want 713 gpm (45 L/s in the US system's unit; TestUnitSwitchEveryBox)", box, unit)
 	}
 	if _, unit := d.Box("hp"); unit != "ft" {
 		t.Errorf("an empty box takes the new system's unit, got %q", unit)

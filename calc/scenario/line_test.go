@@ -49,7 +49,7 @@ func TestParseComponents(t *testing.T) {
 		{":45kPa@12L/s", calc.UnknownChoice, calc.ReasonComponentSyntax, "name:drop@flow"},
 		{"valve:cv0", calc.NotPositive, calc.ReasonValveCoefficient, `"valve": the valve's Cv or Kv must be above zero`},
 		{"valve:kv", calc.NotANumber, calc.ReasonValveNumber, `"valve": the valve's Kv must be a number, as in valve:kv25`},
-		{"coil:-5kPa@2L/s", calc.Negative, calc.ReasonComponentDrop, `"coil": the rated drop must not be negative; got -5.000 kPa`},
+		{"coil:-5kPa@2L/s", calc.Negative, calc.ReasonComponentDrop, `"coil": the rated drop must not be negative; got −5.000 kPa`},
 		{"coil:−5kPa@2L/s", calc.Negative, calc.ReasonComponentDrop, "must not be negative"},
 		{"coil:5kPa@0L/s", calc.NotPositive, calc.ReasonComponentFlow, "rated flow must be above zero"},
 		{"coil:5@2L/s", calc.NoUnit, calc.ReasonComponentValue, `the drop needs a number and its unit, e.g. 45kPa or 3.2m; got "5"`},

@@ -190,7 +190,8 @@ func (e *eval) runView(line *calc.Line) {
 
 // sizing works out the sizing table of the run shown: the class szsch,
 // else the run's own class; the marks vlo, vhi and grad, else the
-// defaults of calc.DefaultSizingLimits (common practice).
+// defaults of calc.DefaultSizingLimitsFor the sheet's units (common
+// practice: a US sheet's are round figures in ft/s of their own).
 func (e *eval) sizing(rv *RunView, spec calc.Run, pre string, q float64) {
 	if e.in.Bad("szsch") {
 		return
@@ -217,7 +218,7 @@ func (e *eval) sizing(rv *RunView, spec calc.Run, pre string, q float64) {
 		e.bad("szsch", calc.UnknownChoice).Typed(class).Because(calc.ReasonSizingClass)
 		return
 	}
-	lim := calc.DefaultSizingLimits()
+	lim := calc.DefaultSizingLimitsFor(e.in.US)
 	ok := true
 	for _, p := range []struct {
 		name string

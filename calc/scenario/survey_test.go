@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"strings"
 	"testing"
+
+	"fieldhead/calc"
 )
 
 // TestPasteProfile: a survey pasted as a spreadsheet copies it becomes the
@@ -47,15 +49,16 @@ func TestPasteProfile(t *testing.T) {
 
 // TestPasteProfileKeepsTheSheet: pasted onto the demo (two segments), a
 // three-segment survey changes lengths and end elevations only, the new
-// segment takes the last one's pipe, and point 1's elevation stays as
-// given (a water surface) with a note; a shorter survey keeps the further
-// segments as they were; a longer one than a line allows changes nothing.
+// segment takes the last one's pipe and the exit (the line's end), and
+// point 1's elevation stays as given (a water surface) with a note; a
+// shorter survey keeps the further segments as they were; a longer one
+// than a line allows changes nothing.
 func TestPasteProfileKeepsTheSheet(t *testing.T) {
 	d := NewDraft(Demo())
 	d.PasteProfile("0,214\n8,214.5\n300,230\n640,251\n")
 	checks := map[string]string{"s1.l": "8.016m", "s1.fit": "entry_sharp:1,elbow90lr:1,gate:1", "s1.nps": "8",
-		"s2.z": "230m", "s2.fit": "gate:1,elbow90lr:5,check_swing:1,exit:1", "s3.nps": "8", "s3.sch": "40", "s3.mat": "steel",
-		"s3.z": "251m", "s3.l": "340.648m", "z1": "212m"}
+		"s2.z": "230m", "s2.fit": "gate:1,elbow90lr:5,check_swing:1", "s3.nps": "8", "s3.sch": "40", "s3.mat": "steel",
+		"s3.z": "251m", "s3.l": "340.648m", "z1": "212m", "s3.fit": "exit:1"}
 	for k, v := range checks {
 		if got := d.Scen.Get(k); got != v {
 			t.Errorf("%s = %q, want %q", k, got, v)
@@ -139,5 +142,103 @@ func TestPasteProfileHeaderUnits(t *testing.T) {
 		if tt.notes == nil && notes != "" {
 			t.Errorf("%s: notes %q, want none", tt.name, notes)
 		}
+	}
+}
+
+// survey12 is a survey of 12 points, 11 runs of 50 m rising 1 m each.
+func survey12() string {
+	var b strings.Builder
+	b.WriteString("Chainage\tElevation\n")
+	for i := 0; i < 12; i++ {
+		fmt.Fprintf(&b, "%d\t%d\n", i*50, 200+i)
+	}
+	return b.String()
+}
+
+// TestPasteProfileEndFittings: a single run with an entrance, a gate and
+// an exit, pasted over with 11 runs, keeps the entrance and the gate on
+// segment 1 (the segment they belonged to, the line's start) and moves the
+// exit to segment 11, the line's end (common practice: the exit loss is
+// where the line enters the receiving tank); no segment between has an
+// exit, and the line says what was made.
+func TestPasteProfileEndFittings(t *testing.T) {
+	d := NewDraft(Scenario{})
+	for _, kv := range [][2]string{{"q", "45L/s"}, {"t", "18C"}, {"z1", "200m"}, {"z2", "211m"}, {"p1", "0kPa"}, {"p2", "0kPa"}, {"v1", "0m/s"}, {"v2", "0m/s"}, {"solve", "hp"}, {"l", "550m"},
+		{"nps", "8"}, {"sch", "40"}, {"mat", "steel"}, {"fit", "entry_sharp:1,gate:1,exit:1"}} {
+		_ = d.Scen.Set(kv[0], kv[1])
+	}
+	d.PasteProfile(survey12())
+	if n := d.ShownSegments(); n != 11 {
+		t.Fatalf("%d segments, want 11", n)
+	}
+	if got := d.Scen.Get("s1.fit"); got != "entry_sharp:1,gate:1" {
+		t.Errorf("segment 1's fittings %q, want the entrance and the gate", got)
+	}
+	if got := d.Scen.Get("s11.fit"); got != "exit:1" {
+		t.Errorf("segment 11's fittings %q, want the exit", got)
+	}
+	for k := 2; k <= 10; k++ {
+		if f := d.Scen.Get(SegmentParam(k, "fit")); f != "" {
+			t.Errorf("segment %d has fittings %q mid-line", k, f)
+		}
+		if d.Scen.Get(SegmentParam(k, "nps")) != "8" || d.Scen.Get(SegmentParam(k, "mat")) != "steel" {
+			t.Errorf("segment %d lacks the pipe of segment 1", k)
+		}
+	}
+	want := "Made 11 segments from the survey's 12 points: segment 1 took new lengths and ends, keeping its pipe and fittings; segments 2 to 11 are new, with the pipe of segment 1. The line's end fittings (1 exit) moved from segment 1 to segment 11, the last."
+	if d.SurveyMade != want {
+		t.Errorf("made:\n got %q\nwant %q", d.SurveyMade, want)
+	}
+	r := Evaluate(Read(d.Scen))
+	if len(r.Errors) != 0 || r.Balance == nil {
+		t.Errorf("the line does not evaluate: %v", r.Errors)
+	}
+}
+
+// TestPasteProfileGivePipe: pasted onto a sheet with no pipe, 12 points
+// make 11 segments that each lack a bore and a roughness (22 problems,
+// two per segment); the line says so. Once segment 1 has a pipe and a
+// material, GivePipe gives them to the other ten and no segment lacks
+// one; a segment with a pipe of its own keeps it.
+func TestPasteProfileGivePipe(t *testing.T) {
+	d := NewDraft(Scenario{})
+	for _, kv := range [][2]string{{"q", "45L/s"}, {"z2", "211m"}, {"view", "line"}} {
+		_ = d.Scen.Set(kv[0], kv[1])
+	}
+	d.PasteProfile(survey12())
+	if !strings.HasPrefix(d.SurveyMade, "Made 11 segments from the survey's 12 points, segments 1 to 11 are new. 11 segments have no pipe yet: give segment 1 its pipe") {
+		t.Errorf("made %q", d.SurveyMade)
+	}
+	missing := func() int {
+		n := 0
+		for k, fe := range Evaluate(Read(d.Scen)).Errors {
+			if _, f := SegmentOf(k); (f == "d" || f == "eps") && fe.Kind == calc.Missing {
+				n++
+			}
+		}
+		return n
+	}
+	if n := missing(); n != 22 {
+		t.Errorf("%d missing pipes and walls before, want 22 (the issue's count)", n)
+	}
+	if got := d.GivePipe(); got != nil {
+		t.Errorf("segment 1 has no pipe, yet GivePipe gave one to %v", got)
+	}
+	d.Choose("s1.nps", "8")
+	d.Choose("s1.sch", "40")
+	d.Choose("s1.mat", "steel")
+	d.Type("s5.d", "150mm")
+	done := d.GivePipe()
+	if len(done) != 10 || d.SurveyMade != "Segment 1's pipe given to 10 segments without one." {
+		t.Errorf("gave to %v: %q", done, d.SurveyMade)
+	}
+	if n := missing(); n != 0 {
+		t.Errorf("%d missing pipes and walls after GivePipe, want 0", n)
+	}
+	if d.Scen.Get("s5.d") != "150mm" || d.Scen.Has("s5.nps") || d.Scen.Get("s5.mat") != "steel" {
+		t.Errorf("segment 5's own bore: d %q, nps %q, mat %q; want its 150mm kept and segment 1's material", d.Scen.Get("s5.d"), d.Scen.Get("s5.nps"), d.Scen.Get("s5.mat"))
+	}
+	if len(d.WithoutPipe()) != 0 {
+		t.Errorf("segments without a pipe after GivePipe: %v", d.WithoutPipe())
 	}
 }

@@ -141,7 +141,7 @@ func (b *builder) pressure(v float64, abs bool) string {
 // figure writes a figure of a message: pressures as differences or as the
 // message says (gauge or absolute is in its words), the rest in display
 // units.
-func (b *builder) figure(f calc.Figure) string { return b.show(f.Value, f.Dim) }
+func (b *builder) figure(f calc.Figure) string { return minus(b.show(f.Value, f.Dim)) }
 
 // percent writes a share (0.76) as a percentage.
 func percent(v float64) string { return calc.FormatValue(v, "%", 4) }

@@ -108,7 +108,16 @@ func (w wording) fig(f calc.Figure) string {
 	if f.Dim == calc.Dimensionless {
 		return plainNumber(f.Value)
 	}
-	return scenario.Show(f.Value, f.Dim, w.us)
+	return minus(scenario.Show(f.Value, f.Dim, w.us))
+}
+
+// minus writes a negative figure of a message with the minus sign
+// (U+2212), as print does, not the hyphen: "got −40 °C".
+func minus(s string) string {
+	if strings.HasPrefix(s, "-") {
+		return "−" + s[1:]
+	}
+	return s
 }
 
 // own words a figure of the field fe is about in that field's own unit
@@ -123,9 +132,9 @@ func (w wording) own(f calc.Figure) string {
 	case ok && scenario.DefaultUnit(field, w.us) == "%" && f.Dim == calc.Dimensionless:
 		return share(f.Value)
 	case ok && f.Dim == calc.Dimensionless && dim != calc.Dimensionless && w.fe.Reason == calc.ReasonFarBeyond:
-		return scenario.ShowParam(field, f.Value, w.us) // calc knew only the SI number
+		return minus(scenario.ShowParam(field, f.Value, w.us)) // calc knew only the SI number
 	case ok && dim == f.Dim && f.Dim != calc.Dimensionless:
-		return scenario.ShowParam(field, f.Value, w.us)
+		return minus(scenario.ShowParam(field, f.Value, w.us))
 	case f.Dim == calc.Dimensionless:
 		return exact(f.Value) // a count, a C factor, hours: as typed
 	}

@@ -84,8 +84,8 @@ func TestErrorTextNamesAndUnits(t *testing.T) {
 		us   bool
 		want string
 	}{
-		{d, false, "the " + scenario.Label("d1") + " must be above zero; got " + scenario.ShowParam("d1", -0.2032, false)},
-		{d, true, "the " + scenario.Label("d1") + " must be above zero; got " + scenario.ShowParam("d1", -0.2032, true)},
+		{d, false, "the " + scenario.Label("d1") + " must be above zero; got " + minus(scenario.ShowParam("d1", -0.2032, false))},
+		{d, true, "the " + scenario.Label("d1") + " must be above zero; got " + minus(scenario.ShowParam("d1", -0.2032, true))},
 		{calc.NewFieldError("hsp", calc.Missing).With("pq"), false, "give the " + scenario.Label("pq") + " first"},
 		{calc.NewFieldError("t", calc.OutsideValidity).Got(calc.Fig(400, calc.Temperature)).
 			Within(calc.Fig(273.15, calc.Temperature), calc.Fig(373.15, calc.Temperature)).Because(calc.ReasonWaterProperties), true,
@@ -259,5 +259,14 @@ func TestWaterTemperatureLimits(t *testing.T) {
 		if got := ErrorText(fe, false); !strings.Contains(got, "from 0 °C to 100 °C") {
 			t.Errorf("t=%s: %q", tv, got)
 		}
+	}
+	// A negative figure is written with the minus sign (U+2212), never
+	// the hyphen: "got −40 °C" (the minus sign as ISO 80000-2 writes it,
+	// from memory).
+	sc := scenario.Demo()
+	_ = sc.Set("t", "-40C")
+	got := ErrorText(scenario.Evaluate(scenario.Read(sc)).Errors["t"], false)
+	if !strings.Contains(got, "got −40") || strings.Contains(got, "-40") {
+		t.Errorf("t=-40C: %q, want the figure as −40 with a minus sign", got)
 	}
 }

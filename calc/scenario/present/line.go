@@ -370,9 +370,25 @@ func (b *builder) surveyBox() Block {
 		Label: "Chainage and elevation, one point a line (" + lu + ", " + zu + ")",
 		Hint: "Paste two columns from a spreadsheet (tab, semicolon or comma separated). A header row is skipped; length units it names, as in “Chainage (ft)”, are used for their column. " +
 			"Each pair of points becomes a segment: its length the slope length between them, its end the second point's elevation. " +
-			"Segments already here keep their pipe, fittings and components; new ones take the last segment's pipe.",
-		Text: b.d.Survey, Notes: b.d.SurveyNotes, Open: len(b.d.SurveyNotes) > 0,
-		Button: Button{ID: "survey-paste", Text: "Make the segments", Class: "act"}}}
+			"Segments already here keep their pipe, fittings and components; new ones take the last segment's pipe, and the exit moves to the new last segment.",
+		Text: b.d.Survey, Made: b.d.SurveyMade, Notes: b.d.SurveyNotes, Open: len(b.d.SurveyNotes) > 0 || b.d.SurveyMade != "",
+		Button: Button{ID: "survey-paste", Text: "Make the segments", Class: "act"}, Pipe: b.givePipe()}}
+}
+
+// givePipe is the button giving segment 1's pipe to the segments without
+// one; none when every segment has its own, disabled (saying why) while
+// segment 1 has none to give.
+func (b *builder) givePipe() Button {
+	without := b.d.WithoutPipe()
+	if len(without) == 0 {
+		return Button{}
+	}
+	bt := Button{ID: "survey-pipe", Text: "Give segment 1's pipe to the others", Class: "act",
+		Hint: "to " + strconv.Itoa(len(without)) + " segment" + map[bool]string{true: "", false: "s"}[len(without) == 1] + " without a pipe or a wall of its own; none already given is replaced"}
+	if !b.d.HasPipe(1) {
+		bt.Disabled, bt.Hint = true, "segment 1 has no pipe to give yet"
+	}
+	return bt
 }
 
 // segmentCard is one segment's inputs and its figures at the flow.

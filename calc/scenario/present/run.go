@@ -221,11 +221,11 @@ func (b *builder) runKTable(r *scenario.RunResult) Block {
 // the sizes inside the velocity band and under the loss-gradient limit
 // marked.
 func (b *builder) sizingCard() Card {
-	def := calc.DefaultSizingLimits()
+	def := calc.DefaultSizingLimitsFor(b.us)
 	per := perHundred(b.us)
 	grad := b.plain("grad", "", "("+per+"; blank: "+calc.FormatNumber(def.GradientMax*100, 1)+", common practice)", true)
-	lo := b.quantity("vlo", "", "(blank: "+b.short(def.VelocityLow, calc.Velocity)+", common practice)")
-	hi := b.quantity("vhi", "", "(blank: "+b.short(def.VelocityHigh, calc.Velocity)+")")
+	lo := b.quantity("vlo", "", "(blank: "+limit(b.short(def.VelocityLow, calc.Velocity))+", common practice)")
+	hi := b.quantity("vhi", "", "(blank: "+limit(b.short(def.VelocityHigh, calc.Velocity))+")")
 	rv := b.r.RunView
 	var sz *scenario.Sizing
 	if rv != nil {
@@ -348,10 +348,10 @@ func (b *builder) errWords(err error) string {
 // sizingMethod is the Methods entry of the sizing table, its defaults in
 // the sheet's units.
 func sizingMethod(us bool) string {
-	lim := calc.DefaultSizingLimits()
+	lim := calc.DefaultSizingLimitsFor(us)
 	v := calc.DefaultUnit(calc.Velocity, us).Symbol
 	per := strings.TrimSuffix(hundred(us), " of pipe")
 	return "the run's length, roughness, fittings and friction method kept and evaluated in each size of one pipe class, the fittings' K worked out for each size; " +
-		"sizes marked inside a velocity band (default " + calc.FormatValue(lim.VelocityLow, v, 2) + " to " + calc.FormatValue(lim.VelocityHigh, v, 2) +
+		"sizes marked inside a velocity band (default " + limit(calc.FormatValue(lim.VelocityLow, v, 2)) + " to " + limit(calc.FormatValue(lim.VelocityHigh, v, 2)) +
 		") and under a pipe-friction limit (default " + calc.FormatNumber(lim.GradientMax*100, 1) + " per " + per + "); the defaults are common practice for water lines, from memory, and may be set per sheet."
 }

@@ -91,9 +91,13 @@ type Block struct {
 type Survey struct {
 	ID, Title, Label, Hint string
 	Text                   string   // the pasted text kept while a row could not be used
+	Made                   string   // what the last paste (or Pipe) made, "" before any
 	Notes                  []string // what the last paste said: rows not used, segments kept
-	Open                   bool     // drawn open (a paste left notes)
+	Open                   bool     // drawn open (a paste left notes or made segments)
 	Button                 Button
+	// Pipe gives segment 1's pipe to the segments without one
+	// (scenario.Draft.GivePipe); its Text is "" when every segment has one.
+	Pipe Button
 }
 
 // FieldKind says how an input is drawn.
