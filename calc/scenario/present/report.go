@@ -323,6 +323,9 @@ func (b *builder) reportCharts() (Card, bool) {
 	return Card{ID: "report-charts", Class: "rsec charts", Title: "Charts", Blocks: []Block{
 		maybe(hasPump, Block{Kind: BlockHeading, Text: "Pump and system curves"}),
 		pump,
+		// The test's marks in words, after the figure: in its caption the
+		// pump chart would no longer fit a Letter page.
+		maybe(hasPump && b.r.Test != nil, text("caption", "report-test-marks", "The test on the pump chart above."+b.testCaption())),
 		maybe(hasProfile, Block{Kind: BlockHeading, Text: "Energy and hydraulic grade lines"}),
 		profile,
 	}}, hasPump || hasProfile
