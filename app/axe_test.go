@@ -11,6 +11,7 @@ import (
 	"sort"
 	"strings"
 	"testing"
+	"time"
 
 	"fieldhead/calc/scenario/present"
 
@@ -88,7 +89,9 @@ func (b *tab) runAxe(script string) (violations, review []axeViolation) {
 
 // TestAxe runs axe-core on every view of the demo and of the turbine demo,
 // on a tablet in landscape (1024×768) and on a phone (360×740), and on
-// the Report as printed (print media): any violation of any rule fails.
+// the Report as printed (print media); then on the pump-test demo's Pump
+// view and Report (the test card, the tested curve, band and cross) and
+// the site book with a pump's history: any violation of any rule fails.
 func TestAxe(t *testing.T) {
 	site := testSite(t)
 	script := axeScript(t)
@@ -97,7 +100,7 @@ func TestAxe(t *testing.T) {
 	b := newTab(t)
 	perRule, reviewed := map[string]int{}, map[string]int{}
 	checked := 0
-	check := func(where string) {
+	check := func(b *tab, where string) {
 		t.Helper()
 		vs, review := b.runAxe(script)
 		checked++
@@ -120,21 +123,50 @@ func TestAxe(t *testing.T) {
 			demo, v := dv.demo, dv.view
 			b.navigate(srv.URL + "/?" + dv.link)
 			where := fmt.Sprintf("%s, %s view, %d×%d", demo, v.Key, size.w, size.h)
-			check(where)
+			check(b, where)
 			if v.Key == "report" {
 				if _, err := chromedp.Call(b.ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{Media: "print"}); err != nil {
 					t.Fatal(err)
 				}
-				check(where + ", print media")
+				check(b, where+", print media")
 				if _, err := chromedp.Call(b.ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{}); err != nil {
 					t.Fatal(err)
 				}
 			}
 		}
 	}
+	// The test card, the tested curve and cross, and the pump's history,
+	// in a tab of their own.
+	bt := newTab(t)
+	importHistory(t, bt, srv.URL)
+	for _, size := range []struct{ w, h int64 }{{1024, 768}, {360, 740}} {
+		if err := chromedp.Do(bt.ctx, chromedp.EmulateViewport(size.w, size.h)); err != nil {
+			t.Fatal(err)
+		}
+		for _, dv := range pumpTestViews() {
+			bt.navigate(srv.URL + "/?" + dv.link)
+			where := fmt.Sprintf("%s, %s view, %d×%d", dv.demo, dv.view.Key, size.w, size.h)
+			check(bt, where)
+			if dv.view.Key == "report" {
+				if _, err := chromedp.Call(bt.ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{Media: "print"}); err != nil {
+					t.Fatal(err)
+				}
+				check(bt, where+", print media")
+				if _, err := chromedp.Call(bt.ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{}); err != nil {
+					t.Fatal(err)
+				}
+			}
+		}
+		bt.navigate(srv.URL + "/?view=book")
+		if !bt.poll(`document.querySelector("#history-1 svg") !== null`, 10*time.Second) {
+			t.Fatalf("%d px: the site book shows no history", size.w)
+		}
+		check(bt, fmt.Sprintf("pump history, %d×%d", size.w, size.h))
+	}
+	bt.noProblems("axe-core on the pump test and history")
 	t.Logf("axe-core on %d pages; elements failing per rule: %s; needing review: %s", checked, counts(perRule), counts(reviewed))
-	if checked != 2*2*(len(present.Views)+1) {
-		t.Errorf("axe ran on %d pages, want %d", checked, 2*2*(len(present.Views)+1))
+	if want := 2*2*(len(present.Views)+1) + 2*(len(pumpTestViews())+2); checked != want {
+		t.Errorf("axe ran on %d pages, want %d", checked, want)
 	}
 	// The check itself: an image without a text alternative, added to the
 	// last page, is reported (axe-core rule image-alt, WCAG 2.1 SC 1.1.1).

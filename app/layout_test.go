@@ -13,6 +13,7 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+	"time"
 
 	"fieldhead/calc/scenario"
 	"fieldhead/calc/scenario/present"
@@ -43,6 +44,23 @@ func demoViews() []demoView {
 			_ = s.Set("view", v.Key)
 			out = append(out, demoView{demo: d.name, view: v, link: s.Encode()})
 		}
+	}
+	return out
+}
+
+// pumpTestViews lists the views of the pump-test demo
+// (scenario.PumpTestDemo: five readings, a guarantee and a pump tag) that
+// show the test: the Pump view, with its test card and the tested curve,
+// band and cross on the chart, and the Report.
+func pumpTestViews() []demoView {
+	var out []demoView
+	for _, v := range present.Views {
+		if v.Key != "pump" && v.Key != "report" {
+			continue
+		}
+		s := scenario.PumpTestDemo()
+		_ = s.Set("view", v.Key)
+		out = append(out, demoView{demo: "pump-test demo", view: v, link: s.Encode()})
 	}
 	return out
 }
@@ -171,7 +189,9 @@ const chartTextJS = `(() => {
 // TestPhoneWidths opens every view of both demos at phone widths from
 // 320 CSS px and on a tablet upright (768) and in landscape (1024), and
 // on the tablets the demo's Pump view with its instruments' accuracies
-// (the uncertainty lines):
+// (the uncertainty lines); and at every width the pump-test demo's Pump
+// view and Report (the test card, the tested curve and cross) and the
+// site book with a pump's history (scenario.HistoryDemo imported):
 // nothing may scroll sideways or be cut, no figure broken across lines
 // (brokenFiguresJS) (WCAG 2.1 SC 1.4.10
 // Reflow: content at 320 CSS px without scrolling in two directions;
@@ -198,40 +218,32 @@ func TestPhoneWidths(t *testing.T) {
 		for _, dv := range views {
 			demo, v := dv.demo, dv.view
 			b.navigate(srv.URL + "/?" + dv.link)
-			where := fmt.Sprintf("%s, %s view, %d px", demo, v.Key, w)
-			if got := b.js(`String(window.innerWidth)`); got != fmt.Sprint(w) {
-				t.Errorf("%s: the page widens the window to %s px", where, got)
-			}
 			pages++
-			bad, err := chromedp.Run(b.ctx, chromedp.Evaluate[[]string](overflowJS))
-			if err != nil {
-				t.Fatal(err)
-			}
-			for _, p := range bad {
-				t.Errorf("%s: %s", where, p)
-			}
-			broken, err := chromedp.Run(b.ctx, chromedp.Evaluate[[]string](brokenFiguresJS))
-			if err != nil {
-				t.Fatal(err)
-			}
-			for _, p := range broken {
-				t.Errorf("%s: %s", where, p)
-			}
-			if v.Key == "line" || v.Key == "pump" || v.Key == "report" {
-				px, err := chromedp.Run(b.ctx, chromedp.Evaluate[float64](chartTextJS))
-				if err != nil {
-					t.Fatal(err)
-				}
-				if px == 0 {
-					t.Errorf("%s: no chart text found", where)
-				} else if w >= 360 && px < 12 {
-					t.Errorf("%s: the charts' smallest text is %.1f CSS px, under 12", where, px)
-				}
-			}
+			fits(b, fmt.Sprintf("%s, %s view, %d px", demo, v.Key, w), w, v.Key == "line" || v.Key == "pump" || v.Key == "report")
 			if demo == "demo" && (w == 320 || w == 360 || w == 1024) {
 				b.shot(fmt.Sprintf("phone-%s-%d", v.Key, w))
 			}
 		}
+	}
+	// The test at several flows and the pump's history, in a tab of their
+	// own (a tab's time limit is for one walk).
+	bt := newTab(t)
+	importHistory(t, bt, srv.URL)
+	for _, w := range []int64{320, 360, 390, 412, 768, 1024} {
+		if err := chromedp.Do(bt.ctx, chromedp.EmulateViewport(w, 740, chromedp.EmulatePortrait, chromedp.EmulateMobile, chromedp.EmulateTouch)); err != nil {
+			t.Fatal(err)
+		}
+		for _, dv := range pumpTestViews() {
+			bt.navigate(srv.URL + "/?" + dv.link)
+			pages++
+			fits(bt, fmt.Sprintf("%s, %s view, %d px", dv.demo, dv.view.Key, w), w, true)
+		}
+		bt.navigate(srv.URL + "/?view=book")
+		if !bt.poll(`document.querySelector("#history-1 svg") !== null`, 10*time.Second) {
+			t.Fatalf("%d px: the site book shows no history", w)
+		}
+		pages++
+		fits(bt, fmt.Sprintf("pump history, %d px", w), w, true)
 	}
 	// The check itself: an element wider than the window is reported.
 	b.js(`(() => { const d = document.createElement("div"); d.id = "wide-probe"; d.textContent = "x"; d.className = "sr-probe"; d.setAttribute("data-w", "x"); document.querySelector("main").append(d); d.style.width = "2000px"; return ""; })()`)
@@ -243,6 +255,44 @@ func TestPhoneWidths(t *testing.T) {
 		t.Errorf("a 2000 px element was not reported: the check finds nothing (%v)", bad)
 	}
 	t.Logf("%d pages checked at phone widths", pages)
+}
+
+// fits runs TestPhoneWidths' checks on the page open in b, laid out w CSS
+// px wide: the window not widened, nothing past the edge or cut
+// (overflowJS), no figure broken across lines (brokenFiguresJS) and, when
+// charts is set, chart text there and from 360 px at least 12 CSS px.
+func fits(b *tab, where string, w int64, charts bool) {
+	t := b.t
+	t.Helper()
+	if got := b.js(`String(window.innerWidth)`); got != fmt.Sprint(w) {
+		t.Errorf("%s: the page widens the window to %s px", where, got)
+	}
+	bad, err := chromedp.Run(b.ctx, chromedp.Evaluate[[]string](overflowJS))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, p := range bad {
+		t.Errorf("%s: %s", where, p)
+	}
+	broken, err := chromedp.Run(b.ctx, chromedp.Evaluate[[]string](brokenFiguresJS))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, p := range broken {
+		t.Errorf("%s: %s", where, p)
+	}
+	if !charts {
+		return
+	}
+	px, err := chromedp.Run(b.ctx, chromedp.Evaluate[float64](chartTextJS))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if px == 0 {
+		t.Errorf("%s: no chart text found", where)
+	} else if w >= 360 && px < 12 {
+		t.Errorf("%s: the charts' smallest text is %.1f CSS px, under 12", where, px)
+	}
 }
 
 // Paper sizes, portrait, and the printable width inside the sheet's
@@ -259,7 +309,7 @@ var papers = []struct {
 }
 
 // TestPrintFits lays out the Report and the sheet of every view of both
-// demos in print media at the printable width of A4 and Letter: nothing
+// demos, and the pump-test demo's Pump view and Report, in print media at the printable width of A4 and Letter: nothing
 // may pass the right edge or be cut or scroll (a printed scrollbar hides
 // what is beyond it); the cautions must print; the profile chart must
 // tell the energy and hydraulic grade lines apart without colour (WCAG
@@ -273,7 +323,7 @@ func TestPrintFits(t *testing.T) {
 	defer srv.Close()
 	b := newTab(t)
 	for _, paper := range papers {
-		for _, dv := range demoViews() {
+		for _, dv := range append(demoViews(), pumpTestViews()...) {
 			demo, v := dv.demo, dv.view
 			if err := chromedp.Do(b.ctx, chromedp.EmulateViewport(1024, 768)); err != nil {
 				t.Fatal(err)

@@ -44,10 +44,21 @@ const printMeasureJS = `(() => {
       least = Math.min(least, parseFloat(getComputedStyle(t).fontSize) * w / vb * 0.75);
     }
     const fig = svg.closest("figure");
-    // the headings just before a chart are kept with it (break-after: avoid)
-    let head = fig;
-    for (let e = fig.previousElementSibling; e && (/^H[1-6]$/.test(e.tagName) || !vis(e)); e = e.previousElementSibling) {
-      if (vis(e)) head = e;
+    // the headings just before a chart are kept with it (break-after:
+    // avoid), and so are those of each section the chart opens (a card's
+    // title above its first chart)
+    const lead = (el) => {
+      let h = el;
+      for (let e = el.previousElementSibling; e && (/^H[1-6]$/.test(e.tagName) || !vis(e)); e = e.previousElementSibling) {
+        if (vis(e)) h = e;
+      }
+      return h;
+    };
+    const report = fig.closest(".report");
+    let head = lead(fig);
+    while (head.parentElement && head.parentElement !== report && report.contains(head.parentElement) &&
+      [...head.parentElement.children].find(vis) === head) {
+      head = lead(head.parentElement);
     }
     const texts = [...svg.querySelectorAll("text")].map((t) => t.textContent).filter((s) => s.trim().length > 3);
     return {id: fig ? fig.id : "", width: w, sheet: sheet, leastPt: least,
@@ -63,6 +74,23 @@ const printMeasureJS = `(() => {
     short: vis(document.getElementById("report-short-url")), long: vis(document.getElementById("report-url")),
     sign: document.querySelectorAll("#signoff .signline").length};
 })()`
+
+// printedTestJS counts, on the Report in print media, what a test at
+// several flows must print: its pump chart with the tested curve shown,
+// the band's edges, the readings (each in its box), the tolerance cross
+// and the origin line; the test table and the guarantee verdict shown.
+const printedTestJS = `(() => {
+  const svg = [...document.querySelectorAll(".report .chart svg")].find((s) => s.getClientRects().length > 0 && s.querySelector('[data-series="tested"]'));
+  const n = (sel) => svg ? svg.querySelectorAll(sel).length : 0;
+  const shown = (id) => { const e = document.getElementById(id); return e && e.closest(".report") !== null && e.getClientRects().length > 0 ? 1 : 0; };
+  return [svg && svg.getClientRects().length > 0 ? 1 : 0, n('[data-series="tested-band"]'), n('[data-mark="measured"]'), n('[data-series="cross"]'),
+    n('[data-series="origin-line"]'), shown("test-table"), shown("guarantee-level")].join(" ");
+})()`
+
+// printedTestWant is printedTestJS's answer for the pump-test demo: the
+// chart shown, two band edges, five readings, one cross, one origin line,
+// the table and the verdict shown.
+const printedTestWant = "1 2 5 1 1 1 1"
 
 type printMeasure struct {
 	Charts []struct {
@@ -122,7 +150,9 @@ func pdfPages(t *testing.T, pdf string) (pages []string, bottom []float64) {
 	return pages, bottom
 }
 
-// TestPrintRecord prints both demos, from the view each opens on, with
+// TestPrintRecord prints both demos and the pump-test demo (five
+// readings: its tested curve, band, cross and verdict, printedTestJS),
+// from the view each opens on, with
 // "Print sheet" (the browser's dialog stood in for: the page is printed to
 // PDF while the dialog would be open) on A4 and Letter, and checks the
 // record: the Report is what prints, the view comes back afterwards; each
@@ -145,7 +175,7 @@ func TestPrintRecord(t *testing.T) {
 		name, view string
 		sc         scenario.Scenario
 		charts     int
-	}{{"demo", "pump", scenario.Demo(), 2}, {"turbine-demo", "line", scenario.TurbineDemo(), 1}} {
+	}{{"demo", "pump", scenario.Demo(), 2}, {"turbine-demo", "line", scenario.TurbineDemo(), 1}, {"pumptest-demo", "pump", scenario.PumpTestDemo(), 2}} {
 		for _, paper := range papers {
 			where := demo.name + " on " + paper.name
 			sc := demo.sc.Clone()
@@ -186,7 +216,10 @@ func TestPrintRecord(t *testing.T) {
 				if c.LeastPt < 8 {
 					t.Errorf("%s: chart %s has text of %.1f pt on paper, want at least 8 pt", where, c.ID, c.LeastPt)
 				}
-				t.Logf("%s: chart %s %.0f mm wide, smallest text %.1f pt", where, c.ID, c.Width*25.4/96, c.LeastPt)
+				t.Logf("%s: chart %s %.0f mm wide, %.0f mm tall with its heading and caption, smallest text %.1f pt", where, c.ID, c.Width*25.4/96, c.Height*25.4/96, c.LeastPt)
+			}
+			if got := b.js(printedTestJS); demo.name == "pumptest-demo" && got != printedTestWant {
+				t.Errorf("%s: the printed tested chart, band edges, readings, cross, origin line, test table and verdict count %q, want %q", where, got, printedTestWant)
 			}
 			if !m.QR || !m.Short || m.Long {
 				t.Errorf("%s: the link prints as QR code %v, short form %v, whole %v; want the code and the short form", where, m.QR, m.Short, m.Long)
@@ -262,6 +295,9 @@ func TestPrintRecord(t *testing.T) {
 			}
 			// A page less than half filled is allowed only when the block
 			// that starts the next page would not have fitted in its rest.
+			// The fill is read off the page's lowest text, so the rest is
+			// taken less a line (24 px) for what lies under that text: a
+			// row's padding and rule, a block's margin.
 			for i := 0; i+1 < len(bottom); i++ {
 				fill := (bottom[i] - 14/paper.hMM) / (1 - 28/paper.hMM)
 				if fill >= 0.5 {
@@ -274,7 +310,7 @@ func TestPrintRecord(t *testing.T) {
 						break
 					}
 				}
-				if free := (1 - fill) * pageH; next < 0 || all[next].height < free {
+				if free := (1-fill)*pageH - 24; next < 0 || all[next].height < free {
 					what := "nothing kept whole"
 					if next >= 0 {
 						what = fmt.Sprintf("%s, %.0f px tall", all[next].what, all[next].height)
@@ -297,6 +333,15 @@ func TestPrintRecord(t *testing.T) {
 				got, err := exec.Command(zbar, "--raw", "-q", "-Sdisable", "-Sqrcode.enable", "-Sbinary", img+".png").Output()
 				if want := link; err != nil || strings.TrimSuffix(string(got), "\n") != want {
 					t.Errorf("%s: the printed code reads %q (%v), want the link %q", where, got, err, want)
+				}
+			}
+			if demo.name == "pumptest-demo" {
+				// The verdict and every reading's row print whole (the
+				// blocks above), and the tested curve's caption with them.
+				for _, id := range []string{"guarantee-level", "test-table"} {
+					if txt := b.js(`(document.getElementById("` + id + `") || {}).innerText || ""`); txt == "" || onPage(squeeze(strings.SplitN(txt, "\n", 2)[0])) < 0 {
+						t.Errorf("%s: #%s is not printed (%.80q)", where, id, txt)
+					}
 				}
 			}
 			t.Logf("%s: %d pages (sheet %.1f pages tall), filled %v", where, len(pages), m.Height/pageH, bottom)

@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"strings"
 	"testing"
+	"time"
 
 	"github.com/chromedp/cdproto/emulation"
 	"github.com/chromedp/chromedp"
@@ -28,8 +29,9 @@ const smallTargetsJS = `(() => {
   return out;
 })()`
 
-// TestTouchTargets opens every view of both demos at 320 px (a phone) and
-// 1024 px (a tablet in landscape) and fails on any control under 44 × 44
+// TestTouchTargets opens every view of both demos, the pump-test demo's
+// Pump view and Report and the site book with a pump's history at 320 px
+// (a phone) and 1024 px (a tablet in landscape) and fails on any control under 44 × 44
 // CSS px: the data sheet's cells and the site book's file picker were the
 // last ones (issue 23). The check is checked with a 20 px button.
 func TestTouchTargets(t *testing.T) {
@@ -50,6 +52,32 @@ func TestTouchTargets(t *testing.T) {
 			}
 			if len(small) > 0 {
 				t.Errorf("%s, %s view, %d px: controls under 44 × 44 px: %s", dv.demo, dv.view.Key, w, strings.Join(small, "; "))
+			}
+		}
+	}
+	// The test card and the pump's history, in a tab of their own.
+	bt := newTab(t)
+	importHistory(t, bt, srv.URL)
+	for _, w := range []int64{320, 1024} {
+		if err := chromedp.Do(bt.ctx, chromedp.EmulateViewport(w, 740, chromedp.EmulatePortrait, chromedp.EmulateMobile, chromedp.EmulateTouch)); err != nil {
+			t.Fatal(err)
+		}
+		links := map[string]string{"pump history": "view=book"}
+		for _, dv := range pumpTestViews() {
+			links[dv.demo+", "+dv.view.Key+" view"] = dv.link
+		}
+		for where, link := range links {
+			bt.navigate(srv.URL + "/?" + link)
+			if where == "pump history" && !bt.poll(`document.querySelector("#history-1 svg") !== null`, 10*time.Second) {
+				t.Fatalf("%d px: the site book shows no history", w)
+			}
+			pages++
+			small, err := chromedp.Run(bt.ctx, chromedp.Evaluate[[]string](smallTargetsJS))
+			if err != nil {
+				t.Fatal(err)
+			}
+			if len(small) > 0 {
+				t.Errorf("%s, %d px: controls under 44 × 44 px: %s", where, w, strings.Join(small, "; "))
 			}
 		}
 	}

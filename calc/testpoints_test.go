@@ -190,6 +190,62 @@ func TestPumpTestAgainstScipy(t *testing.T) {
 	}
 }
 
+func TestPumpTestBandAgainstUncertainties(t *testing.T) {
+	// Source: python3-uncertainties 3.1 (Debian) with python3-scipy 1.10's
+	// PchipInterpolator, on the five-point test of TestPumpTestAgainstScipy.
+	// Each reading's instruments are ufloats (standard uncertainty as
+	// Accuracy gives it: class × span for a gauge, a share of the value for
+	// the meters, 10 mm for each gauge height) and the package propagates
+	// them to first order by its own derivatives, not by our formulas. On
+	// the curve at the nominal flow q0 the reading reads value(q) −
+	// slope(q0)·(q − q0): the meter's error moves the point along the
+	// tested curve.
+	//
+	//	from uncertainties import ufloat
+	//	for q0, ps0, pd0, pin0 in sorted(R):   # R, G, rho … as in the scipy test
+	//	    q0 = q0/1000
+	//	    q = ufloat(q0, aq*q0); ps = ufloat(ps0*1e3, cs*ss); pd = ufloat(pd0*1e3, cd*sd)
+	//	    zs = ufloat(zs0, az); zd = ufloat(zd0, az); pin = ufloat(pin0*1e3, ap*pin0*1e3)
+	//	    vs, vd = q/(math.pi*ds*ds/4), q/(math.pi*dd*dd/4)
+	//	    h = (pd-ps)/(rho*G) + (zd-zs) + (vd*vd-vs*vs)/(2*G)
+	//	    eta = rho*G*q*h/(pin*etam)
+	//	    pts.append((q0, q, h, eta))
+	//	x = [p[0] for p in pts]
+	//	H = PchipInterpolator(x, [p[2].n for p in pts]); dH = H.derivative()
+	//	E = PchipInterpolator(x, [p[3].n for p in pts]); dE = E.derivative()
+	//	uh = [(h - float(dH(q0))*(q - q0)).s for q0, q, h, eta in pts]
+	//	ue = [(eta - float(dE(q0))*(q - q0)).s for q0, q, h, eta in pts]
+	//	UH, UE = PchipInterpolator(x, uh), PchipInterpolator(x, ue)
+	//	for qq in (0.020, 0.035, 0.045, 0.057): print(qq, UH(qq), UE(qq))
+	pt, err := CheckPumpTest(Fluid{Density: 998.6}, scipySetup, scipyReadings, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	uh := []float64{1.072755157547124, 1.0999597980765126, 1.2505837158247635, 1.4589319301381807, 1.7437378290176033}
+	ue := []float64{0.010689100937804948, 0.01769094036212018, 0.023143857340934108, 0.028647857962688643, 0.03521080360582668}
+	near := func(what string, got, want float64) {
+		t.Helper()
+		if math.Abs(got-want) > 1e-12*want {
+			t.Errorf("%s: %.17g, uncertainties %.17g", what, got, want)
+		}
+	}
+	for i, p := range pt.Points {
+		near("head band at a reading", p.HeadU, uh[i])
+		near("efficiency band at a reading", p.EffU, ue[i])
+	}
+	for _, c := range []struct{ q, uh, ue float64 }{
+		{0.020, 1.077537242529637, 0.01357418840140813},
+		{0.035, 1.1640498915626667, 0.02063878085225746},
+		{0.045, 1.313383108652364, 0.024956180144118458},
+		{0.057, 1.6213532075880672, 0.032457687580164575},
+	} {
+		_, u, _ := pt.Head(c.q)
+		_, v, _ := pt.Efficiency(c.q)
+		near("head band", u, c.uh)
+		near("efficiency band", v, c.ue)
+	}
+}
+
 func TestPumpTestSheetAgainstScipy(t *testing.T) {
 	// Source: python3-scipy 1.10 (Debian): the five-point test of
 	// TestPumpTestAgainstScipy (H, E there) against the demo pump's data
@@ -252,11 +308,7 @@ func TestAcceptGuaranteeByHand(t *testing.T) {
 		hs[i], etas[i] = 60-500*q, 0.5+5*q
 	}
 	pt := exactTest(t, qs, hs, etas, 0)
-	g, _ := LookupGrade("2B")
-	a, err := pt.AcceptGuarantee(Guarantee{Q: 0.04, H: 42, Eff: 0.72}, g)
-	if err != nil {
-		t.Fatal(err)
-	}
+	a := judge2B(t, pt, Guarantee{Q: 0.04, H: 42, Eff: 0.72})
 	e := a.Efficiency
 	for _, c := range []struct {
 		what      string

@@ -272,6 +272,9 @@ func (b *builder) reportResults() Card {
 	}
 	heading := func(ok bool, s string) Block { return maybe(ok, Block{Kind: BlockHeading, Text: s}) }
 	liquid := b.liquidFacts()
+	// The test at several flows prints its table and tested curve; one
+	// reading is the field check above.
+	multi := b.r.Test != nil && b.r.Test.HasCurve()
 	return Card{ID: "report-results", Class: "rsec", Title: "Results", Blocks: append([]Block{
 		heading(liquid != nil, "Liquid"),
 		maybe(liquid != nil, Block{Kind: BlockFacts, Class: "facts", Facts: liquid}),
@@ -294,6 +297,12 @@ func (b *builder) reportResults() Card {
 		heading(b.r.Acceptance != nil, "Acceptance"),
 		b.verdictBlock(),
 		b.verdictFacts(),
+		heading(multi, "Test at several flows"),
+		maybe(multi, b.testTable()),
+		maybe(multi, b.testFacts()),
+		heading(b.r.Guarantee != nil, "Acceptance by the guarantee point"),
+		maybe(b.r.Guarantee != nil, b.guaranteeLevel()),
+		b.guaranteeFacts(),
 		heading(b.r.Pump != nil && (b.r.Pump.SpeedFor != nil || b.r.Pump.Speed != 1 || b.r.Pump.Rated > 0), "Speed"),
 		b.speedFacts(),
 		heading(energy != nil, "Energy per volume pumped"),
@@ -314,6 +323,9 @@ func (b *builder) reportCharts() (Card, bool) {
 	return Card{ID: "report-charts", Class: "rsec charts", Title: "Charts", Blocks: []Block{
 		maybe(hasPump, Block{Kind: BlockHeading, Text: "Pump and system curves"}),
 		pump,
+		// The test's marks in words, after the figure: in its caption the
+		// pump chart would no longer fit a Letter page.
+		maybe(hasPump && b.r.Test != nil, text("caption", "report-test-marks", "The test on the pump chart above."+b.testCaption())),
 		maybe(hasProfile, Block{Kind: BlockHeading, Text: "Energy and hydraulic grade lines"}),
 		profile,
 	}}, hasPump || hasProfile

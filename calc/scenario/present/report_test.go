@@ -50,6 +50,11 @@ func TestReportIDs(t *testing.T) {
 		{"turbine demo", scenario.TurbineDemo(),
 			[]string{"report-head", "report-inputs-card", "report-results", "report-charts", "report-warnings", "report-methods", "report-link"},
 			[]string{"report-title", "report-turbine", "turb-net", "profile-chart"}},
+		// The test at several flows prints its table, the tested curve's
+		// range and the verdict by the guarantee point (issue 22).
+		{"pump-test demo", scenario.PumpTestDemo(),
+			[]string{"report-head", "report-inputs-card", "report-results", "report-charts", "report-warnings", "report-methods", "report-link"},
+			[]string{"report-title", "field-head", "test-table", "test-range", "guarantee-level", "guarantee-flowhead", "guarantee-cross", "guarantee-eff", "pump-chart", "report-test-marks"}},
 		{"no charts", scenario.Scenario{},
 			[]string{"report-head", "report-inputs-card", "report-results", "report-warnings", "report-methods", "report-link"},
 			[]string{"report-title", "report-inputs", "report-url"}},
