@@ -71,6 +71,7 @@ import (
 	"os/exec"
 	"path/filepath"
 	"regexp"
+	"slices"
 	"sort"
 	"strconv"
 	"strings"
@@ -131,6 +132,8 @@ var (
 	editOnly   = flag.Bool("edits-only", false, "only the edit figures, on one loaded page (to compare builds quickly)")
 	partsOf    = flag.String("parts", "", "only list the code of this wasm (built without -s) by package, largest first")
 	profileTop = flag.Int("profile", 0, "with -edits-only: list this many functions of Chromium's CPU profile of the timed edits")
+	partsFuncs = flag.Int("funcs", 60, "with -parts: list this many of the largest functions")
+	partsMatch = flag.String("match", "", "with -parts: list only the functions whose name matches this regular expression")
 )
 
 func main() {
@@ -167,9 +170,18 @@ func main() {
 		for f := range p.funcs {
 			fs = append(fs, f)
 		}
+		if *partsMatch != "" {
+			re := regexp.MustCompile(*partsMatch)
+			fs = slices.DeleteFunc(fs, func(f string) bool { return !re.MatchString(f) })
+			sum := 0
+			for _, f := range fs {
+				sum += p.funcs[f]
+			}
+			fmt.Printf("%d functions match %q: %.1f KiB\n", len(fs), *partsMatch, float64(sum)/1024)
+		}
 		sort.Slice(fs, func(i, j int) bool { return p.funcs[fs[i]] > p.funcs[fs[j]] })
 		fmt.Println("largest functions:")
-		for _, f := range fs[:min(60, len(fs))] {
+		for _, f := range fs[:min(*partsFuncs, len(fs))] {
 			fmt.Printf("%8.1f KiB  %s\n", float64(p.funcs[f])/1024, f)
 		}
 		return
@@ -1099,7 +1111,7 @@ func (r *report) composition() {
 	}
 	defer os.RemoveAll(dir)
 	out := filepath.Join(dir, "app.wasm")
-	cmd := exec.Command("go", "build", "-trimpath", "-o", out, *wasmSrc)
+	cmd := exec.Command("go", "build", "-trimpath", "-gcflags=all=-l", "-o", out, *wasmSrc)
 	cmd.Env = append(os.Environ(), "GOOS=js", "GOARCH=wasm")
 	if b, err := cmd.CombinedOutput(); err != nil {
 		r.notes = append(r.notes, fmt.Sprintf("composition not read: %v %s", err, b))
