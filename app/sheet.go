@@ -107,6 +107,16 @@ func (s *sheet) OnMount(ctx app.Context) {
 		if perf := app.Window().Get("performance"); perf.Truthy() {
 			app.Window().Set("fieldheadFirstResult", perf.Call("now").Float())
 		}
+		// The sheet as opened was kept before it was drawn (save): its
+		// snapshot once it is on screen, unless an edit keeps it anew.
+		app.Window().Call("setTimeout", once(func(app.Value) {
+			ctx.Dispatch(func(ctx app.Context) {
+				ctx.PreventUpdate()
+				if !s.pending && !s.damaged {
+					s.snapshot()
+				}
+			})
+		}), snapshotDelay)
 	}
 }
 
@@ -229,8 +239,27 @@ func (s *sheet) flush() {
 	if !s.damaged { // a damaged link never replaces a kept sheet
 		storageSet(storageKey, s.query)
 		s.bk.keep(s.d.Scen, s.res, s.damaged)
+		s.snapshot()
 	}
 }
+
+// snapshot keeps the kept sheet as drawn, for the next visit to paint
+// before the wasm runs (web/prerender.js, which also says why nothing in
+// it can run). Only once the sheet is on the page: before, the page holds
+// the written demo.
+func (s *sheet) snapshot() {
+	if !app.IsClient || s.ctx.Src() == nil {
+		return
+	}
+	defer func() { _ = recover() }() // a snapshot is a convenience: never a fault
+	if snap := app.Window().Get("fieldheadSnapshot"); snap.Truthy() {
+		snap.Call("take", s.query)
+	}
+}
+
+// snapshotDelay is how long, in ms, after the sheet is first drawn its
+// snapshot is taken: after the first paint, not in its way.
+const snapshotDelay = 1000
 
 // build makes the view model, with what only the page knows: the link
 // and the time on the printed sheet.
