@@ -399,5 +399,14 @@ func TestSnapshot(t *testing.T) {
 	if b.jsBool(`document.querySelector("#sheet [inert], .prerendered, .snapshot, #tampered") !== null`) {
 		t.Error("after the wasm the snapshot or an inert part remains")
 	}
+
+	// An edit redraws the cards alone (redrawCards), and draws the answer.
+	b.typeInto("#in-q", "40")
+	if !b.poll(`window.fieldheadCardsOnly > 0`, 5*time.Second) {
+		t.Error("typing a flow redrew the whole sheet, not only its cards")
+	}
+	if got := b.text("#answer-value"); got == keptAnswer {
+		t.Errorf("after typing a flow the answer is still %q", got)
+	}
 	b.noProblems("snapshot before the wasm")
 }
