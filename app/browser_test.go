@@ -537,7 +537,7 @@ func findChromium() string {
 func buildSite(t *testing.T) (string, error) {
 	dir := t.TempDir()
 	wasm := filepath.Join(dir, "app.wasm")
-	cmd := exec.Command("go", "build", "-trimpath", "-ldflags=-s -w", "-o", wasm, ".")
+	cmd := exec.Command("go", "build", "-trimpath", "-ldflags=-s -w", "-gcflags=all=-l", "-o", wasm, ".")
 	cmd.Env = append(os.Environ(), "GOOS=js", "GOARCH=wasm")
 	if out, err := cmd.CombinedOutput(); err != nil {
 		return "", fmt.Errorf("%v\n%s", err, out)

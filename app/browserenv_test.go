@@ -370,7 +370,7 @@ func copyDir(src, dst string) error {
 
 // compileWasm builds the page's wasm into out.
 func compileWasm(out string) error {
-	cmd := exec.Command("go", "build", "-trimpath", "-ldflags=-s -w", "-o", out, ".")
+	cmd := exec.Command("go", "build", "-trimpath", "-ldflags=-s -w", "-gcflags=all=-l", "-o", out, ".")
 	cmd.Env = append(os.Environ(), "GOOS=js", "GOARCH=wasm")
 	if b, err := cmd.CombinedOutput(); err != nil {
 		return fmt.Errorf("%v\n%s", err, b)

@@ -16,7 +16,21 @@ type card struct {
 	S *sheet
 	C present.Card
 	W int // the charts' width: a resize redraws a card with a chart
+
+	ctx app.Context // from OnMount: redrawCards redraws the card alone
 }
+
+// OnMount lists the card among the sheet's cards on the page.
+func (c *card) OnMount(ctx app.Context) {
+	c.ctx = ctx
+	if c.S.mounted == nil {
+		c.S.mounted = map[*card]bool{}
+	}
+	c.S.mounted[c] = true
+}
+
+// OnDismount takes the card off the list.
+func (c *card) OnDismount() { delete(c.S.mounted, c) }
 
 // Render draws the card: its title, its controls and its blocks.
 func (c *card) Render() (ui app.UI) {

@@ -67,6 +67,7 @@ const loadFailedJS = `
 // Fieldhead: the wasm did not load (app/loader.go).
 function fieldheadLoadFailed(loader, icon, label) {
   const demo = document.documentElement.classList.contains("demo-page");
+  const kept = document.documentElement.classList.contains("snap-page");
   const offline = navigator.onLine === false;
   loader.classList.add("failed");
   loader.setAttribute("role", "alert");
@@ -74,7 +75,9 @@ function fieldheadLoadFailed(loader, icon, label) {
   icon.className = "stopped";
   label.textContent = "Fieldhead could not start: " +
     (offline ? "this device is offline and has not kept the program yet. " : "its program did not download. ") +
-    (demo ? "The demo sheet below can be read but not changed." : "This link's sheet can be shown only once it starts.") +
+    (demo ? "The demo sheet below can be read but not changed." :
+      kept ? "The sheet below is as this device last showed it; it can be read but not changed." :
+      "This link's sheet can be shown only once it starts.") +
     " Check the connection, then try again.";
   let retry = document.getElementById("app-wasm-retry");
   if (!retry) {

@@ -278,3 +278,135 @@ func blockWasm(t *testing.T, b *tab, on bool) {
 		t.Fatalf("blocking the wasm: %v", err)
 	}
 }
+
+// TestSnapshot keeps a sheet in the browser, then opens it again with the
+// wasm blocked: the kept sheet's snapshot is painted before the wasm (its
+// answer and its boxes as they were), inert, for its own link and for a
+// bare link on that device, never for another link; a snapshot written with
+// a script, handlers, a style and an outside address paints none of them;
+// once the wasm runs the live sheet replaces the snapshot.
+func TestSnapshot(t *testing.T) {
+	site := testSite(t)
+	b := newTab(t)
+	origin := newSiteServer(t, site).URL
+	block := func(on bool) {
+		t.Helper()
+		blockWasm(t, b, on)
+		// The worker would answer the wasm from its cache: past it, the block holds.
+		if _, err := chromedp.Call(b.ctx, network.SetBypassServiceWorker, network.SetBypassServiceWorkerParams{Bypass: on}); err != nil {
+			t.Fatal(err)
+		}
+	}
+	open := func(u string) {
+		t.Helper()
+		if err := chromedp.Do(b.ctx, chromedp.Navigate(u)); err != nil {
+			t.Fatalf("opening %s: %v", u, err)
+		}
+		time.Sleep(300 * time.Millisecond) // the blocked fetch fails
+	}
+	sheetOf := func(z2 string) (link, answer string) {
+		sc := scenario.Demo()
+		if err := sc.Set("z2", z2); err != nil {
+			t.Fatal(err)
+		}
+		var d scenario.Draft
+		d.Reset(sc)
+		answer, _ = present.Build(&d, scenario.Evaluate(scenario.Read(sc))).Text("answer-value")
+		return origin + "/?" + sc.Sign(), answer
+	}
+	kept, keptAnswer := sheetOf("31 m")
+	other, _ := sheetOf("33 m")
+	demo := demoAnswer(t)
+
+	b.navigate(kept)
+	if got := b.text("#answer-value"); got != keptAnswer {
+		t.Fatalf("live: answer %q, want %q", got, keptAnswer)
+	}
+	if !b.poll(`Object.keys(localStorage).some((k) => k.startsWith("fieldhead.snapshot."))`, 10*time.Second) {
+		t.Fatal("no snapshot kept once the sheet was drawn")
+	}
+	t.Logf("snapshot: %s characters, %s elements", b.js(`String(localStorage.getItem(Object.keys(localStorage).find((k) => k.startsWith("fieldhead.snapshot."))).length)`), b.js(`String(document.querySelectorAll("#sheet *").length)`))
+	z2 := b.value("#in-z2")
+	if z2 == "" {
+		t.Fatal("the live sheet has no z2 box")
+	}
+
+	block(true)
+	inert := `[...document.querySelectorAll("#sheet input, #sheet select, #sheet textarea, #sheet button")].every((e) => e.closest("[inert]"))`
+	runs := `document.querySelectorAll("#sheet script, #sheet style, #sheet iframe, #sheet object, #sheet foreignObject").length === 0 &&
+		[...document.querySelectorAll("#sheet *")].every((e) => [...e.attributes].every((a) => !/^on|^style$|^href$|^src$|^xlink:href$/i.test(a.name)))`
+	for _, u := range []string{kept, origin + "/"} {
+		open(u)
+		if b.jsBool("window.fieldheadFirstResult > 0") {
+			t.Fatal("the wasm ran although its request was blocked")
+		}
+		if got := b.text("#answer-value"); got != keptAnswer || !b.jsBool(`document.documentElement.classList.contains("snap-page") && getComputedStyle(document.querySelector("#answer-value")).visibility === "visible"`) {
+			t.Errorf("%s, wasm blocked: answer %q shown: %v, want the kept sheet's %q from its snapshot", u, got, b.jsBool(`document.documentElement.classList.contains("snap-page")`), keptAnswer)
+		}
+		if got := b.value("#in-z2"); got != z2 {
+			t.Errorf("%s, snapshot: z2 box %q, want %q as drawn", u, got, z2)
+		}
+		if !b.jsBool(inert) {
+			t.Errorf("%s: a box or button of the snapshot is not inert", u)
+		}
+		if !b.jsBool(runs) {
+			t.Errorf("%s: the snapshot holds a script, a handler, a style or an address", u)
+		}
+		if !b.jsBool(`document.querySelector("#sheet main h1") !== null && !document.querySelector("#sheet main h1").closest("[inert]")`) {
+			t.Errorf("%s: the snapshot's heading is missing or inert", u)
+		}
+	}
+	b.shot("snapshot-before-wasm")
+
+	open(other)
+	if b.jsBool(`document.documentElement.classList.contains("snap-page")`) || b.jsBool(`getComputedStyle(document.querySelector("#answer-value")).visibility !== "hidden"`) {
+		t.Errorf("another link showed an answer before the wasm (%q): the kept sheet's snapshot is for its own link only", b.text("#answer-value"))
+	}
+	if b.text("#answer-value") == keptAnswer && keptAnswer != demo {
+		t.Error("another link holds the kept sheet's answer")
+	}
+
+	// A snapshot changed behind the page's back paints nothing that can run.
+	ck := b.js(`new URLSearchParams(localStorage.getItem("fieldhead.scenario")).get("ck")`)
+	b.js(`(() => {
+		const k = "fieldhead.snapshot.` + ck + `";
+		const s = JSON.parse(localStorage.getItem(k));
+		s.root.push(["script", {}, "window.fieldheadRan = 1"],
+			["div", {"onclick": "window.fieldheadRan = 2", "style": "color: red", "id": "tampered", "class": "x"}, "text ", ["a", {"href": "https://example.org/"}, "away"]],
+			["img", {"src": "x", "onerror": "window.fieldheadRan = 3"}],
+			["svg", {}, ["foreignObject", {}, ["iframe", {"src": "https://example.org/"}]], ["use", {"href": "#x"}]]);
+		localStorage.setItem(k, JSON.stringify(s));
+		return "";
+	})()`)
+	open(origin + "/")
+	if b.text("#answer-value") != keptAnswer {
+		t.Error("the changed snapshot was not painted")
+	}
+	if !b.jsBool(runs) || b.jsBool(`window.fieldheadRan !== undefined`) || b.jsBool(`document.querySelector("#sheet img, #sheet use") !== null`) {
+		t.Errorf("a changed snapshot painted something that can run: %s", b.js(`document.getElementById("tampered") ? document.getElementById("tampered").outerHTML : "(none)"`))
+	}
+	if got := b.js(`(document.getElementById("tampered") || {}).textContent || ""`); got != "text away" {
+		t.Errorf("a changed snapshot's text: %q, want it kept as text", got)
+	}
+
+	// The wasm runs: the live sheet replaces the snapshot.
+	block(false)
+	b.js(`window.fieldheadFirstResult = 0; ""`)
+	b.navigate(kept)
+	if got := b.text("#answer-value"); got != keptAnswer {
+		t.Errorf("after the wasm: answer %q, want %q", got, keptAnswer)
+	}
+	if b.jsBool(`document.querySelector("#sheet [inert], .prerendered, .snapshot, #tampered") !== null`) {
+		t.Error("after the wasm the snapshot or an inert part remains")
+	}
+
+	// An edit redraws the cards alone (redrawCards), and draws the answer.
+	b.typeInto("#in-q", "40")
+	if !b.poll(`window.fieldheadCardsOnly > 0`, 5*time.Second) {
+		t.Error("typing a flow redrew the whole sheet, not only its cards")
+	}
+	if got := b.text("#answer-value"); got == keptAnswer {
+		t.Errorf("after typing a flow the answer is still %q", got)
+	}
+	b.noProblems("snapshot before the wasm")
+}

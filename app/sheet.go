@@ -2,6 +2,7 @@ package main
 
 import (
 	"errors"
+	"reflect"
 	"strings"
 
 	"fieldhead/calc/scenario"
@@ -26,21 +27,24 @@ type sheet struct {
 	linkErr string // a problem with the link as a whole (unknown parameter, …)
 	loaded  bool   // false while pre-rendered on the server, before the wasm runs
 
-	base     string      // page URL without the query
-	query    string      // the scenario's signed link, also in the URL and in localStorage
-	damaged  bool        // opened from a link that arrived damaged, not yet edited
-	copyNote string      // result of the last "Copy link"
-	showLink bool        // show the link as selectable text
-	fault    *fault      // the last contained panic, shown in a banner (guard.go)
-	update   bool        // a newer version of the site is installed (update.go)
-	wide     int         // chart width drawn last (see chartWidth)
-	bk       book        // the sheets kept on this device (book.go)
-	ctx      app.Context // the sheet's own context, from OnMount
-	pending  bool        // a write of the sheet is put off (save)
-	edits    int         // edits so far, for save to see a pause
-	install  bool        // the browser offers to install the site (chrome.go)
-	fitKey   string      // the last key on the closed fitting picker (focus.go)
-	fitKeyAt float64     // its event's timeStamp, ms
+	base      string         // page URL without the query
+	query     string         // the scenario's signed link, also in the URL and in localStorage
+	damaged   bool           // opened from a link that arrived damaged, not yet edited
+	copyNote  string         // result of the last "Copy link"
+	showLink  bool           // show the link as selectable text
+	fault     *fault         // the last contained panic, shown in a banner (guard.go)
+	update    bool           // a newer version of the site is installed (update.go)
+	wide      int            // chart width drawn last (see chartWidth)
+	bk        book           // the sheets kept on this device (book.go)
+	ctx       app.Context    // the sheet's own context, from OnMount
+	pending   bool           // a write of the sheet is put off (save)
+	edits     int            // edits so far, for save to see a pause
+	install   bool           // the browser offers to install the site (chrome.go)
+	fitKey    string         // the last key on the closed fitting picker (focus.go)
+	fitKeyAt  float64        // its event's timeStamp, ms
+	mounted   map[*card]bool // the cards on the page (card.OnMount)
+	stale     bool           // cards redrawn alone since the sheet was last drawn (redrawCards)
+	cardsOnly int            // edits drawn by redrawCards
 }
 
 // newSheet is the route's component. In the browser it restores the
@@ -107,6 +111,16 @@ func (s *sheet) OnMount(ctx app.Context) {
 		if perf := app.Window().Get("performance"); perf.Truthy() {
 			app.Window().Set("fieldheadFirstResult", perf.Call("now").Float())
 		}
+		// The sheet as opened was kept before it was drawn (save): its
+		// snapshot once it is on screen, unless an edit keeps it anew.
+		app.Window().Call("setTimeout", once(func(app.Value) {
+			ctx.Dispatch(func(ctx app.Context) {
+				ctx.PreventUpdate()
+				if !s.pending && !s.damaged {
+					s.snapshot()
+				}
+			})
+		}), snapshotDelay)
 	}
 }
 
@@ -204,7 +218,7 @@ func (s *sheet) save() {
 					return
 				}
 				s.flush()
-				if s.vm.View != "book" {
+				if s.vm.View != "book" && !s.stale {
 					ctx.PreventUpdate() // nothing on screen changes
 				} else {
 					s.build() // the book lists the sheet as kept now
@@ -229,8 +243,27 @@ func (s *sheet) flush() {
 	if !s.damaged { // a damaged link never replaces a kept sheet
 		storageSet(storageKey, s.query)
 		s.bk.keep(s.d.Scen, s.res, s.damaged)
+		s.snapshot()
 	}
 }
+
+// snapshot keeps the kept sheet as drawn, for the next visit to paint
+// before the wasm runs (web/prerender.js, which also says why nothing in
+// it can run). Only once the sheet is on the page: before, the page holds
+// the written demo.
+func (s *sheet) snapshot() {
+	if !app.IsClient || s.ctx.Src() == nil {
+		return
+	}
+	defer func() { _ = recover() }() // a snapshot is a convenience: never a fault
+	if snap := app.Window().Get("fieldheadSnapshot"); snap.Truthy() {
+		snap.Call("take", s.query)
+	}
+}
+
+// snapshotDelay is how long, in ms, after the sheet is first drawn its
+// snapshot is taken: after the first paint, not in its way.
+const snapshotDelay = 1000
 
 // build makes the view model, with what only the page knows: the link
 // and the time on the printed sheet.
@@ -264,15 +297,64 @@ func (s *sheet) onBox(p string) app.EventHandler {
 			s.build()
 			return
 		}
+		before, note, damaged := s.vm, s.copyNote, s.damaged
 		if s.d.Type(p, ctx.JSSrc().Get("value").String()) {
 			s.copyNote, s.damaged = "", false
 			s.evaluate()
-			return
+		} else {
+			// Only the box changed (a space, a unit half typed): the scenario,
+			// its result and the link stay; the view model follows the box.
+			s.build()
 		}
-		// Only the box changed (a space, a unit half typed): the scenario,
-		// its result and the link stay; the view model follows the box.
-		s.build()
+		if note == s.copyNote && damaged == s.damaged {
+			s.redrawCards(ctx, before)
+		}
 	}
+}
+
+// redrawCards draws an edit by redrawing only the cards whose part of
+// the view model changed, when nothing else the sheet draws has: go-app
+// would otherwise render the sheet's own tree and compare it with the page
+// (the sheet is an ancestor of the box the event came from). Each changed
+// card is given its new part and redrawn alone (Context.Redraw, our go-app
+// copy). The sheet's text that follows the link (the printed foot) is drawn
+// again once typing pauses (save). It returns whether it did.
+func (s *sheet) redrawCards(ctx app.Context, before present.Sheet) bool {
+	if s.fault != nil || s.ctx.Src() == nil || len(before.Cards) != len(s.vm.Cards) || len(s.mounted) != len(s.vm.Cards) {
+		return false
+	}
+	a, b := before, s.vm
+	a.Cards, b.Cards = nil, nil
+	if !reflect.DeepEqual(a, b) {
+		return false
+	}
+	byID := make(map[string]*card, len(s.mounted))
+	for c := range s.mounted {
+		if _, dup := byID[c.C.ID]; dup || !c.Mounted() {
+			return false
+		}
+		byID[c.C.ID] = c
+	}
+	var redraw []int
+	for i, nc := range s.vm.Cards {
+		c := byID[nc.ID]
+		if c == nil || before.Cards[i].ID != nc.ID {
+			return false
+		}
+		if c.W != s.wide || !reflect.DeepEqual(c.C, nc) {
+			redraw = append(redraw, i)
+		}
+	}
+	ctx.PreventUpdate() // the box's field, its card and the sheet
+	for _, i := range redraw {
+		c := byID[s.vm.Cards[i].ID]
+		c.C, c.W = s.vm.Cards[i], s.wide
+		c.ctx.Redraw()
+	}
+	s.stale = true
+	s.cardsOnly++
+	app.Window().Set("fieldheadCardsOnly", s.cardsOnly) // for the browser tests
+	return true
 }
 
 // onPicked handles a picker: a unit, a choice or a data-sheet column's
@@ -367,6 +449,7 @@ func (s *sheet) onConfirmed(a present.Action, confirm string) app.EventHandler {
 func (s *sheet) Render() (ui app.UI) {
 	defer s.containRender(&ui)
 	s.testPanic("render")
+	s.stale = false
 	vm := &s.vm
 	root, lay, pre := app.Div().ID("sheet").Class("sheet view-"+vm.View), s.layout(), func(d app.HTMLDiv) app.HTMLDiv { return d }
 	if vm.Unverified != "" {

@@ -1,13 +1,173 @@
-// Fieldhead: the page as written holds the demo sheet, drawn when the site
-// was built, so that a first visit reads an answer before the wasm runs
+// Fieldhead: what the page shows before the wasm runs. Run before the page
+// is drawn (a blocking script in <head>, no inline script: CSP).
+//
+// The page as written holds the demo sheet, drawn when the site was built
 // (app/loader.go). The wasm opens the link's sheet, else the one kept on
 // this device, else the demo: so the demo is shown only on a bare link on a
-// device with no kept sheet. Run before the page is drawn (a blocking
-// script in <head>); without it the demo stays hidden.
-try {
-  if (location.search === "" && !localStorage.getItem("fieldhead.scenario")) {
-    document.documentElement.classList.add("demo-page");
+// device with no kept sheet (.demo-page); without this script it stays
+// hidden.
+//
+// The kept sheet: each time the page keeps a sheet (app/sheet.go, flush)
+// it asks fieldheadSnapshot.take for a snapshot of the sheet as drawn, kept
+// in localStorage under "fieldhead.snapshot." + the link's check (ck). On
+// a later visit that opens that very sheet (its link, or a bare link on
+// the device keeping it) the snapshot is painted in place of the written
+// demo (.snap-page), inert, until the wasm draws the live sheet over it.
+// No other link ever shows it: the link to be opened must equal the link
+// the snapshot was taken of, character for character.
+//
+// Nothing in a snapshot can run. It is kept as data, never as HTML: a tree
+// of [tag, {attribute: value}, child…] and strings (text). Painting builds
+// it with createElement, setAttribute and text nodes only (never innerHTML
+// or a parser), and only for the tags and attributes of the lists below,
+// both at taking and at painting: no script, style, link, iframe, object,
+// form or foreignObject element, no attribute named on…, no style, href,
+// src or action; an element not listed is left out with what it holds.
+// Every element of it is inert (no focus, no click) and the page's CSP
+// (self only, no inline script or style) stays as it is.
+(() => {
+  const KEY = "fieldhead.scenario"; // app/sheet.go storageKey
+  const PREFIX = "fieldhead.snapshot.";
+  const SVG = "http://www.w3.org/2000/svg";
+  const TAGS = new Set(("div span p h1 h2 h3 h4 strong em b i small sub sup br hr ul ol li dl dt dd " +
+    "table caption thead tbody tfoot tr th td colgroup col header nav main section footer aside figure figcaption " +
+    "label input select option optgroup textarea button output fieldset legend details summary abbr code kbd a " +
+    "svg g path line polyline polygon rect circle ellipse text tspan title desc defs pattern clipPath marker " +
+    "linearGradient stop").split(" "));
+  const ATTRS = new Set(("class id role type value checked selected disabled readonly placeholder inputmode " +
+    "for colspan rowspan scope lang dir title hidden open min max step maxlength size rows cols elementtiming " +
+    "viewBox width height x y x1 y1 x2 y2 cx cy r rx ry d points transform fill stroke stroke-width " +
+    "stroke-dasharray stroke-dashoffset stroke-linecap stroke-linejoin stroke-opacity opacity fill-opacity " +
+    "text-anchor dominant-baseline font-size font-weight font-style letter-spacing patternUnits " +
+    "patternTransform preserveAspectRatio focusable clip-path marker-start marker-end marker-mid markerWidth " +
+    "markerHeight refX refY orient vector-effect paint-order offset stop-color").split(" "));
+  const allowed = (name) => ATTRS.has(name) || /^(aria|data)-[a-z0-9-]+$/.test(name);
+
+  // take keeps a snapshot of #sheet as drawn now for query, the kept
+  // sheet's link, and drops any other snapshot.
+  const take = (query) => {
+    try {
+      const root = document.getElementById("sheet");
+      const ck = new URLSearchParams(query).get("ck");
+      if (!root || !ck || root.classList.contains("prerendered")) return;
+      const walk = (el) => {
+        const tag = el.localName;
+        if (!TAGS.has(tag) || el.classList.contains("print-only")) return null;
+        const attrs = {};
+        for (const a of el.attributes) {
+          if (allowed(a.name)) attrs[a.name] = a.value;
+        }
+        // A box shows what is typed, not its attribute.
+        if (tag === "input") {
+          if (el.type === "checkbox" || el.type === "radio") {
+            if (el.checked) attrs.checked = ""; else delete attrs.checked;
+          } else {
+            attrs.value = el.value;
+          }
+        }
+        if (tag === "option") {
+          if (el.selected) attrs.selected = ""; else delete attrs.selected;
+        }
+        const node = [tag, attrs];
+        if (tag === "textarea") {
+          node.push(el.value);
+          return node;
+        }
+        for (const c of el.childNodes) {
+          if (c.nodeType === 3) node.push(c.data);
+          else if (c.nodeType === 1) {
+            const n = walk(c);
+            if (n) node.push(n);
+          }
+        }
+        return node;
+      };
+      const snap = JSON.stringify({q: query, root: walk(root)});
+      for (let i = localStorage.length - 1; i >= 0; i--) {
+        const k = localStorage.key(i);
+        if (k && k.startsWith(PREFIX) && k !== PREFIX + ck) localStorage.removeItem(k);
+      }
+      localStorage.setItem(PREFIX + ck, snap);
+    } catch (e) {
+      // storage full or blocked: the next visit waits for the wasm
+    }
+  };
+
+  // build makes the DOM of a snapshot's node, or null for one not allowed.
+  const build = (node, svg) => {
+    if (typeof node === "string") return document.createTextNode(node);
+    if (!Array.isArray(node) || typeof node[0] !== "string" || !TAGS.has(node[0])) return null;
+    const tag = node[0];
+    const inSVG = svg || tag === "svg";
+    const el = inSVG ? document.createElementNS(SVG, tag) : document.createElement(tag);
+    const attrs = node[1] && typeof node[1] === "object" ? node[1] : {};
+    for (const name of Object.keys(attrs)) {
+      if (!allowed(name) || typeof attrs[name] !== "string") continue;
+      // The snapshot's answer is timed apart from the written page's (make bench).
+      el.setAttribute(name, name === "elementtiming" ? "snapshot-" + attrs[name] : attrs[name]);
+    }
+    for (let i = 2; i < node.length; i++) {
+      const c = build(node[i], inSVG);
+      if (c) el.appendChild(c);
+    }
+    if (tag === "textarea") el.value = el.textContent;
+    return el;
+  };
+
+  // paint puts the snapshot's sheet in place of the written one, every
+  // part of it inert but main and its h1 (the landmarks the written page
+  // keeps too).
+  const paint = (root) => {
+    const sheet = document.getElementById("sheet");
+    if (!sheet || !sheet.classList.contains("prerendered")) return;
+    const cls = root[1] && typeof root[1].class === "string" ? root[1].class : "sheet";
+    const kids = [];
+    for (let i = 2; i < root.length; i++) {
+      const c = build(root[i], false);
+      if (!c) continue;
+      if (c.nodeType === 1 && c.localName === "main") {
+        for (const m of c.children) {
+          if (m.localName !== "h1") m.setAttribute("inert", "");
+        }
+      } else if (c.nodeType === 1) {
+        c.setAttribute("inert", "");
+      }
+      kids.push(c);
+    }
+    sheet.replaceChildren(...kids);
+    sheet.setAttribute("class", cls + " prerendered snapshot");
+  };
+
+  window.fieldheadSnapshot = {take};
+
+  try {
+    const query = location.search.slice(1) || localStorage.getItem(KEY) || "";
+    if (query === "") {
+      document.documentElement.classList.add("demo-page");
+      return;
+    }
+    const ck = new URLSearchParams(query).get("ck");
+    const raw = ck ? localStorage.getItem(PREFIX + ck) : null;
+    if (!raw) return;
+    const snap = JSON.parse(raw);
+    if (!snap || snap.q !== query || !Array.isArray(snap.root)) return; // another link: never shown
+    // The written demo is not laid out meanwhile (fieldhead.css).
+    document.documentElement.classList.add("snap-page");
+    // As soon as the written sheet has been read (the starting note follows
+    // it), not after the deferred scripts (DOMContentLoaded).
+    let done = false;
+    const now = () => {
+      if (done) return;
+      done = true;
+      mo.disconnect();
+      paint(snap.root);
+    };
+    const mo = new MutationObserver(() => {
+      if (document.getElementById("app-wasm-loader")) now();
+    });
+    mo.observe(document.documentElement, {childList: true, subtree: true});
+    document.addEventListener("DOMContentLoaded", now, {once: true});
+  } catch (e) {
+    // storage blocked or a snapshot unreadable: the written page as it was
   }
-} catch (e) {
-  // storage blocked: keep the demo hidden
-}
+})();

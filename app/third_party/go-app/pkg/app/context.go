@@ -240,6 +240,17 @@ func (ctx Context) Update() {
 	ctx.Dispatch(nil)
 }
 
+// Redraw flags the enclosing component, and not its ancestors, for an
+// update. It is called on the UI goroutine (in a dispatch), by a parent
+// that has set the component's new fields itself and redraws only the
+// children whose fields changed, without rendering its own tree.
+// (Fieldhead's change.)
+func (ctx Context) Redraw() {
+	if c, ok := component(ctx.sourceElement); ok {
+		ctx.addComponentUpdate(c, 1)
+	}
+}
+
 // Handle designates a handler for a particular action, set to run on the UI
 // goroutine.
 func (ctx Context) Handle(action string, h ActionHandler) {
