@@ -27,11 +27,12 @@ const unlabelledJS = `(() => {
       .some((id) => { const l = document.getElementById(id); return l && l.textContent.trim() !== ""; });
   };
   const bad = [];
+  // An element under the hidden attribute is not exposed at all: it needs no name.
   for (const e of document.querySelectorAll("input, select, textarea")) {
-    if (e.type !== "hidden" && !named(e)) bad.push(e.tagName.toLowerCase() + "#" + e.id);
+    if (e.type !== "hidden" && !e.closest("[hidden]") && !named(e)) bad.push(e.tagName.toLowerCase() + "#" + e.id);
   }
   for (const e of document.querySelectorAll("button, summary, a[href]")) {
-    if (e.textContent.trim() === "" && (e.getAttribute("aria-label") || "").trim() === "") bad.push(e.tagName.toLowerCase() + "#" + e.id);
+    if (!e.closest("[hidden]") && e.textContent.trim() === "" && (e.getAttribute("aria-label") || "").trim() === "") bad.push(e.tagName.toLowerCase() + "#" + e.id);
   }
   return bad;
 })()`
