@@ -1085,7 +1085,7 @@ func (c cautioning) abs(i int) string {
 // npshGuidance is the margin guidance the NPSH notes rest on.
 func (c cautioning) npshGuidance(least int) string {
 	return "margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least " +
-		c.f(least) + " (common practice, from memory); large, high-energy or hot-liquid pumps need more"
+		limit(c.f(least)) + " (common practice, from memory); large, high-energy or hot-liquid pumps need more"
 }
 
 // cautionWords words each caution.
