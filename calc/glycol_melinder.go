@@ -12,15 +12,10 @@ package calc
 // j = 0 terms are kept (the published set also lists t terms of order
 // 1e-6 K and smaller, which carry no meaning for a freezing point).
 //
-// Transcribed from the published sets; checked term by term against two
-// independent open transcriptions (the IBPSA Modelica library's
-// Media.Antifreeze and NREL's SecondaryCoolantProps). The propylene glycol
-// sets agree in all three. For ethylene glycol the second and this one
-// agree everywhere; the first differs in three viscosity terms (the signs
-// of c[2][1] and c[2][2], a digit of c[3][0]) and a digit of the density's
-// c[4][1]. At 0 % the viscosity terms kept here give IAPWS water within
-// 0.8 % from 0 to 40 °C, the first library's up to 4 % off; the density
-// digit moves nothing by more than 0.003 kg/m³.
+// Transcribed from the published sets. A wrong term shows at 0 %, where
+// the fits must close on water: with these terms the viscosity meets
+// IAPWS water within 0.8 % from 0 to 40 °C (a sign slip in c[2][1] or
+// c[2][2] puts it about 4 % off; TestGlycolWaterLimit).
 
 // melinderPoly holds c[i][j] for i ≤ 5, j ≤ 3, i + j ≤ 5 (18 terms; the
 // rest are zero).

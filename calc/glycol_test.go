@@ -6,9 +6,8 @@ import (
 	"testing"
 )
 
-// The sums of Melinder's (2010) coefficients at the points of the
-// transcription check in the project's research notes: our own evaluation
-// of the published sets, recomputed with python3-mpmath at 30 digits
+// The sums of Melinder's (2010) coefficients at a few points: our own
+// evaluation of the published sets with python3-mpmath at 30 digits
 // (testdata/refs/gen/gen_glycol.py does the same for the cases). Each
 // figure is given to the digits listed, so the tolerance is half a unit
 // of its last digit.
@@ -70,8 +69,8 @@ var waterIAPWS = [][5]float64{ // °C, kg/m³, J/(kg·K), W/(m·K), Pa·s
 // the largest deviations found, rounded up (density 0.09 %, cp 0.21 %, λ
 // 1.0 % at 0 °C, viscosity 1.16 % to 40 °C and 1.8 % at 100 °C): they
 // record how well the fits close on water, not an accuracy the source
-// states. A wrong term shows here: the one sign that an open transcription
-// of the ethylene glycol set has otherwise puts viscosity 4 % off.
+// states. A wrong term shows here: a sign slip in one of the ethylene
+// glycol set's viscosity terms puts viscosity about 4 % off.
 func TestGlycolWaterLimit(t *testing.T) {
 	for _, g := range []Glycol{EthyleneGlycol, PropyleneGlycol} {
 		for _, r := range waterIAPWS {
