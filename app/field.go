@@ -122,11 +122,13 @@ type selectBox struct {
 	Fit       bool   // the picker that adds a fitting
 	S         *sheet // the sheet whose handlers it calls (compared by pointer)
 
-	keys app.Func // the fitting picker's own key listener (focus.go)
+	keys     app.Func // the fitting picker's own key listener (focus.go)
+	fitKey   string   // the last key seen on the fitting picker, "" after a pick
+	fitKeyAt float64  // its event's timeStamp, ms
 }
 
 // OnMount gives the fitting picker a key listener of its own, which runs
-// as the key is pressed (see sheet.fitKeyDown).
+// as the key is pressed (see fitKeyDown).
 func (b *selectBox) OnMount(ctx app.Context) {
 	if !b.Fit || !app.IsClient {
 		return
@@ -134,7 +136,7 @@ func (b *selectBox) OnMount(ctx app.Context) {
 	el := ctx.JSSrc()
 	b.keys = app.FuncOf(func(_ app.Value, args []app.Value) any {
 		if len(args) > 0 && b.S != nil && b.Fit {
-			b.S.fitKeyDown(args[0], el, b.Param)
+			b.fitKeyDown(args[0], el)
 		}
 		return nil
 	})
@@ -167,7 +169,7 @@ func (b *selectBox) Render() app.UI {
 	}
 	sel := app.Select().ID(b.ID).Class(b.Class)
 	if b.Fit { // adds only on an explicit choice (focus.go)
-		sel = sel.OnChange(b.S.onFitChange(b.Param), app.EventScope(b.Param, b.Fit)).OnBlur(b.S.onFitBlur)
+		sel = sel.OnChange(b.onFitChange, app.EventScope(b.Param, b.Fit)).OnBlur(b.onFitBlur)
 	} else {
 		sel = sel.OnChange(h, app.EventScope(b.Param, b.Unit, b.List, b.Fit))
 	}

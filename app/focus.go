@@ -90,11 +90,12 @@ func (s *sheet) refocus(newView bool, view string, ids []string, follow bool) {
 const browseWindow = 100
 
 // fitKeyDown sees each key on the fitting picker as it happens (a
-// listener of its own, fieldPicker.OnMount: go-app runs its handlers
-// later, too late to stop the browser's own action): it notes the key for
+// listener of its own, selectBox.OnMount: go-app runs its handlers later,
+// too late to stop the browser's own action): it notes the key for
 // onFitChange, and Enter on a picker that shows a fitting adds it, without
-// the list opening as well.
-func (s *sheet) fitKeyDown(e, el app.Value, p string) {
+// the list opening as well. The key is the picker's own state.
+func (b *selectBox) fitKeyDown(e, el app.Value) {
+	s, p := b.S, b.Param
 	defer s.contain("choosing a fitting to add")
 	if e.Get("type").String() == "keypress" { // the older event of the same Enter also opens the list
 		if e.Get("key").String() == "Enter" {
@@ -102,13 +103,14 @@ func (s *sheet) fitKeyDown(e, el app.Value, p string) {
 		}
 		return
 	}
-	s.fitKey, s.fitKeyAt = e.Get("key").String(), e.Get("timeStamp").Float()
+	b.fitKey, b.fitKeyAt = e.Get("key").String(), e.Get("timeStamp").Float()
 	v := el.Get("value").String()
-	if s.fitKey != "Enter" || v == "" || s.ctx.Src() == nil {
+	if b.fitKey != "Enter" || v == "" || s.ctx.Src() == nil {
 		return
 	}
 	e.Call("preventDefault")
 	id := el.Get("id").String()
+	b.fitKey = ""
 	s.ctx.Dispatch(func(ctx app.Context) {
 		defer s.contain("adding a fitting to " + scenario.Label(p))
 		s.addFitting(id, p, v)
@@ -117,31 +119,29 @@ func (s *sheet) fitKeyDown(e, el app.Value, p string) {
 
 // onFitChange adds the fitting picked, unless the change came from
 // browsing with the keys.
-func (s *sheet) onFitChange(p string) app.EventHandler {
-	return func(ctx app.Context, e app.Event) {
-		defer s.contain("adding a fitting to " + scenario.Label(p))
-		v := ctx.JSSrc().Get("value").String()
-		browsing := s.fitKey != "" && s.fitKey != "Enter" && e.Get("timeStamp").Float()-s.fitKeyAt < browseWindow
-		if v == "" || browsing {
-			ctx.PreventUpdate()
-			return
-		}
-		s.addFitting(ctx.JSSrc().Get("id").String(), p, v)
+func (b *selectBox) onFitChange(ctx app.Context, e app.Event) {
+	defer b.S.contain("adding a fitting to " + scenario.Label(b.Param))
+	v := ctx.JSSrc().Get("value").String()
+	browsing := b.fitKey != "" && b.fitKey != "Enter" && e.Get("timeStamp").Float()-b.fitKeyAt < browseWindow
+	if v == "" || browsing {
+		ctx.PreventUpdate()
+		return
 	}
+	b.fitKey = ""
+	b.S.addFitting(ctx.JSSrc().Get("id").String(), b.Param, v)
 }
 
 // onFitBlur puts the placeholder back on a picker left after browsing.
-func (s *sheet) onFitBlur(ctx app.Context, e app.Event) {
-	defer s.contain("leaving the fitting picker")
+func (b *selectBox) onFitBlur(ctx app.Context, e app.Event) {
+	defer b.S.contain("leaving the fitting picker")
 	ctx.JSSrc().Set("value", "")
-	s.fitKey = ""
+	b.fitKey = ""
 	ctx.PreventUpdate()
 }
 
 // addFitting adds one fitting of kind key to param's list, then shows the
 // picker (element id) with its placeholder and the focus on it.
 func (s *sheet) addFitting(id, p, key string) {
-	s.fitKey = ""
 	s.d.StepFitting(p, key, +1)
 	s.copyNote = ""
 	s.evaluate()

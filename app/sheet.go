@@ -40,8 +40,6 @@ type sheet struct {
 	pending   bool           // a write of the sheet is put off (save)
 	edits     int            // edits so far, for save to see a pause
 	install   bool           // the browser offers to install the site (chrome.go)
-	fitKey    string         // the last key on the closed fitting picker (focus.go)
-	fitKeyAt  float64        // its event's timeStamp, ms
 	mounted   map[*card]bool // the cards on the page (card.OnMount)
 	stale     bool           // cards redrawn alone since the sheet was last drawn (redrawCards)
 	cardsOnly int            // edits drawn by redrawCards
