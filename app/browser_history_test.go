@@ -153,4 +153,14 @@ func importHistory(t *testing.T, b *tab, base string) {
 	if !b.poll(`document.querySelector("#history-1 svg") !== null && document.querySelectorAll("#history-1-table tbody tr").length >= 3`, 10*time.Second) {
 		t.Fatalf("no history of three sheets: %s", b.js(`(document.querySelector("#history-1") || {}).textContent || "none"`))
 	}
+	// The page shows the imported sheets before the store has written
+	// them (IndexedDB is asynchronous); a navigation before then would
+	// lose them, so wait for the store to hold them.
+	b.js(`(() => { window.__kept = -1; const r = indexedDB.open("fieldhead"); r.onsuccess = () => {
+  const poll = () => { const g = r.result.transaction("sheets", "readonly").objectStore("sheets").getAll();
+    g.onsuccess = () => { window.__kept = g.result.filter(x => String(x.link).includes("tag=")).length; if (window.__kept < 3) setTimeout(poll, 100); }; };
+  poll(); }; return ""; })()`)
+	if !b.poll(`window.__kept >= 3`, 10*time.Second) {
+		t.Fatalf("the store holds %s sheets with a pump tag, not the three imported", b.js(`String(window.__kept)`))
+	}
 }
