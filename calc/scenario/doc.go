@@ -128,7 +128,8 @@
 // valve's flow coefficient at its present opening: Cv in US gal/min at
 // 1 psi, Kv in m³/h at 1 bar (IEC 60534-1, ANSI/ISA-75.01.01; Cv = 1.156·Kv),
 // its drop 1 bar·(Q/Kv)²·ρ/ρ0, ρ0 water at 15 °C (IEC 60534-2-1). Units
-// are required; decimals take a point (a comma starts the next component).
+// are required. A comma between two digits is a decimal comma when what
+// follows it up to the next comma holds no ":" (it starts no component).
 //
 // When segments are given they are the friction path of the balance (and a
 // single run l must not be given as well). Losses where the diameter

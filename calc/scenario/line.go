@@ -101,7 +101,10 @@ const componentNameMax = 40
 //     the IEC 60534-2-1 check.
 //
 // "chiller:45kPa@12L/s,coil:3.2m@12L/s,valve:kv40" is a chiller, a coil
-// and a control valve. Numbers take a decimal point; units are required.
+// and a control valve. Units are required. A comma between two digits is a
+// decimal comma, as in every other box ("valve:kv43,2 fl0,9" is Kv 43.2
+// and FL 0.9): no item can start with a digit where a name is expected,
+// since an item is name:spec and the part after such a comma holds no ":".
 // Errors are *calc.FieldError for field "cmp" naming the item.
 func ParseComponents(text string) ([]calc.Component, error) {
 	var out []calc.Component
@@ -109,7 +112,7 @@ func ParseComponents(text string) ([]calc.Component, error) {
 	bad := func(k calc.Kind, r calc.Reason, name, text string) error {
 		return calc.NewFieldError("cmp", k).Typed(name + ":" + text).Because(r)
 	}
-	for _, item := range strings.Split(text, ",") {
+	for _, item := range splitComponents(text) {
 		item = strings.TrimSpace(item)
 		if item == "" {
 			continue
@@ -192,6 +195,24 @@ func ParseComponents(text string) ([]calc.Component, error) {
 		out = append(out, c)
 	}
 	return out, nil
+}
+
+// splitComponents splits a components list at its commas, except a comma
+// between two digits whose following part up to the next comma holds no
+// ":" (no component starts there): that one is a decimal comma, read as a
+// point.
+func splitComponents(text string) []string {
+	parts := strings.Split(text, ",")
+	out := parts[:1]
+	for _, p := range parts[1:] {
+		last := out[len(out)-1]
+		if last != "" && p != "" && isDigit(last[len(last)-1]) && isDigit(p[0]) && !strings.Contains(p, ":") {
+			out[len(out)-1] = last + "." + p
+			continue
+		}
+		out = append(out, p)
+	}
+	return out
 }
 
 // componentValue reads a number and its unit of one of the dimensions

@@ -850,7 +850,7 @@ var reasonWords = [...]func(w wording) string{
 	},
 	calc.ReasonComponentSpec: func(w wording) string {
 		name, spec, _ := strings.Cut(w.fe.Input, ":")
-		return quote(name) + ": " + quote(spec) + " is neither drop@flow (" + w.ratedExample() + ") nor a valve's cv25 or kv40 (decimals take a point: a comma starts the next component)"
+		return quote(name) + ": " + quote(spec) + " is neither drop@flow (" + w.ratedExample() + ") nor a valve's cv25 or kv40"
 	},
 	calc.ReasonValveNumber: func(w wording) string {
 		name, spec, _ := strings.Cut(w.fe.Input, ":")
