@@ -115,6 +115,10 @@ func TestBrowserSurveyMade(t *testing.T) {
 	if !b.poll(`!document.getElementById("survey-pipe").disabled`, 3*time.Second) {
 		t.Fatal("the pipe button stays disabled after segment 1's pipe was picked")
 	}
+	// The status line follows the edits made since the paste.
+	if got := b.text("#survey-text-status"); !strings.HasPrefix(got, "10 segments have no pipe yet") {
+		t.Errorf("status after segment 1's pipe %q", got)
+	}
 	b.js(`document.getElementById("survey-pipe").scrollIntoView({block: "center"}), "ok"`)
 	b.shot("survey-made-768")
 	if err := clickID(b, "survey-pipe"); err != nil {
@@ -122,6 +126,9 @@ func TestBrowserSurveyMade(t *testing.T) {
 	}
 	if !b.poll(`location.search.includes("s11.nps=8") && location.search.includes("s11.mat=steel")`, 5*time.Second) {
 		t.Errorf("link after giving the pipe %q", b.js("location.search"))
+	}
+	if !b.poll(`document.getElementById("survey-text-status").hidden`, 3*time.Second) {
+		t.Errorf("status after giving the pipe %q", b.text("#survey-text-status"))
 	}
 	if made := b.text("#survey-text-made"); made != "Segment 1's pipe given to 10 segments without one." {
 		t.Errorf("made line after the pipe %q", made)

@@ -27,7 +27,7 @@ func (c *survey) Render() (ui app.UI) {
 	pipe := app.Button().Type("button").ID("survey-pipe").Class("act").Hidden(v.Pipe.Text == "")
 	if v.Pipe.Text != "" {
 		pipe = pipe.ID(v.Pipe.ID).Class(v.Pipe.Class).Disabled(v.Pipe.Disabled).Title(v.Pipe.Hint).
-			Aria("describedby", v.ID+"-made").OnClick(c.onPipe)
+			Aria("describedby", v.ID+"-made "+v.ID+"-status").OnClick(c.onPipe)
 	}
 	return app.Details().Class("astext survey").Open(v.Open).Body(
 		app.Summary().Text(v.Title),
@@ -38,6 +38,7 @@ func (c *survey) Render() (ui app.UI) {
 			app.P().ID(v.ID+"-hint").Class("muted").Text(v.Hint)),
 		app.Button().Type("button").ID(v.Button.ID).Class(v.Button.Class).Text(v.Button.Text).OnClick(c.onPaste),
 		app.P().ID(v.ID+"-made").Class("survey-made").Aria("live", "polite").Text(v.Made),
+		app.P().ID(v.ID+"-status").Class("survey-made").Aria("live", "polite").Hidden(v.Status == "").Text(v.Status),
 		pipe.Text(v.Pipe.Text),
 		app.Ul().Class("msg warn survey-notes").Aria("live", "polite").Body(notes...),
 	)

@@ -414,8 +414,9 @@ func (d *Draft) moveEndFittings(from, to int) []string {
 }
 
 // madeLine says what a paste of points points made of a sheet that had
-// segments before it: the segments set and added, which have no pipe yet,
-// and the line-end fittings moved to segment n, the last.
+// segments before it: the segments set and added, and the line-end
+// fittings moved to segment n, the last. What still lacks a pipe is
+// PipeStatus, worked out anew on each edit.
 func (d *Draft) madeLine(points, had, n int, moved []string) string {
 	s := fmt.Sprintf("Made %s from the survey's %d points", plural(n, "segment"), points)
 	kept := min(had, n)
@@ -436,19 +437,32 @@ func (d *Draft) madeLine(points, had, n int, moved []string) string {
 	if len(moved) > 0 {
 		s += fmt.Sprintf(" The line's end fittings (%s) moved from segment %d to segment %d, the last.", strings.Join(moved, ", "), had, n)
 	}
+	return s
+}
+
+// PipeStatus says, while a paste or GivePipe has left its line
+// (SurveyMade), how many segments still have no pipe and what completes
+// them; "" when every segment has one or nothing was pasted. It is worked
+// out from the sheet as it is now, so an edit after the paste shows.
+func (d *Draft) PipeStatus() string {
+	if d.SurveyMade == "" {
+		return ""
+	}
 	without := len(d.WithoutPipe())
 	if !d.complete(1) {
 		without++
 	}
-	if without > 0 {
-		s += " " + plural(without, "segment") + map[bool]string{true: " has", false: " have"}[without == 1] + " no pipe yet"
-		if d.HasPipe(1) {
-			s += ": “Give segment 1's pipe to the others” completes them."
-		} else {
-			s += ": give segment 1 its pipe, then “Give segment 1's pipe to the others”."
-		}
+	if without == 0 {
+		return ""
 	}
-	return s
+	s := plural(without, "segment") + " have no pipe yet"
+	if without == 1 {
+		s = "1 segment has no pipe yet"
+	}
+	if d.HasPipe(1) {
+		return s + ": “Give segment 1's pipe to the others” completes them."
+	}
+	return s + ": give segment 1 its pipe, then “Give segment 1's pipe to the others”."
 }
 
 // plural is "1 segment" or "11 segments".

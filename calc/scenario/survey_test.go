@@ -206,8 +206,9 @@ func TestPasteProfileGivePipe(t *testing.T) {
 		_ = d.Scen.Set(kv[0], kv[1])
 	}
 	d.PasteProfile(survey12())
-	if !strings.HasPrefix(d.SurveyMade, "Made 11 segments from the survey's 12 points, segments 1 to 11 are new. 11 segments have no pipe yet: give segment 1 its pipe") {
-		t.Errorf("made %q", d.SurveyMade)
+	if d.SurveyMade != "Made 11 segments from the survey's 12 points, segments 1 to 11 are new." ||
+		!strings.HasPrefix(d.PipeStatus(), "11 segments have no pipe yet: give segment 1 its pipe") {
+		t.Errorf("made %q, %q", d.SurveyMade, d.PipeStatus())
 	}
 	missing := func() int {
 		n := 0
@@ -227,10 +228,15 @@ func TestPasteProfileGivePipe(t *testing.T) {
 	d.Choose("s1.nps", "8")
 	d.Choose("s1.sch", "40")
 	d.Choose("s1.mat", "steel")
+	// The status follows the edits, not the paste: segment 1 now has its
+	// pipe, so ten lack one and the button completes them.
+	if got := d.PipeStatus(); got != "10 segments have no pipe yet: “Give segment 1's pipe to the others” completes them." {
+		t.Errorf("after segment 1's pipe: %q", got)
+	}
 	d.Type("s5.d", "150mm")
 	done := d.GivePipe()
-	if len(done) != 10 || d.SurveyMade != "Segment 1's pipe given to 10 segments without one." {
-		t.Errorf("gave to %v: %q", done, d.SurveyMade)
+	if len(done) != 10 || d.SurveyMade != "Segment 1's pipe given to 10 segments without one." || d.PipeStatus() != "" {
+		t.Errorf("gave to %v: %q, %q", done, d.SurveyMade, d.PipeStatus())
 	}
 	if n := missing(); n != 0 {
 		t.Errorf("%d missing pipes and walls after GivePipe, want 0", n)

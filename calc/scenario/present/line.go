@@ -371,7 +371,7 @@ func (b *builder) surveyBox() Block {
 		Hint: "Paste two columns from a spreadsheet (tab, semicolon or comma separated). A header row is skipped; length units it names, as in “Chainage (ft)”, are used for their column. " +
 			"Each pair of points becomes a segment: its length the slope length between them, its end the second point's elevation. " +
 			"Segments already here keep their pipe, fittings and components; new ones take the last segment's pipe, and the exit moves to the new last segment.",
-		Text: b.d.Survey, Made: b.d.SurveyMade, Notes: b.d.SurveyNotes, Open: len(b.d.SurveyNotes) > 0 || b.d.SurveyMade != "",
+		Text: b.d.Survey, Made: b.d.SurveyMade, Status: b.d.PipeStatus(), Notes: b.d.SurveyNotes, Open: len(b.d.SurveyNotes) > 0 || b.d.SurveyMade != "",
 		Button: Button{ID: "survey-paste", Text: "Make the segments", Class: "act"}, Pipe: b.givePipe()}}
 }
 

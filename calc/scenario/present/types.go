@@ -92,6 +92,7 @@ type Survey struct {
 	ID, Title, Label, Hint string
 	Text                   string   // the pasted text kept while a row could not be used
 	Made                   string   // what the last paste (or Pipe) made, "" before any
+	Status                 string   // after a paste, the segments still without a pipe, as the sheet is now; "" when none
 	Notes                  []string // what the last paste said: rows not used, segments kept
 	Open                   bool     // drawn open (a paste left notes or made segments)
 	Button                 Button
