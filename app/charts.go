@@ -200,7 +200,12 @@ func historyChart(c *present.Chart, w int) chart.Chart {
 		case present.RoleHistoryPumpEff:
 			eff.Series = append(eff.Series, line(cu, chart.Solid, "history-pump-eff"))
 		case present.RoleHistoryWireEff:
-			eff.Series = append(eff.Series, line(cu, chart.Dashed, "history-wire-eff"))
+			// Wire to water is the pump's efficiency times the motor's,
+			// so its line runs under the pump's: its name goes below it,
+			// clear of the other line.
+			s := line(cu, chart.Dashed, "history-wire-eff")
+			s.TagBelow = true
+			eff.Series = append(eff.Series, s)
 		case present.RoleHistoryEnergy:
 			energy.Series = append(energy.Series, line(cu, chart.Solid, "history-energy"))
 		}
