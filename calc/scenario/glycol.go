@@ -21,7 +21,9 @@ func (e *eval) glycol(liq string) problems {
 	// The share alone gives the mix (and its freezing point); the
 	// temperature is needed for the liquid's properties only.
 	g := e.gather()
-	v, t := g.quantity(share), g.quantity("t")
+	t := g.quantity("t")
+	haveT := !g.failed()
+	v := g.quantity(share)
 	if !e.in.OK(share) {
 		return g.problems()
 	}
@@ -43,7 +45,7 @@ func (e *eval) glycol(liq string) problems {
 		return g.problems()
 	}
 	e.res.Glycol = mix
-	if !e.in.OK("t") || !e.siteKnown() {
+	if !haveT || !e.siteKnown() {
 		return g.problems()
 	}
 	p := e.res.SitePressure

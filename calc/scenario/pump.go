@@ -137,8 +137,11 @@ func (e *eval) pump() problems {
 		e.warnCalc("pump", calc.Warn("q", calc.CautionOperatingUnstable, calc.Fig(op.Q, calc.Flow), calc.Fig(top, calc.Flow)))
 	}
 	e.regionCheck(pr.BEP, op.Q, "q", "pump")
-	pr.SpeedFor = e.speedFor(&g, pr)
-	return g.problems()
+	// Every problem above returned early: the speed for a duty is the
+	// pump's last part, with problems of its own.
+	var ps problems
+	pr.SpeedFor, ps = e.speedFor(pr)
+	return ps
 }
 
 // npsh works out the NPSH available at the pump from the suction side

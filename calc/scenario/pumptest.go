@@ -128,41 +128,40 @@ func (e *eval) regionCheck(b *calc.BEP, q float64, param, topic string) {
 }
 
 // speedFor solves for the speed at which the pumps deliver the flow qsp,
-// or the head hsp, on the line; nil when not asked for or not found (the
-// problem recorded in g).
-func (e *eval) speedFor(g *gather, pr *PumpResult) *SpeedSolution {
+// or the head hsp, on the line; nil when not asked for or not found.
+func (e *eval) speedFor(pr *PumpResult) (*SpeedSolution, problems) {
 	byHead := e.in.Side("spfor") == "h"
 	if (!e.has("qsp") && !e.has("hsp")) || e.bal == nil || e.bal.Unknown != calc.SolvePumpHead {
-		return nil
+		return nil, nil
 	}
+	g := e.gather()
 	var q float64
 	if byHead {
 		h := g.quantity("hsp")
-		if !e.in.OK("hsp") {
-			return nil
+		if g.failed() {
+			return nil, g.problems()
 		}
 		var err error
 		if q, err = calc.FlowForHead(*e.bal, h, pr.Curve.MaxFlow()); err != nil {
 			g.failErr("hsp", err)
-			return nil
+			return nil, g.problems()
 		}
 	} else {
-		q = g.quantity("qsp")
-		if !e.in.OK("qsp") {
-			return nil
+		if q = g.quantity("qsp"); g.failed() {
+			return nil, g.problems()
 		}
 	}
 	param := map[bool]string{false: "qsp", true: "hsp"}[byHead]
 	sys, err := calc.SystemCurve(*e.bal, []float64{q})
 	if err != nil || len(sys) != 1 {
 		g.failErr(param, err)
-		return nil
+		return nil, g.problems()
 	}
 	h := sys[0].H
 	r, err := calc.SpeedForDuty(pr.Base, pr.Count, pr.Parallel, q, h)
 	if err != nil {
 		g.failAt(param, err)
-		return nil
+		return nil, g.problems()
 	}
 	c, err := pr.Base.AtSpeed(r)
 	if err == nil && pr.Count > 1 {
@@ -170,12 +169,12 @@ func (e *eval) speedFor(g *gather, pr *PumpResult) *SpeedSolution {
 	}
 	if err != nil {
 		g.failAt(param, err)
-		return nil
+		return nil, g.problems()
 	}
 	if r > 1 {
 		e.warnCalc("pump", calc.Warn(param, calc.CautionDutyOverspeed, calc.Num(r)))
 	}
-	return &SpeedSolution{Q: q, H: h, Ratio: r, Curve: c, ByHead: byHead}
+	return &SpeedSolution{Q: q, H: h, Ratio: r, Curve: c, ByHead: byHead}, nil
 }
 
 // energy works out the energy per volume pumped: from the field check's

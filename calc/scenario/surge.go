@@ -169,14 +169,16 @@ func (e *eval) surgePipes(g *gather, run *RunResult, line *calc.Line, c float64)
 		g.fail()
 		return nil
 	}
-	wall, typedWall := 0.0, false
-	if e.has("wall") {
-		wall, typedWall = g.quantity("wall"), e.in.OK("wall")
+	// typed is an optional figure typed for every pipe, and whether it
+	// can be used.
+	typed := func(param string) (float64, bool) {
+		if !e.has(param) {
+			return 0, false
+		}
+		return g.quantity(param), e.in.OK(param)
 	}
-	mod, typedMod := 0.0, false
-	if e.has("epipe") {
-		mod, typedMod = g.quantity("epipe"), e.in.OK("epipe")
-	}
+	wall, typedWall := typed("wall")
+	mod, typedMod := typed("epipe")
 	var out []SurgePipe
 	for _, sp := range specs {
 		p := SurgePipe{SurgePipe: calc.SurgePipe{Length: sp.length, Diameter: sp.d, Restraint: c}}
