@@ -64,9 +64,11 @@ func Evaluate(in Inputs) Result {
 	e.report(ps)
 	res.RunView, ps = e.runView(line)
 	e.report(ps)
-	e.report(e.pump())
+	res.Pump, ps = e.pump()
+	e.report(ps)
 	e.report(e.npsh(line))
-	e.report(e.field())
+	res.Field, ps = e.field()
+	e.report(ps)
 	if res.Field != nil {
 		res.FieldBands, ps = e.bands(*res.Field)
 		e.report(ps)

@@ -36,16 +36,17 @@ type PumpResult struct {
 }
 
 // pump reads the data sheet, speed and arrangement, then finds the
-// operating point on the balance's line.
-func (e *eval) pump() problems {
+// operating point on the balance's line. The pump stands without an
+// operating point when the line's part cannot be worked out.
+func (e *eval) pump() (*PumpResult, problems) {
 	if !e.has("pq") && !e.has("ph") {
-		return nil
+		return nil, nil
 	}
 	pr := &PumpResult{Speed: 1, Count: 1}
 	g := e.gather()
 	qs, hs := g.list("pq"), g.list("ph")
 	if g.failed() {
-		return g.problems()
+		return nil, g.problems()
 	}
 	pts := make([]calc.PumpPoint, len(qs))
 	for i := range qs {
@@ -72,7 +73,7 @@ func (e *eval) pump() problems {
 	base, err := calc.FitPump(pts)
 	if err != nil {
 		g.failErr("pq", err)
-		return g.problems()
+		return nil, g.problems()
 	}
 	pr.Base = base
 	if _, top, drooping := base.Unstable(); drooping {
@@ -86,16 +87,16 @@ func (e *eval) pump() problems {
 	}
 	pr.Speed = e.speed(&g)
 	if g.failed() {
-		return g.problems()
+		return nil, g.problems()
 	}
 	single, err := base.AtSpeed(pr.Speed)
 	if err != nil {
 		g.failErr("spd", err)
-		return g.problems()
+		return nil, g.problems()
 	}
 	pr.Single, pr.Curve = single, single
 	if e.in.Bad("pumps") {
-		return nil // Read reported it
+		return nil, nil // Read reported it
 	}
 	switch a := e.in.Choice("pumps"); a {
 	case "", "1":
@@ -104,33 +105,32 @@ func (e *eval) pump() problems {
 		c, err := single.Combine(pr.Count, pr.Parallel)
 		if err != nil {
 			g.failErr("pumps", err)
-			return g.problems()
+			return nil, g.problems()
 		}
 		pr.Curve = c
 	}
-	e.res.Pump = pr
 	e.bep(pr)
 	b := e.bal
 	if b == nil {
-		return nil // the balance's own errors say what is missing
+		return pr, nil // the balance's own errors say what is missing
 	}
 	if b.Unknown != calc.SolvePumpHead {
 		e.warnCalc("pump", calc.Warn("solve", calc.CautionOperatingNeedsHp))
-		return nil
+		return pr, nil
 	}
 	if e.drawsCurves() {
 		qmax := math.Max(pr.Curve.MaxFlow(), b.Q)
 		sys, err := calc.SystemCurve(*b, calc.Flows(qmax, 41))
 		if err != nil {
 			g.failErr("q", err)
-			return g.problems()
+			return pr, g.problems()
 		}
 		pr.System = sys
 	}
 	op, err := calc.OperatingPoint(pr.Curve, *b)
 	if err != nil {
 		g.failErr("pq", err)
-		return g.problems()
+		return pr, g.problems()
 	}
 	pr.Operating = &op
 	if _, top, drooping := pr.Curve.Unstable(); drooping && op.Q <= top {
@@ -141,7 +141,7 @@ func (e *eval) pump() problems {
 	// pump's last part, with problems of its own.
 	var ps problems
 	pr.SpeedFor, ps = e.speedFor(pr)
-	return ps
+	return pr, ps
 }
 
 // npsh works out the NPSH available at the pump from the suction side
@@ -288,12 +288,12 @@ func (e *eval) pumpAfter(segments int) int {
 // field works out the pump's performance from gauge readings (Evaluate
 // then adds its bands and acceptance). The motor efficiency feeds only the
 // pump-alone figures: in error, the rest of the check still stands.
-func (e *eval) field() problems {
+func (e *eval) field() (*calc.FieldCheck, problems) {
 	if !e.has("qm") && !e.has("ps") && !e.has("pd") {
-		return nil
+		return nil, nil
 	}
 	if e.res.Fluid == nil {
-		return nil
+		return nil, nil
 	}
 	g := e.gather()
 	r := calc.FieldReadings{Ps: e.gaugeReading(&g, "ps"), Pd: e.gaugeReading(&g, "pd"),
@@ -310,7 +310,7 @@ func (e *eval) field() problems {
 		}
 	}
 	if g.failed() {
-		return g.problems()
+		return nil, g.problems()
 	}
 	var curve *calc.PumpCurve
 	if e.res.Pump != nil {
@@ -319,16 +319,15 @@ func (e *eval) field() problems {
 	fc, err := calc.CheckPump(*e.res.Fluid, r, curve)
 	if err != nil {
 		g.failErr("qm", err)
-		return g.problems()
+		return nil, g.problems()
 	}
-	e.res.Field = &fc
 	for _, w := range fc.Warnings {
 		e.warnCalc("field", w)
 	}
 	if e.res.Pump != nil {
 		e.regionCheck(e.res.Pump.SingleBEP, r.Q, "qm", "field")
 	}
-	return nil
+	return &fc, nil
 }
 
 // gaugeReading is a gauge's reading as a gauge pressure, Pa: an absolute
