@@ -21,36 +21,39 @@ func (e *eval) wantsBalance() bool {
 
 // balance reads the two points and the heads, solves, and fills
 // Result.Balance (and Result.Run when the run sets the friction).
-func (e *eval) balance(run *RunResult, line *calc.Line) {
+func (e *eval) balance(run *RunResult, line *calc.Line) problems {
+	g := e.gather()
 	if e.isLoop() {
 		if !e.siteKnown() || e.res.Fluid == nil || e.has("l") && run == nil || e.in.Segments > 0 && line == nil {
-			return // their own errors say why
+			return nil // their own errors say why
 		}
-		if b, ok := e.loopBalance(run, line); ok {
-			e.solveBalance(b, run)
+		b := e.loopBalance(&g, run, line)
+		if g.failed() {
+			return g.problems()
 		}
-		return
+		e.solveBalance(&g, b, run)
+		return g.problems()
 	}
 	solve := calc.SolvePumpHead
 	if e.has("solve") {
 		u, err := calc.ParseUnknown(e.in.Choice("solve"))
 		if err != nil {
-			e.failErr("solve", err)
-			return
+			g.failErr("solve", err)
+			return g.problems()
 		}
 		solve = u
 	}
 	if !e.siteKnown() {
-		return // the site's own error says why
+		return nil // the site's own error says why
 	}
 	if e.res.Fluid == nil {
-		return // the liquid's own error says why
+		return nil // the liquid's own error says why
 	}
 	if e.has("l") && run == nil {
-		return // the run's errors say why
+		return nil // the run's errors say why
 	}
 	if e.in.Segments > 0 && line == nil {
-		return // the segments' errors say why
+		return nil // the segments' errors say why
 	}
 	b := calc.Balance{Fluid: *e.res.Fluid, SitePressure: e.res.SitePressure, Unknown: solve}
 	switch e.in.Choice("alpha") {
@@ -61,35 +64,30 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 	case "pl":
 		b.Alpha = calc.AlphaProfile
 	default:
-		return // Read reported it
+		return nil // Read reported it
 	}
-	ok := true
 	need := func(param string, unknown calc.Unknown) float64 {
 		if solve == unknown {
 			return 0
 		}
-		v, good := e.quantity(param)
-		ok = ok && good
-		return v
+		return g.quantity(param)
 	}
-	b.In.P = e.pressure("p1", calc.SolveP1, solve, &ok)
-	b.Out.P = e.pressure("p2", calc.SolveP2, solve, &ok)
+	b.In.P = e.pressure(&g, "p1", calc.SolveP1, solve)
+	b.Out.P = e.pressure(&g, "p2", calc.SolveP2, solve)
 	b.In.Z = need("z1", calc.SolveZ1)
 	b.Out.Z = need("z2", calc.SolveZ2)
 	if solve != calc.SolveFlow {
-		q, good := e.flow()
-		ok = ok && good
-		b.Q = q
+		b.Q = e.flow(&g)
 	}
-	e.point("1", &b.In, &ok)
-	e.point("2", &b.Out, &ok)
-	b.PumpHead = e.optionalHead("hp", calc.SolvePumpHead, solve, &ok)
-	b.TurbineHead = e.optionalHead("ht", calc.SolveTurbineHead, solve, &ok)
+	e.point(&g, "1", &b.In)
+	e.point(&g, "2", &b.Out)
+	b.PumpHead = e.optionalHead(&g, "hp", calc.SolvePumpHead, solve)
+	b.TurbineHead = e.optionalHead(&g, "ht", calc.SolveTurbineHead, solve)
 	switch {
 	case line != nil:
 		if solve == calc.SolveFrictionHead {
-			e.bad("solve", calc.Inconsistent).With("hf").Because(calc.ReasonHfFromSegments)
-			return
+			g.bad("solve", calc.Inconsistent).With("hf").Because(calc.ReasonHfFromSegments)
+			return g.problems()
 		}
 		b.Line = line
 		b.PumpAfter = 0
@@ -97,36 +95,37 @@ func (e *eval) balance(run *RunResult, line *calc.Line) {
 			b.PumpAfter = 1
 		}
 		if e.has("pafter") {
-			n, ok := e.quantity("pafter")
+			v, ok := e.in.Value("pafter")
 			if !ok {
-				return // Read reported it
+				return g.problems() // Read reported it
 			}
-			b.PumpAfter = int(n)
+			b.PumpAfter = int(v.SI)
 		}
 	case run != nil:
 		if solve == calc.SolveFrictionHead {
-			e.bad("solve", calc.Inconsistent).With("hf").Because(calc.ReasonHfFromRun)
-			return
+			g.bad("solve", calc.Inconsistent).With("hf").Because(calc.ReasonHfFromRun)
+			return g.problems()
 		}
 		spec := e.runSpec
 		b.Run = &spec
 	default:
 		b.FrictionHead = need("hf", calc.SolveFrictionHead)
 	}
-	if !ok {
-		return
+	if g.failed() {
+		return g.problems()
 	}
-	e.solveBalance(b, run)
+	e.solveBalance(&g, b, run)
+	return g.problems()
 }
 
 // solveBalance solves b and fills Result.Balance (and Result.Run when the
 // run sets the friction).
-func (e *eval) solveBalance(b calc.Balance, run *RunResult) {
+func (e *eval) solveBalance(g *gather, b calc.Balance, run *RunResult) {
 	solve := b.Unknown
 	e.bal = &b
 	br, err := b.Solve()
 	if err != nil {
-		e.failErr(solve.String(), err)
+		g.failErr(solve.String(), err)
 		return
 	}
 	e.res.Balance = &br
@@ -149,13 +148,12 @@ func (e *eval) solveBalance(b calc.Balance, run *RunResult) {
 
 // pressure is p1 or p2 as absolute Pa: gauge or absolute as Read settled
 // it, a gauge pressure on the site pressure.
-func (e *eval) pressure(param string, unknown, solve calc.Unknown, ok *bool) float64 {
+func (e *eval) pressure(g *gather, param string, unknown, solve calc.Unknown) float64 {
 	if solve == unknown {
 		return 0
 	}
-	p, good := e.quantity(param)
-	if !good {
-		*ok = false
+	p := g.quantity(param)
+	if !e.in.OK(param) {
 		return 0
 	}
 	if e.in.vals[param].Abs {
@@ -166,24 +164,18 @@ func (e *eval) pressure(param string, unknown, solve calc.Unknown, ok *bool) flo
 
 // point reads the velocity or the diameter of point n, whichever side of
 // its group the inputs use.
-func (e *eval) point(n string, p *calc.Point, ok *bool) {
+func (e *eval) point(g *gather, n string, p *calc.Point) {
 	if e.in.Side("pt"+n) == "d" {
-		d, good := e.quantity("d" + n)
-		*ok = *ok && good
-		p.D = d
+		p.D = g.quantity("d" + n)
 		return
 	}
-	v, good := e.quantity("v" + n)
-	*ok = *ok && good
-	p.V = v
+	p.V = g.quantity("v" + n)
 }
 
 // optionalHead reads hp or ht; absent means no such machine.
-func (e *eval) optionalHead(param string, unknown, solve calc.Unknown, ok *bool) float64 {
+func (e *eval) optionalHead(g *gather, param string, unknown, solve calc.Unknown) float64 {
 	if solve == unknown {
 		return 0
 	}
-	v, good := e.optional(param)
-	*ok = *ok && good
-	return v
+	return g.optional(param)
 }

@@ -4,13 +4,13 @@ import "fieldhead/calc"
 
 // convert reads cv as a pressure (any unit, water columns included) or as a
 // head of the liquid (a length), and shows it every way.
-func (e *eval) convert() {
+func (e *eval) convert() *ConvertResult {
 	v, ok := e.in.Value("cv")
 	if !ok {
-		return
+		return nil
 	}
 	if !e.siteKnown() {
-		return // the site's own error says why
+		return nil // the site's own error says why
 	}
 	var gauge, abs, head float64
 	p := v.SI
@@ -21,7 +21,7 @@ func (e *eval) convert() {
 	fl := e.res.Fluid
 	if fl == nil {
 		if isHead {
-			return // a head needs the liquid: t's own message says why
+			return nil // a head needs the liquid: t's own message says why
 		}
 	}
 	site := e.res.SitePressure
@@ -65,8 +65,8 @@ func (e *eval) convert() {
 	row("conventional water column", "mH2O", gauge)
 	row("conventional water column", "ftH2O", gauge)
 	row("conventional water column", "inH2O", gauge)
-	e.res.Convert = cr
 	if abs <= 0 {
 		e.warnCalc("convert", calc.Warn("cv", calc.CautionConvertBelowZero))
 	}
+	return cr
 }

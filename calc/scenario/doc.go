@@ -309,4 +309,9 @@
 //
 // Every parameter is optional in the link; a computation that needs a
 // missing one reports it by name ("t: enter the liquid temperature").
+//
+// Evaluate runs one evaluator per part of the result. Each reads its
+// inputs through a gather (gather.go), which keeps what is missing or in
+// error, and returns its result with the problems it found; Evaluate adds
+// them to Result.Errors in one place, the first for a parameter kept.
 package scenario

@@ -31,44 +31,62 @@ func Evaluate(in Inputs) Result {
 		res.Errors[k] = fe
 	}
 	e := &eval{in: &res.Inputs, us: in.US, res: &res}
-	e.site()
-	e.liquid()
-	e.heatFromLoad()
-	run := e.run()
-	line := e.line()
+	// Each evaluator returns the problems it found; they are added here,
+	// in order, so the first recorded for a parameter is the one kept.
+	var ps problems
+	res.SitePressure, res.SiteFrom, ps = e.site()
+	e.report(ps)
+	e.report(e.liquid())
+	if e.flowFromLoad() {
+		res.Heat, ps = e.heatFromLoad()
+		e.report(ps)
+	}
+	run, ps := e.run()
+	e.report(ps)
+	line, ps := e.line()
+	e.report(ps)
 	if e.wantsBalance() && !e.in.Bad("loop") {
-		e.balance(run, line)
+		e.report(e.balance(run, line))
 	}
 	if res.Line == nil && line != nil && res.Fluid != nil && e.hasFlow() {
 		// The line's own losses still show when the balance cannot be solved.
-		if q, ok := e.flow(); ok {
-			if lr, err := line.Evaluate(*res.Fluid, q); err == nil {
-				res.Line = &lr
-			} else {
-				e.failErr("q", err)
-			}
-		}
+		res.Line, ps = e.lineAlone(line)
+		e.report(ps)
 	}
 	if res.Run == nil && run != nil && res.Fluid != nil && e.hasFlow() {
-		if q, ok := e.flow(); ok {
-			e.evalRun(run, q)
-		}
+		e.report(e.runAlone(run))
 	}
-	e.heatOfFlow()
-	e.valves()
-	e.runView(line)
-	e.pump()
-	e.npsh(line)
-	e.field()
-	e.test()
-	e.guarantee()
+	if !e.flowFromLoad() {
+		res.Heat, ps = e.heatOfFlow()
+		e.report(ps)
+	}
+	res.Valves, ps = e.valves()
+	e.report(ps)
+	res.RunView, ps = e.runView(line)
+	e.report(ps)
+	res.Pump, ps = e.pump()
+	e.report(ps)
+	e.report(e.npsh(line))
+	res.Field, ps = e.field()
+	e.report(ps)
+	if res.Field != nil {
+		res.FieldBands, ps = e.bands(*res.Field)
+		e.report(ps)
+		res.Acceptance = e.accept(*res.Field)
+	}
+	res.Test, ps = e.test()
+	e.report(ps)
+	res.Guarantee, ps = e.guarantee()
+	e.report(ps)
 	if e.res.Fluid != nil {
-		e.energy()
+		res.Energy, ps = e.energy()
+		e.report(ps)
 	}
-	e.turbine()
-	e.surge(run, line)
+	e.report(e.turbine())
+	res.Surge, ps = e.surge(run, line)
+	e.report(ps)
 	if e.has("cv") {
-		e.convert()
+		res.Convert = e.convert()
 	}
 	// The table of what each part reads has the last word: a part that
 	// reads an input in error is left out, whatever path computed it
@@ -114,26 +132,22 @@ func (ps problems) record(fe *calc.FieldError) {
 	}
 }
 
-// failAt records err under param whatever field calc named: used where one
-// calc field ("fit", "d") stands for several parameters ("s2.fit"). An
-// error that is not a *calc.FieldError (none is expected) keeps its Go
-// text as a last resort.
-func (ps problems) failAt(param string, err error) {
+// failAt records err under param (see problemAt).
+func (ps problems) failAt(param string, err error) { ps.record(problemAt(param, err)) }
+
+// problemAt is err as a problem of param whatever field calc named: used
+// where one calc field ("fit", "d") stands for several parameters
+// ("s2.fit"). An error that is not a *calc.FieldError (none is expected)
+// keeps its Go text as a last resort.
+func problemAt(param string, err error) *calc.FieldError {
 	var fe *calc.FieldError
 	if errors.As(err, &fe) {
 		c := *fe
 		c.Field, c.Segment = param, 0
-		ps.record(&c)
-		return
+		return &c
 	}
-	ps.record(&calc.FieldError{Field: param, Kind: calc.KindOther, Msg: err.Error()})
+	return &calc.FieldError{Field: param, Kind: calc.KindOther, Msg: err.Error()}
 }
-
-func (e *eval) bad(param string, k calc.Kind) *calc.FieldError {
-	return problems(e.res.Errors).bad(param, k)
-}
-func (e *eval) record(fe *calc.FieldError)     { problems(e.res.Errors).record(fe) }
-func (e *eval) failAt(param string, err error) { problems(e.res.Errors).failAt(param, err) }
 
 // atItem marks err as about the 1-based item i of a list.
 func atItem(err error, i int) error {
@@ -144,14 +158,13 @@ func atItem(err error, i int) error {
 	return err
 }
 
-// failErr records an error under the parameter it concerns: the one a
+// problemOf is err as a problem of the parameter it concerns: the one a
 // *calc.FieldError names when that is a parameter of the link (a
 // segment's field under that segment's parameter), else param.
-func (e *eval) failErr(param string, err error) {
+func problemOf(param string, err error) *calc.FieldError {
 	var fe *calc.FieldError
 	if !errors.As(err, &fe) {
-		e.failAt(param, err)
-		return
+		return problemAt(param, err)
 	}
 	c := *fe
 	c.Field, c.Segment = param, 0
@@ -160,7 +173,7 @@ func (e *eval) failErr(param string, err error) {
 	} else if _, ok := known[fe.Field]; ok && fe.Segment == 0 {
 		c.Field = fe.Field
 	}
-	e.record(&c)
+	return &c
 }
 
 // linkName is the link's name of a field calc names in a run ("length"
@@ -187,25 +200,6 @@ func (e *eval) warnCalc(topic string, w calc.Warning) {
 	e.res.Warnings = append(e.res.Warnings, Warning{Param: p, Topic: topic, Segment: w.Segment, Code: w.Code, Text: w.Text, Figures: w.Figures})
 }
 
-// quantity is a needed parameter's value in SI (or a plain number's).
-// An absent one is an error that asks for it; a Bad one's problem is
-// already recorded.
-func (e *eval) quantity(param string) (float64, bool) {
-	v, ok := e.in.vals[param]
-	if !ok {
-		e.bad(param, calc.Missing)
-		return 0, false
-	}
-	return v.SI, !v.Bad
-}
-
-// optional is an optional parameter's value: 0 and true when absent,
-// false when Bad.
-func (e *eval) optional(param string) (float64, bool) {
-	v, ok := e.in.vals[param]
-	return v.SI, !ok || !v.Bad
-}
-
 // missingMsg says what to enter for a needed parameter that is absent.
 func missingMsg(param string) string {
 	p, _, _ := Lookup(param)
@@ -216,51 +210,51 @@ func missingMsg(param string) string {
 // standard sea level with a warning when neither is given. With the one
 // given in error (or both given) the site pressure stays unknown (0), and
 // so does everything that needs it.
-func (e *eval) site() {
+func (e *eval) site() (float64, SiteSource, problems) {
 	if !e.has("alt") && !e.has("baro") {
-		e.res.SitePressure, e.res.SiteFrom = seaLevel, SiteStandard
 		e.warnCalc("site", calc.Warn("alt", calc.CautionStandardAtmosphere, calc.Fig(seaLevel, calc.Pressure)))
-		return
+		return seaLevel, SiteStandard, nil
 	}
 	side := e.in.Side("site")
 	v, ok := e.in.Value(side)
 	if !ok {
-		return
+		return 0, 0, nil
 	}
 	if side == "baro" {
-		e.res.SitePressure, e.res.SiteFrom = v.SI, SiteBarometer
-		return
+		return v.SI, SiteBarometer, nil
 	}
 	p, err := calc.StandardAtmosphere(v.SI)
 	if err != nil {
-		e.failErr("alt", err) // Read checked the range: not expected
-		return
+		g := e.gather()
+		g.failErr("alt", err) // Read checked the range: not expected
+		return 0, 0, g.problems()
 	}
-	e.res.SitePressure, e.res.SiteFrom = p, SiteAltitude
+	return p, SiteAltitude, nil
 }
 
 // siteKnown reports whether the site pressure is known.
 func (e *eval) siteKnown() bool { return e.res.SitePressure > 0 }
 
 // liquid builds the fluid at its temperature.
-func (e *eval) liquid() {
+func (e *eval) liquid() problems {
 	if e.in.Bad("liq") {
-		return
+		return nil
 	}
+	g := e.gather()
 	switch liq := e.in.Choice("liq"); liq {
 	case "", "water", "seawater":
-		t, ok := e.quantity("t")
-		if !ok {
-			return
+		t := g.quantity("t")
+		if g.failed() {
+			return g.problems()
 		}
-		p, from, ok := e.linePressure()
-		if !ok {
-			return
+		p, from := e.linePressure(&g)
+		if g.failed() {
+			return g.problems()
 		}
 		props := calc.Water
 		if liq == "seawater" {
 			if e.in.Bad("sal") {
-				return // Read reported it
+				return nil // Read reported it
 			}
 			sal := e.salinity()
 			props = func(t, p float64) (calc.Fluid, error) { return calc.SeawaterAt(t, p, sal) }
@@ -273,13 +267,13 @@ func (e *eval) liquid() {
 			if _, lerr := props(t, 1e5); errors.As(lerr, &fe) && fe.Field == "t" {
 				err = lerr
 			}
-			e.failErr("t", err)
-			return
+			g.failErr("t", err)
+			return g.problems()
 		}
 		if p < psat {
 			if from == LiquidTyped {
-				e.bad("pl", calc.BelowLimit).Got(calc.Fig(p, calc.Pressure)).AtLeast(calc.Fig(psat, calc.Pressure)).Because(calc.ReasonBoils, calc.Fig(t, calc.Temperature))
-				return
+				g.bad("pl", calc.BelowLimit).Got(calc.Fig(p, calc.Pressure)).AtLeast(calc.Fig(psat, calc.Pressure)).Because(calc.ReasonBoils, calc.Fig(t, calc.Temperature))
+				return g.problems()
 			}
 			e.warnCalc("liquid", calc.Warn("t", calc.CautionBoilingAtLine, calc.Fig(p, calc.Pressure), calc.Fig(psat, calc.Pressure)))
 			p, from = psat, LiquidSaturation
@@ -293,39 +287,38 @@ func (e *eval) liquid() {
 				if from != LiquidTyped && c.Reason == calc.ReasonBoils {
 					c.Reason = calc.ReasonPointsMean
 				}
-				e.record(&c)
-				return
+				g.record(&c)
+				return g.problems()
 			}
-			e.failErr("t", err)
-			return
+			g.failErr("t", err)
+			return g.problems()
 		}
 		e.res.Fluid, e.res.LiquidFrom = &fl, from
 	case "eg", "pg":
-		e.glycol(liq)
+		return e.glycol(liq)
 	case "custom":
-		rho, ok1 := e.quantity("rho")
-		mu, ok2 := e.quantity("mu")
-		pv, ok3 := e.quantity("pv")
-		if !ok1 || !ok2 || !ok3 {
-			return
+		rho, mu, pv := g.quantity("rho"), g.quantity("mu"), g.quantity("pv")
+		if g.failed() {
+			return g.problems()
 		}
 		fl, err := calc.CustomLiquid(rho, mu, pv)
 		if err != nil {
-			e.failErr("rho", err)
-			return
+			g.failErr("rho", err)
+			return g.problems()
 		}
 		e.res.Fluid, e.res.LiquidFrom = &fl, LiquidTypedProps
 	default:
-		e.bad("liq", calc.UnknownChoice).Typed(liq)
+		g.bad("liq", calc.UnknownChoice).Typed(liq)
 	}
+	return g.problems()
 }
 
 // linePressure is the absolute pressure water's and seawater's properties
 // are taken at: pl when given, else the mean of the points' typed
-// pressures, else the site pressure (doc.go). ok is false when the one it
+// pressures, else the site pressure (doc.go). g fails when the one it
 // needs cannot be used (in error, or a gauge pressure at an unknown site):
 // the properties are never taken at another pressure than the sheet says.
-func (e *eval) linePressure() (float64, LiquidSource, bool) {
+func (e *eval) linePressure(g *gather) (float64, LiquidSource) {
 	site := e.res.SitePressure
 	absolute := func(v Value) (float64, bool) {
 		if v.Abs {
@@ -336,33 +329,40 @@ func (e *eval) linePressure() (float64, LiquidSource, bool) {
 	if e.has("pl") {
 		v, ok := e.in.Value("pl")
 		if !ok {
-			return 0, 0, false
+			g.fail()
+			return 0, 0
 		}
 		p, ok := absolute(v)
 		if !ok {
-			return 0, 0, false
+			g.fail()
+			return 0, 0
 		}
 		if !(p > 0) {
-			e.bad("pl", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
-			return 0, 0, false
+			g.bad("pl", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
+			return 0, 0
 		}
-		return p, LiquidTyped, true
+		return p, LiquidTyped
 	}
 	if e.isLoop() {
 		// A closed loop's level is its static pressure at the connection
 		// of its expansion vessel or pressurisation unit.
 		if !e.has("pexp") {
-			return site, LiquidSite, e.siteKnown()
+			if !e.siteKnown() {
+				g.fail()
+			}
+			return site, LiquidSite
 		}
 		v, ok := e.in.Value("pexp")
 		if !ok {
-			return 0, 0, false
+			g.fail()
+			return 0, 0
 		}
 		p, ok := absolute(v)
 		if !ok || !(p > 0) {
-			return 0, 0, false
+			g.fail()
+			return 0, 0
 		}
-		return p, LiquidLoop, true
+		return p, LiquidLoop
 	}
 	solve := e.in.Choice("solve")
 	sum, n := 0.0, 0
@@ -372,27 +372,54 @@ func (e *eval) linePressure() (float64, LiquidSource, bool) {
 		}
 		v, ok := e.in.Value(pt)
 		if !ok {
-			return 0, 0, false
+			g.fail()
+			return 0, 0
 		}
 		p, ok := absolute(v)
 		if !ok {
-			return 0, 0, false
+			g.fail()
+			return 0, 0
 		}
 		sum += p
 		n++
 	}
 	if n > 0 {
-		return sum / float64(n), LiquidPoints, true
+		return sum / float64(n), LiquidPoints
 	}
-	return site, LiquidSite, e.siteKnown()
+	if !e.siteKnown() {
+		g.fail()
+	}
+	return site, LiquidSite
 }
 
-// evalRun evaluates the pipe run at flow q for the Run view.
-func (e *eval) evalRun(r *RunResult, q float64) {
+// lineAlone evaluates the line alone at the flow, for its own losses to
+// show when the balance cannot be solved.
+func (e *eval) lineAlone(line *calc.Line) (*calc.LineResult, problems) {
+	q, ok := e.knownFlow()
+	if !ok {
+		return nil, nil
+	}
+	lr, err := line.Evaluate(*e.res.Fluid, q)
+	if err != nil {
+		g := e.gather()
+		g.failErr("q", err)
+		return nil, g.problems()
+	}
+	return &lr, nil
+}
+
+// runAlone evaluates the pipe run alone at the flow, for the Run view,
+// when the balance did not.
+func (e *eval) runAlone(r *RunResult) problems {
+	q, ok := e.knownFlow()
+	if !ok {
+		return nil
+	}
 	rr, err := e.runSpec.Evaluate(*e.res.Fluid, q)
 	if err != nil {
-		e.failErr("q", err)
-		return
+		g := e.gather()
+		g.failErr("q", err)
+		return g.problems()
 	}
 	r.RunResult, r.Flow = rr, q
 	e.res.Run = r
@@ -402,6 +429,7 @@ func (e *eval) evalRun(r *RunResult, q float64) {
 		}
 		e.warnCalc("run", w)
 	}
+	return nil
 }
 
 // number reads a plain number (no unit), comma or point decimal.

@@ -26,13 +26,27 @@ func (e *eval) hasFlow() bool {
 // flow is the sheet's flow, m³/s: typed, or the one that carries the load
 // typed. A load that cannot be turned into a flow has its errors recorded
 // under the load, its temperatures or the liquid.
-func (e *eval) flow() (float64, bool) {
+func (e *eval) flow(g *gather) float64 {
 	if !e.flowFromLoad() {
-		return e.quantity("q")
+		return g.quantity("q")
 	}
 	if !e.has("load") {
-		e.bad("load", calc.Missing)
-		return 0, false
+		g.bad("load", calc.Missing)
+		return 0
+	}
+	q, ok := e.knownFlow()
+	if !ok {
+		g.fail()
+	}
+	return q
+}
+
+// knownFlow is the sheet's flow, m³/s, and whether it is known: typed and
+// usable, or worked out from the load.
+func (e *eval) knownFlow() (float64, bool) {
+	if !e.flowFromLoad() {
+		v, ok := e.in.Value("q")
+		return v.SI, ok
 	}
 	if h := e.res.Heat; h != nil && h.FromLoad {
 		return h.Flow, true
@@ -41,9 +55,9 @@ func (e *eval) flow() (float64, bool) {
 }
 
 // carrier is the liquid as a carrier of heat, at the pressure its
-// properties were taken at. ok is false for a liquid of typed properties,
+// properties were taken at. g fails for a liquid of typed properties,
 // whose specific heat the sheet does not hold (recorded on param).
-func (e *eval) carrier(param string) (calc.HeatCarrier, bool) {
+func (e *eval) carrier(g *gather, param string) calc.HeatCarrier {
 	fl := e.res.Fluid
 	c := calc.HeatCarrier{Pressure: fl.Pressure}
 	switch e.in.Choice("liq") {
@@ -53,80 +67,78 @@ func (e *eval) carrier(param string) (calc.HeatCarrier, bool) {
 		c.Liquid, c.Salinity = calc.HeatSeawater, e.salinity()
 	case "eg", "pg":
 		if e.res.Glycol == nil {
-			return c, false
+			g.fail()
+			return c
 		}
 		c.Liquid, c.Glycol, c.Share = calc.HeatGlycol, e.res.Glycol.Glycol, e.res.Glycol.MassFraction
 	default:
-		e.bad(param, calc.Inconsistent).With("liq").Because(calc.ReasonHeatLiquid)
-		return c, false
+		g.bad(param, calc.Inconsistent).With("liq").Because(calc.ReasonHeatLiquid)
 	}
-	return c, true
+	return c
 }
 
 // heatFromLoad works out the flow that carries the load typed (qby=load).
-func (e *eval) heatFromLoad() {
+func (e *eval) heatFromLoad() (*Heat, problems) {
 	if !e.flowFromLoad() || !e.has("load") || e.res.Fluid == nil {
-		return
+		return nil, nil
 	}
-	load, ok1 := e.quantity("load")
-	ts, ok2 := e.quantity("tsup")
-	tr, ok3 := e.quantity("tret")
-	if !ok1 || !ok2 || !ok3 {
-		return
+	g := e.gather()
+	load, ts, tr := g.quantity("load"), g.quantity("tsup"), g.quantity("tret")
+	if g.failed() {
+		return nil, g.problems()
 	}
-	c, ok := e.carrier("load")
-	if !ok {
-		return
+	c := e.carrier(&g, "load")
+	if g.failed() {
+		return nil, g.problems()
 	}
 	hf, err := calc.FlowForLoad(c, load, ts, tr)
 	if err != nil {
-		e.failErr("load", err)
-		return
+		g.failErr("load", err)
+		return nil, g.problems()
 	}
-	e.res.Heat = &Heat{HeatFlow: hf, FromLoad: true}
 	for _, w := range hf.Props.Warnings {
 		e.warnCalc("heat", w)
 	}
+	return &Heat{HeatFlow: hf, FromLoad: true}, nil
 }
 
 // heatOfFlow works out the load the sheet's flow carries between the
 // supply and return temperatures typed: the balance's flow when it solved
 // for it, else the flow typed.
-func (e *eval) heatOfFlow() {
+func (e *eval) heatOfFlow() (*Heat, problems) {
 	if e.flowFromLoad() || !e.has("tsup") && !e.has("tret") || e.res.Fluid == nil {
-		return
+		return nil, nil
 	}
+	g := e.gather()
 	var q float64
 	switch {
 	case e.res.Balance != nil && e.bal != nil && e.bal.Unknown == calc.SolveFlow:
 		q = e.res.Balance.Q
 	case e.has("q"):
-		v, ok := e.quantity("q")
-		if !ok {
-			return
+		q = g.quantity("q")
+		if g.failed() {
+			return nil, g.problems()
 		}
-		q = v
 	default:
-		return
+		return nil, nil
 	}
-	ts, ok1 := e.quantity("tsup")
-	tr, ok2 := e.quantity("tret")
-	if !ok1 || !ok2 {
-		return
+	ts, tr := g.quantity("tsup"), g.quantity("tret")
+	if g.failed() {
+		return nil, g.problems()
 	}
-	c, ok := e.carrier("tsup")
-	if !ok {
-		return
+	c := e.carrier(&g, "tsup")
+	if g.failed() {
+		return nil, g.problems()
 	}
 	hf, err := calc.LoadOfFlow(c, q, ts, tr)
 	if err != nil {
-		e.failErr("tsup", err)
-		return
+		g.failErr("tsup", err)
+		return nil, g.problems()
 	}
-	e.res.Heat = &Heat{HeatFlow: hf}
 	for _, w := range hf.Props.Warnings {
 		e.warnCalc("heat", w)
 	}
+	return &Heat{HeatFlow: hf}, nil
 }
 
 // salinity is the seawater's absolute salinity, kg/kg: sal (g/kg) when

@@ -10,43 +10,39 @@ import (
 )
 
 // line reads the segments s1…sN into a calc.Line, or returns nil when there
-// are none or one is bad (its errors are recorded). z2 is the elevation of
+// are none or one is bad (its problems are returned). z2 is the elevation of
 // point 2, where the last segment ends unless its sN.z says otherwise.
-func (e *eval) line() *calc.Line {
+func (e *eval) line() (*calc.Line, problems) {
 	n := e.in.Segments
 	if n == 0 {
-		return nil
+		return nil, nil
 	}
+	g := e.gather()
 	if e.has("l") {
-		e.bad("l", calc.Inconsistent).With("s1.l").Because(calc.ReasonRunOrSegments)
-		return nil
+		g.bad("l", calc.Inconsistent).With("s1.l").Because(calc.ReasonRunOrSegments)
+		return nil, g.problems()
 	}
 	if e.in.Bad("loop") {
-		return nil // Read reported it: open or closed decides the levels
+		return nil, nil // Read reported it: open or closed decides the levels
 	}
 	ln := &calc.Line{}
-	ok := true
 	// A closed loop ends where it starts; a segment whose end is not
 	// given is level with the one before.
 	loop := e.isLoop()
-	prevZ, good := 0.0, true
+	prevZ := 0.0
 	if loop {
-		prevZ, good = e.loopStartZ()
-		ok = ok && good
+		prevZ = e.loopStartZ(&g)
 	}
 	startZ := prevZ
 	for i := 1; i <= n; i++ {
 		pre := fmt.Sprintf("s%d.", i)
 		if !e.has(pre + "l") {
-			e.bad(pre+"l", calc.Missing).Because(calc.ReasonSegmentGap)
-			ok = false
+			g.bad(pre+"l", calc.Missing).Because(calc.ReasonSegmentGap)
 			continue
 		}
-		spec, _, good := e.readRun(pre)
+		spec, _ := e.readRun(&g, pre)
 		seg := calc.Segment{Run: spec}
-		cmp, g := e.optionalValue(pre + "cmp")
-		good = good && g
-		seg.Components = cmp.Components
+		seg.Components = g.value(pre + "cmp").Components
 		zp := pre + "z"
 		switch {
 		case loop && i == n:
@@ -57,30 +53,24 @@ func (e *eval) line() *calc.Line {
 		case loop && !e.has(zp):
 			seg.EndZ = prevZ
 		case e.has(zp):
-			z, g := e.quantity(zp)
-			good = good && g
-			seg.EndZ = z
+			seg.EndZ = g.quantity(zp)
 		case i == n && e.has("z2"):
-			z, g := e.quantity("z2")
-			good = good && g
-			seg.EndZ = z
+			seg.EndZ = g.quantity("z2")
 		default:
-			e.bad(zp, calc.Missing)
-			good = false
+			g.bad(zp, calc.Missing)
 		}
-		ok = ok && good
 		prevZ = seg.EndZ
 		ln.Segments = append(ln.Segments, seg)
 	}
-	if !ok {
-		return nil
+	if g.failed() {
+		return nil, g.problems()
 	}
 	if !loop && e.has("z2") && e.has(SegmentParam(n, "z")) {
-		if z2, good := e.quantity("z2"); good && math.Abs(z2-ln.Segments[n-1].EndZ) > 0.01 {
-			e.warnCalc("line", calc.Warn(SegmentParam(n, "z"), calc.CautionLastSegmentEnd, calc.Fig(ln.Segments[n-1].EndZ, calc.Length), calc.Fig(z2, calc.Length)))
+		if z2, ok := e.in.Value("z2"); ok && math.Abs(z2.SI-ln.Segments[n-1].EndZ) > 0.01 {
+			e.warnCalc("line", calc.Warn(SegmentParam(n, "z"), calc.CautionLastSegmentEnd, calc.Fig(ln.Segments[n-1].EndZ, calc.Length), calc.Fig(z2.SI, calc.Length)))
 		}
 	}
-	return ln
+	return ln, nil
 }
 
 // componentNameMax bounds a component's name, in characters.

@@ -21,40 +21,42 @@ func (in *Inputs) IsLoop() bool { return in.Choice("loop") == "1" }
 
 // loopStartZ is the elevation of the loop's start and end, the pump's
 // inlet: the pump centreline when given, else 0 (the loop's own datum).
-func (e *eval) loopStartZ() (float64, bool) {
+func (e *eval) loopStartZ(g *gather) float64 {
 	if !e.has("zp") {
-		return 0, true
+		return 0
 	}
-	return e.quantity("zp")
+	return g.quantity("zp")
 }
 
 // loopStatic is the loop's static pressure, absolute, at its connection
-// and that connection's elevation. ok is false when either is missing
+// and that connection's elevation. g fails when either is missing
 // (recorded) or in error.
-func (e *eval) loopStatic() (p, z float64, ok bool) {
-	v, good := e.quantity("pexp")
-	zc, goodZ := e.quantity("zexp")
-	if !good || !goodZ {
-		return 0, 0, false
+func (e *eval) loopStatic(g *gather) (p, z float64) {
+	v, zc := g.quantity("pexp"), g.quantity("zexp")
+	if !e.in.OK("pexp") || !e.in.OK("zexp") {
+		return 0, 0
 	}
 	p = v
 	if !e.in.vals["pexp"].Abs {
 		if !e.siteKnown() {
-			return 0, 0, false
+			g.fail()
+			return 0, 0
 		}
 		p += e.res.SitePressure
 	}
 	if !(p > 0) {
-		e.bad("pexp", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
-		return 0, 0, false
+		g.bad("pexp", calc.NotPositive).Got(calc.Fig(p, calc.Pressure)).Because(calc.ReasonAbsolutePressure)
+		return 0, 0
 	}
-	return p, zc, true
+	return p, zc
 }
 
 // loopBalance is the balance of a closed loop: both points at the pump's
 // inlet, at rest relative to each other, the friction from the line or
 // the single run. It solves for the pump head or, given one, the flow.
-func (e *eval) loopBalance(run *RunResult, line *calc.Line) (calc.Balance, bool) {
+// It reads every input it needs whatever g holds; the balance is of no
+// use once g has failed.
+func (e *eval) loopBalance(g *gather, run *RunResult, line *calc.Line) calc.Balance {
 	solve := calc.SolvePumpHead
 	switch e.in.Choice("solve") {
 	case "", "hp":
@@ -62,9 +64,10 @@ func (e *eval) loopBalance(run *RunResult, line *calc.Line) (calc.Balance, bool)
 		solve = calc.SolveFlow
 	default:
 		if !e.in.Bad("solve") {
-			e.bad("solve", calc.Inconsistent).With("loop").Because(calc.ReasonLoopUnknown)
+			g.bad("solve", calc.Inconsistent).With("loop").Because(calc.ReasonLoopUnknown)
 		}
-		return calc.Balance{}, false
+		g.fail()
+		return calc.Balance{}
 	}
 	b := calc.Balance{Fluid: *e.res.Fluid, SitePressure: e.res.SitePressure, Unknown: solve, Alpha: calc.AlphaFromRegime}
 	switch e.in.Choice("alpha") {
@@ -74,54 +77,42 @@ func (e *eval) loopBalance(run *RunResult, line *calc.Line) (calc.Balance, bool)
 	case "pl":
 		b.Alpha = calc.AlphaProfile
 	default:
-		return b, false
+		g.fail() // Read reported it
+		return b
 	}
-	ok := true
-	z, good := e.loopStartZ()
-	ok = ok && good
+	z := e.loopStartZ(g)
 	// The pressure at the pump's inlet: the loop's static pressure carried
 	// by elevation from its connection; without it, the site pressure
 	// stands in (gauge pressures then read from the pump's inlet), which
 	// leaves the head unchanged.
 	p := e.res.SitePressure
 	if e.has("pexp") || e.has("zexp") {
-		pc, zc, good := e.loopStatic()
-		ok = ok && good
+		pc, zc := e.loopStatic(g)
 		p = pc + e.res.Fluid.Density*calc.StandardGravity*(zc-z)
 	}
 	b.In = calc.Point{P: p, Z: z}
 	b.Out = calc.Point{P: p, Z: z}
 	if solve == calc.SolveFlow {
-		v, good := e.quantity("hp")
-		ok = ok && good
-		b.PumpHead = v
+		b.PumpHead = g.quantity("hp")
 	} else {
-		v, good := e.flow()
-		ok = ok && good
-		b.Q = v
+		b.Q = e.flow(g)
 	}
-	v, good := e.optional("ht")
-	ok = ok && good
-	b.TurbineHead = v
+	b.TurbineHead = g.optional("ht")
 	switch {
 	case line != nil:
 		b.Line = line
 		if e.has("pafter") {
-			n, good := e.quantity("pafter")
-			ok = ok && good
-			b.PumpAfter = int(n)
+			b.PumpAfter = int(g.quantity("pafter"))
 		}
 	case run != nil:
 		spec := e.runSpec
 		b.Run = &spec
 	case e.in.Side("fric") == "hf" && e.has("hf"):
-		v, good := e.quantity("hf")
-		ok = ok && good
-		b.FrictionHead = v
+		b.FrictionHead = g.quantity("hf")
 	default:
 		// A loop's friction comes from its pipe: ask for the run.
-		e.quantity("l")
-		ok = false
+		g.quantity("l")
+		g.fail()
 	}
-	return b, ok
+	return b
 }

@@ -36,16 +36,17 @@ type PumpResult struct {
 }
 
 // pump reads the data sheet, speed and arrangement, then finds the
-// operating point on the balance's line.
-func (e *eval) pump() {
+// operating point on the balance's line. The pump stands without an
+// operating point when the line's part cannot be worked out.
+func (e *eval) pump() (*PumpResult, problems) {
 	if !e.has("pq") && !e.has("ph") {
-		return
+		return nil, nil
 	}
 	pr := &PumpResult{Speed: 1, Count: 1}
-	qs, ok1 := e.list("pq")
-	hs, ok2 := e.list("ph")
-	if !ok1 || !ok2 {
-		return
+	g := e.gather()
+	qs, hs := g.list("pq"), g.list("ph")
+	if g.failed() {
+		return nil, g.problems()
 	}
 	pts := make([]calc.PumpPoint, len(qs))
 	for i := range qs {
@@ -71,8 +72,8 @@ func (e *eval) pump() {
 	}
 	base, err := calc.FitPump(pts)
 	if err != nil {
-		e.failErr("pq", err)
-		return
+		g.failErr("pq", err)
+		return nil, g.problems()
 	}
 	pr.Base = base
 	if _, top, drooping := base.Unstable(); drooping {
@@ -84,19 +85,18 @@ func (e *eval) pump() {
 	}{{"nrat", &pr.Rated}, {"fmains", &pr.Mains}} {
 		*ref.v = e.in.Num(ref.name) // 0 when absent or Bad
 	}
-	spd, ok := e.speed()
-	if !ok {
-		return
+	pr.Speed = e.speed(&g)
+	if g.failed() {
+		return nil, g.problems()
 	}
-	pr.Speed = spd
 	single, err := base.AtSpeed(pr.Speed)
 	if err != nil {
-		e.failErr("spd", err)
-		return
+		g.failErr("spd", err)
+		return nil, g.problems()
 	}
 	pr.Single, pr.Curve = single, single
 	if e.in.Bad("pumps") {
-		return // Read reported it
+		return nil, nil // Read reported it
 	}
 	switch a := e.in.Choice("pumps"); a {
 	case "", "1":
@@ -104,41 +104,44 @@ func (e *eval) pump() {
 		pr.Count, pr.Parallel = int(a[0]-'0'), a[1] == 'p'
 		c, err := single.Combine(pr.Count, pr.Parallel)
 		if err != nil {
-			e.failErr("pumps", err)
-			return
+			g.failErr("pumps", err)
+			return nil, g.problems()
 		}
 		pr.Curve = c
 	}
-	e.res.Pump = pr
 	e.bep(pr)
 	b := e.bal
 	if b == nil {
-		return // the balance's own errors say what is missing
+		return pr, nil // the balance's own errors say what is missing
 	}
 	if b.Unknown != calc.SolvePumpHead {
 		e.warnCalc("pump", calc.Warn("solve", calc.CautionOperatingNeedsHp))
-		return
+		return pr, nil
 	}
 	if e.drawsCurves() {
 		qmax := math.Max(pr.Curve.MaxFlow(), b.Q)
 		sys, err := calc.SystemCurve(*b, calc.Flows(qmax, 41))
 		if err != nil {
-			e.failErr("q", err)
-			return
+			g.failErr("q", err)
+			return pr, g.problems()
 		}
 		pr.System = sys
 	}
 	op, err := calc.OperatingPoint(pr.Curve, *b)
 	if err != nil {
-		e.failErr("pq", err)
-		return
+		g.failErr("pq", err)
+		return pr, g.problems()
 	}
 	pr.Operating = &op
 	if _, top, drooping := pr.Curve.Unstable(); drooping && op.Q <= top {
 		e.warnCalc("pump", calc.Warn("q", calc.CautionOperatingUnstable, calc.Fig(op.Q, calc.Flow), calc.Fig(top, calc.Flow)))
 	}
 	e.regionCheck(pr.BEP, op.Q, "q", "pump")
-	e.speedFor(pr)
+	// Every problem above returned early: the speed for a duty is the
+	// pump's last part, with problems of its own.
+	var ps problems
+	pr.SpeedFor, ps = e.speedFor(pr)
+	return pr, ps
 }
 
 // npsh works out the NPSH available at the pump from the suction side
@@ -147,28 +150,22 @@ func (e *eval) pump() {
 // before the pump. The flow is the operating point's when there is one,
 // else the duty flow q; NPSHr is typed (npshr), else the data sheet's at
 // that flow. With a balance it also gives NPSHa over the chart's flows.
-func (e *eval) npsh(line *calc.Line) {
+func (e *eval) npsh(line *calc.Line) problems {
 	if !e.has("zp") || e.res.Fluid == nil || !e.siteKnown() || e.in.Bad("loop") {
-		return
+		return nil
 	}
 	fl := *e.res.Fluid
-	ok := true
-	zp, good := e.quantity("zp")
-	ok = ok && good
-	src := calc.NPSHInput{PumpZ: zp}
+	g := e.gather()
+	src := calc.NPSHInput{PumpZ: g.quantity("zp")}
 	if e.isLoop() {
 		// The loop's static pressure at its vessel's connection, carried
 		// by elevation to the pump's inlet.
-		p, z, good := e.loopStatic()
-		ok = ok && good
-		src.SurfacePressure, src.SurfaceZ = p, z
+		src.SurfacePressure, src.SurfaceZ = e.loopStatic(&g)
 	} else if b := e.bal; b != nil && b.Unknown != calc.SolveP1 && b.Unknown != calc.SolveZ1 {
 		src.SurfacePressure, src.SurfaceZ = b.In.P, b.In.Z
 	} else {
-		src.SurfacePressure = e.pressure("p1", calc.SolveP1, calc.SolvePumpHead, &ok)
-		z, good := e.quantity("z1")
-		ok = ok && good
-		src.SurfaceZ = z
+		src.SurfacePressure = e.pressure(&g, "p1", calc.SolveP1, calc.SolvePumpHead)
+		src.SurfaceZ = g.quantity("z1")
 	}
 	pr := e.res.Pump
 	var q float64
@@ -179,26 +176,24 @@ func (e *eval) npsh(line *calc.Line) {
 	case e.bal != nil && e.bal.Unknown != calc.SolveFlow:
 		q, haveQ = e.bal.Q, true
 	case e.hasFlow():
-		q, haveQ = e.flow()
+		q, haveQ = e.knownFlow()
 	}
 	typed := e.has("hs")
 	if typed {
-		v, good := e.quantity("hs")
-		ok = ok && good
-		src.SuctionLoss = v
+		src.SuctionLoss = g.quantity("hs")
 	}
 	after := 0
 	if !typed && e.in.Segments > 0 {
 		after = e.pumpAfter(e.in.Segments)
 		if after < 0 {
-			return
+			return g.problems()
 		}
 		if after > 0 && line == nil {
-			return // the segments' own errors say why: no suction loss of zero in their place
+			return g.problems() // the segments' own errors say why: no suction loss of zero in their place
 		}
 		if after > 0 && !haveQ {
-			e.flow() // says the flow is needed
-			ok = false
+			e.flow(&g) // says the flow is needed
+			g.fail()
 		}
 	}
 	switch {
@@ -214,8 +209,8 @@ func (e *eval) npsh(line *calc.Line) {
 			src.NPSHr = v
 		}
 	}
-	if !ok {
-		return
+	if g.failed() {
+		return g.problems()
 	}
 	sb := calc.Balance{Fluid: fl, Line: line, PumpAfter: after}
 	in := func(q float64) (calc.NPSHInput, error) {
@@ -231,13 +226,13 @@ func (e *eval) npsh(line *calc.Line) {
 	}
 	x, err := in(q)
 	if err != nil {
-		e.failErr("pafter", err)
-		return
+		g.failErr("pafter", err)
+		return g.problems()
 	}
 	r, err := calc.NPSH(fl, x)
 	if err != nil {
-		e.failErr("zp", err)
-		return
+		g.failErr("zp", err)
+		return g.problems()
 	}
 	e.res.NPSH = &r
 	e.res.NPSHFlow = q
@@ -257,11 +252,12 @@ func (e *eval) npsh(line *calc.Line) {
 			}
 			if err != nil {
 				e.warnCalc("npsh", calc.Warn("zp", calc.CautionNPSHCurveCut, calc.Fig(p.Q, calc.Flow)))
-				return
+				return nil
 			}
 			pr.NPSHa = append(pr.NPSHa, calc.CurvePoint{Q: p.Q, H: a.Available})
 		}
 	}
+	return nil
 }
 
 // NPSHSuction says where the suction loss of Result.NPSH comes from.
@@ -289,36 +285,23 @@ func (e *eval) pumpAfter(segments int) int {
 	return int(v.SI)
 }
 
-// field works out the pump's performance from gauge readings. The motor
-// efficiency feeds only the pump-alone figures: in error, the rest of the
-// check still stands.
-func (e *eval) field() {
+// field works out the pump's performance from gauge readings (Evaluate
+// then adds its bands and acceptance). The motor efficiency feeds only the
+// pump-alone figures: in error, the rest of the check still stands.
+func (e *eval) field() (*calc.FieldCheck, problems) {
 	if !e.has("qm") && !e.has("ps") && !e.has("pd") {
-		return
+		return nil, nil
 	}
 	if e.res.Fluid == nil {
-		return
+		return nil, nil
 	}
-	ok := true
-	gauge := func(param string) float64 {
-		p, good := e.gaugeReading(param)
-		ok = ok && good
-		return p
-	}
-	get := func(param string) float64 {
-		v, good := e.quantity(param)
-		ok = ok && good
-		return v
-	}
-	bore := func(group, d, nps, sch string) float64 {
-		v, good := e.gaugeBore(group, d, nps, sch)
-		ok = ok && good
-		return v
-	}
-	r := calc.FieldReadings{Ps: gauge("ps"), Pd: gauge("pd"), Zs: get("zs"), Zd: get("zd"),
-		Ds: bore("gsp", "ds", "dsn", "dss"), Dd: bore("gdp", "dd", "ddn", "dds"), Q: get("qm")}
+	g := e.gather()
+	r := calc.FieldReadings{Ps: e.gaugeReading(&g, "ps"), Pd: e.gaugeReading(&g, "pd"),
+		Zs: g.quantity("zs"), Zd: g.quantity("zd"),
+		Ds: e.gaugeBore(&g, "gsp", "ds", "dsn", "dss"), Dd: e.gaugeBore(&g, "gdp", "dd", "ddn", "dds"),
+		Q: g.quantity("qm")}
 	if e.has("pin") {
-		r.PowerIn = get("pin")
+		r.PowerIn = g.quantity("pin")
 	}
 	if v, good := e.in.Value("etam"); good {
 		r.MotorEff = v.SI
@@ -326,8 +309,8 @@ func (e *eval) field() {
 			e.warnCalc("field", calc.Warn("etam", calc.CautionMotorEffHigh, calc.Num(v.SI), calc.Num(calc.MotorEfficiencyHigh)))
 		}
 	}
-	if !ok {
-		return
+	if g.failed() {
+		return nil, g.problems()
 	}
 	var curve *calc.PumpCurve
 	if e.res.Pump != nil {
@@ -335,82 +318,84 @@ func (e *eval) field() {
 	}
 	fc, err := calc.CheckPump(*e.res.Fluid, r, curve)
 	if err != nil {
-		e.failErr("qm", err)
-		return
+		g.failErr("qm", err)
+		return nil, g.problems()
 	}
-	e.res.Field = &fc
 	for _, w := range fc.Warnings {
 		e.warnCalc("field", w)
 	}
 	if e.res.Pump != nil {
 		e.regionCheck(e.res.Pump.SingleBEP, r.Q, "qm", "field")
 	}
-	e.bands(fc)
-	e.accept(fc)
+	return &fc, nil
 }
 
 // gaugeReading is a gauge's reading as a gauge pressure, Pa: an absolute
 // one less the site pressure.
-func (e *eval) gaugeReading(param string) (float64, bool) {
-	p, good := e.quantity(param)
-	if !good {
-		return 0, false
+func (e *eval) gaugeReading(g *gather, param string) float64 {
+	p := g.quantity(param)
+	if !e.in.OK(param) {
+		return 0
 	}
 	if e.in.vals[param].Abs {
 		if !e.siteKnown() {
-			return 0, false
+			g.fail()
+			return 0
 		}
 		p -= e.res.SitePressure
 	}
-	return p, true
+	return p
 }
 
 // gaugeBore is the pipe's inside diameter at a gauge, m: typed, or the
 // nominal size's and schedule's.
-func (e *eval) gaugeBore(group, d, nps, sch string) (float64, bool) {
+func (e *eval) gaugeBore(g *gather, group, d, nps, sch string) float64 {
 	if e.in.Side(group) == "d" || !e.has(nps) && !e.has(sch) {
-		return e.quantity(d)
+		return g.quantity(d)
 	}
 	v, good := e.in.Value(nps)
-	if s, g := e.in.Value(sch); g && s.Pipe != nil {
+	if s, ok := e.in.Value(sch); ok && s.Pipe != nil {
 		v, good = s, true
 	}
 	if !good || v.Pipe == nil {
-		return 0, false // Read reported it
+		g.fail() // Read reported it
+		return 0
 	}
-	return v.Pipe.ID, true
+	return v.Pipe.ID
 }
 
 // turbine works out the turbine's output at the flow and the flow that
 // gives the most output, when the balance solves for the turbine head and
 // an efficiency is given.
-func (e *eval) turbine() {
+func (e *eval) turbine() problems {
 	if !e.has("etat") || e.bal == nil {
-		return
+		return nil
 	}
-	eff, ok := e.quantity("etat")
-	if !ok {
-		return
+	g := e.gather()
+	eff := g.quantity("etat")
+	if g.failed() {
+		return g.problems()
 	}
 	if e.bal.Unknown != calc.SolveTurbineHead {
 		e.warnCalc("turbine", calc.Warn("etat", calc.CautionTurbineNeedsHt))
-		return
+		return nil
 	}
 	t, err := calc.Turbine(*e.bal, eff)
 	if err != nil {
-		e.failErr("etat", err)
-		return
+		g.failErr("etat", err)
+		return g.problems()
 	}
 	e.res.Turbine = &t
 	best, err := calc.BestTurbineFlow(*e.bal, eff, 0)
 	if err != nil {
-		e.failErr("etat", err)
-		return
+		g.failErr("etat", err)
+		return g.problems()
 	}
 	e.res.BestTurbine = &best
 	for _, w := range t.Warnings {
 		e.warnCalc("turbine", w)
 	}
+	return nil
 }
 
 // drawsCurves reports whether the scenario's view draws the system and

@@ -63,13 +63,14 @@ func (e *eval) sheetEfficiencies(vs []float64) {
 // the mains frequency fmains, the rated speed's supply: an induction
 // motor's speed follows the supply frequency nearly in proportion, common
 // practice). Above 100 % it warns of overspeed.
-func (e *eval) speed() (float64, bool) {
+func (e *eval) speed(g *gather) float64 {
 	if !e.has("spd") {
-		return 1, true
+		return 1
 	}
 	v, ok := e.in.Value("spd")
 	if !ok {
-		return 0, false
+		g.fail() // Read reported it
+		return 0
 	}
 	ratio := v.SI
 	if v.Dim == calc.Frequency {
@@ -79,19 +80,20 @@ func (e *eval) speed() (float64, bool) {
 			ref = "fmains"
 		}
 		if !e.has(ref) {
-			e.bad("spd", calc.Missing).With(ref).Typed(unit.Symbol).Because(calc.ReasonSpeedReference)
-			return 0, false
+			g.bad("spd", calc.Missing).With(ref).Typed(unit.Symbol).Because(calc.ReasonSpeedReference)
+			return 0
 		}
-		base, ok := e.quantity(ref)
+		base, ok := e.in.Value(ref)
 		if !ok {
-			return 0, false // Read reported it
+			g.fail() // Read reported it
+			return 0
 		}
-		ratio = v.SI / base
+		ratio = v.SI / base.SI
 	}
 	if ratio > 1 && ratio <= calc.PumpSpeedRatioMax {
 		e.warnCalc("pump", calc.Warn("spd", calc.CautionOverspeed, calc.Num(ratio)))
 	}
-	return ratio, true
+	return ratio
 }
 
 // bep finds the best-efficiency point of the pumps as they run and of one
@@ -126,92 +128,92 @@ func (e *eval) regionCheck(b *calc.BEP, q float64, param, topic string) {
 }
 
 // speedFor solves for the speed at which the pumps deliver the flow qsp,
-// or the head hsp, on the line.
-func (e *eval) speedFor(pr *PumpResult) {
+// or the head hsp, on the line; nil when not asked for or not found.
+func (e *eval) speedFor(pr *PumpResult) (*SpeedSolution, problems) {
 	byHead := e.in.Side("spfor") == "h"
 	if (!e.has("qsp") && !e.has("hsp")) || e.bal == nil || e.bal.Unknown != calc.SolvePumpHead {
-		return
+		return nil, nil
 	}
+	g := e.gather()
 	var q float64
 	if byHead {
-		h, ok := e.quantity("hsp")
-		if !ok {
-			return
+		h := g.quantity("hsp")
+		if g.failed() {
+			return nil, g.problems()
 		}
 		var err error
 		if q, err = calc.FlowForHead(*e.bal, h, pr.Curve.MaxFlow()); err != nil {
-			e.failErr("hsp", err)
-			return
+			g.failErr("hsp", err)
+			return nil, g.problems()
 		}
 	} else {
-		var ok bool
-		if q, ok = e.quantity("qsp"); !ok {
-			return
+		if q = g.quantity("qsp"); g.failed() {
+			return nil, g.problems()
 		}
 	}
 	param := map[bool]string{false: "qsp", true: "hsp"}[byHead]
 	sys, err := calc.SystemCurve(*e.bal, []float64{q})
 	if err != nil || len(sys) != 1 {
-		e.failErr(param, err)
-		return
+		g.failErr(param, err)
+		return nil, g.problems()
 	}
 	h := sys[0].H
 	r, err := calc.SpeedForDuty(pr.Base, pr.Count, pr.Parallel, q, h)
 	if err != nil {
-		e.failAt(param, err)
-		return
+		g.failAt(param, err)
+		return nil, g.problems()
 	}
 	c, err := pr.Base.AtSpeed(r)
 	if err == nil && pr.Count > 1 {
 		c, err = c.Combine(pr.Count, pr.Parallel)
 	}
 	if err != nil {
-		e.failAt(param, err)
-		return
+		g.failAt(param, err)
+		return nil, g.problems()
 	}
-	pr.SpeedFor = &SpeedSolution{Q: q, H: h, Ratio: r, Curve: c, ByHead: byHead}
 	if r > 1 {
 		e.warnCalc("pump", calc.Warn(param, calc.CautionDutyOverspeed, calc.Num(r)))
 	}
+	return &SpeedSolution{Q: q, H: h, Ratio: r, Curve: c, ByHead: byHead}, nil
 }
 
 // energy works out the energy per volume pumped: from the field check's
 // measured input when there is one, else from the operating point (its
 // shaft power, over the motor efficiency when given).
-func (e *eval) energy() {
-	hours, ok1 := e.optional("hours")
-	tariff, ok2 := e.optional("tariff")
-	if !ok1 || !ok2 {
-		return // Read reported it
+func (e *eval) energy() (*EnergyResult, problems) {
+	g := e.gather()
+	hours, tariff := g.optional("hours"), g.optional("tariff")
+	if g.failed() {
+		return nil, nil // Read reported it
 	}
 	var er EnergyResult
 	switch f := e.res.Field; {
 	case e.measuredEnergy() && (f == nil || !(f.Efficiency > 0 && f.Head > 0)):
-		return // readings with a power meter: their energy or none, never the duty's in its place
+		return nil, nil // readings with a power meter: their energy or none, never the duty's in its place
 	case f != nil && f.Efficiency > 0 && f.Head > 0:
 		er = EnergyResult{Measured: true, Power: f.HydraulicPower / f.Efficiency, Q: f.Q, H: f.Head}
 	case e.res.Pump != nil && e.res.Pump.Operating != nil && e.res.Pump.Operating.ShaftPower > 0:
 		op := e.res.Pump.Operating
 		er = EnergyResult{Power: op.ShaftPower, Shaft: true, Q: op.Q, H: op.H}
 		if e.has("etam") {
-			m, ok := e.quantity("etam")
+			m, ok := e.in.Value("etam")
 			if !ok {
-				return // Read reported it: the power drawn is not known
+				return nil, nil // Read reported it: the power drawn is not known
 			}
-			if m > 0 {
-				er.Power, er.Shaft = op.ShaftPower/m, false
+			if m.SI > 0 {
+				er.Power, er.Shaft = op.ShaftPower/m.SI, false
 			}
 		}
 	default:
-		return
+		return nil, nil
 	}
 	en, err := calc.EnergyUse(er.Power, er.Q, er.H, e.res.Fluid.Density, hours, tariff)
 	if err != nil {
-		e.failErr("hours", err)
-		return
+		g.failErr("hours", err)
+		return nil, g.problems()
 	}
 	er.Energy = en
-	e.res.Energy = &er
+	return &er, nil
 }
 
 // measuredEnergy reports whether the energy is the readings': gauge
@@ -224,44 +226,41 @@ func (e *eval) measuredEnergy() bool {
 var accuracyParams = []string{"gcs", "gss", "gcd", "gsd", "uqm", "upin", "uz"}
 
 // bands propagates the instruments' accuracy to the field check's
-// results, when any accuracy is given. A gauge class needs its span and a
-// span its class.
-func (e *eval) bands(fc calc.FieldCheck) {
-	a, given, ok := e.accuracy()
+// results, when any accuracy is given; nil when none is or one cannot be
+// used. A gauge class needs its span and a span its class.
+func (e *eval) bands(fc calc.FieldCheck) (*calc.FieldBands, problems) {
+	g := e.gather()
+	a, given := e.accuracy(&g)
 	if !given {
-		return
+		return nil, nil
 	}
 	if a.Power > 0 && !e.has("pin") {
 		e.warnCalc("field", calc.Warn("upin", calc.CautionPowerAccuracyUnused))
 	}
-	if !ok {
-		return
+	if g.failed() {
+		return nil, g.problems()
 	}
 	tu, err := fc.Uncertainty(*e.res.Fluid, a)
 	if err != nil {
-		e.failErr("uqm", err)
-		return
+		g.failErr("uqm", err)
+		return nil, g.problems()
 	}
-	e.res.FieldBands = &tu
+	return &tu, nil
 }
 
 // accuracy reads the instruments' accuracies: given is false when none
-// is, ok false when one cannot be used (reported).
-func (e *eval) accuracy() (a calc.Accuracy, given, ok bool) {
+// is; g fails when one cannot be used.
+func (e *eval) accuracy(g *gather) (a calc.Accuracy, given bool) {
 	for _, p := range accuracyParams {
 		given = given || e.has(p)
 	}
 	if !given {
-		return a, false, true
+		return a, false
 	}
-	ok = true
 	read := func(p string, v *float64) {
-		if !e.has(p) {
-			return
+		if e.has(p) {
+			*v = g.quantity(p)
 		}
-		x, good := e.quantity(p)
-		ok = ok && good
-		*v = x
 	}
 	read("gcs", &a.ClassS)
 	read("gss", &a.SpanS)
@@ -273,22 +272,22 @@ func (e *eval) accuracy() (a calc.Accuracy, given, ok bool) {
 	for _, pair := range [][2]string{{"gcs", "gss"}, {"gcd", "gsd"}} {
 		for i, p := range pair {
 			if e.has(p) && !e.has(pair[1-i]) {
-				e.bad(pair[1-i], calc.Missing).With(p).Because(calc.ReasonGoTogether)
-				ok = false
+				g.bad(pair[1-i], calc.Missing).With(p).Because(calc.ReasonGoTogether)
 			}
 		}
 	}
-	return a, true, ok
+	return a, true
 }
 
-// accept judges the field check under the chosen grade.
-func (e *eval) accept(fc calc.FieldCheck) {
+// accept judges the field check under the chosen grade; nil without one,
+// or when it cannot be judged (a warning says why).
+func (e *eval) accept(fc calc.FieldCheck) *calc.Acceptance {
 	if !e.has("grade") {
-		return
+		return nil
 	}
 	g, ok := calc.LookupGrade(e.in.Choice("grade"))
 	if !ok {
-		return // checkAll reported it
+		return nil // checkAll reported it
 	}
 	var bands calc.FieldBands
 	if e.res.FieldBands != nil {
@@ -299,7 +298,7 @@ func (e *eval) accept(fc calc.FieldCheck) {
 	a, ok := calc.Accept(fc, bands, g)
 	if !ok {
 		e.warnCalc("field", calc.Warn("grade", calc.CautionGradeNeedsSheet))
-		return
+		return nil
 	}
-	e.res.Acceptance = &a
+	return &a
 }

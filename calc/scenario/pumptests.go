@@ -46,29 +46,22 @@ func (e *eval) testWanted() bool {
 
 // test works out the readings as a test at several points, with the
 // instruments and the gauges' setup of the field check.
-func (e *eval) test() {
+func (e *eval) test() (*TestResult, problems) {
 	if !e.testWanted() || e.res.Fluid == nil {
-		return
+		return nil, nil
 	}
-	ok := true
-	get := func(p string) float64 {
-		v, good := e.quantity(p)
-		ok = ok && good
-		return v
-	}
-	zs, zd := get("zs"), get("zd")
-	ds, g1 := e.gaugeBore("gsp", "ds", "dsn", "dss")
-	dd, g2 := e.gaugeBore("gdp", "dd", "ddn", "dds")
-	ok = ok && g1 && g2
+	g := e.gather()
+	zs, zd := g.quantity("zs"), g.quantity("zd")
+	ds := e.gaugeBore(&g, "gsp", "ds", "dsn", "dss")
+	dd := e.gaugeBore(&g, "gdp", "dd", "ddn", "dds")
 	var readings []calc.TestReading
 	var nums []int
 	for _, k := range e.in.ReadingsGiven() {
-		ps, g1 := e.gaugeReading(ReadingParam("ps", k))
-		pd, g2 := e.gaugeReading(ReadingParam("pd", k))
-		r := calc.TestReading{Q: get(ReadingParam("qm", k)), Ps: ps, Pd: pd}
-		ok = ok && g1 && g2
+		ps := e.gaugeReading(&g, ReadingParam("ps", k))
+		pd := e.gaugeReading(&g, ReadingParam("pd", k))
+		r := calc.TestReading{Q: g.quantity(ReadingParam("qm", k)), Ps: ps, Pd: pd}
 		if p := ReadingParam("pin", k); e.has(p) {
-			r.PowerIn = get(p)
+			r.PowerIn = g.quantity(p)
 		}
 		readings, nums = append(readings, r), append(nums, k)
 	}
@@ -76,9 +69,9 @@ func (e *eval) test() {
 	if v, good := e.in.Value("etam"); good {
 		motor = v.SI
 	}
-	a, given, good := e.accuracy()
-	if !ok || !good {
-		return
+	a, given := e.accuracy(&g)
+	if g.failed() {
+		return nil, g.problems()
 	}
 	var curve *calc.PumpCurve
 	if e.res.Pump != nil {
@@ -86,23 +79,23 @@ func (e *eval) test() {
 	}
 	t, err := calc.CheckPumpTest(*e.res.Fluid, calc.TestSetup{Zs: zs, Zd: zd, Ds: ds, Dd: dd, MotorEff: motor, Accuracy: a}, readings, curve)
 	if err != nil {
-		e.failTest(err, nums)
-		return
+		g.record(testProblem(err, nums))
+		return nil, g.problems()
 	}
 	tr := TestResult{PumpTest: t, Bands: given}
 	for _, p := range t.Points {
 		tr.Reading = append(tr.Reading, nums[p.Item-1])
 	}
-	e.res.Test = &tr
+	return &tr, nil
 }
 
-// failTest records an error of calc.CheckPumpTest under the reading's own
-// parameter: calc names a reading's field with its place in the list.
-func (e *eval) failTest(err error, nums []int) {
+// testProblem is an error of calc.CheckPumpTest as a problem of the
+// reading's own parameter: calc names a reading's field with its place in
+// the list.
+func testProblem(err error, nums []int) *calc.FieldError {
 	fe, ok := err.(*calc.FieldError)
 	if !ok {
-		e.failErr("qm", err)
-		return
+		return problemOf("qm", err)
 	}
 	c := *fe
 	if f, k := ReadingOf(fe.Field); k == 1 && fe.Item >= 1 && fe.Item <= len(nums) {
@@ -112,39 +105,38 @@ func (e *eval) failTest(err error, nums []int) {
 				c.Figures[0].Value = float64(nums[i-1]) // the earlier reading's number
 			}
 		}
-		e.record(&c)
-		return
+		return &c
 	}
-	e.failErr(fe.Field, err)
+	return problemOf(fe.Field, err)
 }
 
 // guarantee judges the test against the guarantee point under the grade:
 // the flow typed (qg) or the duty flow (q); the head and efficiency typed
 // (hg, etag) or the data sheet's at that flow.
-func (e *eval) guarantee() {
+func (e *eval) guarantee() (*GuaranteeResult, problems) {
 	t := e.res.Test
 	if t == nil || !e.has("grade") {
-		return
+		return nil, nil
 	}
-	g, ok := calc.LookupGrade(e.in.Choice("grade"))
+	grade, ok := calc.LookupGrade(e.in.Choice("grade"))
 	if !ok {
-		return // Read reported it
+		return nil, nil // Read reported it
 	}
+	g := e.gather()
 	var gr GuaranteeResult
 	var gp calc.Guarantee
 	switch {
 	case e.has("qg"):
-		if gp.Q, ok = e.quantity("qg"); !ok {
-			return
-		}
+		gp.Q = g.quantity("qg")
 	case e.has("q"):
-		if gp.Q, ok = e.quantity("q"); !ok {
-			return
-		}
+		gp.Q = g.quantity("q")
 		gr.FlowFrom = FromDuty
 	default:
 		e.warnCalc("test", calc.Warn("qg", calc.CautionGuaranteeNoFlow))
-		return
+		return nil, nil
+	}
+	if g.failed() {
+		return nil, g.problems()
 	}
 	var sheet calc.Guarantee
 	hasSheet := false
@@ -152,32 +144,32 @@ func (e *eval) guarantee() {
 		sheet, hasSheet = calc.SheetGuarantee(e.res.Pump.Single, gp.Q)
 	}
 	if e.has("hg") {
-		if gp.H, ok = e.quantity("hg"); !ok {
-			return
+		if gp.H = g.quantity("hg"); g.failed() {
+			return nil, g.problems()
 		}
 	} else if hasSheet {
 		gp.H, gr.HeadFrom = sheet.H, FromSheet
 	} else {
 		e.warnCalc("test", calc.Warn("hg", calc.CautionGuaranteeNoHead, calc.Fig(gp.Q, calc.Flow)))
-		return
+		return nil, nil
 	}
 	switch {
 	case e.has("etag"):
-		if gp.Eff, ok = e.quantity("etag"); !ok {
-			return
+		if gp.Eff = g.quantity("etag"); g.failed() {
+			return nil, g.problems()
 		}
 	case hasSheet && sheet.Eff > 0:
 		gp.Eff, gr.EffFrom = sheet.Eff, FromSheet
 	default:
 		gr.EffFrom = FromNone
 	}
-	a, err := t.AcceptGuarantee(gp, g)
+	a, err := t.AcceptGuarantee(gp, grade)
 	if err != nil {
-		e.failErr("qg", err)
-		return
+		g.failErr("qg", err)
+		return nil, g.problems()
 	}
 	gr.GuaranteeAcceptance = a
-	e.res.Guarantee = &gr
+	return &gr, nil
 }
 
 // testDemo adds to the demo a test of the BS-3 duty pump at five flows,

@@ -9,46 +9,43 @@ import (
 
 // run reads the single pipe run, or returns nil when none is described
 // (its length l is the sign of one).
-func (e *eval) run() *RunResult {
+func (e *eval) run() (*RunResult, problems) {
 	if !e.has("l") {
-		return nil
+		return nil, nil
 	}
-	spec, meta, ok := e.readRun("")
-	if !ok {
-		return nil
+	g := e.gather()
+	spec, meta := e.readRun(&g, "")
+	if g.failed() {
+		return nil, g.problems()
 	}
 	e.runSpec = spec
-	return meta
+	return meta, nil
 }
 
 // readRun makes the pipe run named with prefix pre ("" for the single run,
 // "s2." for segment 2) from its inputs, each group on the side the inputs
 // use. The friction method and a typed Hazen–Williams C are shared by every
-// run of the scenario.
-func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
+// run of the scenario. It reads every input of the run whatever g holds,
+// and returns the zero Run and nil once g has failed.
+func (e *eval) readRun(g *gather, pre string) (calc.Run, *RunResult) {
 	p := func(f string) string { return pre + f }
 	r := &RunResult{}
-	ok := true
 	// A length of zero is a run of fittings alone (a valve set), as calc
 	// allows; Read refused a negative one.
-	l, good := e.quantity(p("l"))
-	ok = ok && good
-	r.Length = l
+	r.Length = g.quantity(p("l"))
 	switch {
 	case e.in.Side(p("pipe")) == "d" || !e.has(p("nps")) && !e.has(p("sch")):
-		d, good := e.quantity(p("d"))
-		ok = ok && good
-		r.Diameter = d
+		r.Diameter = g.quantity(p("d"))
 	default:
 		v, good := e.in.Value(p("nps"))
-		if sch, g := e.in.Value(p("sch")); g && sch.Pipe != nil {
+		if sch, ok := e.in.Value(p("sch")); ok && sch.Pipe != nil {
 			v, good = sch, true
 		}
 		if !good || v.Pipe == nil {
 			if !e.in.AnyBad(p("nps"), p("sch")) {
-				e.bad(p("nps"), calc.Missing) // Read looks a size up only with both
+				g.bad(p("nps"), calc.Missing) // Read looks a size up only with both
 			}
-			ok = false
+			g.fail()
 			break
 		}
 		r.Pipe = v.Pipe
@@ -56,60 +53,43 @@ func (e *eval) readRun(pre string) (calc.Run, *RunResult, bool) {
 	}
 	var mat *calc.Material
 	if e.has(p("mat")) {
-		v, good := e.in.Value(p("mat"))
-		ok = ok && good
-		mat = v.Material
+		mat = g.value(p("mat")).Material
 		r.Material = mat
 	}
 	method := calc.MethodColebrook
 	if e.has("fm") {
 		m, err := calc.ParseFrictionMethod(e.in.Choice("fm"))
 		if err != nil {
-			ok = false // Read reported it
+			g.fail() // Read reported it
 		}
 		method = m
 	}
 	switch {
 	case e.has(p("eps")):
-		eps, good := e.quantity(p("eps"))
-		ok = ok && good
-		r.Roughness = eps
+		r.Roughness = g.quantity(p("eps"))
 	case mat != nil:
 		r.Roughness = mat.Roughness
 	case method != calc.MethodHazenWilliams && !e.in.Bad(p("mat")):
-		e.bad(p("eps"), calc.Missing)
-		ok = false
+		g.bad(p("eps"), calc.Missing)
 	}
 	hc := 0.0
 	switch {
 	case e.has("chw"):
-		c, good := e.quantity("chw")
-		ok = ok && good
-		hc = c
+		hc = g.quantity("chw")
 	case mat != nil:
 		hc = mat.HazenC
 	}
 	if method == calc.MethodHazenWilliams && !(hc > 0) && !e.in.Bad("chw") {
-		e.bad("chw", calc.Missing).With("mat")
-		ok = false
+		g.bad("chw", calc.Missing).With("mat")
 	}
-	fit, good := e.optionalValue(p("fit"))
-	ok = ok && good
-	extra, good := e.optional(p("k"))
-	ok = ok && good
-	if !ok {
-		return calc.Run{}, nil, false
+	fit := g.value(p("fit"))
+	extra := g.optional(p("k"))
+	if g.failed() {
+		return calc.Run{}, nil
 	}
 	spec := calc.Run{Length: r.Length, Diameter: r.Diameter, Roughness: r.Roughness,
 		Fittings: fit.Fittings, ExtraK: extra, Method: method, HazenC: hc}
-	return spec, r, true
-}
-
-// optionalValue is an optional parameter as read: the zero Value and true
-// when absent, false when Bad.
-func (e *eval) optionalValue(param string) (Value, bool) {
-	v, ok := e.in.vals[param]
-	return v, !ok || !v.Bad
+	return spec, r
 }
 
 // RunView is what the Run view shows: one run (the single run, or a
@@ -135,40 +115,39 @@ type Sizing struct {
 	Rows      []calc.SizingRow
 }
 
-// runView fills Result.RunView for the Run view: the segment rseg of the
-// line (segment 1 when not given), else the single run, and its sizing
-// table.
-func (e *eval) runView(line *calc.Line) {
+// runView works out Result.RunView for the Run view: the segment rseg of
+// the line (segment 1 when not given), else the single run, and its
+// sizing table.
+func (e *eval) runView(line *calc.Line) (*RunView, problems) {
 	if e.in.View != "regime" || e.res.Fluid == nil {
-		return
+		return nil, nil
 	}
 	rv := &RunView{}
 	pre := ""
 	var spec calc.Run
+	g := e.gather()
 	switch {
 	case line != nil || e.in.Segments > 0:
 		rv.Segment = 1
 		if e.has("rseg") {
 			if e.in.Bad("rseg") {
-				e.res.RunView = rv // Read reported it
-				return
+				return rv, nil // Read reported it
 			}
 			rv.Segment = e.in.RunSegment()
 		}
 		pre = SegmentParam(rv.Segment, "")
-		e.res.RunView = rv
-		s, meta, ok := e.readRun(pre)
-		if !ok {
-			return
+		s, meta := e.readRun(&g, pre)
+		if g.failed() {
+			return rv, g.problems()
 		}
-		q, ok := e.flow()
-		if !ok {
-			return
+		q := e.flow(&g)
+		if g.failed() {
+			return rv, g.problems()
 		}
 		rr, err := s.Evaluate(*e.res.Fluid, q)
 		if err != nil {
-			e.failErr("q", err)
-			return
+			g.failErr("q", err)
+			return rv, g.problems()
 		}
 		meta.RunResult, meta.Flow = rr, q
 		spec, rv.Run = s, meta
@@ -177,34 +156,35 @@ func (e *eval) runView(line *calc.Line) {
 			e.warnCalc("runview", w)
 		}
 	case e.has("l"):
-		e.res.RunView = rv
 		if e.res.Run == nil {
-			return // the run's or the flow's errors say why
+			return rv, nil // the run's or the flow's errors say why
 		}
 		rv.Run, spec = e.res.Run, e.runSpec
 	default:
-		return
+		return nil, nil
 	}
-	e.sizing(rv, spec, pre, rv.Run.Flow)
+	rv.Sizing = e.sizing(&g, rv.Run, spec, pre)
+	return rv, g.problems()
 }
 
-// sizing works out the sizing table of the run shown: the class szsch,
+// sizing works out the sizing table of the run shown, r: the class szsch,
 // else the run's own class; the marks vlo, vhi and grad, else the
 // defaults of calc.DefaultSizingLimitsFor the sheet's units (common
-// practice: a US sheet's are round figures in ft/s of their own).
-func (e *eval) sizing(rv *RunView, spec calc.Run, pre string, q float64) {
+// practice: a US sheet's are round figures in ft/s of their own). It is
+// nil when no class is known, or with a problem (recorded in g).
+func (e *eval) sizing(g *gather, r *RunResult, spec calc.Run, pre string) *Sizing {
 	if e.in.Bad("szsch") {
-		return
+		return nil
 	}
 	class := e.in.Choice("szsch")
-	if class == "" && rv.Run.Pipe != nil {
-		class = rv.Run.Pipe.Schedule
+	if class == "" && r.Pipe != nil {
+		class = r.Pipe.Schedule
 	}
 	if class == "" {
-		class = classOfBore(rv.Run)
+		class = classOfBore(r)
 	}
 	if class == "" {
-		return // the Run view asks for a class; not an error
+		return nil // the Run view asks for a class; not an error
 	}
 	var cat calc.Catalogue
 	var sizes []calc.PipeSize
@@ -215,28 +195,25 @@ func (e *eval) sizing(rv *RunView, spec calc.Run, pre string, q float64) {
 		}
 	}
 	if sizes == nil {
-		e.bad("szsch", calc.UnknownChoice).Typed(class).Because(calc.ReasonSizingClass)
-		return
+		g.bad("szsch", calc.UnknownChoice).Typed(class).Because(calc.ReasonSizingClass)
+		return nil
 	}
 	lim := calc.DefaultSizingLimitsFor(e.in.US)
-	ok := true
 	for _, p := range []struct {
 		name string
 		v    *float64
 	}{{"vlo", &lim.VelocityLow}, {"vhi", &lim.VelocityHigh}, {"grad", &lim.GradientMax}} {
 		if e.has(p.name) {
-			v, good := e.quantity(p.name)
-			ok = ok && good
-			*p.v = v
+			*p.v = g.quantity(p.name)
 		}
 	}
 	if e.has("grad") {
 		lim.GradientMax /= 100 // typed per 100 of length
 	}
-	if !ok {
-		return
+	if g.failed() {
+		return nil
 	}
-	rows, err := calc.SizeRun(spec, *e.res.Fluid, q, sizes, lim)
+	rows, err := calc.SizeRun(spec, *e.res.Fluid, r.Flow, sizes, lim)
 	if err != nil {
 		var fe *calc.FieldError
 		field := "q"
@@ -252,10 +229,10 @@ func (e *eval) sizing(rv *RunView, spec calc.Run, pre string, q float64) {
 				}
 			}
 		}
-		e.failAt(field, err)
-		return
+		g.failAt(field, err)
+		return nil
 	}
-	rv.Sizing = &Sizing{Catalogue: cat, Class: class, Limits: lim, Rows: rows}
+	return &Sizing{Catalogue: cat, Class: class, Limits: lim, Rows: rows}
 }
 
 // classOfBore is the class of the first catalogue size whose bore is the

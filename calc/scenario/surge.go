@@ -40,23 +40,21 @@ type SurgePipe struct {
 // surge works out the surge of a closure at point 2 when a closure time
 // is given: the liquid's bulk modulus, each pipe's wall and modulus, then
 // calc.Surge.
-func (e *eval) surge(run *RunResult, line *calc.Line) {
+func (e *eval) surge(run *RunResult, line *calc.Line) (*SurgeResult, problems) {
 	if !e.has("tc") || e.res.Fluid == nil || !e.siteKnown() {
-		return
+		return nil, nil
 	}
-	tc, ok := e.quantity("tc")
-	k, from, good := e.bulkModulus()
-	ok = ok && good
-	dv, good := e.optional("dv")
-	ok = ok && good
+	g := e.gather()
+	tc := g.quantity("tc")
+	k, from := e.bulkModulus(&g)
+	dv := g.optional("dv")
 	c := 1.0
 	if e.has("cr") {
-		v, good := e.quantity("cr")
-		ok, c = ok && good, v
+		c = g.quantity("cr")
 	}
-	pipes, good := e.surgePipes(run, line, c)
-	if !ok || !good {
-		return
+	pipes := e.surgePipes(&g, run, line, c)
+	if g.failed() {
+		return nil, g.problems()
 	}
 	// The flow stopped: the balance's, else the flow typed; none (the
 	// velocity change typed instead) leaves calc to ask for one.
@@ -65,8 +63,9 @@ func (e *eval) surge(run *RunResult, line *calc.Line) {
 	case e.res.Balance != nil:
 		q = e.res.Balance.Q
 	case e.hasFlow():
-		if q, ok = e.flow(); !ok {
-			return // Read reported it: no surge from a flow in error
+		var ok bool
+		if q, ok = e.knownFlow(); !ok {
+			return nil, nil // Read reported it: no surge from a flow in error
 		}
 	}
 	for i := range pipes {
@@ -89,11 +88,11 @@ func (e *eval) surge(run *RunResult, line *calc.Line) {
 	if err != nil {
 		var fe *calc.FieldError
 		if errors.As(err, &fe) && isKnown(fe.Field) {
-			e.failAt(fe.Field, err) // a surge input, whichever segment
-			return
+			g.failAt(fe.Field, err) // a surge input, whichever segment
+			return nil, g.problems()
 		}
-		e.failErr("tc", err)
-		return
+		g.failErr("tc", err)
+		return nil, g.problems()
 	}
 	out.SurgeResult = r
 	if out.StaticKnown {
@@ -104,18 +103,17 @@ func (e *eval) surge(run *RunResult, line *calc.Line) {
 	} else {
 		out.Static = in.Static - e.res.SitePressure
 	}
-	e.res.Surge = out
 	for _, w := range r.Warnings {
 		e.warnCalc("surge", w)
 	}
+	return out, nil
 }
 
 // bulkModulus is the liquid's bulk modulus: typed (kliq), else from the
 // speed of sound of water or seawater; another liquid needs it typed.
-func (e *eval) bulkModulus() (float64, string, bool) {
+func (e *eval) bulkModulus(g *gather) (float64, string) {
 	if e.has("kliq") {
-		k, ok := e.quantity("kliq")
-		return k, "typed", ok
+		return g.quantity("kliq"), "typed"
 	}
 	// At the pressure the density was taken at: the wave speed is
 	// √(K/ρ), both of one state of the liquid.
@@ -125,31 +123,32 @@ func (e *eval) bulkModulus() (float64, string, bool) {
 	case "", "water":
 		k, err := calc.WaterBulkModulus(fl.Temperature, p)
 		if err != nil {
-			e.failErr("t", err)
-			return 0, "", false
+			g.failErr("t", err)
+			return 0, ""
 		}
-		return k, "if97", true
+		return k, "if97"
 	case "seawater":
 		if sal := e.salinity(); sal != calc.SeawaterSalinity {
 			// Mackenzie's sound speed is taken at 35 g/kg only.
-			e.bad("kliq", calc.Missing).Got(calc.Num(sal)).Because(calc.ReasonBulkSalinity, calc.Num(calc.SeawaterSalinity))
-			return 0, "", false
+			g.bad("kliq", calc.Missing).Got(calc.Num(sal)).Because(calc.ReasonBulkSalinity, calc.Num(calc.SeawaterSalinity))
+			return 0, ""
 		}
 		k, err := calc.SeawaterBulkModulus(fl.Temperature, p)
 		if err != nil {
-			e.failErr("t", err)
-			return 0, "", false
+			g.failErr("t", err)
+			return 0, ""
 		}
-		return k, "mackenzie", true
+		return k, "mackenzie"
 	}
-	e.bad("kliq", calc.Missing).Because(calc.ReasonBulkUnknown)
-	return 0, "", false
+	g.bad("kliq", calc.Missing).Because(calc.ReasonBulkUnknown)
+	return 0, ""
 }
 
 // surgePipes are the pipes between the points, each with its wall
 // thickness (from the size picked, else the typed wall) and its wall's
-// modulus (typed epipe, else the material's), restraint factor c.
-func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePipe, bool) {
+// modulus (typed epipe, else the material's), restraint factor c. g
+// fails when one cannot be worked out.
+func (e *eval) surgePipes(g *gather, run *RunResult, line *calc.Line, c float64) []SurgePipe {
 	type spec struct {
 		pre    string
 		length float64
@@ -165,21 +164,21 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 		specs = append(specs, spec{"", e.runSpec.Length, e.runSpec.Diameter})
 	default:
 		if !e.has("l") && e.in.Segments == 0 {
-			e.bad("tc", calc.Missing).Because(calc.ReasonSurgePipe)
+			g.bad("tc", calc.Missing).Because(calc.ReasonSurgePipe)
 		}
-		return nil, false
+		g.fail()
+		return nil
 	}
-	ok := true
-	wall, typedWall := 0.0, false
-	if e.has("wall") {
-		w, good := e.quantity("wall")
-		ok, wall, typedWall = ok && good, w, good
+	// typed is an optional figure typed for every pipe, and whether it
+	// can be used.
+	typed := func(param string) (float64, bool) {
+		if !e.has(param) {
+			return 0, false
+		}
+		return g.quantity(param), e.in.OK(param)
 	}
-	mod, typedMod := 0.0, false
-	if e.has("epipe") {
-		m, good := e.quantity("epipe")
-		ok, mod, typedMod = ok && good, m, good
-	}
+	wall, typedWall := typed("wall")
+	mod, typedMod := typed("epipe")
 	var out []SurgePipe
 	for _, sp := range specs {
 		p := SurgePipe{SurgePipe: calc.SurgePipe{Length: sp.length, Diameter: sp.d, Restraint: c}}
@@ -190,9 +189,9 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 			ps := e.in.vals[sp.pre+"nps"].Pipe
 			if ps == nil || e.in.Side(sp.pre+"pipe") == "d" {
 				if !e.has("wall") {
-					e.bad("wall", calc.Missing).Because(calc.ReasonSurgeWall)
+					g.bad("wall", calc.Missing).Because(calc.ReasonSurgeWall)
 				}
-				ok = false
+				g.fail()
 				continue
 			}
 			// A ductile iron pipe's wall leaves out its mortar lining,
@@ -206,16 +205,16 @@ func (e *eval) surgePipes(run *RunResult, line *calc.Line, c float64) ([]SurgePi
 			m := e.in.vals[sp.pre+"mat"].Material
 			if m == nil || m.Modulus == 0 {
 				if !e.has("epipe") {
-					e.bad("epipe", calc.Missing).Because(calc.ReasonSurgeModulus)
+					g.bad("epipe", calc.Missing).Because(calc.ReasonSurgeModulus)
 				}
-				ok = false
+				g.fail()
 				continue
 			}
 			p.Modulus, p.ModulusFrom, p.Material = m.Modulus, "material", m.Name
 		}
 		out = append(out, p)
 	}
-	return out, ok
+	return out
 }
 
 // isKnown reports whether name is a parameter of the link.

@@ -32,21 +32,21 @@ type ValveResult struct {
 // valves checks each control valve of the line at the balance's flow: its
 // authority, and with FL from its data sheet, choked flow and (with xFz)
 // incipient cavitation.
-func (e *eval) valves() {
+func (e *eval) valves() ([]ValveResult, problems) {
 	br := e.res.Balance
 	if br == nil || br.Line == nil || e.bal == nil || e.bal.Line == nil || e.res.Fluid == nil {
-		return
+		return nil, nil
 	}
 	fl := *e.res.Fluid
 	rhog := fl.Density * calc.StandardGravity
+	g := e.gather()
 	dpc, typed := 0.0, e.has("dpc")
 	if typed {
-		v, ok := e.quantity("dpc")
-		if !ok {
-			return
+		if dpc = g.quantity("dpc"); g.failed() {
+			return nil, g.problems()
 		}
-		dpc = v
 	}
+	var out []ValveResult
 	// The line's pressures are known unless a closed loop leaves its
 	// static pressure out.
 	pressures := !e.isLoop() || e.has("pexp")
@@ -71,7 +71,7 @@ func (e *eval) valves() {
 			if v.Drop > 0 {
 				a, err := calc.ValveAuthority(v.Drop, v.CircuitDrop)
 				if err != nil {
-					e.failErr(param, err)
+					g.failErr(param, err)
 					continue
 				}
 				v.Authority = a
@@ -91,7 +91,7 @@ func (e *eval) valves() {
 				ck, err := calc.CheckValveLiquid(calc.ValveLiquid{Kv: c.Kv, FL: c.FL, XFz: c.XFz, P1: v.Inlet, Drop: v.Drop,
 					Density: fl.Density, VapourPressure: fl.VapourPressure})
 				if err != nil {
-					e.failErr(param, err)
+					g.failErr(param, err)
 					continue
 				}
 				v.Check = &ck
@@ -100,9 +100,10 @@ func (e *eval) valves() {
 					e.warnCalc("valve", w)
 				}
 			} else if c.FL > 0 && !pressures {
-				e.bad("pexp", calc.Missing).Because(calc.ReasonValveNeedsStatic)
+				g.bad("pexp", calc.Missing).Because(calc.ReasonValveNeedsStatic)
 			}
-			e.res.Valves = append(e.res.Valves, v)
+			out = append(out, v)
 		}
 	}
+	return out, g.problems()
 }
