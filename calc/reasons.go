@@ -155,6 +155,7 @@ const (
 	ReasonValveNeedsStatic        // Missing: a valve's IEC 60534-2-1 check needs the loop's static pressure (the pressure at its inlet)
 	ReasonValveFactorTwice        // Inconsistent: a valve's FL or xFz (Other) given twice in one component ("name:spec" Input)
 	ReasonBulkSalinity            // Missing: seawater's bulk modulus is known only at the standard salinity; Value the sheet's salinity (kg/kg)
+	ReasonBeyondNumbers           // NotFinite: the value (Value) is a number, but what is worked out from it (a velocity, a loss) leaves the range of numbers
 	reasonEnd
 )
 
@@ -293,6 +294,7 @@ var reasonNames = [...]string{"none",
 	"valve needs static",
 	"valve factor twice",
 	"bulk salinity",
+	"beyond numbers",
 }
 
 // countErr reports n items where min to max are accepted (TooFew or

@@ -302,8 +302,18 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		return RunResult{}, NewFieldError("q", Negative).Got(Fig(q, Flow))
 	}
 	area := math.Pi * r.Diameter * r.Diameter / 4
+	if !(area > 0) || math.IsInf(area, 0) {
+		// A bore whose area leaves the floating-point range (1e-200 m,
+		// 1e200 m): no velocity can be worked out from it.
+		return RunResult{}, NewFieldError("d", NotFinite).Got(Fig(r.Diameter, Length)).Because(ReasonBeyondNumbers)
+	}
 	v := q / area
 	re := Reynolds(fl.Density, v, r.Diameter, fl.Viscosity)
+	if q > 0 && !(v > 0 && re > 0 && !math.IsInf(v, 0) && !math.IsInf(re, 0)) {
+		// The velocity or the Reynolds number leaves the floating-point
+		// range: a flow far beyond any pipe's.
+		return RunResult{}, NewFieldError("q", NotFinite).Got(Fig(q, Flow)).Because(ReasonBeyondNumbers)
+	}
 	if q > 0 && r.ReDependent() {
 		if ks, sumK, err = r.FittingKs(re); err != nil {
 			return RunResult{}, err
@@ -373,6 +383,11 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	res.PressureDrop = res.TotalLoss * fl.Density * StandardGravity
 	res.TotalLossLow = res.FrictionLow*ld*hv + res.MinorLoss
 	res.TotalLossHigh = res.FrictionHigh*ld*hv + res.MinorLoss
+	if math.IsInf(res.TotalLossHigh, 0) || math.IsNaN(res.TotalLossHigh) || math.IsInf(res.PressureDrop, 0) || math.IsNaN(res.PressureDrop) {
+		// Finite inputs whose losses overflow (a length or a flow far
+		// beyond any line's).
+		return RunResult{}, NewFieldError("q", NotFinite).Got(Fig(q, Flow)).Because(ReasonBeyondNumbers)
+	}
 	switch {
 	case v < RunVelocityLow:
 		res.Warnings = append(res.Warnings, Warn("q", CautionVelocityLow, Fig(v, Velocity), Fig(RunVelocityLow, Velocity), Fig(RunVelocityHigh, Velocity)))

@@ -265,6 +265,12 @@ func TestRunValidation(t *testing.T) {
 		{"flow negative", func(r *Run, fl *Fluid, q *float64) { *q = -0.01 }, "q"},
 		{"flow NaN", func(r *Run, fl *Fluid, q *float64) { *q = nan }, "q"},
 		{"Re above 1e8", func(r *Run, fl *Fluid, q *float64) { fl.Viscosity = 1e-9 }, "q"},
+		// Finite values whose consequences leave IEEE 754 binary64's range
+		// (about 1.8e308; the smallest normal 2.2e-308): the area
+		// overflows or underflows, or the loss overflows.
+		{"diameter 1.1e301 m", func(r *Run, fl *Fluid, q *float64) { r.Diameter = 1.1e301 }, "d"},
+		{"diameter 1e-200 m", func(r *Run, fl *Fluid, q *float64) { r.Diameter, r.Roughness = 1e-200, 0 }, "d"},
+		{"length 1e308 m", func(r *Run, fl *Fluid, q *float64) { r.Length = 1e308 }, "q"},
 	}
 	for _, c := range cases {
 		r, fl, q := good, water, 0.01

@@ -681,6 +681,9 @@ var reasonWords = [...]func(w wording) string{
 		name, spec, _ := strings.Cut(w.fe.Input, ":")
 		return quote(name) + ": the valve's " + valveFactorName(w.fe.Other) + " is given twice in " + quote(spec) + ": keep the one from its data sheet"
 	},
+	calc.ReasonBeyondNumbers: func(w wording) string {
+		return w.subject() + " (" + w.val() + ") puts the line's figures beyond the range of numbers: check its length, bore and flow"
+	},
 	calc.ReasonBulkSalinity: func(w wording) string {
 		return "enter the liquid's bulk modulus for the surge estimate: seawater's is known here only at " + gPerKg(w.figAt(0)) +
 			", and this sheet's salinity is " + gPerKg(w.fe.Value)
