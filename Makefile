@@ -26,7 +26,7 @@ APT_PKGS := chromium poppler-utils zbar-tools python3-iapws python3-mpmath pytho
 all: site
 
 # The wasm is built without inlining (-gcflags=all=-l): the same code
-# compresses far better (brotli 1.58 -> 1.38 MB, gzip 2.17 -> 1.92 MB),
+# compresses far better (brotli 1.55 -> 1.35 MB, gzip 2.15 -> 1.90 MB),
 # about 1 s less on a phone-class link, for about a quarter more Go time
 # per edit (app/internal/bench measures both).
 WASM_GCFLAGS := all=-l

@@ -170,8 +170,8 @@ func TestWasmPackages(t *testing.T) {
 		case d == "net/http", strings.HasPrefix(d, "net/http/"), d == "crypto/tls", d == "crypto/x509",
 			strings.HasPrefix(d, "github.com/andybalholm/brotli"), d == "compress/gzip",
 			// Each took KBs of the wasm for a few lines of use (app/third_party/README.md, present's writeCSV,
-			// scenario's crc32IEEE).
-			d == "regexp", d == "encoding/csv", d == "hash/crc32", d == "bufio",
+			// scenario's crc32IEEE, go-app's escapeText).
+			d == "regexp", d == "encoding/csv", d == "hash/crc32", d == "bufio", d == "html",
 			// go-app's states, storage values, encryption and notifications, unused here (app/third_party/README.md).
 			d == "encoding/json", d == "crypto", strings.HasPrefix(d, "crypto/"), d == "github.com/google/uuid",
 			d == "database/sql/driver":

@@ -174,12 +174,12 @@ func HistoryDemo() []KeptSheet {
 		for _, kv := range readings {
 			_ = s.Set(kv[0], kv[1])
 		}
-		t, _ := time.Parse(editedLayout, when)
+		t, _ := parseRFC3339(when)
 		return KeptSheet{Scen: s, Edited: t}
 	}
 	last := PumpTestDemo()
 	_ = last.Set("name", "BS-3 P1, test at five flows")
-	t, _ := time.Parse(editedLayout, "2026-03-12T10:20:00Z")
+	t, _ := parseRFC3339("2026-03-12T10:20:00Z")
 	return []KeptSheet{
 		visit("BS-3 P1, spring visit", "2025-03-10T09:40:00Z", [][2]string{{"qm", "43L/s"}, {"ps", "-19kPa"}, {"pd", "458kPa"}, {"pin", "31.5kW"}}),
 		visit("BS-3 P1, autumn visit", "2025-09-15T14:05:00Z", [][2]string{{"qm", "42L/s"}, {"ps", "-18.5kPa"}, {"pd", "445kPa"}, {"pin", "31.4kW"}}),

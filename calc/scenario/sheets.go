@@ -128,8 +128,8 @@ func readEdited(f string) time.Time {
 	if !ok {
 		return time.Time{}
 	}
-	t, err := time.Parse(time.RFC3339, strings.TrimSpace(v))
-	if err != nil {
+	t, ok := parseRFC3339(strings.TrimSpace(v))
+	if !ok {
 		return time.Time{}
 	}
 	return t.UTC()

@@ -73,7 +73,7 @@ func newEngine(ctx context.Context, routes *router, resolveURL func(string) stri
 }
 
 func (e *engineX) baseContext() Context {
-	return Context{
+	ctx := Context{
 		Context:               e.ctx,
 		resolveURL:            e.resolveURL,
 		appUpdatable:          e.browser.AppUpdatable,
@@ -88,13 +88,11 @@ func (e *engineX) baseContext() Context {
 		removeComponentUpdate: e.updates.Done,
 		handleAction:          e.actions.Handle,
 		postAction:            e.actions.Post,
-		observeState:          e.states.Observe,
-		getState:              e.states.Get,
-		setState:              e.states.Set,
-		delState:              e.states.Delete,
 
 		notifyComponentEvent: e.nodes.NotifyComponentEvent,
 	}
+	e.wireStates(&ctx)
+	return ctx
 }
 
 // Navigate directs the engine to the specified URL destination, which might be
@@ -235,7 +233,7 @@ func (e *engineX) Start(framerate int) {
 	frames := time.NewTicker(currentFrameDuration)
 	defer frames.Stop()
 
-	e.states.CleanupExpiredPersistedStates(e.baseContext())
+	e.cleanupExpiredStates()
 
 	for {
 		select {
@@ -281,7 +279,7 @@ func (e *engineX) processFrame() {
 	})
 	e.executeDefers()
 	e.actions.Cleanup()
-	e.states.Cleanup()
+	e.cleanupStates()
 }
 
 func (e *engineX) executeDefers() {

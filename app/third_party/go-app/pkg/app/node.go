@@ -2,7 +2,6 @@ package app
 
 import (
 	"bytes"
-	"html"
 	"io"
 	"reflect"
 	"slices"
@@ -687,7 +686,30 @@ func (m nodeManager) encode(ctx Context, w *bytes.Buffer, depth int, v UI) {
 func (m nodeManager) encodeText(w *bytes.Buffer, depth int, v *text) {
 	if v.value != "" {
 		m.encodeIndent(w, depth)
-		w.WriteString(html.EscapeString(v.value))
+		escapeText(w, v.value)
+	}
+}
+
+// escapeText writes s as html.EscapeString would, escaping the same five
+// characters the same way, without importing package html: its init links
+// the table of every named character reference into the wasm, where no
+// text is ever written out.
+func escapeText(w *bytes.Buffer, s string) {
+	for i := 0; i < len(s); i++ {
+		switch c := s[i]; c {
+		case '&':
+			w.WriteString("&amp;")
+		case '\'':
+			w.WriteString("&#39;")
+		case '<':
+			w.WriteString("&lt;")
+		case '>':
+			w.WriteString("&gt;")
+		case '"':
+			w.WriteString("&#34;")
+		default:
+			w.WriteByte(c)
+		}
 	}
 }
 
