@@ -84,7 +84,7 @@ browser: site npm
 # time limit cuts short ends the run with "context deadline exceeded" and
 # no failing input, which failed CI once for nothing.
 FUZZTIME ?= 10s
-FUZZ     := ./calc:FuzzParse ./calc:FuzzBalance ./calc/scenario:FuzzScenario ./calc/scenario:FuzzSheets ./calc/scenario:FuzzLinkDamage
+FUZZ     := ./calc:FuzzParse ./calc:FuzzBalance ./calc/scenario:FuzzScenario ./calc/scenario:FuzzSheets ./calc/scenario:FuzzLinkDamage ./calc/scenario:FuzzParseRFC3339
 
 fuzz:
 	@failed=""; for t in $(FUZZ); do \
