@@ -75,8 +75,10 @@ NPM_DIR := app/testdata
 npm:
 	npm ci --prefix $(NPM_DIR) --no-audit --no-fund
 
+# The page checks take about 7 minutes on a quiet two-core machine; go
+# test's default 10-minute limit was reached on a loaded one.
 browser: site npm
-	FIELDHEAD_BROWSER=1 FIELDHEAD_SITE="$(abspath $(SITE))" $(GO) test -count=1 -v ./app
+	FIELDHEAD_BROWSER=1 FIELDHEAD_SITE="$(abspath $(SITE))" $(GO) test -count=1 -timeout 20m -v ./app
 
 # Each fuzz target for a bounded time. A failing input is written under the
 # package's testdata/fuzz/<target>/, where a plain go test replays it.
