@@ -1,6 +1,9 @@
 package calc
 
-import "strings"
+import (
+	"strings"
+	"sync"
+)
 
 // Catalogue is a family of pipe sizes under one standard, written in its
 // own notation.
@@ -79,13 +82,29 @@ func SteelDN(nps string) int {
 	if !ok {
 		return 0
 	}
-	for i, n := range frNPS {
-		if w, _ := frNPSValue(n); w == v {
+	return steelDN(v)
+}
+
+// steelDN is SteelDN of a size read as a number.
+func steelDN(v float64) int {
+	for i, w := range frNPSValues() {
+		if w == v {
 			return frSteelDN[i]
 		}
 	}
 	return 0
 }
+
+// frNPSValues is frNPS read as numbers, once: the pipe tables ask
+// SteelDN for every steel row as a page opens, and reading the list anew
+// each time made that first look-up cost ten times as much.
+var frNPSValues = sync.OnceValue(func() []float64 {
+	out := make([]float64, len(frNPS))
+	for i, n := range frNPS {
+		out[i], _ = frNPSValue(n)
+	}
+	return out
+})
 
 // SteelNPS returns the nominal pipe size ASME B36.10M lists beside DN dn
 // (200 → "8"; from memory), or "" for a DN not listed.

@@ -93,3 +93,12 @@ func TestPipeLabelsAndDN(t *testing.T) {
 		}
 	}
 }
+
+// BenchmarkPipeTables is the first look-up of a pipe size in a page's
+// life: every class's table built (frBuild), as the page does on opening
+// a sheet with a pipe from the catalogue.
+func BenchmarkPipeTables(b *testing.B) {
+	for b.Loop() {
+		frBuild()
+	}
+}

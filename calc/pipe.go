@@ -100,12 +100,8 @@ func frBuild() {
 	frNPSByCls = make(map[string][]float64, len(frClasses))
 	frSchedules = make(map[string]string, len(frClasses))
 	for _, c := range frClasses {
-		rows := frBuildClass(c.name)
+		rows, nps := frBuildClass(c.name)
 		frByClass[c.name] = rows
-		nps := make([]float64, len(rows))
-		for i, p := range rows {
-			nps[i], _ = frNPSValue(p.NPS)
-		}
 		frNPSByCls[c.name] = nps
 		if k := frScheduleKey(c.name); frSchedules[k] == "" {
 			frSchedules[k] = c.name
@@ -113,22 +109,24 @@ func frBuild() {
 	}
 }
 
-// frBuildClass builds the pipes of one canonical class name.
-func frBuildClass(sch string) []PipeSize {
+// frBuildClass builds the pipes of one canonical class name, with each
+// pipe's size as a number (0 when unreadable).
+func frBuildClass(sch string) ([]PipeSize, []float64) {
 	for _, c := range frClasses {
 		if c.name != sch {
 			continue
 		}
 		out := make([]PipeSize, 0, len(c.rows))
+		nps := make([]float64, 0, len(c.rows))
 		for _, r := range c.rows {
+			size, _ := frNPSValue(r.size)
 			od, wall := r.od, r.wall
 			if c.inch {
 				od, wall = od*25.4, wall*25.4
 			}
 			lining := 0.0
 			if c.cat == "di" {
-				dn, _ := frNPSValue(r.size)
-				lining = frLining(dn)
+				lining = frLining(size)
 			}
 			id := od - 2*(wall+lining)
 			if c.idRound > 0 {
@@ -138,13 +136,13 @@ func frBuildClass(sch string) []PipeSize {
 			p := PipeSize{Catalogue: c.cat, Standard: c.standard, NPS: r.size, Schedule: c.name,
 				OD: od / 1000, Wall: wall / 1000, Lining: lining / 1000, ID: id / 1000, FromMemory: c.memo}
 			if c.cat == "steel" || c.cat == "ss" {
-				p.DN = SteelDN(r.size)
+				p.DN = steelDN(size)
 			}
-			out = append(out, p)
+			out, nps = append(out, p), append(nps, size)
 		}
-		return out
+		return out, nps
 	}
-	return nil
+	return nil, nil
 }
 
 // frNormSchedule maps user spellings ("sch 40", "Sch40", "std", "40s",
