@@ -132,7 +132,7 @@ var (
 	bareOnly   = flag.Bool("bare-only", false, "only the bare page's first visit on the phone-class link")
 	editOnly   = flag.Bool("edits-only", false, "only the edit figures, on one loaded page (to compare builds quickly)")
 	partsOf    = flag.String("parts", "", "only list the code of this wasm (built without -s) by package, largest first")
-	profileTop = flag.Int("profile", 0, "with -edits-only: list this many functions of Chromium's CPU profile of the timed edits")
+	profileTop = flag.Int("profile", 0, "with -edits-only: list this many functions of Chromium's CPU profile of the timed edits; with -return-only, of the last offline reload")
 	returnOnly = flag.Bool("return-only", false, "only the return visits to a kept sheet: snapshot and live answer, online and offline")
 	partsFuncs = flag.Int("funcs", 60, "with -parts: list this many of the largest functions")
 	partsMatch = flag.String("match", "", "with -parts: list only the functions whose name matches this regular expression")
@@ -428,6 +428,8 @@ func (c *countingWriter) Write(b []byte) (int, error) {
 // answer (.prerendered #answer-value) was first painted: what a bare link
 // shows before the wasm runs.
 const shownJS = `(() => {
+  window.fieldheadLong = [];
+  try { new PerformanceObserver((l) => { for (const e of l.getEntries()) window.fieldheadLong.push(Math.round(e.startTime) + "+" + Math.round(e.duration)); }).observe({type: "longtask", buffered: true}); } catch (e) {}
   // The paint of the written answer, by the Element Timing API (the
   // figure carries elementtiming="answer-value").
   new PerformanceObserver((list) => {
@@ -637,6 +639,20 @@ const phasesJS = `(() => {
   const mark = (n) => { const e = performance.getEntriesByName(n)[0]; return e ? e.startTime : 0; };
   const w = performance.getEntriesByType("resource").find((e) => e.name.endsWith(".wasm"));
   return [w ? w.responseEnd : 0, mark("fieldhead-wasm-ready"), mark("fieldhead-main"), window.fieldheadFirstResult || 0, window.fieldheadShown || 0];
+})()`
+
+// snapPhasesJS words where a return visit's time went before the
+// snapshot's answer was painted, in ms from navigation start: the page
+// from the worker, prerender.js and the style sheets fetched, the snapshot
+// painted into the page (web/prerender.js marks it), the page read.
+const snapPhasesJS = `(() => {
+  const n = performance.getEntriesByType("navigation")[0] || {};
+  const res = (end) => { const e = performance.getEntriesByType("resource").filter((r) => r.name.endsWith(end)); return e.length ? Math.round(Math.max(...e.map((r) => r.responseEnd))) : 0; };
+  const mark = (m) => { const e = performance.getEntriesByName(m)[0]; return e ? Math.round(e.startTime) : 0; };
+  const fp = performance.getEntriesByType("paint").map((p) => p.name + " " + Math.round(p.startTime)).join(", ");
+  return "page from the worker " + Math.round(n.responseStart || 0) + "–" + Math.round(n.responseEnd || 0) +
+    ", prerender.js " + res(".js") + ", style sheets " + res(".css") + ", snapshot built " + mark("fieldhead-snapshot") +
+    ", page read " + Math.round(n.domInteractive || 0) + ", " + fp + ", snapshot answer painted " + Math.round(window.fieldheadSnapShown || 0) + "; long tasks " + window.fieldheadLong.join(" ");
 })()`
 
 // loadPhases reads the phases of the load the page just made.
@@ -957,6 +973,7 @@ func (r *report) browser(link, origin string) []string {
 type returns struct {
 	repeat, repeatSnap, off, offSnap []float64
 	dcl                              []float64 // the page read (DOMContentLoaded handled), when the snapshot is painted
+	snapPh                           []string  // where the time before the snapshot went (snapPhasesJS)
 	offPh                            []phases
 }
 
@@ -972,6 +989,10 @@ func returnVisits(s *browserSession, link string) returns {
 	}
 	snap := func() float64 {
 		ms, _ := chromedp.Run(s.ctx, chromedp.Evaluate[float64]("window.fieldheadSnapShown || 0"))
+		if ph, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](snapPhasesJS)); err == nil {
+			rv.snapPh = append(rv.snapPh, ph)
+			log.Printf("    before the snapshot: %s", ph)
+		}
 		dcl, _ := chromedp.Run(s.ctx, chromedp.Evaluate[float64](`(performance.getEntriesByType("navigation")[0] || {}).domContentLoadedEventEnd || 0`))
 		rv.dcl = append(rv.dcl, round1(dcl))
 		return round1(ms)
@@ -980,6 +1001,10 @@ func returnVisits(s *browserSession, link string) returns {
 		if err := chromedp.Do(s.ctx, chromedp.Navigate("about:blank")); err != nil {
 			log.Fatal(err)
 		}
+		stop := func() {}
+		if *traceTo != "" && i == *loads-1 {
+			stop = startTrace(s, *traceTo)
+		}
 		if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
 			log.Fatal(err)
 		}
@@ -987,6 +1012,7 @@ func returnVisits(s *browserSession, link string) returns {
 		if err != nil {
 			log.Fatalf("repeat visit %d: %v", i+1, err)
 		}
+		stop()
 		rv.repeat, rv.repeatSnap = append(rv.repeat, ms), append(rv.repeatSnap, snap())
 		log.Printf("  repeat visit %d: %.0f ms (snapshot answer painted %.0f ms)", i+1, ms, rv.repeatSnap[i])
 	}
@@ -994,6 +1020,10 @@ func returnVisits(s *browserSession, link string) returns {
 		log.Fatal(err)
 	}
 	for i := 0; i < *loads; i++ {
+		stop := func() {}
+		if *profileTop > 0 && i == *loads-1 {
+			stop = startProfile(s)
+		}
 		if err := chromedp.Do(s.ctx, chromedp.Reload()); err != nil {
 			log.Fatal(err)
 		}
@@ -1001,6 +1031,7 @@ func returnVisits(s *browserSession, link string) returns {
 		if err != nil {
 			log.Fatalf("offline reload %d: %v", i+1, err)
 		}
+		stop()
 		rv.off, rv.offSnap = append(rv.off, ms), append(rv.offSnap, snap())
 		rv.offPh = append(rv.offPh, s.loadPhases())
 		log.Printf("  offline reload %d: %.0f ms (snapshot answer painted %.0f ms; %s)", i+1, ms, rv.offSnap[i], rv.offPh[i])

@@ -187,3 +187,29 @@ func rendererCPU(profile string) float64 {
 	}
 	return total
 }
+
+// startProfile starts Chromium's sampling profiler in the page of s and
+// returns the function that stops it and lists the *profileTop functions
+// that took the most time (a reload keeps the page's V8 isolate, so the
+// profile spans it).
+func startProfile(s *browserSession) func() {
+	for _, err := range []error{
+		func() error { _, err := chromedp.Call(s.ctx, profiler.Enable, cdp.Empty{}); return err }(),
+		func() error {
+			_, err := chromedp.Call(s.ctx, profiler.SetSamplingInterval, profiler.SetSamplingIntervalParams{Interval: 100})
+			return err
+		}(),
+		func() error { _, err := chromedp.Call(s.ctx, profiler.Start, cdp.Empty{}); return err }(),
+	} {
+		if err != nil {
+			log.Fatal(err)
+		}
+	}
+	return func() {
+		res, err := chromedp.Call(s.ctx, profiler.Stop, cdp.Empty{})
+		if err != nil {
+			log.Fatal(err)
+		}
+		printProfile(res.Profile, *profileTop)
+	}
+}

@@ -1,0 +1,56 @@
+//go:build !wasm
+
+package main
+
+import (
+	"encoding/json"
+	"flag"
+	"log"
+	"os"
+
+	"github.com/chromedp/cdproto/cdp"
+	"github.com/chromedp/cdproto/tracing"
+	"github.com/chromedp/chromedp"
+)
+
+// traceTo is -trace: with -return-only, Chromium's trace of one repeat
+// visit (the last), written to this file in the trace event format that
+// chrome://tracing and Perfetto read.
+var traceTo = flag.String("trace", "", "with -return-only: write Chromium's trace of the last repeat visit to this file")
+
+// startTrace starts tracing the page of s and returns the function that
+// stops it and writes the trace to path.
+func startTrace(s *browserSession, path string) func() {
+	done := make(chan struct{})
+	var events []any
+	if err := chromedp.Listen(s.ctx, func(ev any) {
+		switch e := ev.(type) {
+		case *tracing.EventDataCollected:
+			for _, v := range e.Value {
+				events = append(events, v)
+			}
+		case *tracing.EventTracingComplete:
+			close(done)
+		}
+	}); err != nil {
+		log.Fatal(err)
+	}
+	cats := []string{"devtools.timeline", "v8.execute", "blink.user_timing", "loading", "disabled-by-default-devtools.timeline", "disabled-by-default-devtools.timeline.frame", "toplevel", "blink", "v8", "disabled-by-default-v8.compile"}
+	if _, err := chromedp.Call(s.ctx, tracing.Start, tracing.StartParams{TraceConfig: &tracing.TraceConfig{IncludedCategories: cats}}); err != nil {
+		log.Fatal(err)
+	}
+	return func() {
+		if _, err := chromedp.Call(s.ctx, tracing.End, cdp.Empty{}); err != nil {
+			log.Fatal(err)
+		}
+		<-done
+		b, err := json.Marshal(map[string]any{"traceEvents": events})
+		if err != nil {
+			log.Fatal(err)
+		}
+		if err := os.WriteFile(path, b, 0o644); err != nil {
+			log.Fatal(err)
+		}
+		log.Printf("trace of the last repeat visit: %s (%d events)", path, len(events))
+	}
+}
