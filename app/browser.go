@@ -41,11 +41,17 @@ func storageSet(key, value string) {
 // entry, keeping the path (and so a deployment sub-path).
 func replaceQuery(q string) {
 	defer func() { _ = recover() }()
-	path := app.Window().Get("location").Get("pathname").String()
+	loc := app.Window().Get("location")
+	search := ""
 	if q != "" {
-		path += "?" + q
+		search = "?" + q
 	}
-	app.Window().Get("history").Call("replaceState", nil, "", path)
+	// Opening a sheet from its own link (most returns) changes nothing:
+	// replaceState would cost a few ms of the first draw for no change.
+	if loc.Get("search").String() == search && loc.Get("hash").String() == "" {
+		return
+	}
+	app.Window().Get("history").Call("replaceState", nil, "", loc.Get("pathname").String()+search)
 }
 
 // nowText is the local date and time for the printed sheet. The browser's
