@@ -118,15 +118,18 @@ func (s *sheet) OnMount(ctx app.Context) {
 			s.drawnWhole(ctx)
 			return
 		}
-		// The rest of the cards once the first ones are painted: the next
-		// frame's callback runs after this one's paint.
+		// The rest of the cards once the first ones are painted: the
+		// second frame's callback runs after the first frame's paint and
+		// what the page queued behind it.
 		app.Window().Call("requestAnimationFrame", once(func(app.Value) {
-			app.Window().Call("setTimeout", once(func(app.Value) {
-				ctx.Dispatch(func(ctx app.Context) {
-					s.later = false
-					ctx.Defer(s.drawnWhole)
-				})
-			}), 0)
+			app.Window().Call("requestAnimationFrame", once(func(app.Value) {
+				app.Window().Call("setTimeout", once(func(app.Value) {
+					ctx.Dispatch(func(ctx app.Context) {
+						s.later = false
+						ctx.Defer(s.drawnWhole)
+					})
+				}), 0)
+			}))
 		}))
 	}
 }
