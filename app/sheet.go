@@ -43,7 +43,7 @@ type sheet struct {
 	mounted   map[*card]bool // the cards on the page (card.OnMount)
 	stale     bool           // cards redrawn alone since the sheet was last drawn (redrawCards)
 	cardsOnly int            // edits drawn by redrawCards
-	later     bool           // the first draw: cards past the first firstCards wait for the first paint
+	later     bool           // the first draw, on a page showing no sheet: cards past the first firstCards wait for the first paint
 }
 
 // firstCards is how many of a view's cards, in the order of its
@@ -84,7 +84,12 @@ func newSheet() app.Composer {
 		}
 	}
 	s.loaded = true
-	s.later = true
+	// Only a page that shows no sheet yet (a link's sheet with no
+	// snapshot of it: web/prerender.js) draws in two steps. Over the
+	// written demo or a snapshot, a first draw of three cards would take
+	// the lower cards off the screen for a frame or two.
+	cls := app.Window().Get("document").Get("documentElement").Get("classList")
+	s.later = !cls.Call("contains", "demo-page").Bool() && !cls.Call("contains", "snap-page").Bool()
 	s.wide = chartWidth()
 	return s
 }
