@@ -28,7 +28,8 @@ type sheet struct {
 	loaded  bool   // false while pre-rendered on the server, before the wasm runs
 
 	base      string         // page URL without the query
-	query     string         // the scenario's signed link, also in the URL and in localStorage
+	query     string         // the scenario's signed link, also in the URL and in localStorage (signedQuery)
+	signed    bool           // query is the current scenario's
 	damaged   bool           // opened from a link that arrived damaged, not yet edited
 	copyNote  string         // result of the last "Copy link"
 	showLink  bool           // show the link as selectable text
@@ -211,7 +212,7 @@ func (s *sheet) adopt(sc scenario.Scenario, linkErr string) {
 func (s *sheet) evaluate() {
 	s.testPanic("evaluate")
 	s.res = scenario.Evaluate(scenario.Read(s.d.Scen))
-	s.query = s.d.Scen.Sign()
+	s.signed = false // signed when first needed: most edits draw no link (signedQuery)
 	s.build()
 	s.save()
 }
@@ -272,10 +273,10 @@ func (s *sheet) flush() {
 	if app.IsClient {
 		app.Window().Set("fieldheadPending", false)
 	}
-	replaceQuery(s.query)
+	replaceQuery(s.signedQuery())
 	app.Window().Get("document").Set("title", pageTitle(s.vm.Name))
 	if !s.damaged { // a damaged link never replaces a kept sheet
-		storageSet(storageKey, s.query)
+		storageSet(storageKey, s.signedQuery())
 		s.bk.keep(s.d.Scen, s.res, s.damaged)
 		s.snapshot()
 	}
@@ -291,7 +292,7 @@ func (s *sheet) snapshot() {
 	}
 	defer func() { _ = recover() }() // a snapshot is a convenience: never a fault
 	if snap := app.Window().Get("fieldheadSnapshot"); snap.Truthy() {
-		snap.Call("take", s.query)
+		snap.Call("take", s.signedQuery())
 	}
 }
 
@@ -314,10 +315,21 @@ func (s *sheet) build() {
 
 // link is the full share link.
 func (s *sheet) link() string {
-	if s.query == "" {
-		return s.base
+	if q := s.signedQuery(); q != "" {
+		return s.base + "?" + q
 	}
-	return s.base + "?" + s.query
+	return s.base
+}
+
+// signedQuery is the sheet's link's query (scenario.Scenario.Sign), made
+// once per change when first asked for: signing costs about a tenth of an
+// edit's Go time, and an edit typed into a box draws no link (the address
+// bar and the saved copy wait for a pause in the typing).
+func (s *sheet) signedQuery() string {
+	if !s.signed {
+		s.query, s.signed = s.d.Scen.Sign(), true
+	}
+	return s.query
 }
 
 // Event handlers: each changes the Draft one way, then recomputes.
