@@ -346,6 +346,11 @@ func TestSnapshot(t *testing.T) {
 		if got := b.value("#in-z2"); got != z2 {
 			t.Errorf("%s, snapshot: z2 box %q, want %q as drawn", u, got, z2)
 		}
+		// The snapshot is painted as the parser opens the written sheet,
+		// which is dropped once read: one sheet, one answer.
+		if !b.jsBool(`document.querySelectorAll(".sheet").length === 1 && document.querySelectorAll("#answer-value").length === 1 && document.querySelector(".sheet").id === "sheet"`) {
+			t.Errorf("%s: the written sheet is still on the page beside the snapshot: %s", u, b.js(`[...document.querySelectorAll(".sheet")].map((e) => e.id + " " + e.className).join("; ")`))
+		}
 		if !b.jsBool(inert) {
 			t.Errorf("%s: a box or button of the snapshot is not inert", u)
 		}

@@ -114,12 +114,9 @@
     return el;
   };
 
-  // paint puts the snapshot's sheet in place of the written one, every
-  // part of it inert but main and its h1 (the landmarks the written page
-  // keeps too).
-  const paint = (root) => {
-    const sheet = document.getElementById("sheet");
-    if (!sheet || !sheet.classList.contains("prerendered")) return;
+  // paint draws the snapshot's sheet into sheet, every part of it inert
+  // but main and its h1 (the landmarks the written page keeps too).
+  const paint = (root, sheet) => {
     const cls = root[1] && typeof root[1].class === "string" ? root[1].class : "sheet";
     const kids = [];
     for (let i = 2; i < root.length; i++) {
@@ -154,20 +151,35 @@
     if (!snap || snap.q !== query || !Array.isArray(snap.root)) return; // another link: never shown
     // The written demo is not laid out meanwhile (fieldhead.css).
     document.documentElement.classList.add("snap-page");
-    // As soon as the written sheet has been read (the starting note follows
-    // it), not after the deferred scripts (DOMContentLoaded).
-    let done = false;
-    const now = () => {
-      if (done) return;
-      done = true;
+    // As soon as the parser opens the written sheet, not once it has read
+    // it: the snapshot takes its place (its id and classes) in a sheet of
+    // its own just before it, so that the browser's first paint shows it;
+    // the parser goes on filling the written sheet, set aside and hidden,
+    // which is dropped once read (the starting note follows it), before
+    // the wasm mounts on the body's first element.
+    let written = null;
+    const early = () => {
+      if (written) return;
+      const el = document.getElementById("sheet");
+      if (!el || !el.classList.contains("prerendered") || !el.parentNode) return;
+      written = el;
+      const box = document.createElement("div");
+      box.id = "sheet";
+      el.removeAttribute("id");
+      el.parentNode.insertBefore(box, el);
+      paint(snap.root, box);
+    };
+    const done = () => {
+      early();
       mo.disconnect();
-      paint(snap.root);
+      if (written) written.remove();
     };
     const mo = new MutationObserver(() => {
-      if (document.getElementById("app-wasm-loader")) now();
+      early();
+      if (document.getElementById("app-wasm-loader")) done();
     });
     mo.observe(document.documentElement, {childList: true, subtree: true});
-    document.addEventListener("DOMContentLoaded", now, {once: true});
+    document.addEventListener("DOMContentLoaded", done, {once: true});
   } catch (e) {
     // storage blocked or a snapshot unreadable: the written page as it was
   }
