@@ -171,3 +171,15 @@ func (s *sheet) onBlank(ctx app.Context, e app.Event) {
 	defer s.contain("starting a new sheet")
 	s.openNew(scenario.NextSheet(s.d.Scen)) // the open sheet stays in the site book
 }
+
+// lend puts in each card the first draw put off (.card-later) that card
+// as the page showed it before the wasm ran, inert (web/prerender.js,
+// fieldheadSnapshot.lend): the written demo or the kept sheet's snapshot,
+// which show only the sheet the wasm opens. A card shown by neither stays
+// empty until it is drawn.
+func lend() {
+	defer func() { _ = recover() }() // a convenience: never a fault
+	if snap := app.Window().Get("fieldheadSnapshot"); snap.Truthy() {
+		snap.Call("lend")
+	}
+}

@@ -12,6 +12,7 @@ import (
 	"time"
 
 	"github.com/chromedp/cdproto/network"
+	"github.com/chromedp/cdproto/page"
 	"github.com/chromedp/chromedp"
 
 	"fieldhead/calc/scenario"
@@ -394,15 +395,31 @@ func TestSnapshot(t *testing.T) {
 		t.Errorf("a changed snapshot's text: %q, want it kept as text", got)
 	}
 
-	// The wasm runs: the live sheet replaces the snapshot.
+	// The wasm runs: the live sheet replaces the snapshot. Its first draw
+	// holds the first cards; the others keep their place with the
+	// snapshot's card, inert, until they are drawn (lend).
 	block(false)
+	if _, err := chromedp.Call(b.ctx, page.AddScriptToEvaluateOnNewDocument, page.AddScriptToEvaluateOnNewDocumentParams{Source: `
+		window.fieldheadLent = [];
+		new MutationObserver(() => {
+			for (const c of document.querySelectorAll(".card-later > section.card")) {
+				if (!window.fieldheadLent.includes(c.id)) window.fieldheadLent.push(c.id + (c.inert ? "" : " (not inert)"));
+			}
+		}).observe(document, {childList: true, subtree: true});`}); err != nil {
+		t.Fatal(err)
+	}
 	b.js(`window.fieldheadFirstResult = 0; ""`)
 	b.navigate(kept)
 	if got := b.text("#answer-value"); got != keptAnswer {
 		t.Errorf("after the wasm: answer %q, want %q", got, keptAnswer)
 	}
-	if b.jsBool(`document.querySelector("#sheet [inert], .prerendered, .snapshot, #tampered") !== null`) {
-		t.Error("after the wasm the snapshot or an inert part remains")
+	if b.jsBool(`document.querySelector("#sheet [inert], .prerendered, .snapshot, #tampered, .card-later") !== null`) {
+		t.Error("after the wasm the snapshot, an inert part or a card's place remains")
+	}
+	lent := b.js(`window.fieldheadLent.join(", ")`)
+	t.Logf("cards shown from the snapshot while the first draw held the first cards: %s", lent)
+	if lent == "" || strings.Contains(lent, "not inert") {
+		t.Errorf("the cards put off by the first draw were not kept on screen from the snapshot, inert: %q", lent)
 	}
 
 	// An edit redraws the cards alone (redrawCards), and draws the answer.

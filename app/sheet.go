@@ -44,13 +44,14 @@ type sheet struct {
 	mounted   map[*card]bool // the cards on the page (card.OnMount)
 	stale     bool           // cards redrawn alone since the sheet was last drawn (redrawCards)
 	cardsOnly int            // edits drawn by redrawCards
-	later     bool           // the first draw, on a page showing no sheet: cards past the first firstCards wait for the first paint
+	later     bool           // the first draw: cards past the first firstCards wait for the first paint
 }
 
 // firstCards is how many of a view's cards, in the order of its
 // arrangement, the page draws before its first paint: the answer and the
 // inputs next to it. The others follow one frame later, so that the first
-// answer on screen does not wait for the charts and the long cards below.
+// answer on screen does not wait for the charts and the long cards below;
+// meanwhile they show as the page showed them before the wasm (lend).
 const firstCards = 3
 
 // newSheet is the route's component. In the browser it restores the
@@ -85,12 +86,7 @@ func newSheet() app.Composer {
 		}
 	}
 	s.loaded = true
-	// Only a page that shows no sheet yet (a link's sheet with no
-	// snapshot of it: web/prerender.js) draws in two steps. Over the
-	// written demo or a snapshot, a first draw of three cards would take
-	// the lower cards off the screen for a frame or two.
-	cls := app.Window().Get("document").Get("documentElement").Get("classList")
-	s.later = !cls.Call("contains", "demo-page").Bool() && !cls.Call("contains", "snap-page").Bool()
+	s.later = true
 	s.wide = chartWidth()
 	return s
 }
@@ -124,6 +120,10 @@ func (s *sheet) OnMount(ctx app.Context) {
 			s.drawnWhole(ctx)
 			return
 		}
+		// Until then, the cards put off keep the place they had before
+		// the wasm ran (the written demo or the kept sheet's snapshot,
+		// both of this very sheet), inert, rather than leave the screen.
+		lend()
 		// The rest of the cards once the first ones are painted: the
 		// second frame's callback runs after the first frame's paint and
 		// what the page queued behind it.
@@ -538,7 +538,8 @@ func (s *sheet) layout() app.UI {
 			if c, ok := byID[id]; ok && !used[id] {
 				used[id] = true
 				if s.later && drawn >= firstCards {
-					out = append(out, app.Div().Class("card-later"))
+					// Holds the card as shown before the wasm meanwhile (lend).
+					out = append(out, app.Div().Class("card-later").Attr("data-card", id))
 					continue
 				}
 				drawn++

@@ -136,12 +136,41 @@
     performance.mark("fieldhead-snapshot"); // make bench: where the time before it went
   };
 
-  window.fieldheadSnapshot = {take};
+  // shown is the sheet the page shows before the wasm runs, the written
+  // demo or the snapshot: only ever the sheet the wasm will open.
+  let shown = null;
+
+  // lend moves into the live sheet's first draw, in each place a card was
+  // put off (.card-later, app/sheet.go), that card as shown before the
+  // wasm ran, inert, until the live card takes its place a frame or two
+  // later; the sheet shown is off the page by then (the wasm mounted over
+  // it), so no id is on the page twice.
+  const lend = () => {
+    try {
+      const live = document.getElementById("sheet");
+      if (!shown || !live || live === shown || shown.isConnected) return;
+      const cards = new Map();
+      for (const c of shown.querySelectorAll("section.card[id]")) cards.set(c.id, c);
+      for (const slot of live.querySelectorAll(".card-later[data-card]")) {
+        const c = cards.get(slot.getAttribute("data-card"));
+        if (c && slot.childElementCount === 0) {
+          c.setAttribute("inert", "");
+          slot.appendChild(c);
+        }
+      }
+      shown = null;
+    } catch (e) {
+      // the places stay empty until the live cards are drawn
+    }
+  };
+
+  window.fieldheadSnapshot = {take, lend};
 
   try {
     const query = location.search.slice(1) || localStorage.getItem(KEY) || "";
     if (query === "") {
       document.documentElement.classList.add("demo-page");
+      document.addEventListener("DOMContentLoaded", () => { shown = document.getElementById("sheet"); }, {once: true});
       return;
     }
     const ck = new URLSearchParams(query).get("ck");
@@ -168,6 +197,7 @@
       el.removeAttribute("id");
       el.parentNode.insertBefore(box, el);
       paint(snap.root, box);
+      shown = box;
     };
     const done = () => {
       early();
