@@ -40,13 +40,13 @@ func (c *card) Render() (ui app.UI) {
 	if x.Title != "" {
 		h := app.H2()
 		if x.Num != "" {
-			title = h.Body(app.Span().Class("num").Text(x.Num), app.Text(" "+x.Title))
+			title = h.Body(spanText("num", x.Num), app.Text(" "+x.Title))
 		} else {
 			title = h.Text(x.Title)
 		}
 	}
 	if len(x.Controls) > 0 {
-		title = app.Div().Class("seghead").Body(title, app.Div().Class("segctl").Body(c.buttons(x.Controls)...))
+		title = divBody("seghead", title, divBody("segctl", c.buttons(x.Controls)...))
 	}
 	body := []app.UI{title}
 	for i := range x.Blocks {
@@ -73,10 +73,10 @@ func (c *card) block(b *present.Block) app.UI {
 		for i, f := range b.Fields {
 			fs[i] = &field{S: c.S, F: f}
 		}
-		return app.Div().Class("row2").Body(fs...)
+		return divBody("row2", fs...)
 	case present.BlockSwitch:
-		return app.Div().Class("switch").Body(
-			app.Span().Class("switch-label").Text(b.Switch.Label),
+		return divBody("switch",
+			spanText("switch-label", b.Switch.Label),
 			app.Div().Class("segs").Attr("role", "group").Aria("label", b.Switch.Label).Body(c.buttons(b.Switch.Sides)...))
 	case present.BlockText:
 		if b.Text == "" && len(b.Buttons) == 0 {
@@ -93,7 +93,7 @@ func (c *card) block(b *present.Block) app.UI {
 			p = p.ID(b.ID)
 		}
 		if len(b.Buttons) > 0 {
-			return app.Div().Class("field").Body(append([]app.UI{p}, c.buttons(b.Buttons)...)...)
+			return divBody("field", append([]app.UI{p}, c.buttons(b.Buttons)...)...)
 		}
 		return p
 	case present.BlockHeading:
@@ -119,7 +119,7 @@ func (c *card) block(b *present.Block) app.UI {
 		if cls == "" {
 			cls = "actions"
 		}
-		return app.Div().Class(cls).Body(c.buttons(b.Buttons)...)
+		return divBody(cls, c.buttons(b.Buttons)...)
 	case present.BlockFittings:
 		return c.fittings(b.Fittings)
 	case present.BlockDataSheet:
@@ -129,14 +129,14 @@ func (c *card) block(b *present.Block) app.UI {
 	case present.BlockNode:
 		n := b.Node
 		return app.Div().Class(classIf("node", n.Pump, "pump-node")).ID(n.ID).Body(
-			app.Span().Class("num").Text(n.Num), app.Strong().Text(" "+n.Title), app.Span().Class("muted").Text(" "+n.Detail))
+			spanText("num", n.Num), app.Strong().Text(" "+n.Title), spanText("muted", " "+n.Detail))
 	case present.BlockCard:
 		return &card{S: c.S, C: *b.Card}
 	case present.BlockImport:
 		// The browser's own file input is a small button with its own words;
 		// it lies, transparent, over a face of ours that shows the label at
 		// touch size (as a picker lies over .pickface).
-		return app.Div().Class("field filepick").Body(
+		return divBody("field filepick",
 			app.Input().Type("file").ID(b.ID).Class("file").Accept(".txt,text/plain").OnChange(c.S.onImport),
 			app.Label().For(b.ID).Class("fileface").Text(b.Text))
 	case present.BlockSurvey:
@@ -171,9 +171,9 @@ func button(s *sheet, b present.Button) app.UI {
 	}
 	switch {
 	case b.Label != "":
-		el = el.Body(app.Span().Aria("hidden", true).Text(b.Text), app.Span().Class("sr").Text(b.Label))
+		el = el.Body(app.Span().Aria("hidden", true).Text(b.Text), spanText("sr", b.Label))
 	case b.Hint != "":
-		el = el.Body(app.Span().Class("tab-name").Text(b.Text), app.Span().Class("tab-hint").Text(b.Hint))
+		el = el.Body(spanText("tab-name", b.Text), spanText("tab-hint", b.Hint))
 	default:
 		el = el.Text(b.Text)
 	}
@@ -225,7 +225,7 @@ func facts(b *present.Block) app.UI {
 		if f.ID != "" {
 			dd = dd.ID(f.ID)
 		}
-		items[i] = app.Div().Class(classIf("fact", f.Key, "key")).Body(app.Dt().Text(f.Label), dd)
+		items[i] = divBody(classIf("fact", f.Key, "key"), app.Dt().Text(f.Label), dd)
 	}
 	dl := app.Dl().Class("facts")
 	if b.ID != "" {
@@ -244,7 +244,7 @@ func warnings(items []string, head string) app.UI {
 		lis[i] = app.Li().Text(t)
 	}
 	return app.Div().Class("warnbox").Attr("role", "note").Body(
-		app.Div().Class("warnhead").Body(app.Span().Class("tag").Text("Warning"), app.Text(" "+head)),
+		divBody("warnhead", spanText("tag", "Warning"), app.Text(" "+head)),
 		app.Ul().Body(lis...))
 }
 
@@ -275,12 +275,12 @@ func table(t *present.Table) app.UI {
 				}
 				var body []app.UI
 				if c.Badge != "" {
-					body = append(body, app.Span().Class(c.Badge).Text(c.Text))
+					body = append(body, spanText(c.Badge, c.Text))
 				} else {
 					body = append(body, app.Text(c.Text))
 				}
 				if c.Error != "" {
-					body = append(body, app.Div().Class("msg err").ID(c.ErrorID).Body(app.Span().Class("tag").Text("Check"), app.Text(" "+c.Error)))
+					body = append(body, app.Div().Class("msg err").ID(c.ErrorID).Body(spanText("tag", "Check"), app.Text(" "+c.Error)))
 				}
 				tr = append(tr, td.Body(body...))
 			}
@@ -318,15 +318,15 @@ func budget(bu *present.Budget) app.UI {
 			}
 			rows = append(rows, app.Li().Class(classIf("brow", r.Unknown, "is-unknown")).Body(
 				app.Div().Class("blabel").Text(r.Label),
-				app.Div().Class("btrack").Body(app.Div().Class(cls).DataSet("w", r.Width)),
-				app.Div().Class("bval").Body(app.Strong().Text(r.Head), app.Span().Class("bpa").Text(r.Pressure)),
+				divBody("btrack", app.Div().Class(cls).DataSet("w", r.Width)),
+				divBody("bval", app.Strong().Text(r.Head), spanText("bpa", r.Pressure)),
 			))
 		}
 		if len(rows) == 0 {
 			rows = append(rows, app.Li().Class("brow muted").Text("nothing on this side"))
 		}
-		sides = append(sides, app.Div().Class("bside").Body(
-			app.H3().Body(app.Text(sd.Title), app.Span().Class("btotal").Text(" "+sd.Total)),
+		sides = append(sides, divBody("bside",
+			app.H3().Body(app.Text(sd.Title), spanText("btotal", " "+sd.Total)),
 			app.Ul().Class("bars").Body(rows...)))
 	}
 	return app.Div().Body(append(sides, app.P().Class("muted small").Text(bu.Note))...)
@@ -340,8 +340,8 @@ func (c *card) fittings(f *present.Fittings) app.UI {
 		var rows []app.UI
 		for _, it := range f.Items {
 			rows = append(rows, app.Li().Class("fit").Body(
-				app.Span().Class("fit-name").Body(app.Text(it.Name), app.Span().Class("fit-k").Text(" "+it.K)),
-				app.Div().Class("stepper").Body(button(c.S, it.Less), app.Span().Class("count").Text(strconv.Itoa(it.Count)), button(c.S, it.More)),
+				app.Span().Class("fit-name").Body(app.Text(it.Name), spanText("fit-k", " "+it.K)),
+				divBody("stepper", button(c.S, it.Less), spanText("count", strconv.Itoa(it.Count)), button(c.S, it.More)),
 			))
 		}
 		body = append(body, app.Ul().Class("fits").Body(rows...))
@@ -351,21 +351,21 @@ func (c *card) fittings(f *present.Fittings) app.UI {
 	}
 	body = append(body, app.Details().Class("astext").Open(f.Open).Body(
 		app.Summary().Text("Fittings as text"), &field{S: c.S, F: f.AsText}))
-	return app.Div().Class("field fittings").Body(body...)
+	return divBody("field fittings", body...)
 }
 
 // dataSheet draws the pump's data-sheet table.
 func (c *card) dataSheet(d *present.DataSheet) app.UI {
 	head := []app.UI{app.Th().Scope("col").Text("#")}
 	for _, col := range d.Columns {
-		label := []app.UI{app.Span().Class("colname").Text(col.Head)}
+		label := []app.UI{spanText("colname", col.Head)}
 		if col.Optional {
-			label = append(label, app.Span().Class("hint").Text(" optional"))
+			label = append(label, spanText("hint", " optional"))
 		}
 		head = append(head, app.Th().Scope("col").Body(app.Div().Body(label...),
 			&selectBox{ID: col.UnitID, Class: "unit", Label: "unit of the " + col.Name, Options: col.Units, Param: col.Param, List: true, S: c.S}))
 	}
-	head = append(head, app.Th().Scope("col").Body(app.Span().Class("sr").Text("remove")))
+	head = append(head, app.Th().Scope("col").Body(spanText("sr", "remove")))
 	var rows []app.UI
 	for _, r := range d.Rows {
 		tr := []app.UI{app.Th().Scope("row").Text(r.Num)}
@@ -387,7 +387,7 @@ func (c *card) dataSheet(d *present.DataSheet) app.UI {
 	for _, col := range d.Columns {
 		if col.Error != "" {
 			body = append(body, app.P().ID("err-"+col.Param).Class("msg err").Attr("role", "alert").Body(
-				app.Span().Class("tag").Text("Check"), app.Text(" "+col.Error)))
+				spanText("tag", "Check"), app.Text(" "+col.Error)))
 		} else {
 			body = append(body, app.Div().Class("slot"))
 		}
@@ -398,5 +398,5 @@ func (c *card) dataSheet(d *present.DataSheet) app.UI {
 		text = append(text, &field{S: c.S, F: f})
 	}
 	body = append(body, app.Details().Class("astext").Body(append([]app.UI{app.Summary().Text("Data sheet as text")}, text...)...))
-	return app.Div().Class("datasheet-wrap").Body(body...)
+	return divBody("datasheet-wrap", body...)
 }

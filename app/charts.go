@@ -73,9 +73,9 @@ func chartSVG(c *present.Chart, w int, print bool) string {
 // shown in print only: the screen's copy, drawn for a phone, would print
 // narrow or tall.
 func chartFigure(c *present.Chart, w int, paper bool) app.UI {
-	body := []app.UI{app.Div().Class(classIf("chart", paper, "screen-only")).Body(app.Raw(chartSVG(c, w, false)))}
+	body := []app.UI{divBody(classIf("chart", paper, "screen-only"), app.Raw(chartSVG(c, w, false)))}
 	if paper {
-		body = append(body, app.Div().Class("chart print-only").Body(app.Raw(chartSVG(c, printChartWidth, true))))
+		body = append(body, divBody("chart print-only", app.Raw(chartSVG(c, printChartWidth, true))))
 	}
 	if c.Caption != "" {
 		body = append(body, app.P().Class("caption").Text(c.Caption))

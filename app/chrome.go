@@ -18,7 +18,7 @@ type topBar struct {
 // Render draws the bar.
 func (t *topBar) Render() (ui app.UI) {
 	defer containPart(t.S, "the top bar", &ui)
-	brand := app.Div().Class("brand").Body(app.Raw(brandMark), app.Span().Text("Fieldhead"))
+	brand := divBody("brand", app.Raw(brandMark), app.Span().Text("Fieldhead"))
 	tabs := make([]app.UI, len(t.Tabs))
 	for i, b := range t.Tabs {
 		tabs[i] = button(t.S, b)
@@ -30,8 +30,8 @@ func (t *topBar) Render() (ui app.UI) {
 	return app.Header().Class("topbar").Body(
 		brand,
 		app.Nav().Class("tabs").Aria("label", "views").Body(tabs...),
-		app.Div().Class("units").Body(
-			app.Span().Class("switch-label").Text("Units"),
+		divBody("units",
+			spanText("switch-label", "Units"),
 			app.Div().Class("segs").Attr("role", "group").Aria("label", "unit system").Body(units...),
 		),
 	)
@@ -58,7 +58,7 @@ func (s *sheet) shareRow() app.UI {
 		body = append(body, app.Input().Type("text").ID("share-url").Class("box wide link").
 			ReadOnly(true).Aria("label", "share link").Value(s.link()))
 	}
-	return app.Div().Class("share").Body(body...)
+	return divBody("share", body...)
 }
 
 // act is a button of the page's own (not of the view model); not inlined,
@@ -128,7 +128,7 @@ func (s *sheet) linkProblem() app.UI {
 		return nil
 	}
 	return app.Div().Class("banner").ID("link-error").Attr("role", "alert").Body(
-		app.Span().Class("tag").Text("Link"),
+		spanText("tag", "Link"),
 		app.Text(" "+present.LinkBanner(s.linkErr, s.damaged)),
 	)
 }
@@ -140,7 +140,7 @@ func (s *sheet) unverified() app.UI {
 		return nil
 	}
 	return app.Div().Class("banner unverified-note").ID("unverified").Attr("role", "alert").Body(
-		app.Span().Class("tag").Text("Unverified"), app.Text(" "+s.vm.Unverified+" "), button(s, s.vm.Verify))
+		spanText("tag", "Unverified"), app.Text(" "+s.vm.Unverified+" "), button(s, s.vm.Verify))
 }
 
 // storeBanner says when sheets cannot be kept on this device.
@@ -149,7 +149,7 @@ func (s *sheet) storeBanner() app.UI {
 		return nil
 	}
 	return app.Div().Class("banner").ID("store-problem").Attr("role", "status").Body(
-		app.Span().Class("tag").Text("Device"),
+		spanText("tag", "Device"),
 		app.Text(" Sheets cannot be kept on this device ("+s.bk.problem+"). This sheet still works from its link: copy the link to keep it."))
 }
 
@@ -163,7 +163,7 @@ func others(items []string) app.UI {
 		lis[i] = app.Li().Text(t)
 	}
 	return app.Div().Class("banner").ID("other-errors").Attr("role", "alert").Body(
-		app.Span().Class("tag").Text("Check"),
+		spanText("tag", "Check"),
 		app.Text(" Inputs of this sheet not shown here:"),
 		app.Ul().Body(lis...),
 	)
@@ -187,8 +187,8 @@ func (s *sheet) printHead() app.UI {
 	if s.vm.View != "report" { // printed with the browser's own command, not Print sheet
 		note = app.P().Class("print-note").Text("This is the input form of one view. Print sheet prints the whole record: inputs, results, charts, link and signatures.")
 	}
-	return app.Div().Class("print-only").Body(
-		app.Div().Class("printhead").Body(
+	return divBody("print-only",
+		divBody("printhead",
 			app.Div().Class("ph-name").Text("Fieldhead — "+s.vm.Name),
 			app.Div().Class("ph-date").Text("Printed "+nowText())),
 		note,
@@ -204,9 +204,9 @@ func (s *sheet) printFoot() app.UI {
 		}
 		names = append(names, app.Text(m.What+sep))
 	}
-	return app.Div().Class("print-only printfoot").Body(
+	return divBody("print-only printfoot",
 		app.P().Body(append([]app.UI{app.Strong().Text("Methods (listed on the Report view): ")}, names...)...),
-		app.P().Body(app.Strong().Text("This sheet as a link: "), app.Span().Class("linktext").Text(s.link())),
+		app.P().Body(app.Strong().Text("This sheet as a link: "), spanText("linktext", s.link())),
 	)
 }
 
@@ -221,10 +221,10 @@ func linkRecord(link string) app.UI {
 	}
 	var qr app.UI = app.Div().Class("slot")
 	if code != "" {
-		qr = app.Div().Class("qrbox").Body(app.Raw(code))
+		qr = divBody("qrbox", app.Raw(code))
 	}
-	return app.Div().Class("linkrec").Body(qr,
-		app.Div().Class("linkwords").Body(
+	return divBody("linkrec", qr,
+		divBody("linkwords",
 			app.P().Class("linkshort").ID("report-short-url").Text(shortLink(link)),
 			app.P().Class("muted small").Text(say),
 			app.P().Class("linktext screen-only").ID("report-url").Text(link),
@@ -240,10 +240,10 @@ func (s *sheet) signoff() app.UI {
 	}
 	who := func(role string) app.UI {
 		line := func(what string) app.UI {
-			return app.Div().Class("signfield").Body(app.Div().Class("signline"), app.Span().Class("signlabel").Text(what))
+			return divBody("signfield", app.Div().Class("signline"), spanText("signlabel", what))
 		}
-		return app.Div().Class("signrow").Body(app.H3().Text(role),
-			app.Div().Class("signfields").Body(line("name"), line("signature"), line("date")))
+		return divBody("signrow", app.H3().Text(role),
+			divBody("signfields", line("name"), line("signature"), line("date")))
 	}
 	return app.Section().Class("card rsec signoff").ID("signoff").Body(
 		app.H2().Text("Signed for the record"),

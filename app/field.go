@@ -30,14 +30,14 @@ func (f *field) Render() (ui app.UI) {
 				Class(classIf("seg", o.Selected, "on")).Aria("pressed", o.Selected).Text(o.Text).
 				OnClick(f.S.onAct(present.Action{Do: "choose", Param: x.Param, Value: o.Value}), app.EventScope(x.Param, o.Value)))
 		}
-		return app.Div().Class("ref").Body(append([]app.UI{
+		return divBody("ref", append([]app.UI{
 			app.Div().Class("segs small").Attr("role", "group").Aria("label", x.Label).Body(btns...)}, notes(f.S, x)...)...)
 	case present.FieldSolved:
 		return app.Div().Class("field is-unknown").ID("f-" + present.DomID(x.Param)).Body(append([]app.UI{
 			app.Div().Class("lbl").Text(x.Label),
 			app.Div().Class("solved").ID("solved-"+x.Param).Body(
-				app.Span().Class("tag").Text("Unknown"),
-				app.Span().Class("solved-val").Text(x.Solved)),
+				spanText("tag", "Unknown"),
+				spanText("solved-val", x.Solved)),
 		}, notes(f.S, x)...)...)
 	}
 	bad := x.Error != ""
@@ -50,7 +50,7 @@ func (f *field) Render() (ui app.UI) {
 		// hidden from screen readers, which read the picker itself).
 		body = []app.UI{
 			app.Label().For(x.ID).Class("lbl").Text(x.Label),
-			app.Div().Class("pickwrap").Body(
+			divBody("pickwrap",
 				&selectBox{ID: x.ID, Class: classIf("pick", bad, "bad"), Options: x.Options, Param: x.Param, S: f.S},
 				app.Div().Class("pickface").Aria("hidden", true).Text(chosen(x.Options))),
 		}
@@ -72,7 +72,7 @@ func (f *field) Render() (ui app.UI) {
 		if x.Kind == present.FieldPlain {
 			body = []app.UI{label, in}
 		} else {
-			body = []app.UI{label, app.Div().Class("entry").Body(in,
+			body = []app.UI{label, divBody("entry", in,
 				&selectBox{ID: "unit-" + present.DomID(x.Param), Class: "unit", Label: "unit of " + x.Label, Options: x.Options, Param: x.Param, Unit: true, S: f.S})}
 		}
 	}
@@ -86,17 +86,17 @@ func notes(s *sheet, x present.Field) []app.UI {
 	var out []app.UI
 	if x.Error != "" {
 		out = append(out, app.P().ID("err-"+present.DomID(x.Param)).Class("msg err").Attr("role", "alert").Body(
-			app.Span().Class("tag").Text("Check"), app.Text(" "+x.Error)))
+			spanText("tag", "Check"), app.Text(" "+x.Error)))
 	}
 	if x.Suspect != "" {
-		out = append(out, app.P().Class("msg warn suspect").Body(app.Span().Class("tag").Text("Check"), app.Text(" "+x.Suspect)))
+		out = append(out, app.P().Class("msg warn suspect").Body(spanText("tag", "Check"), app.Text(" "+x.Suspect)))
 	}
 	if x.Keep != nil {
 		out = append(out, app.P().Class("msg keep").Body(button(s, *x.Keep)))
 	}
 	if x.Warn {
 		out = append(out, app.P().Class("msg warn").Body(
-			app.Span().Class("tag").Text("Warning"), app.Text(" about this value: read it beside the result")))
+			spanText("tag", "Warning"), app.Text(" about this value: read it beside the result")))
 	}
 	return out
 }
@@ -106,7 +106,7 @@ func hint(h string) app.UI {
 	if h == "" {
 		return nil
 	}
-	return app.Span().Class("hint").Text(" " + h)
+	return spanText("hint", " "+h)
 }
 
 // selectBox is a <select> drawn as a component, so that its options are

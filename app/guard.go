@@ -104,7 +104,7 @@ func (s *sheet) faultBanner() app.UI {
 		return nil
 	}
 	return app.Div().Class("banner fault").ID("fault").Attr("role", "alert").Body(
-		app.Span().Class("tag").Text("Fault"),
+		spanText("tag", "Fault"),
 		app.Text(" Fieldhead hit an internal error while "+s.fault.what+" ("+s.fault.msg+"). "+
 			"Your inputs are kept, in the boxes, in the link and on this device; change any of them to try again."),
 		act("fault-dismiss", "act", "Dismiss", func(ctx app.Context, e app.Event) { s.fault = nil }),

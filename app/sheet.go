@@ -509,13 +509,13 @@ func (s *sheet) Render() (ui app.UI) {
 	return root.Body(
 		s.printHead(),
 		&topBar{S: s, Tabs: vm.Tabs, Units: vm.Units},
-		app.Div().Class("notices").Body(s.faultBanner(), s.updateBanner(), s.storeBanner()), // always there: a notice must not move the inputs
+		divBody("notices", s.faultBanner(), s.updateBanner(), s.storeBanner()), // always there: a notice must not move the inputs
 		pre(app.Div().Class("titlerow")).Attr("role", "region").Aria("label", "sheet").Body(&field{S: s, F: vm.Title}, s.shareRow()),
 		s.linkProblem(),
 		s.unverified(),
 		app.Main().Body(
 			app.H1().Class("sr").Text(h1),
-			app.Div().Class("notices").Body(others(vm.Others)), // a stable slot: the list appearing must not re-create the inputs
+			divBody("notices", others(vm.Others)), // a stable slot: the list appearing must not re-create the inputs
 			lay, s.signoff()),
 		cautions(vm.Cautions),
 		s.printFoot(),
@@ -554,7 +554,7 @@ func (s *sheet) layout() app.UI {
 		for _, in := range a.in {
 			body = append(body, place(in))
 		}
-		return app.Div().Class(a.class).Body(body...)
+		return divBody(a.class, body...)
 	}
 	var root app.UI
 	for _, l := range layouts {
@@ -571,7 +571,7 @@ func (s *sheet) layout() app.UI {
 			rest = append(rest, c.ID)
 		}
 	}
-	return app.Div().Body(root, app.Div().Class("stack").Body(cards(rest)...))
+	return app.Div().Body(root, divBody("stack", cards(rest)...))
 }
 
 // area is a <div> of a view's arrangement: the cards it holds, then the

@@ -85,7 +85,7 @@ func (s *sheet) updateBanner() app.UI {
 		return nil
 	}
 	return app.Div().Class("banner update").ID("update").Attr("role", "status").Body(
-		app.Span().Class("tag").Text("New"),
+		spanText("tag", "New"),
 		app.Text(" An updated Fieldhead is installed on this device. Switch to it now; this sheet and every input come along. "),
 		act("update-reload", "act main", "Switch to the update", func(ctx app.Context, e app.Event) {
 			defer s.contain("reloading for the new version")

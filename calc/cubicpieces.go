@@ -20,7 +20,7 @@ func cubicBreaks(df func(float64) float64, a, b float64, knots []float64) []floa
 		}
 	}
 	xs = append(xs, b)
-	sort.Float64s(xs)
+	sortFloat64s(xs)
 	out := make([]float64, 0, 3*len(xs))
 	for i := 0; i+1 < len(xs); i++ {
 		lo, hi := xs[i], xs[i+1]
@@ -41,8 +41,16 @@ func cubicBreaks(df func(float64) float64, a, b float64, knots []float64) []floa
 		}
 	}
 	out = append(out, b)
-	sort.Float64s(out)
+	sortFloat64s(out)
 	return out
+}
+
+// sortFloat64s sorts x as sort.Float64s does (NaNs first), to the same
+// order: sort.Slice runs the same pattern-defeating quicksort on the same
+// comparison, and its code is in the wasm already, where sort.Float64s
+// would add a copy of the sort for float64 (about 14 KB).
+func sortFloat64s(x []float64) {
+	sort.Slice(x, func(i, j int) bool { return x[i] < x[j] || (x[i] != x[i] && x[j] == x[j]) })
 }
 
 // quadRoots returns the real roots of A s² + B s + C; a quadratic term

@@ -55,7 +55,10 @@ type Param struct {
 }
 
 // Table lists every parameter in the order Encode writes them; segment
-// parameters (sN.…) follow the single run's.
+// parameters (sN.…) follow the single run's. A row without a Kind is a
+// quantity (KindQuantity is the zero Kind). The rows are plain values, no
+// calls, so that the compiler lays the table out as data: built by calls
+// at start-up it was 48 KB of init code in the wasm.
 var Table = []Param{
 	{Name: "view", Label: "view", Kind: KindChoice, choices: func() []Choice {
 		return []Choice{{"balance", "Balance"}, {"convert", "Convert"}, {"regime", "Run and sizes"},
@@ -68,32 +71,32 @@ var Table = []Param{
 		return []Choice{{"water", "Water"}, {"seawater", "Seawater or brine"}, {"eg", "Ethylene glycol in water"},
 			{"pg", "Propylene glycol in water"}, {"custom", "Other liquid (typed properties)"}}
 	}},
-	grp(q("gly", "glycol share by mass", "Glycol share", "(% by mass)", calc.Dimensionless, "%", "%", "enter the glycol share of the mix, e.g. 30 % by mass"), "gly"),
-	grp(q("glyv", "glycol share by volume", "Glycol share", "(% by volume, glycol and water measured apart)", calc.Dimensionless, "%", "%", "enter the glycol share of the mix by volume, e.g. 30 %"), "gly"),
-	q("t", "temperature", "Temperature", "", calc.Temperature, "°C", "°F", "enter the liquid temperature"),
-	q("rho", "density", "Density", "", calc.Density, "kg/m³", "lb/ft³", "enter the liquid's density"),
-	q("mu", "viscosity", "Viscosity", "(dynamic)", calc.DynamicViscosity, "mPa·s", "cP", "enter the liquid's dynamic viscosity"),
-	q("pv", "vapour pressure", "Vapour pressure", "(absolute)", calc.Pressure, "kPa", "psi", "enter the liquid's vapour pressure (absolute; 0 if negligible)"),
-	grp(q("alt", "site altitude", "Site altitude", "(above sea level)", calc.Length, "m", "ft", "enter the site altitude"), "site"),
-	grp(q("baro", "barometer", "Barometer", "(absolute)", calc.Pressure, "kPa", "psi", "enter the barometer reading"), "site"),
-	q("pl", "line pressure", "Line pressure", "(blank: mean of the points, else the site)", calc.Pressure, "kPa", "psi", "enter the pressure in the line"),
-	ref("plref", "gauge/absolute of the line pressure"),
+	{Name: "gly", Label: "glycol share by mass", Box: "Glycol share", Hint: "(% by mass)", Dim: calc.Dimensionless, SI: "%", US: "%", Group: "gly", Missing: "enter the glycol share of the mix, e.g. 30 % by mass"},
+	{Name: "glyv", Label: "glycol share by volume", Box: "Glycol share", Hint: "(% by volume, glycol and water measured apart)", Dim: calc.Dimensionless, SI: "%", US: "%", Group: "gly", Missing: "enter the glycol share of the mix by volume, e.g. 30 %"},
+	{Name: "t", Label: "temperature", Box: "Temperature", Dim: calc.Temperature, SI: "°C", US: "°F", Missing: "enter the liquid temperature"},
+	{Name: "rho", Label: "density", Box: "Density", Dim: calc.Density, SI: "kg/m³", US: "lb/ft³", Missing: "enter the liquid's density"},
+	{Name: "mu", Label: "viscosity", Box: "Viscosity", Hint: "(dynamic)", Dim: calc.DynamicViscosity, SI: "mPa·s", US: "cP", Missing: "enter the liquid's dynamic viscosity"},
+	{Name: "pv", Label: "vapour pressure", Box: "Vapour pressure", Hint: "(absolute)", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the liquid's vapour pressure (absolute; 0 if negligible)"},
+	{Name: "alt", Label: "site altitude", Box: "Site altitude", Hint: "(above sea level)", Dim: calc.Length, SI: "m", US: "ft", Group: "site", Missing: "enter the site altitude"},
+	{Name: "baro", Label: "barometer", Box: "Barometer", Hint: "(absolute)", Dim: calc.Pressure, SI: "kPa", US: "psi", Group: "site", Missing: "enter the barometer reading"},
+	{Name: "pl", Label: "line pressure", Box: "Line pressure", Hint: "(blank: mean of the points, else the site)", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the pressure in the line"},
+	{Name: "plref", Label: "gauge/absolute of the line pressure", Kind: KindChoice, choices: refChoices},
 
-	q("p1", "pressure at 1", "Pressure", "", calc.Pressure, "kPa", "psi", "enter the pressure at point 1 (0 for a surface open to the air)"),
-	ref("p1ref", "gauge/absolute at 1"),
-	q("z1", "elevation of 1", "Elevation", "", calc.Length, "m", "ft", "enter the elevation of point 1"),
-	grp(q("v1", "velocity at 1", "Mean velocity", "(0 at a tank surface)", calc.Velocity, "m/s", "ft/s", "enter the velocity at point 1 (0 for a large tank surface), or its diameter"), "pt1"),
-	grp(q("d1", "diameter at 1", "Inside diameter", "(velocity = flow ÷ area)", calc.Length, "mm", "in", "enter the inside diameter at point 1"), "pt1"),
-	q("p2", "pressure at 2", "Pressure", "", calc.Pressure, "kPa", "psi", "enter the pressure at point 2 (0 for a surface open to the air)"),
-	ref("p2ref", "gauge/absolute at 2"),
-	q("z2", "elevation of 2", "Elevation", "", calc.Length, "m", "ft", "enter the elevation of point 2"),
-	grp(q("v2", "velocity at 2", "Mean velocity", "(0 at a tank surface)", calc.Velocity, "m/s", "ft/s", "enter the velocity at point 2 (0 for a large tank surface), or its diameter"), "pt2"),
-	grp(q("d2", "diameter at 2", "Inside diameter", "(velocity = flow ÷ area)", calc.Length, "mm", "in", "enter the inside diameter at point 2"), "pt2"),
+	{Name: "p1", Label: "pressure at 1", Box: "Pressure", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the pressure at point 1 (0 for a surface open to the air)"},
+	{Name: "p1ref", Label: "gauge/absolute at 1", Kind: KindChoice, choices: refChoices},
+	{Name: "z1", Label: "elevation of 1", Box: "Elevation", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the elevation of point 1"},
+	{Name: "v1", Label: "velocity at 1", Box: "Mean velocity", Hint: "(0 at a tank surface)", Dim: calc.Velocity, SI: "m/s", US: "ft/s", Group: "pt1", Missing: "enter the velocity at point 1 (0 for a large tank surface), or its diameter"},
+	{Name: "d1", Label: "diameter at 1", Box: "Inside diameter", Hint: "(velocity = flow ÷ area)", Dim: calc.Length, SI: "mm", US: "in", Group: "pt1", Missing: "enter the inside diameter at point 1"},
+	{Name: "p2", Label: "pressure at 2", Box: "Pressure", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the pressure at point 2 (0 for a surface open to the air)"},
+	{Name: "p2ref", Label: "gauge/absolute at 2", Kind: KindChoice, choices: refChoices},
+	{Name: "z2", Label: "elevation of 2", Box: "Elevation", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the elevation of point 2"},
+	{Name: "v2", Label: "velocity at 2", Box: "Mean velocity", Hint: "(0 at a tank surface)", Dim: calc.Velocity, SI: "m/s", US: "ft/s", Group: "pt2", Missing: "enter the velocity at point 2 (0 for a large tank surface), or its diameter"},
+	{Name: "d2", Label: "diameter at 2", Box: "Inside diameter", Hint: "(velocity = flow ÷ area)", Dim: calc.Length, SI: "mm", US: "in", Group: "pt2", Missing: "enter the inside diameter at point 2"},
 
-	grp(q("q", "flow", "Flow", "", calc.Flow, "L/s", "gpm", "enter the flow, or the heat load it carries"), "qby"),
-	q("hp", "pump head", "Pump head", "(added; blank if none)", calc.Length, "m", "ft", "enter the pump head (0 if there is no pump)"),
-	q("ht", "turbine head", "Turbine head", "(taken; blank if none)", calc.Length, "m", "ft", "enter the turbine head (0 if there is no turbine)"),
-	grp(q("hf", "friction head", "Friction head", "(all losses, 1 to 2)", calc.Length, "m", "ft", "enter the friction head, or describe the pipe run to compute it"), "fric"),
+	{Name: "q", Label: "flow", Box: "Flow", Dim: calc.Flow, SI: "L/s", US: "gpm", Group: "qby", Missing: "enter the flow, or the heat load it carries"},
+	{Name: "hp", Label: "pump head", Box: "Pump head", Hint: "(added; blank if none)", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the pump head (0 if there is no pump)"},
+	{Name: "ht", Label: "turbine head", Box: "Turbine head", Hint: "(taken; blank if none)", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the turbine head (0 if there is no turbine)"},
+	{Name: "hf", Label: "friction head", Box: "Friction head", Hint: "(all losses, 1 to 2)", Dim: calc.Length, SI: "m", US: "ft", Group: "fric", Missing: "enter the friction head, or describe the pipe run to compute it"},
 	{Name: "solve", Label: "solve for", Kind: KindChoice, choices: func() []Choice {
 		return []Choice{
 			{"hp", "pump head"}, {"ht", "turbine head"}, {"hf", "friction head"},
@@ -105,14 +108,14 @@ var Table = []Param{
 		return []Choice{{"auto", "from the regime (2 laminar, 1 turbulent)"}, {"1", "1 everywhere"}, {"pl", "power-law profile estimate"}}
 	}},
 
-	seg(grp(q("l", "length of the run", "Length of the run", "", calc.Length, "m", "ft", "enter the length of the pipe run"), "fric"), "length", "Length"),
-	seg(grp(q("d", "inside diameter", "Inside diameter", "", calc.Length, "mm", "in", "enter the inside diameter, or pick a nominal size and schedule"), "pipe"), "inside diameter", ""),
-	seg(grp(Param{Name: "nps", Label: "nominal size", Box: "Nominal size", Kind: KindChoice, choices: npsChoices}, "pipe"), "nominal size", ""),
-	seg(grp(Param{Name: "sch", Label: "schedule", Box: "Schedule or class", Kind: KindChoice, choices: schChoices}, "pipe"), "schedule", ""),
-	seg(grp(Param{Name: "mat", Label: "material", Box: "Material", Kind: KindChoice, choices: matChoices}, "rough"), "material", ""),
-	seg(grp(q("eps", "roughness", "Absolute roughness", "", calc.Length, "mm", "in", "enter the roughness, or pick a material"), "rough"), "roughness", ""),
-	seg(Param{Name: "fit", Label: "fittings", Box: "Fittings", Kind: KindFittings, choices: fitChoices}, "fittings", ""),
-	seg(Param{Name: "k", Label: "extra ΣK", Box: "Extra loss coefficient ΣK", Hint: "(optional)", Kind: KindNumber}, "extra ΣK", ""),
+	{Name: "l", Label: "length of the run", Box: "Length of the run", Dim: calc.Length, SI: "m", US: "ft", Segment: true, SegLabel: "length", SegBox: "Length", Group: "fric", Missing: "enter the length of the pipe run"},
+	{Name: "d", Label: "inside diameter", Box: "Inside diameter", Dim: calc.Length, SI: "mm", US: "in", Segment: true, SegLabel: "inside diameter", SegBox: "Inside diameter", Group: "pipe", Missing: "enter the inside diameter, or pick a nominal size and schedule"},
+	{Name: "nps", Label: "nominal size", Box: "Nominal size", Kind: KindChoice, Segment: true, SegLabel: "nominal size", SegBox: "Nominal size", Group: "pipe", choices: npsChoices},
+	{Name: "sch", Label: "schedule", Box: "Schedule or class", Kind: KindChoice, Segment: true, SegLabel: "schedule", SegBox: "Schedule or class", Group: "pipe", choices: schChoices},
+	{Name: "mat", Label: "material", Box: "Material", Kind: KindChoice, Segment: true, SegLabel: "material", SegBox: "Material", Group: "rough", choices: matChoices},
+	{Name: "eps", Label: "roughness", Box: "Absolute roughness", Dim: calc.Length, SI: "mm", US: "in", Segment: true, SegLabel: "roughness", SegBox: "Absolute roughness", Group: "rough", Missing: "enter the roughness, or pick a material"},
+	{Name: "fit", Label: "fittings", Box: "Fittings", Kind: KindFittings, Segment: true, SegLabel: "fittings", SegBox: "Fittings", choices: fitChoices},
+	{Name: "k", Label: "extra ΣK", Box: "Extra loss coefficient ΣK", Hint: "(optional)", Kind: KindNumber, Segment: true, SegLabel: "extra ΣK", SegBox: "Extra loss coefficient ΣK"},
 	{Name: "fm", Label: "friction method", Box: "Friction factor method", Kind: KindChoice, choices: func() []Choice {
 		return []Choice{
 			{calc.MethodColebrook.String(), "Colebrook–White"},
@@ -134,79 +137,79 @@ var Table = []Param{
 	{Name: "rseg", Label: "run shown", Box: "Run shown", Kind: KindChoice, choices: rsegChoices},
 	{Name: "szsch", Label: "pipe class to size across", Box: "Sizes from", Hint: "(blank: the run's own class)", Kind: KindChoice, choices: schChoices,
 		Missing: "pick the pipe class whose sizes the table compares"},
-	q("vlo", "velocity band, low end", "Velocity band from", "", calc.Velocity, "m/s", "ft/s", "enter the low end of the velocity band"),
-	q("vhi", "velocity band, high end", "to", "", calc.Velocity, "m/s", "ft/s", "enter the high end of the velocity band"),
+	{Name: "vlo", Label: "velocity band, low end", Box: "Velocity band from", Dim: calc.Velocity, SI: "m/s", US: "ft/s", Missing: "enter the low end of the velocity band"},
+	{Name: "vhi", Label: "velocity band, high end", Box: "to", Dim: calc.Velocity, SI: "m/s", US: "ft/s", Missing: "enter the high end of the velocity band"},
 	{Name: "grad", Label: "loss gradient limit", Box: "Friction loss at most", Hint: "(head per 100 of pipe length)", Kind: KindNumber},
 
 	{Name: "cv", Label: "value to convert", Box: "Pressure, water column or head", Kind: KindQuantity, Dim: calc.Pressure,
 		SI: "kPa", US: "psi", ExtraUnits: []string{"m", "ft"}, Missing: "enter a value to convert"},
-	ref("cvref", "gauge/absolute"),
+	{Name: "cvref", Label: "gauge/absolute", Kind: KindChoice, choices: refChoices},
 
-	list("pq", "data-sheet flows", calc.Flow, "L/s", "gpm", "enter the data-sheet flows, e.g. 0,20,40,55,70L/s"),
-	list("ph", "data-sheet heads", calc.Length, "m", "ft", "enter the data-sheet heads, one per flow, e.g. 62,59,52,44,33m"),
-	list("peff", "data-sheet efficiencies", calc.Dimensionless, "%", "%", "enter the data-sheet efficiencies, one per flow"),
-	grp(list("pnpsh", "data-sheet NPSH required", calc.Length, "m", "ft", "enter the data-sheet NPSH required, one per flow"), "npsh"),
+	{Name: "pq", Label: "data-sheet flows", Kind: KindList, Dim: calc.Flow, SI: "L/s", US: "gpm", Missing: "enter the data-sheet flows, e.g. 0,20,40,55,70L/s"},
+	{Name: "ph", Label: "data-sheet heads", Kind: KindList, Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the data-sheet heads, one per flow, e.g. 62,59,52,44,33m"},
+	{Name: "peff", Label: "data-sheet efficiencies", Kind: KindList, Dim: calc.Dimensionless, SI: "%", US: "%", Missing: "enter the data-sheet efficiencies, one per flow"},
+	{Name: "pnpsh", Label: "data-sheet NPSH required", Kind: KindList, Dim: calc.Length, SI: "m", US: "ft", Group: "npsh", Missing: "enter the data-sheet NPSH required, one per flow"},
 	{Name: "spd", Label: "speed", Box: "Speed", Hint: "(% of the data sheet's, rpm, or drive Hz; blank: 100 %)", Kind: KindQuantity,
 		Dim: calc.Dimensionless, SI: "%", US: "%", ExtraUnits: []string{"rpm", "Hz"}, Missing: "enter the speed as a share of the data sheet's, in rpm, or as the drive's frequency in Hz"},
-	q("nrat", "rated speed", "Rated speed", "(the data sheet's; optional)", calc.Frequency, "rpm", "rpm", "enter the data sheet's speed in rpm"),
-	q("fmains", "mains frequency", "Mains frequency", "(the rated speed's supply; optional)", calc.Frequency, "Hz", "Hz", "enter the mains frequency the rated speed is given at (50 or 60 Hz)"),
-	grp(q("qsp", "flow to reach by speed", "Flow to reach by a speed change", "(on this line; optional)", calc.Flow, "L/s", "gpm", "enter the flow the speed should give"), "spfor"),
-	grp(q("hsp", "head to reach by speed", "Head to reach by a speed change", "(on this line; optional)", calc.Length, "m", "ft", "enter the head the speed should give"), "spfor"),
+	{Name: "nrat", Label: "rated speed", Box: "Rated speed", Hint: "(the data sheet's; optional)", Dim: calc.Frequency, SI: "rpm", US: "rpm", Missing: "enter the data sheet's speed in rpm"},
+	{Name: "fmains", Label: "mains frequency", Box: "Mains frequency", Hint: "(the rated speed's supply; optional)", Dim: calc.Frequency, SI: "Hz", US: "Hz", Missing: "enter the mains frequency the rated speed is given at (50 or 60 Hz)"},
+	{Name: "qsp", Label: "flow to reach by speed", Box: "Flow to reach by a speed change", Hint: "(on this line; optional)", Dim: calc.Flow, SI: "L/s", US: "gpm", Group: "spfor", Missing: "enter the flow the speed should give"},
+	{Name: "hsp", Label: "head to reach by speed", Box: "Head to reach by a speed change", Hint: "(on this line; optional)", Dim: calc.Length, SI: "m", US: "ft", Group: "spfor", Missing: "enter the head the speed should give"},
 	{Name: "pumps", Label: "pumps working together", Box: "Pumps working together", Kind: KindChoice, choices: func() []Choice {
 		return []Choice{{"1", "one pump"}, {"2p", "two in parallel"}, {"2s", "two in series"},
 			{"3p", "three in parallel"}, {"3s", "three in series"}}
 	}},
-	q("zp", "pump centreline elevation", "Pump centreline elevation", "(for NPSH)", calc.Length, "m", "ft", "enter the pump centreline elevation"),
+	{Name: "zp", Label: "pump centreline elevation", Box: "Pump centreline elevation", Hint: "(for NPSH)", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the pump centreline elevation"},
 	{Name: "pafter", Label: "pump position on the line", Box: "Pump position", Hint: "(for the profile and the suction side of NPSH)", Kind: KindNumber},
-	grp(q("npshr", "NPSH required (typed)", "NPSH required", "(at the operating flow)", calc.Length, "m", "ft", "enter the NPSH required"), "npsh"),
-	q("hs", "suction loss (typed)", "Suction loss", "(typed; blank: from the segments before the pump)", calc.Length, "m", "ft", "enter the head lost between the source and the pump inlet"),
+	{Name: "npshr", Label: "NPSH required (typed)", Box: "NPSH required", Hint: "(at the operating flow)", Dim: calc.Length, SI: "m", US: "ft", Group: "npsh", Missing: "enter the NPSH required"},
+	{Name: "hs", Label: "suction loss (typed)", Box: "Suction loss", Hint: "(typed; blank: from the segments before the pump)", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the head lost between the source and the pump inlet"},
 
-	q("ps", "suction gauge reading", "Suction gauge", "(reading)", calc.Pressure, "kPa", "psi", "enter the gauge reading"),
-	q("pd", "discharge gauge reading", "Discharge gauge", "(reading)", calc.Pressure, "kPa", "psi", "enter the gauge reading"),
-	q("zs", "suction gauge height", "Suction gauge height", "", calc.Length, "m", "ft", "enter the suction gauge's height"),
-	q("zd", "discharge gauge height", "Discharge gauge height", "(same datum)", calc.Length, "m", "ft", "enter the discharge gauge's height"),
-	grp(q("ds", "pipe diameter at the suction gauge", "Pipe inside diameter at the suction gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the suction gauge"), "gsp"),
-	grp(Param{Name: "dsn", Label: "pipe size at the suction gauge", Box: "Nominal size at the suction gauge", Kind: KindChoice, choices: npsChoices}, "gsp"),
-	grp(Param{Name: "dss", Label: "pipe schedule at the suction gauge", Box: "Schedule or class", Kind: KindChoice, choices: schChoices}, "gsp"),
-	grp(q("dd", "pipe diameter at the discharge gauge", "Pipe inside diameter at the discharge gauge", "", calc.Length, "mm", "in", "enter the pipe's inside diameter at the discharge gauge"), "gdp"),
-	grp(Param{Name: "ddn", Label: "pipe size at the discharge gauge", Box: "Nominal size at the discharge gauge", Kind: KindChoice, choices: npsChoices}, "gdp"),
-	grp(Param{Name: "dds", Label: "pipe schedule at the discharge gauge", Box: "Schedule or class", Kind: KindChoice, choices: schChoices}, "gdp"),
-	q("qm", "measured flow", "Measured flow", "", calc.Flow, "L/s", "gpm", "enter the measured flow"),
-	q("pin", "motor electrical input", "Motor electrical input", "(power meter; optional)", calc.Power, "kW", "kW", "enter the motor's electrical input"),
-	q("etam", "motor efficiency", "Motor efficiency", "(nameplate; optional)", calc.Dimensionless, "%", "%", "enter the motor's efficiency"),
-	q("gcs", "suction gauge accuracy class", "Suction gauge class", "(EN 837-1, ± % of span; optional)", calc.Dimensionless, "%", "%", "enter the suction gauge's accuracy class, e.g. 1.6%"),
-	q("gss", "suction gauge span", "Suction gauge span", "(full scale less the scale's start)", calc.Pressure, "kPa", "psi", "enter the suction gauge's span, e.g. 600kPa for −100 to 500 kPa"),
-	q("gcd", "discharge gauge accuracy class", "Discharge gauge class", "(EN 837-1, ± % of span; optional)", calc.Dimensionless, "%", "%", "enter the discharge gauge's accuracy class, e.g. 1.0%"),
-	q("gsd", "discharge gauge span", "Discharge gauge span", "(full scale less the scale's start)", calc.Pressure, "kPa", "psi", "enter the discharge gauge's span, e.g. 1000kPa for 0 to 10 bar"),
-	q("uqm", "flow meter accuracy", "Flow meter accuracy", "(± % of reading; optional)", calc.Dimensionless, "%", "%", "enter the flow meter's accuracy in % of reading"),
-	q("upin", "power meter accuracy", "Power meter accuracy", "(± % of reading; optional)", calc.Dimensionless, "%", "%", "enter the power meter's accuracy in % of reading"),
-	q("uz", "gauge height accuracy", "Gauge heights known to", "(± each; optional)", calc.Length, "mm", "in", "enter how well each gauge's height is known"),
+	{Name: "ps", Label: "suction gauge reading", Box: "Suction gauge", Hint: "(reading)", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the gauge reading"},
+	{Name: "pd", Label: "discharge gauge reading", Box: "Discharge gauge", Hint: "(reading)", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the gauge reading"},
+	{Name: "zs", Label: "suction gauge height", Box: "Suction gauge height", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the suction gauge's height"},
+	{Name: "zd", Label: "discharge gauge height", Box: "Discharge gauge height", Hint: "(same datum)", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the discharge gauge's height"},
+	{Name: "ds", Label: "pipe diameter at the suction gauge", Box: "Pipe inside diameter at the suction gauge", Dim: calc.Length, SI: "mm", US: "in", Group: "gsp", Missing: "enter the pipe's inside diameter at the suction gauge"},
+	{Name: "dsn", Label: "pipe size at the suction gauge", Box: "Nominal size at the suction gauge", Kind: KindChoice, Group: "gsp", choices: npsChoices},
+	{Name: "dss", Label: "pipe schedule at the suction gauge", Box: "Schedule or class", Kind: KindChoice, Group: "gsp", choices: schChoices},
+	{Name: "dd", Label: "pipe diameter at the discharge gauge", Box: "Pipe inside diameter at the discharge gauge", Dim: calc.Length, SI: "mm", US: "in", Group: "gdp", Missing: "enter the pipe's inside diameter at the discharge gauge"},
+	{Name: "ddn", Label: "pipe size at the discharge gauge", Box: "Nominal size at the discharge gauge", Kind: KindChoice, Group: "gdp", choices: npsChoices},
+	{Name: "dds", Label: "pipe schedule at the discharge gauge", Box: "Schedule or class", Kind: KindChoice, Group: "gdp", choices: schChoices},
+	{Name: "qm", Label: "measured flow", Box: "Measured flow", Dim: calc.Flow, SI: "L/s", US: "gpm", Missing: "enter the measured flow"},
+	{Name: "pin", Label: "motor electrical input", Box: "Motor electrical input", Hint: "(power meter; optional)", Dim: calc.Power, SI: "kW", US: "kW", Missing: "enter the motor's electrical input"},
+	{Name: "etam", Label: "motor efficiency", Box: "Motor efficiency", Hint: "(nameplate; optional)", Dim: calc.Dimensionless, SI: "%", US: "%", Missing: "enter the motor's efficiency"},
+	{Name: "gcs", Label: "suction gauge accuracy class", Box: "Suction gauge class", Hint: "(EN 837-1, ± % of span; optional)", Dim: calc.Dimensionless, SI: "%", US: "%", Missing: "enter the suction gauge's accuracy class, e.g. 1.6%"},
+	{Name: "gss", Label: "suction gauge span", Box: "Suction gauge span", Hint: "(full scale less the scale's start)", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the suction gauge's span, e.g. 600kPa for −100 to 500 kPa"},
+	{Name: "gcd", Label: "discharge gauge accuracy class", Box: "Discharge gauge class", Hint: "(EN 837-1, ± % of span; optional)", Dim: calc.Dimensionless, SI: "%", US: "%", Missing: "enter the discharge gauge's accuracy class, e.g. 1.0%"},
+	{Name: "gsd", Label: "discharge gauge span", Box: "Discharge gauge span", Hint: "(full scale less the scale's start)", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the discharge gauge's span, e.g. 1000kPa for 0 to 10 bar"},
+	{Name: "uqm", Label: "flow meter accuracy", Box: "Flow meter accuracy", Hint: "(± % of reading; optional)", Dim: calc.Dimensionless, SI: "%", US: "%", Missing: "enter the flow meter's accuracy in % of reading"},
+	{Name: "upin", Label: "power meter accuracy", Box: "Power meter accuracy", Hint: "(± % of reading; optional)", Dim: calc.Dimensionless, SI: "%", US: "%", Missing: "enter the power meter's accuracy in % of reading"},
+	{Name: "uz", Label: "gauge height accuracy", Box: "Gauge heights known to", Hint: "(± each; optional)", Dim: calc.Length, SI: "mm", US: "in", Missing: "enter how well each gauge's height is known"},
 	{Name: "grade", Label: "acceptance grade", Box: "Acceptance grade", Hint: "(ISO 9906; factors from memory)", Kind: KindChoice, choices: gradeChoices},
 	// A test at several points (pumptests.go): readings 2 to
 	// calc.TestMaxReadings, each a flow, two gauges and the motor's
 	// input, taken with the instruments above; reading 1 is qm, ps, pd
 	// and pin. Then the guarantee point the test is judged against.
-	rq(2), rps(2), rpd(2), rpin(2),
-	rq(3), rps(3), rpd(3), rpin(3),
-	rq(4), rps(4), rpd(4), rpin(4),
-	rq(5), rps(5), rpd(5), rpin(5),
-	rq(6), rps(6), rpd(6), rpin(6),
-	rq(7), rps(7), rpd(7), rpin(7),
-	rq(8), rps(8), rpd(8), rpin(8),
-	q("qg", "guarantee flow", "Guarantee flow", "(blank: the duty flow)", calc.Flow, "L/s", "gpm", "enter the guaranteed flow"),
-	q("hg", "guarantee head", "Guarantee head", "(blank: the data sheet's at that flow)", calc.Length, "m", "ft", "enter the guaranteed head"),
-	q("etag", "guarantee efficiency", "Guarantee efficiency", "(pump alone; blank: the data sheet's)", calc.Dimensionless, "%", "%", "enter the guaranteed efficiency of the pump alone"),
+	{Name: "qm2", Label: "measured flow, reading 2", Box: "Flow", Dim: calc.Flow, SI: "L/s", US: "gpm", Missing: "enter the flow of reading 2"}, {Name: "ps2", Label: "suction gauge, reading 2", Box: "Suction gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the suction gauge of reading 2"}, {Name: "pd2", Label: "discharge gauge, reading 2", Box: "Discharge gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the discharge gauge of reading 2"}, {Name: "pin2", Label: "motor input, reading 2", Box: "Motor input", Hint: "(optional)", Dim: calc.Power, SI: "kW", US: "kW", Missing: "enter the motor's electrical input of reading 2"},
+	{Name: "qm3", Label: "measured flow, reading 3", Box: "Flow", Dim: calc.Flow, SI: "L/s", US: "gpm", Missing: "enter the flow of reading 3"}, {Name: "ps3", Label: "suction gauge, reading 3", Box: "Suction gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the suction gauge of reading 3"}, {Name: "pd3", Label: "discharge gauge, reading 3", Box: "Discharge gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the discharge gauge of reading 3"}, {Name: "pin3", Label: "motor input, reading 3", Box: "Motor input", Hint: "(optional)", Dim: calc.Power, SI: "kW", US: "kW", Missing: "enter the motor's electrical input of reading 3"},
+	{Name: "qm4", Label: "measured flow, reading 4", Box: "Flow", Dim: calc.Flow, SI: "L/s", US: "gpm", Missing: "enter the flow of reading 4"}, {Name: "ps4", Label: "suction gauge, reading 4", Box: "Suction gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the suction gauge of reading 4"}, {Name: "pd4", Label: "discharge gauge, reading 4", Box: "Discharge gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the discharge gauge of reading 4"}, {Name: "pin4", Label: "motor input, reading 4", Box: "Motor input", Hint: "(optional)", Dim: calc.Power, SI: "kW", US: "kW", Missing: "enter the motor's electrical input of reading 4"},
+	{Name: "qm5", Label: "measured flow, reading 5", Box: "Flow", Dim: calc.Flow, SI: "L/s", US: "gpm", Missing: "enter the flow of reading 5"}, {Name: "ps5", Label: "suction gauge, reading 5", Box: "Suction gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the suction gauge of reading 5"}, {Name: "pd5", Label: "discharge gauge, reading 5", Box: "Discharge gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the discharge gauge of reading 5"}, {Name: "pin5", Label: "motor input, reading 5", Box: "Motor input", Hint: "(optional)", Dim: calc.Power, SI: "kW", US: "kW", Missing: "enter the motor's electrical input of reading 5"},
+	{Name: "qm6", Label: "measured flow, reading 6", Box: "Flow", Dim: calc.Flow, SI: "L/s", US: "gpm", Missing: "enter the flow of reading 6"}, {Name: "ps6", Label: "suction gauge, reading 6", Box: "Suction gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the suction gauge of reading 6"}, {Name: "pd6", Label: "discharge gauge, reading 6", Box: "Discharge gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the discharge gauge of reading 6"}, {Name: "pin6", Label: "motor input, reading 6", Box: "Motor input", Hint: "(optional)", Dim: calc.Power, SI: "kW", US: "kW", Missing: "enter the motor's electrical input of reading 6"},
+	{Name: "qm7", Label: "measured flow, reading 7", Box: "Flow", Dim: calc.Flow, SI: "L/s", US: "gpm", Missing: "enter the flow of reading 7"}, {Name: "ps7", Label: "suction gauge, reading 7", Box: "Suction gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the suction gauge of reading 7"}, {Name: "pd7", Label: "discharge gauge, reading 7", Box: "Discharge gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the discharge gauge of reading 7"}, {Name: "pin7", Label: "motor input, reading 7", Box: "Motor input", Hint: "(optional)", Dim: calc.Power, SI: "kW", US: "kW", Missing: "enter the motor's electrical input of reading 7"},
+	{Name: "qm8", Label: "measured flow, reading 8", Box: "Flow", Dim: calc.Flow, SI: "L/s", US: "gpm", Missing: "enter the flow of reading 8"}, {Name: "ps8", Label: "suction gauge, reading 8", Box: "Suction gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the suction gauge of reading 8"}, {Name: "pd8", Label: "discharge gauge, reading 8", Box: "Discharge gauge", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the discharge gauge of reading 8"}, {Name: "pin8", Label: "motor input, reading 8", Box: "Motor input", Hint: "(optional)", Dim: calc.Power, SI: "kW", US: "kW", Missing: "enter the motor's electrical input of reading 8"},
+	{Name: "qg", Label: "guarantee flow", Box: "Guarantee flow", Hint: "(blank: the duty flow)", Dim: calc.Flow, SI: "L/s", US: "gpm", Missing: "enter the guaranteed flow"},
+	{Name: "hg", Label: "guarantee head", Box: "Guarantee head", Hint: "(blank: the data sheet's at that flow)", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the guaranteed head"},
+	{Name: "etag", Label: "guarantee efficiency", Box: "Guarantee efficiency", Hint: "(pump alone; blank: the data sheet's)", Dim: calc.Dimensionless, SI: "%", US: "%", Missing: "enter the guaranteed efficiency of the pump alone"},
 	{Name: "tag", Label: "pump tag", Box: "Pump tag", Hint: "(e.g. BS-3 P1; sheets of one tag make its history)", Kind: KindText, Placeholder: "BS-3 P1"},
 	{Name: "hours", Label: "running hours per year", Box: "Running hours per year", Hint: "(optional, for a yearly cost)", Kind: KindNumber},
 	{Name: "tariff", Label: "energy tariff per kWh", Box: "Energy tariff per kWh", Hint: "(any currency; optional)", Kind: KindNumber},
-	q("etat", "turbine-and-generator efficiency", "Turbine-and-generator efficiency", "", calc.Dimensionless, "%", "%", "enter the turbine-and-generator efficiency"),
+	{Name: "etat", Label: "turbine-and-generator efficiency", Box: "Turbine-and-generator efficiency", Dim: calc.Dimensionless, SI: "%", US: "%", Missing: "enter the turbine-and-generator efficiency"},
 
 	// Surge on a fast closure at point 2 (calc.Surge): a closure time asks for it.
-	q("tc", "valve closing time", "Valve closing time", "(at point 2; for a surge estimate)", calc.Duration, "s", "s", "enter the time the valve takes to close"),
-	q("dv", "velocity stopped", "Velocity stopped", "(blank: the whole flow velocity)", calc.Velocity, "m/s", "ft/s", "enter the change of velocity at the valve"),
-	q("wall", "wall thickness", "Wall thickness", "(blank: from the size picked)", calc.Length, "mm", "in", "enter the pipe's wall thickness"),
-	q("epipe", "wall's elastic modulus", "Wall's elastic modulus", "(blank: from the material)", calc.Pressure, "GPa", "ksi", "enter the elastic modulus of the pipe wall"),
-	q("kliq", "liquid's bulk modulus", "Liquid's bulk modulus", "(blank for water and seawater)", calc.Pressure, "GPa", "ksi", "enter the liquid's bulk modulus"),
+	{Name: "tc", Label: "valve closing time", Box: "Valve closing time", Hint: "(at point 2; for a surge estimate)", Dim: calc.Duration, SI: "s", US: "s", Missing: "enter the time the valve takes to close"},
+	{Name: "dv", Label: "velocity stopped", Box: "Velocity stopped", Hint: "(blank: the whole flow velocity)", Dim: calc.Velocity, SI: "m/s", US: "ft/s", Missing: "enter the change of velocity at the valve"},
+	{Name: "wall", Label: "wall thickness", Box: "Wall thickness", Hint: "(blank: from the size picked)", Dim: calc.Length, SI: "mm", US: "in", Missing: "enter the pipe's wall thickness"},
+	{Name: "epipe", Label: "wall's elastic modulus", Box: "Wall's elastic modulus", Hint: "(blank: from the material)", Dim: calc.Pressure, SI: "GPa", US: "ksi", Missing: "enter the elastic modulus of the pipe wall"},
+	{Name: "kliq", Label: "liquid's bulk modulus", Box: "Liquid's bulk modulus", Hint: "(blank for water and seawater)", Dim: calc.Pressure, SI: "GPa", US: "ksi", Missing: "enter the liquid's bulk modulus"},
 	{Name: "cr", Label: "restraint factor", Box: "Restraint factor c", Hint: "(blank: 1, expansion joints throughout)", Kind: KindNumber},
 
 	// Heating and cooling loops (loop.go, heat.go, valve.go): a closed
@@ -215,43 +218,21 @@ var Table = []Param{
 	{Name: "loop", Label: "kind of line", Box: "The line is", Kind: KindChoice, choices: func() []Choice {
 		return []Choice{{"0", "between two points"}, {"1", "a closed loop"}}
 	}},
-	q("pexp", "loop's static pressure", "Static pressure of the loop", "(where the expansion vessel or pressurisation unit connects; for NPSH and the valves)",
-		calc.Pressure, "kPa", "psi", "enter the loop's static pressure where its expansion vessel or pressurisation unit connects"),
-	ref("pexpref", "gauge/absolute of the loop's static pressure"),
-	q("zexp", "elevation of the vessel's connection", "Elevation of that connection", "(same datum as the pump's)", calc.Length, "m", "ft",
-		"enter the elevation where the expansion vessel or pressurisation unit connects"),
-	grp(q("load", "heat load", "Heat load", "(heating or cooling)", calc.Power, "kW", "Btu/h", "enter the heating or cooling load the flow carries"), "qby"),
-	q("tsup", "supply temperature", "Supply temperature", "(to the load)", calc.Temperature, "°C", "°F", "enter the supply temperature (the liquid going to the load)"),
-	q("tret", "return temperature", "Return temperature", "(from the load)", calc.Temperature, "°C", "°F", "enter the return temperature (the liquid coming back from the load)"),
-	q("dpc", "drop of the valve's circuit", "Drop of the circuit the valves control", "(blank: the rest of the line)", calc.Pressure, "kPa", "psi",
-		"enter the pressure drop of the circuit whose flow the valve varies, without the valve"),
+	{Name: "pexp", Label: "loop's static pressure", Box: "Static pressure of the loop", Hint: "(where the expansion vessel or pressurisation unit connects; for NPSH and the valves)", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the loop's static pressure where its expansion vessel or pressurisation unit connects"},
+	{Name: "pexpref", Label: "gauge/absolute of the loop's static pressure", Kind: KindChoice, choices: refChoices},
+	{Name: "zexp", Label: "elevation of the vessel's connection", Box: "Elevation of that connection", Hint: "(same datum as the pump's)", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the elevation where the expansion vessel or pressurisation unit connects"},
+	{Name: "load", Label: "heat load", Box: "Heat load", Hint: "(heating or cooling)", Dim: calc.Power, SI: "kW", US: "Btu/h", Group: "qby", Missing: "enter the heating or cooling load the flow carries"},
+	{Name: "tsup", Label: "supply temperature", Box: "Supply temperature", Hint: "(to the load)", Dim: calc.Temperature, SI: "°C", US: "°F", Missing: "enter the supply temperature (the liquid going to the load)"},
+	{Name: "tret", Label: "return temperature", Box: "Return temperature", Hint: "(from the load)", Dim: calc.Temperature, SI: "°C", US: "°F", Missing: "enter the return temperature (the liquid coming back from the load)"},
+	{Name: "dpc", Label: "drop of the valve's circuit", Box: "Drop of the circuit the valves control", Hint: "(blank: the rest of the line)", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the pressure drop of the circuit whose flow the valve varies, without the valve"},
 	{Name: "sal", Label: "salinity", Box: "Salinity", Hint: "(g/kg, absolute; blank: 35)", Kind: KindNumber},
 
 	// The values kept as typed though they look like slips (slips.go).
 	{Name: KeepParam, Label: "values kept as typed", Kind: KindText},
 }
 
-func q(name, label, box, hint string, dim calc.Dimension, si, us, missing string) Param {
-	return Param{Name: name, Label: label, Box: box, Hint: hint, Kind: KindQuantity, Dim: dim, SI: si, US: us, Missing: missing}
-}
-
-func list(name, label string, dim calc.Dimension, si, us, missing string) Param {
-	return Param{Name: name, Label: label, Kind: KindList, Dim: dim, SI: si, US: us, Missing: missing}
-}
-
-func ref(name, label string) Param {
-	return Param{Name: name, Label: label, Kind: KindChoice, choices: func() []Choice { return []Choice{{"g", "gauge"}, {"a", "absolute"}} }}
-}
-
-func grp(p Param, group string) Param { p.Group = group; return p }
-
-func seg(p Param, label, box string) Param {
-	p.Segment, p.SegLabel, p.SegBox = true, label, box
-	if box == "" {
-		p.SegBox = p.Box
-	}
-	return p
-}
+// refChoices are the two ways a pressure is read: gauge or absolute.
+func refChoices() []Choice { return []Choice{{"g", "gauge"}, {"a", "absolute"}} }
 
 func npsChoices() []Choice {
 	var out []Choice

@@ -3,6 +3,8 @@ package scenario
 import (
 	"math"
 	"slices"
+	"strconv"
+	"strings"
 	"testing"
 
 	"fieldhead/calc"
@@ -48,6 +50,16 @@ func TestReadingParams(t *testing.T) {
 			}
 			if gf, gk := ReadingOf(p); gf != f || gk != k {
 				t.Errorf("ReadingOf(%s) = %s, %d", p, gf, gk)
+			}
+			// The table writes each reading's row out; it takes the
+			// first reading's quantity and units and names its number.
+			r, _, _ := Lookup(p)
+			first, _, _ := Lookup(f)
+			n := strconv.Itoa(k)
+			if k > 1 && (r.Kind != first.Kind || r.Dim != first.Dim || r.SI != first.SI || r.US != first.US ||
+				!strings.HasSuffix(r.Label, ", reading "+n) || !strings.HasSuffix(r.Missing, " of reading "+n) ||
+				r.Box == "" || r.Group != "" || r.Segment) {
+				t.Errorf("%s: row %+v does not match reading 1's %+v", p, r, first)
 			}
 		}
 	}

@@ -41,25 +41,6 @@ func ReadingOf(name string) (f string, k int) {
 	return "", 0
 }
 
-// readingRow builds reading k's row of field f.
-func readingRow(f string, k int) Param {
-	n := strconv.Itoa(k)
-	switch f {
-	case "qm":
-		return q(ReadingParam(f, k), "measured flow, reading "+n, "Flow", "", calc.Flow, "L/s", "gpm", "enter the flow of reading "+n)
-	case "ps":
-		return q(ReadingParam(f, k), "suction gauge, reading "+n, "Suction gauge", "", calc.Pressure, "kPa", "psi", "enter the suction gauge of reading "+n)
-	case "pd":
-		return q(ReadingParam(f, k), "discharge gauge, reading "+n, "Discharge gauge", "", calc.Pressure, "kPa", "psi", "enter the discharge gauge of reading "+n)
-	}
-	return q(ReadingParam(f, k), "motor input, reading "+n, "Motor input", "(optional)", calc.Power, "kW", "kW", "enter the motor's electrical input of reading "+n)
-}
-
-func rq(k int) Param   { return readingRow("qm", k) }
-func rps(k int) Param  { return readingRow("ps", k) }
-func rpd(k int) Param  { return readingRow("pd", k) }
-func rpin(k int) Param { return readingRow("pin", k) }
-
 // init rules the readings' gauges as the first reading's: a pressure
 // typed in Pa below 10 kPa is a slip (slips.go).
 func init() {

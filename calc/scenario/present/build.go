@@ -275,7 +275,9 @@ func (b *builder) others(view string) []string {
 		}
 		keys = append(keys, p)
 	}
-	sort.Strings(keys)
+	// sort.Slice, whose code the wasm has already: sort.Strings would add
+	// a sort of its own for strings.
+	sort.Slice(keys, func(i, j int) bool { return keys[i] < keys[j] })
 	out := make([]string, 0, len(keys))
 	for _, k := range keys {
 		out = append(out, b.named(k))

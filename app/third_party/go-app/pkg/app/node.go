@@ -4,7 +4,7 @@ import (
 	"bytes"
 	"io"
 	"reflect"
-	"slices"
+	"sort"
 	"strconv"
 	"time"
 
@@ -731,7 +731,9 @@ func (m nodeManager) encodeHTML(ctx Context, w *bytes.Buffer, depth int, v HTML)
 	for name := range attrs {
 		names = append(names, name)
 	}
-	slices.Sort(names)
+	// Fieldhead: sort.Slice, whose code the wasm has already, not a
+	// sort of its own for strings.
+	sort.Slice(names, func(i, j int) bool { return names[i] < names[j] })
 	for _, name := range names {
 		if value := attrs[name]; value != "false" || !isBooleanAttribute(name) {
 			m.encodeHTMLAttribute(ctx, w, name, value)

@@ -76,7 +76,9 @@ func (r rangeLoop) Map(f func(string) UI) RangeLoop {
 	for _, k := range src.MapKeys() {
 		keys = append(keys, k.String())
 	}
-	sort.Strings(keys)
+	// Fieldhead: sort.Slice, whose code the wasm has already, not a
+	// sort of its own for strings.
+	sort.Slice(keys, func(i, j int) bool { return keys[i] < keys[j] })
 
 	for _, k := range keys {
 		body = append(body, FilterUIElems(f(k))...)

@@ -25,7 +25,9 @@ func inlineEncoder(v any) ([]byte, error) {
 	for k := range e.Tags {
 		keys = append(keys, k)
 	}
-	sort.Strings(keys)
+	// Fieldhead: sort.Slice, whose code the wasm has already, not a
+	// sort of its own for strings.
+	sort.Slice(keys, func(i, j int) bool { return keys[i] < keys[j] })
 	for _, k := range keys {
 		fmt.Fprintf(&b, " %s=%v", k, e.Tags[k])
 	}
