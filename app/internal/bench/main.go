@@ -620,8 +620,10 @@ func (s *browserSession) waitShown() (float64, error) {
 // phases splits a load, in ms from navigation start: the wasm's bytes in
 // (its fetch's responseEnd), compiled and instantiated (app.js's mark
 // fieldhead-wasm-ready), the Go program started (its mark fieldhead-main),
-// the sheet mounted (drawn into the DOM: window.fieldheadFirstResult, set in
-// the sheet's OnMount) and the answer painted (shownJS). 0 for one not seen.
+// the whole sheet drawn into the DOM (window.fieldheadFirstResult, set
+// once the cards the first draw put off are drawn too: app/sheet.go,
+// drawnWhole; so after the answer, which the first draw holds) and the
+// answer painted (shownJS). 0 for one not seen.
 type phases struct {
 	WasmFetched  float64 `json:"wasm_fetched"`
 	WasmCompiled float64 `json:"wasm_compiled"`
@@ -631,8 +633,8 @@ type phases struct {
 }
 
 func (p phases) String() string {
-	return fmt.Sprintf("wasm fetched %.0f, compiled %.0f, Go started %.0f, sheet mounted %.0f, answer painted %.0f",
-		p.WasmFetched, p.WasmCompiled, p.GoMain, p.Mounted, p.Answer)
+	return fmt.Sprintf("wasm fetched %.0f, compiled %.0f, Go started %.0f, answer painted %.0f, whole sheet drawn %.0f",
+		p.WasmFetched, p.WasmCompiled, p.GoMain, p.Answer, p.Mounted)
 }
 
 const phasesJS = `(() => {
