@@ -183,3 +183,11 @@ func lend() {
 		snap.Call("lend")
 	}
 }
+
+// markTime adds a mark to the page's performance timeline, where make
+// bench reads the phases of a load.
+func markTime(name string) {
+	if perf := app.Window().Get("performance"); app.IsClient && perf.Truthy() {
+		perf.Call("mark", name)
+	}
+}

@@ -87,6 +87,7 @@ func newSheet() app.Composer {
 	}
 	s.loaded = true
 	s.later = true
+	markTime("fieldhead-evaluated") // the sheet read, worked out and worded (make bench)
 	s.wide = chartWidth()
 	return s
 }
@@ -95,6 +96,7 @@ func newSheet() app.Composer {
 // then records when the whole sheet reached the screen.
 func (s *sheet) OnMount(ctx app.Context) {
 	s.ctx = ctx
+	markTime("fieldhead-mounted") // the first draw in the page (make bench)
 	if app.IsClient {
 		leave := func(hiddenOnly bool) app.Func {
 			return app.FuncOf(func(app.Value, []app.Value) any {

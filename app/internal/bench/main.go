@@ -630,17 +630,20 @@ type phases struct {
 	GoMain       float64 `json:"go_main"`
 	Mounted      float64 `json:"mounted"`
 	Answer       float64 `json:"answer"`
+	Evaluated    float64 `json:"evaluated"`   // the sheet read, worked out and worded (mark fieldhead-evaluated)
+	FirstDraw    float64 `json:"first_drawn"` // the first draw in the page (mark fieldhead-mounted)
 }
 
 func (p phases) String() string {
-	return fmt.Sprintf("wasm fetched %.0f, compiled %.0f, Go started %.0f, answer painted %.0f, whole sheet drawn %.0f",
-		p.WasmFetched, p.WasmCompiled, p.GoMain, p.Answer, p.Mounted)
+	return fmt.Sprintf("wasm fetched %.0f, compiled %.0f, Go started %.0f, sheet worked out %.0f, first draw in the page %.0f, answer painted %.0f, whole sheet drawn %.0f",
+		p.WasmFetched, p.WasmCompiled, p.GoMain, p.Evaluated, p.FirstDraw, p.Answer, p.Mounted)
 }
 
 const phasesJS = `(() => {
   const mark = (n) => { const e = performance.getEntriesByName(n)[0]; return e ? e.startTime : 0; };
   const w = performance.getEntriesByType("resource").find((e) => e.name.endsWith(".wasm"));
-  return [w ? w.responseEnd : 0, mark("fieldhead-wasm-ready"), mark("fieldhead-main"), window.fieldheadFirstResult || 0, window.fieldheadShown || 0];
+  return [w ? w.responseEnd : 0, mark("fieldhead-wasm-ready"), mark("fieldhead-main"), window.fieldheadFirstResult || 0, window.fieldheadShown || 0,
+    mark("fieldhead-evaluated"), mark("fieldhead-mounted")];
 })()`
 
 // snapPhasesJS words where a return visit's time went before the
@@ -660,10 +663,10 @@ const snapPhasesJS = `(() => {
 // loadPhases reads the phases of the load the page just made.
 func (s *browserSession) loadPhases() phases {
 	v, err := chromedp.Run(s.ctx, chromedp.Evaluate[[]float64](phasesJS))
-	if err != nil || len(v) != 5 {
+	if err != nil || len(v) != 7 {
 		log.Fatalf("the load's phases: %v", err)
 	}
-	return phases{round1(v[0]), round1(v[1]), round1(v[2]), round1(v[3]), round1(v[4])}
+	return phases{round1(v[0]), round1(v[1]), round1(v[2]), round1(v[3]), round1(v[4]), round1(v[5]), round1(v[6])}
 }
 
 // medianPhases is each phase's median over the loads.
@@ -676,7 +679,8 @@ func medianPhases(ps []phases) phases {
 		return round1(median(xs))
 	}
 	return phases{col(func(p phases) float64 { return p.WasmFetched }), col(func(p phases) float64 { return p.WasmCompiled }),
-		col(func(p phases) float64 { return p.GoMain }), col(func(p phases) float64 { return p.Mounted }), col(func(p phases) float64 { return p.Answer })}
+		col(func(p phases) float64 { return p.GoMain }), col(func(p phases) float64 { return p.Mounted }), col(func(p phases) float64 { return p.Answer }),
+		col(func(p phases) float64 { return p.Evaluated }), col(func(p phases) float64 { return p.FirstDraw })}
 }
 
 // offline takes the page and its service worker off the network.
