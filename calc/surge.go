@@ -93,7 +93,8 @@ type SurgeResult struct {
 // about 25 (Wylie & Streeter's thick-wall factors differ by a few per cent
 // below that; common practice). Errors name the field: "kliq" for k ≤ 0,
 // "rho" for rho ≤ 0, "d" for d ≤ 0, "wall" for a wall ≤ 0 or at least
-// d/2, "epipe" for e ≤ 0 and "cr" for c outside (0, 2].
+// d/2 (NotFinite for one so thin that c·K·D/(E·e) leaves the range of
+// numbers), "epipe" for e ≤ 0 and "cr" for c outside (0, 2].
 func WaveSpeed(k, rho, d, wall, e, c float64) (float64, error) {
 	if err := checkSurgePipe(d, wall, e, c); err != nil {
 		return 0, err
@@ -104,7 +105,11 @@ func WaveSpeed(k, rho, d, wall, e, c float64) (float64, error) {
 	if !(rho > 0) || math.IsInf(rho, 0) {
 		return 0, NewFieldError("rho", NotPositive).Got(Fig(rho, Density))
 	}
-	return waveSpeed(k, rho, d, wall, e, c), nil
+	a := waveSpeed(k, rho, d, wall, e, c)
+	if !(a > 0) {
+		return 0, NewFieldError("wall", NotFinite).Got(Fig(wall, Length)).Because(ReasonBeyondNumbers)
+	}
+	return a, nil
 }
 
 // waveSpeed is Korteweg's formula without checks.
@@ -141,8 +146,9 @@ func checkSurgePipe(d, wall, e, c float64) error {
 // junction; the figure uses the pipe at the valve for the first wave and
 // is a screening value only. Errors name the field: "tc" for a closure
 // time ≤ 0, "dv" for a velocity change ≤ 0 (or no flow to stop), "q" for
-// no pipes, and those of WaveSpeed; a pipe's error carries its 1-based
-// Segment when there are several.
+// no pipes, "wall" (NotFinite) for a wall so thin against the others that
+// the wave speed leaves the range of numbers, and those of WaveSpeed; a
+// pipe's error carries its 1-based Segment when there are several.
 func (s Surge) Evaluate() (SurgeResult, error) {
 	if len(s.Pipes) == 0 {
 		return SurgeResult{}, NewFieldError("q", Missing).Because(ReasonSurgePipe)
@@ -175,6 +181,15 @@ func (s Surge) Evaluate() (SurgeResult, error) {
 			return SurgeResult{}, NewFieldError("length", Negative).Got(Fig(p.Length, Length))
 		}
 		a := waveSpeed(s.BulkModulus, s.Density, p.Diameter, p.Wall, p.Modulus, c)
+		if !(a > 0) {
+			// c·K·D/(E·e) beyond float64 (a wall of 1e-309 m): no wave
+			// speed to work with, and 2L/a would be 0/0 for a zero length.
+			fe := NewFieldError("wall", NotFinite).Got(Fig(p.Wall, Length)).Because(ReasonBeyondNumbers)
+			if len(s.Pipes) > 1 {
+				fe.Segment = i + 1
+			}
+			return SurgeResult{}, fe
+		}
 		r.WaveSpeeds = append(r.WaveSpeeds, a)
 		r.Period += 2 * p.Length / a
 		r.Length += p.Length

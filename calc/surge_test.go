@@ -126,6 +126,10 @@ func TestSurgeBadInputs(t *testing.T) {
 		{"no pipes", with(func(s *Surge) { s.Pipes = nil }), "q"},
 		{"negative length", with(func(s *Surge) { s.Pipes[0].Length = -1 }), "length"},
 		{"a rise beyond any number", with(func(s *Surge) { s.DeltaV = 1e306 }), "dv"},
+		// c·K·D/(E·e) overflows float64 (IEEE 754: above about 1.8e308), so
+		// the wave speed is 0; with no length 2L/a was 0/0 (found by
+		// FuzzScenario: wall=1e-309mm, s1.l=0).
+		{"a wall too thin for any wave speed", with(func(s *Surge) { s.Pipes[0].Wall = 1e-312; s.Pipes[0].Length = 0 }), "wall"},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -144,6 +148,9 @@ func TestSurgeBadInputs(t *testing.T) {
 	}
 	if _, err := WaveSpeed(2.2e9, 998, 0.2, 0.1, 207e9, 1); err == nil {
 		t.Error("WaveSpeed took a wall of half the bore")
+	}
+	if a, err := WaveSpeed(2.2e9, 998, 0.2, 1e-312, 207e9, 1); err == nil {
+		t.Errorf("WaveSpeed of a wall of 1e-312 m: %g, want an error", a)
 	}
 	if _, err := WaveSpeed(0, 998, 0.2, 0.008, 207e9, 1); err == nil {
 		t.Error("WaveSpeed took a bulk modulus of 0")
