@@ -682,6 +682,9 @@ var reasonWords = [...]func(w wording) string{
 		return quote(name) + ": the valve's " + valveFactorName(w.fe.Other) + " is given twice in " + quote(spec) + ": keep the one from its data sheet"
 	},
 	calc.ReasonBeyondNumbers: func(w wording) string {
+		if w.fe.Field == "wall" {
+			return w.subject() + " (" + w.val() + ") is too thin for a pressure wave to be worked out: check the wall thickness and its unit"
+		}
 		return w.subject() + " (" + w.val() + ") puts the line's figures beyond the range of numbers: check its length, bore and flow"
 	},
 	calc.ReasonBulkSalinity: func(w wording) string {

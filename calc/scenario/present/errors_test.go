@@ -99,6 +99,9 @@ func TestErrorTextNamesAndUnits(t *testing.T) {
 		{calc.NewFieldError("hours", calc.OutOfRange).Got(calc.Num(9000)).Within(calc.Num(0), calc.Num(8784)), false,
 			"the running hours per year must be from 0 to 8784; got 9000"},
 		{calc.NewFieldError("units", calc.UnknownChoice).Typed("imperial"), false, `"imperial" is not one of the choices (use si or us)`},
+		// A wall of 1e-309 mm: the surge's wave speed leaves the range of numbers (calc.TestSurgeBadInputs).
+		{calc.NewFieldError("wall", calc.NotFinite).Got(calc.Fig(1e-312, calc.Length)).Because(calc.ReasonBeyondNumbers), false,
+			"the " + scenario.Label("wall") + " (" + scenario.ShowParam("wall", 1e-312, false) + ") is too thin for a pressure wave to be worked out: check the wall thickness and its unit"},
 		{&calc.FieldError{Field: "q", Msg: "flow \uE0000; is odd", Figures: []calc.Figure{calc.Fig(0.045, calc.Flow)}}, true, "flow " + scenario.Show(0.045, calc.Flow, true) + " is odd"},
 	} {
 		if got := ErrorText(c.fe, c.us); got != c.want {
