@@ -58,12 +58,16 @@ func (b *builder) loopCard() Card {
 // load the flow carries or the flow the load needs.
 func (b *builder) flowFields() []Block {
 	out := []Block{b.toggle("qby")}
+	// With a flow given, the temperatures only add the load it carries:
+	// the boxes say they may stay blank.
+	sup, ret := "", ""
 	if b.d.SideOf("qby") == "load" {
 		out = append(out, fields(b.quantity("load", "", "")))
 	} else {
 		out = append(out, fields(b.quantity("q", "", "")))
+		sup, ret = "(to the load; optional: with the return, the load the flow carries)", "(from the load; optional)"
 	}
-	out = append(out, fields(b.quantity("tsup", "", ""), b.quantity("tret", "", "")))
+	out = append(out, fields(b.quantity("tsup", "", sup), b.quantity("tret", "", ret)))
 	line := ""
 	if h := b.r.Heat; h != nil {
 		way := "heating"

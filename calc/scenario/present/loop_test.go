@@ -43,3 +43,38 @@ func TestSolveGridOfALoop(t *testing.T) {
 		t.Errorf("closed loop: the pump head (the demo's unknown) is not the one chosen")
 	}
 }
+
+// TestTemperatureHints: with a flow given, the supply and return
+// temperatures only add the load the flow carries, and their boxes say
+// they may stay blank; with a heat load given they are needed (the
+// parameter table's Missing for tsup and tret) and keep the table's hints.
+// This project's own wording rule, no external source.
+func TestTemperatureHints(t *testing.T) {
+	hints := func(sc scenario.Scenario) (sup, ret string) {
+		t.Helper()
+		sh, _ := sheetOf(t, sc, "balance")
+		for _, c := range sh.Cards {
+			for _, bl := range c.Blocks {
+				for _, f := range bl.Fields {
+					switch f.Param {
+					case "tsup":
+						sup = f.Hint
+					case "tret":
+						ret = f.Hint
+					}
+				}
+			}
+		}
+		return sup, ret
+	}
+	sup, ret := hints(scenario.Demo())
+	if !strings.Contains(sup, "optional") || !strings.Contains(ret, "optional") {
+		t.Errorf("flow given: hints %q and %q, want both to say the boxes are optional", sup, ret)
+	}
+	tsup, _, _ := scenario.Lookup("tsup")
+	tret, _, _ := scenario.Lookup("tret")
+	sup, ret = hints(with(t, scenario.Demo(), "q", "", "load", "300kW"))
+	if sup != tsup.Hint || ret != tret.Hint {
+		t.Errorf("heat load given: hints %q and %q, want the table's %q and %q", sup, ret, tsup.Hint, tret.Hint)
+	}
+}
