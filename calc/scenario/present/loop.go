@@ -65,7 +65,7 @@ func (b *builder) flowFields() []Block {
 		out = append(out, fields(b.quantity("load", "", "")))
 	} else {
 		out = append(out, fields(b.quantity("q", "", "")))
-		sup, ret = "(to the load; optional: with the return, the load the flow carries)", "(from the load; optional)"
+		sup, ret = "(to the load; optional)", "(from the load; optional)"
 	}
 	out = append(out, fields(b.quantity("tsup", "", sup), b.quantity("tret", "", ret)))
 	line := ""
