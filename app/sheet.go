@@ -28,8 +28,7 @@ type sheet struct {
 	loaded  bool   // false while pre-rendered on the server, before the wasm runs
 
 	base      string         // page URL without the query
-	query     string         // the scenario's signed link, also in the URL and in localStorage (signedQuery)
-	signed    bool           // query is the current scenario's
+	query     lazyQuery      // the scenario's signed link, also in the URL and in localStorage
 	damaged   bool           // opened from a link that arrived damaged, not yet edited
 	copyNote  string         // result of the last "Copy link"
 	showLink  bool           // show the link as selectable text
@@ -118,10 +117,6 @@ func (s *sheet) OnMount(ctx app.Context) {
 		s.startBook(ctx)
 	}
 	if app.IsClient && s.loaded {
-		if !s.later {
-			s.drawnWhole(ctx)
-			return
-		}
 		// Until then, the cards put off keep the place they had before
 		// the wasm ran (the written demo or the kept sheet's snapshot,
 		// both of this very sheet), inert, rather than leave the screen.
@@ -134,31 +129,29 @@ func (s *sheet) OnMount(ctx app.Context) {
 				app.Window().Call("setTimeout", once(func(app.Value) {
 					ctx.Dispatch(func(ctx app.Context) {
 						s.later = false
-						ctx.Defer(s.drawnWhole)
+						ctx.Defer(func(ctx app.Context) {
+							// The whole sheet is drawn: the time, for the
+							// browser tests and anyone timing the page.
+							if perf := app.Window().Get("performance"); perf.Truthy() {
+								app.Window().Set("fieldheadFirstResult", perf.Call("now").Float())
+							}
+							// The sheet as opened was kept before it was
+							// drawn (save): its snapshot a little later,
+							// unless an edit keeps it anew.
+							app.Window().Call("setTimeout", once(func(app.Value) {
+								ctx.Dispatch(func(ctx app.Context) {
+									ctx.PreventUpdate()
+									if !s.pending && !s.damaged {
+										s.snapshot()
+									}
+								})
+							}), snapshotDelay)
+						})
 					})
 				}), 0)
 			}))
 		}))
 	}
-}
-
-// drawnWhole records when the whole sheet was first drawn (for the
-// browser tests and anyone timing the page) and takes its snapshot a
-// little later.
-func (s *sheet) drawnWhole(ctx app.Context) {
-	if perf := app.Window().Get("performance"); perf.Truthy() {
-		app.Window().Set("fieldheadFirstResult", perf.Call("now").Float())
-	}
-	// The sheet as opened was kept before it was drawn (save): its
-	// snapshot once it is on screen, unless an edit keeps it anew.
-	app.Window().Call("setTimeout", once(func(app.Value) {
-		ctx.Dispatch(func(ctx app.Context) {
-			ctx.PreventUpdate()
-			if !s.pending && !s.damaged {
-				s.snapshot()
-			}
-		})
-	}), snapshotDelay)
 }
 
 // OnResize redraws the charts when they need another width.
@@ -214,7 +207,7 @@ func (s *sheet) adopt(sc scenario.Scenario, linkErr string) {
 func (s *sheet) evaluate() {
 	s.testPanic("evaluate")
 	s.res = scenario.Evaluate(scenario.Read(s.d.Scen))
-	s.signed = false // signed when first needed: most edits draw no link (signedQuery)
+	s.query = lazyQuery{} // signed when first needed: most edits draw no link
 	s.build()
 	s.save()
 }
@@ -275,10 +268,10 @@ func (s *sheet) flush() {
 	if app.IsClient {
 		app.Window().Set("fieldheadPending", false)
 	}
-	replaceQuery(s.signedQuery())
+	replaceQuery(s.query.of(s.d.Scen))
 	app.Window().Get("document").Set("title", pageTitle(s.vm.Name))
 	if !s.damaged { // a damaged link never replaces a kept sheet
-		storageSet(storageKey, s.signedQuery())
+		storageSet(storageKey, s.query.of(s.d.Scen))
 		s.bk.keep(s.d.Scen, s.res, s.damaged)
 		s.snapshot()
 	}
@@ -294,7 +287,7 @@ func (s *sheet) snapshot() {
 	}
 	defer func() { _ = recover() }() // a snapshot is a convenience: never a fault
 	if snap := app.Window().Get("fieldheadSnapshot"); snap.Truthy() {
-		snap.Call("take", s.signedQuery())
+		snap.Call("take", s.query.of(s.d.Scen))
 	}
 }
 
@@ -317,21 +310,28 @@ func (s *sheet) build() {
 
 // link is the full share link.
 func (s *sheet) link() string {
-	if q := s.signedQuery(); q != "" {
+	if q := s.query.of(s.d.Scen); q != "" {
 		return s.base + "?" + q
 	}
 	return s.base
 }
 
-// signedQuery is the sheet's link's query (scenario.Scenario.Sign), made
+// lazyQuery is a sheet's link's query (scenario.Scenario.Sign), signed
 // once per change when first asked for: signing costs about a tenth of an
 // edit's Go time, and an edit typed into a box draws no link (the address
-// bar and the saved copy wait for a pause in the typing).
-func (s *sheet) signedQuery() string {
-	if !s.signed {
-		s.query, s.signed = s.d.Scen.Sign(), true
+// bar and the saved copy wait for a pause in the typing). The zero value
+// is unsigned.
+type lazyQuery struct {
+	query  string
+	signed bool
+}
+
+// of is the query of sc, the scenario the query was last reset for.
+func (l *lazyQuery) of(sc scenario.Scenario) string {
+	if !l.signed {
+		l.query, l.signed = sc.Sign(), true
 	}
-	return s.query
+	return l.query
 }
 
 // Event handlers: each changes the Draft one way, then recomputes.

@@ -53,19 +53,12 @@ func TestTemperatureHints(t *testing.T) {
 	hints := func(sc scenario.Scenario) (sup, ret string) {
 		t.Helper()
 		sh, _ := sheetOf(t, sc, "balance")
-		for _, c := range sh.Cards {
-			for _, bl := range c.Blocks {
-				for _, f := range bl.Fields {
-					switch f.Param {
-					case "tsup":
-						sup = f.Hint
-					case "tret":
-						ret = f.Hint
-					}
-				}
-			}
+		s, ok1 := fieldOf(sh, "tsup")
+		r, ok2 := fieldOf(sh, "tret")
+		if !ok1 || !ok2 {
+			t.Fatal("no supply or return temperature box on the Balance view")
 		}
-		return sup, ret
+		return s.Hint, r.Hint
 	}
 	sup, ret := hints(scenario.Demo())
 	if !strings.Contains(sup, "optional") || !strings.Contains(ret, "optional") {
