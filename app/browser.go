@@ -187,7 +187,10 @@ func lend() {
 // markTime adds a mark to the page's performance timeline, where make
 // bench reads the phases of a load.
 func markTime(name string) {
-	if perf := app.Window().Get("performance"); app.IsClient && perf.Truthy() {
+	if !app.IsClient {
+		return
+	}
+	if perf := app.Window().Get("performance"); perf.Truthy() {
 		perf.Call("mark", name)
 	}
 }

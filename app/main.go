@@ -20,7 +20,7 @@ func main() {
 		// at least 4 MB) collects every dozen edits or so, a pause of several
 		// ms on a slow phone mid-edit. Five times (at least 16 MB) is rarer.
 		debug.SetGCPercent(400)
-		app.Window().Get("performance").Call("mark", "fieldhead-main") // the Go program started (make bench)
+		markTime("fieldhead-main") // the Go program started (make bench)
 	}
 	app.RunWhenOnBrowser()
 	native() // not reached in the browser: RunWhenOnBrowser blocks there
