@@ -82,6 +82,8 @@ type tab struct {
 	mu         sync.Mutex
 	exceptions []string
 	requests   []string // URL of every request, in order
+
+	noWorker page.ScriptIdentifier // the script that hides Worker from the page (blockWasm)
 }
 
 // violationsJS records the page's CSP violations from its first script on.

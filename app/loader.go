@@ -14,12 +14,15 @@ import (
 // those, in the generated file, and fails the build if go-app's text is no
 // longer what it expects:
 //
-//   - The wasm goes straight from fetch() into
-//     WebAssembly.instantiateStreaming. go-app wraps the response in a new
-//     Response to count bytes for a progress label; Chromium keeps compiled
-//     code only for a module compiled from the fetched response itself, so
-//     the wrapper made every load compile the whole module again. The
-//     label stays, without a percentage (newHandler's LoadingLabel).
+//   - The wasm is compiled in a worker that fetches it itself
+//     (web/compile.js, started by web/prerender.js as the page opens), and
+//     the page starts it from the compiled module (instantiateJS): the main
+//     thread no longer reads and decodes 9 MB while it lays out and paints.
+//     go-app wrapped the response in a new Response to count bytes for a
+//     progress label; Chromium keeps compiled code only for a module
+//     compiled from the fetched response itself, so the worker compiles
+//     the response as fetched. The label stays, without a percentage
+//     (newHandler's LoadingLabel).
 //   - A mark, fieldhead-wasm-ready, once the module is instantiated (make bench).
 //   - The service worker is registered once the wasm is running, not
 //     before the download starts: its installation then takes every file
@@ -36,8 +39,9 @@ func patchLoader(js string) (string, error) {
 		re   *regexp.Regexp
 		repl string
 	}{
-		{"the progress wrapper around the wasm's fetch",
-			regexp.MustCompile(`fetchWithProgress\(("[^"]+"), showProgress\)`), `fetch($1)`},
+		{"the wasm's fetch and compile",
+			regexp.MustCompile(`instantiateStreaming\(\s*fetchWithProgress\(("[^"]+"), showProgress\),\s*go\.importObject\s*\)`),
+			`fieldheadInstantiate($1, go.importObject, instantiateStreaming)`},
 		{"the service worker's registration before the wasm",
 			regexp.MustCompile(`(?m)^goappInitServiceWorker\(\);\n`), ""},
 		{"the start of the wasm",
@@ -53,7 +57,36 @@ func patchLoader(js string) (string, error) {
 		}
 		js = s.re.ReplaceAllString(js, s.repl)
 	}
-	return js + loadFailedJS, nil
+	return js + instantiateJS + loadFailedJS, nil
+}
+
+// instantiateJS starts the wasm from the module web/prerender.js had a
+// worker compile (web/compile.js): the streamed compile's decoding then no
+// longer holds the main thread, which meanwhile lays out and paints what
+// the page shows before the wasm (about 200 ms of the main thread at 4×
+// CPU on an offline reload, make bench). Where no worker was started, or
+// it failed, the page compiles as go-app did, and a wasm that cannot be
+// fetched fails there (loadFailedJS). A retry compiles on the page.
+const instantiateJS = `
+// Fieldhead: the wasm compiled off the main thread (app/loader.go).
+function fieldheadInstantiate(url, imports, onMain) {
+  const here = () => onMain(fetch(url), imports);
+  const c = window.fieldheadCompiling;
+  window.fieldheadCompiling = null;
+  if (!c || c.url !== url) {
+    return here();
+  }
+  return c.module.then((module) => module ?
+    WebAssembly.instantiate(module, imports).then((instance) => ({ module, instance })) : here());
+}
+`
+
+// compileMeta names, for web/prerender.js, the worker that compiles the
+// wasm and the wasm itself. The site writer renames both URLs to their
+// hashed names with every other reference. It comes before prerender.js,
+// which reads it as it runs.
+func compileMeta(prefix string) string {
+	return `<meta name="fieldhead-compile" content="` + prefix + `/web/compile.js" data-wasm="` + prefix + `/web/app.wasm" data-exec="` + prefix + `/wasm_exec.js">`
 }
 
 // loadFailedJS ends app.js: what the corner note says, moved above the
@@ -125,14 +158,4 @@ func patchSiteLoader(out string) error {
 		return err
 	}
 	return os.WriteFile(p, []byte(js), 0o644)
-}
-
-// preloadWasm is a <link> that starts the wasm's download while the page
-// is still being read, rather than when app.js runs (after the
-// stylesheets and scripts). It matches app.js's fetch() (same URL, CORS
-// mode, same-origin credentials), so the browser hands that fetch the
-// preloaded response. The site writer renames the URL to the wasm's
-// hashed name with every other reference.
-func preloadWasm(prefix string) string {
-	return `<link rel="preload" href="` + prefix + `/web/app.wasm" as="fetch" type="application/wasm" crossorigin>`
 }

@@ -14,6 +14,9 @@ import (
 )
 
 func main() {
+	if warmUp() { // in the worker that compiles the wasm (warm.go)
+		return
+	}
 	registerRoutes()
 	if app.IsClient {
 		// The live heap is 1–2 MB; the collector's default goal (twice that,

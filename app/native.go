@@ -123,10 +123,10 @@ func newHandler(prefix, version string, wasmSize int64) *app.Handler {
 			SVG:      "/web/icon.svg",
 		},
 		Styles:             []string{"/web/fieldhead.css"},
-		CacheableResources: []string{"/web/prerender.js", "/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
+		CacheableResources: []string{"/web/prerender.js", "/web/compile.js", "/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
 		RawHeaders: []string{
+			compileMeta(prefix), // read by prerender.js: before it
 			`<script src="` + prefix + `/web/prerender.js"></script>`, // blocking: before the first paint (loader.go)
-			preloadWasm(prefix),
 			`<meta name="color-scheme" content="light">`,
 			`<meta name="format-detection" content="telephone=no">`,
 		},

@@ -4,10 +4,13 @@ package main
 
 import (
 	"fmt"
+	"net/http"
+	"net/http/httptest"
 	"os"
 	"path/filepath"
 	"regexp"
 	"strings"
+	"sync/atomic"
 	"testing"
 	"time"
 
@@ -266,9 +269,40 @@ func TestFailedLoad(t *testing.T) {
 	if note := b.text("#app-wasm-loader-label"); !strings.Contains(note, "link's sheet") {
 		t.Errorf("a share link: the note says %q", note)
 	}
+
+	// The worker's own fetch failing (the server refuses the wasm, on a
+	// device the site has never seen): the page tries once more itself,
+	// and says what failed the same way.
+	var wasmAsked atomic.Int32
+	h := siteHandler(site, "")
+	srv := httptest.NewServer(http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
+		if strings.HasSuffix(r.URL.Path, ".wasm") {
+			wasmAsked.Add(1)
+			http.Error(w, "refused for the test", http.StatusServiceUnavailable)
+			return
+		}
+		h.ServeHTTP(w, r)
+	}))
+	t.Cleanup(srv.Close)
+	fresh := newTab(t)
+	if err := chromedp.Do(fresh.ctx, chromedp.Navigate(srv.URL+"/")); err != nil {
+		t.Fatal(err)
+	}
+	if !fresh.poll(`document.getElementById("app-wasm-retry") !== null`, 20*time.Second) {
+		t.Fatalf("the worker's fetch refused: no retry button; the note says %q", fresh.js(`(document.getElementById("app-wasm-loader") || {}).innerText || ""`))
+	}
+	if note := fresh.text("#app-wasm-loader-label"); !strings.Contains(note, "Fieldhead could not start") || strings.Contains(note, "TypeError") {
+		t.Errorf("the worker's fetch refused: the note says %q", note)
+	}
+	if n := wasmAsked.Load(); n != 2 {
+		t.Errorf("the worker's fetch refused: the wasm was asked for %d times, want 2 (the worker, then the page)", n)
+	}
 }
 
 // blockWasm makes the page's requests for the wasm fail (on) or go through.
+// The worker that compiles the wasm (web/compile.js) fetches it past the
+// page's blocks, so while they hold the page has no Worker: it fetches the
+// wasm itself (app/loader.go). TestFailedLoad blocks the worker's fetch too.
 func blockWasm(t *testing.T, b *tab, on bool) {
 	t.Helper()
 	var pats []*network.BlockPattern
@@ -277,6 +311,21 @@ func blockWasm(t *testing.T, b *tab, on bool) {
 	}
 	if _, err := chromedp.Call(b.ctx, network.SetBlockedURLs, network.SetBlockedURLsParams{URLPatterns: pats}); err != nil {
 		t.Fatalf("blocking the wasm: %v", err)
+	}
+	switch {
+	case on && b.noWorker == "":
+		r, err := chromedp.Call(b.ctx, page.AddScriptToEvaluateOnNewDocument,
+			page.AddScriptToEvaluateOnNewDocumentParams{Source: `Object.defineProperty(window, "Worker", {value: undefined, configurable: true});`})
+		if err != nil {
+			t.Fatal(err)
+		}
+		b.noWorker = r.Identifier
+	case !on && b.noWorker != "":
+		if _, err := chromedp.Call(b.ctx, page.RemoveScriptToEvaluateOnNewDocument,
+			page.RemoveScriptToEvaluateOnNewDocumentParams{Identifier: b.noWorker}); err != nil {
+			t.Fatal(err)
+		}
+		b.noWorker = ""
 	}
 }
 

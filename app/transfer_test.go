@@ -65,9 +65,10 @@ func TestPatchLoader(t *testing.T) {
 	if !strings.Contains(string(orig), `fetchWithProgress("/web/app.wasm", showProgress)`) {
 		t.Fatal("go-app's app.js has no progress wrapper: the check below would prove nothing")
 	}
-	if strings.Contains(js, `fetchWithProgress("/web/app.wasm"`) || !strings.Contains(js, `instantiateStreaming(
-      fetch("/web/app.wasm"),`) {
-		t.Error("the wasm is not fetched straight into instantiateStreaming")
+	if strings.Contains(js, `fetchWithProgress("/web/app.wasm"`) ||
+		!strings.Contains(js, `fieldheadInstantiate("/web/app.wasm", go.importObject, instantiateStreaming)`) ||
+		!strings.Contains(js, `onMain(fetch(url), imports)`) {
+		t.Error("the wasm is not started from the worker's module, or else fetched straight into instantiateStreaming")
 	}
 	if regexp.MustCompile(`(?m)^goappInitServiceWorker\(\);`).MatchString(js) {
 		t.Error("the worker is still registered before the wasm loads")
@@ -148,9 +149,20 @@ func TestSiteTransfer(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
+	// The worker that fetches and compiles the wasm (web/compile.js) and
+	// what it loads, under their hashed names, named for prerender.js
+	// before it; no preload, which the worker's fetch could not use (a
+	// second download).
 	wasm := path.Base(siteAsset(t, site, "web/app.wasm"))
-	if !bytes.Contains(page, []byte(`<link rel="preload" href="/web/`+wasm+`" as="fetch" type="application/wasm" crossorigin>`)) {
-		t.Error("the page does not preload the wasm under its hashed name")
+	worker := path.Base(siteAsset(t, site, "web/compile.js"))
+	exec := path.Base(siteAsset(t, site, "wasm_exec.js"))
+	meta := `<meta name="fieldhead-compile" content="/web/` + worker + `" data-wasm="/web/` + wasm + `" data-exec="/` + exec + `">`
+	at, script := bytes.Index(page, []byte(meta)), bytes.Index(page, []byte(`<script src="/web/prerender.`))
+	if at < 0 || script < 0 || at > script {
+		t.Errorf("the page does not name the compiling worker and the wasm under their hashed names before prerender.js (want %s)", meta)
+	}
+	if bytes.Contains(page, []byte(`rel="preload"`)) {
+		t.Error("the page preloads a file: the wasm is fetched by the compiling worker, which cannot use it")
 	}
 }
 

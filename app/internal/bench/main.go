@@ -76,6 +76,7 @@ import (
 	"strconv"
 	"strings"
 	"sync"
+	"sync/atomic"
 	"testing"
 	"time"
 
@@ -85,6 +86,7 @@ import (
 	"github.com/chromedp/cdproto/emulation"
 	"github.com/chromedp/cdproto/network"
 	"github.com/chromedp/cdproto/page"
+	"github.com/chromedp/cdproto/target"
 	"github.com/chromedp/chromedp"
 
 	"fieldhead/app/internal/headless"
@@ -133,6 +135,8 @@ var (
 	editOnly   = flag.Bool("edits-only", false, "only the edit figures, on one loaded page (to compare builds quickly)")
 	partsOf    = flag.String("parts", "", "only list the code of this wasm (built without -s) by package, largest first")
 	profileTop = flag.Int("profile", 0, "with -edits-only: list this many functions of Chromium's CPU profile of the timed edits; with -return-only, of the last offline reload")
+	jsFlags    = flag.String("js-flags", "", "V8 flags for Chromium, to see what an engine setting changes (--no-wasm-lazy-compilation: every function compiled before the program starts)")
+	coldOnly   = flag.Bool("cold-only", false, "only the cold loads of a share link (to compare builds quickly)")
 	returnOnly = flag.Bool("return-only", false, "only the return visits to a kept sheet: snapshot and live answer, online and offline")
 	partsFuncs = flag.Int("funcs", 60, "with -parts: list this many of the largest functions")
 	partsMatch = flag.String("match", "", "with -parts: list only the functions whose name matches this regular expression")
@@ -195,6 +199,14 @@ func main() {
 	}
 	if *editOnly {
 		editsOnly(origin + "/?" + scenario.Demo().Encode())
+		return
+	}
+	if *coldOnly {
+		cold, coldPh, _ := coldLoads(origin + "/?" + scenario.Demo().Sign())
+		r.JSON["cold_load_ms"] = round1(median(cold))
+		r.JSON["cold_load_phases_ms"] = medianPhases(coldPh)
+		r.row("cold share link → answer, ms (median of "+strconv.Itoa(len(cold))+")", f0(median(cold)), "≤ 1000", ptr(median(cold) <= budgetColdLoad))
+		r.print()
 		return
 	}
 	if *returnOnly {
@@ -509,6 +521,9 @@ type browserSession struct {
 	cancel   func()
 	mu       sync.Mutex
 	requests []string
+
+	workerNet          *network.EmulateNetworkConditionsByRuleParams // the phone-class link, for workers too (phoneLink)
+	fastWorkerRequests []string                                      // a worker's requests before its network was slowed (followWorkers)
 }
 
 func newSession(extra ...chromedp.ExecAllocatorOption) (*browserSession, error) {
@@ -530,6 +545,9 @@ func newSession(extra ...chromedp.ExecAllocatorOption) (*browserSession, error) 
 	profile, err := os.MkdirTemp("", "fieldhead-bench-profile-")
 	if err != nil {
 		return nil, err
+	}
+	if *jsFlags != "" && len(extra) == 0 {
+		extra = append(extra, chromedp.Flag("js-flags", *jsFlags))
 	}
 	alloc, cancelAlloc := chromedp.NewExecAllocator(context.Background(),
 		append(headless.Options(path, profile, 1024, 768), extra...)...)
@@ -556,6 +574,10 @@ func newSession(extra ...chromedp.ExecAllocatorOption) (*browserSession, error) 
 		}
 	}()
 	if _, err := chromedp.Call(tab, emulation.SetCPUThrottlingRate, emulation.SetCPUThrottlingRateParams{Rate: *throttle}); err != nil {
+		s.cancel()
+		return nil, err
+	}
+	if err := s.followWorkers(); err != nil {
 		s.cancel()
 		return nil, err
 	}
@@ -725,13 +747,68 @@ func phoneSession() *browserSession {
 	return s
 }
 
-// phoneLink slows the page's network to the brief's phone-class link.
+// phoneLink slows the page's network to the brief's phone-class link, and
+// that of each worker the page starts from then on (followWorkers).
 func (s *browserSession) phoneLink() error {
 	params := network.EmulateNetworkConditionsByRuleParams{MatchedNetworkConditions: []*network.Conditions{{
 		Latency: phoneRTTms, DownloadThroughput: phoneDownBytesPerS, UploadThroughput: phoneUpBytesPerS,
 		ConnectionType: network.ConnectionTypeCellular4g}}}
+	s.mu.Lock()
+	s.workerNet = &params
+	s.mu.Unlock()
 	_, err := chromedp.Call(s.ctx, network.EmulateNetworkConditionsByRule, params)
 	return err
+}
+
+// followWorkers gives each worker the page starts (the one that fetches
+// and compiles the wasm, web/compile.js) the page's CPU slow-down and, on
+// the phone-class link, its network: Chromium applies a page's settings to
+// its own main thread and requests only. A worker's requests made before
+// its network was slowed would be fast; they are listed in
+// s.fastWorkerRequests, and the phone-class figures refused.
+func (s *browserSession) followWorkers() error {
+	return chromedp.Listen(s.ctx, func(ev any) {
+		a, ok := ev.(*target.EventAttachedToTarget)
+		if !ok || a.TargetInfo.Type != "worker" {
+			return
+		}
+		go func() {
+			wctx, _ := chromedp.NewContext(s.ctx, chromedp.WithTargetID(a.TargetInfo.TargetID))
+			s.mu.Lock()
+			net := s.workerNet
+			s.mu.Unlock()
+			var set atomic.Bool
+			if err := chromedp.Listen(wctx, func(ev any) {
+				if r, ok := ev.(*network.EventRequestWillBeSent); ok && net != nil && !set.Load() {
+					s.mu.Lock()
+					s.fastWorkerRequests = append(s.fastWorkerRequests, r.Request.URL)
+					s.mu.Unlock()
+				}
+			}); err != nil {
+				return // the worker ended first
+			}
+			if net != nil {
+				if _, err := chromedp.Call(wctx, network.EmulateNetworkConditionsByRule, *net); err != nil {
+					return
+				}
+			}
+			set.Store(true)
+			if _, err := chromedp.Call(wctx, emulation.SetCPUThrottlingRate, emulation.SetCPUThrottlingRateParams{Rate: *throttle}); err != nil {
+				log.Printf("a worker's CPU could not be slowed: %v", err)
+			}
+		}()
+	})
+}
+
+// refuseFastWorkers ends the bench when a worker's request went out
+// before its network was slowed (phoneLink): what follows would not be a
+// phone-class figure.
+func (s *browserSession) refuseFastWorkers(what string) {
+	s.mu.Lock()
+	defer s.mu.Unlock()
+	if len(s.fastWorkerRequests) > 0 {
+		log.Fatalf("%s: a worker fetched before its network was slowed (%s); run again", what, strings.Join(s.fastWorkerRequests, ", "))
+	}
 }
 
 // waitWorker waits until a service worker controls the page (it has
@@ -768,6 +845,7 @@ func (r *report) bare(origin string) {
 	if err != nil || pre == 0 {
 		log.Fatalf("phone-class bare page: the written answer was never painted (%v)", err)
 	}
+	s.refuseFastWorkers("phone-class bare page")
 	ph := s.loadPhases()
 	log.Printf("  phone-class bare page: written answer %.0f ms, live %.0f ms (%s)", pre, live, ph)
 	r.JSON["phone_bare_phases_ms"] = ph
@@ -837,6 +915,7 @@ func (r *report) phone(origin string, wire *meter) {
 		log.Fatalf("phone-class first visit: %v", err)
 	}
 	log.Printf("  phone-class first visit: %.0f ms", first)
+	s.refuseFastWorkers("phone-class first visit")
 	if err := s.waitWorker(); err != nil {
 		log.Fatalf("phone-class first visit: the service worker never took control: %v", err)
 	}
@@ -882,34 +961,7 @@ func (r *report) phone(origin string, wire *meter) {
 // browser takes the three browser figures and returns the URLs a first
 // visit fetched.
 func (r *report) browser(link, origin string) []string {
-	var cold []float64
-	var coldPh, offPh []phases
-	var fetched []string
-	for i := 0; i < *loads; i++ {
-		s, err := newSession()
-		if err != nil {
-			log.Fatal(err)
-		}
-		if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
-			log.Fatal(err)
-		}
-		ms, err := s.waitShown()
-		if err != nil {
-			log.Fatalf("cold load %d: %v", i+1, err)
-		}
-		cold = append(cold, ms)
-		coldPh = append(coldPh, s.loadPhases())
-		log.Printf("  cold load %d: %.0f ms (%s)", i+1, ms, coldPh[i])
-		if i == 0 {
-			if err := s.waitWorker(); err != nil {
-				log.Fatalf("cold load: the service worker never took control: %v", err)
-			}
-			s.mu.Lock()
-			fetched = append(fetched, s.requests...)
-			s.mu.Unlock()
-		}
-		s.cancel()
-	}
+	cold, coldPh, fetched := coldLoads(link)
 
 	s := openShown(link)
 	defer s.cancel()
@@ -983,6 +1035,43 @@ type returns struct {
 	offPh                            []phases
 }
 
+// coldLoads opens link *loads times, each in a fresh profile, and returns
+// the times to the answer painted, their phases and what the first load
+// fetched (until its worker had installed).
+func coldLoads(link string) (cold []float64, coldPh []phases, fetched []string) {
+	for i := 0; i < *loads; i++ {
+		s, err := newSession()
+		if err != nil {
+			log.Fatal(err)
+		}
+		stop := func() {}
+		if *traceTo != "" && i == *loads-1 {
+			stop = startTrace(s, strings.TrimSuffix(*traceTo, ".json")+"-cold.json")
+		}
+		if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
+			log.Fatal(err)
+		}
+		ms, err := s.waitShown()
+		if err != nil {
+			log.Fatalf("cold load %d: %v", i+1, err)
+		}
+		stop()
+		cold = append(cold, ms)
+		coldPh = append(coldPh, s.loadPhases())
+		log.Printf("  cold load %d: %.0f ms (%s)", i+1, ms, coldPh[i])
+		if i == 0 {
+			if err := s.waitWorker(); err != nil {
+				log.Fatalf("cold load: the service worker never took control: %v", err)
+			}
+			s.mu.Lock()
+			fetched = append(fetched, s.requests...)
+			s.mu.Unlock()
+		}
+		s.cancel()
+	}
+	return cold, coldPh, fetched
+}
+
 // returnVisits opens link again and again in s, which has shown it once.
 func returnVisits(s *browserSession, link string) returns {
 	var rv returns
@@ -1029,6 +1118,8 @@ func returnVisits(s *browserSession, link string) returns {
 		stop := func() {}
 		if *profileTop > 0 && i == *loads-1 {
 			stop = startProfile(s)
+		} else if *traceTo != "" && i == *loads-1 {
+			stop = startTrace(s, strings.TrimSuffix(*traceTo, ".json")+"-offline.json")
 		}
 		if err := chromedp.Do(s.ctx, chromedp.Reload()); err != nil {
 			log.Fatal(err)

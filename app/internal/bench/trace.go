@@ -7,6 +7,7 @@ import (
 	"flag"
 	"log"
 	"os"
+	"sync"
 
 	"github.com/chromedp/cdproto/cdp"
 	"github.com/chromedp/cdproto/tracing"
@@ -14,14 +15,15 @@ import (
 )
 
 // traceTo is -trace: with -return-only, Chromium's trace of one repeat
-// visit (the last), written to this file in the trace event format that
+// visit (the last; of the last offline reload too, beside it), written to this file in the trace event format that
 // chrome://tracing and Perfetto read.
-var traceTo = flag.String("trace", "", "with -return-only: write Chromium's trace of the last repeat visit to this file")
+var traceTo = flag.String("trace", "", "with -return-only or -cold-only: write Chromium's trace of the last repeat visit to this file, of the last offline reload to its name with -offline, of the last cold load with -cold")
 
 // startTrace starts tracing the page of s and returns the function that
 // stops it and writes the trace to path.
 func startTrace(s *browserSession, path string) func() {
 	done := make(chan struct{})
+	var once sync.Once // a listener stays registered: a later trace's end reaches it too
 	var events []any
 	if err := chromedp.Listen(s.ctx, func(ev any) {
 		switch e := ev.(type) {
@@ -30,7 +32,7 @@ func startTrace(s *browserSession, path string) func() {
 				events = append(events, v)
 			}
 		case *tracing.EventTracingComplete:
-			close(done)
+			once.Do(func() { close(done) })
 		}
 	}); err != nil {
 		log.Fatal(err)
@@ -51,6 +53,6 @@ func startTrace(s *browserSession, path string) func() {
 		if err := os.WriteFile(path, b, 0o644); err != nil {
 			log.Fatal(err)
 		}
-		log.Printf("trace of the last repeat visit: %s (%d events)", path, len(events))
+		log.Printf("trace: %s (%d events)", path, len(events))
 	}
 }

@@ -1,0 +1,34 @@
+// Fieldhead: compiles the program (app.wasm) off the page's main thread
+// (web/prerender.js starts this worker; app.js's fieldheadInstantiate,
+// app/loader.go, starts the program from the module).
+//
+// The page posts the wasm's URL, wasm_exec.js's and the query of the sheet
+// it will open. The compiled module goes back at once (shared with the
+// page, not copied), or nothing if it cannot be fetched or compiled, and
+// the page then compiles on its own thread instead (and says why it could
+// not). Then the program's first steps run here once (its start, the sheet
+// read, worked out and worded: app/warm.go): the browser compiles each
+// function of a module when it is first called, on the thread that calls
+// it, and the page's own start then finds most of them compiled.
+"use strict";
+self.onmessage = async (e) => {
+  const { wasm, exec, query } = e.data;
+  let module;
+  try {
+    module = await WebAssembly.compileStreaming(fetch(wasm));
+  } catch (err) {
+    self.postMessage({ error: String(err) });
+    self.close();
+    return;
+  }
+  self.postMessage({ module });
+  try {
+    importScripts(exec);
+    const go = new Go();
+    self.fieldheadWarmQuery = query;
+    await go.run(await WebAssembly.instantiate(module, go.importObject));
+  } catch (err) {
+    // Only a head start is lost.
+  }
+  self.close();
+};
