@@ -35,7 +35,7 @@ func (s *sheet) startBook(ctx app.Context) {
 			defer s.contain("opening the store of kept sheets")
 			if problem != "" {
 				s.bk.problem = problem
-				s.evaluate()
+				s.build() // the book says why it keeps nothing
 				return
 			}
 			s.bk.db = db
@@ -65,7 +65,12 @@ func (s *sheet) startBook(ctx app.Context) {
 							}
 						}
 					}
-					s.evaluate()
+					// Kept at once, and the book drawn with it: the inputs
+					// have not changed, so nothing is worked out again and
+					// no save is put off (which, a moment after every
+					// load, redrew the sheet and left a write pending).
+					s.bk.keep(s.d.Scen, s.res, s.damaged)
+					s.build()
 				})
 			})
 		})
