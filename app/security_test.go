@@ -268,4 +268,10 @@ func TestSiteMetadata(t *testing.T) {
 	if strings.Contains(string(page), `content="https://"`) {
 		t.Error("index.html carries a placeholder address")
 	}
+	// The tab's icon is a PNG: an SVG one is drawn on the page's main thread
+	// during the load (fixMetadata).
+	icons := regexp.MustCompile(`<link [^>]*rel="icon"[^>]*>`).FindAllString(string(page), -1)
+	if len(icons) != 1 || !regexp.MustCompile(`href="/web/icon-192\.[0-9a-f]{10}\.png"`).MatchString(icons[0]) {
+		t.Errorf("the tab's icon is %q, want one PNG under its hashed name", icons)
+	}
 }

@@ -13,9 +13,16 @@
 "use strict";
 self.onmessage = async (e) => {
   const { wasm, exec, query } = e.data;
+  const compiling = WebAssembly.compileStreaming(fetch(wasm));
+  let ready = true; // wasm_exec.js read while the wasm streams in: the warm-up starts with no wait
+  try {
+    importScripts(exec);
+  } catch (err) {
+    ready = false;
+  }
   let module;
   try {
-    module = await WebAssembly.compileStreaming(fetch(wasm));
+    module = await compiling;
   } catch (err) {
     self.postMessage({ error: String(err) });
     self.close();
@@ -23,7 +30,9 @@ self.onmessage = async (e) => {
   }
   self.postMessage({ module });
   try {
-    importScripts(exec);
+    if (!ready) {
+      throw new Error("no wasm_exec.js");
+    }
     const go = new Go();
     self.fieldheadWarmQuery = query;
     await go.run(await WebAssembly.instantiate(module, go.importObject));
