@@ -123,9 +123,8 @@ func newHandler(prefix, version string, wasmSize int64) *app.Handler {
 			SVG:      "/web/icon.svg",
 		},
 		Styles:             []string{"/web/fieldhead.css"},
-		CacheableResources: []string{"/web/prerender.js", "/web/compile.js", "/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
+		CacheableResources: []string{"/web/prerender.js", "/web/start.js", "/web/compile.js", "/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
 		RawHeaders: []string{
-			compileMeta(prefix), // read by prerender.js: before it
 			`<script src="` + prefix + `/web/prerender.js"></script>`, // blocking: before the first paint (loader.go)
 			`<meta name="color-scheme" content="light">`,
 			`<meta name="format-detection" content="telephone=no">`,
@@ -297,6 +296,9 @@ func fixMetadata(out, prefix string) error {
 			return tag
 		})
 		if page, err = patchLoaderHTML(page); err != nil {
+			return fmt.Errorf("%s: %w", p, err)
+		}
+		if page, err = startCompileFirst(page, prefix); err != nil {
 			return fmt.Errorf("%s: %w", p, err)
 		}
 		// The tab's icon as a PNG: the browser draws an SVG icon with a

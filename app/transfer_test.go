@@ -150,19 +150,21 @@ func TestSiteTransfer(t *testing.T) {
 		t.Fatal(err)
 	}
 	// The worker that fetches and compiles the wasm (web/compile.js) and
-	// what it loads, under their hashed names, named for prerender.js
-	// before it; no preload, which the worker's fetch could not use (a
-	// second download).
+	// what it loads, under their hashed names, named for web/start.js, an
+	// async script, both before the first style sheet (startCompileFirst);
+	// no preload (start.js says why).
 	wasm := path.Base(siteAsset(t, site, "web/app.wasm"))
 	worker := path.Base(siteAsset(t, site, "web/compile.js"))
 	exec := path.Base(siteAsset(t, site, "wasm_exec.js"))
-	meta := `<meta name="fieldhead-compile" content="/web/` + worker + `" data-wasm="/web/` + wasm + `" data-exec="/` + exec + `">`
-	at, script := bytes.Index(page, []byte(meta)), bytes.Index(page, []byte(`<script src="/web/prerender.`))
-	if at < 0 || script < 0 || at > script {
-		t.Errorf("the page does not name the compiling worker and the wasm under their hashed names before prerender.js (want %s)", meta)
+	start := path.Base(siteAsset(t, site, "web/start.js"))
+	tags := `<meta name="fieldhead-compile" content="/web/` + worker + `" data-wasm="/web/` + wasm + `" data-exec="/` + exec + `">` +
+		"\n    " + `<script async src="/web/` + start + `"></script>`
+	at, sheet := bytes.Index(page, []byte(tags)), bytes.Index(page, []byte(`rel="stylesheet"`))
+	if at < 0 || sheet < 0 || at > sheet {
+		t.Errorf("the page does not start the compiling worker before its style sheets, under the hashed names (want %s)", tags)
 	}
 	if bytes.Contains(page, []byte(`rel="preload"`)) {
-		t.Error("the page preloads a file: the wasm is fetched by the compiling worker, which cannot use it")
+		t.Error("the page preloads a file: the wasm is fetched by the compiling worker")
 	}
 }
 

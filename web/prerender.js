@@ -25,43 +25,6 @@
 // src or action; an element not listed is left out with what it holds.
 // Every element of it is inert (no focus, no click) and the page's CSP
 // (self only, no inline script or style) stays as it is.
-// The program, meanwhile, is compiled in a worker (web/compile.js) that
-// fetches it itself, so that the main thread stays free to lay out and
-// paint what is shown before it runs; app.js's fieldheadInstantiate
-// (app/loader.go) takes the module. Handing the worker the page's own
-// response instead cost more than it saved: the page's main thread reading
-// 9 MB (make bench, offline reload, about 250 ms more at 4× CPU). The
-// worker's and the wasm's URLs are in <meta name="fieldhead-compile">,
-// renamed with every other reference when the site is written. Where no
-// worker can be made, or it fails, app.js compiles on the page as before.
-(() => {
-  const meta = document.querySelector('meta[name="fieldhead-compile"]');
-  if (!meta || typeof Worker === "undefined" || !WebAssembly.compileStreaming ||
-      new URLSearchParams(location.search).get("wasm") === "false") { // go-app's switch for no wasm
-    return;
-  }
-  try {
-    const url = meta.dataset.wasm;
-    const worker = new Worker(meta.content);
-    const module = new Promise((resolve) => {
-      const done = (m) => resolve(m instanceof WebAssembly.Module ? m : null);
-      worker.onmessage = (e) => done(e.data && e.data.module); // the worker then closes itself
-      worker.onerror = (e) => { e.preventDefault(); worker.terminate(); done(null); };
-      worker.onmessageerror = () => { worker.terminate(); done(null); };
-    });
-    let query = location.search.slice(1);
-    try {
-      query = query || localStorage.getItem("fieldhead.scenario") || ""; // app/sheet.go storageKey
-    } catch (e) {
-      // No storage: the link's query, or the demo.
-    }
-    worker.postMessage({wasm: url, exec: meta.dataset.exec, query});
-    window.fieldheadCompiling = {url, module};
-  } catch (e) {
-    // app.js compiles on the page.
-  }
-})();
-
 (() => {
   const KEY = "fieldhead.scenario"; // app/sheet.go storageKey
   const PREFIX = "fieldhead.snapshot.";

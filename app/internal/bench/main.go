@@ -761,11 +761,12 @@ func (s *browserSession) phoneLink() error {
 }
 
 // followWorkers gives each worker the page starts (the one that fetches
-// and compiles the wasm, web/compile.js) the page's CPU slow-down and, on
-// the phone-class link, its network: Chromium applies a page's settings to
-// its own main thread and requests only. A worker's requests made before
-// its network was slowed would be fast; they are listed in
-// s.fastWorkerRequests, and the phone-class figures refused.
+// and compiles the wasm, web/compile.js), on the phone-class link, the
+// page's network: Chromium applies a page's network settings to its own
+// requests only. A worker's requests made before its network was slowed
+// would be fast; they are listed in s.fastWorkerRequests, and the
+// phone-class figures refused. A worker's CPU cannot be slowed (Chromium:
+// "Operation is only supported for pages, not workers").
 func (s *browserSession) followWorkers() error {
 	return chromedp.Listen(s.ctx, func(ev any) {
 		a, ok := ev.(*target.EventAttachedToTarget)
@@ -793,9 +794,6 @@ func (s *browserSession) followWorkers() error {
 				}
 			}
 			set.Store(true)
-			if _, err := chromedp.Call(wctx, emulation.SetCPUThrottlingRate, emulation.SetCPUThrottlingRateParams{Rate: *throttle}); err != nil {
-				log.Printf("a worker's CPU could not be slowed: %v", err)
-			}
 		}()
 	})
 }
