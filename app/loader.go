@@ -16,7 +16,7 @@ import (
 // longer what it expects:
 //
 //   - The wasm is compiled in a worker that fetches it itself
-//     (web/compile.js, started by web/prerender.js as the page opens), and
+//     (web/compile.js, started by web/start.js as the page opens), and
 //     the page starts it from the compiled module (instantiateJS): the main
 //     thread no longer reads and decodes 9 MB while it lays out and paints.
 //     go-app wrapped the response in a new Response to count bytes for a
@@ -89,12 +89,12 @@ function fieldheadInstantiate(url, imports, onMain) {
 // web/start.js, an async script that reads it. An async script runs as
 // soon as it is fetched, whatever the style sheets, and blocks nothing: the
 // worker starts before the main thread gets busy laying out the page (it
-// cannot start while the main thread is busy), so its download of the wasm
-// begins about as early as a preload would (make bench, the phone-class
-// bare page: the wasm's last byte 250 ms sooner than from prerender.js; as
-// a blocking script, it held back the style sheets and the written answer
-// by 200 ms). app.js compiles on the page if it runs first
-// (instantiateJS). The site writer renames every URL to its hashed name.
+// cannot start while the main thread is busy), and its download of the
+// wasm begins sooner than when prerender.js started it (make bench, a
+// phone-class first visit: 7707–7899 → 7676–7774 ms; as a blocking script
+// it held back the style sheets and the written answer by 200 ms). app.js
+// compiles on the page if it runs first (instantiateJS). The site writer
+// renames every URL to its hashed name.
 func startCompileFirst(page []byte, prefix string) ([]byte, error) {
 	sheet := regexp.MustCompile(`<link [^>]*rel="stylesheet"[^>]*>`).FindIndex(page)
 	if sheet == nil {

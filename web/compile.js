@@ -1,5 +1,5 @@
 // Fieldhead: compiles the program (app.wasm) off the page's main thread
-// (web/prerender.js starts this worker; app.js's fieldheadInstantiate,
+// (web/start.js starts this worker; app.js's fieldheadInstantiate,
 // app/loader.go, starts the program from the module).
 //
 // The page posts the wasm's URL, wasm_exec.js's and the query of the sheet
