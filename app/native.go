@@ -317,7 +317,7 @@ func fixMetadata(out, prefix string) error {
 }
 
 // metaTag matches one <meta …> tag.
+var metaTag = regexp.MustCompile(`<meta\s[^>]*>`)
+
 // iconTag is go-app's <link rel="icon">, its attributes in any order.
 var iconTag = regexp.MustCompile(`<link [^>]*rel="icon"[^>]*>`)
-
-var metaTag = regexp.MustCompile(`<meta\s[^>]*>`)
