@@ -4,6 +4,7 @@ package main
 
 import (
 	"encoding/json"
+	"fmt"
 	"os"
 	"path/filepath"
 	"regexp"
@@ -260,6 +261,22 @@ func TestSiteMetadata(t *testing.T) {
 	}
 	if id, _ := m["id"].(string); !strings.HasSuffix(id, "/") {
 		t.Errorf("the manifest's id is %q", m["id"])
+	}
+	// Its icons are PNGs (fixMetadata): a maskable one and the sizes 192
+	// and 512 an installed site needs.
+	listed, _ := m["icons"].([]any)
+	kinds := map[string]bool{}
+	for _, ic := range listed {
+		o, _ := ic.(map[string]any)
+		if o["type"] != "image/png" {
+			t.Errorf("the manifest lists an icon of type %v: %v", o["type"], o)
+		}
+		kinds[fmt.Sprint(o["sizes"], " ", o["purpose"])] = true
+	}
+	for _, k := range []string{"512x512 maskable", "192x192 ", "512x512 "} {
+		if !kinds[k] {
+			t.Errorf("the manifest has no %q icon: %v", k, listed)
+		}
 	}
 	page, err := os.ReadFile(filepath.Join(site, "index.html"))
 	if err != nil {
