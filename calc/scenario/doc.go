@@ -295,8 +295,12 @@
 //	        unverified until the person confirms the values. Links signed
 //	        with the eight hex digits alone (before the blocks) still read
 //	        and find damage without naming values; links typed by hand may
-//	        leave ck out. A value holding a line break or another control
-//	        character is kept verbatim and refused at its box.
+//	        leave ck out. A first field named "k", "c" or "Ck" with a
+//	        value of ck's form is read as ck with its name altered in
+//	        transit; a link whose first field is the extra ΣK k with such a
+//	        value escapes its first character (k=%312345678), so that it
+//	        reads back as k. A value holding a line break or another
+//	        control character is kept verbatim and refused at its box.
 //	keep    the values kept as typed though they look like slips (a
 //	        gauge reading typed in Pa, a fraction in a percentage box, an
 //	        accuracy finer than 0.1 %): their names, comma separated.

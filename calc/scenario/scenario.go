@@ -176,13 +176,20 @@ func (s Scenario) Encode() string {
 	}
 	sortByLink(keys)
 	var b strings.Builder
-	for _, k := range keys {
+	for i, k := range keys {
 		if b.Len() > 0 {
 			b.WriteByte('&')
 		}
 		b.WriteString(k)
 		b.WriteByte('=')
-		b.WriteString(escape(s.raw[k]))
+		v := escape(s.raw[k])
+		if i == 0 && mangledCheck(k, v) {
+			// A first field of the check field's form ("k=12345678", the
+			// extra ΣK) would read back as the check with its name altered
+			// (Parse): its first character escaped, it reads back the same.
+			v = fmt.Sprintf("%%%02X", v[0]) + v[1:]
+		}
+		b.WriteString(v)
 	}
 	return b.String()
 }

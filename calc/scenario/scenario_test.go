@@ -52,6 +52,31 @@ func TestSignedAtTheLimit(t *testing.T) {
 	}
 }
 
+// TestFirstFieldLikeCheck: a sheet whose link starts with a field of the
+// check field's form (the extra ΣK given as 8 hex digits, the first field
+// in link order) reads back as that field, signed or not, and a check
+// whose name lost its "c" in transit is still read as the check
+// (mangledCheck). FuzzScenario found the first read back as a damaged link.
+func TestFirstFieldLikeCheck(t *testing.T) {
+	for _, v := range []string{"12345678", "dddddddd", "1234abcd.AB.2"} {
+		var s Scenario
+		_ = s.Set("k", v)
+		got, err := Parse(s.Encode())
+		if err != nil || got.Get("k") != v || got.Encode() != s.Encode() {
+			t.Errorf("k=%s: read back as %q (%v), link %q", v, got.Get("k"), err, s.Encode())
+		}
+		got, err = Parse(s.Sign())
+		if err != nil || got.Get("k") != v {
+			t.Errorf("k=%s signed: read back as %q (%v)", v, got.Get("k"), err)
+		}
+	}
+	d := Demo()
+	mangled := "k" + strings.TrimPrefix(d.Sign(), CheckParam)
+	if got, err := Parse(mangled); err != nil || got.Encode() != d.Encode() {
+		t.Errorf("the demo's signed link with its check named k: %v", err)
+	}
+}
+
 func TestParseLinkErrors(t *testing.T) {
 	tests := []struct {
 		query string
