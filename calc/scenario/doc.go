@@ -295,7 +295,8 @@
 //	        unverified until the person confirms the values. Links signed
 //	        with the eight hex digits alone (before the blocks) still read
 //	        and find damage without naming values; links typed by hand may
-//	        leave ck out. A first field named "k", "c" or "Ck" with a
+//	        leave ck out. A first field whose name is one or two of the
+//	        letters c and k, in either case ("k", "Ck"), with a
 //	        value of ck's form is read as ck with its name altered in
 //	        transit; a link whose first field is the extra ΣK k with such a
 //	        value escapes its first character (k=%312345678), so that it
