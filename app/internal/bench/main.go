@@ -444,10 +444,16 @@ const shownJS = `(() => {
   try { new PerformanceObserver((l) => { for (const e of l.getEntries()) window.fieldheadLong.push(Math.round(e.startTime) + "+" + Math.round(e.duration)); }).observe({type: "longtask", buffered: true}); } catch (e) {}
   // The paint of the written answer, by the Element Timing API (the
   // figure carries elementtiming="answer-value").
+  // An entry may arrive once its element has left the page (a late
+  // frame's timing): then it is the written answer if it was painted
+  // before the Go program started.
   new PerformanceObserver((list) => {
+    const goStart = (performance.getEntriesByName("fieldhead-main")[0] || {}).startTime;
     for (const e of list.getEntries()) {
-      if (e.identifier === "answer-value" && e.element && e.element.closest(".prerendered") && !window.fieldheadPreShown) {
-        window.fieldheadPreShown = e.renderTime || e.loadTime;
+      const t = e.renderTime || e.loadTime;
+      const written = e.element ? e.element.closest(".prerendered") : goStart === undefined || t < goStart;
+      if (e.identifier === "answer-value" && written && !window.fieldheadPreShown) {
+        window.fieldheadPreShown = t;
       }
     }
   }).observe({type: "element", buffered: true});
