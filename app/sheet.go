@@ -230,7 +230,6 @@ func (s *sheet) save() {
 	}
 	s.pending = true
 	s.leaving.set(true)
-	app.Window().Set("fieldheadPending", true) // for the browser tests
 	ctx := s.ctx
 	var arm func()
 	arm = func() {
@@ -265,16 +264,17 @@ func (s *sheet) save() {
 // reload's trace) starting the Go program only to find nothing to write.
 type leaveWatch struct {
 	pagehide, hidden app.Func // the handlers, made once (OnMount)
-	on               bool
 }
 
-// set adds the listeners (on) or removes them. A phone may end a page in
-// the background without pagehide: hence visibilitychange too.
-func (l *leaveWatch) set(on bool) {
-	if l.pagehide == nil || on == l.on {
+// set adds the listeners (on) or removes them; the browser ignores a
+// listener added twice or removed when absent. A phone may end a page in
+// the background without pagehide: hence visibilitychange too. It also
+// tells the browser tests whether a save is put off (fieldheadPending).
+func (l leaveWatch) set(on bool) {
+	app.Window().Set("fieldheadPending", on)
+	if l.pagehide == nil { // before the page is mounted
 		return
 	}
-	l.on = on
 	f := "removeEventListener"
 	if on {
 		f = "addEventListener"
@@ -291,7 +291,6 @@ func (s *sheet) flush() {
 	s.pending = false
 	if app.IsClient {
 		s.leaving.set(false)
-		app.Window().Set("fieldheadPending", false)
 	}
 	replaceQuery(s.query.of(s.d.Scen))
 	app.Window().Get("document").Set("title", pageTitle(s.vm.Name))

@@ -26,7 +26,7 @@ func warmUp() bool {
 			sc = p
 		}
 	}
-	s := &sheet{wide: 720, later: true, loaded: true}
+	s := &sheet{wide: 720, later: true, loaded: true} // any chart width: the same code draws every width
 	s.d.Reset(sc)
 	s.res = scenario.Evaluate(scenario.Read(s.d.Scen))
 	s.build()

@@ -780,13 +780,16 @@ func (s *browserSession) followWorkers() error {
 			return
 		}
 		go func() {
-			wctx, _ := chromedp.NewContext(s.ctx, chromedp.WithTargetID(a.TargetInfo.TargetID))
 			s.mu.Lock()
-			net := s.workerNet
+			link := s.workerNet
 			s.mu.Unlock()
+			if link == nil { // not on the phone-class link: nothing to give the worker
+				return
+			}
+			wctx, _ := chromedp.NewContext(s.ctx, chromedp.WithTargetID(a.TargetInfo.TargetID))
 			var set atomic.Bool
 			if err := chromedp.Listen(wctx, func(ev any) {
-				if r, ok := ev.(*network.EventRequestWillBeSent); ok && net != nil && !set.Load() {
+				if r, ok := ev.(*network.EventRequestWillBeSent); ok && !set.Load() {
 					s.mu.Lock()
 					s.fastWorkerRequests = append(s.fastWorkerRequests, r.Request.URL)
 					s.mu.Unlock()
@@ -794,10 +797,8 @@ func (s *browserSession) followWorkers() error {
 			}); err != nil {
 				return // the worker ended first
 			}
-			if net != nil {
-				if _, err := chromedp.Call(wctx, network.EmulateNetworkConditionsByRule, *net); err != nil {
-					return
-				}
+			if _, err := chromedp.Call(wctx, network.EmulateNetworkConditionsByRule, *link); err != nil {
+				return
 			}
 			set.Store(true)
 		}()
@@ -1048,10 +1049,7 @@ func coldLoads(link string) (cold []float64, coldPh []phases, fetched []string) 
 		if err != nil {
 			log.Fatal(err)
 		}
-		stop := func() {}
-		if *traceTo != "" && i == *loads-1 {
-			stop = startTrace(s, strings.TrimSuffix(*traceTo, ".json")+"-cold.json")
-		}
+		stop := traceLast(s, i, "-cold")
 		if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
 			log.Fatal(err)
 		}
@@ -1100,10 +1098,7 @@ func returnVisits(s *browserSession, link string) returns {
 		if err := chromedp.Do(s.ctx, chromedp.Navigate("about:blank")); err != nil {
 			log.Fatal(err)
 		}
-		stop := func() {}
-		if *traceTo != "" && i == *loads-1 {
-			stop = startTrace(s, *traceTo)
-		}
+		stop := traceLast(s, i, "")
 		if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
 			log.Fatal(err)
 		}
@@ -1119,11 +1114,11 @@ func returnVisits(s *browserSession, link string) returns {
 		log.Fatal(err)
 	}
 	for i := 0; i < *loads; i++ {
-		stop := func() {}
+		var stop func()
 		if *profileTop > 0 && i == *loads-1 {
-			stop = startProfile(s)
-		} else if *traceTo != "" && i == *loads-1 {
-			stop = startTrace(s, strings.TrimSuffix(*traceTo, ".json")+"-offline.json")
+			stop = startProfile(s) // a profile or a trace, not both at once
+		} else {
+			stop = traceLast(s, i, "-offline")
 		}
 		if err := chromedp.Do(s.ctx, chromedp.Reload()); err != nil {
 			log.Fatal(err)

@@ -7,6 +7,7 @@ import (
 	"flag"
 	"log"
 	"os"
+	"strings"
 	"sync"
 
 	"github.com/chromedp/cdproto/cdp"
@@ -18,6 +19,16 @@ import (
 // visit (the last; of the last offline reload too, beside it), written to this file in the trace event format that
 // chrome://tracing and Perfetto read.
 var traceTo = flag.String("trace", "", "with -return-only or -cold-only: write Chromium's trace of the last repeat visit to this file, of the last offline reload to its name with -offline, of the last cold load with -cold")
+
+// traceLast starts tracing load i of -loads when it is the last and -trace
+// is given, into its file with suffix before ".json"; it returns what
+// stops the trace (nothing to stop otherwise).
+func traceLast(s *browserSession, i int, suffix string) func() {
+	if *traceTo == "" || i != *loads-1 {
+		return func() {}
+	}
+	return startTrace(s, strings.TrimSuffix(*traceTo, ".json")+suffix+".json")
+}
 
 // startTrace starts tracing the page of s and returns the function that
 // stops it and writes the trace to path.
