@@ -3,6 +3,7 @@
 package main
 
 import (
+	"flag"
 	"fmt"
 	"log"
 	"os"
@@ -41,8 +42,21 @@ func editsOnly(link string) {
 		}
 	}
 	var cpu0 float64
-	times, phases := timeEdits(s, func() { start(); cpu0 = rendererCPU(s.profile) })
+	stopTrace := func() {}
+	times, phases := timeEdits(s, func() {
+		if *traceTo != "" {
+			stopTrace = startTrace(s, *traceTo)
+		}
+		if *floor {
+			if _, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](floorJS)); err != nil {
+				log.Fatal(err)
+			}
+		}
+		start()
+		cpu0 = rendererCPU(s.profile)
+	})
 	cpu := rendererCPU(s.profile) - cpu0
+	stopTrace()
 	var mean [4]float64
 	for _, ph := range phases {
 		for k := range mean {
@@ -71,6 +85,25 @@ func editsOnly(link string) {
 	fmt.Printf("\nelements under each part of the page:\n%s\n", regions)
 	fmt.Printf("\nDOM mutations during the timed edits (kind, where: count):\n%s\n", strings.ReplaceAll(muts, "],[", "]\n["))
 }
+
+// floor is -floor: the timed edits never reach the Go program.
+var floor = flag.Bool("floor", false, "with -edits-only: time the edits with the page's own part only (the box's input event stopped before the program; the answer's text set to the box's, in the same frame), the browser's floor under an edit on this page")
+
+// floorJS stops each input event of the flow box before the Go program
+// sees it and writes the box's text into the answer, so that an edit costs
+// only what the browser does: the key, the event, one changed text, the
+// frame. It runs after editJS, whose own input listener (same node, same
+// phase, added first) still records the event's time.
+const floorJS = `(() => {
+  const box = document.getElementById("in-q");
+  const out = document.getElementById("answer-value");
+  document.addEventListener("input", (e) => {
+    if (e.target !== box) return;
+    e.stopImmediatePropagation();
+    out.textContent = box.value + " L/s";
+  }, true);
+  return "";
+})()`
 
 // mutationsJS counts the page's DOM mutations by kind and place.
 const mutationsJS = `(() => {
