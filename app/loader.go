@@ -58,7 +58,7 @@ func patchLoader(js string) (string, error) {
 		}
 		js = s.re.ReplaceAllString(js, s.repl)
 	}
-	return js + instantiateJS + loadFailedJS, nil
+	return js + instantiateJS + loadFailedJS + buildJS, nil
 }
 
 // instantiateJS starts the wasm from the module web/start.js had a
@@ -104,6 +104,86 @@ func startCompileFirst(page []byte, prefix string) ([]byte, error) {
 		"\n    " + `<script async src="` + prefix + `/web/start.js"></script>` + "\n    "
 	return append(append(append([]byte{}, page[:sheet[0]]...), tags...), page[sheet[0]:]...), nil
 }
+
+// buildJS is goappBuild, which our go-app copy calls to build a new
+// element's subtree in one call out of the wasm
+// (app/third_party/go-app/pkg/app/mount_batch.go, which writes the buffer
+// it reads): each call out of the wasm costs far more than the DOM work
+// it asks for. A node is a kind byte (1 element, 2 element in a
+// namespace, 3 text, 4 raw HTML), then its strings (a length as a
+// little-endian base-128 number, then UTF-8); an element has its namespace
+// (kind 2), tag, attribute count, names and values, and child count,
+// followed by its children. Attributes are set as go-app's setJSAttribute
+// sets them: a few as properties, the rest with setAttribute. It returns
+// the nodes made, in the buffer's order.
+const buildJS = `
+// Fieldhead: a subtree built in one call from the wasm (app/loader.go).
+function goappBuild(buf) {
+  const dec = new TextDecoder();
+  const nodes = [];
+  let p = 0;
+  const num = () => {
+    let n = 0, shift = 0, b;
+    do {
+      b = buf[p++];
+      n += (b & 127) * 2 ** shift;
+      shift += 7;
+    } while (b & 128);
+    return n;
+  };
+  const str = () => {
+    const n = num();
+    const s = dec.decode(buf.subarray(p, p + n));
+    p += n;
+    return s;
+  };
+  const yes = (v) => /^(1|t|T|TRUE|true|True)$/.test(v); // Go's strconv.ParseBool; anything else is false
+  const set = (el, name, value) => {
+    switch (name) {
+      case "value": el.value = value; break;
+      case "contenteditable": el.contentEditable = value; break;
+      case "ismap": el.isMap = yes(value); break;
+      case "readonly": el.readOnly = yes(value); break;
+      case "async": case "autofocus": case "autoplay": case "checked": case "default": case "defer":
+      case "disabled": case "hidden": case "loop": case "multiple": case "muted": case "open":
+      case "required": case "reversed": case "selected":
+        el[name] = yes(value); break;
+      default: el.setAttribute(name, value);
+    }
+  };
+  const node = () => {
+    const kind = buf[p++];
+    if (kind === 3) {
+      const t = document.createTextNode(str());
+      nodes.push(t);
+      return t;
+    }
+    if (kind === 4) {
+      const wrapper = document.createElement("div");
+      wrapper.innerHTML = str();
+      const first = wrapper.firstChild;
+      if (first) wrapper.removeChild(first);
+      nodes.push(first);
+      return first;
+    }
+    const ns = kind === 2 ? str() : "";
+    const tag = str();
+    const el = ns ? document.createElementNS(ns, tag) : document.createElement(tag);
+    nodes.push(el);
+    for (let n = num(); n > 0; n--) {
+      const name = str();
+      set(el, name, str());
+    }
+    for (let n = num(); n > 0; n--) {
+      const child = node();
+      if (child) el.appendChild(child);
+    }
+    return el;
+  };
+  node();
+  return nodes;
+}
+`
 
 // loadFailedJS ends app.js: what the corner note says, moved above the
 // sheet, when the wasm could not be fetched or started. The written page stays as it is (the demo on

@@ -145,6 +145,10 @@ func (m nodeManager) mountHTML(ctx Context, depth uint, v HTML) (UI, error) {
 			WithTag("depth", v.depth())
 	}
 
+	if canBatch() {
+		return m.mountBatched(ctx, depth, v) // Fieldhead: one call (mount_batch.go)
+	}
+
 	jsElement, _ := Window().createElement(v.Tag(), v.XMLNamespace())
 	v = v.setJSElement(jsElement)
 	m.mountHTMLAttributes(ctx, v)
