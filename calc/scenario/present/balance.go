@@ -17,9 +17,14 @@ var solveLabels = map[string]string{
 // balanceView is the two-point energy balance: the answer, the two
 // points, what lies between them, the liquid and where the head goes.
 func (b *builder) balanceView() []Card {
-	cards := []Card{b.answerCard(), b.pointCard("1", "in"), b.pointCard("2", "out"), b.betweenCard(), b.liquidCard(), b.budgetCard()}
+	// Each card is built once: building one marks its warnings listed
+	// and its parameters shown, so a card built and dropped would hide
+	// them from the cards kept.
+	var cards []Card
 	if b.isLoop() {
 		cards = []Card{b.answerCard(), b.loopCard(), b.betweenCard(), b.liquidCard(), b.budgetCard()}
+	} else {
+		cards = []Card{b.answerCard(), b.pointCard("1", "in"), b.pointCard("2", "out"), b.betweenCard(), b.liquidCard(), b.budgetCard()}
 	}
 	if b.wantsSurge() {
 		cards = append(cards, b.surgeCard())
@@ -107,11 +112,20 @@ func (b *builder) answerLines() []string {
 	if br.TurbineHead > 0 {
 		out = append(out, "hydraulic power to the turbine "+b.show(br.TurbinePower, calc.Power)+" (before machine losses)")
 	}
-	out = append(out, "at a flow of "+b.param("q", br.Q)+", friction and fittings "+b.head(br.FrictionHead))
+	out = append(out, "at a flow of "+b.param("q", br.Q)+", "+b.lossesName()+" "+b.head(br.FrictionHead))
 	if pr := b.r.Pump; pr != nil && pr.Operating != nil {
 		out = append(out, "the data-sheet pump runs at "+b.param("q", pr.Operating.Q)+" and "+b.head(pr.Operating.H)+" (Pump view)")
 	}
 	return out
+}
+
+// lossesName names the balance's friction head by what it holds: the
+// components' drops too when the line has any.
+func (b *builder) lossesName() string {
+	if l := b.r.Line; l != nil && l.ComponentLoss != 0 {
+		return "friction, fittings and components"
+	}
+	return "friction and fittings"
 }
 
 // pointCard is one end of the balance.
@@ -194,10 +208,14 @@ func (b *builder) budgetCard() Card {
 		units = "feet"
 	}
 	bud := &Budget{Note: "Heads in " + units + " of the liquid, gauge basis; elevations measured from the lower point. Terms that are zero are left out. Hatched bars are negative."}
-	for _, side := range []struct {
+	sides := []struct {
 		sign  int
 		title string
-	}{{+1, "Supplied at point 1 and by the pump"}, {-1, "Used at point 2, by the line and the turbine"}} {
+	}{{+1, "Supplied at point 1 and by the pump"}, {-1, "Used at point 2, by the line and the turbine"}}
+	if b.isLoop() { // one point: nothing held or given there
+		sides[0].title, sides[1].title = "Supplied by the pump", "Used round the loop"
+	}
+	for _, side := range sides {
 		bs := BudgetSide{Title: side.title}
 		total := 0.0
 		for _, it := range br.Budget {

@@ -158,6 +158,13 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 	if n.StaticHead < 0 {
 		static = "source surface below the pump centreline (suction lift)"
 	}
+	if b.isLoop() { // the loop's level is set where its vessel connects
+		src = "the loop's static pressure at the vessel's connection (" + b.absolute(n.SurfacePressure) + ")"
+		static = "connection above the pump centreline"
+		if n.StaticHead < 0 {
+			static = "connection below the pump centreline"
+		}
+	}
 	loss := "suction losses"
 	switch sc := b.r.NPSHSuction; {
 	case sc.Typed:
@@ -209,13 +216,31 @@ func (b *builder) npshCard() Card {
 		level, facts, note,
 		b.warnings(nil, "npsh", "site", "liquid"),
 		{Kind: BlockHeading, Text: "Suction side"},
-		fields(b.quantity("p1", "Pressure on the source surface", "(0 gauge: open to the air)"), b.ref("p1ref")),
-		fields(b.quantity("z1", "Source surface elevation", ""), b.quantity("zp", "", "")),
+		b.npshSource(),
+		b.npshLevels(),
 		fields(b.quantity("hs", "", "")),
 		suction,
 		b.toggle("npsh"),
 		maybe(typed, fields(b.quantity("npshr", "", ""))),
 	}}
+}
+
+// npshSource is the box of the pressure that sets the suction's level:
+// on an open line the source surface's, on a closed loop the static
+// pressure where the expansion vessel or pressurisation unit connects.
+func (b *builder) npshSource() Block {
+	if b.isLoop() {
+		return fields(b.quantity("pexp", "", ""), b.ref("pexpref"))
+	}
+	return fields(b.quantity("p1", "Pressure on the source surface", "(0 gauge: open to the air)"), b.ref("p1ref"))
+}
+
+// npshLevels are the elevations of that pressure's point and of the pump.
+func (b *builder) npshLevels() Block {
+	if b.isLoop() {
+		return fields(b.quantity("zexp", "", ""), b.quantity("zp", "", ""))
+	}
+	return fields(b.quantity("z1", "Source surface elevation", ""), b.quantity("zp", "", ""))
 }
 
 // pumpChartCard holds the pump and system chart.

@@ -208,7 +208,7 @@ func (b *builder) reportResults() Card {
 		answer = Block{Kind: BlockFacts, Class: "facts", Facts: []Fact{
 			{ID: "report-answer", Label: label + " (the unknown)", Value: main, Key: true},
 			{Label: "at a flow of", Value: b.param("q", br.Q)},
-			{Label: "friction and fittings", Value: b.head(br.FrictionHead)},
+			{Label: b.lossesName(), Value: b.head(br.FrictionHead)},
 		}}
 		if b.isLoop() {
 			answer.Facts = append(answer.Facts, Fact{ID: "report-loop", Label: "line", Value: "closed loop: no static head, the pump head is the friction, fittings and components round the loop"})
