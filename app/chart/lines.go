@@ -134,7 +134,7 @@ func (r *renderer) tagLabels(p *panel) []pendingLabel {
 			continue
 		}
 		ys := r.yScale(p, s.Y2)
-		w := textWidth(name, fontSmall) + 4
+		w := textWidth(name, fontSmall)*boldWidth + 4 // drawn bold
 		h := fontSmall * 1.2
 		// The preferred side all along the walk first, then the other:
 		// two lines close together keep their order (EGL above HGL).

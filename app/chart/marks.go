@@ -208,6 +208,14 @@ func (r *renderer) uncertaintyBox(b []byte, p *panel, m Marker, ys *scale, col s
 	return b
 }
 
+// boldWidth is how much wider bold text runs than textWidth's estimate,
+// made for the regular weight. In DejaVu Sans, the widest of the usual
+// faces, the label "measured 41.00 L/s, 46.71 m ± 1.905 m" is 20.35 em
+// regular and 22.42 em bold (digits 1303 and 1425 units of 2048: the
+// fonts' hmtx tables, read with python3-fonttools); unscaled, a bold label
+// placed at the plot's right edge ran past the chart at 320 px.
+const boldWidth = 1.1
+
 // placeLabels places every pending label in the order given (bands',
 // markers', then lines' names), each in the first free spot (see
 // placer). A label farther than a short reach from its point gets a thin
@@ -223,6 +231,9 @@ func (r *renderer) placeLabels(b []byte, labels []pendingLabel) ([]byte, []strin
 		w := 0.0
 		for _, s := range l.lines {
 			w = math.Max(w, textWidth(s, size))
+		}
+		if l.bold {
+			w *= boldWidth
 		}
 		h := float64(len(l.lines)) * size * 1.2
 		q := l.p.plot

@@ -16,6 +16,9 @@ type placer struct {
 	taken  []rect       // labels placed; never overlapped
 	marks  []rect       // symbols and boxes, avoided when possible
 	segs   [][4]float64 // line pieces, avoided when possible
+	// leaders drawn so far, from a point to its label: a later leader
+	// that crosses one pairs two labels with the wrong marks at a glance.
+	leaders [][4]float64
 }
 
 func (a rect) overlaps(b rect) bool { return a.l < b.r && a.r > b.l && a.t < b.b && a.b > b.t }
@@ -60,6 +63,7 @@ func (pl *placer) place(cands []rect, x, y float64) int {
 		// Later spots are farther from their point: a small price each,
 		// so a spot that crosses one line more still beats one far off.
 		cost := 0.04 * float64(i)
+		cost += pl.misleads(c, x, y)
 		for _, m := range pl.marks {
 			if c.overlaps(m) {
 				free = false // a label never hides a mark
@@ -91,9 +95,53 @@ func (pl *placer) place(cands []rect, x, y float64) int {
 		pl.taken = append(pl.taken, cands[best])
 		if lx, ly, far := cands[best].leader(x, y); far {
 			pl.segs = append(pl.segs, [4]float64{x, y, lx, ly})
+			pl.leaders = append(pl.leaders, [4]float64{x, y, lx, ly})
 		}
 	}
 	return best
+}
+
+// misleads is the price of a spot c for the label of the point (x, y)
+// that a reader could pair with another mark: 2 for each leader drawn
+// before that its own leader would cross, and 1 for each other mark
+// nearer to the box than its own point (the label reads as that mark's).
+// Nothing for a label of no point (a NaN x or y).
+func (pl *placer) misleads(c rect, x, y float64) float64 {
+	if !finite(x) || !finite(y) {
+		return 0
+	}
+	cost := 0.0
+	nx, ny := c.nearest(x, y)
+	own := math.Hypot(nx-x, ny-y)
+	if lx, ly, far := c.leader(x, y); far {
+		for _, g := range pl.leaders {
+			if crosses(x, y, lx, ly, g[0], g[1], g[2], g[3]) {
+				cost += 2
+			}
+		}
+	}
+	for _, m := range pl.marks {
+		if x >= m.l && x <= m.r && y >= m.t && y <= m.b {
+			continue // its own mark
+		}
+		mx, my := (m.l+m.r)/2, (m.t+m.b)/2
+		ox, oy := c.nearest(mx, my)
+		if math.Hypot(ox-mx, oy-my)+4 < own {
+			cost++
+		}
+	}
+	return cost
+}
+
+// crosses reports whether the segments a0–a1 and b0–b1 cross at a point
+// inside both (touching ends do not count).
+func crosses(ax0, ay0, ax1, ay1, bx0, by0, bx1, by1 float64) bool {
+	side := func(px, py, qx, qy, rx, ry float64) float64 { return (qx-px)*(ry-py) - (qy-py)*(rx-px) }
+	d1 := side(bx0, by0, bx1, by1, ax0, ay0)
+	d2 := side(bx0, by0, bx1, by1, ax1, ay1)
+	d3 := side(ax0, ay0, ax1, ay1, bx0, by0)
+	d4 := side(ax0, ay0, ax1, ay1, bx1, by1)
+	return d1*d2 < 0 && d3*d4 < 0
 }
 
 // labelReach is the farthest a marker's label may sit from its mark
