@@ -159,3 +159,42 @@ func TestLabelsByTheirMarks(t *testing.T) {
 		}
 	}
 }
+
+// TestMisleads: a spot is priced up for each earlier leader its own would
+// cross and for each other mark nearer to it than its own point; crosses
+// counts only a crossing inside both segments. Plane geometry, checked by
+// hand.
+func TestMisleads(t *testing.T) {
+	for _, c := range []struct {
+		name string
+		seg  [8]float64
+		want bool
+	}{
+		{"an X", [8]float64{0, 0, 10, 10, 0, 10, 10, 0}, true},
+		{"a T touching at an end", [8]float64{0, 0, 10, 0, 5, 0, 5, 10}, false},
+		{"parallel", [8]float64{0, 0, 10, 0, 0, 1, 10, 1}, false},
+		{"apart", [8]float64{0, 0, 1, 1, 5, 5, 6, 4}, false},
+	} {
+		s := c.seg
+		if got := crosses(s[0], s[1], s[2], s[3], s[4], s[5], s[6], s[7]); got != c.want {
+			t.Errorf("%s: crosses %v, want %v", c.name, got, c.want)
+		}
+	}
+	pl := placer{bounds: rect{0, 0, 400, 400}}
+	pl.marks = []rect{{96, 96, 104, 104}, {196, 96, 204, 104}} // the own mark at (100, 100), another at (200, 100)
+	near := rect{110, 110, 150, 124}                           // beside its own mark
+	other := rect{205, 110, 245, 124}                          // beside the other mark
+	if got := pl.misleads(near, 100, 100); got != 0 {
+		t.Errorf("a spot beside its own mark costs %v, want 0", got)
+	}
+	if got := pl.misleads(other, 100, 100); got != 1 {
+		t.Errorf("a spot beside another mark costs %v, want 1 (that mark is nearer than its own)", got)
+	}
+	pl.leaders = [][4]float64{{150, 50, 150, 200}} // an earlier leader, upright at x = 150
+	if got := pl.misleads(other, 100, 100); got != 3 {
+		t.Errorf("a spot whose leader crosses an earlier one costs %v, want 3", got)
+	}
+	if got := pl.misleads(other, math.NaN(), math.NaN()); got != 0 {
+		t.Errorf("a label of no point costs %v, want 0", got)
+	}
+}
