@@ -5,6 +5,7 @@ import (
 	"math"
 	"regexp"
 	"strconv"
+	"strings"
 	"testing"
 )
 
@@ -196,5 +197,32 @@ func TestMisleads(t *testing.T) {
 	}
 	if got := pl.misleads(other, math.NaN(), math.NaN()); got != 0 {
 		t.Errorf("a label of no point costs %v, want 0", got)
+	}
+}
+
+// TestNoteLines: numbered notes share a line while whole notes fit it,
+// each starting noteGap after the last, and a note wider than a line is
+// wrapped on lines of its own. Widths by textWidth; checked by hand.
+func TestNoteLines(t *testing.T) {
+	notes := []string{"reading 1 41.00 L/s, 46.71 m", "reading 5 58.00 L/s, 34.01 m", "best efficiency 55.83 L/s, 76.01 %"}
+	wide := noteLines(notes, 776) // a printed chart: 800 wide, less its padding
+	if len(wide) != 1 || len(wide[0]) != 3 {
+		t.Fatalf("776 px: %d lines (%v), want the three notes on one", len(wide), wide)
+	}
+	if w0 := textWidth("1  "+notes[0], fontSmall); math.Abs(wide[0][1].x-(w0+noteGap)) > 1e-9 {
+		t.Errorf("the second note starts at %v, want %v", wide[0][1].x, w0+noteGap)
+	}
+	narrow := noteLines(notes, 280)
+	if len(narrow) != 3 {
+		t.Errorf("280 px: %d lines, want one note to a line", len(narrow))
+	}
+	long := noteLines([]string{strings.Repeat("reading 12 ", 12)}, 280)
+	if len(long) < 2 {
+		t.Errorf("a note wider than the line stays on %d line", len(long))
+	}
+	for _, l := range long {
+		if len(l) != 1 || l[0].x != 0 || textWidth(l[0].text, fontSmall) > 280 {
+			t.Errorf("a wrapped note's line %v is not a line of its own within 280 px", l)
+		}
 	}
 }

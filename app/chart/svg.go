@@ -198,10 +198,10 @@ func (r *renderer) draw(b []byte) []byte {
 	all := append(append(r.bandLabels, labels...), tags...)
 	body, notes := r.placeLabels(body, all)
 	y := r.h - 4
-	for i, n := range notes {
-		for _, l := range wrapText(itoa(i+1)+"  "+n, fontSmall, r.w-2*pad) {
-			y += 20
-			body = r.text(body, pad, y, l, "start", fontSmall, false, Ink)
+	for _, l := range noteLines(notes, r.w-2*pad) {
+		y += 20
+		for _, n := range l {
+			body = r.text(body, pad+n.x, y, n.text, "start", fontSmall, false, Ink)
 		}
 	}
 	if len(notes) > 0 {
@@ -211,3 +211,47 @@ func (r *renderer) draw(b []byte) []byte {
 	b = append(b, body...)
 	return append(b, "</svg>"...)
 }
+
+// placedNote is a piece of a note's text and where its line starts it.
+type placedNote struct {
+	x    float64
+	text string
+}
+
+// noteLines lays the numbered notes under a plot out in lines width
+// wide: side by side, noteGap apart, as many whole notes as fit a line (a
+// wide chart, on paper, keeps its height for the plot), and a note wider
+// than a line wrapped on lines of its own.
+func noteLines(notes []string, width float64) [][]placedNote {
+	var out [][]placedNote
+	var line []placedNote
+	x := 0.0
+	for i, n := range notes {
+		t := itoa(i+1) + "  " + n
+		w := textWidth(t, fontSmall)
+		if w > width {
+			if line != nil {
+				out, line, x = append(out, line), nil, 0
+			}
+			for _, l := range wrapText(t, fontSmall, width) {
+				out = append(out, []placedNote{{0, l}})
+			}
+			continue
+		}
+		if line != nil && x+noteGap+w > width {
+			out, line, x = append(out, line), nil, 0
+		}
+		if line != nil {
+			x += noteGap
+		}
+		line = append(line, placedNote{x, t})
+		x += w
+	}
+	if line != nil {
+		out = append(out, line)
+	}
+	return out
+}
+
+// noteGap is the space between two notes on a line, viewBox px.
+const noteGap = 20
