@@ -135,6 +135,18 @@ func TestAxe(t *testing.T) {
 			}
 		}
 	}
+	// Every view of the demo in US units: another set of words and
+	// figures in the same places.
+	if err := chromedp.Do(b.ctx, chromedp.EmulateViewport(1024, 768)); err != nil {
+		t.Fatal(err)
+	}
+	for _, dv := range usDemoViews(t) {
+		if dv.demo != "US demo" {
+			continue
+		}
+		b.navigate(srv.URL + "/?" + dv.link)
+		check(b, fmt.Sprintf("%s, %s view, 1024×768", dv.demo, dv.view.Key))
+	}
 	// The test card, the tested curve and cross, and the pump's history,
 	// in a tab of their own.
 	bt := newTab(t)
@@ -165,7 +177,7 @@ func TestAxe(t *testing.T) {
 	}
 	bt.noProblems("axe-core on the pump test and history")
 	t.Logf("axe-core on %d pages; elements failing per rule: %s; needing review: %s", checked, counts(perRule), counts(reviewed))
-	if want := 2*2*(len(present.Views)+1) + 2*(len(pumpTestViews())+2); checked != want {
+	if want := 2*2*(len(present.Views)+1) + len(present.Views) + 2*(len(pumpTestViews())+2); checked != want {
 		t.Errorf("axe ran on %d pages, want %d", checked, want)
 	}
 	// The check itself: an image without a text alternative, added to the

@@ -54,25 +54,15 @@ func replaceQuery(q string) {
 	app.Window().Get("history").Call("replaceState", nil, "", loc.Get("pathname").String()+search)
 }
 
-// nowText is the local date and time for the printed sheet. The browser's
-// formatting is slow next to the rest of a redraw, and the text changes
-// once a second: it is kept for the second it was made in.
+// nowText is the local date and time for the printed sheet, written the
+// one way every reader takes alike (ISO 8601, with the offset from UTC):
+// the browser's own words ("12/5/2026") read as 12 May in some places. The
+// wasm's local zone is the browser's offset now (Go's js/wasm time zone).
 func nowText() string {
 	if !app.IsClient {
 		return ""
 	}
-	sec := time.Now().Unix()
-	if nowCache.text == "" || nowCache.sec != sec {
-		nowCache.sec = sec
-		nowCache.text = app.Window().Get("Date").New().Call("toLocaleString").String()
-	}
-	return nowCache.text
-}
-
-// nowCache is nowText's last answer (the page has a single UI goroutine).
-var nowCache struct {
-	sec  int64
-	text string
+	return time.Now().Format("2006-01-02 15:04 UTC-07:00")
 }
 
 // onCopy copies the share link: the asynchronous clipboard where the

@@ -163,6 +163,9 @@ func pdfPages(t *testing.T, pdf string) (pages []string, bottom []float64) {
 // PDF); no page but the last less than half filled unless what follows
 // could not fit; and no more pages than the sheet's height needs, plus one
 // for the blocks kept whole.
+// isoStamp is the printed date's form (nowText).
+var isoStamp = regexp.MustCompile(`^\d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC[+-]\d{2}:\d{2}$`)
+
 func TestPrintRecord(t *testing.T) {
 	if _, err := exec.LookPath("pdftotext"); err != nil {
 		needBrowser(t, "pdftotext not found: apt-get install poppler-utils")
@@ -234,6 +237,12 @@ func TestPrintRecord(t *testing.T) {
 			}
 			if m.Sign != 6 {
 				t.Errorf("%s: %d lines to sign on, want name, signature and date for the tester and the witness", where, m.Sign)
+			}
+			// The date printed is ISO 8601's calendar date and time of day
+			// with its offset from UTC (ISO 8601-1:2019, 5.3.4): a locale's
+			// "12/5/2026" reads as 12 May in some places.
+			if got := b.js(`document.getElementById("report-date").textContent`); !isoStamp.MatchString(got) {
+				t.Errorf("%s: the report is dated %q, want YYYY-MM-DD hh:mm UTC±hh:mm", where, got)
 			}
 			if _, err := chromedp.Call(b.ctx, emulation.SetEmulatedMedia, emulation.SetEmulatedMediaParams{}); err != nil {
 				t.Fatal(err)
