@@ -86,7 +86,7 @@ browser: site npm
 # time limit cuts short ends the run with "context deadline exceeded" and
 # no failing input, which failed CI once for nothing.
 FUZZTIME ?= 10s
-FUZZ     := ./calc:FuzzParse ./calc:FuzzBalance ./calc/scenario:FuzzScenario ./calc/scenario:FuzzSheets ./calc/scenario:FuzzLinkDamage ./calc/scenario:FuzzParseRFC3339
+FUZZ     := ./calc:FuzzParse ./calc:FuzzBalance ./calc/scenario:FuzzScenario ./calc/scenario:FuzzSheets ./calc/scenario:FuzzLinkDamage ./calc/scenario:FuzzParseRFC3339 ./calc/scenario/present:FuzzBuild
 
 fuzz:
 	@failed=""; for t in $(FUZZ); do \

@@ -72,7 +72,7 @@ func (b *builder) fluidLine() string {
 // pressure came from.
 func (b *builder) fluidName() string {
 	f := b.r.Fluid
-	at := " at " + b.show(f.Temperature, calc.Temperature) + " and " + b.absolute(f.Pressure) + " (" + liquidNotes[b.r.LiquidFrom] + ")"
+	at := " at " + b.show(f.Temperature, calc.Temperature) + " and " + b.absolute(f.Pressure) + liquidNote(b.r.LiquidFrom)
 	switch b.in.Choice("liq") {
 	case "custom":
 		return "liquid of the typed properties"
@@ -88,11 +88,21 @@ func (b *builder) fluidName() string {
 // liquidNotes say where the pressure of the liquid's properties came from,
 // by scenario.LiquidSource.
 var liquidNotes = []string{
-	"the line pressure",
-	"mean of the points' pressures",
-	"site pressure",
-	"vapour pressure: the line would boil",
-	"",
+	scenario.LiquidTyped:      "the line pressure",
+	scenario.LiquidPoints:     "mean of the points' pressures",
+	scenario.LiquidSite:       "site pressure",
+	scenario.LiquidSaturation: "vapour pressure: the line would boil",
+	scenario.LiquidTypedProps: "",
+	scenario.LiquidLoop:       "the loop's static pressure at the vessel's connection",
+}
+
+// liquidNote is liquidNotes' words in brackets, or nothing for a source
+// it has no words for.
+func liquidNote(s scenario.LiquidSource) string {
+	if int(s) >= len(liquidNotes) || liquidNotes[s] == "" {
+		return ""
+	}
+	return " (" + liquidNotes[s] + ")"
 }
 
 // convertView is head ↔ pressure ↔ water column, gauge ↔ absolute.

@@ -165,4 +165,38 @@ func TestLoopWording(t *testing.T) {
 	if !strings.Contains(sheetText(rep), "friction, fittings and components") {
 		t.Error("the loop's report does not name its friction head with the components")
 	}
+	// Water hammer in a loop: no point 2 to close a valve at.
+	surge, _ := sheetOf(t, with(t, sc, "liq", "water", "gly", "", "tc", "0.5s"), "balance")
+	st := sheetText(Sheet{Cards: []Card{card(t, surge.Cards, "surge")}})
+	if !strings.Contains(st, "Surge on a fast closure in the loop") || !strings.Contains(st, "the loop's static pressure at the pump's level") || strings.Contains(st, "point 2") {
+		t.Error("the loop's surge card does not speak of the loop, or still names point 2")
+	}
+}
+
+// TestEveryLiquidOfALoop: a closed loop of each liquid builds every view,
+// and the liquid's line says where its pressure came from. Once a water
+// loop failed to draw: the pressure's source had no words. This project's
+// own rule (every sheet draws), no external source.
+func TestEveryLiquidOfALoop(t *testing.T) {
+	base := "name=Loop&loop=1&t=7C&q=12L/s&pexp=150kPa&zexp=10m&zp=0m&tc=0.5s" +
+		"&s1.l=120m&s1.nps=3&s1.sch=40&s1.mat=steel&s1.fit=elbow90:4&s1.cmp=chiller:45kPa@12L/s,valve:kv40"
+	for _, liq := range []string{"liq=water", "liq=seawater", "liq=eg&gly=30%25", "liq=pg&gly=30%25", "liq=custom&rho=1000kg/m3&mu=1mPa.s&pv=2kPa"} {
+		sc, err := scenario.Parse(base + "&" + liq)
+		if err != nil {
+			t.Fatalf("%s: %v", liq, err)
+		}
+		for _, v := range Views {
+			func() {
+				defer func() {
+					if p := recover(); p != nil {
+						t.Errorf("%s, %s view: %v", liq, v.Key, p)
+					}
+				}()
+				sh, _ := sheetOf(t, sc.Clone(), v.Key)
+				if text := sheetText(sh); (liq == "liq=water" || liq == "liq=seawater") && v.Key == "balance" && !strings.Contains(text, "the loop's static pressure at the vessel's connection)") {
+					t.Errorf("%s: the liquid's line does not say its pressure is the loop's static pressure", liq)
+				}
+			}()
+		}
+	}
 }

@@ -38,8 +38,12 @@ func (b *builder) surgeCard() Card {
 	}
 	liq := b.in.Choice("liq")
 	facts := b.surgeFacts()
-	return Card{ID: "surge", Title: "Surge on a fast closure at point 2", Blocks: []Block{
-		fields(b.quantity("tc", "", ""), b.quantity("dv", "", "")),
+	title, tcHint := b.surgeTitle(), ""
+	if b.isLoop() {
+		tcHint = "(a valve in the loop; for a surge estimate)"
+	}
+	return Card{ID: "surge", Title: title, Blocks: []Block{
+		fields(b.quantity("tc", "", tcHint), b.quantity("dv", "", "")),
 		fields(b.quantity("wall", "", ""), b.quantity("epipe", "", "")),
 		maybe(liq == "custom" || b.in.Given("kliq"), fields(b.quantity("kliq", "", ""))),
 		fields(b.plain("cr", "", "", true)),
@@ -49,6 +53,25 @@ func (b *builder) surgeCard() Card {
 		maybe(facts != nil, Block{Kind: BlockFacts, Class: "facts", Facts: facts}),
 		b.warnings(nil, "surge"),
 	}}
+}
+
+// surgeTitle names the surge's card and report block by where the valve
+// closes: at point 2 on a line, somewhere round a closed loop.
+func (b *builder) surgeTitle() string {
+	if b.isLoop() {
+		return "Surge on a fast closure in the loop"
+	}
+	return "Surge on a fast closure at point 2"
+}
+
+// surgeStaticLabel names the static pressure the surge adds to: point 2's
+// on a line; on a closed loop the loop's static pressure at the pump's
+// level, the point its balance is taken at (a valve higher up sees less).
+func (b *builder) surgeStaticLabel() string {
+	if b.isLoop() {
+		return "the loop's static pressure at the pump's level, flow stopped (a valve higher in the loop sees less)"
+	}
+	return "static pressure at point 2, flow stopped"
 }
 
 // surgeFacts are the surge's figures and what they come from, nil
@@ -75,7 +98,7 @@ func (b *builder) surgeFacts() []Fact {
 			peakLabel, lowLabel = "peak, at most: static + rise", "low swing, at its lowest: static − rise"
 		}
 		out = append(out,
-			Fact{ID: "surge-static", Label: "static pressure at point 2, flow stopped", Value: b.gauge(sr.Static) + " (" + b.head(sr.StaticHead) + ")"},
+			Fact{ID: "surge-static", Label: b.surgeStaticLabel(), Value: b.gauge(sr.Static) + " (" + b.head(sr.StaticHead) + ")"},
 			Fact{ID: "surge-peak", Label: peakLabel, Value: b.gauge(peak) + " (" + b.head(sr.PeakHead) + ")" + b.timesStatic(peak, sr.Static), Key: true},
 		)
 		low := "reaches the vapour pressure: the liquid column may part and rejoin with a blow larger than the rise above"
@@ -161,7 +184,7 @@ func (b *builder) reportSurge() []Block {
 		head.Label = "Joukowsky rise ρ·a·Δv, an upper bound (closure slower than 2L/a)"
 	}
 	return []Block{
-		{Kind: BlockHeading, Text: "Surge on a fast closure at point 2"},
+		{Kind: BlockHeading, Text: b.surgeTitle()},
 		{Kind: BlockLevel, ID: "report-surge-caution", Class: "lvl-caution", Text: surgeScreening},
 		{Kind: BlockFacts, Class: "facts", Facts: append([]Fact{head}, facts...)},
 	}
