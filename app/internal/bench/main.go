@@ -788,16 +788,21 @@ func (s *browserSession) followWorkers() error {
 			}
 			wctx, _ := chromedp.NewContext(s.ctx, chromedp.WithTargetID(a.TargetInfo.TargetID))
 			var set atomic.Bool
+			fast := func(what string) {
+				s.mu.Lock()
+				s.fastWorkerRequests = append(s.fastWorkerRequests, what)
+				s.mu.Unlock()
+			}
 			if err := chromedp.Listen(wctx, func(ev any) {
 				if r, ok := ev.(*network.EventRequestWillBeSent); ok && !set.Load() {
-					s.mu.Lock()
-					s.fastWorkerRequests = append(s.fastWorkerRequests, r.Request.URL)
-					s.mu.Unlock()
+					fast(r.Request.URL)
 				}
 			}); err != nil {
-				return // the worker ended first
+				fast("a worker not followed: " + err.Error()) // it may have ended first; or it fetches unslowed
+				return
 			}
 			if _, err := chromedp.Call(wctx, network.EmulateNetworkConditionsByRule, *link); err != nil {
+				fast("a worker not slowed: " + err.Error())
 				return
 			}
 			set.Store(true)
@@ -925,6 +930,12 @@ func (r *report) phone(origin string, wire *meter) {
 		log.Fatalf("phone-class first visit: the service worker never took control: %v", err)
 	}
 	bytes, sent, n304 := wire.take()
+	// A request the browser did not slow can slip past the checks above
+	// (one made before a listener was attached sends no event to it): no
+	// first visit can be shown sooner than the link moves its bytes.
+	if least := float64(bytes) / phoneDownBytesPerS * 1000; first < least {
+		log.Fatalf("phone-class first visit: answer at %.0f ms, but %d bytes take at least %.0f ms on the link: a download was not slowed; run again", first, bytes, least)
+	}
 	if err := chromedp.Do(s.ctx, chromedp.Navigate("about:blank")); err != nil {
 		log.Fatal(err)
 	}
