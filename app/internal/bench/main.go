@@ -627,6 +627,21 @@ func openShown(link string) *browserSession {
 	return s
 }
 
+// shownAfter runs act (a navigation or a reload) in s, waits for the
+// answer on screen and returns its time, then ends stop (the trace or
+// profile begun for this load); what and n name the load in a failure.
+func (s *browserSession) shownAfter(act chromedp.Action[chromedp.Void], stop func(), what string, n int) float64 {
+	if err := chromedp.Do(s.ctx, act); err != nil {
+		log.Fatal(err)
+	}
+	ms, err := s.waitShown()
+	if err != nil {
+		log.Fatalf("%s %d: %v", what, n, err)
+	}
+	stop()
+	return ms
+}
+
 // waitShown waits for the answer on screen and returns the time.
 func (s *browserSession) waitShown() (float64, error) {
 	// Long enough for a build of several MB over the phone-class link.
@@ -1060,15 +1075,7 @@ func coldLoads(link string) (cold []float64, coldPh []phases, fetched []string) 
 		if err != nil {
 			log.Fatal(err)
 		}
-		stop := traceLast(s, i, "-cold")
-		if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
-			log.Fatal(err)
-		}
-		ms, err := s.waitShown()
-		if err != nil {
-			log.Fatalf("cold load %d: %v", i+1, err)
-		}
-		stop()
+		ms := s.shownAfter(chromedp.Navigate(link), traceLast(s, i, "-cold"), "cold load", i+1)
 		cold = append(cold, ms)
 		coldPh = append(coldPh, s.loadPhases())
 		log.Printf("  cold load %d: %.0f ms (%s)", i+1, ms, coldPh[i])
@@ -1109,15 +1116,7 @@ func returnVisits(s *browserSession, link string) returns {
 		if err := chromedp.Do(s.ctx, chromedp.Navigate("about:blank")); err != nil {
 			log.Fatal(err)
 		}
-		stop := traceLast(s, i, "")
-		if err := chromedp.Do(s.ctx, chromedp.Navigate(link)); err != nil {
-			log.Fatal(err)
-		}
-		ms, err := s.waitShown()
-		if err != nil {
-			log.Fatalf("repeat visit %d: %v", i+1, err)
-		}
-		stop()
+		ms := s.shownAfter(chromedp.Navigate(link), traceLast(s, i, ""), "repeat visit", i+1)
 		rv.repeat, rv.repeatSnap = append(rv.repeat, ms), append(rv.repeatSnap, snap())
 		log.Printf("  repeat visit %d: %.0f ms (snapshot answer painted %.0f ms)", i+1, ms, rv.repeatSnap[i])
 	}
@@ -1131,14 +1130,7 @@ func returnVisits(s *browserSession, link string) returns {
 		} else {
 			stop = traceLast(s, i, "-offline")
 		}
-		if err := chromedp.Do(s.ctx, chromedp.Reload()); err != nil {
-			log.Fatal(err)
-		}
-		ms, err := s.waitShown()
-		if err != nil {
-			log.Fatalf("offline reload %d: %v", i+1, err)
-		}
-		stop()
+		ms := s.shownAfter(chromedp.Reload(), stop, "offline reload", i+1)
 		rv.off, rv.offSnap = append(rv.off, ms), append(rv.offSnap, snap())
 		rv.offPh = append(rv.offPh, s.loadPhases())
 		log.Printf("  offline reload %d: %.0f ms (snapshot answer painted %.0f ms; %s)", i+1, ms, rv.offSnap[i], rv.offPh[i])
