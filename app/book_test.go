@@ -53,8 +53,20 @@ func hasString(list []string, s string) bool {
 func savedFile(t *testing.T, b *tab, sel, dir, pattern string) (string, []byte) {
 	t.Helper()
 	b.js(fmt.Sprintf(`(document.querySelector(%q).click(), "")`, sel))
+	// The file can be seen before the browser has written it all (a loaded
+	// machine once read it empty): it is read once its size holds still
+	// between two looks.
+	last := int64(-1)
 	for deadline := time.Now().Add(10 * time.Second); time.Now().Before(deadline); time.Sleep(100 * time.Millisecond) {
 		if m, _ := filepath.Glob(filepath.Join(dir, pattern)); len(m) == 1 {
+			fi, err := os.Stat(m[0])
+			if err != nil || fi.Size() == 0 || fi.Size() != last {
+				last = -1
+				if err == nil {
+					last = fi.Size()
+				}
+				continue
+			}
 			data, err := os.ReadFile(m[0])
 			if err != nil {
 				t.Fatal(err)

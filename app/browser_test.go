@@ -22,6 +22,7 @@ import (
 	"github.com/chromedp/chromedp"
 
 	"fieldhead/app/internal/headless"
+	"fieldhead/app/internal/wasmflags"
 )
 
 // The browser test drives the built site in headless Chromium: the page and
@@ -537,7 +538,7 @@ func findChromium() string {
 func buildSite(t *testing.T) (string, error) {
 	dir := t.TempDir()
 	wasm := filepath.Join(dir, "app.wasm")
-	cmd := exec.Command("go", "build", "-trimpath", "-ldflags=-s -w", "-gcflags=all=-l", "-o", wasm, ".")
+	cmd := exec.Command("go", append(append([]string{"build", "-trimpath", "-ldflags=-s -w"}, wasmflags.GC...), "-o", wasm, ".")...)
 	cmd.Env = append(os.Environ(), "GOOS=js", "GOARCH=wasm")
 	if out, err := cmd.CombinedOutput(); err != nil {
 		return "", fmt.Errorf("%v\n%s", err, out)

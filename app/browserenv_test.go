@@ -20,6 +20,7 @@ import (
 	"github.com/chromedp/chromedp"
 
 	"fieldhead/app/internal/headless"
+	"fieldhead/app/internal/wasmflags"
 )
 
 // Shared pieces of the browser checks in security_test.go, offline_test.go,
@@ -372,7 +373,7 @@ func copyDir(src, dst string) error {
 
 // compileWasm builds the page's wasm into out.
 func compileWasm(out string) error {
-	cmd := exec.Command("go", "build", "-trimpath", "-ldflags=-s -w", "-gcflags=all=-l", "-o", out, ".")
+	cmd := exec.Command("go", append(append([]string{"build", "-trimpath", "-ldflags=-s -w"}, wasmflags.GC...), "-o", out, ".")...)
 	cmd.Env = append(os.Environ(), "GOOS=js", "GOARCH=wasm")
 	if b, err := cmd.CombinedOutput(); err != nil {
 		return fmt.Errorf("%v\n%s", err, b)

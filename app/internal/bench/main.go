@@ -91,6 +91,7 @@ import (
 
 	"fieldhead/app/internal/headless"
 	"fieldhead/app/internal/static"
+	"fieldhead/app/internal/wasmflags"
 
 	"github.com/chromedp/chromedp/kb"
 )
@@ -1310,7 +1311,7 @@ func (r *report) composition() {
 	}
 	defer os.RemoveAll(dir)
 	out := filepath.Join(dir, "app.wasm")
-	cmd := exec.Command("go", "build", "-trimpath", "-gcflags=all=-l", "-o", out, *wasmSrc)
+	cmd := exec.Command("go", append(append([]string{"build", "-trimpath"}, wasmflags.GC...), "-o", out, *wasmSrc)...)
 	cmd.Env = append(os.Environ(), "GOOS=js", "GOARCH=wasm")
 	if b, err := cmd.CombinedOutput(); err != nil {
 		r.notes = append(r.notes, fmt.Sprintf("composition not read: %v %s", err, b))

@@ -7,7 +7,7 @@
 // wasm; this reads the module's name section, which a build without -s
 // keeps:
 //
-//	GOOS=js GOARCH=wasm go build -trimpath -gcflags=all=-l -o /tmp/app-sym.wasm ./app
+//	GOOS=js GOARCH=wasm go build -trimpath -gcflags=all=-l -gcflags=runtime= -gcflags=internal/runtime/maps= -gcflags=syscall/js= -o /tmp/app-sym.wasm ./app
 //	go run ./app/internal/wasmcode -top 40 /tmp/app-sym.wasm
 //	go run ./app/internal/wasmcode -pkg fieldhead_calc_scenario /tmp/app-sym.wasm
 //
