@@ -122,7 +122,7 @@ var refParams = map[string]string{"p1": "p1ref", "p2": "p2ref", "pl": "plref", "
 // Read reads every parameter of s exactly once. It never fails: problems
 // are in Inputs.Problems.
 func Read(s Scenario) Inputs {
-	in := Inputs{Problems: map[string]*calc.FieldError{}, vals: map[string]Value{}, sides: map[string]string{}}
+	in := Inputs{Problems: map[string]*calc.FieldError{}, vals: make(map[string]Value, len(s.raw)), sides: map[string]string{}}
 	r := reader{in: &in, s: s}
 	switch u := strings.TrimSpace(s.Get("units")); u {
 	case "", "si":
@@ -182,7 +182,12 @@ func (r *reader) taint(param string) {
 // read reads one parameter's text by its kind, then checks it against its
 // own limits (those that need no other input).
 func (r *reader) read(name, text string) Value {
-	p, _, _ := Lookup(name)
+	// Only the row's Kind and Dim are read: Lookup would copy the whole
+	// row and word a segment's label, for every value on every edit.
+	p := &Param{}
+	if row, _, _ := paramRef(name); row != nil {
+		p = row
+	}
 	base := name
 	if n, f := splitSegment(name); n > 0 {
 		base = f
@@ -259,7 +264,7 @@ func (r *reader) failList(name string, err error) {
 // quantity reads a dimensioned value: a pressure with its gauge or
 // absolute suffix (those with a switch), the Convert value as a pressure
 // or a head, the speed as a share or a frequency.
-func (r *reader) quantity(name, base, t string, p Param) (Value, error) {
+func (r *reader) quantity(name, base, t string, p *Param) (Value, error) {
 	v := Value{Text: t, Dim: p.Dim}
 	_, v.Unit = Split(t)
 	def := DefaultUnit(name, r.in.US)

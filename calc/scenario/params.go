@@ -346,23 +346,36 @@ var byName = func() map[string]*Param {
 // ("s3.d") is described by its row ("d") with the segment's labels. ok is
 // false for a name that is not in the vocabulary.
 func Lookup(name string) (p Param, seg int, ok bool) {
-	if n, f := splitSegment(name); n > 0 {
-		r, found := byName[f]
-		if !found || !r.Segment || n > MaxSegments {
-			return Param{}, 0, false
-		}
-		p = *r
+	r, n, f := paramRef(name)
+	if r == nil {
+		return Param{}, 0, false
+	}
+	p = *r
+	if n > 0 {
 		p.Name, p.Label, p.Box = name, "segment "+strconv.Itoa(n)+" "+r.SegLabel, r.SegBox
 		if f == "z" {
 			p.Missing = "enter the elevation of the end of segment " + strconv.Itoa(n)
 		}
-		return p, n, true
+	}
+	return p, n, true
+}
+
+// paramRef is name's row of Table (nil for a name it lacks), with the
+// segment's number and field for a segment's parameter "s3.d": what
+// Lookup copies and words, found without either.
+func paramRef(name string) (r *Param, seg int, field string) {
+	if n, f := splitSegment(name); n > 0 {
+		r, found := byName[f]
+		if !found || !r.Segment || n > MaxSegments {
+			return nil, 0, ""
+		}
+		return r, n, f
 	}
 	r, found := byName[name]
 	if !found || r.SegmentOnly {
-		return Param{}, 0, false
+		return nil, 0, ""
 	}
-	return *r, 0, true
+	return r, 0, ""
 }
 
 // SegmentOf splits a segment's parameter "s3.d" into 3 and "d"; n is 0
