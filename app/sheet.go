@@ -48,11 +48,15 @@ type sheet struct {
 }
 
 // firstCards is how many of a view's cards, in the order of its
-// arrangement, the page draws before its first paint: the answer and the
-// inputs next to it. The others follow one frame later, so that the first
-// answer on screen does not wait for the charts and the long cards below;
-// meanwhile they show as the page showed them before the wasm (lend).
-const firstCards = 3
+// arrangement, the page draws before its first paint: the answer alone
+// (each view's arrangement starts with it). The others follow one frame
+// later, so that the first answer on screen does not wait for the inputs,
+// the charts and the long cards; meanwhile they show as the page showed
+// them before the wasm (lend). With the answer and the two inputs beside
+// it first, a cold share link's answer came 75 ms later on average and
+// the whole sheet 60 ms later (make bench -cold-only, five alternated
+// rounds at 4× CPU: 1 169 against 1 093 ms).
+const firstCards = 1
 
 // newSheet is the route's component. In the browser it restores the
 // scenario from the link, else from localStorage, else the demo.
