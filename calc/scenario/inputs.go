@@ -263,7 +263,8 @@ func (r *reader) failList(name string, err error) {
 
 // quantity reads a dimensioned value: a pressure with its gauge or
 // absolute suffix (those with a switch), the Convert value as a pressure
-// or a head, the speed as a share or a frequency.
+// or a head, the speed as a share or a frequency. p is a row of Table:
+// read, never written.
 func (r *reader) quantity(name, base, t string, p *Param) (Value, error) {
 	v := Value{Text: t, Dim: p.Dim}
 	_, v.Unit = Split(t)
