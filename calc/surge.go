@@ -249,12 +249,12 @@ func WaterBulkModulus(tK, pPa float64) (float64, error) {
 // 70(3) (1981) 807–812, at the surface (depth 0), with the practical
 // salinity 35·35/35.16504 that an absolute salinity of 35 g/kg stands for
 // (TEOS-10's reference-composition ratio). Mackenzie's coefficients were
-// compared term by term with a published transcription of the nine-term
-// equation (the R package ZooScatR's c_Mackenzie1981: 1448.96, 4.591,
-// −5.304e-2, 2.374e-4, 1.340, −1.025e-2; the depth terms vanish at the
-// surface); his stated range is 2–30 °C, and from 0 to 40 °C they agree
-// with TEOS-10 (python3-gsw's sound_speed) to within 0.5 m/s, which the
-// tests check.
+// compared term by term with the equation as the National Physical
+// Laboratory's technical guide "Speed of sound in sea-water" (its page on
+// the underlying physics) prints it: 1448.96, 4.591, −5.304e-2, 2.374e-4,
+// 1.340, −1.025e-2; the depth terms vanish at the surface. His stated
+// range is 2–30 °C, and from 0 to 40 °C they agree with TEOS-10
+// (python3-gsw's sound_speed) to within 0.5 m/s, which the tests check.
 func SeawaterBulkModulus(tK, pPa float64) (float64, error) {
 	f, err := Seawater(tK, pPa)
 	if err != nil {
