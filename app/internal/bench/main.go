@@ -83,9 +83,11 @@ import (
 	"fieldhead/calc"
 	"fieldhead/calc/scenario"
 
+	"github.com/chromedp/cdproto/cdp"
 	"github.com/chromedp/cdproto/emulation"
 	"github.com/chromedp/cdproto/network"
 	"github.com/chromedp/cdproto/page"
+	"github.com/chromedp/cdproto/runtime"
 	"github.com/chromedp/cdproto/target"
 	"github.com/chromedp/chromedp"
 
@@ -135,7 +137,7 @@ var (
 	bareOnly   = flag.Bool("bare-only", false, "only the bare page's first visit on the phone-class link")
 	editOnly   = flag.Bool("edits-only", false, "only the edit figures, on one loaded page (to compare builds quickly)")
 	partsOf    = flag.String("parts", "", "only list the code of this wasm (built without -s) by package, largest first")
-	profileTop = flag.Int("profile", 0, "with -edits-only: list this many functions of Chromium's CPU profile of the timed edits; with -return-only, of the last offline reload")
+	profileTop = flag.Int("profile", 0, "with -edits-only: list this many functions of Chromium's CPU profile of the timed edits; with -return-only, of the last offline reload; with -cold-only, of the last cold load")
 	jsFlags    = flag.String("js-flags", "", "V8 flags for Chromium, to see what an engine setting changes (--no-wasm-lazy-compilation: every function compiled before the program starts)")
 	coldOnly   = flag.Bool("cold-only", false, "only the cold loads of a share link (to compare builds quickly)")
 	returnOnly = flag.Bool("return-only", false, "only the return visits to a kept sheet: snapshot and live answer, online and offline")
@@ -778,16 +780,27 @@ func (s *browserSession) phoneLink() error {
 	s.mu.Lock()
 	s.workerNet = &params
 	s.mu.Unlock()
-	_, err := chromedp.Call(s.ctx, network.EmulateNetworkConditionsByRule, params)
+	if _, err := chromedp.Call(s.ctx, network.EmulateNetworkConditionsByRule, params); err != nil {
+		return err
+	}
+	// Each new worker waits for followWorkers to slow its link before it
+	// runs: the worker that compiles the wasm fetches as its script starts.
+	// Only dedicated workers: the service worker runs as before.
+	_, err := chromedp.Call(s.ctx, target.SetAutoAttach, target.SetAutoAttachParams{AutoAttach: true, WaitForDebuggerOnStart: true, Flatten: ptrTo(true),
+		Filter: target.Filter{{Type: "worker"}, {Exclude: true}}})
 	return err
 }
+
+// ptrTo is a pointer to a copy of v, for the protocol's optional fields.
+func ptrTo[T any](v T) *T { return &v }
 
 // followWorkers gives each worker the page starts (the one that fetches
 // and compiles the wasm, web/compile.js), on the phone-class link, the
 // page's network: Chromium applies a page's network settings to its own
 // requests only. A worker's requests made before its network was slowed
 // would be fast; they are listed in s.fastWorkerRequests, and the
-// phone-class figures refused. A worker's CPU cannot be slowed (Chromium:
+// phone-class figures refused. On that link each worker is held at its
+// start until then (phoneLink), and let run. A worker's CPU cannot be slowed (Chromium:
 // "Operation is only supported for pages, not workers").
 func (s *browserSession) followWorkers() error {
 	return chromedp.Listen(s.ctx, func(ev any) {
@@ -799,10 +812,13 @@ func (s *browserSession) followWorkers() error {
 			s.mu.Lock()
 			link := s.workerNet
 			s.mu.Unlock()
+			wctx, _ := chromedp.NewContext(s.ctx, chromedp.WithTargetID(a.TargetInfo.TargetID))
+			if a.WaitingForDebugger { // phoneLink's auto-attach holds it until its link is slowed
+				defer chromedp.Call(wctx, runtime.RunIfWaitingForDebugger, cdp.Empty{})
+			}
 			if link == nil { // not on the phone-class link: nothing to give the worker
 				return
 			}
-			wctx, _ := chromedp.NewContext(s.ctx, chromedp.WithTargetID(a.TargetInfo.TargetID))
 			var set atomic.Bool
 			fast := func(what string) {
 				s.mu.Lock()
@@ -1076,7 +1092,13 @@ func coldLoads(link string) (cold []float64, coldPh []phases, fetched []string) 
 		if err != nil {
 			log.Fatal(err)
 		}
-		ms := s.shownAfter(chromedp.Navigate(link), traceLast(s, i, "-cold"), "cold load", i+1)
+		var stop func()
+		if *profileTop > 0 && i == *loads-1 {
+			stop = startProfile(s) // a profile or a trace, not both at once
+		} else {
+			stop = traceLast(s, i, "-cold")
+		}
+		ms := s.shownAfter(chromedp.Navigate(link), stop, "cold load", i+1)
 		cold = append(cold, ms)
 		coldPh = append(coldPh, s.loadPhases())
 		log.Printf("  cold load %d: %.0f ms (%s)", i+1, ms, coldPh[i])
