@@ -68,18 +68,24 @@ func patchLoader(js string) (string, error) {
 // CPU on an offline reload, make bench). Where no worker was started, or
 // it failed, the page compiles as go-app did, and a wasm that cannot be
 // fetched fails there (loadFailedJS). A retry compiles on the page.
+// window.fieldheadCompiledBy says which did ("worker" or "page").
 const instantiateJS = `
 // Fieldhead: the wasm compiled off the main thread (app/loader.go).
 function fieldheadInstantiate(url, imports, onMain) {
-  const here = () => onMain(fetch(url), imports);
+  const here = () => { window.fieldheadCompiledBy = "page"; return onMain(fetch(url), imports); }; // for the browser tests
   const c = window.fieldheadCompiling;
   window.fieldheadCompiling = null; // a retry compiles on the page
   window.fieldheadCompileTaken = true; // web/start.js, should it run only now, starts no worker
   if (!c || c.url !== url) {
     return here();
   }
-  return c.module.then((module) => module ?
-    WebAssembly.instantiate(module, imports).then((instance) => ({ module, instance })) : here());
+  return c.module.then((module) => {
+    if (!module) {
+      return here();
+    }
+    window.fieldheadCompiledBy = "worker";
+    return WebAssembly.instantiate(module, imports).then((instance) => ({ module, instance }));
+  });
 }
 `
 

@@ -202,6 +202,35 @@ func TestBeforeWasm(t *testing.T) {
 	b.noProblems("before and after the wasm")
 }
 
+// TestCompiledInWorker opens a share link on a device the site has never
+// seen: the page starts the program from the module the worker web/start.js
+// made compiled (web/compile.js, which reads the wasm's address from its
+// name), not from a compile of its own, and shows the link's answer. (On a
+// visit the service worker serves, app.js may run before start.js and
+// compile on the page, as designed: only a first visit is checked.)
+// (Source: the HTML standard's Worker constructor and its options' name,
+// and present.Build for the answer.)
+func TestCompiledInWorker(t *testing.T) {
+	site := testSite(t)
+	b := newTab(t)
+	origin := newSiteServer(t, site).URL
+	sc := scenario.Demo()
+	if err := sc.Set("z2", "31 m"); err != nil {
+		t.Fatal(err)
+	}
+	var d scenario.Draft
+	d.Reset(sc)
+	want, _ := present.Build(&d, scenario.Evaluate(scenario.Read(sc))).Text("answer-value")
+	b.navigate(origin + "/?" + sc.Encode())
+	if by := b.js(`window.fieldheadCompiledBy || "nothing"`); by != "worker" {
+		t.Errorf("a share link's wasm was compiled by the %s, want the worker (web/compile.js)", by)
+	}
+	if got := b.text("#answer-value"); got != want {
+		t.Errorf("a share link's answer is %q, want %q", got, want)
+	}
+	b.noProblems("a share link compiled in the worker")
+}
+
 // TestFailedLoad opens the site with the wasm's request blocked, as on a
 // first visit offline: the corner note says in words that Fieldhead could
 // not start and what to do, stops turning, leaves the written demo
