@@ -149,14 +149,8 @@ func TestBeforeWasm(t *testing.T) {
 	}
 
 	// A share link (another sheet), and a bare visit on a device keeping a sheet.
-	sc := scenario.Demo()
-	if err := sc.Set("z2", "31 m"); err != nil {
-		t.Fatal(err)
-	}
-	var d scenario.Draft
-	d.Reset(sc)
-	linkAnswer, _ := present.Build(&d, scenario.Evaluate(scenario.Read(sc))).Text("answer-value")
-	share := origin + "/?" + sc.Encode()
+	query, linkAnswer := otherSheet(t)
+	share := origin + "/?" + query
 	open(share)
 	time.Sleep(300 * time.Millisecond)
 	if shows(want) || b.jsBool(`getComputedStyle(document.querySelector("#answer-value")).visibility !== "hidden"`) {
@@ -202,6 +196,20 @@ func TestBeforeWasm(t *testing.T) {
 	b.noProblems("before and after the wasm")
 }
 
+// otherSheet is the demo with the upper level at 31 m: its link's query
+// and its answer as present.Build words it.
+func otherSheet(t *testing.T) (query, answer string) {
+	t.Helper()
+	sc := scenario.Demo()
+	if err := sc.Set("z2", "31 m"); err != nil {
+		t.Fatal(err)
+	}
+	var d scenario.Draft
+	d.Reset(sc)
+	answer, _ = present.Build(&d, scenario.Evaluate(scenario.Read(sc))).Text("answer-value")
+	return sc.Encode(), answer
+}
+
 // TestCompiledInWorker opens a share link on a device the site has never
 // seen: the page starts the program from the module the worker web/start.js
 // made compiled (web/compile.js, which reads the wasm's address from its
@@ -214,14 +222,8 @@ func TestCompiledInWorker(t *testing.T) {
 	site := testSite(t)
 	b := newTab(t)
 	origin := newSiteServer(t, site).URL
-	sc := scenario.Demo()
-	if err := sc.Set("z2", "31 m"); err != nil {
-		t.Fatal(err)
-	}
-	var d scenario.Draft
-	d.Reset(sc)
-	want, _ := present.Build(&d, scenario.Evaluate(scenario.Read(sc))).Text("answer-value")
-	b.navigate(origin + "/?" + sc.Encode())
+	query, want := otherSheet(t)
+	b.navigate(origin + "/?" + query)
 	if by := b.js(`window.fieldheadCompiledBy || "nothing"`); by != "worker" {
 		t.Errorf("a share link's wasm was compiled by the %s, want the worker (web/compile.js)", by)
 	}
