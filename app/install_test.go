@@ -19,7 +19,10 @@ import (
 // follows its edits. The install button appears when the browser offers
 // installation (a beforeinstallprompt event, Web App Manifest spec,
 // "installation process"), opens the browser's prompt, and goes once the
-// offer is used or the site installed (the appinstalled event). Headless
+// offer is used or the site installed (the appinstalled event). It sits
+// after the cautions, so its coming and going moves no card (content that
+// moves under a finger: the layout-shift rule of web practice, common
+// practice). Headless
 // Chromium offers nothing by itself, so the test sends the two events the
 // browser would send, with a prompt that only records that it was shown.
 // A first visit logs no "updated" message: nothing was updated.
@@ -68,6 +71,13 @@ func TestInstallAndTitle(t *testing.T) {
 	if !b.poll(`document.getElementById("install") !== null`, 5*time.Second) {
 		t.Fatal("no install button after the browser offered installation")
 	}
+	// The offer comes whenever the browser decides: the button's coming
+	// and going moves nothing before it (the cautions come first).
+	const cardsAt = `[...document.querySelectorAll(".card, #cautions")].map((e) => Math.round(e.getBoundingClientRect().top + scrollY)).join(" ")`
+	with := b.js(cardsAt)
+	if b.jsBool(`!!(document.getElementById("install").compareDocumentPosition(document.getElementById("cautions")) & Node.DOCUMENT_POSITION_FOLLOWING)`) {
+		t.Error("the install button comes before the cautions: its arrival moves what the person reads")
+	}
 	if err := clickID(b, "install"); err != nil {
 		t.Fatal(err)
 	}
@@ -76,6 +86,9 @@ func TestInstallAndTitle(t *testing.T) {
 	}
 	if !b.poll(`document.getElementById("install") === null`, 5*time.Second) {
 		t.Error("the install button stays after its prompt was used")
+	}
+	if without := b.js(cardsAt); without != with {
+		t.Errorf("the cards and cautions moved when the install button went: at %s with it, %s without", with, without)
 	}
 	b.js(offer)
 	if !b.poll(`document.getElementById("install") !== null`, 5*time.Second) {

@@ -108,8 +108,7 @@ func TestBeforeWasm(t *testing.T) {
 		}
 	}
 	// Where the answer card is: its top, and its distance below the share
-	// row (whose install button, once the browser offers it, is the one
-	// thing above the card the written page cannot know).
+	// row.
 	cardTop := `(() => { const c = document.querySelector("#answer-card").getBoundingClientRect(); return Math.round(c.top + scrollY) + " " + Math.round(c.top - document.querySelector(".share").getBoundingClientRect().bottom); })()`
 
 	// axe-core (Deque's rules, as TestAxe runs them) on the page before the wasm.
