@@ -58,18 +58,19 @@ func (s *sheet) shareRow() app.UI {
 	return divBody("share", body...)
 }
 
-// installRow offers to install Fieldhead on this device, once the browser
-// allows it. It sits at the foot of the sheet, after the cautions: the
-// offer comes whenever the browser decides, often while the person types,
-// and in the share row it pushed every card down a row (on a phone, the
-// answer by 56 px) under their finger.
-func (s *sheet) installRow() app.UI {
-	if !s.install {
+// installRow offers to install Fieldhead on this device while the browser
+// allows it (show), with onInstall on its button. It sits at the foot of
+// the sheet, after the cautions: the offer comes whenever the browser
+// decides, often while the person types, and in the share row it pushed
+// every card down a row (on a phone, the answer by 56 px) under their
+// finger.
+func installRow(show bool, onInstall app.EventHandler) app.UI {
+	if !show {
 		return nil
 	}
 	return app.Div().Class("install-row").Attr("role", "region").Aria("label", "this device").Body( // a landmark, as the title row
 		app.Span().Text("Fieldhead opens without a connection once visited. Installed, it also has its own icon and window:"),
-		act("install", "act", "Install on this device", s.onInstall))
+		act("install", "act", "Install on this device", onInstall))
 }
 
 // act is a button of the page's own (not of the view model); not inlined,

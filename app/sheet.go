@@ -548,7 +548,7 @@ func (s *sheet) Render() (ui app.UI) {
 			divBody("notices", others(vm.Others)), // a stable slot: the list appearing must not re-create the inputs
 			lay, s.signoff()),
 		cautions(vm.Cautions),
-		s.installRow(),
+		installRow(s.install, s.onInstall),
 		s.printFoot(),
 	)
 }

@@ -786,13 +786,10 @@ func (s *browserSession) phoneLink() error {
 	// Each new worker waits for followWorkers to slow its link before it
 	// runs: the worker that compiles the wasm fetches as its script starts.
 	// Only dedicated workers: the service worker runs as before.
-	_, err := chromedp.Call(s.ctx, target.SetAutoAttach, target.SetAutoAttachParams{AutoAttach: true, WaitForDebuggerOnStart: true, Flatten: ptrTo(true),
+	_, err := chromedp.Call(s.ctx, target.SetAutoAttach, target.SetAutoAttachParams{AutoAttach: true, WaitForDebuggerOnStart: true, Flatten: ptr(true),
 		Filter: target.Filter{{Type: "worker"}, {Exclude: true}}})
 	return err
 }
-
-// ptrTo is a pointer to a copy of v, for the protocol's optional fields.
-func ptrTo[T any](v T) *T { return &v }
 
 // followWorkers gives each worker the page starts (the one that fetches
 // and compiles the wasm, web/compile.js), on the phone-class link, the
