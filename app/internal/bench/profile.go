@@ -3,6 +3,7 @@
 package main
 
 import (
+	"encoding/json"
 	"flag"
 	"fmt"
 	"log"
@@ -123,9 +124,20 @@ const mutationsJS = `(() => {
   return "";
 })()`
 
+// profileJSON is -profile-json: where to write the whole profile too
+// (Chromium's .cpuprofile form, which DevTools' Performance panel reads).
+var profileJSON = flag.String("profile-json", "", "with -profile: also write the whole CPU profile to this file (a .cpuprofile DevTools reads)")
+
 // printProfile lists the functions with the most samples at the top of
 // the stack (self) and, for the same names, anywhere on it (total).
 func printProfile(p *profiler.Profile, top int) {
+	if *profileJSON != "" {
+		if b, err := json.Marshal(p); err != nil {
+			log.Print(err)
+		} else if err := os.WriteFile(*profileJSON, b, 0o644); err != nil {
+			log.Print(err)
+		}
+	}
 	byID := map[int64]*profiler.ProfileNode{}
 	parent := map[int64]int64{}
 	for _, n := range p.Nodes {
