@@ -140,6 +140,20 @@ func TestBoxesAreTheScenario(t *testing.T) {
 
 	open("balance")
 	checkBoxes(t, b, "opening the demo link")
+	// An edit redraws only the blocks that changed (redrawCards,
+	// card.blocks); the others stay as drawn and keep working: after a flow
+	// typed into the line's card, the card's total follows, and the α
+	// picker in the same card, left as drawn, still sets α.
+	total := b.text("#line-total")
+	b.typeInto("#in-q", "30")
+	if b.text("#line-total") == total {
+		t.Errorf("after a flow typed, the line's total is still %q", total)
+	}
+	alpha := b.js(`(() => { const s = document.getElementById("in-alpha"); const o = [...s.options].find((o) => o.value !== s.value && o.value !== ""); s.value = o.value; s.dispatchEvent(new Event("change", {bubbles: true})); return o.value; })()`)
+	checkBoxes(t, b, "α chosen after a flow typed")
+	if got := pageScenario(b).Get("alpha"); got != alpha {
+		t.Errorf("α chosen after a flow typed: the link holds %q, want %q", got, alpha)
+	}
 	click("#blank")
 	checkBoxes(t, b, "New sheet")
 	for _, id := range []string{"in-z1", "in-z2", "in-q", "in-t", "in-name"} {

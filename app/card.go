@@ -18,6 +18,16 @@ type card struct {
 	W int // the charts' width: a resize redraws a card with a chart
 
 	ctx app.Context // from OnMount: redrawCards redraws the card alone
+
+	// same, from redrawCards, says which of C's blocks are as drawn: the
+	// next Render puts those subtrees back as they are on the page
+	// (Compo.Drawn, our go-app copy), so go-app neither builds nor
+	// compares them (an edit changes one figure of the line's card, whose
+	// boxes, pickers and buttons were drawn again and compared for it).
+	// sameAt is the first block it was made for: a card given another part
+	// since ignores it.
+	same   []bool
+	sameAt *present.Block
 }
 
 // OnMount lists the card among the sheet's cards on the page.
@@ -48,10 +58,7 @@ func (c *card) Render() (ui app.UI) {
 	if len(x.Controls) > 0 {
 		title = divBody("seghead", title, divBody("segctl", c.buttons(x.Controls)...))
 	}
-	body := []app.UI{title}
-	for i := range x.Blocks {
-		body = append(body, c.block(&x.Blocks[i]))
-	}
+	body := append([]app.UI{title}, c.blocks(title != nil)...)
 	cls := "card"
 	if x.Class != "" {
 		cls += " " + x.Class
@@ -60,6 +67,42 @@ func (c *card) Render() (ui app.UI) {
 		cls += " rsec"
 	}
 	return app.Section().Class(cls).ID(x.ID).Body(body...)
+}
+
+// blocks draws the card's blocks, putting back as they are on the page
+// those redrawCards found unchanged (same), and forgets what it said.
+func (c *card) blocks(titled bool) []app.UI {
+	bs := c.C.Blocks
+	drawn := c.drawnBlocks(titled)
+	out := make([]app.UI, len(bs))
+	for i := range bs {
+		if drawn != nil && c.same[i] {
+			out[i] = drawn[i]
+		} else {
+			out[i] = c.block(&bs[i])
+		}
+	}
+	c.same, c.sameAt = nil, nil
+	return out
+}
+
+// drawnBlocks is the blocks' subtrees on the page, when redrawCards has
+// said which are unchanged (same) for the part the card now holds, and
+// the page holds one per block after the title (titled: the card has one).
+func (c *card) drawnBlocks(titled bool) []app.UI {
+	bs := c.C.Blocks
+	if len(c.same) != len(bs) || len(bs) == 0 || c.sameAt != &bs[0] {
+		return nil
+	}
+	d := c.Drawn()
+	lead := 0
+	if titled {
+		lead = 1
+	}
+	if len(d) != lead+len(bs) {
+		return nil
+	}
+	return d[lead:]
 }
 
 // block draws one block of the card.

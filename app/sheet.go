@@ -412,25 +412,55 @@ func (s *sheet) redrawCards(ctx app.Context, before present.Sheet) bool {
 		byID[c.C.ID] = c
 	}
 	var redraw []int
+	var same [][]bool
 	for i, nc := range s.vm.Cards {
 		c := byID[nc.ID]
 		if c == nil || before.Cards[i].ID != nc.ID {
 			return false
 		}
-		if c.W != s.wide || !reflect.DeepEqual(c.C, nc) {
-			redraw = append(redraw, i)
+		if c.W != s.wide {
+			redraw, same = append(redraw, i), append(same, nil)
+		} else if sm, all := sameBlocks(c.C, nc); !all {
+			redraw, same = append(redraw, i), append(same, sm)
 		}
 	}
 	ctx.PreventUpdate() // the box's field, its card and the sheet
-	for _, i := range redraw {
+	for k, i := range redraw {
 		c := byID[s.vm.Cards[i].ID]
 		c.C, c.W = s.vm.Cards[i], s.wide
+		c.same, c.sameAt = same[k], nil
+		if len(c.C.Blocks) > 0 {
+			c.sameAt = &c.C.Blocks[0]
+		}
 		c.ctx.Redraw()
 	}
 	s.stale = true
 	s.cardsOnly++
 	app.Window().Set("fieldheadCardsOnly", s.cardsOnly) // for the browser tests
 	return true
+}
+
+// sameBlocks compares a card's part before and after an edit: all when
+// they are equal; else, when only blocks changed (the same number of
+// them), which blocks are unchanged; else nil.
+func sameBlocks(a, b present.Card) (same []bool, all bool) {
+	ab, bb := a.Blocks, b.Blocks
+	if len(ab) != len(bb) {
+		return nil, false
+	}
+	a.Blocks, b.Blocks = nil, nil
+	if !reflect.DeepEqual(a, b) {
+		return nil, false
+	}
+	same, all = make([]bool, len(bb)), true
+	for i := range bb {
+		same[i] = reflect.DeepEqual(ab[i], bb[i])
+		all = all && same[i]
+	}
+	if all {
+		return nil, true
+	}
+	return same, false
 }
 
 // onPicked handles a picker: a unit, a choice or a data-sheet column's

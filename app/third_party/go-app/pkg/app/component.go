@@ -218,6 +218,19 @@ func (c *Compo) ValueTo(v any) EventHandler {
 	}
 }
 
+// Drawn returns the children of the component's root element as they are
+// on the page, or nil when it is not mounted or its root is not an HTML
+// element. A Render may put any of them back in its new tree, at the same
+// place, to say "unchanged": the update then leaves that subtree alone
+// instead of comparing it (Update's identical-node case). (Fieldhead's
+// change.)
+func (c *Compo) Drawn() []UI {
+	if h, ok := c.rootElement.(HTML); ok && c.Mounted() && h.Mounted() {
+		return h.body()
+	}
+	return nil
+}
+
 func (c *Compo) setRef(v Composer) Composer {
 	c.ref = v
 	return v

@@ -362,6 +362,10 @@ func (m nodeManager) Update(ctx Context, v, new UI) (UI, error) {
 		return nil, errors.New("element not mounted").WithTag("type", reflect.TypeOf(v))
 	}
 
+	if v == new { // a subtree its component's Render handed back as drawn (Compo.Drawn)
+		return v, nil
+	}
+
 	ctx = m.context(ctx, v)
 	switch v := v.(type) {
 	case *text:
