@@ -283,6 +283,21 @@ func TestUnitLookupAliases(t *testing.T) {
 	}
 }
 
+// TestNormUnitIdempotent: lookupUnit looks a symbol up as it is before
+// normalising it, which gives the same unit only if normalising a normal
+// form changes nothing. (This project's own rule; no external source.)
+func TestNormUnitIdempotent(t *testing.T) {
+	for _, e := range unitTable {
+		for _, a := range append([]string{e.Symbol}, e.aliases...) {
+			for _, s := range []string{a, strings.ToLower(a), strings.ToUpper(a), " " + a + " ", strings.ReplaceAll(a, "", " ")} {
+				if n := normUnit(s); normUnit(n) != n {
+					t.Errorf("normUnit(%q) = %q, normalised again %q", s, n, normUnit(n))
+				}
+			}
+		}
+	}
+}
+
 func TestUnitTable(t *testing.T) {
 	// No spelling may name two units.
 	seen := map[string]string{}

@@ -66,6 +66,17 @@ func editsOnly(link string) {
 	}
 	fmt.Printf("edits %d, %g× CPU: p10 %.1f ms, p50 %.1f ms, p95 %.1f ms; phases (mean ms): keydown→input %.1f, input→DOM %.1f, DOM→frame %.1f, frame→painted %.1f\n",
 		len(times), *throttle, percentile(times, 10), percentile(times, 50), percentile(times, 95), mean[0], mean[1], mean[2], mean[3])
+	// Keys alternate, Backspace first (timeEdits): the flow goes from 45 to
+	// 4 L/s and back, and the sheet's warnings with it.
+	var del, dig []float64
+	for i, t := range times {
+		if (warmupEdits+i)%2 == 0 {
+			del = append(del, t)
+		} else {
+			dig = append(dig, t)
+		}
+	}
+	fmt.Printf("by key: Backspace p50 %.1f, p95 %.1f ms; a digit p50 %.1f, p95 %.1f ms\n", percentile(del, 50), percentile(del, 95), percentile(dig, 50), percentile(dig, 95))
 	fmt.Printf("renderer CPU time per edit (unthrottled, less sensitive to the machine's load): %.1f ms\n", cpu/float64(len(times)))
 	if *profileTop <= 0 {
 		return
