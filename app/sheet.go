@@ -2,7 +2,6 @@ package main
 
 import (
 	"errors"
-	"reflect"
 	"strings"
 
 	"fieldhead/calc/scenario"
@@ -401,7 +400,7 @@ func (s *sheet) redrawCards(ctx app.Context, before present.Sheet) bool {
 	}
 	a, b := before, s.vm
 	a.Cards, b.Cards = nil, nil
-	if !reflect.DeepEqual(a, b) {
+	if !same(&a, &b) {
 		return false
 	}
 	byID := make(map[string]*card, len(s.mounted))
@@ -445,24 +444,24 @@ func (s *sheet) redrawCards(ctx app.Context, before present.Sheet) bool {
 // sameBlocks compares a card's part before and after an edit: all when
 // they are equal; else, when only blocks changed (the same number of
 // them), which blocks are unchanged; else nil.
-func sameBlocks(a, b present.Card) (same []bool, all bool) {
+func sameBlocks(a, b present.Card) ([]bool, bool) {
 	ab, bb := a.Blocks, b.Blocks
 	if len(ab) != len(bb) {
 		return nil, false
 	}
 	a.Blocks, b.Blocks = nil, nil
-	if !reflect.DeepEqual(a, b) {
+	if !same(&a, &b) {
 		return nil, false
 	}
-	same, all = make([]bool, len(bb)), true
+	kept, all := make([]bool, len(bb)), true
 	for i := range bb {
-		same[i] = reflect.DeepEqual(ab[i], bb[i])
-		all = all && same[i]
+		kept[i] = same(&ab[i], &bb[i])
+		all = all && kept[i]
 	}
 	if all {
 		return nil, true
 	}
-	return same, false
+	return kept, false
 }
 
 // onPicked handles a picker: a unit, a choice or a data-sheet column's
