@@ -1,9 +1,9 @@
 package calc
 
 import (
+	"bytes"
 	"math"
 	"strconv"
-	"strings"
 )
 
 // FormatNumber writes x with the given number of significant digits
@@ -12,46 +12,78 @@ import (
 // "0.00046". Magnitudes below 1e-6 or from 1e12 up use an exponent,
 // "1.2e-7". A non-finite x gives "—".
 func FormatNumber(x float64, digits int) string {
+	var buf [40]byte
+	return string(appendNumber(buf[:0], x, digits))
+}
+
+// appendNumber appends FormatNumber(x, digits) to dst. The figures of
+// every sheet are written on every edit: built in one buffer, a figure
+// costs one allocation, where the strings' cuts and joins cost five.
+func appendNumber(dst []byte, x float64, digits int) []byte {
 	if math.IsNaN(x) || math.IsInf(x, 0) {
-		return "—"
+		return append(dst, "—"...)
 	}
 	digits = min(max(digits, 1), 17)
 	if x == 0 {
 		x = 0 // drop the sign of −0
 	}
-	e := strconv.FormatFloat(x, 'e', digits-1, 64) // "-4.50e+01"
-	k := strings.IndexByte(e, 'e')
-	exp, _ := strconv.Atoi(e[k+1:])
-	mant := e[:k]
-	sign := ""
-	if mant[0] == '-' {
-		sign, mant = "-", mant[1:]
+	var eb [32]byte
+	e := strconv.AppendFloat(eb[:0], x, 'e', digits-1, 64) // "-4.50e+01"
+	k := bytes.IndexByte(e, 'e')
+	exp := 0
+	for _, c := range e[k+2:] { // after the exponent's sign, which AppendFloat always writes
+		exp = exp*10 + int(c-'0')
 	}
-	ds := strings.Replace(mant, ".", "", 1) // the significant digits
-	if strings.Trim(ds, "0") == "" {
-		sign = "" // rounds to zero
+	if e[k+1] == '-' {
+		exp = -exp
+	}
+	mant := e[:k]
+	neg := mant[0] == '-'
+	if neg {
+		mant = mant[1:]
+	}
+	var db [24]byte
+	ds, zero := db[:0], true // the significant digits
+	for _, c := range mant {
+		if c != '.' {
+			ds = append(ds, c)
+			zero = zero && c == '0'
+		}
+	}
+	if neg && !zero { // a number that rounds to zero has no sign
+		dst = append(dst, '-')
 	}
 	if exp < -6 || exp >= 12 {
-		return sign + mant + "e" + strconv.Itoa(exp)
+		dst = append(append(dst, mant...), 'e')
+		return strconv.AppendInt(dst, int64(exp), 10)
 	}
 	switch {
 	case exp < 0:
-		return sign + "0." + strings.Repeat("0", -exp-1) + ds
+		dst = append(dst, "0."...)
+		for range -exp - 1 {
+			dst = append(dst, '0')
+		}
+		return append(dst, ds...)
 	case exp+1 >= len(ds):
-		return sign + ds + strings.Repeat("0", exp+1-len(ds))
+		dst = append(dst, ds...)
+		for range exp + 1 - len(ds) {
+			dst = append(dst, '0')
+		}
+		return dst
 	default:
-		return sign + ds[:exp+1] + "." + ds[exp+1:]
+		return append(append(append(dst, ds[:exp+1]...), '.'), ds[exp+1:]...)
 	}
 }
 
 // Format writes si, a value in the SI unit of u's dimension, in u with the
 // given number of significant digits and u's symbol: "45.0 L/s", "18.0 °C".
 func (u Unit) Format(si float64, digits int) string {
-	s := FormatNumber(u.FromSI(si), digits)
-	if u.Symbol == "" {
-		return s
+	var buf [56]byte
+	b := appendNumber(buf[:0], u.FromSI(si), digits)
+	if u.Symbol != "" {
+		b = append(append(b, ' '), u.Symbol...)
 	}
-	return s + " " + u.Symbol
+	return string(b)
 }
 
 // FormatValue writes si, a value in SI units, in the unit named by unit

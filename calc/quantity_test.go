@@ -3,7 +3,10 @@ package calc
 import (
 	"errors"
 	"math"
+	"math/rand/v2"
 	"slices"
+	"strconv"
+	"strings"
 	"testing"
 )
 
@@ -231,6 +234,58 @@ func TestFormatNumber(t *testing.T) {
 	} {
 		if got := FormatNumber(r.x, r.digits); got != r.want {
 			t.Errorf("FormatNumber(%g, %d) = %q, want %q", r.x, r.digits, got, r.want)
+		}
+	}
+}
+
+// TestFormatNumberAsBefore holds FormatNumber, written into one buffer, to
+// the string-built form it replaced (kept here as the reference), over
+// random numbers of every magnitude it writes and every digit count.
+func TestFormatNumberAsBefore(t *testing.T) {
+	before := func(x float64, digits int) string {
+		if math.IsNaN(x) || math.IsInf(x, 0) {
+			return "—"
+		}
+		digits = min(max(digits, 1), 17)
+		if x == 0 {
+			x = 0
+		}
+		e := strconv.FormatFloat(x, 'e', digits-1, 64)
+		k := strings.IndexByte(e, 'e')
+		exp, _ := strconv.Atoi(e[k+1:])
+		mant := e[:k]
+		sign := ""
+		if mant[0] == '-' {
+			sign, mant = "-", mant[1:]
+		}
+		ds := strings.Replace(mant, ".", "", 1)
+		if strings.Trim(ds, "0") == "" {
+			sign = ""
+		}
+		if exp < -6 || exp >= 12 {
+			return sign + mant + "e" + strconv.Itoa(exp)
+		}
+		switch {
+		case exp < 0:
+			return sign + "0." + strings.Repeat("0", -exp-1) + ds
+		case exp+1 >= len(ds):
+			return sign + ds + strings.Repeat("0", exp+1-len(ds))
+		default:
+			return sign + ds[:exp+1] + "." + ds[exp+1:]
+		}
+	}
+	r := rand.New(rand.NewPCG(1, 2))
+	for i := range 200000 {
+		x := (r.Float64()*2 - 1) * math.Pow(10, float64(r.IntN(40)-20))
+		if i%7 == 0 {
+			x = math.Round(x*1000) / 1000 // ties and short decimals
+		}
+		d := r.IntN(19) // 0 and 18 are clamped
+		if got, want := FormatNumber(x, d), before(x, d); got != want {
+			t.Fatalf("FormatNumber(%v, %d) = %q, before %q", x, d, got, want)
+		}
+		if got, want := FormatValue(x, "kPa", d), before(x/1000, d)+" kPa"; got != want {
+			t.Fatalf("FormatValue(%v, kPa, %d) = %q, before %q", x, d, got, want)
 		}
 	}
 }

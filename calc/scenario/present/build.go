@@ -12,6 +12,7 @@ import (
 	"sort"
 	"strconv"
 	"strings"
+	"sync"
 
 	"fieldhead/calc"
 	"fieldhead/calc/scenario"
@@ -356,33 +357,55 @@ func (b *builder) quantity(p, label, hint string) Field {
 }
 
 // unitOptions are the options of p's unit picker; a unit typed in the box
-// shows as "as typed" rather than a picker that pretends to apply.
+// shows as "as typed" rather than a picker that pretends to apply. The
+// list for a unit of p's choices is made once and shared by every view
+// model after (never changed in place; its capacity is its length, so an
+// append copies): a sheet has dozens of pickers, each list was made again
+// on every edit, and a shared list compares with the one on the page at
+// once (the page's same).
 func (b *builder) unitOptions(p, box, unit string) []Option {
-	choices := scenario.UnitChoices(p, b.us)
-	if num, typed := scenario.Split(box); num != "" && typed != "" && unit == "" {
-		opts := []Option{{"", "as typed", true}}
-		for _, u := range choices {
-			if u != "" {
-				opts = append(opts, Option{u, u, false})
-			}
-		}
+	num, typed := scenario.Split(box)
+	asTyped := num != "" && typed != "" && unit == ""
+	k := unitOptionsKey{param: p, unit: unit, us: b.us, asTyped: asTyped}
+	unitOptionsMu.Lock()
+	opts, ok := unitOptionsMade[k]
+	unitOptionsMu.Unlock()
+	if ok {
 		return opts
 	}
-	found := false
-	for _, u := range choices {
-		found = found || u == unit
-	}
-	if !found && unit != "" {
+	choices := scenario.UnitChoices(p, b.us)
+	known := unit == "" || slices.Contains(choices, unit)
+	if asTyped {
+		opts = []Option{{"", "as typed", true}}
+	} else if !known {
 		choices = append([]string{unit}, choices...)
 	}
-	opts := make([]Option, 0, len(choices))
 	for _, u := range choices {
 		if u != "" {
-			opts = append(opts, Option{u, u, u == unit})
+			opts = append(opts, Option{u, u, !asTyped && u == unit})
 		}
+	}
+	opts = opts[:len(opts):len(opts)]
+	if known { // a unit no list holds (a link's) is not kept: the cache stays bounded
+		unitOptionsMu.Lock()
+		if unitOptionsMade == nil {
+			unitOptionsMade = map[unitOptionsKey][]Option{}
+		}
+		unitOptionsMade[k] = opts
+		unitOptionsMu.Unlock()
 	}
 	return opts
 }
+
+type unitOptionsKey struct {
+	param, unit string
+	us, asTyped bool
+}
+
+var (
+	unitOptionsMu   sync.Mutex
+	unitOptionsMade map[unitOptionsKey][]Option
+)
 
 // picker is the picker of an enumerated parameter; blank, when given, is
 // the option for "not chosen". A value the vocabulary does not know is
