@@ -233,8 +233,8 @@ func (s *sheet) save() {
 		// Before the page is mounted: written once the whole sheet is
 		// drawn (OnMount), not before the first draw, where signing the
 		// link, the address bar and the saved copy held a cold share link's
-		// answer back by about 20 ms at 4× CPU (make bench -cold-only's
-		// profile).
+		// answer back by 20–40 ms at 4× CPU (make bench -cold-only: its
+		// profile, and its phases in alternated rounds).
 		s.pending = true
 		s.leaving.set(true)
 		return
@@ -431,23 +431,23 @@ func (s *sheet) redrawCards(ctx app.Context, before present.Sheet) bool {
 		byID[c.C.ID] = c
 	}
 	var redraw []int
-	var same [][]bool
+	var kept [][]bool // per card redrawn, its unchanged blocks (sameBlocks)
 	for i, nc := range s.vm.Cards {
 		c := byID[nc.ID]
 		if c == nil || before.Cards[i].ID != nc.ID {
 			return false
 		}
 		if c.W != s.wide {
-			redraw, same = append(redraw, i), append(same, nil)
+			redraw, kept = append(redraw, i), append(kept, nil)
 		} else if sm, all := sameBlocks(c.C, nc); !all {
-			redraw, same = append(redraw, i), append(same, sm)
+			redraw, kept = append(redraw, i), append(kept, sm)
 		}
 	}
 	ctx.PreventUpdate() // the box's field, its card and the sheet
 	for k, i := range redraw {
 		c := byID[s.vm.Cards[i].ID]
 		c.C, c.W = s.vm.Cards[i], s.wide
-		c.same, c.sameAt = same[k], nil
+		c.same, c.sameAt = kept[k], nil
 		if len(c.C.Blocks) > 0 {
 			c.sameAt = &c.C.Blocks[0]
 		}
