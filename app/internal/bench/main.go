@@ -1241,10 +1241,10 @@ var splitKeys = flag.Bool("split-keys", false, "type each digit as chromedp.KeyE
 // DevTools keyDown carrying its text, which Blink dispatches as keydown,
 // then keypress and the edit, in one task, as a browser does with a
 // keyboard's press (Puppeteer's keyboard types so too, from memory).
-// chromedp.KeyEvent
-// sends the character as a second command once the keydown's reply is
-// back, a round trip through this program (about 3 ms at 4× CPU in a
-// trace) that no person's key has, timed as part of the edit.
+// chromedp.KeyEvent sends the character as a second command once the
+// keydown's reply is back, a round trip through this program (about 3 ms
+// at 4× CPU in a trace) that no person's key has, timed as part of the
+// edit.
 func pressKey(key string) chromedp.Action[chromedp.Void] {
 	r := []rune(key)
 	if *splitKeys || len(r) != 1 {
