@@ -157,6 +157,9 @@ func main() {
 		*edits = 50
 	}
 	r := &report{JSON: map[string]any{}}
+	if l := loadAverage(); l != "" {
+		r.JSON["load_average_start"] = l
+	}
 
 	srv, origin, wire, err := serve(*siteDir)
 	if err != nil {
@@ -1427,11 +1430,25 @@ func (r *report) print() {
 		fmt.Println("budgets missed: " + strings.Join(r.misses, ", "))
 	}
 	r.JSON["budgets_missed"] = append([]string{}, r.misses...)
+	if l := loadAverage(); l != "" {
+		r.JSON["load_average_end"] = l
+	}
 	b, err := json.Marshal(r.JSON)
 	if err != nil {
 		log.Fatal(err)
 	}
 	fmt.Println(string(b))
+}
+
+// loadAverage is the machine's load averages over 1, 5 and 15 minutes
+// (Linux's /proc/loadavg), "" where there is none: the browser figures move
+// with the machine's other load (and the bench's own Chromiums count in it).
+func loadAverage() string {
+	b, err := os.ReadFile("/proc/loadavg")
+	if f := strings.Fields(string(b)); err == nil && len(f) >= 3 {
+		return strings.Join(f[:3], " ")
+	}
+	return ""
 }
 
 func median(v []float64) float64 { return percentile(v, 50) }
