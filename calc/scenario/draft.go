@@ -1,6 +1,7 @@
 package scenario
 
 import (
+	"slices"
 	"strconv"
 	"strings"
 
@@ -139,17 +140,15 @@ func Boxed(param, raw string) (box, unit string) {
 
 // hasUnits reports whether a parameter's box has a unit picker.
 func hasUnits(param string) bool {
-	p, _, ok := Lookup(param)
-	return ok && (p.Kind == KindQuantity || p.Kind == KindList)
+	p, _, _ := paramRef(param) // Lookup would copy the row and word a segment's label
+	return p != nil && (p.Kind == KindQuantity || p.Kind == KindList)
 }
 
 // listed reports whether unit is in a picker of param, in either system.
 func listed(param, unit string) bool {
 	for _, us := range []bool{false, true} {
-		for _, u := range UnitChoices(param, us) {
-			if u == unit {
-				return true
-			}
+		if slices.Contains(unitChoicesKept(param, us), unit) {
+			return true
 		}
 	}
 	return false

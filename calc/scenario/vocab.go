@@ -36,6 +36,12 @@ func DefaultUnit(param string, us bool) string {
 // The list is kept once made: the view model asks for it for every box
 // on every edit. The caller gets its own copy.
 func UnitChoices(param string, us bool) []string {
+	return slices.Clone(unitChoicesKept(param, us))
+}
+
+// unitChoicesKept is UnitChoices' list itself, for callers that only read
+// it (a copy for each box's check cost an edit a few dozen allocations).
+func unitChoicesKept(param string, us bool) []string {
 	k := unitChoicesKey{param, us}
 	unitChoicesMu.Lock()
 	out, ok := unitChoicesMade[k]
@@ -52,7 +58,7 @@ func UnitChoices(param string, us bool) []string {
 		unitChoicesMade[k] = out
 		unitChoicesMu.Unlock()
 	}
-	return slices.Clone(out)
+	return out
 }
 
 type unitChoicesKey struct {

@@ -43,7 +43,7 @@ var Views = []struct{ Key, Hint string }{
 // its result (scenario.Evaluate(scenario.Read(d.Scen))).
 func Build(d *scenario.Draft, r scenario.Result) Sheet {
 	b := &builder{d: d, in: &r.Inputs, r: r, us: r.US, shown: map[string]bool{}, warned: map[string]bool{}}
-	sh := Sheet{View: b.view(), US: b.us, Cautions: Cautions, Methods: methodsFor(b.us)}
+	sh := Sheet{View: b.view(), US: b.us, Cautions: Cautions, Methods: methodsOf(b.us)}
 	sh.Name = b.in.Choice("name")
 	if sh.Name == "" {
 		sh.Name = "Untitled sheet"

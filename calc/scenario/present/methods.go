@@ -1,12 +1,36 @@
 package present
 
-import "fieldhead/calc"
+import (
+	"sync"
+
+	"fieldhead/calc"
+)
 
 // Methods name the methods behind the figures and their sources, figures
 // in SI: the one list the page, the printed sheet and the README's
 // "Methods and sources" use (TestREADMEMethods checks the README holds
 // each line as it is here).
 var Methods = methodsFor(false)
+
+// methodsOf is the list in the sheet's units, made once and shared by
+// every view model (never changed in place; its capacity is its length):
+// it was worded again on every edit, and a shared list compares with the
+// one on the page at once.
+func methodsOf(us bool) []Method {
+	if !us {
+		return Methods[:len(Methods):len(Methods)]
+	}
+	methodsUSOnce.Do(func() {
+		m := methodsFor(true)
+		methodsUS = m[:len(m):len(m)]
+	})
+	return methodsUS
+}
+
+var (
+	methodsUSOnce sync.Once
+	methodsUS     []Method
+)
 
 // methodsFor is the list with its figures in the sheet's units.
 func methodsFor(us bool) []Method {

@@ -55,7 +55,7 @@ func (b *builder) reportView() []Card {
 // methodLines are the methods and their sources, one line each, in the
 // sheet's units.
 func (b *builder) methodLines() []string {
-	ms := methodsFor(b.us)
+	ms := methodsOf(b.us)
 	out := make([]string, 0, len(ms))
 	for _, m := range ms {
 		out = append(out, m.What+": "+m.How)
