@@ -131,12 +131,12 @@ type Choice struct {
 // The lists depend on the parameter alone and are built once; callers must
 // not change the slice.
 func Choices(param string) []Choice {
-	p, _, ok := Lookup(param)
-	if !ok || p.choices == nil {
+	p, n, f := paramRef(param) // Lookup would copy the row and word a segment's label
+	if p == nil || p.choices == nil {
 		return nil
 	}
 	base := param
-	if n, f := splitSegment(param); n > 0 {
+	if n > 0 {
 		base = f
 	}
 	choiceMu.Lock()
