@@ -106,6 +106,7 @@ func (s *sheet) OnMount(ctx app.Context) {
 				doc := app.Window().Get("document")
 				if s.pending && (!hiddenOnly || doc.Get("visibilityState").String() == "hidden") {
 					s.flush()
+					s.snapshot()
 				}
 				return nil
 			})
@@ -141,15 +142,15 @@ func (s *sheet) OnMount(ctx app.Context) {
 								app.Window().Set("fieldheadFirstResult", perf.Call("now").Float())
 							}
 							if s.pending { // what save put off before the mount
-								s.write()
+								s.flush()
 							}
-							// The sheet as opened was kept before it was
-							// drawn (save): its snapshot a little later,
-							// unless an edit keeps it anew.
+							// The sheet as opened is kept now (save put it
+							// off): its snapshot a little later, unless an
+							// edit keeps it anew.
 							app.Window().Call("setTimeout", once(func(app.Value) {
 								ctx.Dispatch(func(ctx app.Context) {
 									ctx.PreventUpdate()
-									if !s.pending && !s.damaged {
+									if !s.pending {
 										s.snapshot()
 									}
 								})
@@ -262,6 +263,7 @@ func (s *sheet) save() {
 					return
 				}
 				s.flush()
+				s.snapshot()
 				if s.vm.View != "book" && !s.stale {
 					ctx.PreventUpdate() // nothing on screen changes
 				} else {
@@ -301,17 +303,11 @@ func (l leaveWatch) set(on bool) {
 // saveDelay is how long, in ms, save waits after the last edit.
 const saveDelay = 400
 
-// flush writes what save put off, and the snapshot.
+// flush writes what save put off: the sheet into the address bar, the
+// title, the saved copy and the site book. The snapshot is apart
+// (snapshot): the sheet opened is written once drawn whole and its snapshot
+// taken a second later (OnMount).
 func (s *sheet) flush() {
-	s.write()
-	if !s.damaged {
-		s.snapshot()
-	}
-}
-
-// write writes the sheet into the address bar, the title, the saved copy
-// and the site book.
-func (s *sheet) write() {
 	s.pending = false
 	if app.IsClient {
 		s.leaving.set(false)
@@ -329,7 +325,7 @@ func (s *sheet) write() {
 // it can run). Only once the sheet is on the page: before, the page holds
 // the written demo.
 func (s *sheet) snapshot() {
-	if !app.IsClient || s.ctx.Src() == nil {
+	if !app.IsClient || s.ctx.Src() == nil || s.damaged { // a damaged link never replaces a kept sheet
 		return
 	}
 	defer func() { _ = recover() }() // a snapshot is a convenience: never a fault
