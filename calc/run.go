@@ -103,7 +103,7 @@ func frCheckNonNeg(v float64) bool { return v >= 0 && !math.IsInf(v, 0) }
 // (unknown key, negative count, bad K override or a diameter outside the
 // method's range) or "k" (bad ExtraK).
 func (r Run) SumK() (float64, error) {
-	_, sum, err := r.FittingKs(math.Inf(1))
+	_, sum, err := r.fittingKs(math.Inf(1), false)
 	return sum, err
 }
 
@@ -140,6 +140,13 @@ func (r Run) lumped() Run {
 // (unknown key, negative count, bad K override, a diameter outside the
 // method's range, re not positive) or "k" (bad ExtraK).
 func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
+	return r.fittingKs(re, true)
+}
+
+// fittingKs is FittingKs; with each false it returns ΣK alone, without
+// the list of fittings and their formulas' text, which a solver's
+// iterations and a sum replaced at once do not show.
+func (r Run) fittingKs(re float64, each bool) ([]FittingK, float64, error) {
 	if err := r.checkFittings(); err != nil {
 		return nil, 0, err
 	}
@@ -153,7 +160,10 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 		f := frFitting(fc.Key) // known: checkFittings
 		fk := FittingK{Key: f.Key, Count: fc.Count}
 		if fc.Override {
-			fk.K, fk.Method, fk.Formula = fc.K, "given", "K = "+frG(fc.K)
+			fk.K = fc.K
+			if each {
+				fk.Method, fk.Formula = "given", "K = "+frG(fc.K)
+			}
 		} else {
 			err := frCheckKInputs(r.Diameter, re)
 			if err == nil && f.Method == KCrane && ft == 0 {
@@ -166,10 +176,15 @@ func (r Run) FittingKs(re float64) ([]FittingK, float64, error) {
 			if err != nil {
 				return nil, 0, fittingErr(fc.Key, err)
 			}
-			fk.K, fk.Method, fk.Formula, fk.Source = k, f.Method.String(), f.Formula(r.Diameter), f.Source
+			fk.K = k
+			if each {
+				fk.Method, fk.Formula, fk.Source = f.Method.String(), f.Formula(r.Diameter), f.Source
+			}
 		}
 		sum += float64(fc.Count) * fk.K
-		out = append(out, fk)
+		if each {
+			out = append(out, fk)
+		}
 	}
 	return out, sum, nil
 }
@@ -294,7 +309,10 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 	if err := r.validate(fl); err != nil {
 		return RunResult{}, err
 	}
-	ks, sumK, err := r.FittingKs(math.Inf(1))
+	// A sum at Re, below, replaces the fully turbulent one: the first is
+	// then only checked, not listed.
+	again := q > 0 && r.ReDependent()
+	ks, sumK, err := r.fittingKs(math.Inf(1), !again)
 	if err != nil {
 		return RunResult{}, err
 	}
@@ -314,7 +332,7 @@ func (r Run) Evaluate(fl Fluid, q float64) (RunResult, error) {
 		// range: a flow far beyond any pipe's.
 		return RunResult{}, NewFieldError("q", NotFinite).Got(Fig(q, Flow)).Because(ReasonBeyondNumbers)
 	}
-	if q > 0 && r.ReDependent() {
+	if again {
 		if ks, sumK, err = r.FittingKs(re); err != nil {
 			return RunResult{}, err
 		}
