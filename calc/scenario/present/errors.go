@@ -1044,6 +1044,30 @@ func (c cautioning) f(i int) string {
 	return c.w.fig(c.figs[i])
 }
 
+// rough words figure i, a rule of thumb's limit, in the sheet's units to
+// two significant figures, trailing zeros dropped: 0.3 m/s is "0.3 m/s"
+// on an SI sheet and "0.98 ft/s" on a US one, not "0.9843 ft/s", a
+// precision the rule never had. With param, in that parameter's own unit
+// (mm or in for "d"). "?" if absent.
+func (c cautioning) rough(i int, param string) string {
+	if i >= len(c.figs) {
+		return "?"
+	}
+	u := calc.DefaultUnit(c.figs[i].Dim, c.w.us).Symbol
+	if param != "" {
+		u = scenario.DefaultUnit(param, c.w.us)
+	}
+	return limit(minus(calc.FormatValue(c.figs[i].Value, u, 2)))
+}
+
+// in words figure i in param's own unit (mm or in for "d"), "?" if absent.
+func (c cautioning) in(i int, param string) string {
+	if i >= len(c.figs) {
+		return "?"
+	}
+	return minus(scenario.ShowParam(param, c.figs[i].Value, c.w.us))
+}
+
 // num words figure i, a plain number (an authority, a ratio).
 func (c cautioning) num(i int) string {
 	if i >= len(c.figs) {
@@ -1110,7 +1134,7 @@ var cautionWords = [...]func(c cautioning) string{
 	},
 	calc.CautionNoFlow: func(c cautioning) string { return "no flow: all losses are zero" },
 	calc.CautionFittingSizes: func(c cautioning) string {
-		return "inside diameter " + c.f(0) + " is outside the sizes the fitting methods were published for (about " + c.f(1) + "–" + c.f(2) + "): their K values are extrapolated"
+		return "inside diameter " + c.in(0, "d") + " is outside the sizes the fitting methods were published for (about " + c.rough(1, "d") + "–" + c.rough(2, "d") + "): their K values are extrapolated"
 	},
 	calc.CautionLaminarHazen: func(c cautioning) string {
 		return "laminar flow: friction from 64/Re; Hazen–Williams does not apply"
@@ -1125,13 +1149,13 @@ var cautionWords = [...]func(c cautioning) string{
 		return "transitional flow (Re " + ratio(c.figs, 0, 0) + ", between 2300 and 4000): the loss lies between the laminar (64/Re) and turbulent bounds; the larger is used"
 	},
 	calc.CautionHazenSmallPipe: func(c cautioning) string {
-		return "Hazen–Williams is meant for pipes of about " + c.f(0) + " and larger: prefer Colebrook"
+		return "Hazen–Williams is meant for pipes of about " + c.rough(0, "d") + " and larger: prefer Colebrook"
 	},
 	calc.CautionVelocityLow: func(c cautioning) string {
-		return "velocity " + c.f(0) + " is low for a liquid line (usual range " + c.f(1) + "–" + c.f(2) + ", common practice)"
+		return "velocity " + c.f(0) + " is low for a liquid line (usual range about " + c.rough(1, "") + "–" + c.rough(2, "") + ", common practice)"
 	},
 	calc.CautionVelocityHigh: func(c cautioning) string {
-		return "velocity " + c.f(0) + " is high for a liquid line (usual range " + c.f(1) + "–" + c.f(2) + ", common practice)"
+		return "velocity " + c.f(0) + " is high for a liquid line (usual range about " + c.rough(1, "") + "–" + c.rough(2, "") + ", common practice)"
 	},
 	calc.CautionColumnBreaks: func(c cautioning) string {
 		return "the absolute pressure in the pipe falls to " + c.abs(0) + " at " + c.f(1) + " from point 1, at or below the liquid's vapour pressure (" + c.f(2) +

@@ -218,8 +218,20 @@ func TestCautionWords(t *testing.T) {
 			"NPSH available is 32.81 ft; give the pump's NPSH required at this flow to judge the margin (margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least 1.969 ft (common practice, from memory); large, high-energy or hot-liquid pumps need more)"},
 		{calc.CautionWireLow, []calc.Figure{calc.Num(0.2), calc.Num(0.3)}, false,
 			"the wire-to-water efficiency is only 20 % (below 30 %): look for wear, a throttled or recirculating pump, a motor problem, or a reading error"},
+		// A rule of thumb's limits to two significant figures, in the
+		// sheet's units (GNU units: 0.3 m/s = 0.98425197 ft/s, 3 m/s =
+		// 9.8425197 ft/s; 0.0117 m = 0.46062992 in, 0.598 m = 23.543307
+		// in, 0.05 m = 1.9685039 in, 1.2 m = 47.244094 in).
 		{calc.CautionVelocityHigh, []calc.Figure{calc.Fig(4, calc.Velocity), calc.Fig(0.3, calc.Velocity), calc.Fig(3, calc.Velocity)}, false,
-			"velocity 4.000 m/s is high for a liquid line (usual range 0.3000 m/s–3.000 m/s, common practice)"},
+			"velocity 4.000 m/s is high for a liquid line (usual range about 0.3 m/s–3 m/s, common practice)"},
+		{calc.CautionVelocityLow, []calc.Figure{calc.Fig(0.1, calc.Velocity), calc.Fig(0.3, calc.Velocity), calc.Fig(3, calc.Velocity)}, true,
+			"velocity 0.3281 ft/s is low for a liquid line (usual range about 0.98 ft/s–9.8 ft/s, common practice)"},
+		{calc.CautionFittingSizes, []calc.Figure{calc.Fig(1.2, calc.Length), calc.Fig(0.0117, calc.Length), calc.Fig(0.598, calc.Length)}, false,
+			"inside diameter 1200 mm is outside the sizes the fitting methods were published for (about 12 mm–600 mm): their K values are extrapolated"},
+		{calc.CautionFittingSizes, []calc.Figure{calc.Fig(1.2, calc.Length), calc.Fig(0.0117, calc.Length), calc.Fig(0.598, calc.Length)}, true,
+			"inside diameter 47.24 in is outside the sizes the fitting methods were published for (about 0.46 in–24 in): their K values are extrapolated"},
+		{calc.CautionHazenSmallPipe, []calc.Figure{calc.Fig(0.05, calc.Length)}, true,
+			"Hazen–Williams is meant for pipes of about 2 in and larger: prefer Colebrook"},
 		// 300 m = 984.3 ft, 12 m = 39.37 ft (0.3048 m/ft), 14.5 L/s =
 		// 229.8 gpm, 30 L/s = 475.5 gpm (231 in³/gal, NIST SP 811).
 		{calc.CautionHighPointBreaks, []calc.Figure{calc.Num(2), calc.Num(0), calc.Fig(300, calc.Length), calc.Fig(12, calc.Length), calc.Fig(0.0145, calc.Flow), calc.Fig(0.03, calc.Flow)}, true,
