@@ -93,7 +93,7 @@ func Evaluate(in Inputs) Result {
 	// (TestUsesExactly keeps the evaluators and the table in step).
 	if res.Inputs.anyBad {
 		for _, p := range Parts() {
-			if res.Has(p) && res.Inputs.AnyBad(res.Inputs.Uses(p)...) {
+			if res.Worked(p) && res.Inputs.AnyBad(res.Inputs.Uses(p)...) {
 				res.drop(p)
 			}
 		}

@@ -57,8 +57,9 @@ func Parts() []Part {
 	return out
 }
 
-// Has reports whether r holds part p.
-func (r *Result) Has(p Part) bool {
+// Worked reports whether part p was worked out: r holds it. (Named apart
+// from Scenario.Has, which asks whether a raw parameter was typed.)
+func (r *Result) Worked(p Part) bool {
 	switch p {
 	case PartSite:
 		return r.SitePressure > 0

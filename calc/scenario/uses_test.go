@@ -72,11 +72,11 @@ func TestUsesExactly(t *testing.T) {
 			}
 			r := Evaluate(in)
 			for _, part := range Parts() {
-				if !whole.Has(part) {
+				if !whole.Worked(part) {
 					continue
 				}
 				declared := slices.Contains(in.Uses(part), p)
-				if got := r.Has(part); got == declared {
+				if got := r.Worked(part); got == declared {
 					if declared {
 						t.Errorf("%s with %s in error: the %s is still worked out, though it reads it", name, p, part)
 					} else {

@@ -154,7 +154,7 @@ var csvColumns = []csvColumn{
 		// Shown when a result used it: alone it is the default of a sheet
 		// with nothing worked out yet.
 		for _, p := range scenario.Parts() {
-			if p != scenario.PartSite && r.Has(p) {
+			if p != scenario.PartSite && r.Worked(p) {
 				return r.SitePressure, true
 			}
 		}
@@ -481,7 +481,7 @@ func sheetProblems(r *scenario.Result) []string {
 				complete = false
 			}
 		}
-		if r.Has(p) || complete {
+		if r.Worked(p) || complete {
 			for _, q := range uses[p] {
 				accounted[q] = true
 			}
@@ -559,7 +559,7 @@ func ResultsCSV(sheets []scenario.KeptSheet, us bool) string {
 			edited = k.Edited.UTC().Format("2006-01-02 15:04:05")
 		}
 		for i, c := range csvColumns {
-			if c.part != 0 && !r.Has(c.part) && (c.or == 0 || !r.Has(c.or)) {
+			if c.part != 0 && !r.Worked(c.part) && (c.or == 0 || !r.Worked(c.or)) {
 				row = append(row, "")
 			} else {
 				row = append(row, c.cell(&r, units[i]))

@@ -208,7 +208,7 @@ func TestResultsCSVEveryPart(t *testing.T) {
 		held := false
 		for k, s := range sheets {
 			r := scenario.Evaluate(scenario.Read(s.Scen))
-			if !r.Has(p) {
+			if !r.Worked(p) {
 				continue
 			}
 			held = true
