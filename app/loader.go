@@ -98,16 +98,20 @@ function fieldheadInstantiate(url, imports, onMain) {
 // cannot start while the main thread is busy), and its download of the
 // wasm begins sooner than when prerender.js started it (make bench, a
 // phone-class first visit: 7707–7899 → 7676–7774 ms; as a blocking script
-// it held back the style sheets and the written answer by 200 ms). app.js
-// compiles on the page if it runs first (instantiateJS). The site writer
-// renames every URL to its hashed name.
+// it held back the style sheets and the written answer by 200 ms). It is
+// fetched at high priority (fetchpriority="high"): an async script is a
+// low one, which Chromium holds back while the style sheets load, one low
+// request at a time; on a slow link it would wait behind the manifest
+// (on loopback the answer moved less than the noise: DEVELOPERS.md).
+// app.js compiles on the page if it runs first (instantiateJS). The site
+// writer renames every URL to its hashed name.
 func startCompileFirst(page []byte, prefix string) ([]byte, error) {
 	sheet := regexp.MustCompile(`<link [^>]*rel="stylesheet"[^>]*>`).FindIndex(page)
 	if sheet == nil {
 		return nil, errors.New("no style sheet to start the compiling worker before")
 	}
 	tags := `<meta name="fieldhead-compile" content="` + prefix + `/web/compile.js" data-wasm="` + prefix + `/web/app.wasm" data-exec="` + prefix + `/wasm_exec.js">` +
-		"\n    " + `<script async src="` + prefix + `/web/start.js"></script>` + "\n    "
+		"\n    " + `<script async fetchpriority="high" src="` + prefix + `/web/start.js"></script>` + "\n    "
 	return append(append(append([]byte{}, page[:sheet[0]]...), tags...), page[sheet[0]:]...), nil
 }
 

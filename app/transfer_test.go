@@ -151,14 +151,14 @@ func TestSiteTransfer(t *testing.T) {
 	}
 	// The worker that fetches and compiles the wasm (web/compile.js) and
 	// what it loads, under their hashed names, named for web/start.js, an
-	// async script, both before the first style sheet (startCompileFirst);
-	// no preload (start.js says why).
+	// async script fetched at high priority, both before the first style
+	// sheet (startCompileFirst); no preload (start.js says why).
 	wasm := path.Base(siteAsset(t, site, "web/app.wasm"))
 	worker := path.Base(siteAsset(t, site, "web/compile.js"))
 	exec := path.Base(siteAsset(t, site, "wasm_exec.js"))
 	start := path.Base(siteAsset(t, site, "web/start.js"))
 	tags := `<meta name="fieldhead-compile" content="/web/` + worker + `" data-wasm="/web/` + wasm + `" data-exec="/` + exec + `">` +
-		"\n    " + `<script async src="/web/` + start + `"></script>`
+		"\n    " + `<script async fetchpriority="high" src="/web/` + start + `"></script>`
 	at, sheet := bytes.Index(page, []byte(tags)), bytes.Index(page, []byte(`rel="stylesheet"`))
 	if at < 0 || sheet < 0 || at > sheet {
 		t.Errorf("the page does not start the compiling worker before its style sheets, under the hashed names (want %s)", tags)

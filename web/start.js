@@ -1,10 +1,11 @@
 // Fieldhead: starts the worker that fetches and compiles the program
 // (web/compile.js) as the page opens. An async script placed before the
-// style sheets (the site writer puts it there, app/loader.go): it runs as
-// soon as it is fetched and holds nothing back, so the worker's download
-// of the wasm starts while the main thread is still free (the worker
-// cannot start while it is busy). Should app.js run first, it compiles on
-// the page and this starts nothing (fieldheadCompileTaken).
+// style sheets, fetched at high priority (the site writer puts it there,
+// app/loader.go): it runs as soon as it is fetched and holds nothing
+// back, so the worker's download of the wasm starts while the main thread
+// is still free (the worker cannot start while it is busy). Should app.js
+// run first, it compiles on the page and this starts nothing
+// (fieldheadCompileTaken).
 //
 // The worker fetches the wasm itself, so that the main thread stays free
 // to lay out and paint what is shown before the program runs; app.js takes
