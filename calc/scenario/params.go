@@ -37,6 +37,10 @@ type Param struct {
 	// ExtraUnits are offered by the unit picker besides those of Dim (the
 	// Convert value also takes a head of the liquid in m or ft).
 	ExtraUnits []string
+	// units narrows the unit picker to the units a value of this kind is
+	// given in (the zero value: those of a reading); a value typed or
+	// linked in any other unit of Dim is still read.
+	units unitRange
 	// Segment marks a parameter each segment of a line has too, written
 	// sN.<Name>; SegLabel is its label there ("length"), SegBox its box's.
 	Segment          bool
@@ -108,12 +112,12 @@ var Table = []Param{
 		return []Choice{{"auto", "from the regime (2 laminar, 1 turbulent)"}, {"1", "1 everywhere"}, {"pl", "power-law profile estimate"}}
 	}},
 
-	{Name: "l", Label: "length of the run", Box: "Length of the run", Dim: calc.Length, SI: "m", US: "ft", Segment: true, SegLabel: "length", SegBox: "Length", Group: "fric", Missing: "enter the length of the pipe run"},
+	{Name: "l", Label: "length of the run", Box: "Length of the run", Dim: calc.Length, units: unitsDistance, SI: "m", US: "ft", Segment: true, SegLabel: "length", SegBox: "Length", Group: "fric", Missing: "enter the length of the pipe run"},
 	{Name: "d", Label: "inside diameter", Box: "Inside diameter", Dim: calc.Length, SI: "mm", US: "in", Segment: true, SegLabel: "inside diameter", SegBox: "Inside diameter", Group: "pipe", Missing: "enter the inside diameter, or pick a nominal size and schedule"},
 	{Name: "nps", Label: "nominal size", Box: "Nominal size", Kind: KindChoice, Segment: true, SegLabel: "nominal size", SegBox: "Nominal size", Group: "pipe", choices: npsChoices},
 	{Name: "sch", Label: "schedule", Box: "Schedule or class", Kind: KindChoice, Segment: true, SegLabel: "schedule", SegBox: "Schedule or class", Group: "pipe", choices: schChoices},
 	{Name: "mat", Label: "material", Box: "Material", Kind: KindChoice, Segment: true, SegLabel: "material", SegBox: "Material", Group: "rough", choices: matChoices},
-	{Name: "eps", Label: "roughness", Box: "Absolute roughness", Dim: calc.Length, SI: "mm", US: "in", Segment: true, SegLabel: "roughness", SegBox: "Absolute roughness", Group: "rough", Missing: "enter the roughness, or pick a material"},
+	{Name: "eps", Label: "roughness", Box: "Absolute roughness", Dim: calc.Length, units: unitsFine, SI: "mm", US: "in", Segment: true, SegLabel: "roughness", SegBox: "Absolute roughness", Group: "rough", Missing: "enter the roughness, or pick a material"},
 	{Name: "fit", Label: "fittings", Box: "Fittings", Kind: KindFittings, Segment: true, SegLabel: "fittings", SegBox: "Fittings", choices: fitChoices},
 	{Name: "k", Label: "extra ΣK", Box: "Extra loss coefficient ΣK", Hint: "(optional)", Kind: KindNumber, Segment: true, SegLabel: "extra ΣK", SegBox: "Extra loss coefficient ΣK"},
 	{Name: "fm", Label: "friction method", Box: "Friction factor method", Kind: KindChoice, choices: func() []Choice {
@@ -141,7 +145,7 @@ var Table = []Param{
 	{Name: "vhi", Label: "velocity band, high end", Box: "to", Dim: calc.Velocity, SI: "m/s", US: "ft/s", Missing: "enter the high end of the velocity band"},
 	{Name: "grad", Label: "loss gradient limit", Box: "Friction loss at most", Hint: "(head per 100 of pipe length)", Kind: KindNumber},
 
-	{Name: "cv", Label: "value to convert", Box: "Pressure, water column or head", Kind: KindQuantity, Dim: calc.Pressure,
+	{Name: "cv", Label: "value to convert", Box: "Pressure, water column or head", Kind: KindQuantity, Dim: calc.Pressure, units: unitsAll,
 		SI: "kPa", US: "psi", ExtraUnits: []string{"m", "ft"}, Missing: "enter a value to convert"},
 	{Name: "cvref", Label: "gauge/absolute", Kind: KindChoice, choices: refChoices},
 
@@ -208,8 +212,8 @@ var Table = []Param{
 	{Name: "tc", Label: "valve closing time", Box: "Valve closing time", Hint: "(at point 2; for a surge estimate)", Dim: calc.Duration, SI: "s", US: "s", Missing: "enter the time the valve takes to close"},
 	{Name: "dv", Label: "velocity stopped", Box: "Velocity stopped", Hint: "(blank: the whole flow velocity)", Dim: calc.Velocity, SI: "m/s", US: "ft/s", Missing: "enter the change of velocity at the valve"},
 	{Name: "wall", Label: "wall thickness", Box: "Wall thickness", Hint: "(blank: from the size picked)", Dim: calc.Length, SI: "mm", US: "in", Missing: "enter the pipe's wall thickness"},
-	{Name: "epipe", Label: "wall's elastic modulus", Box: "Wall's elastic modulus", Hint: "(blank: from the material)", Dim: calc.Pressure, SI: "GPa", US: "ksi", Missing: "enter the elastic modulus of the pipe wall"},
-	{Name: "kliq", Label: "liquid's bulk modulus", Box: "Liquid's bulk modulus", Hint: "(blank for water and seawater)", Dim: calc.Pressure, SI: "GPa", US: "ksi", Missing: "enter the liquid's bulk modulus"},
+	{Name: "epipe", Label: "wall's elastic modulus", Box: "Wall's elastic modulus", Hint: "(blank: from the material)", Dim: calc.Pressure, units: unitsModulus, SI: "GPa", US: "ksi", Missing: "enter the elastic modulus of the pipe wall"},
+	{Name: "kliq", Label: "liquid's bulk modulus", Box: "Liquid's bulk modulus", Hint: "(blank for water and seawater)", Dim: calc.Pressure, units: unitsModulus, SI: "GPa", US: "ksi", Missing: "enter the liquid's bulk modulus"},
 	{Name: "cr", Label: "restraint factor", Box: "Restraint factor c", Hint: "(blank: 1, expansion joints throughout)", Kind: KindNumber},
 
 	// Heating and cooling loops (loop.go, heat.go, valve.go): a closed
@@ -221,7 +225,7 @@ var Table = []Param{
 	{Name: "pexp", Label: "loop's static pressure", Box: "Static pressure of the loop", Hint: "(where the expansion vessel or pressurisation unit connects; for NPSH and the valves)", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the loop's static pressure where its expansion vessel or pressurisation unit connects"},
 	{Name: "pexpref", Label: "gauge/absolute of the loop's static pressure", Kind: KindChoice, choices: refChoices},
 	{Name: "zexp", Label: "elevation of the vessel's connection", Box: "Elevation of that connection", Hint: "(same datum as the pump's)", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the elevation where the expansion vessel or pressurisation unit connects"},
-	{Name: "load", Label: "heat load", Box: "Heat load", Hint: "(heating or cooling)", Dim: calc.Power, SI: "kW", US: "Btu/h", Group: "qby", Missing: "enter the heating or cooling load the flow carries"},
+	{Name: "load", Label: "heat load", Box: "Heat load", Hint: "(heating or cooling)", Dim: calc.Power, units: unitsAll, SI: "kW", US: "Btu/h", Group: "qby", Missing: "enter the heating or cooling load the flow carries"},
 	{Name: "tsup", Label: "supply temperature", Box: "Supply temperature", Hint: "(to the load)", Dim: calc.Temperature, SI: "°C", US: "°F", Missing: "enter the supply temperature (the liquid going to the load)"},
 	{Name: "tret", Label: "return temperature", Box: "Return temperature", Hint: "(from the load)", Dim: calc.Temperature, SI: "°C", US: "°F", Missing: "enter the return temperature (the liquid coming back from the load)"},
 	{Name: "dpc", Label: "drop of the valve's circuit", Box: "Drop of the circuit the valves control", Hint: "(blank: the rest of the line)", Dim: calc.Pressure, SI: "kPa", US: "psi", Missing: "enter the pressure drop of the circuit whose flow the valve varies, without the valve"},

@@ -422,3 +422,67 @@ func ExampleEvaluate() {
 	// pump head 28.52 m
 	// regime turbulent at Re 101500
 }
+
+// TestUnitChoicesFitTheField checks that each picker offers the units its
+// kind of value is given in (common practice: gauges read in kPa, bar,
+// MPa, psi or a liquid column, never GPa or ksi; elevations and heads in
+// m, cm, mm, ft or in; a run's length in km too; a roughness in µm too; a
+// pipe wall's modulus in GPa, MPa, psi or ksi), and that a value linked in
+// a unit a picker leaves out is still read, its box showing it as typed.
+// The conversions are GNU units' (units '0.1 km' m: 100; '2 GPa' Pa: 2e9).
+func TestUnitChoicesFitTheField(t *testing.T) {
+	for _, c := range []struct {
+		param      string
+		us         bool
+		has, lacks []string
+	}{
+		{"p1", false, []string{"kPa", "bar", "MPa", "Pa", "psi", "mH2O", "ftH2O", "inHg"}, []string{"GPa", "ksi"}},
+		{"ps", true, []string{"psi", "kPa", "bar", "inHg"}, []string{"GPa", "ksi"}},
+		{"z1", false, []string{"m", "cm", "mm", "ft", "in"}, []string{"km", "µm"}},
+		{"s1.z", true, []string{"ft", "m"}, []string{"km", "µm"}},
+		{"s1.l", false, []string{"m", "km", "ft"}, []string{"µm"}},
+		{"l", true, []string{"ft", "km"}, []string{"µm"}},
+		{"s2.eps", false, []string{"mm", "µm", "in"}, []string{"km"}},
+		{"d", false, []string{"mm", "in"}, []string{"km", "µm"}},
+		{"epipe", false, []string{"GPa", "MPa", "psi", "ksi"}, []string{"kPa", "bar", "mH2O", "inHg"}},
+		{"kliq", true, []string{"ksi", "GPa"}, []string{"kPa", "ftH2O"}},
+		{"cv", false, []string{"kPa", "GPa", "ksi", "m", "ft"}, nil},
+		{"pin", false, []string{"kW", "W", "hp"}, []string{"Btu/h", "TR"}},
+		{"load", true, []string{"Btu/h", "TR", "kW"}, nil},
+		{"tc", false, []string{"s", "min"}, []string{"d"}},
+	} {
+		got := UnitChoices(c.param, c.us)
+		if def := DefaultUnit(c.param, c.us); len(got) == 0 || got[0] != def {
+			t.Errorf("UnitChoices(%s, us=%v) = %v: want the default %s first", c.param, c.us, got, def)
+		}
+		for _, u := range c.has {
+			if !slices.Contains(got, u) {
+				t.Errorf("UnitChoices(%s, us=%v) = %v: want %s", c.param, c.us, got, u)
+			}
+		}
+		for _, u := range c.lacks {
+			if slices.Contains(got, u) {
+				t.Errorf("UnitChoices(%s, us=%v) = %v: %s has no place there", c.param, c.us, got, u)
+			}
+		}
+	}
+
+	// A link holding units a picker leaves out: read in full, shown as typed.
+	s, err := Parse("units=si&z1=0.1km&epipe=2GPa&p1=0.5MPa&z2=150cm")
+	if err != nil {
+		t.Fatal(err)
+	}
+	in := Read(s)
+	for p, want := range map[string]float64{"z1": 100, "epipe": 2e9, "p1": 5e5, "z2": 1.5} {
+		if got := in.Num(p); !in.OK(p) || math.Abs(got-want) > 1e-9*want {
+			t.Errorf("%s read as %g (problem %v), want %g", p, got, in.Problems[p], want)
+		}
+	}
+	d := NewDraft(s)
+	for p, want := range map[string][2]string{"z1": {"0.1km", ""}, "epipe": {"2", "GPa"}, "p1": {"0.5", "MPa"}, "z2": {"150", "cm"}} {
+		if box, unit := d.Box(p); box != want[0] || unit != want[1] {
+			t.Errorf("box %s shows %q with the picker on %q, want %q with %q", p, box, unit, want[0], want[1])
+		}
+	}
+	boxesMatch(t, "a link with a unit no picker of its field offers", &d)
+}

@@ -32,7 +32,9 @@ func DefaultUnit(param string, us bool) string {
 }
 
 // UnitChoices lists unit symbols for a picker beside param, the default
-// first, then every unit of its dimension and the row's ExtraUnits.
+// first, then the units of its dimension a value of its kind is given in
+// (a gauge's reading never in GPa, an elevation never in µm) and the row's
+// ExtraUnits. A value typed or linked in a unit left out is still read.
 // The list is kept once made: the view model asks for it for every box
 // on every edit. The caller gets its own copy.
 func UnitChoices(param string, us bool) []string {
@@ -71,6 +73,45 @@ var (
 	unitChoicesMade map[unitChoicesKey][]string // only parameters of the vocabulary: bounded
 )
 
+// unitRange is which units of its dimension a parameter's picker offers.
+// A picker lists the units its kind of value is read or given in, so that
+// a slip of the finger cannot pick GPa beside kPa for a suction gauge or
+// km beside m for an elevation (common practice: gauges read in kPa, bar,
+// MPa, psi or a liquid column; a modulus in GPa or ksi).
+type unitRange uint8
+
+const (
+	unitsReading  unitRange = iota // a reading or a setting: see leaves
+	unitsAll                       // every unit of the dimension
+	unitsDistance                  // a length of pipe: km too
+	unitsFine                      // a roughness: µm too
+	unitsModulus                   // an elastic or bulk modulus: GPa, MPa, psi and ksi only
+)
+
+// leaves reports whether a picker of range r leaves out the unit sym of
+// dim: a pressure reading GPa and ksi, a length km (but a run's) and µm
+// (but a roughness), a power read at a motor Btu/h and TR (heat loads
+// take every unit), a time days.
+func (r unitRange) leaves(dim calc.Dimension, sym string) bool {
+	if r == unitsAll {
+		return false
+	}
+	switch dim {
+	case calc.Pressure:
+		if r == unitsModulus {
+			return sym != "GPa" && sym != "MPa" && sym != "psi" && sym != "ksi"
+		}
+		return sym == "GPa" || sym == "ksi"
+	case calc.Length:
+		return (sym == "km" && r != unitsDistance) || (sym == "µm" && r != unitsFine)
+	case calc.Power:
+		return sym == "Btu/h" || sym == "TR"
+	case calc.Duration:
+		return sym == "d"
+	}
+	return false
+}
+
 func unitChoices(param string, us bool) ([]string, bool) {
 	p, _, ok := Lookup(param)
 	if !ok || (p.Kind != KindQuantity && p.Kind != KindList) {
@@ -86,7 +127,9 @@ func unitChoices(param string, us bool) ([]string, bool) {
 		out = append(out, sym)
 	}
 	for _, u := range calc.UnitsFor(p.Dim) {
-		add(u.Symbol)
+		if !p.units.leaves(p.Dim, u.Symbol) {
+			add(u.Symbol)
+		}
 	}
 	for _, u := range p.ExtraUnits {
 		add(u)
