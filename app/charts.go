@@ -182,12 +182,15 @@ func profileChart(c *present.Chart, w int, print bool) chart.Chart {
 // historyChart is a pump's history: head against the days since its
 // first sheet, with strips for its efficiencies and its energy per volume
 // (the chart language of the pump chart: readings from the site are open
-// rings, what they work out to the accent line).
+// rings, what they work out to the accent line). Each axis fits its data,
+// as the head's does, no narrower than the view model's least span: a
+// strip from 0 drew a pump losing six points of efficiency in a year as
+// a flat line.
 func historyChart(c *present.Chart, w int) chart.Chart {
 	out := chart.Chart{Title: c.Title, XLabel: c.XLabel, YLabel: c.YLabel, XMin: chart.Fix(0), Direct: true,
-		Width: w, Height: 300}
-	eff := &chart.Chart{YLabel: c.Y2Label, YMin: chart.Fix(0), Height: 160}
-	energy := &chart.Chart{YLabel: c.Y3Label, YMin: chart.Fix(0), Height: 140}
+		Width: w, Height: 300, YSpan: c.YSpan}
+	eff := &chart.Chart{YLabel: c.Y2Label, YSpan: c.Y2Span, Height: 160}
+	energy := &chart.Chart{YLabel: c.Y3Label, YSpan: c.Y3Span, Height: 140}
 	line := func(cu present.Curve, st chart.Style, key string) chart.Series {
 		return chart.Series{Name: cu.Name, X: cu.X, Y: cu.Y, Style: st, Accent: true, Key: key}
 	}

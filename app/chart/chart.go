@@ -155,6 +155,11 @@ type Chart struct {
 	// XMin, XMax, YMin and YMax fix axis limits; nil means automatic
 	// ("nice" limits that enclose the data). See Fix.
 	XMin, XMax, YMin, YMax *float64
+	// YSpan is the least span of an automatic y axis (0: none): data
+	// closer together than that are drawn on an axis this wide about their
+	// middle, and not below 0 when none of them is, so that a small drift
+	// shows as small.
+	YSpan float64
 	// Y2 adds a second y axis on the right for series and markers with Y2 set.
 	Y2 *Axis
 	// Lower is an optional panel drawn below this one, sharing the x axis

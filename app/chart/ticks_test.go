@@ -172,3 +172,34 @@ func TestAppendNum(t *testing.T) {
 		}
 	}
 }
+
+func TestAtLeast(t *testing.T) {
+	// An automatic axis spans at least YSpan about its data's middle, moves
+	// only its free ends, and does not go below 0 when its data do not
+	// (design rule of this package: a history's strip of 65–71 % with a
+	// span of 10 points is 63–73, of 70.9–71.0 % is 65.95–75.95).
+	cases := []struct {
+		name         string
+		lo, hi, span float64
+		fixLo, fixHi bool
+		wantLo       float64
+		wantHi       float64
+	}{
+		{"no span", 70.9, 71, 0, false, false, 70.9, 71},
+		{"wide enough", 40, 71, 10, false, false, 40, 71},
+		{"about the middle", 65, 71, 10, false, false, 63, 73},
+		{"close readings", 70.9, 71, 10, false, false, 65.95, 75.95},
+		{"not below zero", 0.20, 0.21, 0.5, false, false, 0, 0.5},
+		{"negative data may", -1, 1, 4, false, false, -2, 2},
+		{"fixed low end", 0, 2, 10, true, false, 0, 10},
+		{"fixed high end", 95, 100, 10, false, true, 90, 100},
+		{"both fixed", 1, 2, 10, true, true, 1, 2},
+		{"not a number", 1, 2, math.NaN(), false, false, 1, 2},
+	}
+	for _, c := range cases {
+		lo, hi, fl, fh := atLeast(c.span)(c.lo, c.hi, c.fixLo, c.fixHi)
+		if math.Abs(lo-c.wantLo) > 1e-9 || math.Abs(hi-c.wantHi) > 1e-9 || fl != c.fixLo || fh != c.fixHi {
+			t.Errorf("%s: %v..%v (fixed %v %v), want %v..%v", c.name, lo, hi, fl, fh, c.wantLo, c.wantHi)
+		}
+	}
+}

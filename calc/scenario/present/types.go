@@ -219,9 +219,13 @@ type Chart struct {
 	Title             string
 	XLabel, YLabel    string
 	Y2Label, Y3Label  string // efficiency and NPSH axes of the pump chart
-	Curves            []Curve
-	Markers           []Marker
-	Bands             []Band
+	// YSpan, Y2Span and Y3Span are the least spans of the automatic axes
+	// (0: none) in their display units, for a history: a drift within a
+	// reading's usual scatter is drawn small, not across the strip.
+	YSpan, Y2Span, Y3Span float64
+	Curves                []Curve
+	Markers               []Marker
+	Bands                 []Band
 }
 
 // CurveRole says what a curve of a chart is.
