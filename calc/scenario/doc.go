@@ -262,6 +262,10 @@
 //	        liquid needs it)
 //	cr      the restraint factor c, a plain number (blank: 1, a pipe with
 //	        expansion joints; 1 − ν² for one anchored throughout)
+//	zv      a closed loop's closing valve's elevation, on the datum of zp
+//	        (blank: at the pump's level); the static pressure at the valve
+//	        is the loop's (pexp at zexp) carried by elevation, and a loop
+//	        without pexp has no known static pressure for the peak
 //
 // Heating and cooling loops (loop.go, heat.go, valve.go):
 //

@@ -215,6 +215,7 @@ var Table = []Param{
 	{Name: "epipe", Label: "wall's elastic modulus", Box: "Wall's elastic modulus", Hint: "(blank: from the material)", Dim: calc.Pressure, units: unitsModulus, SI: "GPa", US: "ksi", Missing: "enter the elastic modulus of the pipe wall"},
 	{Name: "kliq", Label: "liquid's bulk modulus", Box: "Liquid's bulk modulus", Hint: "(blank for water and seawater)", Dim: calc.Pressure, units: unitsModulus, SI: "GPa", US: "ksi", Missing: "enter the liquid's bulk modulus"},
 	{Name: "cr", Label: "restraint factor", Box: "Restraint factor c", Hint: "(blank: 1, expansion joints throughout)", Kind: KindNumber},
+	{Name: "zv", Label: "closing valve's elevation", Box: "Elevation of the valve", Hint: "(same datum as the pump's; blank: at the pump)", Dim: calc.Length, SI: "m", US: "ft", Missing: "enter the elevation of the valve that closes"},
 
 	// Heating and cooling loops (loop.go, heat.go, valve.go): a closed
 	// loop's switch and its static pressure, the flow from a heat load,

@@ -19,8 +19,11 @@ type SurgeResult struct {
 	Pipes    []SurgePipe // from point 1 to the valve at point 2
 	// Static is the gauge pressure at point 2 with the flow stopped: the
 	// higher of point 1's level and pressure held on the closed valve,
-	// p1 + ρ·g·(z1 − z2), and point 2's own pressure. StaticKnown is false
-	// without a solved balance (the figures are then rises only).
+	// p1 + ρ·g·(z1 − z2), and point 2's own pressure. On a closed loop it
+	// is the loop's static pressure at the valve's elevation (zv; blank:
+	// the pump's). StaticKnown is false without a solved balance, and on a
+	// loop without its static pressure (pexp): the figures are then rises
+	// only.
 	Static      float64
 	StaticKnown bool
 	// Peak is Static + the rise, Pa gauge; StaticHead and PeakHead are
@@ -53,6 +56,10 @@ func (e *eval) surge(run *RunResult, line *calc.Line) (*SurgeResult, problems) {
 		c = g.quantity("cr")
 	}
 	pipes := e.surgePipes(&g, run, line, c)
+	loop, zv := e.isLoop(), 0.0
+	if loop && e.has("zv") {
+		zv = g.quantity("zv")
+	}
 	if g.failed() {
 		return nil, g.problems()
 	}
@@ -76,7 +83,21 @@ func (e *eval) surge(run *RunResult, line *calc.Line) (*SurgeResult, problems) {
 	in := calc.Surge{Density: fl.Density, BulkModulus: k, ClosureTime: tc, DeltaV: dv,
 		Static: e.res.SitePressure, VapourPressure: fl.VapourPressure}
 	out := &SurgeResult{ClosureTime: tc, BulkModulus: k, BulkFrom: from, Pipes: pipes}
-	if br := e.res.Balance; br != nil {
+	switch br := e.res.Balance; {
+	case br == nil:
+	case loop && !e.has("pexp"):
+		// The loop's level is not given: its balance stands the site's
+		// pressure in at the pump, which says nothing of the valve's.
+	case loop:
+		// At rest the loop's pressure is its static pressure carried by
+		// elevation (hydrostatics): at the pump's inlet, br.In, and at
+		// the valve, ρ·g higher per metre below it.
+		if !e.has("zv") {
+			zv = br.In.Z
+		}
+		in.Static = br.In.P + fl.Density*calc.StandardGravity*(br.In.Z-zv)
+		out.StaticKnown = true
+	default:
 		rhog := fl.Density * calc.StandardGravity
 		in.Static = math.Max(br.In.P+rhog*(br.In.Z-br.Out.Z), br.Out.P)
 		out.StaticKnown = true

@@ -439,6 +439,14 @@ func (u *uses) part(p Part) {
 		u.part(PartBalance)
 	case PartSurge:
 		u.add("tc", "dv", "cr", "kliq", "wall", "epipe", "q")
+		if in.IsLoop() {
+			// The static pressure at the valve: the loop's, carried from
+			// its connection to the valve's elevation.
+			u.add("zv", "zexp")
+			if in.Given("pexp") {
+				u.pressureAt("pexp")
+			}
+		}
 		u.part(PartLiquid)
 		u.part(PartSite)
 		if in.Segments > 0 {

@@ -47,6 +47,7 @@ func (b *builder) surgeCard() Card {
 		fields(b.quantity("wall", "", ""), b.quantity("epipe", "", "")),
 		maybe(liq == "custom" || b.in.Given("kliq"), fields(b.quantity("kliq", "", ""))),
 		fields(b.plain("cr", "", "", true)),
+		maybe(b.isLoop(), fields(b.quantity("zv", "", ""))),
 		{Kind: BlockLevel, ID: "surge-caution", Class: "lvl-caution", Text: surgeScreening},
 		maybe(a == nil, text("muted", "", "Give the valve's closing time for a screening figure of water hammer: the wave speed, its round trip 2L/a and the Joukowsky rise.")),
 		maybe(a != nil, Block{Kind: BlockAnswer, ID: "surge-answer", Answer: a}),
@@ -65,11 +66,14 @@ func (b *builder) surgeTitle() string {
 }
 
 // surgeStaticLabel names the static pressure the surge adds to: point 2's
-// on a line; on a closed loop the loop's static pressure at the pump's
-// level, the point its balance is taken at (a valve higher up sees less).
+// on a line; on a closed loop the loop's static pressure at the valve's
+// elevation, else at the pump's level (a valve higher up sees less).
 func (b *builder) surgeStaticLabel() string {
-	if b.isLoop() {
-		return "the loop's static pressure at the pump's level, flow stopped (a valve higher in the loop sees less)"
+	switch {
+	case b.isLoop() && b.in.OK("zv"):
+		return "the loop's static pressure at the valve's elevation, " + minus(b.param("zv", b.in.Num("zv"))) + ", flow stopped"
+	case b.isLoop():
+		return "the loop's static pressure at the pump's level, flow stopped (a valve higher in the loop sees less: give its elevation)"
 	}
 	return "static pressure at point 2, flow stopped"
 }
@@ -107,7 +111,11 @@ func (b *builder) surgeFacts() []Fact {
 		}
 		out = append(out, Fact{ID: "surge-low", Label: lowLabel, Value: low})
 	} else {
-		out = append(out, Fact{Label: "static pressure", Value: "not known: give the two points' levels and pressures for the peak"})
+		why := "not known: give the two points' levels and pressures for the peak"
+		if b.isLoop() {
+			why = "not known: give the loop's static pressure (where its expansion vessel or pressurisation unit connects) for the peak"
+		}
+		out = append(out, Fact{Label: "static pressure", Value: why})
 	}
 	k := b.param("kliq", sr.BulkModulus)
 	switch sr.BulkFrom {

@@ -146,3 +146,69 @@ func TestHydroFacts(t *testing.T) {
 		t.Errorf("shares %g + %g of %g m", tr.LossShare, tr.NetShare, tr.GrossHead)
 	}
 }
+
+func TestLoopSurgeStatic(t *testing.T) {
+	// Source: hydrostatics. A closed loop at rest has its static pressure
+	// carried by elevation from its expansion vessel's connection, so the
+	// valve's static pressure is pexp + ρ·g·(zexp − zv) (the figures are
+	// checked with python3-iapws in ref-loops.case); the card offers the
+	// valve's elevation on a loop only, names where the static pressure is
+	// taken, and a loop without its static pressure has none, rather than
+	// the site's pressure at the pump standing in for it.
+	base := "loop=1&liq=water&t=20C&baro=101.325kPa&zp=0m&q=30L/s&l=500m&nps=6&sch=40&mat=steel&tc=0.5s&epipe=200GPa&view=balance"
+	for _, c := range []struct {
+		name, extra string
+		known       bool
+		label       string
+	}{
+		{"a valve 25 m up", "&pexp=200kPa&zexp=30m&zv=25m", true, "at the valve's elevation, 25.00 m,"},
+		{"no valve elevation", "&pexp=200kPa&zexp=30m", true, "at the pump's level"},
+		{"no static pressure", "&zexp=30m&zv=25m", false, ""},
+	} {
+		sc, err := scenario.Parse(base + c.extra)
+		if err != nil {
+			t.Fatal(err)
+		}
+		d := scenario.NewDraft(sc)
+		r := scenario.Evaluate(scenario.Read(d.Scen))
+		sr := r.Surge
+		if sr == nil || sr.StaticKnown != c.known {
+			t.Fatalf("%s: surge %+v, errors %v", c.name, sr, r.Errors)
+		}
+		sh := Build(&d, r)
+		card := findCard(sh.Cards, "surge")
+		if card == nil {
+			t.Fatalf("%s: no surge card", c.name)
+		}
+		var box bool
+		var static string
+		for _, b := range card.Blocks {
+			for _, f := range b.Fields {
+				box = box || f.Param == "zv"
+			}
+			for _, f := range b.Facts {
+				if f.ID == "surge-static" || f.Label == "static pressure" {
+					static = f.Label + ": " + f.Value
+				}
+			}
+		}
+		if !box {
+			t.Errorf("%s: no box for the valve's elevation on a loop's surge card", c.name)
+		}
+		switch {
+		case c.known && !strings.Contains(static, c.label):
+			t.Errorf("%s: static pressure %q, want it taken %s", c.name, static, c.label)
+		case !c.known && !strings.Contains(static, "not known: give the loop's static pressure"):
+			t.Errorf("%s: static pressure %q, want it not known", c.name, static)
+		}
+	}
+	// A line between two points has no such box: its valve is at point 2.
+	sh, _ := sheetOf(t, surgeDemo(t, "1s"), "balance")
+	for _, b := range findCard(sh.Cards, "surge").Blocks {
+		for _, f := range b.Fields {
+			if f.Param == "zv" {
+				t.Error("a line's surge card asks for a loop valve's elevation")
+			}
+		}
+	}
+}

@@ -30,7 +30,8 @@ Fieldhead's code, through whole share links.
     authority N = dp_valve/(dp_valve + dp_circuit) (common practice), by hand;
   - load units: GNU units (`units -t`): Btu/h, tonref;
   - surge: Korteweg's wave speed with K = rho*w^2 of IF97 at the pressure
-    the density is taken at.
+    the density is taken at; in a closed loop at rest, the static pressure at
+    the valve by hydrostatics from the loop's connection.
 
 A closed loop's two points are one point at the pump's inlet, taken at rest
 (calc/scenario/loop.go): its pressure is the static pressure pexp carried by
@@ -327,6 +328,28 @@ def surge_cases(w):
                source="Korteweg a = sqrt((K/rho)/(1 + K D/(E e))), c = 1, with K = rho w^2 and rho of IAPWS-IF97 "
                       "(python3-iapws IAPWS97) both at the line's pressure; D and e of NPS 6 schedule 40 from "
                       "python3-fluids nearest_pipe (ASME B36.10M)")
+    # A closed loop at rest: the pressure is the loop's static pressure
+    # carried by elevation from its connection (hydrostatics), so a valve
+    # 25 m up sees rho*g*5 m more than the connection 30 m up, and the pump
+    # at 0 m rho*g*30 m more; the peak adds Joukowsky's rho*a*V.
+    tc, pexp, zexp = "20", mp.mpf("200e3"), mp.mpf(30)
+    t = mp.mpf(tc) + mp.mpf("273.15")
+    rho, _, ws, _ = water(t, P_ATM + pexp)
+    k = rho * ws * ws
+    young = mp.mpf("200e9")
+    a = mp.sqrt((k / rho) / (1 + k * d / (young * e)))
+    v = mp.mpf("0.030") / (PI * d * d / 4)
+    for zv, where in [("25", "a valve 25 m up"), (None, "the valve at the pump's level")]:
+        static = pexp + rho * G * (zexp - (mp.mpf(zv) if zv else 0))
+        w.case("surge in a closed loop: water 20 C, 200 kPa gauge at 30 m, " + where,
+               "loop=1&liq=water&t=%sC&baro=101.325kPa&pexp=200kPa&zexp=30m&zp=0m&q=30L/s&"
+               "l=500m&nps=6&sch=40&mat=steel&tc=0.5s&epipe=200GPa%s" % (tc, "&zv=" + zv + "m" if zv else ""),
+               ["surge.static = %s Pa ± 1e-9 rel" % sig(static),
+                "surge.peak = %s Pa ± 1e-9 rel" % sig(static + rho * a * v)],
+               source="hydrostatics p = pexp + rho g (zexp - zv) at rest, Joukowsky dp = rho a V with Korteweg's "
+                      "a (c = 1) and V = Q/(pi D^2/4); rho and w of IAPWS-IF97 (python3-iapws IAPWS97) at the "
+                      "loop's static pressure; D and e of NPS 6 schedule 40 from python3-fluids nearest_pipe "
+                      "(ASME B36.10M); g standard (CGPM 1901)")
     w.case("surge: seawater of another salinity needs the bulk modulus",
            "liq=seawater&sal=20&t=20C&baro=101.325kPa&p1=0kPa&z1=0m&v1=0m/s&p2=0kPa&z2=0m&v2=0m/s&q=30L/s&solve=hp&"
            "l=500m&nps=6&sch=40&mat=steel&tc=0.5s",
