@@ -112,6 +112,10 @@ const (
 	// A pump test judged by its guarantee point.
 	CautionGuaranteeNoFlow // a grade and a test, but no guarantee flow (qg) nor duty flow (q) to judge it at
 	CautionGuaranteeNoHead // no guarantee head typed, and no data sheet covering the guarantee flow Figures[0]
+
+	// The surge estimate, again (kept last: the codes above keep their
+	// numbers).
+	CautionSurgeColumnUnknown // the static pressure at the valve is not known: the low swing parts the column unless it is above Figures[0], gauge (the rise plus the vapour pressure, less the site's pressure)
 	cautionEnd
 )
 
@@ -207,6 +211,7 @@ var cautionNames = [...]string{"text",
 	"valve cavitation",
 	"guarantee no flow",
 	"guarantee no head",
+	"surge column unknown",
 }
 
 // Warn builds a Warning about field of caution c quoting figs.

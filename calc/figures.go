@@ -70,6 +70,7 @@ var cautionFigureDims = [...][]Dimension{
 	CautionSheetEffHigh:           {Dimensionless, Dimensionless, Dimensionless},
 	CautionStandardAtmosphere:     {Pressure},
 	CautionSurgeDvAboveFlow:       {Velocity, Velocity},
+	CautionSurgeColumnUnknown:     {Pressure},
 	CautionSurgeSlow:              {Duration, Duration, Pressure},
 	CautionSwameeJainRange:        {Dimensionless, Dimensionless},
 	CautionTransitionalRun:        {Dimensionless},

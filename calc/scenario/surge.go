@@ -3,6 +3,7 @@ package scenario
 import (
 	"errors"
 	"math"
+	"slices"
 
 	"fieldhead/calc"
 )
@@ -123,8 +124,14 @@ func (e *eval) surge(run *RunResult, line *calc.Line) (*SurgeResult, problems) {
 		out.StaticHead, out.PeakHead = out.Static/rhog, out.Peak/rhog
 	} else {
 		out.Static = in.Static - e.res.SitePressure
+		// calc took the site's pressure for the static: whether the
+		// column parts is not known, only the static it would take.
+		out.ColumnParts = false
+		out.Warnings = slices.DeleteFunc(out.Warnings, func(w calc.Warning) bool { return w.Code == calc.CautionSurgeColumnParts })
+		out.Warnings = append(out.Warnings, calc.Warn("tc", calc.CautionSurgeColumnUnknown,
+			calc.Fig(r.DeltaP+fl.VapourPressure-e.res.SitePressure, calc.Pressure)))
 	}
-	for _, w := range r.Warnings {
+	for _, w := range out.Warnings {
 		e.warnCalc("surge", w)
 	}
 	return out, nil

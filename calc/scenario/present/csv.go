@@ -413,7 +413,12 @@ var csvColumns = []csvColumn{
 	{head: "surge: peak pressure at point 2 (static + rise), gauge", part: scenario.PartSurge, kind: csvFigure, dim: calc.Pressure, value: fig(func(r *scenario.Result) (float64, bool) {
 		return r.Surge.Peak, r.Surge.StaticKnown
 	})},
-	{head: "surge: low swing reaches the vapour pressure", part: scenario.PartSurge, value: txt(func(r *scenario.Result) string { return yesNo(r.Surge.ColumnParts) })},
+	{head: "surge: low swing reaches the vapour pressure", part: scenario.PartSurge, value: txt(func(r *scenario.Result) string {
+		if !r.Surge.StaticKnown {
+			return "not known: no static pressure at the valve"
+		}
+		return yesNo(r.Surge.ColumnParts)
+	})},
 
 	// Convert.
 	{head: "converted: gauge pressure", part: scenario.PartConvert, kind: csvFigure, dim: calc.Pressure, value: fig(func(r *scenario.Result) (float64, bool) { return r.Convert.Gauge, true })},

@@ -1320,6 +1320,9 @@ var cautionWords = [...]func(c cautioning) string{
 	calc.CautionSurgeColumnParts: func(c cautioning) string {
 		return "the low swing after the closure reaches the vapour pressure: the liquid column may part and rejoin with a blow larger than Joukowsky's figure"
 	},
+	calc.CautionSurgeColumnUnknown: func(c cautioning) string {
+		return "the static pressure at the valve is not known: unless it is above " + c.f(0) + " gauge (Joukowsky's rise plus the vapour pressure), the low swing after the closure reaches the vapour pressure and the liquid column may part"
+	},
 	calc.CautionSurgeDvAboveFlow: func(c cautioning) string {
 		return "the velocity change (" + c.f(0) + ") is larger than the flow velocity at the valve (" + c.f(1) + ")"
 	},

@@ -240,6 +240,9 @@ func TestCautionWords(t *testing.T) {
 			"at the pump's inlet, the end of segment 1 (300.0 m from point 1, elevation 0.000 m): the hydraulic grade line is 2.100 m below the pipe crown, so the suction is below atmospheric pressure: air leaks in at joints and seals; check the NPSH on the Pump view"},
 		{calc.CautionSurgeSlow, []calc.Figure{calc.Fig(3, calc.Duration), calc.Fig(1.5, calc.Duration), calc.Fig(2.634e6, calc.Pressure)}, false,
 			"the closure (3.000 s) is slower than the wave's round trip 2L/a (1.500 s): the rise is smaller than Joukowsky's 2634 kPa, which is then an upper bound; only a transient analysis of the valve's closing curve gives the actual figure"},
+		// 2.2e6 Pa = 319.08 psi (GNU units).
+		{calc.CautionSurgeColumnUnknown, []calc.Figure{calc.Fig(2.2e6, calc.Pressure)}, true,
+			"the static pressure at the valve is not known: unless it is above 319.1 psi gauge (Joukowsky's rise plus the vapour pressure), the low swing after the closure reaches the vapour pressure and the liquid column may part"},
 	} {
 		if got := WarningText(c.c, c.figs, c.us); got != c.want {
 			t.Errorf("%v (us %v):\n got %q\nwant %q", c.c, c.us, got, c.want)

@@ -1,6 +1,7 @@
 package present
 
 import (
+	"math"
 	"reflect"
 	"strings"
 	"testing"
@@ -174,6 +175,23 @@ func TestLoopSurgeStatic(t *testing.T) {
 		sr := r.Surge
 		if sr == nil || sr.StaticKnown != c.known {
 			t.Fatalf("%s: surge %+v, errors %v", c.name, sr, r.Errors)
+		}
+		// Unknown, the static cannot say whether the column parts: the
+		// caution gives the static it would take (the rise plus the
+		// vapour pressure, gauge) instead of a verdict on the site's.
+		var parts, unknown bool
+		for _, w := range r.Warnings {
+			parts = parts || w.Code == calc.CautionSurgeColumnParts
+			if w.Code == calc.CautionSurgeColumnUnknown {
+				unknown = true
+				want := sr.DeltaP + r.Fluid.VapourPressure - r.SitePressure
+				if len(w.Figures) != 1 || math.Abs(w.Figures[0].Value-want) > 1e-9*want {
+					t.Errorf("%s: the caution quotes %v, want %g Pa gauge", c.name, w.Figures, want)
+				}
+			}
+		}
+		if unknown == c.known || (!c.known && (parts || sr.ColumnParts)) {
+			t.Errorf("%s: column parts %v (%v), unknown %v, with the static known %v", c.name, parts, sr.ColumnParts, unknown, c.known)
 		}
 		sh := Build(&d, r)
 		card := findCard(sh.Cards, "surge")
