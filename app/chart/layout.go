@@ -230,7 +230,9 @@ func (r *renderer) render(b []byte) []byte {
 
 		// Y scales now that the plot height is known.
 		ny := max(int((p.plot.b-p.plot.t)/50)+1, 3)
-		lo, hi, fl, fh := headroom(atLeast(p.c.YSpan)(limits(p.yExt, p.c.YMin, p.c.YMax)))
+		lo, hi, fl, fh := limits(p.yExt, p.c.YMin, p.c.YMax)
+		lo, hi = atLeast(lo, hi, fl, fh, p.c.YSpan)
+		lo, hi, fl, fh = headroom(lo, hi, fl, fh)
 		p.y = niceScale(lo, hi, fl, fh, ny)
 		p.y.p0, p.y.p1 = p.plot.b, p.plot.t
 		if p.hasY2 {
@@ -270,32 +272,30 @@ func (r *renderer) render(b []byte) []byte {
 	return r.draw(b)
 }
 
-// headroom widens unfixed y limits by 1 % of the span, so that a line
-// at the very top or bottom of the data does not merge with the frame.
 // atLeast widens the limits of an axis to span at least span, about
 // their middle, moving only the ends that are not fixed; a lower end at or
 // above 0 stays so.
-func atLeast(span float64) func(lo, hi float64, fixLo, fixHi bool) (float64, float64, bool, bool) {
-	return func(lo, hi float64, fixLo, fixHi bool) (float64, float64, bool, bool) {
-		d := span - (hi - lo)
-		if !(span > 0) || !finite(span) || !(d > 0) || (fixLo && fixHi) {
-			return lo, hi, fixLo, fixHi
-		}
-		switch {
-		case fixLo:
-			hi += d
-		case fixHi:
-			lo -= d
-		default:
-			lo, hi = lo-d/2, hi+d/2
-			if lo < 0 && lo+d/2 >= 0 {
-				lo, hi = 0, hi-lo
-			}
-		}
-		return lo, hi, fixLo, fixHi
+func atLeast(lo, hi float64, fixLo, fixHi bool, span float64) (float64, float64) {
+	d := span - (hi - lo)
+	if !(span > 0) || !finite(span) || !(d > 0) || (fixLo && fixHi) {
+		return lo, hi
 	}
+	switch {
+	case fixLo:
+		hi += d
+	case fixHi:
+		lo -= d
+	default:
+		lo, hi = lo-d/2, hi+d/2
+		if lo < 0 && lo+d/2 >= 0 {
+			lo, hi = 0, hi-lo
+		}
+	}
+	return lo, hi
 }
 
+// headroom widens unfixed y limits by 1 % of the span, so that a line
+// at the very top or bottom of the data does not merge with the frame.
 func headroom(lo, hi float64, fixLo, fixHi bool) (float64, float64, bool, bool) {
 	d := (hi/2 - lo/2) * 0.02 // 1 % of the span, without overflow
 	if !fixLo && finite(lo-d) {

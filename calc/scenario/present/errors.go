@@ -1112,6 +1112,15 @@ func (c cautioning) abs(i int) string {
 	return c.w.absolute(c.figs[i])
 }
 
+// gauge words figure i, a gauge pressure, with its reference.
+func (c cautioning) gauge(i int) string {
+	if i >= len(c.figs) {
+		return "?"
+	}
+	b := builder{us: c.w.us}
+	return b.gauge(c.figs[i].Value)
+}
+
 // npshGuidance is the margin guidance the NPSH notes rest on.
 func (c cautioning) npshGuidance(least int) string {
 	return "margin guidance: NPSHa/NPSHr at least 1.1 (the low end of the 1.1–2.0 range by application in ANSI/HI 9.6.1, from memory) and at least " +
@@ -1321,7 +1330,7 @@ var cautionWords = [...]func(c cautioning) string{
 		return "the low swing after the closure reaches the vapour pressure: the liquid column may part and rejoin with a blow larger than Joukowsky's figure"
 	},
 	calc.CautionSurgeColumnUnknown: func(c cautioning) string {
-		return "the static pressure at the valve is not known: unless it is above " + c.f(0) + " gauge (Joukowsky's rise plus the vapour pressure), the low swing after the closure reaches the vapour pressure and the liquid column may part"
+		return "the static pressure at the valve is not known: unless it is above " + c.gauge(0) + " (Joukowsky's rise plus the vapour pressure), the low swing after the closure reaches the vapour pressure and the liquid column may part"
 	},
 	calc.CautionSurgeDvAboveFlow: func(c cautioning) string {
 		return "the velocity change (" + c.f(0) + ") is larger than the flow velocity at the valve (" + c.f(1) + ")"

@@ -242,7 +242,7 @@ func TestCautionWords(t *testing.T) {
 			"the closure (3.000 s) is slower than the wave's round trip 2L/a (1.500 s): the rise is smaller than Joukowsky's 2634 kPa, which is then an upper bound; only a transient analysis of the valve's closing curve gives the actual figure"},
 		// 2.2e6 Pa = 319.08 psi (GNU units).
 		{calc.CautionSurgeColumnUnknown, []calc.Figure{calc.Fig(2.2e6, calc.Pressure)}, true,
-			"the static pressure at the valve is not known: unless it is above 319.1 psi gauge (Joukowsky's rise plus the vapour pressure), the low swing after the closure reaches the vapour pressure and the liquid column may part"},
+			"the static pressure at the valve is not known: unless it is above 319.1 psig (Joukowsky's rise plus the vapour pressure), the low swing after the closure reaches the vapour pressure and the liquid column may part"},
 	} {
 		if got := WarningText(c.c, c.figs, c.us); got != c.want {
 			t.Errorf("%v (us %v):\n got %q\nwant %q", c.c, c.us, got, c.want)

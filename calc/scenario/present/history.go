@@ -38,12 +38,6 @@ func historyCard(h scenario.History, n int, us bool) Card {
 	ch := &Chart{ID: id + "-chart", Kind: "history", Title: "Pump " + h.Tag + " over time",
 		XLabel: "days since " + first.Format("2 Jan 2006"), YLabel: "head H (" + hu.Symbol + ")",
 		Y2Label: "efficiency η (" + pct.Symbol + ")", Y3Label: "energy (" + eu.Symbol + ")"}
-	// The axes span at least a tenth of the largest head, ten points of
-	// efficiency and a fifth of the largest energy per volume (our own
-	// choice): wide enough that a field reading's scatter (a percent or
-	// two of head, a point or two of efficiency, common practice) stays
-	// small, narrow enough that a pump's wear shows.
-	ch.Y2Span = pct.FromSI(0.10)
 	var head, pump, wire, energy Curve
 	head.Role, head.Name = RoleHistoryHead, "head"
 	pump.Role, pump.Name = RoleHistoryPumpEff, "pump alone"
@@ -97,6 +91,12 @@ func historyCard(h scenario.History, n int, us bool) Card {
 			ch.Curves = append(ch.Curves, cu)
 		}
 	}
+	// The axes span at least a tenth of the largest head, ten points of
+	// efficiency and a fifth of the largest energy per volume (our own
+	// choice): wide enough that a field reading's scatter (a percent or
+	// two of head, a point or two of efficiency, common practice) stays
+	// small, narrow enough that a pump's wear shows.
+	ch.Y2Span = pct.FromSI(0.10)
 	if len(head.Y) > 0 {
 		ch.YSpan = slices.Max(head.Y) / 10
 	}
