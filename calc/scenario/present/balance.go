@@ -145,7 +145,7 @@ func (b *builder) pointCard(n, role string) Card {
 		if ps.HasRegime {
 			line += " · Re " + plainNumber(ps.Reynolds) + " (" + ps.Regime.String() + ")"
 		}
-		line += " · α " + calc.FormatNumber(ps.Alpha, 2) + " · total head " + b.head(ps.TotalHead)
+		line += " · α " + number(ps.Alpha, 2) + " · total head " + b.head(ps.TotalHead)
 	}
 	return Card{ID: "point-" + n, Class: "point", Num: n, Title: "Point " + n + " (" + role + ")", Blocks: []Block{
 		fields(b.quantity(p("p"), "", "")),

@@ -107,17 +107,20 @@ func (b *builder) solve() string {
 	return calc.SolvePumpHead.String()
 }
 
-// Figures in the sheet's units.
+// Figures in the sheet's units, a negative one with the minus sign
+// (U+2212, minus) as the charts' ticks and the messages write it.
 
 // show writes an SI value in the display unit of its dimension.
-func (b *builder) show(v float64, dim calc.Dimension) string { return scenario.Show(v, dim, b.us) }
+func (b *builder) show(v float64, dim calc.Dimension) string {
+	return minus(scenario.Show(v, dim, b.us))
+}
 
 // head writes a head of the liquid (m or ft).
 func (b *builder) head(v float64) string { return b.show(v, calc.Length) }
 
 // param writes an SI value in a parameter's own display unit (mm or in for
 // diameters, L/s or gpm for flows).
-func (b *builder) param(p string, v float64) string { return scenario.ShowParam(p, v, b.us) }
+func (b *builder) param(p string, v float64) string { return minus(scenario.ShowParam(p, v, b.us)) }
 
 // gauge and absolute write a pressure with its reference: "430.0 kPa
 // gauge" or "62.37 psig".
@@ -126,13 +129,13 @@ func (b *builder) absolute(v float64) string { return b.pressure(v, true) }
 
 func (b *builder) pressure(v float64, abs bool) string {
 	if b.us {
-		t := calc.FormatValue(v, "psi", 4)
+		t := minus(calc.FormatValue(v, "psi", 4))
 		if abs {
 			return t + "a"
 		}
 		return t + "g"
 	}
-	t := calc.FormatValue(v, "kPa", 4)
+	t := minus(calc.FormatValue(v, "kPa", 4))
 	if abs {
 		return t + " absolute"
 	}
@@ -142,10 +145,16 @@ func (b *builder) pressure(v float64, abs bool) string {
 // figure writes a figure of a message: pressures as differences or as the
 // message says (gauge or absolute is in its words), the rest in display
 // units.
-func (b *builder) figure(f calc.Figure) string { return minus(b.show(f.Value, f.Dim)) }
+func (b *builder) figure(f calc.Figure) string { return b.show(f.Value, f.Dim) }
 
 // percent writes a share (0.76) as a percentage.
-func percent(v float64) string { return calc.FormatValue(v, "%", 4) }
+func percent(v float64) string { return minus(calc.FormatValue(v, "%", 4)) }
+
+// number writes a dimensionless figure to digits significant digits, a
+// negative one with the minus sign (U+2212) as every figure the sheet shows:
+// wider than the hyphen, so the sign reads at arm's length. Links, boxes and
+// the CSV keep the hyphen (calc.FormatNumber), which every parser reads.
+func number(x float64, digits int) string { return minus(calc.FormatNumber(x, digits)) }
 
 // plainNumber writes a dimensionless number for reading at a glance:
 // three significant digits, thousands grouped with narrow no-break spaces
@@ -155,7 +164,7 @@ func plainNumber(x float64) string {
 		return "—"
 	}
 	if math.Abs(x) < 1000 {
-		return calc.FormatNumber(x, 3)
+		return number(x, 3)
 	}
 	mag := math.Pow(10, math.Floor(math.Log10(math.Abs(x)))-2)
 	digits := strconv.FormatFloat(math.Abs(math.Round(x/mag)*mag), 'f', 0, 64)

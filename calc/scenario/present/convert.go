@@ -125,7 +125,7 @@ func (b *builder) convertCard() Card {
 	}
 	t := &Table{ID: "answer", Class: "conv"}
 	row := func(label, unit string, v float64) {
-		t.Rows = append(t.Rows, Row{Head: label, Cells: []Cell{{Text: calc.FormatValue(v, unit, 5)}}})
+		t.Rows = append(t.Rows, Row{Head: label, Cells: []Cell{{Text: minus(calc.FormatValue(v, unit, 5))}}})
 	}
 	// The units of each row, SI then US; "" leaves the row out.
 	units := func(si, us string) string {

@@ -38,7 +38,7 @@ func TestGlycolLiquidCard(t *testing.T) {
 	for _, c := range []struct {
 		query, box, name, freeze, share string
 	}{
-		{"liq=pg&gly=30%&t=7C&alt=100m", "gly", "propylene glycol 30 % by mass at 7.000 °C", "-12.79 °C", "30 % by mass = 29.2 % by volume"},
+		{"liq=pg&gly=30%&t=7C&alt=100m", "gly", "propylene glycol 30 % by mass at 7.000 °C", "−12.79 °C", "30 % by mass = 29.2 % by volume"},
 		{"units=us&liq=eg&glyv=30%&t=45F&alt=300ft", "glyv", "ethylene glycol 32.3 % by mass at 45.00 °F", "2.317 °F", "30 % by volume = 32.3 % by mass"},
 	} {
 		card, sh := glycolCard(t, c.query)
@@ -115,7 +115,7 @@ func TestGlycolReport(t *testing.T) {
 		}
 	}
 	all := strings.Join(got, " | ")
-	for _, want := range []string{"liquid: ethylene glycol 30 % by mass at 7.000 °C", "freezes at: -14.58 °C |",
+	for _, want := range []string{"liquid: ethylene glycol 30 % by mass at 7.000 °C", "freezes at: −14.58 °C |",
 		"glycol share: 30 % by mass = 27.8 % by volume", "vapour pressure: 0.8912 kPa absolute (Raoult's law)"} {
 		if !strings.Contains(all, want) {
 			t.Errorf("the report lacks %q: %s", want, all)

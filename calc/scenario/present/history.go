@@ -25,7 +25,7 @@ func HistoryCards(kept []scenario.KeptSheet, us bool) []Card {
 func historyCard(h scenario.History, n int, us bool) Card {
 	id := "history-" + strconv.Itoa(n)
 	c := Card{ID: id, Class: "history", Title: "History of pump " + h.Tag}
-	show := func(v float64, dim calc.Dimension) string { return scenario.Show(v, dim, us) }
+	show := func(v float64, dim calc.Dimension) string { return minus(scenario.Show(v, dim, us)) }
 	if len(h.Entries) == 0 {
 		c.Blocks = []Block{text("muted", "", "No sheet of this pump has a known edit time (each came from an older sheets file), so none can be dated.")}
 		return c
@@ -64,13 +64,13 @@ func historyCard(h scenario.History, n int, us bool) Card {
 			}
 			return s
 		}
-		flow := dash(e.Flow > 0, scenario.Show(e.Flow, calc.Flow, us))
+		flow := dash(e.Flow > 0, show(e.Flow, calc.Flow))
 		if e.AtDuty {
 			flow += ", duty"
 		}
 		cost := "—"
 		if e.Lost != nil {
-			cost = calc.FormatNumber(e.Lost.YearCost, 4)
+			cost = number(e.Lost.YearCost, 4)
 		}
 		title := e.Title
 		if title == "" {

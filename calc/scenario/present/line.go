@@ -275,9 +275,9 @@ func (b *builder) segmentTable() Block {
 	t := &Table{ID: "seg-table", Class: "grid figures", Head: cols}
 	cell := func(col int, text string) Cell { return Cell{Text: text, Label: cols[col]} }
 	for i, r := range l.Segments {
-		f := calc.FormatNumber(r.Friction, 4)
+		f := number(r.Friction, 4)
 		if r.FrictionLow != r.FrictionHigh {
-			f = calc.FormatNumber(r.FrictionLow, 4) + "–" + calc.FormatNumber(r.FrictionHigh, 4)
+			f = number(r.FrictionLow, 4) + "–" + number(r.FrictionHigh, 4)
 		}
 		t.Rows = append(t.Rows, Row{Head: "segment " + strconv.Itoa(i+1), Cells: []Cell{
 			cell(1, b.show(r.Velocity, calc.Velocity)),
@@ -285,7 +285,7 @@ func (b *builder) segmentTable() Block {
 			{Text: r.Regime.String(), Label: cols[3], Badge: "rg rg-" + r.Regime.String()},
 			cell(4, f),
 			cell(5, b.head(r.MajorLoss)),
-			cell(6, b.head(r.MinorLoss)+" ("+calc.FormatNumber(r.SumK, 3)+")"),
+			cell(6, b.head(r.MinorLoss)+" ("+number(r.SumK, 3)+")"),
 		}})
 		if changes {
 			last := &t.Rows[len(t.Rows)-1]
@@ -494,7 +494,7 @@ func (b *builder) fittings(p string) Block {
 		name := fittingName(fc.Key)
 		k := ""
 		if u, ok := used[fc.Key]; ok {
-			k = "K " + calc.FormatNumber(u.K, 3) + " each (" + u.Method
+			k = "K " + number(u.K, 3) + " each (" + u.Method
 			if u.Formula != "" && u.Method != "given" {
 				k += ", " + u.Formula
 			}

@@ -74,7 +74,7 @@ func (b *builder) flowFields() []Block {
 		if h.Cooling {
 			way = "cooling"
 		}
-		props := "ρ " + b.show(h.Props.Density, calc.Density) + ", cp " + calc.FormatNumber(h.Props.HeatCapacity/1000, 4) + " kJ/(kg·K) at " + b.show(h.Props.Temperature, calc.Temperature)
+		props := "ρ " + b.show(h.Props.Density, calc.Density) + ", cp " + number(h.Props.HeatCapacity/1000, 4) + " kJ/(kg·K) at " + b.show(h.Props.Temperature, calc.Temperature)
 		if h.FromLoad {
 			line = "flow for the " + way + " load: " + b.param("q", h.Flow) + " (" + props + ")"
 		} else {
@@ -125,7 +125,7 @@ func (b *builder) valveBlocks() []Block {
 		if v.CircuitTyped {
 			circuit = "the circuit typed"
 		}
-		val := "authority " + calc.FormatNumber(v.Authority.N, 2) + " (drop " + b.show(v.Drop, calc.Pressure) + " against " + b.show(v.CircuitDrop, calc.Pressure) + " of " + circuit +
+		val := "authority " + number(v.Authority.N, 2) + " (drop " + b.show(v.Drop, calc.Pressure) + " against " + b.show(v.CircuitDrop, calc.Pressure) + " of " + circuit +
 			"; a quarter is a usual minimum, a half a usual aim, from memory)"
 		switch c := v.Check; {
 		case c == nil && v.FL == 0:

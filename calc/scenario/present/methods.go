@@ -34,9 +34,9 @@ var (
 
 // methodsFor is the list with its figures in the sheet's units.
 func methodsFor(us bool) []Method {
-	margin := calc.FormatValue(calc.NPSHMarginMin, "m", 1)
+	margin := minus(calc.FormatValue(calc.NPSHMarginMin, "m", 1))
 	if us {
-		margin = calc.FormatValue(calc.NPSHMarginMin, "ft", 1)
+		margin = minus(calc.FormatValue(calc.NPSHMarginMin, "ft", 1))
 	}
 	mixTemp, mixFit, mixTop := "20 °C", "40 °C", "100 °C"
 	if us {

@@ -191,7 +191,7 @@ func (b *builder) npshBlocks() (level, facts, note Block) {
 		fs = append(fs,
 			Fact{ID: "npsh-r", Label: "NPSH required (" + from + ")", Value: b.head(n.Required)},
 			Fact{ID: "npsh-margin", Label: "margin", Value: b.head(n.Margin), Key: true},
-			Fact{ID: "npsh-ratio", Label: "ratio available ÷ required (at least 1.1, ANSI/HI 9.6.1, from memory)", Value: calc.FormatNumber(n.Ratio, 3)},
+			Fact{ID: "npsh-ratio", Label: "ratio available ÷ required (at least 1.1, ANSI/HI 9.6.1, from memory)", Value: number(n.Ratio, 3)},
 		)
 	}
 	return level, Block{Kind: BlockFacts, ID: "npsh-facts", Class: "facts", Facts: fs}, text("note-text", "npsh-note", b.caution(n.Note))
@@ -642,7 +642,7 @@ func (b *builder) fieldFacts() []Fact {
 		out = append(out,
 			Fact{Label: "data-sheet head at this flow", Value: b.head(f.CurveHead)},
 			Fact{ID: "field-dev", Label: "below (−) or above the data sheet",
-				Value: b.head(f.Deviation) + " (" + calc.FormatNumber(f.DeviationPct, 3) + " %)"},
+				Value: b.head(f.Deviation) + " (" + number(f.DeviationPct, 3) + " %)"},
 		)
 		if f.CurveEfficiency > 0 {
 			out = append(out, Fact{Label: "data-sheet pump efficiency here (pump alone)", Value: percent(f.CurveEfficiency)})
@@ -666,9 +666,9 @@ func (b *builder) fieldFacts() []Fact {
 // "−5.72".
 func signed(v float64) string {
 	if v > 0 {
-		return "+" + calc.FormatNumber(v, 3)
+		return "+" + number(v, 3)
 	}
-	return calc.FormatNumber(v, 3)
+	return number(v, 3)
 }
 
 // energyCard is the energy used per volume pumped and its yearly cost.

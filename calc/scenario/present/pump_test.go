@@ -101,7 +101,7 @@ func walk(v reflect.Value, name string, f func(name, s string)) {
 	switch v.Kind() {
 	case reflect.String:
 		f(name, v.String())
-	case reflect.Pointer:
+	case reflect.Pointer, reflect.Interface:
 		if !v.IsNil() {
 			walk(v.Elem(), name, f)
 		}

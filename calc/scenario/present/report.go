@@ -228,7 +228,7 @@ func (b *builder) reportResults() Card {
 					st = "not choked (IEC 60534-2-1)"
 				}
 			}
-			answer.Facts = append(answer.Facts, Fact{Label: "valve " + v.Name, Value: "authority " + calc.FormatNumber(v.Authority.N, 2) + " · " + st,
+			answer.Facts = append(answer.Facts, Fact{Label: "valve " + v.Name, Value: "authority " + number(v.Authority.N, 2) + " · " + st,
 				Key: v.Check != nil && (v.Check.Choked || v.Check.Cavitation)})
 		}
 		t := &Table{ID: "report-budget", Class: "grid", Head: []string{"term", "side", "head", "as pressure"}}
@@ -360,7 +360,7 @@ func (b *builder) fittingKTable() Block {
 			t.Rows = append(t.Rows, Row{Head: w.name, Cells: []Cell{
 				{Text: fittingName(k.Key), Label: cols[1]},
 				{Text: strconv.Itoa(k.Count), Label: cols[2]},
-				{Text: calc.FormatNumber(k.K, 3), Label: cols[3]},
+				{Text: number(k.K, 3), Label: cols[3]},
 				{Text: method, Label: cols[4]},
 			}})
 		}

@@ -189,14 +189,19 @@ func TestReportResultsFromEvaluate(t *testing.T) {
 func TestReportPressureAnswer(t *testing.T) {
 	// Source: a solved pressure reads as its point's gauge reads it, the
 	// other reference beside it (scenario.ShowSolved's main and alt, in
-	// the wording of b.gauge and b.absolute).
+	// the wording of b.gauge and b.absolute): below the site's pressure,
+	// the gauge figure carries the minus sign (U+2212) every shown figure
+	// does.
 	sc := with(t, scenario.Demo(), "solve", "p2", "p2", "", "hp", "40m")
 	sh, r := sheetOf(t, sc, "report")
 	if r.Balance == nil {
 		t.Fatalf("no balance: %v", r.Errors)
 	}
 	got := figure(t, sh.Cards, "report-answer")
-	gauge := calc.FormatValue(r.Balance.Value-r.SitePressure, "kPa", 4) + " gauge"
+	if r.Balance.Value >= r.SitePressure {
+		t.Fatalf("p2 solved at %g Pa absolute, not below the site's %g Pa: the case no longer shows a negative gauge figure", r.Balance.Value, r.SitePressure)
+	}
+	gauge := "−" + calc.FormatValue(r.SitePressure-r.Balance.Value, "kPa", 4) + " gauge"
 	abs := calc.FormatValue(r.Balance.Value, "kPa", 4) + " absolute"
 	if want := gauge + " (" + abs + ")"; got != want {
 		t.Errorf("report-answer %q, want %q", got, want)

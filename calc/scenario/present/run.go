@@ -140,13 +140,13 @@ func (b *builder) runCard(seg int) Card {
 	dp := r.PressureDrop
 	a := &Answer{Label: "Lost at " + b.param("q", r.Flow) + ": head, and pressure drop",
 		Values: []Value{{"answer-value", b.head(r.TotalLoss)}, {"run-dp", b.show(dp, calc.Pressure)}},
-		Subs:   []string{"pipe friction " + b.head(r.MajorLoss) + " + fittings " + b.head(r.MinorLoss) + " (ΣK " + calc.FormatNumber(r.SumK, 3) + ")"}}
+		Subs:   []string{"pipe friction " + b.head(r.MajorLoss) + " + fittings " + b.head(r.MinorLoss) + " (ΣK " + number(r.SumK, 3) + ")"}}
 	if r.TotalLossLow != r.TotalLossHigh {
 		a.Subs = append(a.Subs, "transitional flow: between "+b.head(r.TotalLossLow)+" and "+b.head(r.TotalLossHigh)+"; the larger is shown")
 	}
-	friction := calc.FormatNumber(r.Friction, 4)
+	friction := number(r.Friction, 4)
 	if r.FrictionLow != r.FrictionHigh {
-		friction += " (between " + calc.FormatNumber(r.FrictionLow, 4) + " and " + calc.FormatNumber(r.FrictionHigh, 4) + ")"
+		friction += " (between " + number(r.FrictionLow, 4) + " and " + number(r.FrictionHigh, 4) + ")"
 	}
 	pipe := b.param("d", r.Diameter) + " inside"
 	if r.Pipe != nil {
@@ -161,7 +161,7 @@ func (b *builder) runCard(seg int) Card {
 		{ID: "run-v", Label: "mean velocity", Value: b.show(r.Velocity, calc.Velocity)},
 		{ID: "run-re", Label: "Reynolds number and regime", Value: plainNumber(r.Reynolds) + ", " + r.Regime.String() + " flow"},
 		{Label: "Darcy friction factor f", Value: friction},
-		{Label: "kinetic-energy factor α", Value: calc.FormatNumber(r.Alpha, 3)},
+		{Label: "kinetic-energy factor α", Value: number(r.Alpha, 3)},
 		{Label: "pipe", Value: pipe},
 		{Label: "roughness", Value: rough},
 		{Label: "length", Value: b.param("l", r.Length)},
@@ -178,7 +178,7 @@ func perHundred(us bool) string { return "per " + strings.TrimSuffix(hundred(us)
 
 // short writes a default for a hint: two significant digits.
 func (b *builder) short(v float64, dim calc.Dimension) string {
-	return calc.FormatValue(v, calc.DefaultUnit(dim, b.us).Symbol, 2)
+	return minus(calc.FormatValue(v, calc.DefaultUnit(dim, b.us).Symbol, 2))
 }
 
 // perHundred writes a friction gradient (m per m) as the head lost over
@@ -210,7 +210,7 @@ func (b *builder) runKTable(r *scenario.RunResult) Block {
 	for _, k := range r.Fittings {
 		t.Rows = append(t.Rows, Row{Head: fittingName(k.Key), Cells: []Cell{
 			{Text: strconv.Itoa(k.Count), Label: cols[1]},
-			{Text: calc.FormatNumber(k.K, 3), Label: cols[2]},
+			{Text: number(k.K, 3), Label: cols[2]},
 			{Text: b.head(k.Head), Label: cols[3]},
 		}})
 	}
@@ -223,7 +223,7 @@ func (b *builder) runKTable(r *scenario.RunResult) Block {
 func (b *builder) sizingCard() Card {
 	def := calc.DefaultSizingLimitsFor(b.us)
 	per := perHundred(b.us)
-	grad := b.plain("grad", "", "("+per+"; blank: "+calc.FormatNumber(def.GradientMax*100, 1)+", common practice)", true)
+	grad := b.plain("grad", "", "("+per+"; blank: "+number(def.GradientMax*100, 1)+", common practice)", true)
 	lo := b.quantity("vlo", "", "(blank: "+limit(b.short(def.VelocityLow, calc.Velocity))+", common practice)")
 	hi := b.quantity("vhi", "", "(blank: "+limit(b.short(def.VelocityHigh, calc.Velocity))+")")
 	rv := b.r.RunView
@@ -249,7 +249,7 @@ func (b *builder) sizingCard() Card {
 	c.Title = "Sizes compared at " + b.param("q", rv.Run.Flow)
 	return appendBlocks(c, text("computed", "sizing-what", b.sizingNote(rv, sz)), b.sizingTable(rv, sz),
 		text("note-text", "sizing-marks", "✓ fits: within the velocity band "+b.short(sz.Limits.VelocityLow, calc.Velocity)+" to "+
-			b.short(sz.Limits.VelocityHigh, calc.Velocity)+" and a pipe friction of at most "+calc.FormatNumber(sz.Limits.GradientMax*100, 3)+
+			b.short(sz.Limits.VelocityHigh, calc.Velocity)+" and a pipe friction of at most "+number(sz.Limits.GradientMax*100, 3)+
 			" "+per+" (defaults: common practice for water lines, from memory; set your own above). "+
 			"A size that fits both is a starting point: cost, surge, standard stock and local codes decide."))
 }
@@ -352,6 +352,6 @@ func sizingMethod(us bool) string {
 	v := calc.DefaultUnit(calc.Velocity, us).Symbol
 	per := strings.TrimSuffix(hundred(us), " of pipe")
 	return "the run's length, roughness, fittings and friction method kept and evaluated in each size of one pipe class, the fittings' K worked out for each size; " +
-		"sizes marked inside a velocity band (default " + limit(calc.FormatValue(lim.VelocityLow, v, 2)) + " to " + limit(calc.FormatValue(lim.VelocityHigh, v, 2)) +
-		") and under a pipe-friction limit (default " + calc.FormatNumber(lim.GradientMax*100, 1) + " per " + per + "); the defaults are common practice for water lines, from memory, and may be set per sheet."
+		"sizes marked inside a velocity band (default " + limit(minus(calc.FormatValue(lim.VelocityLow, v, 2))) + " to " + limit(minus(calc.FormatValue(lim.VelocityHigh, v, 2))) +
+		") and under a pipe-friction limit (default " + number(lim.GradientMax*100, 1) + " per " + per + "); the defaults are common practice for water lines, from memory, and may be set per sheet."
 }

@@ -2,6 +2,7 @@ package present
 
 import (
 	"strconv"
+	"strings"
 
 	"fieldhead/calc"
 	"fieldhead/calc/scenario"
@@ -46,27 +47,31 @@ func (b *builder) testTable() Block {
 		return Block{Kind: BlockEmpty}
 	}
 	tb := &Table{ID: "test-table", Class: "grid figures", Head: []string{"reading", "flow", "pump head", "pump efficiency", "wire-to-water", "head vs data sheet"}}
+	// With bands, a figure's band may go under it ("banded" lets the
+	// cells wrap) where the six columns do not fit on one line (a tablet
+	// held upright): each figure and its unit, and each band, stay whole.
+	keep := func(s string) string { return s }
+	band := func(v, u string) string { return v }
+	if t.Bands {
+		tb.Class += " banded"
+		keep = func(s string) string { return strings.ReplaceAll(s, " ", "\u00a0") }
+		band = func(v, u string) string { return keep(v) + " " + keep("± "+u) }
+	}
 	for i, p := range t.Points {
 		k := strconv.Itoa(t.Reading[i])
 		c := p.Check
-		head := b.head(c.Head)
-		if t.Bands {
-			head += " ± " + b.head(p.Bands.Head.U)
-		}
+		head := band(b.head(c.Head), b.head(p.Bands.Head.U))
 		eff, wire, dev := "—", "—", "—"
 		if c.PumpEfficiency > 0 {
-			eff = percent(c.PumpEfficiency)
-			if t.Bands {
-				eff += " ± " + percent(p.Bands.Pump.U)
-			}
+			eff = band(percent(c.PumpEfficiency), percent(p.Bands.Pump.U))
 		}
 		if c.Efficiency > 0 {
-			wire = percent(c.Efficiency)
+			wire = keep(percent(c.Efficiency))
 		}
 		if c.HasCurve {
-			dev = b.head(c.Deviation)
+			dev = keep(b.head(c.Deviation))
 		}
-		cells := []Cell{{Text: b.param("qm", c.Q), Label: "flow"}, {ID: "test-head-" + k, Text: head, Label: "pump head"},
+		cells := []Cell{{Text: keep(b.param("qm", c.Q)), Label: "flow"}, {ID: "test-head-" + k, Text: head, Label: "pump head"},
 			{Text: eff, Label: "pump efficiency"}, {Text: wire, Label: "wire-to-water"}, {Text: dev, Label: "head vs data sheet"}}
 		tb.Rows = append(tb.Rows, Row{Head: "reading " + k, Cells: cells})
 	}
@@ -85,11 +90,11 @@ func (b *builder) testFacts() Block {
 	if t.HasSheet {
 		h := t.Sheet.Head
 		fs = append(fs, Fact{ID: "test-short-head", Key: true, Label: "largest head shortfall from the data sheet, " + b.param("qm", t.Sheet.From) + " to " + b.param("qm", t.Sheet.To),
-			Value: b.head(h.Short) + " (" + calc.FormatNumber(h.Share*100, 3) + " %) at " + b.param("qm", h.Flow) + b.band(h.U, t.Bands, b.head)})
+			Value: b.head(h.Short) + " (" + number(h.Share*100, 3) + " %) at " + b.param("qm", h.Flow) + b.band(h.U, t.Bands, b.head)})
 		if t.Sheet.HasEff {
 			e := t.Sheet.Eff
 			fs = append(fs, Fact{ID: "test-short-eff", Key: true, Label: "largest shortfall of the pump's own efficiency",
-				Value: calc.FormatNumber(e.Short*100, 3) + " percentage points at " + b.param("qm", e.Flow) + " (" + percent(e.Tested) + " against " + percent(e.Sheet) + ")" + b.band(e.U, t.Bands, percent)})
+				Value: number(e.Short*100, 3) + " percentage points at " + b.param("qm", e.Flow) + " (" + percent(e.Tested) + " against " + percent(e.Sheet) + ")" + b.band(e.U, t.Bands, percent)})
 		}
 	}
 	if t.Bands {
