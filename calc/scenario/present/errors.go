@@ -1192,7 +1192,7 @@ var cautionWords = [...]func(c cautioning) string{
 		return "the absolute pressure at this point (" + c.abs(0) + ") is at or below the liquid's vapour pressure (" + c.f(1) + "): expect cavitation or flashing"
 	},
 	calc.CautionPointVelocityHigh: func(c cautioning) string {
-		return "a velocity of " + c.f(0) + " is unusually high for a liquid line (common practice keeps below about " + c.f(1) + "): erosion, noise and water-hammer risk"
+		return "a velocity of " + c.f(0) + " is unusually high for a liquid line (common practice keeps below about " + c.rough(1, "") + "): erosion, noise and water-hammer risk"
 	},
 	calc.CautionNPSHNone: func(c cautioning) string {
 		return "NPSH available is " + c.f(0) + ", not above zero: the liquid boils at the pump inlet whatever the pump"

@@ -220,12 +220,14 @@ func TestCautionWords(t *testing.T) {
 			"the wire-to-water efficiency is only 20 % (below 30 %): look for wear, a throttled or recirculating pump, a motor problem, or a reading error"},
 		// A rule of thumb's limits to two significant figures, in the
 		// sheet's units (GNU units: 0.3 m/s = 0.98425197 ft/s, 3 m/s =
-		// 9.8425197 ft/s; 0.0117 m = 0.46062992 in, 0.598 m = 23.543307
+		// 9.8425197 ft/s, 4 m/s = 13.12336 ft/s; 0.0117 m = 0.46062992 in, 0.598 m = 23.543307
 		// in, 0.05 m = 1.9685039 in, 1.2 m = 47.244094 in).
 		{calc.CautionVelocityHigh, []calc.Figure{calc.Fig(4, calc.Velocity), calc.Fig(0.3, calc.Velocity), calc.Fig(3, calc.Velocity)}, false,
 			"velocity 4.000 m/s is high for a liquid line (usual range about 0.3 m/s–3 m/s, common practice)"},
 		{calc.CautionVelocityLow, []calc.Figure{calc.Fig(0.1, calc.Velocity), calc.Fig(0.3, calc.Velocity), calc.Fig(3, calc.Velocity)}, true,
 			"velocity 0.3281 ft/s is low for a liquid line (usual range about 0.98 ft/s–9.8 ft/s, common practice)"},
+		{calc.CautionPointVelocityHigh, []calc.Figure{calc.Fig(4, calc.Velocity), calc.Fig(3, calc.Velocity)}, true,
+			"a velocity of 13.12 ft/s is unusually high for a liquid line (common practice keeps below about 9.8 ft/s): erosion, noise and water-hammer risk"},
 		{calc.CautionFittingSizes, []calc.Figure{calc.Fig(1.2, calc.Length), calc.Fig(0.0117, calc.Length), calc.Fig(0.598, calc.Length)}, false,
 			"inside diameter 1200 mm is outside the sizes the fitting methods were published for (about 12 mm–600 mm): their K values are extrapolated"},
 		{calc.CautionFittingSizes, []calc.Figure{calc.Fig(1.2, calc.Length), calc.Fig(0.0117, calc.Length), calc.Fig(0.598, calc.Length)}, true,
