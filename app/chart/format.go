@@ -26,8 +26,8 @@ func appendNum(b []byte, v float64) []byte {
 
 // tickLabel formats tick value v for an axis whose ticks are step apart and
 // whose largest magnitude is big: plain decimals with as many places as the
-// step needs (Heckbert's rule), or m×10ⁿ for very large or small numbers.
-// Negative numbers get a true minus sign.
+// step needs (Heckbert's rule, one more for a step of 2.5 × 10^k), or m×10ⁿ
+// for very large or small numbers. Negative numbers get a true minus sign.
 func tickLabel(v, step, big float64) string {
 	if v == 0 {
 		return "0"
@@ -38,6 +38,10 @@ func tickLabel(v, step, big float64) string {
 	places := 0
 	if step > 0 {
 		places = int(math.Max(-math.Floor(math.Log10(step)+1e-9), 0))
+		// A step of 2.5 × 10^k needs one place more (0, 2.5, 5, 7.5).
+		if m := step * math.Pow(10, float64(places)); places < 6 && math.Abs(m-math.Round(m)) > 1e-6*m {
+			places++
+		}
 	} else {
 		places = 3
 	}

@@ -313,8 +313,8 @@ func headroom(lo, hi float64, fixLo, fixHi bool) (float64, float64, bool, bool) 
 func (r *renderer) layoutX(left, right float64, y2 bool) {
 	for pass := 0; pass < 2; pass++ {
 		// Of the tick counts whose labels do not touch, the one whose
-		// rounded limits waste the least width (a phone's 0–1500 for data
-		// to 1110 becomes 0–1200); more ticks on a tie.
+		// rounded limits waste the least width (data to 1110: 0–1200 where
+		// seven labels fit, else 0–1500, not 0–2000); more ticks on a tie.
 		var best scale
 		for n := int((right-left)/70) + 1; n >= 2; n-- {
 			r.x = niceScale(r.xlo, r.xhi, r.xfLo, r.xfHi, n)
@@ -324,6 +324,23 @@ func (r *renderer) layoutX(left, right float64, y2 bool) {
 			}
 			if best.ticks == nil || r.x.hi-r.x.lo < best.hi-best.lo {
 				best = r.x
+			}
+		}
+		// The ends alone (0 and 50 for data to 45 on a phone) say little:
+		// a step of 2.5 × 10^k, which Heckbert's 1-2-5 leaves out, may
+		// give ticks between them (0, 25, 50) that fit.
+		if len(best.ticks) == 2 && best.step > 0 {
+			e := math.Floor(math.Log10(best.step))
+			for _, d := range []float64{2.5 * math.Pow(10, e), 2.5 * math.Pow(10, e-1)} {
+				if d >= best.step {
+					continue
+				}
+				r.x = stepScale(r.xlo, r.xhi, r.xfLo, r.xfHi, d)
+				r.x.p0, r.x.p1 = left, right
+				if n := len(r.x.ticks); r.x.step > 0 && n > 2 && n <= int((right-left)/100)+3 && !r.xCrowded() {
+					best = r.x
+					break
+				}
 			}
 		}
 		r.x = best

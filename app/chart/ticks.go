@@ -127,9 +127,14 @@ func niceScale(lo, hi float64, fixLo, fixHi bool, n int) scale {
 	if n < 2 {
 		n = 2
 	}
+	return stepScale(lo, hi, fixLo, fixHi, niceNum((hi-lo)/float64(n-1), true))
+}
+
+// stepScale lays out data in [lo, hi] with ticks d apart. Unfixed ends
+// are extended to whole steps.
+func stepScale(lo, hi float64, fixLo, fixHi bool, d float64) scale {
 	s := scale{lo: lo, hi: hi}
 	span := hi - lo
-	d := niceNum(span/float64(n-1), true)
 	if !finite(span) || !(d > 0) || !finite(d) {
 		// Beyond float range: fall back to the two ends.
 		s.ticks = []float64{lo, hi}

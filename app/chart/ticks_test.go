@@ -2,6 +2,7 @@ package chart
 
 import (
 	"math"
+	"slices"
 	"testing"
 )
 
@@ -155,6 +156,9 @@ func TestTickLabel(t *testing.T) {
 		{1.2e6, 2e5, 2e6, "1.2×10⁶"},
 		{-5e-4, 1e-4, 1e-3 / 2, "−5×10⁻⁴"},
 		{0.0015, 0.0005, 0.002, "0.0015"},
+		{7.5, 2.5, 10, "7.5"},
+		{0.75, 0.25, 1, "0.75"},
+		{1250, 250, 1250, "1250"},
 	}
 	for _, c := range cases {
 		if got := tickLabel(c.v, c.step, c.big); got != c.want {
@@ -200,6 +204,33 @@ func TestAtLeast(t *testing.T) {
 		lo, hi := atLeast(c.lo, c.hi, c.fixLo, c.fixHi, c.span)
 		if math.Abs(lo-c.wantLo) > 1e-9 || math.Abs(hi-c.wantHi) > 1e-9 {
 			t.Errorf("%s: %v..%v, want %v..%v", c.name, lo, hi, c.wantLo, c.wantHi)
+		}
+	}
+}
+
+func TestXAxisFitsItsWidth(t *testing.T) {
+	// Design rule of this package (layoutX): of the 1-2-5 steps whose
+	// labels fit, the x axis takes the one that wastes the least width;
+	// where that leaves the ends alone, a step of 2.5 × 10^k that fits adds
+	// ticks between them. 70 L/s is 1109.5 gpm (GNU units), the demo pump's
+	// last data-sheet flow.
+	cases := []struct {
+		width   int
+		hi      float64
+		want    []float64
+		comment string
+	}{
+		{720, 1109.5, []float64{0, 200, 400, 600, 800, 1000, 1200}, "a tablet: seven labels fit"},
+		{380, 1109.5, []float64{0, 500, 1000, 1500}, "a 390 px phone: four labels"},
+		{720, 70, []float64{0, 10, 20, 30, 40, 50, 60, 70}, "no waste at all"},
+		{340, 45, []float64{0, 25, 50}, "a 360 px phone: not the ends 0 and 50 alone"},
+		{380, 45, []float64{0, 10, 20, 30, 40, 50}, "a 390 px phone: six labels fit"},
+	}
+	for _, c := range cases {
+		r := newRenderer(&Chart{Width: c.width, Series: []Series{{Name: "a", X: []float64{0, c.hi}, Y: []float64{10, 200}}}})
+		r.render(nil)
+		if !slices.Equal(r.x.ticks, c.want) {
+			t.Errorf("width %d, data to %v (%s): ticks %v, want %v", c.width, c.hi, c.comment, r.x.ticks, c.want)
 		}
 	}
 }
