@@ -150,6 +150,11 @@ func (b *builder) figure(f calc.Figure) string { return b.show(f.Value, f.Dim) }
 // percent writes a share (0.76) as a percentage.
 func percent(v float64) string { return minus(calc.FormatValue(v, "%", 4)) }
 
+// whole joins a figure's words with no-break spaces (U+00A0) where a line
+// must not break inside it: "± 1.490 m" stays together, never "± 1.490"
+// with the "m)" alone on the next line of a large fact.
+func whole(s string) string { return strings.ReplaceAll(s, " ", "\u00a0") }
+
 // number writes a dimensionless figure to digits significant digits, a
 // negative one with the minus sign (U+2212) as every figure the sheet shows:
 // wider than the hyphen, so the sign reads at arm's length. Links, boxes and

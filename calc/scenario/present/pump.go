@@ -569,14 +569,14 @@ func (b *builder) bandBlock() Block {
 		return ""
 	}
 	fs := []Fact{
-		{ID: "band-head", Label: "pump head", Value: b.head(f.Head) + " ± " + b.head(u.Head.U) + most(u.Head), Key: true},
-		{ID: "band-power", Label: "hydraulic power", Value: b.show(f.HydraulicPower, calc.Power) + " ± " + b.show(u.Power.U, calc.Power) + most(u.Power)},
+		{ID: "band-head", Label: "pump head", Value: b.head(f.Head) + " " + whole("± "+b.head(u.Head.U)) + most(u.Head), Key: true},
+		{ID: "band-power", Label: "hydraulic power", Value: b.show(f.HydraulicPower, calc.Power) + " " + whole("± "+b.show(u.Power.U, calc.Power)) + most(u.Power)},
 	}
 	if f.Efficiency > 0 {
-		fs = append(fs, Fact{ID: "band-wire", Label: "wire-to-water efficiency", Value: percent(f.Efficiency) + " ± " + percent(u.Wire.U) + most(u.Wire)})
+		fs = append(fs, Fact{ID: "band-wire", Label: "wire-to-water efficiency", Value: percent(f.Efficiency) + " " + whole("± "+percent(u.Wire.U)) + most(u.Wire)})
 	}
 	if f.PumpEfficiency > 0 {
-		fs = append(fs, Fact{ID: "band-pump", Label: "efficiency of the pump alone", Value: percent(f.PumpEfficiency) + " ± " + percent(u.Pump.U) + most(u.Pump), Key: true})
+		fs = append(fs, Fact{ID: "band-pump", Label: "efficiency of the pump alone", Value: percent(f.PumpEfficiency) + " " + whole("± "+percent(u.Pump.U)) + most(u.Pump), Key: true})
 	}
 	fs = append(fs, Fact{Label: "how the bands are found", Value: "each accuracy taken as a limit (±); the limits added in quadrature, first order (the GUM's law of propagation); density, pipe sizes and motor efficiency taken as exact"})
 	return Block{Kind: BlockFacts, ID: "field-bands", Class: "facts", Facts: fs}

@@ -56,11 +56,14 @@ func TestPumpTestWording(t *testing.T) {
 			}
 			us := r.US
 			show := func(v float64, d calc.Dimension) string { return scenario.Show(v, d, us) }
+			// A band is one unbreakable piece ("± 1.684 m" with no-break
+			// spaces), so that its unit never stands alone on a line.
+			pm := func(s string) string { return " " + strings.ReplaceAll("± "+s, " ", "\u00a0") }
 			for id, want := range map[string]string{
-				"band-head":     show(f.Head, calc.Length) + " ± " + show(u.Head.U, calc.Length),
-				"band-power":    show(f.HydraulicPower, calc.Power) + " ± " + show(u.Power.U, calc.Power),
-				"band-wire":     percent(f.Efficiency) + " ± " + percent(u.Wire.U),
-				"band-pump":     percent(f.PumpEfficiency) + " ± " + percent(u.Pump.U),
+				"band-head":     show(f.Head, calc.Length) + pm(show(u.Head.U, calc.Length)),
+				"band-power":    show(f.HydraulicPower, calc.Power) + pm(show(u.Power.U, calc.Power)),
+				"band-wire":     percent(f.Efficiency) + pm(percent(u.Wire.U)),
+				"band-pump":     percent(f.PumpEfficiency) + pm(percent(u.Pump.U)),
 				"energy-vol":    show(r.Energy.PerVolume, calc.SpecificEnergy),
 				"energy-head":   show(r.Energy.PerVolumeHead, calc.SpecificEnergyHead),
 				"speed-for":     percent(r.Pump.SpeedFor.Ratio),

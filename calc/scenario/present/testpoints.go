@@ -2,7 +2,6 @@ package present
 
 import (
 	"strconv"
-	"strings"
 
 	"fieldhead/calc"
 	"fieldhead/calc/scenario"
@@ -54,8 +53,8 @@ func (b *builder) testTable() Block {
 	band := func(v, u string) string { return v }
 	if t.Bands {
 		tb.Class += " banded"
-		keep = func(s string) string { return strings.ReplaceAll(s, " ", "\u00a0") }
-		band = func(v, u string) string { return keep(v) + " " + keep("± "+u) }
+		keep = whole
+		band = func(v, u string) string { return whole(v) + " " + whole("± "+u) }
 	}
 	for i, p := range t.Points {
 		k := strconv.Itoa(t.Reading[i])
@@ -108,7 +107,7 @@ func (b *builder) band(u float64, has bool, show func(float64) string) string {
 	if !has {
 		return ""
 	}
-	return " (tested value ± " + show(u) + ")"
+	return " (tested value " + whole("± "+show(u)) + ")"
 }
 
 // guaranteeLevel is the verdict by the guarantee point's badge.
@@ -167,7 +166,7 @@ func (b *builder) guaranteeFacts() Block {
 	switch e.Status {
 	case calc.EffRead:
 		fs = append(fs, Fact{ID: "guarantee-eff", Key: true, Label: "pump efficiency where the tested curve meets the line from the origin through the guarantee point (" + b.param("qg", e.Flow) + ", " + b.head(e.Head) + ")",
-			Value: percent(e.Value) + " ± " + percent(e.U) + ", at least " + percent(e.Judgement.Low) + " allowed: " + verdictWord(e.Judgement.Verdict)})
+			Value: percent(e.Value) + " " + whole("± "+percent(e.U)) + ", at least " + percent(e.Judgement.Low) + " allowed: " + verdictWord(e.Judgement.Verdict)})
 	case calc.EffNotGuaranteed:
 		fs = append(fs, Fact{Label: "pump efficiency", Value: "not guaranteed (none typed, none on the data sheet)"})
 	case calc.EffNoCurve:
