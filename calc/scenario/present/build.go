@@ -150,15 +150,24 @@ func (b *builder) figure(f calc.Figure) string { return b.show(f.Value, f.Dim) }
 // percent writes a share (0.76) as a percentage.
 func percent(v float64) string { return minus(calc.FormatValue(v, "%", 4)) }
 
+// minus writes a negative figure with the minus sign (U+2212), as print
+// does, not the hyphen: "−43.37 m", "got −40 °C".
+func minus(s string) string {
+	if strings.HasPrefix(s, "-") {
+		return "−" + s[1:]
+	}
+	return s
+}
+
 // whole joins a figure's words with no-break spaces (U+00A0) where a line
 // must not break inside it: "± 1.490 m" stays together, never "± 1.490"
 // with the "m)" alone on the next line of a large fact.
 func whole(s string) string { return strings.ReplaceAll(s, " ", "\u00a0") }
 
-// number writes a dimensionless figure to digits significant digits, a
-// negative one with the minus sign (U+2212) as every figure the sheet shows:
-// wider than the hyphen, so the sign reads at arm's length. Links, boxes and
-// the CSV keep the hyphen (calc.FormatNumber), which every parser reads.
+// number writes a dimensionless figure to digits significant digits, with
+// the minus sign as every figure shown: wider than the hyphen, it reads at
+// arm's length. Links, boxes and the CSV keep the hyphen their parsers read
+// (calc.FormatNumber).
 func number(x float64, digits int) string { return minus(calc.FormatNumber(x, digits)) }
 
 // plainNumber writes a dimensionless number for reading at a glance:

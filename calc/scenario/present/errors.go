@@ -111,15 +111,6 @@ func (w wording) fig(f calc.Figure) string {
 	return minus(scenario.Show(f.Value, f.Dim, w.us))
 }
 
-// minus writes a negative figure of a message with the minus sign
-// (U+2212), as print does, not the hyphen: "got −40 °C".
-func minus(s string) string {
-	if strings.HasPrefix(s, "-") {
-		return "−" + s[1:]
-	}
-	return s
-}
-
 // own words a figure of the field fe is about in that field's own unit
 // (mm or in for a diameter, % for an efficiency).
 func (w wording) own(f calc.Figure) string {
