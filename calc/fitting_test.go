@@ -262,7 +262,7 @@ func TestDarbyBores(t *testing.T) {
 	if sch40 == nil {
 		t.Fatal("no schedule 40 class")
 	}
-	for _, r := range sch40.rows {
+	for _, r := range sch40.table() {
 		nps, _ := frNPSValue(r.size)
 		id := r.od - 2*r.wall
 		found := false

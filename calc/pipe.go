@@ -116,9 +116,10 @@ func frBuildClass(sch string) ([]PipeSize, []float64) {
 		if c.name != sch {
 			continue
 		}
-		out := make([]PipeSize, 0, len(c.rows))
-		nps := make([]float64, 0, len(c.rows))
-		for _, r := range c.rows {
+		rows := c.table()
+		out := make([]PipeSize, 0, len(rows))
+		nps := make([]float64, 0, len(rows))
+		for _, r := range rows {
 			size, _ := frNPSValue(r.size)
 			od, wall := r.od, r.wall
 			if c.inch {

@@ -24,8 +24,46 @@ type frClass struct {
 	idRound  float64 // ID rounded to this many mm (0: not rounded)
 	memo     bool    // the rows were recalled without the standard at hand
 	standard string  // e.g. "ASME B36.10M"
-	rows     []frRow
 	lining   float64 // mm of cement-mortar lining on each side (ductile iron)
+	// The rows, built on first use by table from constants the linker
+	// lays out as data: the outside diameters (od) and walls of the
+	// steel, PVC and copper classes, the pipe series k of PE and the
+	// class k of ductile iron. Calls in the table itself were 16 KB of
+	// start-up code in the wasm.
+	od    frODs
+	walls []float64
+	k     float64
+}
+
+// frODs names a list of outside diameters of NPS ½–24 (a name, not the
+// slice: copying another variable's slice into the table is start-up code
+// again).
+type frODs uint8
+
+const (
+	frODB3610 frODs = iota // ASME B36.10M, mm
+	frODB3619              // ASME B36.19M, mm
+	frODIPS                // iron pipe size, inches
+)
+
+// table is the class's rows.
+func (c *frClass) table() []frRow {
+	switch c.cat {
+	case "copper":
+		return frCopper(c.walls...)
+	case "pe":
+		return frPE(c.k)
+	case "di":
+		return frDuctile(c.k)
+	}
+	od := frOD3610
+	switch c.od {
+	case frODB3619:
+		od = frOD3619
+	case frODIPS:
+		od = frIPS
+	}
+	return frSteel(od, c.walls...)
 }
 
 // Nominal sizes of ASME B36.10M / B36.19M used by several classes.
@@ -86,55 +124,55 @@ func frCopper(wall ...float64) []frRow {
 var frClasses = [...]frClass{
 	// ASME B36.10M, carbon steel; python3-fluids schedule_lookup '40',
 	// '80', 'STD', 'XS'.
-	{cat: "steel", name: "40", idRound: 0.01, standard: StandardB3610M, rows: frSteel(frOD3610,
-		2.77, 2.87, 3.38, 3.56, 3.68, 3.91, 5.16, 5.49, 5.74, 6.02, 6.55, 7.11, 8.18, 9.27, 10.31, 11.13, 12.70, 14.27, 15.09, 17.48)},
-	{cat: "steel", name: "80", idRound: 0.01, standard: StandardB3610M, rows: frSteel(frOD3610,
-		3.73, 3.91, 4.55, 4.85, 5.08, 5.54, 7.01, 7.62, 8.08, 8.56, 9.53, 10.97, 12.70, 15.09, 17.48, 19.05, 21.44, 23.83, 26.19, 30.96)},
-	{cat: "steel", name: "STD", idRound: 0.01, standard: StandardB3610M, rows: frSteel(frOD3610,
-		2.77, 2.87, 3.38, 3.56, 3.68, 3.91, 5.16, 5.49, 5.74, 6.02, 6.55, 7.11, 8.18, 9.27, 9.53, 9.53, 9.53, 9.53, 9.53, 9.53)},
-	{cat: "steel", name: "XS", idRound: 0.01, standard: StandardB3610M, rows: frSteel(frOD3610,
-		3.73, 3.91, 4.55, 4.85, 5.08, 5.54, 7.01, 7.62, 8.08, 8.56, 9.53, 10.97, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70)},
+	{cat: "steel", name: "40", idRound: 0.01, standard: StandardB3610M, od: frODB3610, walls: []float64{
+		2.77, 2.87, 3.38, 3.56, 3.68, 3.91, 5.16, 5.49, 5.74, 6.02, 6.55, 7.11, 8.18, 9.27, 10.31, 11.13, 12.70, 14.27, 15.09, 17.48}},
+	{cat: "steel", name: "80", idRound: 0.01, standard: StandardB3610M, od: frODB3610, walls: []float64{
+		3.73, 3.91, 4.55, 4.85, 5.08, 5.54, 7.01, 7.62, 8.08, 8.56, 9.53, 10.97, 12.70, 15.09, 17.48, 19.05, 21.44, 23.83, 26.19, 30.96}},
+	{cat: "steel", name: "STD", idRound: 0.01, standard: StandardB3610M, od: frODB3610, walls: []float64{
+		2.77, 2.87, 3.38, 3.56, 3.68, 3.91, 5.16, 5.49, 5.74, 6.02, 6.55, 7.11, 8.18, 9.27, 9.53, 9.53, 9.53, 9.53, 9.53, 9.53}},
+	{cat: "steel", name: "XS", idRound: 0.01, standard: StandardB3610M, od: frODB3610, walls: []float64{
+		3.73, 3.91, 4.55, 4.85, 5.08, 5.54, 7.01, 7.62, 8.08, 8.56, 9.53, 10.97, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70}},
 	// ASME B36.19M, stainless steel; python3-fluids '5S', '10S', '40S',
 	// '80S'.
-	{cat: "ss", name: "5S", idRound: 0.01, standard: StandardB3619M, rows: frSteel(frOD3619,
-		1.65, 1.65, 1.65, 1.65, 1.65, 1.65, 2.11, 2.11, 2.11, 2.11, 2.77, 2.77, 2.77, 3.40, 3.96, 3.96, 4.19, 4.19, 4.78, 5.54)},
-	{cat: "ss", name: "10S", idRound: 0.01, standard: StandardB3619M, rows: frSteel(frOD3619,
-		2.11, 2.11, 2.77, 2.77, 2.77, 2.77, 3.05, 3.05, 3.05, 3.05, 3.40, 3.40, 3.76, 4.19, 4.57, 4.78, 4.78, 4.78, 5.54, 6.35)},
-	{cat: "ss", name: "40S", idRound: 0.01, standard: StandardB3619M, rows: frSteel(frOD3619,
-		2.77, 2.87, 3.38, 3.56, 3.68, 3.91, 5.16, 5.49, 5.74, 6.02, 6.55, 7.11, 8.18, 9.27, 9.53, 9.53, 9.53, 9.53, 9.53, 9.53)},
-	{cat: "ss", name: "80S", idRound: 0.01, standard: StandardB3619M, rows: frSteel(frOD3619,
-		3.73, 3.91, 4.55, 4.85, 5.08, 5.54, 7.01, 7.62, 8.08, 8.56, 9.53, 10.97, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70)},
+	{cat: "ss", name: "5S", idRound: 0.01, standard: StandardB3619M, od: frODB3619, walls: []float64{
+		1.65, 1.65, 1.65, 1.65, 1.65, 1.65, 2.11, 2.11, 2.11, 2.11, 2.77, 2.77, 2.77, 3.40, 3.96, 3.96, 4.19, 4.19, 4.78, 5.54}},
+	{cat: "ss", name: "10S", idRound: 0.01, standard: StandardB3619M, od: frODB3619, walls: []float64{
+		2.11, 2.11, 2.77, 2.77, 2.77, 2.77, 3.05, 3.05, 3.05, 3.05, 3.40, 3.40, 3.76, 4.19, 4.57, 4.78, 4.78, 4.78, 5.54, 6.35}},
+	{cat: "ss", name: "40S", idRound: 0.01, standard: StandardB3619M, od: frODB3619, walls: []float64{
+		2.77, 2.87, 3.38, 3.56, 3.68, 3.91, 5.16, 5.49, 5.74, 6.02, 6.55, 7.11, 8.18, 9.27, 9.53, 9.53, 9.53, 9.53, 9.53, 9.53}},
+	{cat: "ss", name: "80S", idRound: 0.01, standard: StandardB3619M, od: frODB3619, walls: []float64{
+		3.73, 3.91, 4.55, 4.85, 5.08, 5.54, 7.01, 7.62, 8.08, 8.56, 9.53, 10.97, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70, 12.70}},
 	// ASTM D1785 PVC schedules 40 and 80, inches; python3-fluids
 	// '40D1785', '80D1785'.
-	{cat: "pvc", name: "PVC40", inch: true, standard: StandardD1785, rows: frSteel(frIPS,
-		0.109, 0.113, 0.133, 0.140, 0.145, 0.154, 0.203, 0.216, 0.226, 0.237, 0.258, 0.280, 0.322, 0.365, 0.406, 0.437, 0.500, 0.562, 0.593, 0.687)},
-	{cat: "pvc", name: "PVC80", inch: true, standard: StandardD1785, rows: frSteel(frIPS,
-		0.147, 0.154, 0.179, 0.191, 0.200, 0.218, 0.276, 0.300, 0.318, 0.337, 0.375, 0.432, 0.500, 0.593, 0.687, 0.750, 0.843, 0.937, 1.031, 1.218)},
+	{cat: "pvc", name: "PVC40", inch: true, standard: StandardD1785, od: frODIPS, walls: []float64{
+		0.109, 0.113, 0.133, 0.140, 0.145, 0.154, 0.203, 0.216, 0.226, 0.237, 0.258, 0.280, 0.322, 0.365, 0.406, 0.437, 0.500, 0.562, 0.593, 0.687}},
+	{cat: "pvc", name: "PVC80", inch: true, standard: StandardD1785, od: frODIPS, walls: []float64{
+		0.147, 0.154, 0.179, 0.191, 0.200, 0.218, 0.276, 0.300, 0.318, 0.337, 0.375, 0.432, 0.500, 0.593, 0.687, 0.750, 0.843, 0.937, 1.031, 1.218}},
 	// ASTM D2241 PVC, SDR 21 and 26, inches; python3-fluids 'DR21D2241',
 	// 'DR26D2241'.
-	{cat: "pvc", name: "PVC-SDR21", inch: true, standard: StandardD2241, rows: frSteel(frIPS,
-		0, 0.060, 0.063, 0.079, 0.090, 0.113, 0.137, 0.167, 0.190, 0.214, 0.265, 0.316, 0.410, 0.511, 0.606, 0.666, 0.762, 0.857, 0.952, 1.143)},
-	{cat: "pvc", name: "PVC-SDR26", inch: true, standard: StandardD2241, rows: frSteel(frIPS,
-		0, 0, 0.060, 0.064, 0.073, 0.091, 0.110, 0.135, 0.154, 0.173, 0.214, 0.255, 0.332, 0.413, 0.490, 0.538, 0.615, 0.692, 0.769, 0.923)},
+	{cat: "pvc", name: "PVC-SDR21", inch: true, standard: StandardD2241, od: frODIPS, walls: []float64{
+		0, 0.060, 0.063, 0.079, 0.090, 0.113, 0.137, 0.167, 0.190, 0.214, 0.265, 0.316, 0.410, 0.511, 0.606, 0.666, 0.762, 0.857, 0.952, 1.143}},
+	{cat: "pvc", name: "PVC-SDR26", inch: true, standard: StandardD2241, od: frODIPS, walls: []float64{
+		0, 0, 0.060, 0.064, 0.073, 0.091, 0.110, 0.135, 0.154, 0.173, 0.214, 0.255, 0.332, 0.413, 0.490, 0.538, 0.615, 0.692, 0.769, 0.923}},
 	// ASTM B88 copper water tube, types K, L and M, inches: outside
 	// diameters (nominal + 1/8 in; python3-fluids' 'DR21D2241CTS' copper
 	// tube sizes agree for 1–2 in) and walls from memory.
-	{cat: "copper", name: "K", inch: true, memo: true, standard: StandardB88, rows: frCopper(
-		0.035, 0.049, 0.049, 0.049, 0.065, 0.065, 0.065, 0.072, 0.083, 0.095, 0.109, 0.120, 0.134, 0.160, 0.192, 0.271, 0.338, 0.405)},
-	{cat: "copper", name: "L", inch: true, memo: true, standard: StandardB88, rows: frCopper(
-		0.030, 0.035, 0.040, 0.042, 0.045, 0.050, 0.055, 0.060, 0.070, 0.080, 0.090, 0.100, 0.110, 0.125, 0.140, 0.200, 0.250, 0.280)},
-	{cat: "copper", name: "M", inch: true, memo: true, standard: StandardB88, rows: frCopper(
-		0, 0.025, 0.028, 0, 0.032, 0.035, 0.042, 0.049, 0.058, 0.065, 0.072, 0.083, 0.095, 0.109, 0.122, 0.170, 0.212, 0.254)},
+	{cat: "copper", name: "K", inch: true, memo: true, standard: StandardB88, walls: []float64{
+		0.035, 0.049, 0.049, 0.049, 0.065, 0.065, 0.065, 0.072, 0.083, 0.095, 0.109, 0.120, 0.134, 0.160, 0.192, 0.271, 0.338, 0.405}},
+	{cat: "copper", name: "L", inch: true, memo: true, standard: StandardB88, walls: []float64{
+		0.030, 0.035, 0.040, 0.042, 0.045, 0.050, 0.055, 0.060, 0.070, 0.080, 0.090, 0.100, 0.110, 0.125, 0.140, 0.200, 0.250, 0.280}},
+	{cat: "copper", name: "M", inch: true, memo: true, standard: StandardB88, walls: []float64{
+		0, 0.025, 0.028, 0, 0.032, 0.035, 0.042, 0.049, 0.058, 0.065, 0.072, 0.083, 0.095, 0.109, 0.122, 0.170, 0.212, 0.254}},
 	// Polyethylene, ISO 4427: built by frPE below.
-	{cat: "pe", name: "SDR9", memo: true, standard: StandardPE, rows: frPE(6)},
-	{cat: "pe", name: "SDR11", memo: true, standard: StandardPE, rows: frPE(7)},
-	{cat: "pe", name: "SDR13.6", memo: true, standard: StandardPE, rows: frPE(8)},
-	{cat: "pe", name: "SDR17", memo: true, standard: StandardPE, rows: frPE(9)},
-	{cat: "pe", name: "SDR21", memo: true, standard: StandardPE, rows: frPE(10)},
-	{cat: "pe", name: "SDR26", memo: true, standard: StandardPE, rows: frPE(11)},
+	{cat: "pe", name: "SDR9", memo: true, standard: StandardPE, k: 6},
+	{cat: "pe", name: "SDR11", memo: true, standard: StandardPE, k: 7},
+	{cat: "pe", name: "SDR13.6", memo: true, standard: StandardPE, k: 8},
+	{cat: "pe", name: "SDR17", memo: true, standard: StandardPE, k: 9},
+	{cat: "pe", name: "SDR21", memo: true, standard: StandardPE, k: 10},
+	{cat: "pe", name: "SDR26", memo: true, standard: StandardPE, k: 11},
 	// Ductile iron, ISO 2531 class K9 with an ISO 4179 cement-mortar
 	// lining: built by frDuctile below.
-	{cat: "di", name: "K9", memo: true, standard: StandardDI, rows: frDuctile(9)},
+	{cat: "di", name: "K9", memo: true, standard: StandardDI, k: 9},
 }
 
 // frPEOD: polyethylene pipe outside diameters, mm, of the ISO 4427 series

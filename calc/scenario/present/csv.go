@@ -40,25 +40,27 @@ type csvColumn struct {
 	dim   calc.Dimension // …or in this dimension's, when param is ""
 	// unitNote replaces the unit's symbol in the head ("% points").
 	unitNote string
-	// value gives the figure (SI) or the text; ok false leaves the cell
-	// empty. u is the column's unit, for a text that quotes figures.
+	// One of num, text and value fills the cell (plain functions, so the
+	// table is data the linker lays out, not start-up code): num gives a
+	// figure (SI), absent when ok is false; text a text, "" leaving the
+	// cell empty; value either, given the column's unit u for a text that
+	// quotes figures.
+	num   func(r *scenario.Result) (v float64, ok bool)
+	text  func(r *scenario.Result) string
 	value func(r *scenario.Result, u calc.Unit) (v float64, text string, ok bool)
 }
 
-// fig makes a figure column's value from one that may be absent.
-func fig(f func(r *scenario.Result) (float64, bool)) func(*scenario.Result, calc.Unit) (float64, string, bool) {
-	return func(r *scenario.Result, _ calc.Unit) (float64, string, bool) {
-		v, ok := f(r)
+// get fills the cell: its figure (SI) or its text, ok false when empty.
+func (c csvColumn) get(r *scenario.Result, u calc.Unit) (float64, string, bool) {
+	switch {
+	case c.num != nil:
+		v, ok := c.num(r)
 		return v, "", ok
-	}
-}
-
-// txt makes a text column's value; "" leaves the cell empty.
-func txt(f func(r *scenario.Result) string) func(*scenario.Result, calc.Unit) (float64, string, bool) {
-	return func(r *scenario.Result, _ calc.Unit) (float64, string, bool) {
-		t := f(r)
+	case c.text != nil:
+		t := c.text(r)
 		return 0, t, t != ""
 	}
+	return c.value(r, u)
 }
 
 // yesNo words a flag.
@@ -129,12 +131,12 @@ func speedIn(f func(pr *scenario.PumpResult) float64) func(*scenario.Result) (fl
 // every scenario.Part has at least one (TestResultsCSVEveryPart).
 var csvColumns = []csvColumn{
 	// The sheet.
-	{head: "title", value: txt(func(r *scenario.Result) string { return r.Inputs.Choice("name") })},
-	{head: "pump tag", value: txt(func(r *scenario.Result) string { return r.Inputs.Choice("tag") })},
-	{head: "sheet's own units", value: txt(func(r *scenario.Result) string { return map[bool]string{true: "US", false: "SI"}[r.US] })},
+	{head: "title", text: func(r *scenario.Result) string { return r.Inputs.Choice("name") }},
+	{head: "pump tag", text: func(r *scenario.Result) string { return r.Inputs.Choice("tag") }},
+	{head: "sheet's own units", text: func(r *scenario.Result) string { return map[bool]string{true: "US", false: "SI"}[r.US] }},
 
 	// The liquid and the site.
-	{head: "liquid", part: scenario.PartLiquid, value: txt(func(r *scenario.Result) string {
+	{head: "liquid", part: scenario.PartLiquid, text: func(r *scenario.Result) string {
 		if r.Fluid == nil {
 			return ""
 		}
@@ -145,12 +147,12 @@ var csvColumns = []csvColumn{
 			return l
 		}
 		return "water"
-	})},
-	{head: "temperature", part: scenario.PartLiquid, kind: csvFigure, param: "t", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "temperature", part: scenario.PartLiquid, kind: csvFigure, param: "t", num: func(r *scenario.Result) (float64, bool) {
 		return r.Fluid.Temperature, r.Fluid.Temperature > 0
-	})},
-	{head: "density", part: scenario.PartLiquid, kind: csvFigure, param: "rho", value: fig(func(r *scenario.Result) (float64, bool) { return r.Fluid.Density, true })},
-	{head: "site pressure, absolute", part: scenario.PartSite, kind: csvFigure, param: "baro", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "density", part: scenario.PartLiquid, kind: csvFigure, param: "rho", num: func(r *scenario.Result) (float64, bool) { return r.Fluid.Density, true }},
+	{head: "site pressure, absolute", part: scenario.PartSite, kind: csvFigure, param: "baro", num: func(r *scenario.Result) (float64, bool) {
 		// Shown when a result used it: alone it is the default of a sheet
 		// with nothing worked out yet.
 		for _, p := range scenario.Parts() {
@@ -159,39 +161,39 @@ var csvColumns = []csvColumn{
 			}
 		}
 		return 0, false
-	})},
+	}},
 
 	// The balance.
-	{head: "flow", part: scenario.PartBalance, kind: csvFigure, param: "q", value: fig(func(r *scenario.Result) (float64, bool) { return r.Balance.Q, true })},
-	{head: "solved for", part: scenario.PartBalance, value: txt(func(r *scenario.Result) string { return scenario.Label(r.Balance.Solve.String()) })},
-	{head: "pump head", part: scenario.PartBalance, kind: csvFigure, param: "hp", value: fig(func(r *scenario.Result) (float64, bool) { return r.Balance.PumpHead, true })},
-	{head: "turbine head", part: scenario.PartBalance, kind: csvFigure, param: "ht", value: fig(func(r *scenario.Result) (float64, bool) { return r.Balance.TurbineHead, true })},
-	{head: "friction and fittings", part: scenario.PartBalance, kind: csvFigure, param: "hf", value: fig(func(r *scenario.Result) (float64, bool) { return r.Balance.FrictionHead, true })},
-	{head: "pump hydraulic power", part: scenario.PartBalance, kind: csvFigure, dim: calc.Power, value: fig(func(r *scenario.Result) (float64, bool) { return r.Balance.PumpPower, true })},
-	{head: "high point: segment", part: scenario.PartBalance, value: txt(func(r *scenario.Result) string {
+	{head: "flow", part: scenario.PartBalance, kind: csvFigure, param: "q", num: func(r *scenario.Result) (float64, bool) { return r.Balance.Q, true }},
+	{head: "solved for", part: scenario.PartBalance, text: func(r *scenario.Result) string { return scenario.Label(r.Balance.Solve.String()) }},
+	{head: "pump head", part: scenario.PartBalance, kind: csvFigure, param: "hp", num: func(r *scenario.Result) (float64, bool) { return r.Balance.PumpHead, true }},
+	{head: "turbine head", part: scenario.PartBalance, kind: csvFigure, param: "ht", num: func(r *scenario.Result) (float64, bool) { return r.Balance.TurbineHead, true }},
+	{head: "friction and fittings", part: scenario.PartBalance, kind: csvFigure, param: "hf", num: func(r *scenario.Result) (float64, bool) { return r.Balance.FrictionHead, true }},
+	{head: "pump hydraulic power", part: scenario.PartBalance, kind: csvFigure, dim: calc.Power, num: func(r *scenario.Result) (float64, bool) { return r.Balance.PumpPower, true }},
+	{head: "high point: segment", part: scenario.PartBalance, text: func(r *scenario.Result) string {
 		if hp := worstHighPoint(r); hp != nil {
 			return strconv.Itoa(hp.Segment)
 		}
 		return ""
-	})},
-	{head: "high point: distance from point 1", part: scenario.PartBalance, kind: csvFigure, param: "l", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "high point: distance from point 1", part: scenario.PartBalance, kind: csvFigure, param: "l", num: func(r *scenario.Result) (float64, bool) {
 		if hp := worstHighPoint(r); hp != nil {
 			return hp.Distance, true
 		}
 		return 0, false
-	})},
-	{head: "high point: grade line below the pipe crown", part: scenario.PartBalance, kind: csvFigure, param: "hf", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "high point: grade line below the pipe crown", part: scenario.PartBalance, kind: csvFigure, param: "hf", num: func(r *scenario.Result) (float64, bool) {
 		if hp := worstHighPoint(r); hp != nil && !hp.Breaks {
 			return hp.BelowCrown, true
 		}
 		return 0, false
-	})},
-	{head: "high point: column breaks", part: scenario.PartBalance, value: txt(func(r *scenario.Result) string {
+	}},
+	{head: "high point: column breaks", part: scenario.PartBalance, text: func(r *scenario.Result) string {
 		if hp := worstHighPoint(r); hp != nil {
 			return yesNo(hp.Breaks)
 		}
 		return ""
-	})},
+	}},
 	{head: "largest flow the line carries full", part: scenario.PartBalance, kind: csvFigure, param: "q", value: func(r *scenario.Result, _ calc.Unit) (float64, string, bool) {
 		br := r.Balance
 		hp := worstHighPoint(r)
@@ -207,10 +209,10 @@ var csvColumns = []csvColumn{
 	}},
 
 	// The line of segments.
-	{head: "line losses", part: scenario.PartLine, kind: csvFigure, param: "hf", value: fig(func(r *scenario.Result) (float64, bool) { return r.Line.TotalLoss, true })},
-	{head: "component drops, total", part: scenario.PartLine, kind: csvFigure, param: "hf", value: fig(func(r *scenario.Result) (float64, bool) {
+	{head: "line losses", part: scenario.PartLine, kind: csvFigure, param: "hf", num: func(r *scenario.Result) (float64, bool) { return r.Line.TotalLoss, true }},
+	{head: "component drops, total", part: scenario.PartLine, kind: csvFigure, param: "hf", num: func(r *scenario.Result) (float64, bool) {
 		return r.Line.ComponentLoss, hasComponents(r.Line)
-	})},
+	}},
 	{head: "component drops, each", part: scenario.PartLine, kind: csvText, param: "hf", value: func(r *scenario.Result, u calc.Unit) (float64, string, bool) {
 		var parts []string
 		for i, s := range r.Line.Segments {
@@ -222,22 +224,22 @@ var csvColumns = []csvColumn{
 	}},
 
 	// Loops: the heat the flow carries, the control valves.
-	{head: "line kind", part: scenario.PartBalance, value: txt(func(r *scenario.Result) string {
+	{head: "line kind", part: scenario.PartBalance, text: func(r *scenario.Result) string {
 		if r.Inputs.IsLoop() {
 			return "closed loop"
 		}
 		return "two points"
-	})},
-	{head: "heat load carried", part: scenario.PartHeat, kind: csvFigure, param: "load", value: fig(func(r *scenario.Result) (float64, bool) { return r.Heat.Load, true })},
-	{head: "flow carrying the load", part: scenario.PartHeat, kind: csvFigure, param: "q", value: fig(func(r *scenario.Result) (float64, bool) { return r.Heat.Flow, true })},
-	{head: "control valves: authority, each", part: scenario.PartValves, value: txt(func(r *scenario.Result) string {
+	}},
+	{head: "heat load carried", part: scenario.PartHeat, kind: csvFigure, param: "load", num: func(r *scenario.Result) (float64, bool) { return r.Heat.Load, true }},
+	{head: "flow carrying the load", part: scenario.PartHeat, kind: csvFigure, param: "q", num: func(r *scenario.Result) (float64, bool) { return r.Heat.Flow, true }},
+	{head: "control valves: authority, each", part: scenario.PartValves, text: func(r *scenario.Result) string {
 		parts := make([]string, 0, len(r.Valves))
 		for _, v := range r.Valves {
 			parts = append(parts, "segment "+strconv.Itoa(v.Segment)+" "+v.Name+": "+csvNumberText(v.Authority.N))
 		}
 		return strings.Join(parts, "; ")
-	})},
-	{head: "control valves: choked or cavitating", part: scenario.PartValves, value: txt(func(r *scenario.Result) string {
+	}},
+	{head: "control valves: choked or cavitating", part: scenario.PartValves, text: func(r *scenario.Result) string {
 		var parts []string
 		for _, v := range r.Valves {
 			switch {
@@ -252,25 +254,25 @@ var csvColumns = []csvColumn{
 			}
 		}
 		return strings.Join(parts, "; ")
-	})},
+	}},
 
 	// The run and its sizing.
-	{head: "run: velocity", part: scenario.PartRun, or: scenario.PartRunView, kind: csvFigure, dim: calc.Velocity, value: fig(func(r *scenario.Result) (float64, bool) { return theRun(r).Velocity, true })},
-	{head: "run: Reynolds number", part: scenario.PartRun, or: scenario.PartRunView, kind: csvNumber, value: fig(func(r *scenario.Result) (float64, bool) { return theRun(r).Reynolds, true })},
-	{head: "run: regime", part: scenario.PartRun, or: scenario.PartRunView, value: txt(func(r *scenario.Result) string { return theRun(r).Regime.String() })},
-	{head: "run: friction factor", part: scenario.PartRun, or: scenario.PartRunView, kind: csvNumber, value: fig(func(r *scenario.Result) (float64, bool) { return theRun(r).Friction, true })},
-	{head: "run: friction and fittings", part: scenario.PartRun, or: scenario.PartRunView, kind: csvFigure, param: "hf", value: fig(func(r *scenario.Result) (float64, bool) { return theRun(r).TotalLoss, true })},
-	{head: "run shown: segment", part: scenario.PartRunView, value: txt(func(r *scenario.Result) string {
+	{head: "run: velocity", part: scenario.PartRun, or: scenario.PartRunView, kind: csvFigure, dim: calc.Velocity, num: func(r *scenario.Result) (float64, bool) { return theRun(r).Velocity, true }},
+	{head: "run: Reynolds number", part: scenario.PartRun, or: scenario.PartRunView, kind: csvNumber, num: func(r *scenario.Result) (float64, bool) { return theRun(r).Reynolds, true }},
+	{head: "run: regime", part: scenario.PartRun, or: scenario.PartRunView, text: func(r *scenario.Result) string { return theRun(r).Regime.String() }},
+	{head: "run: friction factor", part: scenario.PartRun, or: scenario.PartRunView, kind: csvNumber, num: func(r *scenario.Result) (float64, bool) { return theRun(r).Friction, true }},
+	{head: "run: friction and fittings", part: scenario.PartRun, or: scenario.PartRunView, kind: csvFigure, param: "hf", num: func(r *scenario.Result) (float64, bool) { return theRun(r).TotalLoss, true }},
+	{head: "run shown: segment", part: scenario.PartRunView, text: func(r *scenario.Result) string {
 		if r.RunView.Segment > 0 {
 			return strconv.Itoa(r.RunView.Segment)
 		}
 		return ""
-	})},
-	{head: "sizing: pipe class", part: scenario.PartSizing, value: txt(func(r *scenario.Result) string {
+	}},
+	{head: "sizing: pipe class", part: scenario.PartSizing, text: func(r *scenario.Result) string {
 		sz := r.RunView.Sizing
 		return sz.Catalogue.Name + ", " + scenario.ClassName(sz.Catalogue.Key, sz.Class)
-	})},
-	{head: "sizing: this run's size fits", part: scenario.PartSizing, value: txt(func(r *scenario.Result) string {
+	}},
+	{head: "sizing: this run's size fits", part: scenario.PartSizing, text: func(r *scenario.Result) string {
 		here, _ := sizingRows(r)
 		switch {
 		case here == nil:
@@ -279,153 +281,153 @@ var csvColumns = []csvColumn{
 			return "not worked out"
 		}
 		return yesNo(here.Fits())
-	})},
+	}},
 	// A head per 100 of pipe's length is the same number in m per 100 m
 	// and ft per 100 ft.
-	{head: "sizing: this run's pipe friction, head per 100 of pipe", part: scenario.PartSizing, kind: csvNumber, value: fig(func(r *scenario.Result) (float64, bool) {
+	{head: "sizing: this run's pipe friction, head per 100 of pipe", part: scenario.PartSizing, kind: csvNumber, num: func(r *scenario.Result) (float64, bool) {
 		if here, _ := sizingRows(r); here != nil && here.Err == nil {
 			return here.Gradient * 100, true
 		}
 		return 0, false
-	})},
-	{head: "sizing: smallest size that fits", part: scenario.PartSizing, value: txt(func(r *scenario.Result) string {
+	}},
+	{head: "sizing: smallest size that fits", part: scenario.PartSizing, text: func(r *scenario.Result) string {
 		if _, fits := sizingRows(r); fits != nil {
 			return sizeName(fits.Pipe)
 		}
 		return "none"
-	})},
-	{head: "sizing: loss of the run in that size", part: scenario.PartSizing, kind: csvFigure, param: "hf", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "sizing: loss of the run in that size", part: scenario.PartSizing, kind: csvFigure, param: "hf", num: func(r *scenario.Result) (float64, bool) {
 		if _, fits := sizingRows(r); fits != nil {
 			return fits.Run.TotalLoss, true
 		}
 		return 0, false
-	})},
+	}},
 
 	// The pump on the line.
-	{head: "pump speed used", part: scenario.PartPump, kind: csvFigure, param: "peff", value: fig(func(r *scenario.Result) (float64, bool) { return r.Pump.Speed, true })},
-	{head: "operating flow", part: scenario.PartOperating, kind: csvFigure, param: "q", value: fig(func(r *scenario.Result) (float64, bool) { return r.Pump.Operating.Q, true })},
-	{head: "operating head", part: scenario.PartOperating, kind: csvFigure, param: "hp", value: fig(func(r *scenario.Result) (float64, bool) { return r.Pump.Operating.H, true })},
-	{head: "pump efficiency at the operating point", part: scenario.PartOperating, kind: csvFigure, param: "peff", value: fig(func(r *scenario.Result) (float64, bool) {
+	{head: "pump speed used", part: scenario.PartPump, kind: csvFigure, param: "peff", num: func(r *scenario.Result) (float64, bool) { return r.Pump.Speed, true }},
+	{head: "operating flow", part: scenario.PartOperating, kind: csvFigure, param: "q", num: func(r *scenario.Result) (float64, bool) { return r.Pump.Operating.Q, true }},
+	{head: "operating head", part: scenario.PartOperating, kind: csvFigure, param: "hp", num: func(r *scenario.Result) (float64, bool) { return r.Pump.Operating.H, true }},
+	{head: "pump efficiency at the operating point", part: scenario.PartOperating, kind: csvFigure, param: "peff", num: func(r *scenario.Result) (float64, bool) {
 		return r.Pump.Operating.Eff, r.Pump.Operating.Eff > 0
-	})},
-	{head: "shaft power at the operating point", part: scenario.PartOperating, kind: csvFigure, dim: calc.Power, value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "shaft power at the operating point", part: scenario.PartOperating, kind: csvFigure, dim: calc.Power, num: func(r *scenario.Result) (float64, bool) {
 		return r.Pump.Operating.ShaftPower, r.Pump.Operating.ShaftPower > 0
-	})},
-	{head: "speed for the duty", part: scenario.PartSpeedFor, kind: csvFigure, param: "peff", value: fig(func(r *scenario.Result) (float64, bool) { return r.Pump.SpeedFor.Ratio, true })},
-	{head: "speed for the duty", part: scenario.PartSpeedFor, kind: csvFigure, param: "nrat", value: fig(speedIn(func(pr *scenario.PumpResult) float64 { return pr.Rated }))},
-	{head: "drive frequency for the duty", part: scenario.PartSpeedFor, kind: csvFigure, param: "fmains", value: fig(speedIn(func(pr *scenario.PumpResult) float64 { return pr.Mains }))},
-	{head: "duty: flow", part: scenario.PartSpeedFor, kind: csvFigure, param: "q", value: fig(func(r *scenario.Result) (float64, bool) { return r.Pump.SpeedFor.Q, true })},
-	{head: "duty: head the line needs", part: scenario.PartSpeedFor, kind: csvFigure, param: "hp", value: fig(func(r *scenario.Result) (float64, bool) { return r.Pump.SpeedFor.H, true })},
+	}},
+	{head: "speed for the duty", part: scenario.PartSpeedFor, kind: csvFigure, param: "peff", num: func(r *scenario.Result) (float64, bool) { return r.Pump.SpeedFor.Ratio, true }},
+	{head: "speed for the duty", part: scenario.PartSpeedFor, kind: csvFigure, param: "nrat", num: speedIn(func(pr *scenario.PumpResult) float64 { return pr.Rated })},
+	{head: "drive frequency for the duty", part: scenario.PartSpeedFor, kind: csvFigure, param: "fmains", num: speedIn(func(pr *scenario.PumpResult) float64 { return pr.Mains })},
+	{head: "duty: flow", part: scenario.PartSpeedFor, kind: csvFigure, param: "q", num: func(r *scenario.Result) (float64, bool) { return r.Pump.SpeedFor.Q, true }},
+	{head: "duty: head the line needs", part: scenario.PartSpeedFor, kind: csvFigure, param: "hp", num: func(r *scenario.Result) (float64, bool) { return r.Pump.SpeedFor.H, true }},
 
 	// NPSH.
-	{head: "NPSH available", part: scenario.PartNPSH, kind: csvFigure, param: "npshr", value: fig(func(r *scenario.Result) (float64, bool) { return r.NPSH.Available, true })},
-	{head: "NPSH required", part: scenario.PartNPSH, kind: csvFigure, param: "npshr", value: fig(func(r *scenario.Result) (float64, bool) {
+	{head: "NPSH available", part: scenario.PartNPSH, kind: csvFigure, param: "npshr", num: func(r *scenario.Result) (float64, bool) { return r.NPSH.Available, true }},
+	{head: "NPSH required", part: scenario.PartNPSH, kind: csvFigure, param: "npshr", num: func(r *scenario.Result) (float64, bool) {
 		return r.NPSH.Required, r.NPSH.Level != calc.NPSHUnrated
-	})},
-	{head: "NPSH margin", part: scenario.PartNPSH, kind: csvFigure, param: "npshr", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "NPSH margin", part: scenario.PartNPSH, kind: csvFigure, param: "npshr", num: func(r *scenario.Result) (float64, bool) {
 		return r.NPSH.Margin, r.NPSH.Level != calc.NPSHUnrated
-	})},
-	{head: "NPSH verdict", part: scenario.PartNPSH, value: txt(func(r *scenario.Result) string { return npshWord(r.NPSH.Level) })},
+	}},
+	{head: "NPSH verdict", part: scenario.PartNPSH, text: func(r *scenario.Result) string { return npshWord(r.NPSH.Level) }},
 
 	// The field check, its bands and its verdict.
-	{head: "measured flow", part: scenario.PartField, kind: csvFigure, param: "qm", value: fig(func(r *scenario.Result) (float64, bool) { return r.Field.Q, true })},
-	{head: "measured pump head", part: scenario.PartField, kind: csvFigure, param: "hp", value: fig(func(r *scenario.Result) (float64, bool) { return r.Field.Head, true })},
-	{head: "measured hydraulic power", part: scenario.PartField, kind: csvFigure, dim: calc.Power, value: fig(func(r *scenario.Result) (float64, bool) { return r.Field.HydraulicPower, true })},
-	{head: "wire-to-water efficiency", part: scenario.PartField, kind: csvFigure, param: "peff", value: fig(func(r *scenario.Result) (float64, bool) {
+	{head: "measured flow", part: scenario.PartField, kind: csvFigure, param: "qm", num: func(r *scenario.Result) (float64, bool) { return r.Field.Q, true }},
+	{head: "measured pump head", part: scenario.PartField, kind: csvFigure, param: "hp", num: func(r *scenario.Result) (float64, bool) { return r.Field.Head, true }},
+	{head: "measured hydraulic power", part: scenario.PartField, kind: csvFigure, dim: calc.Power, num: func(r *scenario.Result) (float64, bool) { return r.Field.HydraulicPower, true }},
+	{head: "wire-to-water efficiency", part: scenario.PartField, kind: csvFigure, param: "peff", num: func(r *scenario.Result) (float64, bool) {
 		return r.Field.Efficiency, r.Field.Efficiency > 0
-	})},
-	{head: "head below (−) or above the data sheet", part: scenario.PartField, kind: csvFigure, param: "hp", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "head below (−) or above the data sheet", part: scenario.PartField, kind: csvFigure, param: "hp", num: func(r *scenario.Result) (float64, bool) {
 		return r.Field.Deviation, r.Field.HasCurve
-	})},
-	{head: "pump efficiency from the readings", part: scenario.PartPumpAlone, kind: csvFigure, param: "peff", value: fig(func(r *scenario.Result) (float64, bool) { return r.Field.PumpEfficiency, true })},
-	{head: "shaft power from the readings", part: scenario.PartPumpAlone, kind: csvFigure, dim: calc.Power, value: fig(func(r *scenario.Result) (float64, bool) { return r.Field.ShaftPower, true })},
-	{head: "± measured flow", part: scenario.PartBands, kind: csvFigure, param: "qm", value: fig(func(r *scenario.Result) (float64, bool) { return r.FieldBands.Flow.U, true })},
-	{head: "± measured pump head", part: scenario.PartBands, kind: csvFigure, param: "hp", value: fig(func(r *scenario.Result) (float64, bool) { return r.FieldBands.Head.U, true })},
-	{head: "± measured hydraulic power", part: scenario.PartBands, kind: csvFigure, dim: calc.Power, value: fig(func(r *scenario.Result) (float64, bool) { return r.FieldBands.Power.U, true })},
-	{head: "± wire-to-water efficiency", part: scenario.PartBands, kind: csvFigure, param: "peff", unitNote: "% points", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "pump efficiency from the readings", part: scenario.PartPumpAlone, kind: csvFigure, param: "peff", num: func(r *scenario.Result) (float64, bool) { return r.Field.PumpEfficiency, true }},
+	{head: "shaft power from the readings", part: scenario.PartPumpAlone, kind: csvFigure, dim: calc.Power, num: func(r *scenario.Result) (float64, bool) { return r.Field.ShaftPower, true }},
+	{head: "± measured flow", part: scenario.PartBands, kind: csvFigure, param: "qm", num: func(r *scenario.Result) (float64, bool) { return r.FieldBands.Flow.U, true }},
+	{head: "± measured pump head", part: scenario.PartBands, kind: csvFigure, param: "hp", num: func(r *scenario.Result) (float64, bool) { return r.FieldBands.Head.U, true }},
+	{head: "± measured hydraulic power", part: scenario.PartBands, kind: csvFigure, dim: calc.Power, num: func(r *scenario.Result) (float64, bool) { return r.FieldBands.Power.U, true }},
+	{head: "± wire-to-water efficiency", part: scenario.PartBands, kind: csvFigure, param: "peff", unitNote: "% points", num: func(r *scenario.Result) (float64, bool) {
 		return r.FieldBands.Wire.U, r.Field != nil && r.Field.Efficiency > 0
-	})},
-	{head: "± pump efficiency", part: scenario.PartBands, kind: csvFigure, param: "peff", unitNote: "% points", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "± pump efficiency", part: scenario.PartBands, kind: csvFigure, param: "peff", unitNote: "% points", num: func(r *scenario.Result) (float64, bool) {
 		return r.FieldBands.Pump.U, r.Field != nil && r.Field.PumpEfficiency > 0
-	})},
-	{head: "acceptance grade", part: scenario.PartAcceptance, value: txt(func(r *scenario.Result) string { return r.Acceptance.Grade.Name })},
-	{head: "acceptance verdict", part: scenario.PartAcceptance, value: txt(func(r *scenario.Result) string { return r.Acceptance.Verdict.String() })},
-	{head: "acceptance: head allowed, low", part: scenario.PartAcceptance, kind: csvFigure, param: "hp", value: fig(func(r *scenario.Result) (float64, bool) { return r.Acceptance.Head.Low, true })},
-	{head: "acceptance: head allowed, high", part: scenario.PartAcceptance, kind: csvFigure, param: "hp", value: fig(func(r *scenario.Result) (float64, bool) { return r.Acceptance.Head.High, true })},
-	{head: "acceptance: pump efficiency allowed, at least", part: scenario.PartAcceptance, kind: csvFigure, param: "peff", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "acceptance grade", part: scenario.PartAcceptance, text: func(r *scenario.Result) string { return r.Acceptance.Grade.Name }},
+	{head: "acceptance verdict", part: scenario.PartAcceptance, text: func(r *scenario.Result) string { return r.Acceptance.Verdict.String() }},
+	{head: "acceptance: head allowed, low", part: scenario.PartAcceptance, kind: csvFigure, param: "hp", num: func(r *scenario.Result) (float64, bool) { return r.Acceptance.Head.Low, true }},
+	{head: "acceptance: head allowed, high", part: scenario.PartAcceptance, kind: csvFigure, param: "hp", num: func(r *scenario.Result) (float64, bool) { return r.Acceptance.Head.High, true }},
+	{head: "acceptance: pump efficiency allowed, at least", part: scenario.PartAcceptance, kind: csvFigure, param: "peff", num: func(r *scenario.Result) (float64, bool) {
 		return r.Acceptance.Efficiency.Low, r.Acceptance.Efficiency.Verdict != calc.VerdictNone
-	})},
+	}},
 
 	// Energy.
 	// The test at several points and its guarantee verdict.
-	{head: "test: readings", part: scenario.PartTest, kind: csvNumber, value: fig(func(r *scenario.Result) (float64, bool) { return float64(len(r.Test.Points)), true })},
-	{head: "test: lowest flow", part: scenario.PartTest, kind: csvFigure, param: "qm", value: fig(func(r *scenario.Result) (float64, bool) { return r.Test.MinFlow(), true })},
-	{head: "test: highest flow", part: scenario.PartTest, kind: csvFigure, param: "qm", value: fig(func(r *scenario.Result) (float64, bool) { return r.Test.MaxFlow(), true })},
-	{head: "test: largest head shortfall from the data sheet", part: scenario.PartTest, kind: csvFigure, param: "hp", value: fig(func(r *scenario.Result) (float64, bool) {
+	{head: "test: readings", part: scenario.PartTest, kind: csvNumber, num: func(r *scenario.Result) (float64, bool) { return float64(len(r.Test.Points)), true }},
+	{head: "test: lowest flow", part: scenario.PartTest, kind: csvFigure, param: "qm", num: func(r *scenario.Result) (float64, bool) { return r.Test.MinFlow(), true }},
+	{head: "test: highest flow", part: scenario.PartTest, kind: csvFigure, param: "qm", num: func(r *scenario.Result) (float64, bool) { return r.Test.MaxFlow(), true }},
+	{head: "test: largest head shortfall from the data sheet", part: scenario.PartTest, kind: csvFigure, param: "hp", num: func(r *scenario.Result) (float64, bool) {
 		return r.Test.Sheet.Head.Short, r.Test.HasSheet
-	})},
-	{head: "test: flow of the largest head shortfall", part: scenario.PartTest, kind: csvFigure, param: "qm", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "test: flow of the largest head shortfall", part: scenario.PartTest, kind: csvFigure, param: "qm", num: func(r *scenario.Result) (float64, bool) {
 		return r.Test.Sheet.Head.Flow, r.Test.HasSheet
-	})},
-	{head: "test: largest pump efficiency shortfall", part: scenario.PartTest, kind: csvFigure, param: "peff", unitNote: "% points", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "test: largest pump efficiency shortfall", part: scenario.PartTest, kind: csvFigure, param: "peff", unitNote: "% points", num: func(r *scenario.Result) (float64, bool) {
 		return r.Test.Sheet.Eff.Short, r.Test.HasSheet && r.Test.Sheet.HasEff
-	})},
-	{head: "guarantee: flow", part: scenario.PartGuarantee, kind: csvFigure, param: "qg", value: fig(func(r *scenario.Result) (float64, bool) { return r.Guarantee.Guarantee.Q, true })},
-	{head: "guarantee: head", part: scenario.PartGuarantee, kind: csvFigure, param: "hg", value: fig(func(r *scenario.Result) (float64, bool) { return r.Guarantee.Guarantee.H, true })},
-	{head: "guarantee: pump efficiency", part: scenario.PartGuarantee, kind: csvFigure, param: "etag", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "guarantee: flow", part: scenario.PartGuarantee, kind: csvFigure, param: "qg", num: func(r *scenario.Result) (float64, bool) { return r.Guarantee.Guarantee.Q, true }},
+	{head: "guarantee: head", part: scenario.PartGuarantee, kind: csvFigure, param: "hg", num: func(r *scenario.Result) (float64, bool) { return r.Guarantee.Guarantee.H, true }},
+	{head: "guarantee: pump efficiency", part: scenario.PartGuarantee, kind: csvFigure, param: "etag", num: func(r *scenario.Result) (float64, bool) {
 		return r.Guarantee.Guarantee.Eff, r.Guarantee.Guarantee.Eff > 0
-	})},
-	{head: "guarantee: grade", part: scenario.PartGuarantee, value: txt(func(r *scenario.Result) string { return r.Guarantee.Grade.Name })},
-	{head: "guarantee: flow and head verdict", part: scenario.PartGuarantee, value: txt(func(r *scenario.Result) string { return r.Guarantee.FlowHead.String() })},
-	{head: "guarantee: pump efficiency where the curve meets the origin line", part: scenario.PartGuarantee, kind: csvFigure, param: "etag", value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "guarantee: grade", part: scenario.PartGuarantee, text: func(r *scenario.Result) string { return r.Guarantee.Grade.Name }},
+	{head: "guarantee: flow and head verdict", part: scenario.PartGuarantee, text: func(r *scenario.Result) string { return r.Guarantee.FlowHead.String() }},
+	{head: "guarantee: pump efficiency where the curve meets the origin line", part: scenario.PartGuarantee, kind: csvFigure, param: "etag", num: func(r *scenario.Result) (float64, bool) {
 		e := r.Guarantee.Efficiency
 		return e.Value, e.Status == calc.EffRead
-	})},
-	{head: "guarantee: verdict", part: scenario.PartGuarantee, value: txt(func(r *scenario.Result) string { return r.Guarantee.Verdict.String() })},
+	}},
+	{head: "guarantee: verdict", part: scenario.PartGuarantee, text: func(r *scenario.Result) string { return r.Guarantee.Verdict.String() }},
 
-	{head: "energy per volume pumped", part: scenario.PartEnergy, kind: csvFigure, dim: calc.SpecificEnergy, value: fig(func(r *scenario.Result) (float64, bool) { return r.Energy.PerVolume, true })},
-	{head: "energy per volume and head", part: scenario.PartEnergy, kind: csvFigure, dim: calc.SpecificEnergyHead, value: fig(func(r *scenario.Result) (float64, bool) { return r.Energy.PerVolumeHead, true })},
-	{head: "energy basis", part: scenario.PartEnergy, value: txt(func(r *scenario.Result) string {
+	{head: "energy per volume pumped", part: scenario.PartEnergy, kind: csvFigure, dim: calc.SpecificEnergy, num: func(r *scenario.Result) (float64, bool) { return r.Energy.PerVolume, true }},
+	{head: "energy per volume and head", part: scenario.PartEnergy, kind: csvFigure, dim: calc.SpecificEnergyHead, num: func(r *scenario.Result) (float64, bool) { return r.Energy.PerVolumeHead, true }},
+	{head: "energy basis", part: scenario.PartEnergy, text: func(r *scenario.Result) string {
 		if r.Energy.Measured {
 			return "measured input"
 		}
 		return "operating point"
-	})},
-	{head: "yearly cost (tariff's currency)", part: scenario.PartEnergy, kind: csvNumber, value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "yearly cost (tariff's currency)", part: scenario.PartEnergy, kind: csvNumber, num: func(r *scenario.Result) (float64, bool) {
 		return r.Energy.YearCost, r.Energy.YearCost > 0
-	})},
+	}},
 
 	// The turbine.
-	{head: "turbine net head", part: scenario.PartTurbine, kind: csvFigure, param: "ht", value: fig(func(r *scenario.Result) (float64, bool) { return r.Turbine.NetHead, true })},
-	{head: "turbine output", part: scenario.PartTurbine, kind: csvFigure, dim: calc.Power, value: fig(func(r *scenario.Result) (float64, bool) { return r.Turbine.Power, true })},
+	{head: "turbine net head", part: scenario.PartTurbine, kind: csvFigure, param: "ht", num: func(r *scenario.Result) (float64, bool) { return r.Turbine.NetHead, true }},
+	{head: "turbine output", part: scenario.PartTurbine, kind: csvFigure, dim: calc.Power, num: func(r *scenario.Result) (float64, bool) { return r.Turbine.Power, true }},
 
 	// Surge.
-	{head: "surge: wave speed", part: scenario.PartSurge, kind: csvFigure, dim: calc.Velocity, value: fig(func(r *scenario.Result) (float64, bool) { return r.Surge.WaveSpeed, true })},
-	{head: "surge: wave round trip", part: scenario.PartSurge, kind: csvFigure, param: "tc", value: fig(func(r *scenario.Result) (float64, bool) { return r.Surge.Period, true })},
-	{head: "surge: closure", part: scenario.PartSurge, value: txt(func(r *scenario.Result) string {
+	{head: "surge: wave speed", part: scenario.PartSurge, kind: csvFigure, dim: calc.Velocity, num: func(r *scenario.Result) (float64, bool) { return r.Surge.WaveSpeed, true }},
+	{head: "surge: wave round trip", part: scenario.PartSurge, kind: csvFigure, param: "tc", num: func(r *scenario.Result) (float64, bool) { return r.Surge.Period, true }},
+	{head: "surge: closure", part: scenario.PartSurge, text: func(r *scenario.Result) string {
 		if r.Surge.Fast {
 			return "fast, within 2L/a: the full rise"
 		}
 		return "slower than 2L/a: the rise is an upper bound"
-	})},
-	{head: "surge: Joukowsky pressure rise", part: scenario.PartSurge, kind: csvFigure, dim: calc.Pressure, value: fig(func(r *scenario.Result) (float64, bool) { return r.Surge.DeltaP, true })},
-	{head: "surge: Joukowsky rise as head", part: scenario.PartSurge, kind: csvFigure, param: "hf", value: fig(func(r *scenario.Result) (float64, bool) { return r.Surge.DeltaH, true })},
-	{head: "surge: peak pressure at point 2 (static + rise), gauge", part: scenario.PartSurge, kind: csvFigure, dim: calc.Pressure, value: fig(func(r *scenario.Result) (float64, bool) {
+	}},
+	{head: "surge: Joukowsky pressure rise", part: scenario.PartSurge, kind: csvFigure, dim: calc.Pressure, num: func(r *scenario.Result) (float64, bool) { return r.Surge.DeltaP, true }},
+	{head: "surge: Joukowsky rise as head", part: scenario.PartSurge, kind: csvFigure, param: "hf", num: func(r *scenario.Result) (float64, bool) { return r.Surge.DeltaH, true }},
+	{head: "surge: peak pressure at point 2 (static + rise), gauge", part: scenario.PartSurge, kind: csvFigure, dim: calc.Pressure, num: func(r *scenario.Result) (float64, bool) {
 		return r.Surge.Peak, r.Surge.StaticKnown
-	})},
-	{head: "surge: low swing reaches the vapour pressure", part: scenario.PartSurge, value: txt(func(r *scenario.Result) string {
+	}},
+	{head: "surge: low swing reaches the vapour pressure", part: scenario.PartSurge, text: func(r *scenario.Result) string {
 		if !r.Surge.StaticKnown {
 			return "not known: no static pressure at the valve"
 		}
 		return yesNo(r.Surge.ColumnParts)
-	})},
+	}},
 
 	// Convert.
-	{head: "converted: gauge pressure", part: scenario.PartConvert, kind: csvFigure, dim: calc.Pressure, value: fig(func(r *scenario.Result) (float64, bool) { return r.Convert.Gauge, true })},
-	{head: "converted: absolute pressure", part: scenario.PartConvert, kind: csvFigure, dim: calc.Pressure, value: fig(func(r *scenario.Result) (float64, bool) { return r.Convert.Absolute, true })},
-	{head: "converted: head of the liquid", part: scenario.PartConvert, kind: csvFigure, param: "hf", value: fig(func(r *scenario.Result) (float64, bool) {
+	{head: "converted: gauge pressure", part: scenario.PartConvert, kind: csvFigure, dim: calc.Pressure, num: func(r *scenario.Result) (float64, bool) { return r.Convert.Gauge, true }},
+	{head: "converted: absolute pressure", part: scenario.PartConvert, kind: csvFigure, dim: calc.Pressure, num: func(r *scenario.Result) (float64, bool) { return r.Convert.Absolute, true }},
+	{head: "converted: head of the liquid", part: scenario.PartConvert, kind: csvFigure, param: "hf", num: func(r *scenario.Result) (float64, bool) {
 		return r.Convert.Head, r.Fluid != nil
-	})},
+	}},
 }
 
 // hasComponents reports whether a segment of the line has components.
@@ -581,7 +583,7 @@ func ResultsCSV(sheets []scenario.KeptSheet, us bool) string {
 
 // cell writes a column's cell for result r in unit u.
 func (c csvColumn) cell(r *scenario.Result, u calc.Unit) string {
-	v, text, ok := c.value(r, u)
+	v, text, ok := c.get(r, u)
 	switch {
 	case !ok:
 		return ""
