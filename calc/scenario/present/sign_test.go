@@ -17,8 +17,9 @@ var hyphenMinus = regexp.MustCompile(`(^|[\s(:/])-\.?[0-9]`)
 // sign (U+2212), as the charts' ticks and the messages already did, and
 // not the hyphen, which reads as a dash at arm's length; the share link,
 // the boxes and the printed inputs (as typed) and the CSV keep the hyphen
-// their readers parse. Source: The Unicode Standard's U+2212 MINUS SIGN, against U+002D
-// HYPHEN-MINUS, and ISO 80000-1's minus sign (from memory).
+// their readers parse. Source: the Unicode Character Database as
+// python3's unicodedata reads it (UCD 14.0.0): U+2212 is MINUS SIGN, a
+// math symbol (Sm); U+002D is HYPHEN-MINUS, dash punctuation (Pd).
 func TestMinusSign(t *testing.T) {
 	demo, turbine := scenario.Demo(), scenario.TurbineDemo()
 	us := usDemo(t)
