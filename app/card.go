@@ -179,7 +179,7 @@ func (c *card) block(b *present.Block) app.UI {
 		// The browser's own file input is a small button with its own words;
 		// it lies, transparent, over a face of ours that shows the label at
 		// touch size (as a picker lies over .pickface).
-		return divBody("field filepick",
+		return formBody("field filepick", "",
 			app.Input().Type("file").ID(b.ID).Class("file").Accept(".txt,text/plain").OnChange(c.S.onImport),
 			app.Label().For(b.ID).Class("fileface").Text(b.Text))
 	case present.BlockSurvey:
@@ -390,7 +390,7 @@ func (c *card) fittings(f *present.Fittings) app.UI {
 		body = append(body, app.Ul().Class("fits").Body(rows...))
 	}
 	if f.Usable {
-		body = append(body, &selectBox{ID: f.AddID, Class: "pick add-fit", Label: "add a fitting", Options: f.Add, Param: f.Param, Fit: true, S: c.S})
+		body = append(body, formBody("", "", &selectBox{ID: f.AddID, Class: "pick add-fit", Label: "add a fitting", Options: f.Add, Param: f.Param, Fit: true, S: c.S}))
 	}
 	body = append(body, app.Details().Class("astext").Open(f.Open).Body(
 		app.Summary().Text("Fittings as text"), &field{S: c.S, F: f.AsText}))
@@ -406,17 +406,17 @@ func (c *card) dataSheet(d *present.DataSheet) app.UI {
 			label = append(label, spanText("hint", " optional"))
 		}
 		head = append(head, app.Th().Scope("col").Body(app.Div().Body(label...),
-			&selectBox{ID: col.UnitID, Class: "unit", Label: "unit of the " + col.Name, Options: col.Units, Param: col.Param, List: true, S: c.S}))
+			formBody("", "", &selectBox{ID: col.UnitID, Class: "unit", Label: "unit of the " + col.Name, Options: col.Units, Param: col.Param, List: true, S: c.S})))
 	}
 	head = append(head, app.Th().Scope("col").Body(spanText("sr", "remove")))
 	var rows []app.UI
 	for _, r := range d.Rows {
 		tr := []app.UI{app.Th().Scope("row").Text(r.Num)}
 		for _, cell := range r.Cells {
-			tr = append(tr, app.Td().Body(app.Input().Type("text").ID(cell.ID).Class(classIf("box cell", cell.Bad, "bad")).
+			tr = append(tr, app.Td().Body(formBody("cell", "", app.Input().Type("text").ID(cell.ID).Class(classIf("box cell", cell.Bad, "bad")).
 				Attr("inputmode", "decimal").Attr("autocomplete", "off").Attr("spellcheck", "false").
 				Aria("label", cell.Label).Aria("invalid", cell.Bad).
-				Value(cell.Text).OnInput(c.S.onCell(cell.Param, cell.Row), app.EventScope(cell.Param, cell.Row))))
+				Value(cell.Text).OnInput(c.S.onCell(cell.Param, cell.Row), app.EventScope(cell.Param, cell.Row)))))
 		}
 		tr = append(tr, app.Td().Body(button(c.S, r.Remove)))
 		rows = append(rows, app.Tr().Body(tr...))

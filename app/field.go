@@ -77,7 +77,7 @@ func (f *field) Render() (ui app.UI) {
 		}
 	}
 	body = append(body, notes(f.S, x)...)
-	return app.Div().Class(classIf("field", bad, "has-err")).ID("f-" + present.DomID(x.Param)).Body(body...)
+	return formBody(classIf("field", bad, "has-err"), "f-"+present.DomID(x.Param), body...)
 }
 
 // notes draws a field's problem beside it, and a pointer to the warnings

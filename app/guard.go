@@ -122,7 +122,7 @@ func (s *sheet) fallbackSheet() app.UI {
 			continue
 		}
 		id := "in-" + present.DomID(p)
-		rows = append(rows, app.Div().Class("field").ID("f-"+present.DomID(p)).Body(
+		rows = append(rows, formBody("field", "f-"+present.DomID(p),
 			app.Label().For(id).Class("lbl").Text(scenario.Label(p)),
 			app.Input().Type("text").ID(id).Class("box wide").
 				Attr("autocomplete", "off").Attr("spellcheck", "false").

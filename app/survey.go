@@ -31,7 +31,7 @@ func (c *survey) Render() (ui app.UI) {
 	}
 	return app.Details().Class("astext survey").Open(v.Open).Body(
 		app.Summary().Text(v.Title),
-		divBody("field",
+		formBody("field", "",
 			app.Label().For(v.ID).Class("lbl").Text(v.Label),
 			app.Textarea().ID(v.ID).Class("box survey-text").Rows(6).Attr("spellcheck", "false").
 				Attr("autocomplete", "off").Aria("describedby", v.ID+"-hint").Text(v.Text),

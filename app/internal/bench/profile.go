@@ -53,6 +53,11 @@ func editsOnly(link string) {
 				log.Fatal(err)
 			}
 		}
+		if *evalJS != "" {
+			if _, err := chromedp.Run(s.ctx, chromedp.Evaluate[any](*evalJS)); err != nil {
+				log.Fatal(err)
+			}
+		}
 		start()
 		cpu0 = rendererCPU(s.profile)
 	})
@@ -100,6 +105,10 @@ func editsOnly(link string) {
 
 // floor is -floor: the timed edits never reach the Go program.
 var floor = flag.Bool("floor", false, "with -edits-only: time the edits with the page's own part only (the box's input event stopped before the program; the answer's text set to the box's, in the same frame), the browser's floor under an edit on this page")
+
+// evalJS is -eval: a script run in the page before the timed edits, to
+// see what a change to the page would do before making it.
+var evalJS = flag.String("eval", "", "with -edits-only: JavaScript to run in the page before the timed edits (an experiment on the page as loaded)")
 
 // floorJS stops each input event of the flow box before the Go program
 // sees it and writes the box's text into the answer, so that an edit costs
