@@ -21,7 +21,7 @@ func spanText(class, text string) app.UI { return app.Span().Class(class).Text(t
 // -edits-only -trace; TestControlsInSmallForms). Its method is dialog,
 // which outside a dialog submits nothing: Enter in a lone box does nothing.
 func formBody(class, id string, body ...app.UI) app.UI {
-	f := app.Form().Method("dialog")
+	f := app.FormAsDiv().Attr("method", "dialog") // the Div's type: no Form type in the wasm
 	if class != "" {
 		f = f.Class(class)
 	}
