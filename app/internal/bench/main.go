@@ -112,7 +112,6 @@ const (
 	budgetEditP95      = 25    // ms
 	budgetColebrookX   = 2     // × Swamee–Jain
 	budgetSystemCurve  = 1e6   // ns (1 ms)
-	warmupEdits        = 5
 	systemCurveBenchRe = "BenchmarkSystemCurve100x20"
 )
 
@@ -130,6 +129,7 @@ var (
 	chromium   = flag.String("chromium", "", "Chromium's path (default: $CHROMIUM, else chromium on $PATH)")
 	loads      = flag.Int("loads", 5, "cold loads and offline reloads to take the median of (at least 5)")
 	edits      = flag.Int("edits", 60, "edits to time (at least 50)")
+	warmup     = flag.Int("warmup", 5, "edits made before the timed ones and not counted (the page's code goes on being optimised for about 150)")
 	throttle   = flag.Float64("throttle", 4, "CPU slow-down factor for the browser figures")
 	count      = flag.Int("count", 5, "go test -count for the calc benchmarks")
 	benchtime  = flag.String("benchtime", "1s", "go test -benchtime for the calc benchmarks")
@@ -1183,7 +1183,7 @@ func (rv returns) report(r *report) {
 	}
 }
 
-// timeEdits types *edits keys (after warmupEdits not counted) into the
+// timeEdits types *edits keys (after *warmup not counted) into the
 // flow box and returns each edit's time and phases (see editJS). between,
 // when not nil, runs after the warm-up edits (to start a profiler).
 func timeEdits(s *browserSession, between func()) (times []float64, phases [][]float64) {
@@ -1196,8 +1196,8 @@ func timeEdits(s *browserSession, between func()) (times []float64, phases [][]f
 		log.Fatal(err)
 	}
 	focus := `(() => { const e = document.getElementById("in-q"); if (!e) return "GONE " + location.href + " " + document.body.innerText.slice(0, 1500); e.focus(); e.setSelectionRange(e.value.length, e.value.length); return e.value; })()`
-	for i := 0; i < warmupEdits+*edits; i++ {
-		if i == warmupEdits && between != nil {
+	for i := 0; i < *warmup+*edits; i++ {
+		if i == *warmup && between != nil {
 			between()
 		}
 		v, err := chromedp.Run(s.ctx, chromedp.Evaluate[string](focus))
@@ -1233,7 +1233,7 @@ func timeEdits(s *browserSession, between func()) (times []float64, phases [][]f
 	if err != nil || len(ph) != len(all) {
 		log.Fatalf("edit phases: %v", err)
 	}
-	return all[warmupEdits:], ph[warmupEdits:]
+	return all[*warmup:], ph[*warmup:]
 }
 
 // splitKeys is -split-keys: how the bench typed a digit before it used

@@ -75,7 +75,7 @@ func editsOnly(link string) {
 	// 4 L/s and back, and the sheet's warnings with it.
 	var del, dig []float64
 	for i, t := range times {
-		if (warmupEdits+i)%2 == 0 {
+		if (*warmup+i)%2 == 0 {
 			del = append(del, t)
 		} else {
 			dig = append(dig, t)
