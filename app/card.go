@@ -413,7 +413,7 @@ func (c *card) dataSheet(d *present.DataSheet) app.UI {
 	for _, r := range d.Rows {
 		tr := []app.UI{app.Th().Scope("row").Text(r.Num)}
 		for _, cell := range r.Cells {
-			tr = append(tr, app.Td().Body(formBody("cell", "", app.Input().Type("text").ID(cell.ID).Class(classIf("box cell", cell.Bad, "bad")).
+			tr = append(tr, app.Td().Body(formBody("", "", app.Input().Type("text").ID(cell.ID).Class(classIf("box cell", cell.Bad, "bad")).
 				Attr("inputmode", "decimal").Attr("autocomplete", "off").Attr("spellcheck", "false").
 				Aria("label", cell.Label).Aria("invalid", cell.Bad).
 				Value(cell.Text).OnInput(c.S.onCell(cell.Param, cell.Row), app.EventScope(cell.Param, cell.Row)))))

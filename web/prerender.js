@@ -21,8 +21,9 @@
 // it with createElement, setAttribute and text nodes only (never innerHTML
 // or a parser), and only for the tags and attributes of the lists below,
 // both at taking and at painting: no script, style, link, iframe, object,
-// form (a field's is kept as a div) or foreignObject element, no attribute named on…, no style, href,
-// src or action; an element not listed is left out with what it holds.
+// form or foreignObject element (a field's form is taken as a div), no
+// attribute named on…, no style, href, src or action; an element not
+// listed is left out with what it holds.
 // Every element of it is inert (no focus, no click) and the page's CSP
 // (self only, no inline script or style) stays as it is.
 (() => {
@@ -51,8 +52,8 @@
       const ck = new URLSearchParams(query).get("ck");
       if (!root || !ck || root.classList.contains("prerendered")) return;
       const walk = (el) => {
-        // A field's form (app/el.go formBody) is kept as the div it is
-        // drawn as: no form is ever painted.
+        // A field's form (app/el.go formBody) is taken as a div, which
+        // lays out as the form does: no form is ever painted.
         const tag = el.localName === "form" ? "div" : el.localName;
         if (!TAGS.has(tag) || el.classList.contains("print-only")) return null;
         const attrs = {};
