@@ -120,18 +120,7 @@ func TestBrowser(t *testing.T) {
 	}
 	waitResult := func() float64 {
 		t.Helper()
-		var err error
-		for try := 0; try < 3; try++ {
-			_, err = chromedp.Run(ctx, chromedp.Poll[bool]("window.fieldheadFirstResult > 0",
-				chromedp.WithPollingTimeout(60*time.Second)))
-			// As tab.waitResult: a navigation that ends while the poll
-			// runs takes its JavaScript context with it.
-			if err == nil || !strings.Contains(err.Error(), "Cannot find context") {
-				break
-			}
-			time.Sleep(100 * time.Millisecond)
-		}
-		if err != nil {
+		if err := pollFirstResult(ctx, 60*time.Second); err != nil {
 			page, _ := chromedp.Run(ctx, chromedp.Evaluate[string]("location.href + '\\n' + document.body.innerText.slice(0, 400)"))
 			mu.Lock()
 			seen := strings.Join(exceptions, "\n")

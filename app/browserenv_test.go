@@ -161,21 +161,25 @@ func (b *tab) navigate(u string) {
 // waitResult waits until the page has drawn its first result.
 func (b *tab) waitResult() {
 	b.t.Helper()
-	var err error
-	for try := 0; try < 3; try++ {
-		_, err = chromedp.Run(b.ctx, chromedp.Poll[bool]("window.fieldheadFirstResult > 0",
-			chromedp.WithPollingTimeout(90*time.Second)))
-		// A navigation that ends while the poll runs takes its JavaScript
-		// context with it: poll again in the new one.
-		if err == nil || !strings.Contains(err.Error(), "Cannot find context") {
-			break
-		}
-		time.Sleep(100 * time.Millisecond)
-	}
-	if err != nil {
+	if err := pollFirstResult(b.ctx, 90*time.Second); err != nil {
 		page, _ := chromedp.Run(b.ctx, chromedp.Evaluate[string]("location.href + '\\n' + document.body.innerText.slice(0, 400)"))
 		b.t.Fatalf("the page never showed a result: %v\npage: %s\nexceptions: %s", err, page, strings.Join(b.thrown(), "\n"))
 	}
+}
+
+// pollFirstResult waits up to d until the page in ctx has drawn its first
+// result. A navigation that ends while the poll runs takes its JavaScript
+// context with it: it polls again in the new one.
+func pollFirstResult(ctx context.Context, d time.Duration) error {
+	var err error
+	for try := 0; try < 3; try++ {
+		_, err = chromedp.Run(ctx, chromedp.Poll[bool]("window.fieldheadFirstResult > 0", chromedp.WithPollingTimeout(d)))
+		if err == nil || !strings.Contains(err.Error(), "Cannot find context") {
+			return err
+		}
+		time.Sleep(100 * time.Millisecond)
+	}
+	return err
 }
 
 // js evaluates an expression to a string.

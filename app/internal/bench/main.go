@@ -156,6 +156,9 @@ func main() {
 	if *edits < 50 {
 		*edits = 50
 	}
+	if *warmup < 0 {
+		*warmup = 0
+	}
 	r := &report{JSON: map[string]any{}}
 	if l := loadAverage(); l != "" {
 		r.JSON["load_average_start"] = l
