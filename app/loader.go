@@ -16,7 +16,7 @@ import (
 // longer what it expects:
 //
 //   - The wasm is compiled in a worker that fetches it itself
-//     (web/compile.js, started by web/start.js as the page opens), and
+//     (web/start.js, started from itself as the page opens), and
 //     the page starts it from the compiled module (instantiateJS): the main
 //     thread no longer reads and decodes 9 MB while it lays out and paints.
 //     go-app wrapped the response in a new Response to count bytes for a
@@ -62,7 +62,7 @@ func patchLoader(js string) (string, error) {
 }
 
 // instantiateJS starts the wasm from the module web/start.js had a
-// worker compile (web/compile.js): the streamed compile's decoding then no
+// worker compile (web/start.js in a worker): the streamed compile's decoding then no
 // longer holds the main thread, which meanwhile lays out and paints what
 // the page shows before the wasm (about 200 ms of the main thread at 4×
 // CPU on an offline reload, make bench). Where no worker was started, or
@@ -91,12 +91,12 @@ function fieldheadInstantiate(url, imports, onMain) {
 
 // startCompileFirst puts, before the page's first style sheet, what starts
 // the worker that compiles the wasm: <meta name="fieldhead-compile">
-// naming the worker (web/compile.js), the wasm and wasm_exec.js, then
-// web/start.js, an async script that reads it. An async script runs as
-// soon as it is fetched, whatever the style sheets, and blocks nothing: the
-// worker starts before the main thread gets busy laying out the page (it
-// cannot start while the main thread is busy), and its download of the
-// wasm begins sooner than when prerender.js started it (make bench, a
+// naming the worker's script (web/start.js, which is both), the wasm and
+// wasm_exec.js, then web/start.js, an async script that reads it. An async
+// script runs as soon as it is fetched, whatever the style sheets, and
+// blocks nothing: the worker is asked for, and on a first visit the wasm
+// too, before the main thread gets busy laying out the page, and the
+// download begins sooner than when prerender.js started it (make bench, a
 // phone-class first visit: 7707–7899 → 7676–7774 ms; as a blocking script
 // it held back the style sheets and the written answer by 200 ms). It is
 // fetched at high priority (fetchpriority="high"): an async script is a
@@ -110,7 +110,7 @@ func startCompileFirst(page []byte, prefix string) ([]byte, error) {
 	if sheet == nil {
 		return nil, errors.New("no style sheet to start the compiling worker before")
 	}
-	tags := `<meta name="fieldhead-compile" content="` + prefix + `/web/compile.js" data-wasm="` + prefix + `/web/app.wasm" data-exec="` + prefix + `/wasm_exec.js">` +
+	tags := `<meta name="fieldhead-compile" content="` + prefix + `/web/start.js" data-wasm="` + prefix + `/web/app.wasm" data-exec="` + prefix + `/wasm_exec.js">` +
 		"\n    " + `<script async fetchpriority="high" src="` + prefix + `/web/start.js"></script>` + "\n    "
 	return append(append(append([]byte{}, page[:sheet[0]]...), tags...), page[sheet[0]:]...), nil
 }

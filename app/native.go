@@ -123,7 +123,7 @@ func newHandler(prefix, version string, wasmSize int64) *app.Handler {
 			SVG:      "/web/icon.svg",
 		},
 		Styles:             []string{"/web/fieldhead.css"},
-		CacheableResources: []string{"/web/prerender.js", "/web/start.js", "/web/compile.js", "/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
+		CacheableResources: []string{"/web/prerender.js", "/web/start.js", "/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
 		RawHeaders: []string{
 			`<script src="` + prefix + `/web/prerender.js"></script>`, // blocking: before the first paint (loader.go)
 			`<meta name="color-scheme" content="light">`,

@@ -211,10 +211,11 @@ func otherSheet(t *testing.T) (query, answer string) {
 
 // TestCompiledInWorker opens a share link on a device the site has never
 // seen: the page starts the program from the module the worker web/start.js
-// made compiled (web/compile.js, which reads the wasm's address from its
-// name), not from a compile of its own, and shows the link's answer. (On a
-// visit the service worker serves, app.js may run before start.js and
-// compile on the page, as designed: only a first visit is checked.)
+// made compiled (web/start.js again, in the worker, which reads the wasm's
+// address from its name), not from a compile of its own, and shows the
+// link's answer. (On a visit the service worker serves, app.js may run
+// before start.js and compile on the page, as designed: only a first visit
+// is checked.)
 // (Source: the HTML standard's Worker constructor and its options' name,
 // and present.Build for the answer.)
 func TestCompiledInWorker(t *testing.T) {
@@ -224,7 +225,7 @@ func TestCompiledInWorker(t *testing.T) {
 	query, want := otherSheet(t)
 	b.navigate(origin + "/?" + query)
 	if by := b.js(`window.fieldheadCompiledBy || "nothing"`); by != "worker" {
-		t.Errorf("a share link's wasm was compiled by the %s, want the worker (web/compile.js)", by)
+		t.Errorf("a share link's wasm was compiled by the %s, want the worker (web/start.js)", by)
 	}
 	if got := b.text("#answer-value"); got != want {
 		t.Errorf("a share link's answer is %q, want %q", got, want)
@@ -324,13 +325,13 @@ func TestFailedLoad(t *testing.T) {
 	if note := fresh.text("#app-wasm-loader-label"); !strings.Contains(note, "Fieldhead could not start") || strings.Contains(note, "TypeError") {
 		t.Errorf("the worker's fetch refused: the note says %q", note)
 	}
-	if n := wasmAsked.Load(); n != 2 {
-		t.Errorf("the worker's fetch refused: the wasm was asked for %d times, want 2 (the worker, then the page)", n)
+	if n := wasmAsked.Load(); n != 3 {
+		t.Errorf("the worker's fetch refused: the wasm was asked for %d times, want 3 (the page's head start, the worker, then the page)", n)
 	}
 }
 
 // blockWasm makes the page's requests for the wasm fail (on) or go through.
-// The worker that compiles the wasm (web/compile.js) fetches it past the
+// The worker that compiles the wasm (web/start.js) fetches it past the
 // page's blocks, so while they hold the page has no Worker: it fetches the
 // wasm itself (app/loader.go). TestFailedLoad blocks the worker's fetch too.
 func blockWasm(t *testing.T, b *tab, on bool) {

@@ -149,15 +149,15 @@ func TestSiteTransfer(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	// The worker that fetches and compiles the wasm (web/compile.js) and
-	// what it loads, under their hashed names, named for web/start.js, an
-	// async script fetched at high priority, both before the first style
-	// sheet (startCompileFirst); no preload (start.js says why).
+	// The worker that fetches and compiles the wasm (web/start.js, the
+	// script that starts it) and what it loads, under their hashed names,
+	// named for web/start.js, an async script fetched at high priority,
+	// both before the first style sheet (startCompileFirst); no preload
+	// (start.js says why).
 	wasm := path.Base(siteAsset(t, site, "web/app.wasm"))
-	worker := path.Base(siteAsset(t, site, "web/compile.js"))
 	exec := path.Base(siteAsset(t, site, "wasm_exec.js"))
 	start := path.Base(siteAsset(t, site, "web/start.js"))
-	tags := `<meta name="fieldhead-compile" content="/web/` + worker + `" data-wasm="/web/` + wasm + `" data-exec="/` + exec + `">` +
+	tags := `<meta name="fieldhead-compile" content="/web/` + start + `" data-wasm="/web/` + wasm + `" data-exec="/` + exec + `">` +
 		"\n    " + `<script async fetchpriority="high" src="/web/` + start + `"></script>`
 	at, sheet := bytes.Index(page, []byte(tags)), bytes.Index(page, []byte(`rel="stylesheet"`))
 	if at < 0 || sheet < 0 || at > sheet {

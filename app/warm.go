@@ -6,7 +6,7 @@ import (
 	"github.com/maxence-charriere/go-app/v10/pkg/app"
 )
 
-// warmUp runs, in the worker that compiles the wasm (web/compile.js,
+// warmUp runs, in the worker that compiles the wasm (web/start.js,
 // which has no document), the program's first steps once: the sheet the
 // page will open read, worked out, worded and laid out as components, as
 // newSheet and the first draw do. The browser compiles each of the

@@ -803,7 +803,7 @@ func (s *browserSession) phoneLink() error {
 }
 
 // followWorkers gives each worker the page starts (the one that fetches
-// and compiles the wasm, web/compile.js), on the phone-class link, the
+// and compiles the wasm, web/start.js), on the phone-class link, the
 // page's network: Chromium applies a page's network settings to its own
 // requests only. A worker's requests made before its network was slowed
 // would be fast; they are listed in s.fastWorkerRequests, and the
@@ -957,6 +957,10 @@ func (r *report) phone(origin string, wire *meter) {
 	s := phoneSession()
 	defer s.cancel()
 	wire.take()
+	stop := func() {}
+	if *traceTo != "" {
+		stop = startTrace(s, *traceTo)
+	}
 	if err := chromedp.Do(s.ctx, chromedp.Navigate(neverSeen(origin, 1))); err != nil {
 		log.Fatal(err)
 	}
@@ -964,6 +968,7 @@ func (r *report) phone(origin string, wire *meter) {
 	if err != nil {
 		log.Fatalf("phone-class first visit: %v", err)
 	}
+	stop()
 	log.Printf("  phone-class first visit: %.0f ms", first)
 	s.refuseFastWorkers("phone-class first visit")
 	if err := s.waitWorker(); err != nil {
