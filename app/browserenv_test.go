@@ -288,6 +288,19 @@ func (b *tab) thrown() []string {
 	return append([]string(nil), b.exceptions...)
 }
 
+// asked reports whether the page itself (not a worker it started) asked
+// for a URL whose path ends in suffix.
+func (b *tab) asked(suffix string) bool {
+	b.mu.Lock()
+	defer b.mu.Unlock()
+	for _, r := range b.requests {
+		if u, err := url.Parse(r); err == nil && strings.HasSuffix(u.Path, suffix) {
+			return true
+		}
+	}
+	return false
+}
+
 // foreign returns the requests to any origin other than origin, except
 // those the caller expects (the CSP probes).
 func (b *tab) foreign(origin string, except ...string) []string {

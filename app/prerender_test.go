@@ -233,6 +233,47 @@ func TestCompiledInWorker(t *testing.T) {
 	b.noProblems("a share link compiled in the worker")
 }
 
+// TestWasmFetchedOnce opens a share link on a device the site has never
+// seen, on a slowed link (the page's requests at 2 Mbps, so the page's
+// own request for the wasm, its head start in web/start.js, is still
+// downloading when the worker asks): the page asks for the wasm, yet the
+// server is asked for it once, the worker compiles it, and the link's
+// answer shows. A second download would double a phone's wait. (Source:
+// RFC 9111, a request answered from a stored response, here one still
+// being stored; the count is the server's own.)
+func TestWasmFetchedOnce(t *testing.T) {
+	site := testSite(t)
+	var asked atomic.Int32
+	h := siteHandler(site, "")
+	srv := httptest.NewServer(http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
+		if strings.HasSuffix(r.URL.Path, ".wasm") {
+			asked.Add(1)
+		}
+		h.ServeHTTP(w, r)
+	}))
+	t.Cleanup(srv.Close)
+	b := newTab(t)
+	if _, err := chromedp.Call(b.ctx, network.EmulateNetworkConditionsByRule, network.EmulateNetworkConditionsByRuleParams{
+		MatchedNetworkConditions: []*network.Conditions{{Latency: 40, DownloadThroughput: 2e6 / 8, UploadThroughput: 1e6 / 8}}}); err != nil {
+		t.Fatal(err)
+	}
+	query, want := otherSheet(t)
+	b.navigate(srv.URL + "/?" + query)
+	if !b.asked(".wasm") {
+		t.Error("the page never asked for the wasm itself: no head start (web/start.js)")
+	}
+	if n := asked.Load(); n != 1 {
+		t.Errorf("the server was asked for the wasm %d times on one first visit, want once", n)
+	}
+	if by := b.js(`window.fieldheadCompiledBy || "nothing"`); by != "worker" {
+		t.Errorf("the wasm was compiled by the %s, want the worker", by)
+	}
+	if got := b.text("#answer-value"); got != want {
+		t.Errorf("the link's answer is %q, want %q", got, want)
+	}
+	b.noProblems("a first visit on a slowed link")
+}
+
 // TestFailedLoad opens the site with the wasm's request blocked, as on a
 // first visit offline: the corner note says in words that Fieldhead could
 // not start and what to do, stops turning, leaves the written demo
