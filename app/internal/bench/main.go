@@ -675,7 +675,8 @@ func (s *browserSession) waitShown() (float64, error) {
 }
 
 // phases splits a load, in ms from navigation start: the wasm's bytes in
-// (its fetch's responseEnd), compiled and instantiated (app.js's mark
+// (the page's fetch's responseEnd, when the page compiled it; 0 when the
+// worker did, whose fetch the page cannot see), compiled and instantiated (app.js's mark
 // fieldhead-wasm-ready), the Go program started (its mark fieldhead-main),
 // the whole sheet drawn into the DOM (window.fieldheadFirstResult, set
 // once the cards the first draw put off are drawn too: app/sheet.go,
@@ -698,7 +699,9 @@ func (p phases) String() string {
 
 const phasesJS = `(() => {
   const mark = (n) => { const e = performance.getEntriesByName(n)[0]; return e ? e.startTime : 0; };
-  const w = performance.getEntriesByType("resource").find((e) => e.name.endsWith(".wasm"));
+  // The page's own download, when it compiled the wasm itself; 0 when the
+  // worker did (the page's head start, web/start.js, is let go unread).
+  const w = window.fieldheadCompiledBy === "page" ? performance.getEntriesByType("resource").filter((e) => e.name.endsWith(".wasm")).pop() : null;
   return [w ? w.responseEnd : 0, mark("fieldhead-wasm-ready"), mark("fieldhead-main"), window.fieldheadFirstResult || 0, window.fieldheadShown || 0,
     mark("fieldhead-evaluated"), mark("fieldhead-mounted")];
 })()`
