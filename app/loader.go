@@ -15,15 +15,15 @@ import (
 // those, in the generated file, and fails the build if go-app's text is no
 // longer what it expects:
 //
-//   - The wasm is compiled in a worker that fetches it itself
-//     (web/start.js, started from itself as the page opens), and
-//     the page starts it from the compiled module (instantiateJS): the main
-//     thread no longer reads and decodes 9 MB while it lays out and paints.
-//     go-app wrapped the response in a new Response to count bytes for a
-//     progress label; Chromium keeps compiled code only for a module
-//     compiled from the fetched response itself, so the worker compiles
-//     the response as fetched. The label stays, without a percentage
-//     (newHandler's LoadingLabel).
+//   - The wasm is compiled in a worker that fetches it itself (web/start.js,
+//     which the page runs as it opens and which starts the worker from its
+//     own file), and the page starts it from the compiled module
+//     (instantiateJS): the main thread no longer reads and decodes 9 MB
+//     while it lays out and paints. go-app wrapped the response in a new
+//     Response to count bytes for a progress label; Chromium keeps
+//     compiled code only for a module compiled from the fetched response
+//     itself, so the worker compiles the response as fetched. The label
+//     stays, without a percentage (newHandler's LoadingLabel).
 //   - A mark, fieldhead-wasm-ready, once the module is instantiated (make bench).
 //   - The service worker is registered once the wasm is running, not
 //     before the download starts: its installation then takes every file
@@ -62,12 +62,13 @@ func patchLoader(js string) (string, error) {
 }
 
 // instantiateJS starts the wasm from the module web/start.js had a
-// worker compile (web/start.js in a worker): the streamed compile's decoding then no
-// longer holds the main thread, which meanwhile lays out and paints what
-// the page shows before the wasm (about 200 ms of the main thread at 4×
-// CPU on an offline reload, make bench). Where no worker was started, or
-// it failed, the page compiles as go-app did, and a wasm that cannot be
-// fetched fails there (loadFailedJS). A retry compiles on the page.
+// worker compile (web/start.js again, in the worker): the streamed
+// compile's decoding then no longer holds the main thread, which meanwhile
+// lays out and paints what the page shows before the wasm (about 200 ms of
+// the main thread at 4× CPU on an offline reload, make bench). Where no
+// worker was started, or it failed, the page compiles as go-app did, and a
+// wasm that cannot be fetched fails there (loadFailedJS). A retry compiles
+// on the page.
 // window.fieldheadCompiledBy says which did ("worker" or "page").
 const instantiateJS = `
 // Fieldhead: the wasm compiled off the main thread (app/loader.go).

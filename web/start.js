@@ -3,10 +3,9 @@
 // the style sheets, fetched at high priority (the site writer puts it
 // there, app/loader.go), that starts a worker from this same file as the
 // page opens. It runs as soon as it is fetched and holds nothing back, so
-// the worker's download of the wasm starts while the main thread is still
-// free (the worker cannot start while it is busy). Should app.js run
-// first, it compiles on the page and this starts nothing
-// (fieldheadCompileTaken).
+// the worker is asked for, and on a first visit the wasm too (below),
+// while the main thread is still free. Should app.js run first, it
+// compiles on the page and this starts nothing (fieldheadCompileTaken).
 //
 // One file for both: the worker's script is then already in the browser's
 // cache when the page starts it, where a file of its own was one more
@@ -106,8 +105,8 @@ if (typeof document === "undefined") {
       // runs, and lets it go once the worker's own request has joined the
       // download in the browser's cache (the worker says so): a worker
       // starts only when the page's main thread is free to see it start,
-      // which on a first visit comes after the page's first layout, 250–
-      // 300 ms later (make bench, phone-class link, 4× CPU). The page never
+      // which on a first visit comes after the page's first layout, 225–
+      // 370 ms later (make bench, phone-class link, 4× CPU). The page never
       // reads what it fetched (reading 9 MB held its main thread for half a
       // second). A kept site is read from the service worker's cache, where
       // there is nothing to win.
