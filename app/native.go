@@ -125,6 +125,12 @@ func newHandler(prefix, version string, wasmSize int64) *app.Handler {
 		Styles:             []string{"/web/fieldhead.css"},
 		CacheableResources: []string{"/web/prerender.js", "/web/start.js", "/web/icon.svg", "/web/icon-192.png", "/web/icon-512.png"},
 		RawHeaders: []string{
+			// No paint before the written answer is read: the parser
+			// otherwise yields a frame after each short stretch of the
+			// page, and each partial layout delays the answer
+			// (DEVELOPERS.md). prerender.js takes it away when the written
+			// sheet is not the one shown.
+			`<link rel="expect" href="#answer-value" blocking="render">`,
 			`<script src="` + prefix + `/web/prerender.js"></script>`, // blocking: before the first paint (loader.go)
 			`<meta name="color-scheme" content="light">`,
 			`<meta name="format-detection" content="telephone=no">`,

@@ -60,6 +60,10 @@ func TestPrerenderedPage(t *testing.T) {
 	want := demoAnswer(t)
 	for _, s := range []string{
 		`<div id="app-wasm-loader" role="status">`,
+		// The first paint waits for the written answer (the HTML
+		// standard's rel=expect with blocking=render), asked for before
+		// prerender.js, which takes it away when another sheet is shown.
+		`<link rel="expect" href="#answer-value" blocking="render">` + "\n    " + `<script src="/web/prerender.js"></script>`,
 	} {
 		if !strings.Contains(page, s) {
 			t.Errorf("index.html lacks %s", s)
@@ -229,6 +233,9 @@ func TestCompiledInWorker(t *testing.T) {
 	}
 	if got := b.text("#answer-value"); got != want {
 		t.Errorf("a share link's answer is %q, want %q", got, want)
+	}
+	if b.jsBool(`document.querySelector('link[rel="expect"]') !== null`) {
+		t.Error("a share link's page still holds the written demo's rel=expect: its first paint waited for the hidden demo's answer")
 	}
 	b.noProblems("a share link compiled in the worker")
 }

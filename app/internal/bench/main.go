@@ -887,6 +887,10 @@ func neverSeen(origin string, n int) string {
 func (r *report) bare(origin string) {
 	s := phoneSession()
 	defer s.cancel()
+	stop := func() {}
+	if *traceTo != "" {
+		stop = startTrace(s, strings.TrimSuffix(*traceTo, ".json")+"-bare.json")
+	}
 	if err := chromedp.Do(s.ctx, chromedp.Navigate(origin+"/")); err != nil {
 		log.Fatal(err)
 	}
@@ -894,6 +898,7 @@ func (r *report) bare(origin string) {
 	if err != nil {
 		log.Fatalf("phone-class bare page: %v", err)
 	}
+	stop()
 	pre, err := chromedp.Run(s.ctx, chromedp.Evaluate[float64]("window.fieldheadPreShown || 0"))
 	if err != nil || pre == 0 {
 		log.Fatalf("phone-class bare page: the written answer was never painted (%v)", err)

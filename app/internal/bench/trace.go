@@ -18,9 +18,10 @@ import (
 // traceTo is -trace: with -return-only, Chromium's trace of one repeat
 // visit (the last; of the last offline reload too, beside it); with
 // -cold-only, of the last cold load; with -edits-only, of the timed edits;
-// with -phone-only, of the phone-class first visit;
+// with -phone-only, of the phone-class first visit (and of the bare
+// page's, beside it);
 // written in the trace event format that chrome://tracing and Perfetto read.
-var traceTo = flag.String("trace", "", "with -return-only, -cold-only, -edits-only or -phone-only: write Chromium's trace to this file (-edits-only: of the timed edits; -return-only: of the last repeat visit, and of the last offline reload to its name with -offline; -cold-only: of the last cold load, to its name with -cold; -phone-only: of the first visit to a never-seen link)")
+var traceTo = flag.String("trace", "", "with -return-only, -cold-only, -edits-only or -phone-only: write Chromium's trace to this file (-edits-only: of the timed edits; -return-only: of the last repeat visit, and of the last offline reload to its name with -offline; -cold-only: of the last cold load, to its name with -cold; -phone-only: of the first visit to a never-seen link, and of the bare page's to its name with -bare)")
 
 // traceLast starts tracing load i of -loads when it is the last and -trace
 // is given, into its file with suffix before ".json"; it returns what
