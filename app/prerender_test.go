@@ -373,8 +373,8 @@ func TestFailedLoad(t *testing.T) {
 	if note := fresh.text("#app-wasm-loader-label"); !strings.Contains(note, "Fieldhead could not start") || strings.Contains(note, "TypeError") {
 		t.Errorf("the worker's fetch refused: the note says %q", note)
 	}
-	if n := wasmAsked.Load(); n != 3 {
-		t.Errorf("the worker's fetch refused: the wasm was asked for %d times, want 3 (the page's head start, the worker, then the page)", n)
+	if n := wasmAsked.Load(); n != 2 {
+		t.Errorf("the worker's fetch refused: the wasm was asked for %d times, want 2 (the worker, then the page: a bare page takes no head start)", n)
 	}
 }
 
