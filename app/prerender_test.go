@@ -249,16 +249,7 @@ func TestCompiledInWorker(t *testing.T) {
 // RFC 9111, a request answered from a stored response, here one still
 // being stored; the count is the server's own.)
 func TestWasmFetchedOnce(t *testing.T) {
-	site := testSite(t)
-	var asked atomic.Int32
-	h := siteHandler(site, "")
-	srv := httptest.NewServer(http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
-		if strings.HasSuffix(r.URL.Path, ".wasm") {
-			asked.Add(1)
-		}
-		h.ServeHTTP(w, r)
-	}))
-	t.Cleanup(srv.Close)
+	srv, asked := wasmCountingServer(t, testSite(t), false)
 	b := newTab(t)
 	if _, err := chromedp.Call(b.ctx, network.EmulateNetworkConditionsByRule, network.EmulateNetworkConditionsByRuleParams{
 		MatchedNetworkConditions: []*network.Conditions{{Latency: 40, DownloadThroughput: 2e6 / 8, UploadThroughput: 1e6 / 8}}}); err != nil {
@@ -352,17 +343,7 @@ func TestFailedLoad(t *testing.T) {
 	// The worker's own fetch failing (the server refuses the wasm, on a
 	// device the site has never seen): the page tries once more itself,
 	// and says what failed the same way.
-	var wasmAsked atomic.Int32
-	h := siteHandler(site, "")
-	srv := httptest.NewServer(http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
-		if strings.HasSuffix(r.URL.Path, ".wasm") {
-			wasmAsked.Add(1)
-			http.Error(w, "refused for the test", http.StatusServiceUnavailable)
-			return
-		}
-		h.ServeHTTP(w, r)
-	}))
-	t.Cleanup(srv.Close)
+	srv, wasmAsked := wasmCountingServer(t, site, true)
 	fresh := newTab(t)
 	if err := chromedp.Do(fresh.ctx, chromedp.Navigate(srv.URL+"/")); err != nil {
 		t.Fatal(err)
@@ -559,4 +540,24 @@ func TestSnapshot(t *testing.T) {
 		t.Errorf("after typing a flow the answer is still %q", got)
 	}
 	b.noProblems("snapshot before the wasm")
+}
+
+// wasmCountingServer serves site for one check and counts the requests
+// for the wasm that reach it; with refuse, it answers them 503.
+func wasmCountingServer(t *testing.T, site string, refuse bool) (*httptest.Server, *atomic.Int32) {
+	t.Helper()
+	var asked atomic.Int32
+	h := siteHandler(site, "")
+	srv := httptest.NewServer(http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
+		if strings.HasSuffix(r.URL.Path, ".wasm") {
+			asked.Add(1)
+			if refuse {
+				http.Error(w, "refused for the test", http.StatusServiceUnavailable)
+				return
+			}
+		}
+		h.ServeHTTP(w, r)
+	}))
+	t.Cleanup(srv.Close)
+	return srv, &asked
 }

@@ -171,17 +171,15 @@
 
   try {
     const query = location.search.slice(1) || localStorage.getItem(KEY) || "";
-    if (query !== "") {
-      // Not the written demo: the first paint (the kept sheet's snapshot,
-      // or the starting note) waits for nothing in it (app/native.go).
-      const expect = document.querySelector('link[rel="expect"]');
-      if (expect) expect.remove();
-    }
     if (query === "") {
       document.documentElement.classList.add("demo-page");
       document.addEventListener("DOMContentLoaded", () => { shown = document.getElementById("sheet"); }, {once: true});
       return;
     }
+    // Not the written demo: the first paint (the kept sheet's snapshot, or
+    // the starting note) waits for nothing in it (app/native.go).
+    const expect = document.querySelector('link[rel="expect"]');
+    if (expect) expect.remove();
     const ck = new URLSearchParams(query).get("ck");
     const raw = ck ? localStorage.getItem(PREFIX + ck) : null;
     if (!raw) return;

@@ -676,8 +676,9 @@ func (s *browserSession) waitShown() (float64, error) {
 
 // phases splits a load, in ms from navigation start: the wasm's bytes in
 // (the page's fetch's responseEnd, when the page compiled it; 0 when the
-// worker did, whose fetch the page cannot see), compiled and instantiated (app.js's mark
-// fieldhead-wasm-ready), the Go program started (its mark fieldhead-main),
+// worker did, whose fetch the page cannot see), compiled and instantiated
+// (app.js's mark fieldhead-wasm-ready), the Go program started (its mark
+// fieldhead-main),
 // the whole sheet drawn into the DOM (window.fieldheadFirstResult, set
 // once the cards the first draw put off are drawn too: app/sheet.go,
 // drawnWhole; so after the answer, which the first draw holds) and the
@@ -887,10 +888,7 @@ func neverSeen(origin string, n int) string {
 func (r *report) bare(origin string) {
 	s := phoneSession()
 	defer s.cancel()
-	stop := func() {}
-	if *traceTo != "" {
-		stop = startTrace(s, strings.TrimSuffix(*traceTo, ".json")+"-bare.json")
-	}
+	stop := traceIf(s, "-bare")
 	if err := chromedp.Do(s.ctx, chromedp.Navigate(origin+"/")); err != nil {
 		log.Fatal(err)
 	}
@@ -965,10 +963,7 @@ func (r *report) phone(origin string, wire *meter) {
 	s := phoneSession()
 	defer s.cancel()
 	wire.take()
-	stop := func() {}
-	if *traceTo != "" {
-		stop = startTrace(s, *traceTo)
-	}
+	stop := traceIf(s, "")
 	if err := chromedp.Do(s.ctx, chromedp.Navigate(neverSeen(origin, 1))); err != nil {
 		log.Fatal(err)
 	}

@@ -23,11 +23,19 @@ import (
 // written in the trace event format that chrome://tracing and Perfetto read.
 var traceTo = flag.String("trace", "", "with -return-only, -cold-only, -edits-only or -phone-only: write Chromium's trace to this file (-edits-only: of the timed edits; -return-only: of the last repeat visit, and of the last offline reload to its name with -offline; -cold-only: of the last cold load, to its name with -cold; -phone-only: of the first visit to a never-seen link, and of the bare page's to its name with -bare)")
 
-// traceLast starts tracing load i of -loads when it is the last and -trace
-// is given, into its file with suffix before ".json"; it returns what
-// stops the trace (nothing to stop otherwise).
+// traceLast starts tracing load i of -loads when it is the last (traceIf).
 func traceLast(s *browserSession, i int, suffix string) func() {
-	if *traceTo == "" || i != *loads-1 {
+	if i != *loads-1 {
+		return func() {}
+	}
+	return traceIf(s, suffix)
+}
+
+// traceIf starts tracing when -trace is given, into its file with suffix
+// before ".json"; it returns what stops the trace (nothing to stop
+// otherwise).
+func traceIf(s *browserSession, suffix string) func() {
+	if *traceTo == "" {
 		return func() {}
 	}
 	return startTrace(s, strings.TrimSuffix(*traceTo, ".json")+suffix+".json")
