@@ -92,14 +92,6 @@ func TestMergeSynthetic(t *testing.T) {
 // same after Merge, whose memory image is the linker's byte for byte, in
 // fewer segments.
 func TestMergeGoProgram(t *testing.T) {
-	if testing.Short() {
-		t.Skip("builds a Go program for wasm")
-	}
-	node, err := exec.LookPath("node")
-	if err != nil {
-		t.Skip("no node")
-	}
-	dir := t.TempDir()
 	src := `package main
 
 import (
@@ -114,6 +106,38 @@ func main() {
 	fmt.Println(strings.ToUpper("wasm data"), table, unicode.IsUpper('Q'), strings.Repeat("ab", 3))
 }
 `
+	in := buildProbe(t, src)
+	out, err := Merge(in, DefaultGap)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want, nIn := image(t, in)
+	got, nOut := image(t, out)
+	if !bytes.Equal(got, want) {
+		t.Fatal("the merged module's memory image differs from the linker's")
+	}
+	if nOut >= nIn {
+		t.Errorf("%d segments merged into %d", nIn, nOut)
+	}
+	const printed = "WASM DATA [1.5 0 0 0 0 0 0 0 0 0 0 0 0 0 2.25 -0.125] true ababab\n"
+	if a, b := runProbe(t, in), runProbe(t, out); a != printed || b != printed {
+		t.Errorf("printed %q as built and %q merged, want %q", a, b, printed)
+	}
+}
+
+// buildProbe builds the Go program src for GOOS=js GOARCH=wasm, as the
+// site's wasm is built (-trimpath, -s -w), and returns the module; it
+// skips the test in -short mode or where Node.js, which runs it, is
+// missing.
+func buildProbe(t *testing.T, src string) []byte {
+	t.Helper()
+	if testing.Short() {
+		t.Skip("builds a Go program for wasm")
+	}
+	if _, err := exec.LookPath("node"); err != nil {
+		t.Skip("no node")
+	}
+	dir := t.TempDir()
 	if err := os.WriteFile(filepath.Join(dir, "main.go"), []byte(src), 0o644); err != nil {
 		t.Fatal(err)
 	}
@@ -131,32 +155,21 @@ func main() {
 	if err != nil {
 		t.Fatal(err)
 	}
-	out, err := Merge(in, DefaultGap)
+	return in
+}
+
+// runProbe runs the module under Node.js with Go's wasm_exec_node.js and
+// returns what it printed (both streams).
+func runProbe(t *testing.T, wasm []byte) string {
+	t.Helper()
+	path := filepath.Join(t.TempDir(), "probe.wasm")
+	if err := os.WriteFile(path, wasm, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	cmd := exec.Command("node", filepath.Join(runtime.GOROOT(), "lib", "wasm", "wasm_exec_node.js"), path)
+	b, err := cmd.CombinedOutput()
 	if err != nil {
-		t.Fatal(err)
+		t.Fatalf("running the probe: %v\n%s", err, b)
 	}
-	want, nIn := image(t, in)
-	got, nOut := image(t, out)
-	if !bytes.Equal(got, want) {
-		t.Fatal("the merged module's memory image differs from the linker's")
-	}
-	if nOut >= nIn {
-		t.Errorf("%d segments merged into %d", nIn, nOut)
-	}
-	merged := filepath.Join(dir, "merged.wasm")
-	if err := os.WriteFile(merged, out, 0o644); err != nil {
-		t.Fatal(err)
-	}
-	run := func(path string) string {
-		cmd := exec.Command(node, filepath.Join(runtime.GOROOT(), "lib", "wasm", "wasm_exec_node.js"), path)
-		b, err := cmd.CombinedOutput()
-		if err != nil {
-			t.Fatalf("running %s: %v\n%s", filepath.Base(path), err, b)
-		}
-		return string(b)
-	}
-	const printed = "WASM DATA [1.5 0 0 0 0 0 0 0 0 0 0 0 0 0 2.25 -0.125] true ababab\n"
-	if a, b := run(wasm), run(merged); a != printed || b != printed {
-		t.Errorf("printed %q as built and %q merged, want %q", a, b, printed)
-	}
+	return string(b)
 }

@@ -1,0 +1,241 @@
+package wasmdata
+
+import (
+	"bytes"
+	"encoding/binary"
+	"errors"
+	"fmt"
+	"sort"
+)
+
+// The Go runtime's function table (pclntab), as Go 1.20 to 1.26 lay it
+// out for GOARCH=wasm (runtime/symtab.go, cmd/link/internal/ld/pcln.go):
+// a header (magic 0xfffffff1, two zero bytes, the PC quantum 1, the
+// pointer size 8, then eight 8-byte fields), the function names, the
+// compilation units' file indexes (cutab), the file names, the
+// PC-value tables (pctab), and the function table: nfunc+1 entries of
+// (entry, offset of the function's _func) and the _func records.
+const (
+	pclnMagic    = 0xfffffff1
+	pclnHeader   = 8 + 8*8
+	funcPCFile   = 20 // _func's pcfile, then pcln, npcdata; pcsp at 16
+	funcNPCData  = 28
+	funcPCData   = 44 // the pcdata offsets follow the fixed fields
+	pclnMaxFuncs = 1 << 24
+)
+
+// DropLines returns wasm, a module linked by Go 1.20 to 1.26 for
+// GOARCH=wasm, without the runtime's file and line tables: each
+// function's pcfile and pcln offsets are set to 0, which the runtime
+// reads as no table (runtime.funcline1 then reports file "?", line 0),
+// and the bytes of those tables, of the compilation units' file indexes
+// and of the file names are zeroed. On Fieldhead's wasm that is 85 KB
+// less brotli (1 281 429 -> 1 196 670 B, December 2026): the tables
+// differ from function to function and compress poorly.
+//
+// What the runtime needs to run is left as it is: frame sizes (pcsp),
+// stack maps and safe points (pcdata), funcdata, and the function names,
+// which it compares in two places (reflect's call stubs, when the
+// garbage collector scans their frames) and which a panic's trace still
+// prints. Only the module's memory changes, in place: the sections and
+// the data segments keep their sizes.
+//
+// A module with no such table, or with one that does not read as
+// described, is refused with an error, so that a toolchain whose table
+// differs is noticed rather than shipped broken.
+func DropLines(wasm []byte) ([]byte, error) {
+	out := bytes.Clone(wasm)
+	segs, err := dataSegments(out)
+	if err != nil {
+		return nil, err
+	}
+	mem := newMemory(segs)
+	p, err := findPCLN(mem.image)
+	if err != nil {
+		return nil, err
+	}
+	hdr := func(i int) uint64 { return binary.LittleEndian.Uint64(mem.image[p+8+8*i:]) }
+	nfunc, cu, pctab, pcln := hdr(0), hdr(4), hdr(6), hdr(7)
+	tab := mem.image[p:]
+	functab := tab[pcln:]
+	pcs := tab[pctab:pcln]
+	keep := map[uint32]bool{}
+	drop := map[uint32]bool{}
+	var fields []int // the pcfile and pcln fields, as offsets in mem
+	for i := range nfunc {
+		fo := uint64(binary.LittleEndian.Uint32(functab[8*i+4:]))
+		if fo+funcPCData > uint64(len(functab)) {
+			return nil, fmt.Errorf("wasmdata: function %d's record at %d lies past memory", i, fo)
+		}
+		f := functab[fo:]
+		npc := uint64(binary.LittleEndian.Uint32(f[funcNPCData:]))
+		if fo+funcPCData+4*npc > uint64(len(functab)) {
+			return nil, fmt.Errorf("wasmdata: function %d has %d pcdata tables, past memory", i, npc)
+		}
+		keep[binary.LittleEndian.Uint32(f[16:])] = true
+		for k := range npc {
+			keep[binary.LittleEndian.Uint32(f[funcPCData+4*k:])] = true
+		}
+		for k := range 2 {
+			off := funcPCFile + 4*k
+			drop[binary.LittleEndian.Uint32(f[off:])] = true
+			fields = append(fields, p+int(pcln+fo)+off)
+		}
+	}
+	var zero [][2]int // ranges of mem to zero
+	for off := range drop {
+		if off == 0 || keep[off] { // 0: no table; a table shared with pcsp or pcdata stays
+			continue
+		}
+		n, err := pcvalueLen(pcs, off)
+		if err != nil {
+			return nil, err
+		}
+		zero = append(zero, [2]int{p + int(pctab) + int(off), p + int(pctab) + int(off) + n})
+	}
+	zero = append(zero, [2]int{p + int(cu), p + int(pctab)}) // cutab and filetab: only the dropped tables index them
+	for _, f := range fields {
+		zero = append(zero, [2]int{f, f + 4})
+	}
+	for _, r := range zero {
+		mem.zero(r[0], r[1])
+	}
+	return out, nil
+}
+
+// findPCLN returns the offset in mem of the only pclntab header: the
+// magic, its fixed bytes and offsets that lie in order within memory.
+func findPCLN(mem []byte) (int, error) {
+	var magic [8]byte
+	binary.LittleEndian.PutUint32(magic[:], pclnMagic)
+	copy(magic[4:], []byte{0, 0, 1, 8})
+	found := -1
+	for i := 0; ; {
+		j := bytes.Index(mem[i:], magic[:])
+		if j < 0 {
+			break
+		}
+		at := i + j
+		i = at + 1
+		if !validPCLN(mem, at) {
+			continue
+		}
+		if found >= 0 {
+			return 0, errors.New("wasmdata: two function tables in memory")
+		}
+		found = at
+	}
+	if found < 0 {
+		return 0, errors.New("wasmdata: no Go 1.20+ function table (pclntab) for wasm in memory")
+	}
+	return found, nil
+}
+
+// validPCLN reports whether a header at mem[at:] has its tables in order
+// within memory and a function table sorted by entry.
+func validPCLN(mem []byte, at int) bool {
+	if at+pclnHeader > len(mem) {
+		return false
+	}
+	h := func(i int) uint64 { return binary.LittleEndian.Uint64(mem[at+8+8*i:]) }
+	nfunc, names, cu, files, pctab, pcln := h(0), h(3), h(4), h(5), h(6), h(7)
+	size := uint64(len(mem) - at)
+	if nfunc == 0 || nfunc > pclnMaxFuncs || names != pclnHeader || !(names <= cu && cu <= files && files <= pctab && pctab <= pcln) ||
+		pcln+8*(nfunc+1) > size {
+		return false
+	}
+	ft := mem[at+int(pcln):]
+	for i := range nfunc {
+		if binary.LittleEndian.Uint32(ft[8*i:]) > binary.LittleEndian.Uint32(ft[8*i+8:]) {
+			return false
+		}
+	}
+	return true
+}
+
+// pcvalueLen is the length of the PC-value table at tab[off:]: pairs of
+// a zig-zag value delta and a PC delta, varints, ended by a zero value
+// delta after the first pair (runtime.step).
+func pcvalueLen(tab []byte, off uint32) (int, error) {
+	p := int(off)
+	for first := true; ; first = false {
+		if p >= len(tab) {
+			return 0, fmt.Errorf("wasmdata: PC-value table at %d runs past the tables", off)
+		}
+		if tab[p] == 0 && !first {
+			return p + 1 - int(off), nil
+		}
+		for k := 0; k < 2; k++ { // value delta, PC delta
+			n, err := varintLen(tab[p:])
+			if err != nil {
+				return 0, fmt.Errorf("wasmdata: PC-value table at %d: %w", off, err)
+			}
+			p += n
+		}
+	}
+}
+
+// varintLen is the length of the unsigned LEB128 number at b's start.
+func varintLen(b []byte) (int, error) {
+	for i := 0; i < len(b) && i < 5; i++ {
+		if b[i] < 0x80 {
+			return i + 1, nil
+		}
+	}
+	return 0, errors.New("malformed varint")
+}
+
+// dataSegments returns the segments of wasm's data section, their data
+// aliasing wasm.
+func dataSegments(wasm []byte) ([]segment, error) {
+	if len(wasm) < 8 || !bytes.Equal(wasm[:4], []byte("\x00asm")) {
+		return nil, errors.New("wasmdata: not a WebAssembly module")
+	}
+	for off := 8; off < len(wasm); {
+		size, body, err := uleb(wasm, off+1)
+		if err != nil {
+			return nil, err
+		}
+		end := body + int(size)
+		if end > len(wasm) || end < body {
+			return nil, fmt.Errorf("wasmdata: section %d at %d runs past the end", wasm[off], off)
+		}
+		if wasm[off] == 11 {
+			return readSegments(wasm[body:end])
+		}
+		off = end
+	}
+	return nil, errors.New("wasmdata: no data section")
+}
+
+// memory is the module's initial memory: an image to read, and the
+// segments, which zero writes through to.
+type memory struct {
+	image []byte
+	segs  []segment // sorted by address, not overlapping (readSegments)
+}
+
+func newMemory(segs []segment) *memory {
+	var n int
+	if len(segs) > 0 {
+		last := segs[len(segs)-1]
+		n = int(last.addr) + len(last.data)
+	}
+	m := &memory{image: make([]byte, n), segs: segs}
+	for _, s := range segs {
+		copy(m.image[s.addr:], s.data)
+	}
+	return m
+}
+
+// zero clears mem[from:to] in the image and in every segment that holds
+// part of it; memory no segment holds is zero already.
+func (m *memory) zero(from, to int) {
+	clear(m.image[from:to])
+	i := sort.Search(len(m.segs), func(i int) bool { return int(m.segs[i].addr)+len(m.segs[i].data) > from })
+	for ; i < len(m.segs) && int(m.segs[i].addr) < to; i++ {
+		s := m.segs[i]
+		a, b := max(from, int(s.addr)), min(to, int(s.addr)+len(s.data))
+		clear(s.data[a-int(s.addr) : b-int(s.addr)])
+	}
+}
