@@ -39,7 +39,7 @@ func native() {
 	prefix := flag.String("prefix", "", "URL path the site is deployed under, e.g. /tools/fieldhead")
 	serve := flag.String("serve", "", "after writing, serve the site on this address, e.g. :8000")
 	flag.StringVar(&buildStamp, "stamp", "", "extra text mixed into the version, to make open pages offer an update without a code change")
-	flag.BoolVar(&keepLines, "lines", keepLines, "keep the wasm's file and line tables, so that a panic's trace gives lines (85 KB more brotli; for debugging)")
+	flag.BoolVar(&keepLines, "lines", keepLines, "keep the wasm's file and line tables, so that a panic's trace gives lines (99 KB more brotli; for debugging)")
 	flag.BoolVar(&wasmAlias, "wasm-alias", wasmAlias, "also name the wasm web/app.wasm (a symbolic link; for the tests, not for deployment)")
 	flag.StringVar(&compressCache, "cache", compressCache, "folder keeping the compressed copies between builds (\"\" for none)")
 	eval := flag.String("eval", "", "instead of writing the site, read this sheets file and write its results table (CSV) to standard output")
@@ -158,7 +158,7 @@ func writeSite(out, wasmPath, assets, prefix string) error {
 		return fmt.Errorf("reading the wasm (build it first with GOOS=js GOARCH=wasm): %w", err)
 	}
 	// No file and line tables in the runtime's function table: a panic's
-	// trace names the functions but not their lines, for 85 KB less
+	// trace names the functions but not their lines, for 99 KB less
 	// brotli (app/internal/wasmdata); -lines keeps them.
 	if !keepLines {
 		if wasm, err = wasmdata.DropLines(wasm); err != nil {

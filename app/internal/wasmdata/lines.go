@@ -16,22 +16,27 @@ import (
 // PC-value tables (pctab), and the function table: nfunc+1 entries of
 // (entry, offset of the function's _func) and the _func records.
 const (
-	pclnMagic    = 0xfffffff1
-	pclnHeader   = 8 + 8*8
-	funcPCFile   = 20 // _func's pcfile, then pcln, npcdata; pcsp at 16
-	funcNPCData  = 28
-	funcPCData   = 44 // the pcdata offsets follow the fixed fields
-	pclnMaxFuncs = 1 << 24
+	pclnMagic     = 0xfffffff1
+	pclnHeader    = 8 + 8*8
+	funcPCSP      = 16 // _func's fields (runtime/runtime2.go)
+	funcPCFile    = 20
+	funcPCLn      = 24
+	funcNPCData   = 28
+	funcCU        = 32 // the function's compilation unit in cutab: only for its files
+	funcStartLine = 36 // only for a Frame's StartLine and profiles
+	funcPCData    = 44 // the pcdata offsets follow the fixed fields
+	pclnMaxFuncs  = 1 << 24
 )
 
 // DropLines returns wasm, a module linked by Go 1.20 to 1.26 for
 // GOARCH=wasm, without the runtime's file and line tables: each
 // function's pcfile and pcln offsets are set to 0, which the runtime
 // reads as no table (runtime.funcline1 then reports file "?", line 0),
-// and the bytes of those tables, of the compilation units' file indexes
-// and of the file names are zeroed. On Fieldhead's wasm that is 85 KB
-// less brotli (1 281 429 -> 1 196 670 B, December 2026): the tables
-// differ from function to function and compress poorly.
+// as are its compilation unit and first line, which only those tables
+// use; the bytes of the tables, of the compilation units' file indexes
+// and of the file names are zeroed. On Fieldhead's wasm that is 99 KB
+// less brotli (1 281 429 -> 1 182 329 B, December 2026): the tables and
+// line numbers differ from function to function and compress poorly.
 //
 // What the runtime needs to run is left as it is: frame sizes (pcsp),
 // stack maps and safe points (pcdata), funcdata, and the function names,
@@ -72,13 +77,14 @@ func DropLines(wasm []byte) ([]byte, error) {
 		if fo+funcPCData+4*npc > uint64(len(functab)) {
 			return nil, fmt.Errorf("wasmdata: function %d has %d pcdata tables, past memory", i, npc)
 		}
-		keep[binary.LittleEndian.Uint32(f[16:])] = true
+		keep[binary.LittleEndian.Uint32(f[funcPCSP:])] = true
 		for k := range npc {
 			keep[binary.LittleEndian.Uint32(f[funcPCData+4*k:])] = true
 		}
-		for k := range 2 {
-			off := funcPCFile + 4*k
+		for _, off := range []int{funcPCFile, funcPCLn} {
 			drop[binary.LittleEndian.Uint32(f[off:])] = true
+		}
+		for _, off := range []int{funcPCFile, funcPCLn, funcCU, funcStartLine} {
 			fields = append(fields, p+int(pcln+fo)+off)
 		}
 	}

@@ -151,6 +151,23 @@ func TestDropLinesGoProgram(t *testing.T) {
 	if !bytes.Equal(memIn[:p+hdr(4)], memOut[:p+hdr(4)]) {
 		t.Error("the header or the function names changed")
 	}
+	// Each function record: pcsp, the pcdata and funcdata as they were;
+	// pcfile, pcln, the unit and the first line 0.
+	ftab := hdr(7)
+	for i := range hdr(0) {
+		fo := p + ftab + int(binary.LittleEndian.Uint32(memIn[p+ftab+8*i+4:]))
+		rec := func(m []byte, off int) uint32 { return binary.LittleEndian.Uint32(m[fo+off:]) }
+		for _, off := range []int{funcPCFile, funcPCLn, funcCU, funcStartLine} {
+			if rec(memOut, off) != 0 {
+				t.Fatalf("function %d: field at %d is %d, not 0", i, off, rec(memOut, off))
+			}
+		}
+		n := funcPCData + 4*int(rec(memIn, funcNPCData)) + 4*int(memIn[fo+43]) // nfuncdata, the record's last byte
+		if !bytes.Equal(memIn[fo:fo+funcPCFile], memOut[fo:fo+funcPCFile]) || !bytes.Equal(memIn[fo+funcNPCData:fo+funcCU], memOut[fo+funcNPCData:fo+funcCU]) ||
+			!bytes.Equal(memIn[fo+40:fo+n], memOut[fo+40:fo+n]) {
+			t.Fatalf("function %d: a field the runtime runs on changed", i)
+		}
+	}
 	if again, err := DropLines(out); err != nil || !bytes.Equal(again, out) {
 		t.Errorf("dropping the lines twice: %v, or a different module", err)
 	}
