@@ -45,14 +45,18 @@ const (
 // prints. Only the module's memory changes, in place: the sections and
 // the data segments keep their sizes.
 //
-// A module with no such table, or with one that does not read as
-// described, is refused with an error, so that a toolchain whose table
-// differs is noticed rather than shipped broken.
+// A module without a data section (no Go program) is returned unchanged,
+// as Merge returns it. One whose memory holds no such table, or one that
+// does not read as described, is refused with an error, so that a
+// toolchain whose table differs is noticed rather than shipped broken.
 func DropLines(wasm []byte) ([]byte, error) {
 	out := bytes.Clone(wasm)
-	segs, err := dataSegments(out)
+	segs, found, err := dataSegments(out)
 	if err != nil {
 		return nil, err
+	}
+	if !found {
+		return out, nil
 	}
 	mem := newMemory(segs)
 	p, err := findPCLN(mem.image)
@@ -192,26 +196,27 @@ func varintLen(b []byte) (int, error) {
 }
 
 // dataSegments returns the segments of wasm's data section, their data
-// aliasing wasm.
-func dataSegments(wasm []byte) ([]segment, error) {
+// aliasing wasm, and whether it has one.
+func dataSegments(wasm []byte) ([]segment, bool, error) {
 	if len(wasm) < 8 || !bytes.Equal(wasm[:4], []byte("\x00asm")) {
-		return nil, errors.New("wasmdata: not a WebAssembly module")
+		return nil, false, errors.New("wasmdata: not a WebAssembly module")
 	}
 	for off := 8; off < len(wasm); {
 		size, body, err := uleb(wasm, off+1)
 		if err != nil {
-			return nil, err
+			return nil, false, err
 		}
 		end := body + int(size)
 		if end > len(wasm) || end < body {
-			return nil, fmt.Errorf("wasmdata: section %d at %d runs past the end", wasm[off], off)
+			return nil, false, fmt.Errorf("wasmdata: section %d at %d runs past the end", wasm[off], off)
 		}
 		if wasm[off] == 11 {
-			return readSegments(wasm[body:end])
+			segs, err := readSegments(wasm[body:end])
+			return segs, true, err
 		}
 		off = end
 	}
-	return nil, errors.New("wasmdata: no data section")
+	return nil, false, nil
 }
 
 // memory is the module's initial memory: an image to read, and the

@@ -189,7 +189,8 @@ func funcTable(t *testing.T, wasm []byte) *gosym.Table {
 }
 
 // TestDropLinesRefused: a module with no Go function table, and one whose
-// table's header is damaged, are refused rather than changed.
+// table's header is damaged, are refused rather than changed; one with no
+// data at all is left as it is.
 func TestDropLinesRefused(t *testing.T) {
 	plain := module(writeSegments([]segment{{0x10, []byte("no table here")}}))
 	if _, err := DropLines(plain); err == nil || !strings.Contains(err.Error(), "no Go") {
@@ -197,6 +198,10 @@ func TestDropLinesRefused(t *testing.T) {
 	}
 	if _, err := DropLines([]byte("not wasm")); err == nil {
 		t.Error("a file that is no module: no error")
+	}
+	noData := []byte("\x00asm\x01\x00\x00\x00") // an empty module (WebAssembly core specification, 5.5.16)
+	if out, err := DropLines(noData); err != nil || !bytes.Equal(out, noData) {
+		t.Errorf("a module without data: %v, %q", err, out)
 	}
 	// A header whose offsets run backwards is no table.
 	var h [pclnHeader]byte
