@@ -70,7 +70,7 @@ func DropLines(wasm []byte) ([]byte, error) {
 	pcs := tab[pctab:pcln]
 	keep := map[uint32]bool{}
 	drop := map[uint32]bool{}
-	var fields []int // the pcfile and pcln fields, as offsets in mem
+	var fields []int // the fields set to 0 (pcfile, pcln, unit, first line), as offsets in mem
 	for i := range nfunc {
 		fo := uint64(binary.LittleEndian.Uint32(functab[8*i+4:]))
 		if fo+funcPCData > uint64(len(functab)) {
@@ -92,6 +92,11 @@ func DropLines(wasm []byte) ([]byte, error) {
 			fields = append(fields, p+int(pcln+fo)+off)
 		}
 	}
+	kept := make([]int, 0, len(keep))
+	for off := range keep {
+		kept = append(kept, int(off))
+	}
+	sort.Ints(kept)
 	var zero [][2]int // ranges of mem to zero
 	for off := range drop {
 		if off == 0 || keep[off] { // 0: no table; a table shared with pcsp or pcdata stays
@@ -100,6 +105,11 @@ func DropLines(wasm []byte) ([]byte, error) {
 		n, err := pcvalueLen(pcs, off)
 		if err != nil {
 			return nil, err
+		}
+		// A table read past its end would run into the next one: none
+		// that the runtime needs may start inside it.
+		if k := sort.SearchInts(kept, int(off)); k < len(kept) && kept[k] < int(off)+n {
+			return nil, fmt.Errorf("wasmdata: line table at %d runs into the table at %d", off, kept[k])
 		}
 		zero = append(zero, [2]int{p + int(pctab) + int(off), p + int(pctab) + int(off) + n})
 	}
