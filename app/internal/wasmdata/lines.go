@@ -28,6 +28,19 @@ const (
 	pclnMaxFuncs  = 1 << 24
 )
 
+// pcHeader is what DropLines reads of the table's header: the number of
+// functions and the offsets, from the header, of the function names, the
+// compilation units' file indexes, the file names, the PC-value tables
+// and the function table.
+type pcHeader struct{ nfunc, names, cu, files, pctab, funcs uint64 }
+
+// readPCHeader reads the header at mem[at:], which holds at least
+// pclnHeader bytes.
+func readPCHeader(mem []byte, at int) pcHeader {
+	h := func(i int) uint64 { return binary.LittleEndian.Uint64(mem[at+8+8*i:]) }
+	return pcHeader{nfunc: h(0), names: h(3), cu: h(4), files: h(5), pctab: h(6), funcs: h(7)}
+}
+
 // DropLines returns wasm, a module linked by Go 1.20 to 1.26 for
 // GOARCH=wasm, without the runtime's file and line tables: each
 // function's pcfile and pcln offsets are set to 0, which the runtime
@@ -63,8 +76,8 @@ func DropLines(wasm []byte) ([]byte, error) {
 	if err != nil {
 		return nil, err
 	}
-	hdr := func(i int) uint64 { return binary.LittleEndian.Uint64(mem.image[p+8+8*i:]) }
-	nfunc, cu, pctab, pcln := hdr(0), hdr(4), hdr(6), hdr(7)
+	h := readPCHeader(mem.image, p)
+	nfunc, cu, pctab, pcln := h.nfunc, h.cu, h.pctab, h.funcs
 	tab := mem.image[p:]
 	functab := tab[pcln:]
 	pcs := tab[pctab:pcln]
@@ -157,15 +170,14 @@ func validPCLN(mem []byte, at int) bool {
 	if at+pclnHeader > len(mem) {
 		return false
 	}
-	h := func(i int) uint64 { return binary.LittleEndian.Uint64(mem[at+8+8*i:]) }
-	nfunc, names, cu, files, pctab, pcln := h(0), h(3), h(4), h(5), h(6), h(7)
+	h := readPCHeader(mem, at)
 	size := uint64(len(mem) - at)
-	if nfunc == 0 || nfunc > pclnMaxFuncs || names != pclnHeader || !(names <= cu && cu <= files && files <= pctab && pctab <= pcln) ||
-		pcln+8*(nfunc+1) > size {
+	if h.nfunc == 0 || h.nfunc > pclnMaxFuncs || h.names != pclnHeader ||
+		!(h.names <= h.cu && h.cu <= h.files && h.files <= h.pctab && h.pctab <= h.funcs) || h.funcs+8*(h.nfunc+1) > size {
 		return false
 	}
-	ft := mem[at+int(pcln):]
-	for i := range nfunc {
+	ft := mem[at+int(h.funcs):]
+	for i := range h.nfunc {
 		if binary.LittleEndian.Uint32(ft[8*i:]) > binary.LittleEndian.Uint32(ft[8*i+8:]) {
 			return false
 		}
@@ -185,48 +197,25 @@ func pcvalueLen(tab []byte, off uint32) (int, error) {
 		if tab[p] == 0 && !first {
 			return p + 1 - int(off), nil
 		}
-		for k := 0; k < 2; k++ { // value delta, PC delta
-			n, err := varintLen(tab[p:])
+		for k := 0; k < 2; k++ { // value delta, PC delta: unsigned LEB128, as uleb reads
+			_, next, err := uleb(tab, p)
 			if err != nil {
 				return 0, fmt.Errorf("wasmdata: PC-value table at %d: %w", off, err)
 			}
-			p += n
+			p = next
 		}
 	}
-}
-
-// varintLen is the length of the unsigned LEB128 number at b's start.
-func varintLen(b []byte) (int, error) {
-	for i := 0; i < len(b) && i < 5; i++ {
-		if b[i] < 0x80 {
-			return i + 1, nil
-		}
-	}
-	return 0, errors.New("malformed varint")
 }
 
 // dataSegments returns the segments of wasm's data section, their data
 // aliasing wasm, and whether it has one.
 func dataSegments(wasm []byte) ([]segment, bool, error) {
-	if len(wasm) < 8 || !bytes.Equal(wasm[:4], []byte("\x00asm")) {
-		return nil, false, errors.New("wasmdata: not a WebAssembly module")
+	off, body, end, _, err := dataSection(wasm)
+	if err != nil || off < 0 {
+		return nil, false, err
 	}
-	for off := 8; off < len(wasm); {
-		size, body, err := uleb(wasm, off+1)
-		if err != nil {
-			return nil, false, err
-		}
-		end := body + int(size)
-		if end > len(wasm) || end < body {
-			return nil, false, fmt.Errorf("wasmdata: section %d at %d runs past the end", wasm[off], off)
-		}
-		if wasm[off] == 11 {
-			segs, err := readSegments(wasm[body:end])
-			return segs, true, err
-		}
-		off = end
-	}
-	return nil, false, nil
+	segs, err := readSegments(wasm[body:end])
+	return segs, true, err
 }
 
 // memory is the module's initial memory: an image to read, and the

@@ -147,14 +147,14 @@ func TestDropLinesGoProgram(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	hdr := func(i int) int { return int(binary.LittleEndian.Uint64(memIn[p+8+8*i:])) }
-	if !bytes.Equal(memIn[:p+hdr(4)], memOut[:p+hdr(4)]) {
+	h := readPCHeader(memIn, p)
+	if !bytes.Equal(memIn[:p+int(h.cu)], memOut[:p+int(h.cu)]) {
 		t.Error("the header or the function names changed")
 	}
 	// Each function record: pcsp, the pcdata and funcdata as they were;
 	// pcfile, pcln, the unit and the first line 0.
-	ftab := hdr(7)
-	for i := range hdr(0) {
+	ftab := int(h.funcs)
+	for i := range int(h.nfunc) {
 		fo := p + ftab + int(binary.LittleEndian.Uint32(memIn[p+ftab+8*i+4:]))
 		rec := func(m []byte, off int) uint32 { return binary.LittleEndian.Uint32(m[fo+off:]) }
 		for _, off := range []int{funcPCFile, funcPCLn, funcCU, funcStartLine} {

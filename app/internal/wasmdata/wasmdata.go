@@ -39,50 +39,59 @@ type segment struct {
 // constant addresses, or segments that overlap, is refused with an error,
 // as is a malformed module.
 func Merge(wasm []byte, gap int) ([]byte, error) {
-	if len(wasm) < 8 || !bytes.Equal(wasm[:4], []byte("\x00asm")) {
-		return nil, errors.New("wasmdata: not a WebAssembly module")
+	off, body, end, count, err := dataSection(wasm)
+	switch {
+	case err != nil:
+		return nil, err
+	case count: // would have to match the new number of segments
+		return nil, errors.New("wasmdata: module has a data count section")
+	case off < 0:
+		return wasm, nil
 	}
-	for off := 8; off < len(wasm); {
-		id := wasm[off]
-		size, body, err := uleb(wasm, off+1)
+	segs, err := readSegments(wasm[body:end])
+	if err != nil {
+		return nil, err
+	}
+	sec := writeSegments(merge(segs, gap))
+	out := make([]byte, 0, len(wasm)-(end-off)+len(sec)+6)
+	out = append(out, wasm[:off]...)
+	out = append(out, 11)
+	out = appendULEB(out, uint64(len(sec)))
+	out = append(out, sec...)
+	return append(out, wasm[end:]...), nil
+}
+
+// dataSection finds wasm's data section: the offset of its id byte and
+// its body's bounds (off -1 when there is none); count reports a data
+// count section. A malformed module, or one with two data sections, is
+// refused with an error.
+func dataSection(wasm []byte) (off, body, end int, count bool, err error) {
+	if len(wasm) < 8 || !bytes.Equal(wasm[:4], []byte("\x00asm")) {
+		return 0, 0, 0, false, errors.New("wasmdata: not a WebAssembly module")
+	}
+	off = -1
+	for at := 8; at < len(wasm); {
+		id := wasm[at]
+		size, b, err := uleb(wasm, at+1)
 		if err != nil {
-			return nil, err
+			return 0, 0, 0, false, err
 		}
-		end := body + int(size)
-		if end > len(wasm) || end < body {
-			return nil, fmt.Errorf("wasmdata: section %d at %d runs past the end", id, off)
+		e := b + int(size)
+		if e > len(wasm) || e < b {
+			return 0, 0, 0, false, fmt.Errorf("wasmdata: section %d at %d runs past the end", id, at)
 		}
 		switch id {
-		case 12: // data count: would have to match the new number of segments
-			return nil, errors.New("wasmdata: module has a data count section")
+		case 12:
+			count = true
 		case 11:
-			segs, err := readSegments(wasm[body:end])
-			if err != nil {
-				return nil, err
+			if off >= 0 {
+				return 0, 0, 0, false, errors.New("wasmdata: two data sections")
 			}
-			sec := writeSegments(merge(segs, gap))
-			out := make([]byte, 0, len(wasm)-(end-off)+len(sec)+6)
-			out = append(out, wasm[:off]...)
-			out = append(out, 11)
-			out = appendULEB(out, uint64(len(sec)))
-			out = append(out, sec...)
-			out = append(out, wasm[end:]...)
-			for next := end; next < len(wasm); { // a second data section is malformed
-				id := wasm[next]
-				n, b, err := uleb(wasm, next+1)
-				if err != nil {
-					return nil, err
-				}
-				if id == 11 || id == 12 {
-					return nil, errors.New("wasmdata: data or data count section after the data section")
-				}
-				next = b + int(n)
-			}
-			return out, nil
+			off, body, end = at, b, e
 		}
-		off = end
+		at = e
 	}
-	return wasm, nil
+	return off, body, end, count, nil
 }
 
 // readSegments reads a data section's segments, sorted by address.

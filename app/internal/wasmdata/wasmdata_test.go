@@ -10,32 +10,14 @@ import (
 )
 
 // image lays out a module's data segments as memory would hold them at
-// start (zero where no segment writes).
+// start (zero where no segment writes), and counts the segments.
 func image(t *testing.T, wasm []byte) ([]byte, int) {
 	t.Helper()
-	for off := 8; off < len(wasm); {
-		size, body, err := uleb(wasm, off+1)
-		if err != nil {
-			t.Fatal(err)
-		}
-		if wasm[off] == 11 {
-			segs, err := readSegments(wasm[body : body+int(size)])
-			if err != nil {
-				t.Fatal(err)
-			}
-			var mem []byte
-			for _, s := range segs {
-				if end := int(s.addr) + len(s.data); end > len(mem) {
-					mem = append(mem, make([]byte, end-len(mem))...)
-				}
-				copy(mem[s.addr:], s.data)
-			}
-			return mem, len(segs)
-		}
-		off = body + int(size)
+	segs, found, err := dataSegments(wasm)
+	if err != nil || !found {
+		t.Fatalf("the module's data: %v (a data section: %v)", err, found)
 	}
-	t.Fatal("no data section")
-	return nil, 0
+	return newMemory(segs).image, len(segs)
 }
 
 // module is a WebAssembly module with one memory and the given data
