@@ -209,6 +209,9 @@ function fieldheadLoadFailed(loader, icon, label) {
   const demo = document.documentElement.classList.contains("demo-page");
   const kept = document.documentElement.classList.contains("snap-page");
   const offline = navigator.onLine === false;
+  if (kept && window.fieldheadSnapshot) {
+    window.fieldheadSnapshot.whole(); // the cards past the first screen too: the sheet is all there is to read
+  }
   loader.classList.add("failed");
   loader.setAttribute("role", "alert");
   document.body.prepend(loader); // above the sheet, in the page's flow: it covers nothing

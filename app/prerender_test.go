@@ -440,6 +440,19 @@ func TestSnapshot(t *testing.T) {
 	if z2 == "" {
 		t.Fatal("the live sheet has no z2 box")
 	}
+	// The cards past the first screen and a half (1 152 px at 1024×768)
+	// are named in the snapshot, painted as their titles until the live
+	// sheet comes, and whole if it cannot come.
+	later := b.js(`(() => {
+		const k = Object.keys(localStorage).find((k) => k.startsWith("fieldhead.snapshot."));
+		return (JSON.parse(localStorage.getItem(k)).later || []).join(",");
+	})()`)
+	wantLater := b.js(`[...document.querySelectorAll("#sheet section.card[id]")].filter((c) => c.getBoundingClientRect().top + scrollY >= 1.5 * innerHeight).map((c) => c.id).join(",")`)
+	if later == "" || later != wantLater {
+		t.Errorf("snapshot: cards to paint later %q, want those starting past 1.5 screens %q", later, wantLater)
+	}
+	cardsJS := `JSON.stringify([...document.querySelectorAll("#sheet section.card[id]")].map((c) => c.id + " " + [...c.querySelectorAll("input, select, button, li, dd, td, svg")].filter((e) => !e.closest(".print-only")).length))`
+	liveCards := b.js(cardsJS)
 
 	block(true)
 	inert := `[...document.querySelectorAll("#sheet input, #sheet select, #sheet textarea, #sheet button")].every((e) => e.closest("[inert]"))`
@@ -469,6 +482,13 @@ func TestSnapshot(t *testing.T) {
 		}
 		if !b.jsBool(`document.querySelector("#sheet main h1") !== null && !document.querySelector("#sheet main h1").closest("[inert]")`) {
 			t.Errorf("%s: the snapshot's heading is missing or inert", u)
+		}
+		// The program could not start: every card is painted whole.
+		if !b.poll(`document.querySelector("#app-wasm-loader.failed") !== null && document.querySelector(".snap-cut") === null`, 5*time.Second) {
+			t.Errorf("%s, wasm blocked: the failed start left cards painted as their titles: %s", u, b.js(`[...document.querySelectorAll(".snap-cut")].map((e) => e.id).join(", ")`))
+		}
+		if got := b.js(cardsJS); got != liveCards {
+			t.Errorf("%s, wasm blocked: the snapshot's cards (id, boxes, buttons, items, charts) %s, want the live sheet's %s", u, got, liveCards)
 		}
 	}
 	b.shot("snapshot-before-wasm")
@@ -510,9 +530,13 @@ func TestSnapshot(t *testing.T) {
 	block(false)
 	if _, err := chromedp.Call(b.ctx, page.AddScriptToEvaluateOnNewDocument, page.AddScriptToEvaluateOnNewDocumentParams{Source: `
 		window.fieldheadLent = [];
+		window.fieldheadCut = [];
 		new MutationObserver(() => {
 			for (const c of document.querySelectorAll(".card-later > section.card")) {
 				if (!window.fieldheadLent.includes(c.id)) window.fieldheadLent.push(c.id + (c.inert ? "" : " (not inert)"));
+			}
+			for (const c of document.querySelectorAll("section.card.snap-cut")) {
+				if (!window.fieldheadCut.includes(c.id)) window.fieldheadCut.push(c.id);
 			}
 		}).observe(document, {childList: true, subtree: true});`}); err != nil {
 		t.Fatal(err)
@@ -522,8 +546,11 @@ func TestSnapshot(t *testing.T) {
 	if got := b.text("#answer-value"); got != keptAnswer {
 		t.Errorf("after the wasm: answer %q, want %q", got, keptAnswer)
 	}
-	if b.jsBool(`document.querySelector("#sheet [inert], .prerendered, .snapshot, #tampered, .card-later") !== null`) {
-		t.Error("after the wasm the snapshot, an inert part or a card's place remains")
+	if b.jsBool(`document.querySelector("#sheet [inert], .prerendered, .snapshot, #tampered, .card-later, .snap-cut") !== null`) {
+		t.Error("after the wasm the snapshot, an inert part, a card's place or a card painted as its title remains")
+	}
+	if cut := b.js(`window.fieldheadCut.join(",")`); cut != later {
+		t.Errorf("before the wasm, cards painted as their titles: %q, want the snapshot's %q", cut, later)
 	}
 	lent := b.js(`window.fieldheadLent.join(", ")`)
 	t.Logf("cards shown from the snapshot while the first draw held the first cards: %s", lent)

@@ -14,7 +14,10 @@
 // the device keeping it) the snapshot is painted in place of the written
 // demo (.snap-page), inert, until the wasm draws the live sheet over it.
 // No other link ever shows it: the link to be opened must equal the link
-// the snapshot was taken of, character for character.
+// the snapshot was taken of, character for character. The cards that
+// started past the first screen and a half when it was taken are painted
+// as their titles (.snap-cut) until the live sheet comes, and whole only
+// if the program cannot start (whole, from app.js: app/loader.go).
 //
 // Nothing in a snapshot can run. It is kept as data, never as HTML: a tree
 // of [tag, {attribute: value}, child…] and strings (text). Painting builds
@@ -51,6 +54,15 @@
       const root = document.getElementById("sheet");
       const ck = new URLSearchParams(query).get("ck");
       if (!root || !ck || root.classList.contains("prerendered")) return;
+      // later names the cards a return visit need not paint whole at
+      // first: those that start past the first screen and a half and are
+      // not on the screen shown now (a reload keeps its place).
+      const later = [];
+      const top = window.scrollY;
+      const first = (el) => {
+        const r = el.getBoundingClientRect();
+        return r.top + top < 1.5 * window.innerHeight || (r.bottom > 0 && r.top < window.innerHeight);
+      };
       const walk = (el) => {
         // A field's form (app/el.go formBody) is taken as a div, which
         // lays out as the form does: no form is ever painted.
@@ -60,6 +72,7 @@
         for (const a of el.attributes) {
           if (allowed(a.name)) attrs[a.name] = a.value;
         }
+        if (tag === "section" && el.classList.contains("card") && el.id && !first(el)) later.push(el.id);
         // A box shows what is typed, not its attribute.
         if (tag === "input") {
           if (el.type === "checkbox" || el.type === "radio") {
@@ -85,7 +98,7 @@
         }
         return node;
       };
-      const snap = JSON.stringify({q: query, root: walk(root)});
+      const snap = JSON.stringify({q: query, root: walk(root), later});
       for (let i = localStorage.length - 1; i >= 0; i--) {
         const k = localStorage.key(i);
         if (k && k.startsWith(PREFIX) && k !== PREFIX + ck) localStorage.removeItem(k);
@@ -96,8 +109,17 @@
     }
   };
 
+  // cut holds the cards painted as their title only (.snap-cut), by id,
+  // with their nodes: whole paints them whole.
+  const cut = new Map();
+
   // build makes the DOM of a snapshot's node, or null for one not allowed.
-  const build = (node, svg) => {
+  // A card named in later is built as its title only: the browser lays
+  // out and paints the snapshot before anything else, text it has not
+  // shaped yet, which at 4× CPU took about 240 ms for the whole Balance
+  // view on a new visit (make bench, -return-only -trace), and the live
+  // card replaces it a moment after the wasm runs.
+  const build = (node, svg, later) => {
     if (typeof node === "string") return document.createTextNode(node);
     if (!Array.isArray(node) || typeof node[0] !== "string" || !TAGS.has(node[0])) return null;
     const tag = node[0];
@@ -109,21 +131,58 @@
       // The snapshot's answer is timed apart from the written page's (make bench).
       el.setAttribute(name, name === "elementtiming" ? "snapshot-" + attrs[name] : attrs[name]);
     }
+    if (later && tag === "section" && later.has(attrs.id) && !cut.has(attrs.id)) {
+      cut.set(attrs.id, node);
+      el.classList.add("snap-cut");
+      const title = titleOf(node);
+      if (title) el.appendChild(build(title, false, null));
+      return el;
+    }
     for (let i = 2; i < node.length; i++) {
-      const c = build(node[i], inSVG);
+      const c = build(node[i], inSVG, later);
       if (c) el.appendChild(c);
     }
     if (tag === "textarea") el.value = el.textContent;
     return el;
   };
 
+  // titleOf finds a card's first h2, or null.
+  const titleOf = (node) => {
+    for (let i = 2; i < node.length; i++) {
+      const c = node[i];
+      if (!Array.isArray(c)) continue;
+      if (c[0] === "h2") return c;
+      const t = titleOf(c);
+      if (t) return t;
+    }
+    return null;
+  };
+
+  // whole paints the cards painted as their title whole, inert: when the
+  // program cannot start, the kept sheet is all there is to read.
+  const whole = () => {
+    try {
+      for (const [id, node] of cut) {
+        const el = document.getElementById(id);
+        if (!el || !el.classList.contains("snap-cut")) continue;
+        const full = build(node, false, null);
+        if (!full) continue;
+        full.setAttribute("inert", "");
+        el.replaceWith(full);
+      }
+      cut.clear();
+    } catch (e) {
+      // the titles stay
+    }
+  };
+
   // paint draws the snapshot's sheet into sheet, every part of it inert
   // but main and its h1 (the landmarks the written page keeps too).
-  const paint = (root, sheet) => {
+  const paint = (root, sheet, later) => {
     const cls = root[1] && typeof root[1].class === "string" ? root[1].class : "sheet";
     const kids = [];
     for (let i = 2; i < root.length; i++) {
-      const c = build(root[i], false);
+      const c = build(root[i], false, later);
       if (!c) continue;
       if (c.nodeType === 1 && c.localName === "main") {
         for (const m of c.children) {
@@ -167,7 +226,7 @@
     }
   };
 
-  window.fieldheadSnapshot = {take, lend};
+  window.fieldheadSnapshot = {take, lend, whole};
 
   try {
     const query = location.search.slice(1) || localStorage.getItem(KEY) || "";
@@ -203,7 +262,7 @@
       box.id = "sheet";
       el.removeAttribute("id");
       el.parentNode.insertBefore(box, el);
-      paint(snap.root, box);
+      paint(snap.root, box, new Set(Array.isArray(snap.later) ? snap.later : []));
       shown = box;
     };
     const done = () => {
