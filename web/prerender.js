@@ -54,6 +54,9 @@
       const root = document.getElementById("sheet");
       const ck = new URLSearchParams(query).get("ck");
       if (!root || !ck || root.classList.contains("prerendered")) return;
+      // Not while the live sheet still holds a card's place or a card lent
+      // from the snapshot (lend): it is taken once drawn whole.
+      if (root.querySelector(".card-later, .snap-cut")) return;
       // later names the cards a return visit need not paint whole at
       // first: those that start past the first screen and a half and are
       // not on the screen shown now (a reload keeps its place).
