@@ -552,6 +552,22 @@ func TestSnapshot(t *testing.T) {
 	if cut := b.js(`window.fieldheadCut.join(",")`); cut != later {
 		t.Errorf("before the wasm, cards painted as their titles: %q, want the snapshot's %q", cut, later)
 	}
+	// The live sheet's snapshot is taken whole, never with a card lent
+	// from the last one: asked while a card's place is held, it keeps the
+	// last snapshot as it was.
+	kept1 := `localStorage.getItem(Object.keys(localStorage).find((k) => k.startsWith("fieldhead.snapshot.")))`
+	before := b.js(kept1)
+	b.js(`(() => {
+		const slot = document.createElement("div");
+		slot.className = "card-later";
+		document.querySelector("#sheet main").append(slot);
+		fieldheadSnapshot.take(location.search.slice(1) + "&zz=1");
+		slot.remove();
+		return "";
+	})()`)
+	if b.js(kept1) != before || strings.Contains(before, "snap-cut") {
+		t.Error("a snapshot was taken while a card's place was held, or holds a card painted as its title")
+	}
 	lent := b.js(`window.fieldheadLent.join(", ")`)
 	t.Logf("cards shown from the snapshot while the first draw held the first cards: %s", lent)
 	if lent == "" || strings.Contains(lent, "not inert") {
