@@ -144,6 +144,7 @@ var (
 	returnOnly = flag.Bool("return-only", false, "only the return visits to a kept sheet: snapshot and live answer, online and offline")
 	partsFuncs = flag.Int("funcs", 60, "with -parts: list this many of the largest functions")
 	partsMatch = flag.String("match", "", "with -parts: list only the functions whose name matches this regular expression")
+	phoneView  = flag.Bool("phone-view", false, "open every page at 390×844 as a touch phone, not 1024×768 (the figures of a phone's layout; the budgets are set at 1024×768)")
 )
 
 func main() {
@@ -160,6 +161,9 @@ func main() {
 		*warmup = 0
 	}
 	r := &report{JSON: map[string]any{}}
+	if *phoneView {
+		r.JSON["viewport"] = "390x844 touch"
+	}
 	if l := loadAverage(); l != "" {
 		r.JSON["load_average_start"] = l
 	}
@@ -569,8 +573,12 @@ func newSession(extra ...chromedp.ExecAllocatorOption) (*browserSession, error) 
 	if *jsFlags != "" && len(extra) == 0 {
 		extra = append(extra, chromedp.Flag("js-flags", *jsFlags))
 	}
+	w, h, view := 1024, 768, []chromedp.EmulateViewportOption(nil)
+	if *phoneView {
+		w, h, view = 390, 844, []chromedp.EmulateViewportOption{chromedp.EmulateMobile}
+	}
 	alloc, cancelAlloc := chromedp.NewExecAllocator(context.Background(),
-		append(headless.Options(path, profile, 1024, 768), extra...)...)
+		append(headless.Options(path, profile, w, h), extra...)...)
 	tab, cancelTab := chromedp.NewContext(alloc)
 	s := &browserSession{ctx: tab, profile: profile}
 	s.cancel = func() {
@@ -578,7 +586,7 @@ func newSession(extra ...chromedp.ExecAllocatorOption) (*browserSession, error) 
 		cancelAlloc()
 		os.RemoveAll(profile)
 	}
-	if err := chromedp.Do(tab, chromedp.EmulateViewport(1024, 768)); err != nil {
+	if err := chromedp.Do(tab, chromedp.EmulateViewport(int64(w), int64(h), view...)); err != nil {
 		s.cancel()
 		return nil, fmt.Errorf("starting Chromium: %w", err)
 	}
