@@ -531,12 +531,16 @@ func TestSnapshot(t *testing.T) {
 	if _, err := chromedp.Call(b.ctx, page.AddScriptToEvaluateOnNewDocument, page.AddScriptToEvaluateOnNewDocumentParams{Source: `
 		window.fieldheadLent = [];
 		window.fieldheadCut = [];
+		window.fieldheadCutTitles = [];
 		new MutationObserver(() => {
 			for (const c of document.querySelectorAll(".card-later > section.card")) {
 				if (!window.fieldheadLent.includes(c.id)) window.fieldheadLent.push(c.id + (c.inert ? "" : " (not inert)"));
 			}
 			for (const c of document.querySelectorAll("section.card.snap-cut")) {
-				if (!window.fieldheadCut.includes(c.id)) window.fieldheadCut.push(c.id);
+				if (!window.fieldheadCut.includes(c.id)) {
+					window.fieldheadCut.push(c.id);
+					window.fieldheadCutTitles.push(c.id + ": " + (c.querySelector("h2") || {}).textContent);
+				}
 			}
 		}).observe(document, {childList: true, subtree: true});`}); err != nil {
 		t.Fatal(err)
@@ -551,6 +555,10 @@ func TestSnapshot(t *testing.T) {
 	}
 	if cut := b.js(`window.fieldheadCut.join(",")`); cut != later {
 		t.Errorf("before the wasm, cards painted as their titles: %q, want the snapshot's %q", cut, later)
+	}
+	// Each shows the live card's title.
+	if got, want := b.js(`window.fieldheadCutTitles.join("; ")`), b.js(`window.fieldheadCut.map((id) => id + ": " + document.getElementById(id).querySelector("h2").textContent).join("; ")`); got != want {
+		t.Errorf("before the wasm, the cards painted as their titles showed %q, want the live cards' %q", got, want)
 	}
 	// The live sheet's snapshot is taken whole, never with a card lent
 	// from the last one: asked while a card's place is held, it keeps the
