@@ -197,10 +197,11 @@ function goappBuild(buf) {
 `
 
 // loadFailedJS ends app.js: what the corner note says, moved above the
-// sheet, when the wasm could not be fetched or started. The written page stays as it is (the demo on
-// a bare visit, readable; a link's sheet stays hidden, as no answer but
-// the link's may show); a kept sheet's snapshot is painted whole (the
-// cards it painted as their titles too: web/prerender.js whole); the note stops turning, says what happened and
+// sheet, when the wasm could not be fetched or started. The written page
+// stays as it is (the demo on a bare visit, readable; a link's sheet stays
+// hidden, as no answer but the link's may show); a kept sheet's snapshot
+// is painted whole (the cards it painted as their titles too:
+// web/prerender.js whole); the note stops turning, says what happened and
 // what to do, and its button runs go-app's start again without reloading
 // the page (which, offline on a first visit, would show the browser's
 // error page instead of the demo).

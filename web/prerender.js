@@ -61,10 +61,10 @@
       // first: those that start past the first screen and a half and are
       // not on the screen shown now (a reload keeps its place).
       const later = [];
-      const top = window.scrollY;
+      const scrolled = window.scrollY;
       const first = (el) => {
         const r = el.getBoundingClientRect();
-        return r.top + top < 1.5 * window.innerHeight || (r.bottom > 0 && r.top < window.innerHeight);
+        return r.top + scrolled < 1.5 * window.innerHeight || (r.bottom > 0 && r.top < window.innerHeight);
       };
       const walk = (el) => {
         // A field's form (app/el.go formBody) is taken as a div, which
@@ -112,8 +112,8 @@
     }
   };
 
-  // cut holds the cards painted as their title only (.snap-cut), by id,
-  // with their nodes: whole paints them whole.
+  // cut holds the cards painted as their title only (.snap-cut), each
+  // with its node: whole paints them whole.
   const cut = new Map();
 
   // build makes the DOM of a snapshot's node, or null for one not allowed.
@@ -134,8 +134,8 @@
       // The snapshot's answer is timed apart from the written page's (make bench).
       el.setAttribute(name, name === "elementtiming" ? "snapshot-" + attrs[name] : attrs[name]);
     }
-    if (later && tag === "section" && later.has(attrs.id) && !cut.has(attrs.id)) {
-      cut.set(attrs.id, node);
+    if (later && tag === "section" && later.has(attrs.id)) {
+      cut.set(el, node);
       el.classList.add("snap-cut");
       const title = titleOf(node);
       if (title) el.appendChild(build(title, false, null));
@@ -165,11 +165,8 @@
   // program cannot start, the kept sheet is all there is to read.
   const whole = () => {
     try {
-      for (const [id, node] of cut) {
-        const el = document.getElementById(id);
-        if (!el || !el.classList.contains("snap-cut")) continue;
-        const full = build(node, false, null);
-        if (!full) continue;
+      for (const [el, node] of cut) {
+        const full = build(node, false, null); // a section: always built
         full.setAttribute("inert", "");
         el.replaceWith(full);
       }
